@@ -1,0 +1,211 @@
+/**
+ * The Stayset project file, format "stayset-project", version 1, as TypeScript types.
+ *
+ * Conventions (hold for every field below):
+ * - SI base units inside the file: m, N, kg, Pa, 1/K, K, s. Temperatures that are absolute
+ *   (reference or installation temperatures) are in K; temperature *changes* are in K as well.
+ * - Global axes: z is up; gravity is 9.80665 m/s² along −z.
+ * - Angles are stored in degrees (a display-friendly exception named at each field).
+ * - Forces are positive along the global axes; member tension is positive.
+ *
+ * The JSON Schema that validates this shape lives in `main/common/project/` (the solver has no
+ * runtime dependencies). Keep both in step.
+ */
+
+export type Vec3 = [number, number, number];
+
+export interface ProjectFile {
+  format: 'stayset-project';
+  version: 1;
+  meta?: ProjectMeta;
+  nodes: NodeSpec[];
+  sections: SectionSpec[];
+  members: MemberSpec[];
+  loadCases: LoadCaseSpec[];
+  /** Named sets of members, used by loads, checks, tuning and the schedule. */
+  groups?: GroupSpec[];
+  /** Factored combinations of load cases; each is solved as its own nonlinear case. */
+  combinations?: CombinationSpec[];
+  /** Design-check settings and limits. */
+  checks?: CheckSettings;
+  /** Pretension tuning targets and the variables the tuner may change. */
+  tuning?: TuningSpec;
+  /** Installation data settings (temperature table). */
+  installation?: InstallationSpec;
+  /** Parameters of generators that produced parts of this model (for re-running them). */
+  generators?: GeneratorRecord[];
+  /** Display preferences; never affect results. */
+  display?: DisplaySettings;
+}
+
+export interface ProjectMeta {
+  name?: string;
+  site?: string;
+  client?: string;
+  engineer?: string;
+  notes?: string;
+  /** Design reference temperature, K (the state the model and pretensions describe). */
+  referenceTemperature?: number;
+}
+
+export interface NodeSpec {
+  id: string;
+  /** Position [x, y, z], m. */
+  at: Vec3;
+  /** Restrained translations: any of the letters x, y, z ("xyz" = pinned). Absent = free. */
+  fixed?: string;
+}
+
+export interface SectionSpec {
+  id: string;
+  /** Young's modulus, Pa (for strands, the effective modulus of the strand). */
+  E: number;
+  /** Metallic cross-section area, m². */
+  area: number;
+  /** Mass per unit unstressed length, kg/m. Default 0. */
+  massPerLength?: number;
+  /** Minimum breaking load, N. Needed for utilisation checks. */
+  breakingLoad?: number;
+  /** Coefficient of thermal expansion, 1/K. Default 0. */
+  thermalExpansion?: number;
+  /** Outer diameter, m (wind and ice). */
+  diameter?: number;
+  /** Drag coefficient on the diameter, dimensionless (default: see solver/loads). */
+  dragCoefficient?: number;
+  /**
+   * For members that stand for a lattice mast segment: solidity ratio (0..1) and face width (m);
+   * the wind model then uses a lattice drag factor instead of the round-section drag.
+   */
+  lattice?: { faceWidth: number; solidity: number; dragFactor?: number };
+  label?: string;
+}
+
+export type MemberKind = 'cable' | 'bar';
+
+export interface MemberSpec {
+  id: string;
+  /** cable: tension-only; bar: tension and compression. */
+  kind: MemberKind;
+  from: string;
+  to: string;
+  section: string;
+  /** Number of elements the solver splits the member into. Default 1. */
+  segments?: number;
+  /** Axial force at the modelled geometry, N (positive = tension). Exclusive with unstressedLength. */
+  pretension?: number;
+  /** Stress-free length of the whole member, m. Exclusive with pretension. */
+  unstressedLength?: number;
+  /** Group ids this member belongs to (in addition to GroupSpec.members). */
+  groups?: string[];
+  /** Set by a generator: which generator record made this member. */
+  generatedBy?: string;
+}
+
+export interface NodalLoadSpec {
+  node: string;
+  /** Force [Fx, Fy, Fz], N. */
+  force: Vec3;
+}
+
+export interface WindSpec {
+  /**
+   * Direction the air flows toward, degrees, measured in the x–y plane counter-clockwise from +x
+   * (0 = wind blowing toward +x, 90 = toward +y).
+   */
+  direction: number;
+  /** Mean wind speed at 10 m above z = 0, m/s. */
+  speed: number;
+  /** Height profile; default a power law with exponent from solver/loads defaults. */
+  profile?: WindProfileSpec;
+  /** Air density, kg/m³ (default 1.225). */
+  airDensity?: number;
+  /** Only load these groups (default: every member). */
+  groups?: string[];
+}
+
+export type WindProfileSpec =
+  | { kind: 'power'; exponent: number }
+  | { kind: 'log'; roughnessLength: number }
+  | { kind: 'uniform' };
+
+export interface IceSpec {
+  /** Radial ice thickness, m. */
+  thickness: number;
+  /** Ice density, kg/m³ (default in solver/loads). */
+  density?: number;
+  /** Only ice these groups (default: every member with a diameter). */
+  groups?: string[];
+}
+
+export interface LoadCaseSpec {
+  id: string;
+  label?: string;
+  /** Include self-weight of every member. Default true. */
+  selfWeight?: boolean;
+  /** Uniform temperature change from the reference temperature, K. Default 0. */
+  temperatureChange?: number;
+  nodalLoads?: NodalLoadSpec[];
+  wind?: WindSpec;
+  ice?: IceSpec;
+}
+
+export interface GroupSpec {
+  id: string;
+  label?: string;
+  members: string[];
+}
+
+export interface CombinationSpec {
+  id: string;
+  label?: string;
+  /** Sum of factor × load case; self-weight, nodal loads, wind pressure and ΔT are all scaled. */
+  factors: { case: string; factor: number }[];
+}
+
+/** Limit on sag: a fraction of the chord length, or an absolute length in m. */
+export type SagLimit = { fractionOfSpan: number } | { absolute: number };
+
+export interface CheckSettings {
+  /** Resistance factor φ applied to breaking load: utilisation = T / (φ · breakingLoad). */
+  resistanceFactor?: number;
+  /** Member groups (or "*" for all cables) that must not go slack in any case. */
+  noSlackGroups?: string[];
+  sagLimits?: { group: string; limit: SagLimit }[];
+  /** Limit on the displacement magnitude of named nodes, m. */
+  displacementLimits?: { node: string; limit: number }[];
+  /** Mast tilt: horizontal offset of `top` relative to `base` over their height, as a ratio. */
+  tiltLimits?: { base: string; top: string; limit: number }[];
+  /** Supports at which uplift (reaction along −z pulling the support up, Fz < 0) is flagged. */
+  upliftNodes?: string[];
+}
+
+export type TuningTarget =
+  | { kind: 'sag'; group: string; case: string; limit: SagLimit }
+  | { kind: 'tensionShare'; group: string; share: number }
+  | { kind: 'noSlack'; group: string; case: string }
+  | { kind: 'plumb'; base: string; top: string; case: string; tolerance: number }
+  | { kind: 'reaction'; node: string; case: string; limit: number };
+
+export interface TuningSpec {
+  /** Groups whose pretension the tuner may change, and how. */
+  variables: { group: string; by: 'pretension' | 'unstressedLength'; min?: number; max?: number }[];
+  targets: TuningTarget[];
+  /** Result of the last tuning run, written by `stayset tune --write`. */
+  lastRun?: { date: string; summary: string };
+}
+
+export interface InstallationSpec {
+  /** Installation temperatures for the table, K. Default −20 °C … +40 °C in 5 °C steps. */
+  temperatures?: number[];
+}
+
+export interface GeneratorRecord {
+  id: string;
+  kind: 'guyedMast' | 'saddleNet' | 'radialNet';
+  params: Record<string, unknown>;
+}
+
+export interface DisplaySettings {
+  units?: 'SI' | 'US';
+  deformationScale?: number;
+}
