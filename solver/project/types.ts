@@ -76,7 +76,16 @@ export interface SectionSpec {
    * For members that stand for a lattice mast segment: solidity ratio (0..1) and face width (m);
    * the wind model then uses a lattice drag factor instead of the round-section drag.
    */
-  lattice?: { faceWidth: number; solidity: number; dragFactor?: number };
+  lattice?: {
+    faceWidth: number;
+    solidity: number;
+    dragFactor?: number;
+    /**
+     * Share (0..1] of the whole-mast lattice drag this member line carries; default 1. A
+     * triangular mast modelled leg by leg gives each leg 1/3 so the mast drag is counted once.
+     */
+    share?: number;
+  };
   label?: string;
 }
 
