@@ -1,0 +1,48 @@
+import type { CheckSettings, ProjectFile } from '../project/types.ts';
+import { DEFAULT_RESISTANCE_FACTOR } from '../loads/defaults.ts';
+import { groupExists } from './groups.ts';
+
+/** Thrown by runChecks when the check settings refer to things that do not exist or are invalid. */
+export class CheckInputError extends Error {
+  constructor(readonly problems: string[]) {
+    super(`Check settings are invalid:\n  ${problems.join('\n  ')}`);
+    this.name = 'CheckInputError';
+  }
+}
+
+/** Resistance factor φ in use (CheckSettings.resistanceFactor or DEFAULT_RESISTANCE_FACTOR). */
+export function resistanceFactorOf(settings: CheckSettings | undefined): number {
+  return settings?.resistanceFactor ?? DEFAULT_RESISTANCE_FACTOR;
+}
+
+/** Problems with `project.checks`, each naming the entry: unknown groups/nodes, non-positive limits. */
+export function checkSettingsProblems(project: ProjectFile): string[] {
+  const s = project.checks;
+  if (!s) return [];
+  const out: string[] = [];
+  const nodes = new Set(project.nodes.map((n) => n.id));
+  const pos = (v: unknown) => typeof v === 'number' && Number.isFinite(v) && v > 0;
+  if (s.resistanceFactor !== undefined && !(pos(s.resistanceFactor) && s.resistanceFactor <= 1)) {
+    out.push(`checks.resistanceFactor: ${s.resistanceFactor} must be a number in (0, 1]`);
+  }
+  (s.noSlackGroups ?? []).forEach((g, i) => {
+    if (!groupExists(project, g)) out.push(`checks.noSlackGroups[${i}]: group "${g}" does not exist`);
+  });
+  (s.sagLimits ?? []).forEach((l, i) => {
+    if (!groupExists(project, l.group)) out.push(`checks.sagLimits[${i}]: group "${l.group}" does not exist`);
+    const v = 'fractionOfSpan' in l.limit ? l.limit.fractionOfSpan : l.limit.absolute;
+    if (!pos(v)) out.push(`checks.sagLimits[${i}]: limit ${v} must be a positive number`);
+  });
+  (s.displacementLimits ?? []).forEach((l, i) => {
+    if (!nodes.has(l.node)) out.push(`checks.displacementLimits[${i}]: node "${l.node}" does not exist`);
+    if (!pos(l.limit)) out.push(`checks.displacementLimits[${i}]: limit ${l.limit} m must be positive`);
+  });
+  (s.tiltLimits ?? []).forEach((l, i) => {
+    for (const n of [l.base, l.top]) if (!nodes.has(n)) out.push(`checks.tiltLimits[${i}]: node "${n}" does not exist`);
+    if (!pos(l.limit)) out.push(`checks.tiltLimits[${i}]: limit ${l.limit} must be a positive ratio`);
+  });
+  (s.upliftNodes ?? []).forEach((n, i) => {
+    if (!nodes.has(n)) out.push(`checks.upliftNodes[${i}]: node "${n}" does not exist`);
+  });
+  return out;
+}
