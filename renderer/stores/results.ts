@@ -1,0 +1,114 @@
+/**
+ * The last analysis: its state, progress, the SolveReport and the case shown. Large data is kept
+ * raw (markRaw/shallowRef) so Vue does not make 20,000 member results reactive.
+ *
+ * States: idle → running (with progress) → done | failed | cancelled. Results go stale (still shown,
+ * marked) when the project changes after the run started.
+ */
+import { defineStore } from 'pinia';
+import { computed, markRaw, ref, shallowRef } from 'vue';
+import type { CaseFields, CaseResult, MemberResult, NodeResult, SolveReport } from '../../solver/index.ts';
+import type { AnalysisDone, AnalysisProgress } from '../../main/common/host-contract.ts';
+
+export type AnalysisState = 'idle' | 'running' | 'done' | 'failed' | 'cancelled';
+
+export interface CaseIndex {
+  members: Map<string, MemberResult>;
+  nodes: Map<string, NodeResult>;
+}
+
+export const useResultsStore = defineStore('results', () => {
+  const state = ref<AnalysisState>('idle');
+  const runId = ref<string | null>(null);
+  const progress = shallowRef<AnalysisProgress | null>(null);
+  const report = shallowRef<SolveReport | null>(null);
+  /** Raw per-case fields when the host provides them (same order as report.cases), else null. */
+  const fields = shallowRef<CaseFields[] | null>(null);
+  const error = ref<string | null>(null);
+  const caseId = ref<string | null>(null);
+  /** Project revision the shown results belong to. */
+  const resultRevision = ref<number | null>(null);
+  const runRevision = ref<number | null>(null);
+
+  const caseIds = computed(() => report.value?.cases.map((c) => c.id) ?? []);
+  const currentCase = computed<CaseResult | null>(() => report.value?.cases.find((c) => c.id === caseId.value) ?? null);
+  const currentFields = computed<CaseFields | null>(() => {
+    const r = report.value;
+    if (!r || !fields.value) return null;
+    const i = r.cases.findIndex((c) => c.id === caseId.value);
+    return i >= 0 ? fields.value[i] ?? null : null;
+  });
+  /** Lookup tables for the current case, built once per case. */
+  const currentIndex = computed<CaseIndex | null>(() => {
+    const c = currentCase.value;
+    if (!c) return null;
+    return markRaw({
+      members: new Map(c.members.map((m) => [m.id, m])),
+      nodes: new Map(c.nodes.map((n) => [n.id, n])),
+    });
+  });
+  const progressText = computed(() => {
+    const p = progress.value;
+    if (state.value !== 'running') return '';
+    if (!p) return 'Starting…';
+    return `Case ${p.caseIndex + 1} of ${p.caseCount} (${p.caseId}), iteration ${p.iteration}, load ${Math.round(p.loadFactor * 100)} %`;
+  });
+
+  function isStale(projectRevision: number): boolean {
+    return resultRevision.value !== null && resultRevision.value !== projectRevision;
+  }
+
+  function started(id: string, projectRevision: number): void {
+    state.value = 'running';
+    runId.value = id;
+    progress.value = null;
+    error.value = null;
+    runRevision.value = projectRevision;
+  }
+
+  /** Progress events of other runs are ignored. */
+  function onProgress(p: AnalysisProgress): void {
+    if (state.value === 'running' && (runId.value === null || p.runId === runId.value)) progress.value = markRaw(p);
+  }
+
+  function onFinished(done: AnalysisDone, doneFields: CaseFields[] | null = null): void {
+    if (runId.value !== null && done.runId !== runId.value) return;
+    state.value = done.status;
+    progress.value = null;
+    runId.value = null;
+    if (done.status === 'done' && done.report) {
+      report.value = markRaw(done.report);
+      fields.value = doneFields ? markRaw(doneFields) : null;
+      resultRevision.value = runRevision.value;
+      if (!caseId.value || !done.report.cases.some((c) => c.id === caseId.value)) caseId.value = done.report.cases[0]?.id ?? null;
+    } else if (done.status === 'failed') {
+      error.value = done.error ?? 'the analysis failed without a message';
+    }
+  }
+
+  function failedToStart(message: string): void {
+    state.value = 'failed';
+    runId.value = null;
+    error.value = message;
+  }
+
+  function selectCase(id: string): void {
+    if (caseIds.value.includes(id)) caseId.value = id;
+  }
+
+  function clear(): void {
+    state.value = 'idle';
+    runId.value = null;
+    progress.value = null;
+    report.value = null;
+    fields.value = null;
+    error.value = null;
+    caseId.value = null;
+    resultRevision.value = null;
+  }
+
+  return {
+    state, runId, progress, report, fields, error, caseId, resultRevision, caseIds, currentCase, currentFields,
+    currentIndex, progressText, isStale, started, onProgress, onFinished, failedToStart, selectCase, clear,
+  };
+});

@@ -1,0 +1,85 @@
+/**
+ * The physical kinds of quantity the editors show, and their display units per unit system.
+ * The file is always SI (m, N, Pa, kg, K); `toSI` is the exact factor from one display unit to SI.
+ *
+ * Factors: NIST SP 811 (2008), Appendix B, exact by definition for in, ft, lb, lbf:
+ *   in = 0.0254 m, ft = 0.3048 m, lb = 0.45359237 kg, lbf = 4.4482216152605 N, kip = 1000 lbf.
+ * A temperature *change* of 1 °F is 5/9 K (no offset: only differences are entered here).
+ */
+export type UnitSystem = 'SI' | 'US';
+
+export type QuantityKind =
+  | 'length'
+  | 'smallLength'
+  | 'force'
+  | 'modulus'
+  | 'area'
+  | 'massPerLength'
+  | 'temperatureChange'
+  | 'thermalExpansion'
+  | 'count';
+
+export interface DisplayUnit {
+  /** Label shown in column headers and after values. */
+  label: string;
+  /** mathjs unit expression for this display unit ('' for dimensionless). */
+  mathUnit: string;
+  /** Multiply a value in this unit by toSI to get SI. */
+  toSI: number;
+}
+
+export interface KindInfo {
+  /** The SI unit the file stores, as a mathjs expression ('' for dimensionless or special kinds). */
+  siUnit: string;
+  /** Words for messages: "a length", "a force", … */
+  noun: string;
+  units: Record<UnitSystem, DisplayUnit>;
+}
+
+const IN = 0.0254;
+const FT = 0.3048;
+const LB = 0.45359237;
+const LBF = 4.4482216152605;
+
+export const KINDS: Record<QuantityKind, KindInfo> = {
+  length: {
+    siUnit: 'm', noun: 'a length',
+    units: { SI: { label: 'm', mathUnit: 'm', toSI: 1 }, US: { label: 'ft', mathUnit: 'ft', toSI: FT } },
+  },
+  smallLength: {
+    siUnit: 'm', noun: 'a length',
+    units: { SI: { label: 'mm', mathUnit: 'mm', toSI: 1e-3 }, US: { label: 'in', mathUnit: 'in', toSI: IN } },
+  },
+  force: {
+    siUnit: 'N', noun: 'a force',
+    units: { SI: { label: 'kN', mathUnit: 'kN', toSI: 1e3 }, US: { label: 'kip', mathUnit: 'kip', toSI: 1000 * LBF } },
+  },
+  modulus: {
+    siUnit: 'Pa', noun: 'a stress (modulus)',
+    units: { SI: { label: 'GPa', mathUnit: 'GPa', toSI: 1e9 }, US: { label: 'ksi', mathUnit: 'ksi', toSI: (1000 * LBF) / (IN * IN) } },
+  },
+  area: {
+    siUnit: 'm^2', noun: 'an area',
+    units: { SI: { label: 'mm²', mathUnit: 'mm^2', toSI: 1e-6 }, US: { label: 'in²', mathUnit: 'in^2', toSI: IN * IN } },
+  },
+  massPerLength: {
+    siUnit: 'kg/m', noun: 'a mass per length',
+    units: { SI: { label: 'kg/m', mathUnit: 'kg/m', toSI: 1 }, US: { label: 'lb/ft', mathUnit: 'lb/ft', toSI: LB / FT } },
+  },
+  temperatureChange: {
+    siUnit: '', noun: 'a temperature change',
+    units: { SI: { label: 'K', mathUnit: '', toSI: 1 }, US: { label: '°F', mathUnit: '', toSI: 5 / 9 } },
+  },
+  thermalExpansion: {
+    siUnit: '', noun: 'a thermal expansion coefficient',
+    units: { SI: { label: '1/K', mathUnit: '', toSI: 1 }, US: { label: '1/°F', mathUnit: '', toSI: 9 / 5 } },
+  },
+  count: {
+    siUnit: '', noun: 'a number',
+    units: { SI: { label: '', mathUnit: '', toSI: 1 }, US: { label: '', mathUnit: '', toSI: 1 } },
+  },
+};
+
+export function displayUnit(kind: QuantityKind, system: UnitSystem): DisplayUnit {
+  return KINDS[kind].units[system];
+}

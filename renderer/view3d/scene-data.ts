@@ -1,0 +1,122 @@
+/**
+ * What the 3D view draws, as typed arrays (structure of arrays). Built from a project and, when
+ * there are results, one case; knows nothing of Vue, Pinia or three.js.
+ *
+ * Layout:
+ * - node i: nodePositions[3i..3i+2] (displayed position, m), nodeSupport[i] (0 free, 1 some
+ *   directions restrained, 2 all of x, y, z restrained).
+ * - member j: drawn as the polyline polyPoints[3k..] for k in [polyOffsets[j], polyOffsets[j+1]);
+ *   memberKind[j] (0 cable, 1 bar), memberState[j] (MemberState), memberValue[j] (what the colour
+ *   shows: tension in N or utilisation).
+ *
+ * Deformed shape: displayed = modelled + scale × displacement at the user nodes. Between the ends,
+ * cables follow the solver's interior node positions when available (CaseFields + topology),
+ * else a parabola with the reported sag below the chord (sag × scale): a drawing aid only.
+ */
+import type { CaseResult, ProjectFile } from '../../solver/index.ts';
+import { MemberState } from './colour-scale.ts';
+
+export interface SceneData {
+  nodeIds: string[];
+  nodePositions: Float64Array;
+  nodeSupport: Uint8Array;
+  memberIds: string[];
+  memberKind: Uint8Array;
+  memberState: Uint8Array;
+  memberValue: Float64Array;
+  polyOffsets: Int32Array;
+  polyPoints: Float64Array;
+  /** Colour range [min, max] of memberValue over members in tension. */
+  valueRange: [number, number];
+}
+
+export type ColourQuantity = 'tension' | 'utilisation' | 'kind';
+
+export interface SceneOptions {
+  /** Case to draw, or null for the model as entered. */
+  result: CaseResult | null;
+  deformationScale: number;
+  colour: ColourQuantity;
+  /** Points per sagging cable polyline drawn from the sag (≥ 2). */
+  sagPoints?: number;
+}
+
+export function supportLevel(fixed: string | undefined): number {
+  if (!fixed) return 0;
+  return ['x', 'y', 'z'].every((d) => fixed.includes(d)) ? 2 : 1;
+}
+
+export function buildSceneData(project: ProjectFile, options: SceneOptions): SceneData {
+  const { result, deformationScale: scale } = options;
+  const sagPoints = Math.max(2, options.sagPoints ?? 9);
+  const n = project.nodes.length;
+  const nodeIds = project.nodes.map((nd) => nd.id);
+  const nodeIndex = new Map<string, number>();
+  const nodePositions = new Float64Array(3 * n);
+  const nodeSupport = new Uint8Array(n);
+  const nodeResults = result ? new Map(result.nodes.map((r) => [r.id, r])) : null;
+  for (let i = 0; i < n; i++) {
+    const nd = project.nodes[i];
+    nodeIndex.set(nd.id, i);
+    const d = nodeResults?.get(nd.id)?.displacement;
+    for (let k = 0; k < 3; k++) nodePositions[3 * i + k] = nd.at[k] + (d ? scale * d[k] : 0);
+    nodeSupport[i] = supportLevel(nd.fixed);
+  }
+
+  const m = project.members.length;
+  const memberIds = project.members.map((mb) => mb.id);
+  const memberKind = new Uint8Array(m);
+  const memberState = new Uint8Array(m);
+  const memberValue = new Float64Array(m);
+  const memberResults = result ? new Map(result.members.map((r) => [r.id, r])) : null;
+  const breaking = new Map(project.sections.map((s) => [s.id, s.breakingLoad ?? 0]));
+  let lo = Infinity;
+  let hi = -Infinity;
+
+  // First pass: sizes.
+  const sags = new Float64Array(m);
+  const polyOffsets = new Int32Array(m + 1);
+  for (let j = 0; j < m; j++) {
+    const mb = project.members[j];
+    memberKind[j] = mb.kind === 'bar' ? 1 : 0;
+    const r = memberResults?.get(mb.id);
+    if (r) {
+      if (r.slack) memberState[j] = MemberState.Slack;
+      else if (mb.kind === 'bar' && r.tensionMax < 0) memberState[j] = MemberState.Compression;
+      else memberState[j] = MemberState.Tension;
+      const b = breaking.get(mb.section) ?? 0;
+      memberValue[j] = options.colour === 'utilisation' ? (b > 0 ? r.tensionMax / b : 0) : r.tensionMax;
+      if (memberState[j] === MemberState.Tension) {
+        lo = Math.min(lo, memberValue[j]);
+        hi = Math.max(hi, memberValue[j]);
+      }
+      sags[j] = mb.kind === 'cable' ? r.sag * scale : 0;
+    }
+    polyOffsets[j + 1] = polyOffsets[j] + (sags[j] > 0 ? sagPoints : 2);
+  }
+
+  const polyPoints = new Float64Array(3 * polyOffsets[m]);
+  for (let j = 0; j < m; j++) {
+    const mb = project.members[j];
+    const a = nodeIndex.get(mb.from);
+    const b = nodeIndex.get(mb.to);
+    const start = polyOffsets[j];
+    const count = polyOffsets[j + 1] - start;
+    for (let p = 0; p < count; p++) {
+      const t = count === 1 ? 0 : p / (count - 1);
+      for (let k = 0; k < 3; k++) {
+        const pa = a === undefined ? 0 : nodePositions[3 * a + k];
+        const pb = b === undefined ? pa : nodePositions[3 * b + k];
+        polyPoints[3 * (start + p) + k] = pa + (pb - pa) * t;
+      }
+      // Parabolic sag below the chord, largest at mid-span: 4 s t (1 − t).
+      if (count > 2) polyPoints[3 * (start + p) + 2] -= 4 * sags[j] * t * (1 - t);
+    }
+  }
+
+  if (!(lo <= hi)) {
+    lo = 0;
+    hi = 0;
+  }
+  return { nodeIds, nodePositions, nodeSupport, memberIds, memberKind, memberState, memberValue, polyOffsets, polyPoints, valueRange: [lo, hi] };
+}
