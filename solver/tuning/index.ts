@@ -1,0 +1,7 @@
+/** Pretension tuning: public entry points (re-exported by solver/index.ts). */
+export type * from './tuning-types.ts';
+export { tuneProject, type TuneOptions } from './tune-project.ts';
+export { solveNamedCases } from './project-case-solver.ts';
+export { referenceCaseId } from './reference-case.ts';
+export { describeTarget } from './target-evaluation.ts';
+export { memberPretension, memberUnstressedLength, resolveVariables, applyVariables } from './tuning-variables.ts';

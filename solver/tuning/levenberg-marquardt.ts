@@ -1,0 +1,144 @@
+/**
+ * Bounded Levenberg–Marquardt on target gaps with finite-difference sensitivities.
+ *
+ * Method (Levenberg 1944; Marquardt 1963; bounds by projection as in Kelley, Iterative Methods
+ * for Optimization, SIAM 1999, ch. 5):
+ * - unknowns u = x / scale (scaled variables);
+ * - residuals r_i = g_i for equality targets, r_i = max(0, g_i + margin) for "≤" targets, so an
+ *   inequality only pulls while it is violated or within `margin` of its limit;
+ * - sensitivities J = ∂g/∂u by forward differences (backward at an upper bound), each a full
+ *   re-solve of the affected cases through `evaluate`;
+ * - step (JᵀJ + μ (diag JᵀJ + δI)) Δu = −Jᵀr on the free variables (those at a bound whose
+ *   gradient points outward are held), then x ← clamp(x + Δu · scale); a step is accepted only if
+ *   ½‖r‖² decreases, else μ grows ×4 (shrinks ÷3 on success).
+ * Stops when every target is met, the cost stalls, or after maxIterations.
+ */
+import { solveDense } from './dense-solve.ts';
+import type { TargetSense } from './tuning-types.ts';
+
+export interface GapProblem {
+  x0: number[];
+  lower: number[];
+  upper: number[];
+  scale: number[];
+  senses: TargetSense[];
+  /** Gaps g (see target-evaluation.ts) at x, or null when a case did not converge. */
+  evaluate(x: number[]): number[] | null;
+}
+
+export interface LmOptions {
+  maxIterations?: number;
+  /** Inequality activation margin on g. Default 0.01 (1 % of the limit). */
+  margin?: number;
+  /** |g| ≤ this meets an equality target. Default 1e-3. */
+  equalityTolerance?: number;
+  /** Finite-difference step in scaled units. Default 1e-3. */
+  fdStep?: number;
+  onIteration?: (iteration: number, x: number[], cost: number) => void;
+}
+
+export interface LmOutcome {
+  x: number[];
+  /** Gaps at x (null only when the very first evaluation failed). */
+  gaps: number[] | null;
+  /** ∂g/∂u at (or near) x, rows = targets; null when never computed. */
+  jacobian: number[][] | null;
+  iterations: number;
+  evaluations: number;
+  /** A trial or the start point did not converge and no progress was possible because of it. */
+  failedEvaluation: boolean;
+}
+
+export function isMet(g: number, sense: TargetSense, equalityTolerance: number): boolean {
+  return sense === 'equal' ? Math.abs(g) <= equalityTolerance : g <= 1e-9;
+}
+
+/**
+ * ∂g/∂u (rows = targets, columns = variables, u = x / scale) by forward differences of size
+ * h·scale (backward where the forward step would cross the upper bound); null if a solve failed.
+ */
+export function finiteDifferenceJacobian(
+  p: GapProblem, x: number[], g: number[], h = 1e-3, evaluate: (x: number[]) => number[] | null = p.evaluate,
+): number[][] | null {
+  const n = x.length;
+  const J = g.map(() => new Array<number>(n).fill(0));
+  for (let k = 0; k < n; k++) {
+    let step = h * p.scale[k];
+    if (x[k] + step > p.upper[k]) step = -step;
+    const xs = [...x];
+    xs[k] += step;
+    const gs = evaluate(xs);
+    if (!gs) return null;
+    for (let i = 0; i < g.length; i++) J[i][k] = ((gs[i] - g[i]) / step) * p.scale[k];
+  }
+  return J;
+}
+
+export function solveBoundedLeastSquares(p: GapProblem, options: LmOptions = {}): LmOutcome {
+  const maxIt = options.maxIterations ?? 30;
+  const margin = options.margin ?? 0.01;
+  const eqTol = options.equalityTolerance ?? 1e-3;
+  const h = options.fdStep ?? 1e-3;
+  const n = p.x0.length;
+  let evaluations = 0;
+  const evaluate = (x: number[]) => { evaluations++; return p.evaluate(x); };
+  const residuals = (g: number[]) => g.map((gi, i) => (p.senses[i] === 'equal' ? gi : Math.max(0, gi + margin)));
+  const cost = (g: number[]) => 0.5 * residuals(g).reduce((s, r) => s + r * r, 0);
+  const allMet = (g: number[]) => g.every((gi, i) => isMet(gi, p.senses[i], eqTol));
+  const clamp = (x: number[]) => x.map((v, k) => Math.min(p.upper[k], Math.max(p.lower[k], v)));
+
+  let x = clamp(p.x0);
+  let g = evaluate(x);
+  if (!g) return { x, gaps: null, jacobian: null, iterations: 0, evaluations, failedEvaluation: true };
+  let jacobian: number[][] | null = null;
+  let mu = 1e-3;
+  let iterations = 0;
+  let failedEvaluation = false;
+
+  const sensitivities = (xc: number[], gc: number[]) => finiteDifferenceJacobian(p, xc, gc, h, evaluate);
+
+  while (iterations < maxIt && !allMet(g)) {
+    iterations++;
+    const J = sensitivities(x, g);
+    if (!J) { failedEvaluation = true; break; }
+    jacobian = J;
+    const r = residuals(g);
+    const active = g.map((gi, i) => p.senses[i] === 'equal' || gi + margin > 0);
+    const grad = new Array<number>(n).fill(0);
+    const A = Array.from({ length: n }, () => new Array<number>(n).fill(0));
+    for (let i = 0; i < g.length; i++) {
+      if (!active[i]) continue;
+      for (let k = 0; k < n; k++) {
+        grad[k] += J[i][k] * r[i];
+        for (let l = 0; l < n; l++) A[k][l] += J[i][k] * J[i][l];
+      }
+    }
+    const free = [...Array(n).keys()].filter((k) => !(
+      (x[k] <= p.lower[k] && grad[k] > 0) || (x[k] >= p.upper[k] && grad[k] < 0)));
+    if (free.length === 0) break;
+    const c0 = cost(g);
+    const maxDiag = Math.max(...free.map((k) => A[k][k]), 1e-12);
+    let accepted = false;
+    for (let attempt = 0; attempt < 10 && !accepted; attempt++) {
+      const Af = free.map((k) => free.map((l) => A[k][l] + (k === l ? mu * (A[k][k] + 1e-6 * maxDiag) : 0)));
+      let du: number[];
+      try { du = solveDense(Af, free.map((k) => -grad[k])); } catch { mu *= 4; continue; }
+      const xt = [...x];
+      free.forEach((k, j) => { xt[k] += du[j] * p.scale[k]; });
+      const xc = clamp(xt);
+      if (xc.every((v, k) => v === x[k])) break;
+      const gt = evaluate(xc);
+      if (gt && cost(gt) < c0) {
+        x = xc; g = gt; accepted = true;
+        mu = Math.max(mu / 3, 1e-9);
+      } else {
+        if (!gt) failedEvaluation = true;
+        mu *= 4;
+      }
+    }
+    options.onIteration?.(iterations, x, cost(g));
+    if (!accepted) break;
+    failedEvaluation = false;
+  }
+  return { x, gaps: g, jacobian, iterations, evaluations, failedEvaluation };
+}

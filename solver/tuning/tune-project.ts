@@ -1,0 +1,113 @@
+/**
+ * Pretension tuning of a project: resolves TuningSpec variables and targets, runs the bounded
+ * Levenberg–Marquardt (levenberg-marquardt.ts) with every evaluation a nonlinear re-solve of the
+ * cases the targets name (through the injected CaseSolveFn), and explains unmet targets
+ * (conflict-diagnosis.ts). The input project is not modified.
+ * Results are for review by a qualified engineer; local codes and licensed practice govern.
+ */
+import type { ProjectFile } from '../project/types.ts';
+import type { CaseResult } from '../results/types.ts';
+import { membersOfGroup } from '../checks/groups.ts';
+import { applyVariables, memberPretension, resolveVariables } from './tuning-variables.ts';
+import { describeTarget, evaluateTarget, targetCases, validateTarget } from './target-evaluation.ts';
+import { finiteDifferenceJacobian, isMet, solveBoundedLeastSquares, type GapProblem, type LmOptions } from './levenberg-marquardt.ts';
+import { diagnoseTargets } from './conflict-diagnosis.ts';
+import type { CaseSolveFn, TargetValue, TuningResult, VariableOutcome } from './tuning-types.ts';
+
+export interface TuneOptions extends LmOptions {
+  solveCases: CaseSolveFn;
+}
+
+export function tuneProject(project: ProjectFile, options: TuneOptions): TuningResult {
+  const spec = project.tuning;
+  if (!spec) throw new Error('project has no "tuning" section: add tuning.variables and tuning.targets');
+  if (spec.targets.length === 0) throw new Error('tuning: no targets (tuning.targets is empty)');
+  spec.targets.forEach((t, i) => validateTarget(project, t, i));
+  const vars = resolveVariables(project);
+  const caseIds = [...new Set(spec.targets.flatMap((t) => targetCases(project, t)))];
+  const margin = options.margin ?? 0.01;
+  const eqTol = options.equalityTolerance ?? 1e-3;
+
+  const scales = new Map<string, number>();
+  const tensionScale = (group: string): number => {
+    let s = scales.get(group);
+    if (s === undefined) {
+      const ids = [...membersOfGroup(project, group)];
+      const ms = ids.map((id) => project.members.find((m) => m.id === id)!);
+      s = ms.reduce((acc, m) => acc + Math.abs(memberPretension(project, m)), 0) / Math.max(1, ms.length);
+      if (!(s > 0)) s = 1000;
+      scales.set(group, s);
+    }
+    return s;
+  };
+
+  const cache = new Map<string, { values: TargetValue[] } | { failure: string }>();
+  const evaluateAt = (x: number[]) => {
+    const key = x.map((v) => v.toPrecision(15)).join(',');
+    let hit = cache.get(key);
+    if (!hit) {
+      const results: Map<string, CaseResult> = options.solveCases(applyVariables(project, vars, x), caseIds);
+      const bad = [...results.values()].find((r) => !r.converged);
+      hit = bad
+        ? { failure: `case '${bad.id}' did not converge (${bad.status}${bad.message ? `: ${bad.message}` : ''})` }
+        : { values: spec.targets.map((t) => evaluateTarget(project, t, results, tensionScale)) };
+      cache.set(key, hit);
+    }
+    return hit;
+  };
+  let lastFailure = '';
+  const problem: GapProblem = {
+    x0: vars.map((v) => v.initial),
+    lower: vars.map((v) => v.lower),
+    upper: vars.map((v) => v.upper),
+    scale: vars.map((v) => v.scale),
+    senses: spec.targets.map((t) => (t.kind === 'tensionShare' ? 'equal' : 'atMost')),
+    evaluate: (x) => {
+      const e = evaluateAt(x);
+      if ('failure' in e) { lastFailure = e.failure; return null; }
+      return e.values.map((v) => v.gap);
+    },
+  };
+  const lm = solveBoundedLeastSquares(problem, options);
+  const labels = spec.targets.map((t) => describeTarget(project, t));
+  const variables: VariableOutcome[] = vars.map((v, k) => ({
+    group: v.group, by: v.by, initial: v.initial, final: lm.x[k], lower: v.lower, upper: v.upper,
+    atBound: lm.x[k] <= v.lower ? 'lower' : lm.x[k] >= v.upper ? 'upper' : null,
+  }));
+  const tuned = applyVariables(project, vars, lm.x);
+  if (!lm.gaps) {
+    const diagnosis = [`The starting state could not be solved: ${lastFailure}.`];
+    return {
+      status: 'notConverged', targets: [], variables, iterations: 0, evaluations: lm.evaluations,
+      diagnosis, project: tuned, summary: `tuning stopped: ${lastFailure}`,
+    };
+  }
+  const final = evaluateAt(lm.x) as { values: TargetValue[] };
+  const met = final.values.map((v, i) => isMet(v.gap, problem.senses[i], eqTol));
+  const targets = final.values.map((v, i) => ({
+    index: i, target: spec.targets[i], label: labels[i], value: v.value, limit: v.limit, unit: v.unit,
+    sense: v.sense, governing: v.governing, met: met[i],
+  }));
+  const diagnosis: string[] = [];
+  if (met.some((m) => !m)) {
+    const J = finiteDifferenceJacobian(problem, lm.x, lm.gaps, options.fdStep ?? 1e-3) ?? lm.jacobian;
+    if (J) {
+      diagnosis.push(...diagnoseTargets({
+        targetLabels: labels, senses: problem.senses, gaps: lm.gaps, met, jacobian: J, margin,
+        variables: vars.map((v, k) => ({ label: groupLabel(project, v.group), by: v.by, value: lm.x[k], lower: v.lower, upper: v.upper })),
+      }));
+    }
+    if (lm.failedEvaluation) diagnosis.push(`A trial step could not be solved (${lastFailure}); the tuner stopped at the last state that solved.`);
+  }
+  const metCount = met.filter(Boolean).length;
+  const summary = `${metCount} of ${met.length} targets met after ${lm.iterations} iterations (${lm.evaluations} solves)` +
+    (metCount < met.length ? `; not met: ${labels.filter((_, i) => !met[i]).join('; ')}` : '');
+  return {
+    status: metCount === met.length ? 'met' : 'unmet', targets, variables, iterations: lm.iterations,
+    evaluations: lm.evaluations, diagnosis, project: tuned, summary,
+  };
+}
+
+function groupLabel(project: ProjectFile, group: string): string {
+  return project.groups?.find((g) => g.id === group)?.label ?? group;
+}
