@@ -61,10 +61,11 @@ export function scanJson(text: string): JsonProblem | null {
     }
   };
   const number = (): void => {
-    const m = /^-?(0|[1-9]\d*)(\.\d+)?([eE][+-]?\d+)?/.exec(text.slice(i, i + 400));
-    if (!m || m[0] === '-') fail('a malformed number');
-    i += m![0].length;
-    if (i < text.length && /[\d.eE+-]/.test(text[i])) fail('a malformed number');
+    const run = /^[-+\d.eE]*/.exec(text.slice(i, i + 400))![0];
+    const m = /^-?(0|[1-9]\d*)(\.\d+)?([eE][+-]?\d+)?$/.exec(run);
+    if (!m && i + run.length >= text.length) end('a number');
+    if (!m) fail('a malformed number');
+    i += run.length;
   };
   const value = (what: string): void => {
     ws();

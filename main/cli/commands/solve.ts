@@ -1,0 +1,77 @@
+/**
+ * `stayset solve FILE [--json] [--case ID ...]`: validate a project, run the nonlinear analysis
+ * of every load case and combination (or the chosen ones) and print the results.
+ */
+import { solveProject } from '../../../solver/index.ts';
+import type { SolveReport } from '../../../solver/index.ts';
+import type { CliCommand } from '../command.ts';
+import { EXIT, UsageError } from '../cli-io.ts';
+import type { CliIO } from '../cli-io.ts';
+import { parseOptions } from '../options.ts';
+import { readProjectFile } from '../read-project-file.ts';
+import { checkCaseIds, filterReport } from '../case-selection.ts';
+import { replaceNonFinite } from '../format/finite-guard.ts';
+import { solveReportText } from '../format/solve-report-text.ts';
+import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
+
+const HELP = `Solves every load case and combination of a project file (geometrically nonlinear,
+tension-only cables) and prints, per case: status, member forces, node displacements and
+support reactions.
+
+Options:
+  --json        Print {"cases": [...], "disclaimer": "..."} instead of tables. Numbers are SI
+                (N, m); tension is positive; reactions are forces the supports exert.
+  --case ID     Solve only this load case or combination (repeat for several).
+  --help        Show this help.
+
+Exit status:
+  0  every case converged
+  1  some case did not converge (results still printed, marked not converged) or the solver failed
+  2  bad input: missing or invalid file, unknown option or case (messages on stderr, nothing on stdout)`;
+
+async function run(args: string[], io: CliIO): Promise<number> {
+  const opts = parseOptions(args, { json: { type: 'boolean' }, case: { type: 'string', multiple: true } });
+  if (opts.positionals.length !== 1) {
+    throw new UsageError(opts.positionals.length === 0 ? 'solve needs a project FILE' : `solve takes one FILE (got ${opts.positionals.length})`);
+  }
+  const file = opts.positionals[0];
+  const read = readProjectFile(file, io.cwd);
+  if (!read.ok) {
+    for (const m of read.errors) io.err(`${m}\n`);
+    return EXIT.badInput;
+  }
+  const requested = opts.values.get('case') ?? [];
+  const project = read.project;
+  checkCaseIds(project, requested);
+  if (read.migratedFrom !== undefined) {
+    io.err(`${file}: note: read as format version ${read.migratedFrom} and migrated; saving would write the current version\n`);
+  }
+
+  let report: SolveReport;
+  try {
+    const only = requested.length > 0 ? { only: [...new Set(requested)] } : {};
+    report = filterReport(solveProject(project, {}, only).report, requested);
+  } catch (e) {
+    io.err(`${file}: the analysis failed: ${(e as Error).message}\n`);
+    return EXIT.notConverged;
+  }
+  const guarded = replaceNonFinite(report);
+  if (opts.flags.has('json')) io.out(`${JSON.stringify({ cases: guarded.value.cases, disclaimer: RESULTS_DISCLAIMER }, null, 2)}\n`);
+  else io.out(solveReportText(project, guarded.value, RESULTS_DISCLAIMER));
+
+  if (guarded.paths.length > 0) {
+    const shown = guarded.paths.slice(0, 10).join(', ');
+    const more = guarded.paths.length > 10 ? ` and ${guarded.paths.length - 10} more` : '';
+    io.err(`${file}: error: the solver produced non-finite numbers (printed as null / n/a) at ${shown}${more}; these results are invalid\n`);
+    return EXIT.notConverged;
+  }
+  return guarded.value.cases.every((c) => c.converged) ? EXIT.ok : EXIT.notConverged;
+}
+
+export const solveCommand: CliCommand = {
+  name: 'solve',
+  summary: 'analyse a project file and print member forces, displacements and reactions',
+  usage: 'stayset solve FILE [--json] [--case ID ...]',
+  help: HELP,
+  run,
+};

@@ -1,0 +1,99 @@
+/**
+ * The readable form of a solve report: per case a header line (status, iterations, load steps,
+ * DOFs, time, residual), then tables of members (forces in kN, tension positive; sag in m),
+ * user-node displacements (m) and support reactions (kN, force the support exerts on the
+ * structure). Cases that did not converge show the reason instead of tables.
+ */
+import type { CaseResult, ProjectFile, SolveReport } from '../../../solver/index.ts';
+import { kN, fixed, metres3, metres4 } from './number-text.ts';
+import { textTable } from './text-table.ts';
+
+function caseTitle(project: ProjectFile, id: string): string {
+  const lc = project.loadCases.find((c) => c.id === id);
+  const combo = project.combinations?.find((c) => c.id === id);
+  const label = lc?.label ?? combo?.label;
+  const kind = combo ? 'Combination' : 'Load case';
+  return `${kind} ${JSON.stringify(id)}${label ? ` (${label})` : ''}`;
+}
+
+function statusLine(c: CaseResult): string {
+  const s = c.stats;
+  const status = c.converged ? 'converged' : `NOT CONVERGED (${c.status})`;
+  return (
+    `  ${status}: ${s.iterations} iterations, ${s.loadSteps} load steps, ${s.dofs} DOFs, ` +
+    `${fixed(s.seconds, 3)} s, residual ${Number.isFinite(s.residual) ? s.residual.toExponential(1) : 'n/a'}`
+  );
+}
+
+function memberTable(project: ProjectFile, c: CaseResult): string {
+  const kindOf = new Map(project.members.map((m) => [m.id, m.kind]));
+  const rows = c.members.map((m) => [
+    m.id,
+    kindOf.get(m.id) ?? '',
+    kN(m.tensionMax),
+    kN(m.tensionMin),
+    kN(m.tensionStart),
+    kN(m.tensionEnd),
+    m.slack ? 'SLACK' : '',
+    metres3(m.sag),
+  ]);
+  const r = 'right' as const;
+  return textTable(
+    [
+      { title: 'member' },
+      { title: 'kind' },
+      { title: 'T max kN', align: r },
+      { title: 'T min kN', align: r },
+      { title: 'T start kN', align: r },
+      { title: 'T end kN', align: r },
+      { title: 'slack' },
+      { title: 'sag m', align: r },
+    ],
+    rows,
+  );
+}
+
+function nodeTable(project: ProjectFile, c: CaseResult): string {
+  const userNodes = new Set(project.nodes.map((n) => n.id));
+  const rows = c.nodes
+    .filter((n) => userNodes.has(n.id))
+    .map((n) => {
+      const [ux, uy, uz] = n.displacement;
+      return [n.id, metres4(ux), metres4(uy), metres4(uz), metres4(Math.hypot(ux, uy, uz))];
+    });
+  const r = 'right' as const;
+  return textTable(
+    [{ title: 'node' }, { title: 'ux m', align: r }, { title: 'uy m', align: r }, { title: 'uz m', align: r }, { title: '|u| m', align: r }],
+    rows,
+  );
+}
+
+function reactionTable(c: CaseResult): string {
+  const rows = c.reactions.map((q) => [q.node, kN(q.force[0]), kN(q.force[1]), kN(q.force[2])]);
+  const r = 'right' as const;
+  return textTable([{ title: 'support' }, { title: 'Rx kN', align: r }, { title: 'Ry kN', align: r }, { title: 'Rz kN', align: r }], rows);
+}
+
+export function caseText(project: ProjectFile, c: CaseResult): string {
+  const parts = [caseTitle(project, c.id), statusLine(c)];
+  if (c.message) parts.push(`  ${c.message}`);
+  if (!c.converged) {
+    parts.push('  No results shown: the analysis did not converge, so its forces and displacements are not valid.');
+    return parts.join('\n');
+  }
+  if (c.slackMembers.length > 0) parts.push(`  slack members: ${c.slackMembers.join(', ')}`);
+  parts.push('', '  Members (tension positive)', memberTable(project, c));
+  parts.push('', '  Node displacements', nodeTable(project, c));
+  parts.push('', '  Support reactions (force on the structure)', reactionTable(c));
+  return parts.join('\n');
+}
+
+export function solveReportText(project: ProjectFile, report: SolveReport, disclaimer: string): string {
+  const cases = report.cases.map((c) => caseText(project, c));
+  const notConverged = report.cases.filter((c) => !c.converged).map((c) => c.id);
+  const summary =
+    notConverged.length === 0
+      ? `All ${report.cases.length} case(s) converged.`
+      : `${notConverged.length} of ${report.cases.length} case(s) did NOT converge: ${notConverged.join(', ')}.`;
+  return `${[...cases, summary, disclaimer].join('\n\n')}\n`;
+}

@@ -1,0 +1,44 @@
+/**
+ * Reads and validates a project file from disk for a command. Every message starts with the
+ * file name as typed, e.g. `mast.stayset.json: members[3] "G2": node "TOP2" does not exist`.
+ */
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { parseProjectText } from '../common/project/index.ts';
+import type { ProjectFile } from '../../solver/index.ts';
+
+export type ReadProjectOutcome =
+  | { ok: true; project: ProjectFile; migratedFrom?: number }
+  | { ok: false; errors: string[] };
+
+function readError(name: string, e: NodeJS.ErrnoException): string {
+  switch (e.code) {
+    case 'ENOENT':
+      return `${name}: no such file`;
+    case 'EISDIR':
+      return `${name}: is a folder, not a project file`;
+    case 'EACCES':
+    case 'EPERM':
+      return `${name}: permission denied`;
+    default:
+      return `${name}: cannot be read (${e.message})`;
+  }
+}
+
+export function readProjectFile(name: string, cwd: string): ReadProjectOutcome {
+  let bytes: Buffer;
+  try {
+    bytes = readFileSync(resolve(cwd, name));
+  } catch (e) {
+    return { ok: false, errors: [readError(name, e as NodeJS.ErrnoException)] };
+  }
+  let text: string;
+  try {
+    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+  } catch {
+    return { ok: false, errors: [`${name}: is not UTF-8 text (is it a project file?)`] };
+  }
+  const parsed = parseProjectText(text);
+  if (!parsed.ok) return { ok: false, errors: parsed.errors.map((m) => `${name}: ${m}`) };
+  return parsed;
+}
