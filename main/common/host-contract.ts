@@ -5,6 +5,34 @@
  *
  * The renderer reaches a host only through `renderer/host/client.ts`; no raw channel strings
  * anywhere else. Arguments are validated on the host side by `main/common/host-validation.ts`.
+ *
+ * Implementations:
+ * - desktop: `main/electron/preload.ts` exposes this interface as `window.stayset` (one frozen
+ *   object); `main/electron/ipc-handlers.ts` serves it in the main process.
+ * - web: `main/common/web-host-client.ts` (`createWebHostClient({ token })`) over HTTP + SSE to
+ *   `main/web/` (routes in `main/common/web-protocol.ts`). The token comes from `location.hash`
+ *   (`#token=...`), see `readTokenFromHash` in web-host-client.ts.
+ *
+ * Contract notes (changes since the first draft are marked "added"):
+ * - Methods returning `HostResult | null`: null means the user cancelled a dialog (desktop only).
+ * - save(path) only replaces a file that currently reads as a current-version Stayset project (or
+ *   does not exist). A file that is corrupt, of an unknown/newer format, or of an older format
+ *   version (migrated on load) is never overwritten by save(): the error says so, and the renderer
+ *   should offer Save As. saveAs to a path the user explicitly chose replaces anything, always
+ *   keeping the previous file as `<name>.bak`.
+ * - Desktop: save(path) is accepted only for paths the host handed out (opened, chosen in a dialog,
+ *   recent, recovered); anything else is refused.
+ * - Web: open/saveAs need a path, relative to the project root folder or absolute inside it;
+ *   files of the bundled assets/ open read-only (save() to them is refused; use saveAs).
+ * - added: onDidRequestOpen — the OS asked to open a file (Open Recent menu, file association,
+ *   second instance). The renderer settles its unsaved changes first, then calls open(path).
+ * - added: quit/close with unsaved changes (after setDirty(true)) shows Save / Don't save / Cancel
+ *   in the desktop host. On Save the host sends the menu command 'save'; once the renderer's save
+ *   succeeds and it calls setDirty(false), the window closes. A cancelled or failed save keeps it open.
+ * - printSchedule (desktop) opens a hidden window at `index.html#/schedule?print=1` whose
+ *   openInitial() returns the project to print; the renderer calls `printReady()` there when the
+ *   schedule is laid out (added), then the host writes the PDF. Web: returns ok:false with a hint
+ *   to use the browser's own Print on the schedule view.
  */
 import type { ProjectFile, SolveReport } from '../../solver/index.ts';
 
@@ -84,6 +112,10 @@ export interface StaysetHost {
   onDidMenuCommand(listener: (command: MenuCommand) => void): () => void;
   /** Tell the host whether there are unsaved changes (quit prompt, window title). */
   setDirty(dirty: boolean, title: string): Promise<void>;
+  /** added: the OS asked to open a file; settle unsaved changes, then call open(path). */
+  onDidRequestOpen(listener: (path: string) => void): () => void;
+  /** added: in the hidden print window, the schedule is laid out and may be printed now. */
+  printReady(): Promise<void>;
 }
 
 export type MenuCommand =

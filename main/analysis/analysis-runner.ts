@@ -1,0 +1,118 @@
+/**
+ * Runs analyses off the UI / request thread, in a Node worker_threads worker per run.
+ *
+ * - Progress (case k of n, iteration, load factor) is forwarded as AnalysisProgress.
+ * - Cancel sets the shared Atomics flag (the solver stops between iterations and reports
+ *   'cancelled'); a worker that has not finished `cancelGraceMs` later is terminated.
+ * - One run at a time: starting a run cancels the previous one (reported as 'cancelled').
+ * - The worker file is `analysis-worker.ts` beside this file when running from sources (started
+ *   with tsx as loader) or `analysis-worker.js` beside the bundle (dist/main/electron/).
+ */
+import { randomBytes } from 'node:crypto';
+import { Worker } from 'node:worker_threads';
+import type { CaseFields, ProjectFile } from '../../solver/index.ts';
+import type { AnalysisDone, AnalysisProgress } from '../common/host-contract.ts';
+import { CANCEL_REQUESTED, createCancelFlag, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
+
+export interface AnalysisRunnerOptions {
+  onProgress: (p: AnalysisProgress) => void;
+  /** Called exactly once per run. `fields` are the raw per-case arrays when status is 'done'. */
+  onDone: (d: AnalysisDone, fields?: CaseFields[]) => void;
+  /** Worker script; default: analysis-worker.(ts|js) beside this module. */
+  workerUrl?: URL;
+  /** Node options for the worker; default `--import tsx` for a .ts worker, none for .js. */
+  execArgv?: string[];
+  cancelGraceMs?: number;
+  progressIntervalMs?: number;
+}
+
+interface ActiveRun {
+  worker: Worker;
+  flag: Int32Array;
+  cancelRequested: boolean;
+  finished: boolean;
+  killTimer?: ReturnType<typeof setTimeout>;
+}
+
+export function defaultWorkerUrl(moduleUrl: string = import.meta.url): URL {
+  const ext = new URL(moduleUrl).pathname.endsWith('.ts') ? '.ts' : '.js';
+  return new URL(`./analysis-worker${ext}`, moduleUrl);
+}
+
+export function newRunId(): string {
+  return randomBytes(8).toString('hex');
+}
+
+export class AnalysisRunner {
+  private readonly runs = new Map<string, ActiveRun>();
+  private readonly workerUrl: URL;
+  private readonly execArgv: string[];
+
+  constructor(private readonly options: AnalysisRunnerOptions) {
+    this.workerUrl = options.workerUrl ?? defaultWorkerUrl();
+    this.execArgv = options.execArgv ?? (this.workerUrl.pathname.endsWith('.ts') ? ['--import', 'tsx'] : []);
+  }
+
+  /** Ids of runs not yet finished. */
+  activeRuns(): string[] {
+    return [...this.runs.keys()];
+  }
+
+  start(project: ProjectFile): { runId: string } {
+    for (const id of this.runs.keys()) this.cancel(id);
+    const runId = newRunId();
+    const cancel = createCancelFlag();
+    const data: AnalysisWorkerData = {
+      project,
+      cancelFlag: cancel.buffer,
+      progressIntervalMs: this.options.progressIntervalMs ?? 50,
+    };
+    const worker = new Worker(this.workerUrl, { workerData: data, execArgv: this.execArgv });
+    const run: ActiveRun = { worker, flag: cancel.view, cancelRequested: false, finished: false };
+    this.runs.set(runId, run);
+    worker.on('message', (m: WorkerMessage) => this.onMessage(runId, run, m));
+    worker.on('error', (e) => this.finish(runId, run, { runId, status: 'failed', error: `Analysis worker failed: ${e.message}` }));
+    worker.on('exit', (code) => {
+      if (run.cancelRequested) this.finish(runId, run, { runId, status: 'cancelled' });
+      else this.finish(runId, run, { runId, status: 'failed', error: `Analysis worker stopped unexpectedly (exit code ${code}).` });
+    });
+    return { runId };
+  }
+
+  cancel(runId: string): void {
+    const run = this.runs.get(runId);
+    if (!run || run.finished || run.cancelRequested) return;
+    run.cancelRequested = true;
+    Atomics.store(run.flag, 0, CANCEL_REQUESTED);
+    run.killTimer = setTimeout(() => void run.worker.terminate(), this.options.cancelGraceMs ?? 1500);
+  }
+
+  /** Stop every run now (host shutdown). */
+  async dispose(): Promise<void> {
+    const runs = [...this.runs.values()];
+    for (const r of runs) r.cancelRequested = true;
+    await Promise.all(runs.map((r) => r.worker.terminate()));
+  }
+
+  private onMessage(runId: string, run: ActiveRun, m: WorkerMessage): void {
+    if (run.finished) return;
+    if (m.type === 'progress') {
+      const p = m.progress;
+      this.options.onProgress({ runId, caseIndex: p.caseIndex, caseCount: p.caseCount, caseId: p.caseId, iteration: p.iteration, loadFactor: p.loadFactor });
+    } else if (m.type === 'done') {
+      const status = run.cancelRequested ? 'cancelled' : 'done';
+      this.finish(runId, run, { runId, status, report: m.report }, m.fields);
+    } else {
+      this.finish(runId, run, { runId, status: run.cancelRequested ? 'cancelled' : 'failed', error: m.error });
+    }
+  }
+
+  private finish(runId: string, run: ActiveRun, done: AnalysisDone, fields?: CaseFields[]): void {
+    if (run.finished) return;
+    run.finished = true;
+    if (run.killTimer) clearTimeout(run.killTimer);
+    this.runs.delete(runId);
+    void run.worker.terminate();
+    this.options.onDone(done, done.status === 'done' ? fields : undefined);
+  }
+}

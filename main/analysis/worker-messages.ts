@@ -1,0 +1,41 @@
+/**
+ * Messages between the analysis runner (main thread) and its worker (analysis-worker.ts).
+ *
+ * The worker gets `AnalysisWorkerData` as workerData. The cancel flag is an Int32Array of
+ * length 1 over a SharedArrayBuffer: 0 = run, 1 = cancel requested; the worker reads it with
+ * Atomics.load between Newton iterations (SolveControl.isCancelled).
+ *
+ * The report is plain JSON-able data; the per-case typed arrays (CaseFields) cross the boundary
+ * as transferred ArrayBuffers (no copy).
+ */
+import type { CaseFields, ProjectFile, SolveProgress, SolveReport } from '../../solver/index.ts';
+
+export interface AnalysisWorkerData {
+  project: ProjectFile;
+  cancelFlag: SharedArrayBuffer;
+  /** Shortest time between two progress messages, ms (the last iteration of a case is always sent). */
+  progressIntervalMs: number;
+}
+
+export type WorkerMessage =
+  | { type: 'progress'; progress: SolveProgress }
+  | { type: 'done'; report: SolveReport; fields: CaseFields[] }
+  | { type: 'failed'; error: string };
+
+export const CANCEL_REQUESTED = 1;
+
+export function createCancelFlag(): { buffer: SharedArrayBuffer; view: Int32Array } {
+  const buffer = new SharedArrayBuffer(4);
+  return { buffer, view: new Int32Array(buffer) };
+}
+
+/** The distinct ArrayBuffers under the fields' typed arrays (a buffer may be listed once only). */
+export function transferablesOf(fields: CaseFields[]): ArrayBuffer[] {
+  const seen = new Set<ArrayBuffer>();
+  for (const f of fields) {
+    for (const a of [f.positions, f.elementTension, f.elementSlack]) {
+      if (a && a.buffer instanceof ArrayBuffer) seen.add(a.buffer);
+    }
+  }
+  return [...seen];
+}

@@ -1,0 +1,102 @@
+/**
+ * Reading and writing `.stayset` project files (JSON, format of main/common/project).
+ *
+ * Overwrite policy (also stated in main/common/host-contract.ts):
+ * - `save`   replaces a file only when it is absent or currently reads as a valid project of the
+ *            current format version. A file that is unreadable, corrupt, of an unknown or newer
+ *            format, or of an older version (it would be migrated) is left untouched and the save
+ *            is refused with a message that says why and suggests Save As.
+ * - `saveAs` is the user's explicit choice of a path (a dialog on the desktop, a typed path on
+ *            the web host): it replaces whatever is there. Both keep the previous file as `.bak`.
+ * Writes are atomic (see atomic-write.ts).
+ */
+import { promises as fs } from 'node:fs';
+import path from 'node:path';
+import type { ProjectFile } from '../../solver/index.ts';
+import type { HostResult, OpenedProject } from '../common/host-contract.ts';
+import { parseProjectText, serializeProject } from '../common/project/index.ts';
+import { writeFileAtomic } from './atomic-write.ts';
+
+export const PROJECT_EXTENSION = '.stayset';
+/** Largest project file read, bytes. */
+export const MAX_PROJECT_BYTES = 256 * 1024 * 1024;
+
+export type SaveMode = 'save' | 'saveAs';
+
+export type ReadOutcome =
+  | { ok: true; opened: OpenedProject }
+  | { ok: false; reason: 'missing' | 'unreadable' | 'invalid'; error: string };
+
+/** Add `.stayset` to a path without an extension; other extensions are left as given. */
+export function withProjectExtension(file: string): string {
+  return path.extname(file) === '' ? file + PROJECT_EXTENSION : file;
+}
+
+export function hasProjectExtension(file: string): boolean {
+  return path.extname(file).toLowerCase() === PROJECT_EXTENSION;
+}
+
+function describeErrors(errors: string[]): string {
+  const shown = errors.slice(0, 8).join('\n  ');
+  return errors.length > 8 ? `${shown}\n  … and ${errors.length - 8} more` : shown;
+}
+
+/** Read and validate a project file. Never throws for file or content problems. */
+export async function readProjectFile(file: string): Promise<ReadOutcome> {
+  const name = path.basename(file);
+  let text: string;
+  try {
+    const stat = await fs.stat(file);
+    if (!stat.isFile()) return { ok: false, reason: 'unreadable', error: `${name}: not a file` };
+    if (stat.size > MAX_PROJECT_BYTES) return { ok: false, reason: 'unreadable', error: `${name}: ${stat.size} bytes is larger than the ${MAX_PROJECT_BYTES}-byte limit` };
+    text = await fs.readFile(file, 'utf8');
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    if (code === 'ENOENT') return { ok: false, reason: 'missing', error: `${name}: file not found (${file})` };
+    return { ok: false, reason: 'unreadable', error: `${name}: cannot be read (${code ?? String(e)})` };
+  }
+  const parsed = parseProjectText(text);
+  if (!parsed.ok) {
+    return { ok: false, reason: 'invalid', error: `${name} is not a usable Stayset project; the file was not changed:\n  ${describeErrors(parsed.errors)}` };
+  }
+  const opened: OpenedProject = { path: path.resolve(file), name, project: parsed.project };
+  if (parsed.migratedFrom !== undefined) opened.migratedFrom = parsed.migratedFrom;
+  return { ok: true, opened };
+}
+
+/** Why `save` may not replace `file`, or null when it may. */
+export async function saveRefusal(file: string): Promise<string | null> {
+  const current = await readProjectFile(file);
+  if (current.ok) {
+    if (current.opened.migratedFrom === undefined) return null;
+    return `${path.basename(file)} is in the older format version ${current.opened.migratedFrom}; `
+      + 'Save would upgrade it and older Stayset versions could not open it any more. Use Save As '
+      + '(choosing the same file replaces it and keeps the old one as .bak).';
+  }
+  if (current.reason === 'missing') return null;
+  return `${path.basename(file)} could not be read as a Stayset project, so Save will not replace it. `
+    + `Use Save As to write elsewhere or to replace it deliberately. (${current.error.split('\n')[0]})`;
+}
+
+/** Save a project atomically, keeping a `.bak` of the file it replaces. */
+export async function writeProjectFile(file: string, project: ProjectFile, mode: SaveMode): Promise<HostResult<{ path: string }>> {
+  const target = path.resolve(file);
+  if (!hasProjectExtension(target)) return { ok: false, error: `${path.basename(target)}: project files must end in ${PROJECT_EXTENSION}` };
+  if (mode === 'save') {
+    const refusal = await saveRefusal(target);
+    if (refusal) return { ok: false, error: refusal };
+  }
+  let text: string;
+  try {
+    text = serializeProject(project);
+  } catch (e) {
+    return { ok: false, error: `The project could not be written as text: ${(e as Error).message}` };
+  }
+  try {
+    await writeFileAtomic(target, text, { backup: true });
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    return { ok: false, error: `Saving ${path.basename(target)} failed (${code ?? (e as Error).message}); the previous file is unchanged.` };
+  }
+  return { ok: true, value: { path: target } };
+}

@@ -1,0 +1,58 @@
+/**
+ * The recent-projects list: a small JSON file (`recent-projects.json`) in the user data folder,
+ * newest first, deduplicated by resolved path, capped at `RECENT_LIMIT` entries. A missing or
+ * damaged list reads as empty (it is a convenience, never a reason to fail).
+ */
+import { promises as fs } from 'node:fs';
+import path from 'node:path';
+import type { RecentEntry } from '../common/host-contract.ts';
+import { writeFileAtomic } from './atomic-write.ts';
+
+export const RECENT_LIMIT = 12;
+export const RECENT_FILE = 'recent-projects.json';
+
+function samePath(a: string, b: string): boolean {
+  return process.platform === 'win32' || process.platform === 'darwin' ? a.toLowerCase() === b.toLowerCase() : a === b;
+}
+
+function isEntry(v: unknown): v is RecentEntry {
+  const e = v as RecentEntry;
+  return typeof e === 'object' && e !== null && typeof e.path === 'string' && typeof e.name === 'string' && typeof e.openedAt === 'string';
+}
+
+/** Put `entry` first, drop older duplicates of its path, keep at most `limit`. Pure. */
+export function addRecent(list: RecentEntry[], entry: RecentEntry, limit = RECENT_LIMIT): RecentEntry[] {
+  return [entry, ...list.filter((e) => !samePath(e.path, entry.path))].slice(0, limit);
+}
+
+export class RecentProjects {
+  private readonly file: string;
+  constructor(userDataDir: string) {
+    this.file = path.join(userDataDir, RECENT_FILE);
+  }
+
+  async list(): Promise<RecentEntry[]> {
+    try {
+      const data: unknown = JSON.parse(await fs.readFile(this.file, 'utf8'));
+      return Array.isArray(data) ? data.filter(isEntry).slice(0, RECENT_LIMIT) : [];
+    } catch {
+      return [];
+    }
+  }
+
+  async add(projectPath: string, now = new Date()): Promise<RecentEntry[]> {
+    const resolved = path.resolve(projectPath);
+    const next = addRecent(await this.list(), { path: resolved, name: path.basename(resolved), openedAt: now.toISOString() });
+    await fs.mkdir(path.dirname(this.file), { recursive: true });
+    await writeFileAtomic(this.file, JSON.stringify(next, null, 2) + '\n');
+    return next;
+  }
+
+  async remove(projectPath: string): Promise<void> {
+    const resolved = path.resolve(projectPath);
+    const list = await this.list();
+    const next = list.filter((e) => !samePath(e.path, resolved));
+    if (next.length === list.length) return;
+    await writeFileAtomic(this.file, JSON.stringify(next, null, 2) + '\n');
+  }
+}
