@@ -5,14 +5,16 @@ import { permutedUpper } from './permuted-upper.ts';
 import { eliminationTree, postorderTree, columnCounts } from './elimination-tree.ts';
 import type { FactorBackend } from './factor-backend.ts';
 import { SimplicialBackend } from './simplicial-backend.ts';
+import { SupernodalLDL } from './supernodal-ldl.ts';
+import { supernodalStructure, supernodalScatterMap } from './supernodal-symbolic.ts';
 
 export interface SparseLDLOptions {
   /** Consecutive DOFs grouped for the ordering (3 for truss/cable models; 1 = plain). Default 3. */
   blockSize?: number;
   /** Fill-reducing ordering. Default 'amd'. */
   ordering?: 'amd' | 'natural';
-  /** Numeric kernel. 'simplicial' (up-looking, the reference) is the only one so far. */
-  kernel?: 'simplicial';
+  /** Numeric kernel: 'supernodal' (default, fast) or 'simplicial' (up-looking, the reference). */
+  kernel?: 'supernodal' | 'simplicial';
 }
 
 /** Default pivot tolerance: a pivot smaller than 1e-12 of its original diagonal counts as zero. */
@@ -63,10 +65,19 @@ export class SparseLDL {
     const up0 = permutedUpper(pattern, invertPermutation(order));
     const post = postorderTree(eliminationTree(n, up0.ptr, up0.idx));
     const perm = composePermutations(order, post);
-    const upper = permutedUpper(pattern, invertPermutation(perm));
+    const kernel = options.kernel ?? 'supernodal';
+    if (kernel !== 'supernodal' && kernel !== 'simplicial') throw new Error(`SparseLDL: unknown kernel '${String(kernel)}'`);
+    const pinv = invertPermutation(perm);
+    const upper = permutedUpper(pattern, pinv);
     const parent = eliminationTree(n, upper.ptr, upper.idx);
     const counts = columnCounts(n, upper.ptr, upper.idx, parent);
-    const backend = new SimplicialBackend(n, upper, parent, counts);
+    let backend: FactorBackend;
+    if (kernel === 'simplicial') {
+      backend = new SimplicialBackend(n, upper, parent, counts);
+    } else {
+      const st = supernodalStructure(n, upper.ptr, upper.idx, parent, counts);
+      backend = new SupernodalLDL(st, supernodalScatterMap(st, pattern.colPtr, pattern.rowIdx, pinv));
+    }
     return new SparseLDL(n, perm, backend, pattern.colPtr[n]);
   }
 

@@ -8,7 +8,7 @@ import { prng, randomSystem, gridLaplacian } from './random-systems.ts';
 // for Sparse Linear Systems, SIAM 2006, ch. 4 (LDLᵀ), ordering by AMD (Amestoy, Davis & Duff,
 // SIAM J. Matrix Anal. Appl. 17(4), 1996).
 
-const kernels = ['simplicial'] as const;
+const kernels = ['simplicial', 'supernodal'] as const;
 
 function relErr(x: Float64Array, ref: number[]): number {
   let num = 0, den = 0;

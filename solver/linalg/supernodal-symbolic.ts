@@ -1,0 +1,147 @@
+/**
+ * Symbolic analysis for the supernodal LDLᵀ: supernode partition, row structure of each
+ * supernode, storage offsets and the scatter map from A's values into L's storage.
+ *
+ * Input is the permuted matrix C = P A Pᵀ with P including a postorder of the elimination tree,
+ * so the columns of every subtree are contiguous and children precede parents.
+ * A supernode is a run of columns f..l−1 with parent[j] = j+1 and |L(:,j)| = |L(:,j+1)| + 1,
+ * i.e. identical structure below the diagonal block (fundamental supernodes in the sense of
+ * Liu, Ng & Peyton, SIAM J. Matrix Anal. Appl. 14(1), 1993; Davis 2006, §4.6 and ch. 9 remarks).
+ * Row structure: Struct(s) = {f..l−1} ∪ rows ≥ l of A(:, f..l−1) ∪ Struct(children) ∩ [l, n)
+ * (Davis 2006, §4.1: the pattern of L(:,j) is A's column plus the children's patterns).
+ *
+ * Storage layout: supernode s owns a dense column-major block of nrows × ncols doubles at
+ * valPtr[s] (leading dimension nrows); local row t is global row rows[rowPtr[s] + t]; the first
+ * ncols local rows are the supernode's own columns; only the lower part of the diagonal block
+ * is used.
+ */
+export interface SupernodalStructure {
+  n: number;
+  nsuper: number;
+  /** First column of each supernode, length nsuper + 1 (superStart[nsuper] = n). */
+  superStart: Int32Array;
+  /** colToSuper[j] = supernode holding column j. */
+  colToSuper: Int32Array;
+  /** Offsets into rows, length nsuper + 1. */
+  rowPtr: Int32Array;
+  /** Global (permuted) row indices of each supernode, ascending. */
+  rows: Int32Array;
+  /** Offsets of each supernode's dense block in the value storage, length nsuper + 1. */
+  valPtr: Int32Array;
+  /** Largest nrows and ncols over the supernodes (workspace sizes). */
+  maxRows: number;
+  maxCols: number;
+  /** nnz(L) including the diagonal (counting the lower trapezoid of each block). */
+  factorNonzeros: number;
+}
+
+export function supernodalStructure(
+  n: number, upPtr: Int32Array, upIdx: Int32Array, parent: Int32Array, colCount: Int32Array,
+): SupernodalStructure {
+  // ---- partition ----
+  const starts: number[] = [];
+  for (let j = 0; j < n; j++) {
+    const joins = j > 0 && parent[j - 1] === j && colCount[j - 1] === colCount[j] + 1;
+    if (!joins) starts.push(j);
+  }
+  const nsuper = starts.length;
+  starts.push(n);
+  const superStart = Int32Array.from(starts);
+  const colToSuper = new Int32Array(n);
+  for (let s = 0; s < nsuper; s++) for (let j = superStart[s]; j < superStart[s + 1]; j++) colToSuper[j] = s;
+  // ---- lower-triangle rows of C by column (transpose of the upper part) ----
+  const lowPtr = new Int32Array(n + 1);
+  for (let q = 0; q < upPtr[n]; q++) lowPtr[upIdx[q] + 1]++;
+  for (let j = 0; j < n; j++) lowPtr[j + 1] += lowPtr[j];
+  const fill = lowPtr.slice(0, n);
+  const lowIdx = new Int32Array(upPtr[n]);
+  for (let k = 0; k < n; k++) for (let q = upPtr[k]; q < upPtr[k + 1]; q++) lowIdx[fill[upIdx[q]]++] = k;
+  // ---- supernode tree and children lists ----
+  const childHead = new Int32Array(nsuper).fill(-1);
+  const childNext = new Int32Array(nsuper).fill(-1);
+  for (let s = nsuper - 1; s >= 0; s--) {
+    const p = parent[superStart[s + 1] - 1];
+    if (p === -1) continue;
+    const ps = colToSuper[p];
+    childNext[s] = childHead[ps];
+    childHead[ps] = s;
+  }
+  // ---- row structure ----
+  const rowPtr = new Int32Array(nsuper + 1);
+  for (let s = 0; s < nsuper; s++) rowPtr[s + 1] = rowPtr[s] + colCount[superStart[s]] + 1;
+  const rows = new Int32Array(rowPtr[nsuper]);
+  const mark = new Int32Array(n).fill(-1);
+  const buf = new Int32Array(n);
+  for (let s = 0; s < nsuper; s++) {
+    const f = superStart[s], l = superStart[s + 1];
+    let len = 0;
+    for (let j = f; j < l; j++) { mark[j] = s; buf[len++] = j; }
+    for (let j = f; j < l; j++) {
+      for (let q = lowPtr[j]; q < lowPtr[j + 1]; q++) {
+        const i = lowIdx[q];
+        if (mark[i] !== s) { mark[i] = s; buf[len++] = i; }
+      }
+    }
+    for (let c = childHead[s]; c !== -1; c = childNext[c]) {
+      for (let q = rowPtr[c]; q < rowPtr[c + 1]; q++) {
+        const i = rows[q];
+        if (i >= f && mark[i] !== s) { mark[i] = s; buf[len++] = i; }
+      }
+    }
+    if (len !== rowPtr[s + 1] - rowPtr[s]) {
+      throw new Error(`supernodal analysis: supernode ${s} has ${len} rows, column counts say ${rowPtr[s + 1] - rowPtr[s]}`);
+    }
+    const seg = rows.subarray(rowPtr[s], rowPtr[s + 1]);
+    seg.set(buf.subarray(0, len));
+    seg.sort();
+  }
+  // ---- storage ----
+  const valPtr = new Int32Array(nsuper + 1);
+  let maxRows = 0, maxCols = 0, lnz = 0;
+  for (let s = 0; s < nsuper; s++) {
+    const nr = rowPtr[s + 1] - rowPtr[s], nc = superStart[s + 1] - superStart[s];
+    if (nr > maxRows) maxRows = nr;
+    if (nc > maxCols) maxCols = nc;
+    valPtr[s + 1] = valPtr[s] + nr * nc;
+    lnz += nr * nc - (nc * (nc - 1)) / 2;
+  }
+  return { n, nsuper, superStart, colToSuper, rowPtr, rows, valPtr, maxRows, maxCols, factorNonzeros: lnz };
+}
+
+/**
+ * Scatter map: position in the supernodal value storage of each original lower entry q of A,
+ * given pinv (old → new). Entry (i, j) goes to row max(pinv i, pinv j), column min(...).
+ */
+export function supernodalScatterMap(
+  st: SupernodalStructure, colPtr: Int32Array, rowIdx: Int32Array, pinv: Int32Array,
+): Int32Array {
+  const { n, nsuper, superStart, rowPtr, rows, valPtr } = st;
+  const nz = colPtr[n];
+  // Bucket the entries by their permuted column.
+  const bPtr = new Int32Array(n + 1);
+  const colOf = new Int32Array(nz), rowOf = new Int32Array(nz);
+  for (let j = 0; j < n; j++) {
+    for (let q = colPtr[j]; q < colPtr[j + 1]; q++) {
+      const a = pinv[rowIdx[q]], b = pinv[j];
+      colOf[q] = a < b ? a : b; rowOf[q] = a < b ? b : a;
+      bPtr[colOf[q] + 1]++;
+    }
+  }
+  for (let j = 0; j < n; j++) bPtr[j + 1] += bPtr[j];
+  const next = bPtr.slice(0, n);
+  const bucket = new Int32Array(nz);
+  for (let q = 0; q < nz; q++) bucket[next[colOf[q]]++] = q;
+  const rel = new Int32Array(n);
+  const map = new Int32Array(nz);
+  for (let s = 0; s < nsuper; s++) {
+    const f = superStart[s], nr = rowPtr[s + 1] - rowPtr[s];
+    for (let t = 0; t < nr; t++) rel[rows[rowPtr[s] + t]] = t;
+    for (let c = f; c < superStart[s + 1]; c++) {
+      for (let b = bPtr[c]; b < bPtr[c + 1]; b++) {
+        const q = bucket[b];
+        map[q] = valPtr[s] + (c - f) * nr + rel[rowOf[q]];
+      }
+    }
+  }
+  return map;
+}
