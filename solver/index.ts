@@ -24,3 +24,5 @@ export { solveProject } from './analysis/solve-project.ts';
 export { DEFAULT_NEWTON_OPTIONS } from './analysis/newton.ts';
 export { memberSag, describeDof } from './results/extract.ts';
 export { SparseLDL, writeMatrixMarketSymmetric, writeMatrixMarketDenseVector } from './linalg/index.ts';
+export * from './tuning/index.ts';
+export * from './installation/index.ts';

@@ -3,7 +3,7 @@
  * (3 × nodeCount, N) or per element.
  *
  * The analysis applies them at load factor λ ∈ [0, 1]:
- *   f_ext(x, λ) = λ (nodal + gravity from (mass + extraMass) · g) + λ · follower(x)
+ *   f_ext(x, λ) = λ (nodal + g · (gravityFactor · mass + extraMass)) + λ · follower(x)
  * and the thermal strain α ΔT is scaled by λ as well.
  */
 export interface CaseLoads {
@@ -13,7 +13,10 @@ export interface CaseLoads {
   selfWeight: boolean;
   /** Scale on gravity loads (combination factor of self-weight); default 1. */
   gravityFactor: number;
-  /** Additional mass per unstressed length per element, kg/m (ice), or null. Scaled by gravityFactor. */
+  /**
+   * Additional mass per unstressed length per element, kg/m (ice), or null. Already factored:
+   * applied with gravity whether or not `selfWeight` is set, not scaled by gravityFactor.
+   */
   extraMassPerLength: Float64Array | null;
   /** Uniform temperature change, K. */
   temperatureChange: number;

@@ -78,3 +78,10 @@ export interface CaseFields {
 export interface SolveReport {
   cases: CaseResult[];
 }
+
+/** Everything `solveProject` returns: the JSON-able report plus raw fields per case. */
+export interface ProjectSolution {
+  report: SolveReport;
+  /** Same order as report.cases (load cases first, then combinations). */
+  fields: CaseFields[];
+}

@@ -1,0 +1,227 @@
+/**
+ * Newton–Raphson with load stepping, line search and automatic step cut-back.
+ *
+ * Homotopy in the load factor λ ∈ [0, 1] from the pretensioned state (positions X, the model's
+ * coordinates) to the full case:
+ *   R(x, λ) = λ F + λ F_f(x) + (1 − λ) f_int(X, 0) − f_int(x, λ ΔT)     at free DOFs,
+ * F the fixed-direction loads (nodal + weight), F_f the follower (wind) load. At λ = 0, x = X is an
+ * exact solution whether or not the initial stresses are in balance at X; at λ = 1 R is the true
+ * equilibrium residual. Convergence: ‖R‖₂ ≤ tolerance · max(‖f_ext‖₂, ‖f_int‖₂) over all DOFs
+ * (the latter includes the support reactions, so a self-balanced prestress sets the scale too).
+ *
+ * Line search: backtracking on ‖R‖₂ (Armijo condition with c = 1e-4, quadratic interpolation
+ * between trials), after limiting the largest nodal step to a fraction of the model size.
+ * Step control: a failed increment is restored and halved; easy increments double the next one.
+ */
+import type { CaseLoads } from '../loads/case-loads.ts';
+import type { AnalysisStatus } from '../results/types.ts';
+import type { SolveControl } from './progress.ts';
+import type { Workspace } from './workspace.ts';
+import { addGravity, assemble } from '../assembly/assemble.ts';
+import { STANDARD_GRAVITY } from '../model/constants.ts';
+
+export interface NewtonOptions {
+  /** Relative residual for convergence (default 1e-10). */
+  tolerance: number;
+  /** Newton iterations allowed per load increment (default 30). */
+  maxIterationsPerStep: number;
+  /** Smallest load increment before giving up (default 1/4096). */
+  minStep: number;
+  /** Largest nodal step per iteration as a fraction of the model size (default 0.1). */
+  maxStepFraction: number;
+  /** Pivot test of the factorisation: |d| ≤ pivotTolerance · |a_jj| is a zero pivot. */
+  pivotTolerance: number;
+}
+
+export const DEFAULT_NEWTON_OPTIONS: NewtonOptions = {
+  tolerance: 1e-10,
+  maxIterationsPerStep: 30,
+  minStep: 1 / 4096,
+  maxStepFraction: 0.1,
+  pivotTolerance: 1e-11,
+};
+
+export interface NewtonOutcome {
+  status: AnalysisStatus;
+  /** Final positions (the last converged state when not converged), m. */
+  x: Float64Array;
+  iterations: number;
+  loadSteps: number;
+  /** Relative residual of the final state. */
+  residual: number;
+  /** Load factor reached (1 when converged). */
+  loadFactor: number;
+  /** For 'singular': the DOF of the failed pivot and DOFs without any stiffness. */
+  singularDofs?: number[];
+  /** Negative pivots of the last tangent (inertia: > 0 means not positive definite). */
+  negativePivots: number;
+}
+
+export interface CaseTag {
+  caseIndex: number;
+  caseCount: number;
+  caseId: string;
+}
+
+type StepResult = 'converged' | 'maxIterations' | 'diverged' | 'singular' | 'cancelled';
+
+/** Solve one case. `start` (optional) warm-starts from positions of a nearby solution. */
+export function solveEquilibrium(
+  ws: Workspace, loads: CaseLoads, options: NewtonOptions, control: SolveControl, tag: CaseTag,
+  start?: Float64Array,
+): NewtonOutcome {
+  const n = ws.fInt.length;
+  const fixedLoad = fixedDirectionLoads(ws, loads);
+
+  const x = new Float64Array(ws.model.coords);
+  const saved = new Float64Array(n);
+  const counters = { iterations: 0, residual: 0, negativePivots: 0, singularDof: -1 };
+
+  if (start) {
+    x.set(start);
+    const r = newtonAtLoad(ws, loads, fixedLoad, x, 1, options, control, tag, counters);
+    if (r === 'converged' || r === 'cancelled') return outcome(r, x, counters, 1, 1);
+    x.set(ws.model.coords);
+  }
+
+  let lambda = 0;
+  let increment = 1;
+  let steps = 0;
+  let lastFailure: StepResult = 'maxIterations';
+  while (lambda < 1) {
+    const target = Math.min(1, lambda + increment);
+    saved.set(x);
+    const before = counters.iterations;
+    const r = newtonAtLoad(ws, loads, fixedLoad, x, target, options, control, tag, counters);
+    if (r === 'cancelled') return outcome('cancelled', x, counters, lambda, steps);
+    if (r === 'converged') {
+      lambda = target;
+      steps++;
+      if (counters.iterations - before <= 5) increment = Math.min(1, 2 * increment);
+      continue;
+    }
+    x.set(saved);
+    if (r === 'singular') {
+      return { ...outcome('singular', x, counters, lambda, steps), singularDofs: singularDofs(ws, counters.singularDof) };
+    }
+    lastFailure = r;
+    increment /= 2;
+    if (increment < options.minStep) {
+      const status: AnalysisStatus = counters.negativePivots > 0 ? 'limitPoint' : lastFailure === 'diverged' ? 'diverged' : 'maxIterations';
+      return outcome(status, x, counters, lambda, steps);
+    }
+  }
+  return outcome('converged', x, counters, 1, steps);
+}
+
+/** Nodal loads plus member weight (fixed direction), N. */
+function fixedDirectionLoads(ws: Workspace, loads: CaseLoads): Float64Array {
+  const f = new Float64Array(loads.nodal);
+  addGravity(ws.model, loads.selfWeight ? loads.gravityFactor : 0, loads.extraMassPerLength, STANDARD_GRAVITY, f);
+  return f;
+}
+
+/**
+ * Evaluate the full case (λ = 1) at positions x: fills ws.fInt, ws.fExt, ws.residual and the element
+ * state; returns the relative residual.
+ */
+export function evaluateState(ws: Workspace, loads: CaseLoads, x: Float64Array): number {
+  const [norm, ref] = evaluateResidual(ws, loads, fixedDirectionLoads(ws, loads), x, 1, false);
+  return ref > 0 ? norm / ref : 0;
+}
+
+function outcome(
+  status: AnalysisStatus, x: Float64Array,
+  c: { iterations: number; residual: number; negativePivots: number }, loadFactor: number, loadSteps: number,
+): NewtonOutcome {
+  return { status, x, iterations: c.iterations, loadSteps, residual: c.residual, loadFactor, negativePivots: c.negativePivots };
+}
+
+/** Residual R(x, λ) into ws.residual (zero at restrained DOFs); returns [‖R‖, reference norm]. */
+function evaluateResidual(
+  ws: Workspace, loads: CaseLoads, fixedLoad: Float64Array, x: Float64Array, lambda: number, tangent: boolean,
+): [number, number] {
+  const { fInt, fExt, residual, fInt0, model } = ws;
+  assemble(model, tangent ? ws.pattern : null, x, lambda * loads.temperatureChange, fInt, ws.elements, tangent ? ws.values : null);
+  for (let d = 0; d < fExt.length; d++) fExt[d] = lambda * fixedLoad[d];
+  if (loads.follower) loads.follower.accumulate(x, lambda, fExt);
+  const fixed = model.fixed;
+  let r2 = 0, e2 = 0, i2 = 0;
+  const w = 1 - lambda;
+  for (let d = 0; d < residual.length; d++) {
+    const fe = fExt[d], fi = fInt[d];
+    e2 += fe * fe;
+    i2 += fi * fi;
+    if (fixed[d]) { residual[d] = 0; continue; }
+    const r = fe + w * fInt0[d] - fi;
+    residual[d] = r;
+    r2 += r * r;
+  }
+  return [Math.sqrt(r2), Math.sqrt(Math.max(e2, i2))];
+}
+
+function newtonAtLoad(
+  ws: Workspace, loads: CaseLoads, fixedLoad: Float64Array, x: Float64Array, lambda: number,
+  options: NewtonOptions, control: SolveControl, tag: CaseTag,
+  counters: { iterations: number; residual: number; negativePivots: number; singularDof: number },
+): StepResult {
+  const { step, trial, residual, ldl, values } = ws;
+  const maxNodalStep = options.maxStepFraction * ws.size;
+  let [norm, ref] = evaluateResidual(ws, loads, fixedLoad, x, lambda, true);
+  let previous = Infinity;
+  for (let it = 0; it < options.maxIterationsPerStep; it++) {
+    const rel = ref > 0 ? norm / ref : 0;
+    counters.residual = rel;
+    if (!Number.isFinite(norm)) return 'diverged';
+    if (rel <= options.tolerance || norm === 0) return 'converged';
+    // Round-off floor: accept a stagnating residual that already meets the published bound 1e-9.
+    if (rel <= 1e-9 && norm >= 0.5 * previous) return 'converged';
+    if (control.isCancelled?.()) return 'cancelled';
+    previous = norm;
+
+    const pivot = ldl.factor(values, options.pivotTolerance);
+    counters.iterations++;
+    if (pivot >= 0) { counters.singularDof = pivot; return 'singular'; }
+    counters.negativePivots = ldl.negativePivots;
+    ldl.solve(residual, step);
+
+    let scale = 1;
+    for (let i = 0; i < step.length; i += 3) {
+      const s = Math.hypot(step[i], step[i + 1], step[i + 2]);
+      if (s * scale > maxNodalStep) scale = maxNodalStep / s;
+    }
+    // Backtracking line search on ‖R‖.
+    let s = scale;
+    let accepted = false;
+    let best = s, bestNorm = Infinity;
+    for (let ls = 0; ls < 8; ls++) {
+      for (let d = 0; d < x.length; d++) trial[d] = x[d] + s * step[d];
+      const [tn] = evaluateResidual(ws, loads, fixedLoad, trial, lambda, false);
+      if (Number.isFinite(tn) && tn < bestNorm) { bestNorm = tn; best = s; }
+      if (Number.isFinite(tn) && tn <= (1 - 1e-4 * s) * norm) { accepted = true; break; }
+      // Quadratic model of φ(s) = ‖R(s)‖² with φ'(0) = −2‖R‖² (exact Newton direction).
+      const phi0 = norm * norm, phi = Number.isFinite(tn) ? tn * tn : Infinity;
+      const quad = Number.isFinite(phi) ? (phi0 * s * s) / (phi - phi0 + 2 * phi0 * s) : 0.1 * s;
+      s = Math.min(0.5 * s, Math.max(0.1 * s, quad));
+    }
+    if (!accepted && !(bestNorm < 10 * norm)) return 'diverged';
+    for (let d = 0; d < x.length; d++) x[d] += best * step[d];
+    [norm, ref] = evaluateResidual(ws, loads, fixedLoad, x, lambda, true);
+    control.onProgress?.({ ...tag, iteration: counters.iterations, loadFactor: lambda, residual: ref > 0 ? norm / ref : 0 });
+  }
+  counters.residual = ref > 0 ? norm / ref : 0;
+  return counters.residual <= options.tolerance ? 'converged' : 'maxIterations';
+}
+
+/** The failed pivot's DOF plus every free DOF whose tangent diagonal is (numerically) zero. */
+function singularDofs(ws: Workspace, pivotDof: number): number[] {
+  const { values, pattern, model } = ws;
+  let maxDiag = 0;
+  for (let d = 0; d < pattern.n; d++) if (!model.fixed[d]) maxDiag = Math.max(maxDiag, Math.abs(values[pattern.diagonal[d]]));
+  const dofs = new Set<number>();
+  if (pivotDof >= 0) dofs.add(pivotDof);
+  for (let d = 0; d < pattern.n; d++) {
+    if (!model.fixed[d] && Math.abs(values[pattern.diagonal[d]]) <= 1e-12 * maxDiag) dofs.add(d);
+  }
+  return [...dofs].sort((a, b) => a - b);
+}

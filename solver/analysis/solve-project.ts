@@ -1,0 +1,35 @@
+/**
+ * Solve every load case and then every combination of a project, each from the pretensioned
+ * state (the modelled geometry with its initial stresses), on one shared workspace.
+ */
+import type { ProjectFile } from '../project/types.ts';
+import type { ProjectSolution } from '../results/types.ts';
+import type { SolveControl } from './progress.ts';
+import { buildModel } from '../model/build-model.ts';
+import { resolveCaseLoads, resolveCombinationLoads } from '../loads/resolve-case-loads.ts';
+import { createWorkspace } from './workspace.ts';
+import { solveCase } from './solve-case.ts';
+
+export interface SolveProjectOptions {
+  /** Only these case / combination ids (default: all). */
+  only?: string[];
+}
+
+export function solveProject(project: ProjectFile, control: SolveControl = {}, options: SolveProjectOptions = {}): ProjectSolution {
+  const model = buildModel(project);
+  const ws = createWorkspace(model);
+  const wanted = (id: string) => !options.only || options.only.includes(id);
+  const jobs = [
+    ...project.loadCases.filter((c) => wanted(c.id)).map((c) => ({ id: c.id, loads: () => resolveCaseLoads(model, project, c) })),
+    ...(project.combinations ?? []).filter((c) => wanted(c.id)).map((c) => ({ id: c.id, loads: () => resolveCombinationLoads(model, project, c) })),
+  ];
+  const solution: ProjectSolution = { report: { cases: [] }, fields: [] };
+  jobs.forEach((job, caseIndex) => {
+    const { result, fields } = solveCase(ws, job.id, job.loads(), {
+      control, tag: { caseIndex, caseCount: jobs.length, caseId: job.id },
+    });
+    solution.report.cases.push(result);
+    solution.fields.push(fields);
+  });
+  return solution;
+}

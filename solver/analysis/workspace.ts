@@ -1,0 +1,51 @@
+/**
+ * Per-model buffers for the Newton solver: built once per topology (pattern + symbolic
+ * factorisation) and reused by every case and iteration.
+ */
+import type { AnalysisModel } from '../model/analysis-model.ts';
+import { buildBlockPattern, type BlockPattern } from '../assembly/block-pattern.ts';
+import { assemble, type ElementState } from '../assembly/assemble.ts';
+import { SparseLDL } from '../linalg/index.ts';
+
+export interface Workspace {
+  model: AnalysisModel;
+  pattern: BlockPattern;
+  ldl: SparseLDL;
+  values: Float64Array;
+  /** Internal force at the modelled state, ΔT = 0 (the homotopy's λ = 0 balance), N. */
+  fInt0: Float64Array;
+  fInt: Float64Array;
+  fExt: Float64Array;
+  residual: Float64Array;
+  step: Float64Array;
+  trial: Float64Array;
+  elements: ElementState;
+  /** Characteristic size of the model (bounding-box diagonal), m. */
+  size: number;
+}
+
+export function createWorkspace(model: AnalysisModel): Workspace {
+  const pattern = buildBlockPattern(model.nodeCount, model.elemNodes);
+  const ldl = SparseLDL.analyse(pattern, { blockSize: 3 });
+  const n = 3 * model.nodeCount;
+  const elements: ElementState = {
+    tension: new Float64Array(model.elementCount),
+    slack: new Uint8Array(model.elementCount),
+  };
+  const fInt0 = new Float64Array(n);
+  assemble(model, null, model.coords, 0, fInt0, elements, null);
+  return {
+    model, pattern, ldl, values: new Float64Array(pattern.rowIdx.length), fInt0,
+    fInt: new Float64Array(n), fExt: new Float64Array(n), residual: new Float64Array(n),
+    step: new Float64Array(n), trial: new Float64Array(n), elements, size: modelSize(model.coords),
+  };
+}
+
+function modelSize(x: Float64Array): number {
+  const lo = [Infinity, Infinity, Infinity], hi = [-Infinity, -Infinity, -Infinity];
+  for (let i = 0; i < x.length; i += 3) {
+    for (let q = 0; q < 3; q++) { lo[q] = Math.min(lo[q], x[i + q]); hi[q] = Math.max(hi[q], x[i + q]); }
+  }
+  const d = Math.hypot(hi[0] - lo[0], hi[1] - lo[1], hi[2] - lo[2]);
+  return d > 0 ? d : 1;
+}

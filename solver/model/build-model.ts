@@ -1,0 +1,133 @@
+/**
+ * Project → AnalysisModel: numbering, member splitting, element properties and start shapes.
+ * Assumes a project that passed validation (main/common/project); throws with a plain message on
+ * the few inconsistencies it meets anyway.
+ */
+import type { MemberSpec, ProjectFile, SectionSpec } from '../project/types.ts';
+import type { AnalysisModel, MemberTopology } from './analysis-model.ts';
+import { sagStartShape } from './start-shape.ts';
+import { STANDARD_GRAVITY } from './constants.ts';
+
+export function buildModel(project: ProjectFile): AnalysisModel {
+  const nodeIndex = new Map<string, number>();
+  project.nodes.forEach((n, i) => nodeIndex.set(n.id, i));
+  const sectionIndex = new Map<string, number>();
+  project.sections.forEach((s, i) => sectionIndex.set(s.id, i));
+
+  const userNodeCount = project.nodes.length;
+  let nodeCount = userNodeCount;
+  let elementCount = 0;
+  for (const m of project.members) {
+    const n = segmentsOf(m);
+    elementCount += n;
+    nodeCount += n - 1;
+  }
+
+  const coords = new Float64Array(3 * nodeCount);
+  const fixed = new Uint8Array(3 * nodeCount);
+  project.nodes.forEach((node, i) => {
+    coords.set(node.at, 3 * i);
+    for (const letter of node.fixed ?? '') fixed[3 * i + 'xyz'.indexOf(letter)] = 1;
+  });
+
+  const elemNodes = new Int32Array(2 * elementCount);
+  const elemRefLength = new Float64Array(elementCount);
+  const elemS0 = new Float64Array(elementCount);
+  const elemE = new Float64Array(elementCount);
+  const elemArea = new Float64Array(elementCount);
+  const elemAlpha = new Float64Array(elementCount);
+  const elemTensionOnly = new Uint8Array(elementCount);
+  const elemUnstressedLength = new Float64Array(elementCount);
+  const elemMassPerLength = new Float64Array(elementCount);
+  const elemDiameter = new Float64Array(elementCount);
+  const elemMember = new Int32Array(elementCount);
+  const members: MemberTopology[] = [];
+
+  let nextNode = userNodeCount;
+  let e = 0;
+  project.members.forEach((m, memberIndex) => {
+    const a = lookup(nodeIndex, m.from, m, 'node');
+    const b = lookup(nodeIndex, m.to, m, 'node');
+    const si = lookup(sectionIndex, m.section, m, 'section');
+    const section = project.sections[si];
+    const n = segmentsOf(m);
+    const xa = coords.subarray(3 * a, 3 * a + 3);
+    const xb = coords.subarray(3 * b, 3 * b + 3);
+    const chord = Math.hypot(xb[0] - xa[0], xb[1] - xa[1], xb[2] - xa[2]);
+    if (!(chord > 0)) throw new Error(`members[${memberIndex}] "${m.id}": from and to are at the same place`);
+
+    const { refLength, s0 } = elementReference(m, section, chord, n);
+    const chain = new Int32Array(n + 1);
+    chain[0] = a;
+    chain[n] = b;
+    for (let k = 1; k < n; k++) chain[k] = nextNode++;
+    placeInteriorNodes(coords, chain, xa, xb, m, section, refLength * n, s0);
+
+    const unstressed = refLength * Math.sqrt(Math.max(0, 1 - (2 * s0) / section.E));
+    for (let k = 0; k < n; k++, e++) {
+      elemNodes[2 * e] = chain[k];
+      elemNodes[2 * e + 1] = chain[k + 1];
+      elemRefLength[e] = refLength;
+      elemS0[e] = s0;
+      elemE[e] = section.E;
+      elemArea[e] = section.area;
+      elemAlpha[e] = section.thermalExpansion ?? 0;
+      elemTensionOnly[e] = m.kind === 'cable' ? 1 : 0;
+      elemUnstressedLength[e] = unstressed;
+      elemMassPerLength[e] = section.massPerLength ?? 0;
+      elemDiameter[e] = section.diameter ?? 0;
+      elemMember[e] = memberIndex;
+    }
+    members.push({
+      id: m.id, index: memberIndex, kind: m.kind, sectionIndex: si,
+      firstElement: e - n, elementCount: n, nodeChain: chain,
+    });
+  });
+
+  return {
+    nodeCount, userNodeCount, nodeIds: project.nodes.map((n) => n.id), coords, fixed,
+    elementCount, elemNodes, elemRefLength, elemS0, elemE, elemArea, elemAlpha, elemTensionOnly,
+    elemUnstressedLength, elemMassPerLength, elemDiameter, elemMember, members,
+  };
+}
+
+function segmentsOf(m: MemberSpec): number {
+  return Math.max(1, Math.floor(m.segments ?? 1));
+}
+
+/**
+ * Reference length Lr (m) and initial stress S0 (Pa) of each of the member's n equal elements:
+ * pretension P at the modelled chord → Lr = chord/n, S0 = P/A; unstressedLength L0 → Lr = L0/n,
+ * S0 = 0; neither → stress-free as modelled.
+ */
+function elementReference(m: MemberSpec, section: SectionSpec, chord: number, n: number) {
+  if (m.pretension !== undefined) return { refLength: chord / n, s0: m.pretension / section.area };
+  if (m.unstressedLength !== undefined) return { refLength: m.unstressedLength / n, s0: 0 };
+  return { refLength: chord / n, s0: 0 };
+}
+
+function placeInteriorNodes(
+  coords: Float64Array, chain: Int32Array, xa: Float64Array, xb: Float64Array,
+  m: MemberSpec, section: SectionSpec, unstressedLength: number, s0: number,
+): void {
+  const n = chain.length - 1;
+  if (n < 2) return;
+  if (m.kind === 'cable' && s0 >= 0) {
+    const shape = sagStartShape({
+      a: xa, b: xb, unstressedLength, pretension: s0 * section.area, n,
+      weightPerLength: (section.massPerLength ?? 0) * STANDARD_GRAVITY, EA: section.E * section.area,
+    });
+    for (let k = 1; k < n; k++) coords.set(shape.subarray(3 * (k - 1), 3 * k), 3 * chain[k]);
+    return;
+  }
+  for (let k = 1; k < n; k++) {
+    const t = k / n;
+    for (let q = 0; q < 3; q++) coords[3 * chain[k] + q] = xa[q] + t * (xb[q] - xa[q]);
+  }
+}
+
+function lookup(index: Map<string, number>, id: string, m: MemberSpec, what: string): number {
+  const i = index.get(id);
+  if (i === undefined) throw new Error(`member "${m.id}": ${what} "${id}" does not exist`);
+  return i;
+}
