@@ -28,8 +28,9 @@
  */
 
 import { findBracketedRoot } from './bracketed-root.ts';
+import { STANDARD_GRAVITY } from '../model/constants.ts';
 
-export const STANDARD_GRAVITY = 9.80665;
+export { STANDARD_GRAVITY };
 
 export interface CableVibrationInput {
   /** Chord length, m (> 0). */
