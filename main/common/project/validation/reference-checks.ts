@@ -25,7 +25,7 @@ const WORD: Record<keyof Known, string> = {
   group: 'group',
   generator: 'generator',
   loadCase: 'load case',
-  case: 'case (load case or combination)',
+  case: 'case',
 };
 
 function knownIds(root: unknown): Known {
@@ -49,7 +49,8 @@ export function referenceErrors(root: unknown): string[] {
   const errors: string[] = [];
   const need = (where: string, kind: keyof Known, id: string | undefined, prefix = ''): void => {
     if (id !== undefined && !known[kind].has(id)) {
-      errors.push(`${where}: ${prefix}${WORD[kind]} ${JSON.stringify(id)} does not exist`);
+      const why = kind === 'case' ? ' (no load case or combination has this id)' : '';
+      errors.push(`${where}: ${prefix}${WORD[kind]} ${JSON.stringify(id)} does not exist${why}`);
     }
   };
   const needAll = (where: string, kind: keyof Known, owner: Rec, key: string, prefix = ''): void => {
