@@ -9,6 +9,9 @@
  *   with tsx as loader) or `analysis-worker.js` beside the bundle (dist/main/electron/).
  */
 import { randomBytes } from 'node:crypto';
+import { createRequire } from 'node:module';
+import path from 'node:path';
+import { pathToFileURL } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { CaseFields, ProjectFile } from '../../solver/index.ts';
 import type { AnalysisDone, AnalysisProgress } from '../common/host-contract.ts';
@@ -20,7 +23,7 @@ export interface AnalysisRunnerOptions {
   onDone: (d: AnalysisDone, fields?: CaseFields[]) => void;
   /** Worker script; default: analysis-worker.(ts|js) beside this module. */
   workerUrl?: URL;
-  /** Node options for the worker; default `--import tsx` for a .ts worker, none for .js. */
+  /** Node options for the worker (default none). */
   execArgv?: string[];
   cancelGraceMs?: number;
   progressIntervalMs?: number;
@@ -39,6 +42,27 @@ export function defaultWorkerUrl(moduleUrl: string = import.meta.url): URL {
   return new URL(`./analysis-worker${ext}`, moduleUrl);
 }
 
+/** File URL of tsx's ESM register API (the package's `./esm/api` import export). */
+function tsxEsmApiUrl(): string {
+  const require = createRequire(import.meta.url);
+  const pkgFile = require.resolve('tsx/package.json');
+  const pkg = require(pkgFile) as { exports: Record<string, { import: { default: string } }> };
+  return pathToFileURL(path.join(path.dirname(pkgFile), pkg.exports['./esm/api'].import.default)).href;
+}
+
+/**
+ * Start a worker. A .ts worker (running from sources) is started through a small eval'd
+ * bootstrap that registers tsx's loader in the worker thread first (Node 20 ignores
+ * `--import` in worker execArgv); a .js worker (the bundle) is started directly.
+ */
+export function spawnWorker(url: URL, workerData: unknown, execArgv: string[]): Worker {
+  if (!url.pathname.endsWith('.ts')) return new Worker(url, { workerData, execArgv });
+  const tsxApi = tsxEsmApiUrl();
+  const code = `(async () => { const { register } = await import(${JSON.stringify(tsxApi)}); register(); await import(${JSON.stringify(url.href)}); })()
+    .catch((e) => { throw e; });`;
+  return new Worker(code, { eval: true, workerData, execArgv });
+}
+
 export function newRunId(): string {
   return randomBytes(8).toString('hex');
 }
@@ -50,7 +74,7 @@ export class AnalysisRunner {
 
   constructor(private readonly options: AnalysisRunnerOptions) {
     this.workerUrl = options.workerUrl ?? defaultWorkerUrl();
-    this.execArgv = options.execArgv ?? (this.workerUrl.pathname.endsWith('.ts') ? ['--import', 'tsx'] : []);
+    this.execArgv = options.execArgv ?? [];
   }
 
   /** Ids of runs not yet finished. */
@@ -67,7 +91,7 @@ export class AnalysisRunner {
       cancelFlag: cancel.buffer,
       progressIntervalMs: this.options.progressIntervalMs ?? 50,
     };
-    const worker = new Worker(this.workerUrl, { workerData: data, execArgv: this.execArgv });
+    const worker = spawnWorker(this.workerUrl, data, this.execArgv);
     const run: ActiveRun = { worker, flag: cancel.view, cancelRequested: false, finished: false };
     this.runs.set(runId, run);
     worker.on('message', (m: WorkerMessage) => this.onMessage(runId, run, m));
