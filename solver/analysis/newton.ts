@@ -9,8 +9,11 @@
  * equilibrium residual. Convergence: ‖R‖₂ ≤ tolerance · max(‖f_ext‖₂, ‖f_int‖₂) over all DOFs
  * (the latter includes the support reactions, so a self-balanced prestress sets the scale too).
  *
- * Line search: backtracking on ‖R‖₂ (Armijo condition with c = 1e-4, quadratic interpolation
- * between trials), after limiting the largest nodal step to a fraction of the model size.
+ * Line search: on the directional derivative g(s) = Δu · R(x + s Δu) (for a conservative load,
+ * the slope of the total potential energy along the step; Crisfield, Non-linear Finite Element
+ * Analysis of Solids and Structures, vol. 1 (1991), §9.3), bracketed by the Illinois variant of
+ * regula falsi, after limiting the largest nodal step to a fraction of the model size; with a
+ * backtracking fall-back on ‖R‖ when g gives no bracket.
  * Step control: a failed increment is restored and halved; easy increments double the next one.
  */
 import type { CaseLoads } from '../loads/case-loads.ts';
@@ -190,27 +193,70 @@ function newtonAtLoad(
       const s = Math.hypot(step[i], step[i + 1], step[i + 2]);
       if (s * scale > maxNodalStep) scale = maxNodalStep / s;
     }
-    // Backtracking line search on ‖R‖.
-    let s = scale;
-    let accepted = false;
-    let best = s, bestNorm = Infinity;
-    for (let ls = 0; ls < 8; ls++) {
-      for (let d = 0; d < x.length; d++) trial[d] = x[d] + s * step[d];
-      const [tn] = evaluateResidual(ws, loads, fixedLoad, trial, lambda, false);
-      if (Number.isFinite(tn) && tn < bestNorm) { bestNorm = tn; best = s; }
-      if (Number.isFinite(tn) && tn <= (1 - 1e-4 * s) * norm) { accepted = true; break; }
-      // Quadratic model of φ(s) = ‖R(s)‖² with φ'(0) = −2‖R‖² (exact Newton direction).
-      const phi0 = norm * norm, phi = Number.isFinite(tn) ? tn * tn : Infinity;
-      const quad = Number.isFinite(phi) ? (phi0 * s * s) / (phi - phi0 + 2 * phi0 * s) : 0.1 * s;
-      s = Math.min(0.5 * s, Math.max(0.1 * s, quad));
-    }
-    if (!accepted && !(bestNorm < 10 * norm)) return 'diverged';
+    const best = lineSearch(ws, loads, fixedLoad, x, lambda, scale, norm);
+    if (best === 0) return 'diverged';
     for (let d = 0; d < x.length; d++) x[d] += best * step[d];
     [norm, ref] = evaluateResidual(ws, loads, fixedLoad, x, lambda, true);
     control.onProgress?.({ ...tag, iteration: counters.iterations, loadFactor: lambda, residual: ref > 0 ? norm / ref : 0 });
   }
   counters.residual = ref > 0 ? norm / ref : 0;
   return counters.residual <= options.tolerance ? 'converged' : 'maxIterations';
+}
+
+const LINE_SEARCH_TOLERANCE = 0.5;
+const LINE_SEARCH_TRIALS = 8;
+
+/**
+ * Step length s ∈ (0, sMax] along ws.step from x; 0 when no finite, non-growing step is found.
+ * Leaves ws.trial at the last trial point.
+ */
+function lineSearch(
+  ws: Workspace, loads: CaseLoads, fixedLoad: Float64Array, x: Float64Array, lambda: number,
+  sMax: number, norm0: number,
+): number {
+  const { step, trial, residual } = ws;
+  const slope = (s: number): [number, number] => {
+    for (let d = 0; d < x.length; d++) trial[d] = x[d] + s * step[d];
+    const [tn] = evaluateResidual(ws, loads, fixedLoad, trial, lambda, false);
+    let g = 0;
+    for (let d = 0; d < step.length; d++) g += step[d] * residual[d];
+    return [g, tn];
+  };
+  // g(0) = Δu · R(x): ws.residual still holds R(x) here.
+  let g0 = 0;
+  for (let d = 0; d < step.length; d++) g0 += step[d] * residual[d];
+  let sHi = sMax;
+  let [gHi, nHi] = slope(sHi);
+  // Non-finite or wildly growing residual: halve until the trial point is sane.
+  for (let k = 0; k < 30 && !(Number.isFinite(nHi) && nHi < 1e6 * (norm0 + 1e-300)); k++) {
+    sHi *= 0.5;
+    [gHi, nHi] = slope(sHi);
+  }
+  if (!Number.isFinite(nHi)) return 0;
+  if (!(g0 > 0) || gHi >= 0 || Math.abs(gHi) <= LINE_SEARCH_TOLERANCE * Math.abs(g0)) {
+    return nHi < 10 * norm0 || gHi >= 0 ? sHi : backtrack(slope, sHi, norm0);
+  }
+  // Bracket [0, sHi] with g(0) > 0 > g(sHi): Illinois regula falsi on g.
+  let sLo = 0, gLo = g0, best = sHi, side = 0;
+  for (let k = 0; k < LINE_SEARCH_TRIALS; k++) {
+    const s = sHi - (gHi * (sHi - sLo)) / (gHi - gLo);
+    const [g] = slope(s);
+    best = s;
+    if (Math.abs(g) <= LINE_SEARCH_TOLERANCE * g0) break;
+    if (g < 0) { sHi = s; gHi = g; if (side === -1) gLo *= 0.5; side = -1; }
+    else { sLo = s; gLo = g; if (side === 1) gHi *= 0.5; side = 1; }
+  }
+  return best;
+}
+
+/** Halve s until ‖R‖ does not grow tenfold; 0 when none does. */
+function backtrack(slope: (s: number) => [number, number], s: number, norm0: number): number {
+  for (let k = 0; k < LINE_SEARCH_TRIALS; k++) {
+    s *= 0.5;
+    const [, n] = slope(s);
+    if (Number.isFinite(n) && n < 10 * norm0) return s;
+  }
+  return 0;
 }
 
 /** The failed pivot's DOF plus every free DOF whose tangent diagonal is (numerically) zero. */
