@@ -1,5 +1,6 @@
 /** Every `stayset` command, in the order the help lists them. Append new commands here. */
 import type { CommandRegistry } from '../command.ts';
 import { solveCommand } from './solve.ts';
+import { checkCommand } from './check.ts';
 
-export const COMMANDS: CommandRegistry = [solveCommand];
+export const COMMANDS: CommandRegistry = [solveCommand, checkCommand];

@@ -3,7 +3,7 @@ import type { CaseResult, MemberResult, NodeResult, ReactionResult, Vec3 } from 
 /** A hand-written case result (no solver) for testing post-processing arithmetic. */
 export function caseResult(
   id: string,
-  members: Partial<MemberResult>[] & { id: string }[],
+  members: (Partial<MemberResult> & { id: string })[],
   nodes: { id: string; at: Vec3; u: Vec3 }[] = [],
   reactions: ReactionResult[] = [],
   converged = true,
