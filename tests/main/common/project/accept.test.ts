@@ -27,6 +27,7 @@ describe('valid project files', () => {
   });
 
   it('accepts wind, ice, generators and every tuning target kind', () => {
+    // eslint-disable-next-line @typescript-eslint/no-explicit-any -- a document edited freely
     const doc = fixtureJson('kestrel-moor-mast.stayset.json') as Record<string, any>;
     doc.loadCases.push({
       id: 'storm',
