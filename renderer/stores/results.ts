@@ -58,9 +58,10 @@ export const useResultsStore = defineStore('results', () => {
     return resultRevision.value !== null && resultRevision.value !== projectRevision;
   }
 
-  function started(id: string, projectRevision: number): void {
+  /** The run was requested; its id follows in assignRunId (events may arrive before it). */
+  function started(projectRevision: number): void {
     state.value = 'running';
-    runId.value = id;
+    runId.value = null;
     progress.value = null;
     error.value = null;
     runRevision.value = projectRevision;
@@ -86,6 +87,10 @@ export const useResultsStore = defineStore('results', () => {
     }
   }
 
+  function assignRunId(id: string): void {
+    if (state.value === 'running') runId.value = id;
+  }
+
   function failedToStart(message: string): void {
     state.value = 'failed';
     runId.value = null;
@@ -109,6 +114,6 @@ export const useResultsStore = defineStore('results', () => {
 
   return {
     state, runId, progress, report, fields, error, caseId, resultRevision, caseIds, currentCase, currentFields,
-    currentIndex, progressText, isStale, started, onProgress, onFinished, failedToStart, selectCase, clear,
+    currentIndex, progressText, isStale, started, assignRunId, onProgress, onFinished, failedToStart, selectCase, clear,
   };
 });

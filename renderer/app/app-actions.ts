@@ -1,0 +1,278 @@
+/**
+ * What the buttons, shortcuts and OS menu commands do: open, save, save as, undo/redo, run and
+ * cancel the analysis, autosave. Talks to the host through renderer/host/client.ts and to the
+ * stores; no three.js here.
+ */
+import { ref, shallowRef } from 'vue';
+import type { HostResult, OpenedProject, RecentEntry, RecoveryEntry, StaysetHost } from '../../main/common/host-contract.ts';
+import { getHost } from '../host/client.ts';
+import { useProjectStore } from '../stores/project.ts';
+import { useResultsStore } from '../stores/results.ts';
+import { useSelectionStore } from '../stores/selection.ts';
+import { useSettingsStore } from '../stores/settings.ts';
+
+/** Interval of the autosave while there are unsaved changes, ms. */
+export const AUTOSAVE_MS = 10_000;
+
+export type Phase = 'starting' | 'empty' | 'loading' | 'ready' | 'noHost';
+
+/** A one-line notice at the top (save done, save refused, …). */
+export interface Notice {
+  kind: 'info' | 'error';
+  text: string;
+}
+
+export function createAppActions(hostOverride?: StaysetHost) {
+  const projectStore = useProjectStore();
+  const results = useResultsStore();
+  const selection = useSelectionStore();
+  const settings = useSettingsStore();
+  const phase = ref<Phase>('starting');
+  const hostKind = ref<'desktop' | 'web' | '—'>('—');
+  const notice = shallowRef<Notice | null>(null);
+  const openErrors = shallowRef<string[]>([]);
+  const recents = shallowRef<RecentEntry[]>([]);
+  const recovery = shallowRef<RecoveryEntry[]>([]);
+  /** Set when the user must type a path (web Save As / Open). */
+  const pathPrompt = shallowRef<{ purpose: 'open' | 'saveAs'; suggestion: string } | null>(null);
+  let host: StaysetHost | null = hostOverride ?? null;
+  let autosaveTimer: ReturnType<typeof setInterval> | null = null;
+  const unsubscribers: (() => void)[] = [];
+
+  function h(): StaysetHost {
+    if (!host) host = getHost();
+    return host;
+  }
+
+  function say(kind: Notice['kind'], text: string): void {
+    notice.value = { kind, text };
+  }
+
+  function adopt(result: HostResult<OpenedProject> | null): boolean {
+    if (!result) return false;
+    if (!result.ok) {
+      openErrors.value = result.error.split('\n').filter(Boolean);
+      phase.value = projectStore.project ? 'ready' : 'empty';
+      return false;
+    }
+    openErrors.value = [];
+    projectStore.load(result.value);
+    results.clear();
+    selection.clear();
+    const d = result.value.project.display;
+    if (d?.units) settings.setUnits(d.units);
+    if (d?.deformationScale !== undefined) settings.setDeformationScale(d.deformationScale);
+    phase.value = 'ready';
+    if (result.value.migratedFrom) say('info', `Converted from format version ${result.value.migratedFrom}; Save As to keep the original file untouched.`);
+    void syncDirty();
+    return true;
+  }
+
+  async function start(): Promise<void> {
+    try {
+      hostKind.value = await h().kind();
+    } catch (e) {
+      phase.value = 'noHost';
+      say('error', (e as Error).message);
+      return;
+    }
+    unsubscribers.push(
+      h().onDidProgress((p) => results.onProgress(p)),
+      h().onDidFinishAnalysis((d) => {
+        results.onFinished(d);
+        if (d.status === 'failed') say('error', `Analysis failed: ${d.error ?? 'no message'}`);
+      }),
+      h().onDidMenuCommand((c) => void menuCommand(c)),
+      h().onDidRequestOpen((p) => void openPath(p)),
+    );
+    autosaveTimer = setInterval(() => void autosave(), AUTOSAVE_MS);
+    phase.value = 'loading';
+    const [initial, rec, rcv] = await Promise.all([
+      h().openInitial().catch((e: Error) => ({ ok: false as const, error: e.message })),
+      h().recentProjects().catch(() => []),
+      h().listRecovery().catch(() => []),
+    ]);
+    recents.value = rec;
+    recovery.value = rcv;
+    if (!adopt(initial)) phase.value = 'empty';
+  }
+
+  function stop(): void {
+    for (const u of unsubscribers.splice(0)) u();
+    if (autosaveTimer) clearInterval(autosaveTimer);
+  }
+
+  async function openDemo(): Promise<void> {
+    phase.value = 'loading';
+    const r = await h().openInitial();
+    if (!r) {
+      phase.value = projectStore.project ? 'ready' : 'empty';
+      say('error', 'This host was started without a demo or initial project: open a file instead.');
+      return;
+    }
+    adopt(r);
+  }
+
+  async function openPath(path?: string): Promise<void> {
+    if (projectStore.dirty && !window.confirm(`Discard unsaved changes to ${projectStore.name}?`)) return;
+    if (!path && hostKind.value === 'web') {
+      pathPrompt.value = { purpose: 'open', suggestion: '' };
+      return;
+    }
+    const previous = phase.value;
+    phase.value = 'loading';
+    try {
+      const r = await h().open(path);
+      if (!r) phase.value = previous;
+      else adopt(r);
+    } catch (e) {
+      phase.value = projectStore.project ? 'ready' : 'empty';
+      openErrors.value = [(e as Error).message];
+    }
+  }
+
+  async function recover(id: string): Promise<void> {
+    phase.value = 'loading';
+    if (adopt(await h().recover(id))) say('info', 'Recovered unsaved changes from the last session. Save to keep them.');
+  }
+
+  async function syncDirty(): Promise<void> {
+    try {
+      await h().setDirty(projectStore.dirty, projectStore.title || 'Stayset');
+    } catch {
+      /* the title is cosmetic */
+    }
+  }
+
+  async function save(): Promise<boolean> {
+    const p = projectStore.project;
+    if (!p) return false;
+    if (!projectStore.path || projectStore.migratedFrom) return saveAs();
+    const r = await h().save(projectStore.path, p).catch((e: Error) => ({ ok: false as const, error: e.message }));
+    if (!r.ok) {
+      say('error', `Not saved: ${r.error}. Use Save As to write a new file.`);
+      return false;
+    }
+    projectStore.markSaved(r.value.path, undefined, p);
+    await h().discardRecovery(r.value.path).catch(() => undefined);
+    say('info', `Saved ${projectStore.name}`);
+    await syncDirty();
+    return true;
+  }
+
+  async function saveAs(path?: string): Promise<boolean> {
+    const p = projectStore.project;
+    if (!p) return false;
+    if (!path && hostKind.value === 'web') {
+      pathPrompt.value = { purpose: 'saveAs', suggestion: projectStore.name.replace(/\.stayset\.json$/, '') + '-copy.stayset.json' };
+      return false;
+    }
+    const r = await h().saveAs(p, path).catch((e: Error) => ({ ok: false as const, error: e.message }));
+    if (!r) return false;
+    if (!r.ok) {
+      say('error', `Not saved: ${r.error}`);
+      return false;
+    }
+    const oldPath = projectStore.path;
+    projectStore.markSaved(r.value.path, r.value.name, p);
+    await h().discardRecovery(oldPath).catch(() => undefined);
+    say('info', `Saved as ${r.value.name}`);
+    await syncDirty();
+    return true;
+  }
+
+  async function answerPathPrompt(path: string | null): Promise<void> {
+    const prompt = pathPrompt.value;
+    pathPrompt.value = null;
+    if (!prompt || !path) return;
+    if (prompt.purpose === 'open') await openPath(path);
+    else await saveAs(path);
+  }
+
+  async function autosave(): Promise<void> {
+    if (!projectStore.project || !projectStore.dirty) return;
+    await h().autosave(projectStore.path, projectStore.project).catch(() => undefined);
+  }
+
+  async function run(): Promise<void> {
+    const p = projectStore.project;
+    if (!p || results.state === 'running') return;
+    if (projectStore.problems.length) {
+      say('error', 'Fix the problems listed above before running the analysis.');
+      return;
+    }
+    results.started(projectStore.revision);
+    try {
+      const { runId } = await h().runAnalysis(p);
+      results.assignRunId(runId);
+    } catch (e) {
+      results.failedToStart((e as Error).message);
+      say('error', `Analysis did not start: ${(e as Error).message}`);
+    }
+  }
+
+  async function cancel(): Promise<void> {
+    if (results.state === 'running' && results.runId) await h().cancelAnalysis(results.runId).catch(() => undefined);
+  }
+
+  function undo(): void {
+    if (projectStore.undo()) void syncDirty();
+  }
+
+  function redo(): void {
+    if (projectStore.redo()) void syncDirty();
+  }
+
+  const fitRequests = ref(0);
+
+  async function menuCommand(command: string): Promise<void> {
+    switch (command) {
+      case 'save': await save(); break;
+      case 'saveAs': await saveAs(); break;
+      case 'open': await openPath(); break;
+      case 'undo': undo(); break;
+      case 'redo': redo(); break;
+      case 'run': await run(); break;
+      case 'fit': fitRequests.value++; break;
+      case 'print': await print(); break;
+      case 'new': say('info', 'New projects start from a generator or a copy of the demo (Save As).'); break;
+    }
+  }
+
+  async function print(): Promise<void> {
+    const p = projectStore.project;
+    if (!p) return;
+    const r = await h().printSchedule(p).catch((e: Error) => ({ ok: false as const, error: e.message }));
+    if (r && !r.ok) say('error', r.error);
+    else if (r) say('info', `Schedule written to ${r.value.path}`);
+  }
+
+  /** Ctrl/Cmd+S, Shift+Ctrl/Cmd+S, Ctrl/Cmd+Z, Ctrl/Cmd+Y or Shift+Ctrl/Cmd+Z, F5 = run. */
+  function onKeydown(e: KeyboardEvent): void {
+    const mod = e.ctrlKey || e.metaKey;
+    const key = e.key.toLowerCase();
+    const inField = e.target instanceof HTMLInputElement || e.target instanceof HTMLSelectElement;
+    if (mod && key === 's') {
+      e.preventDefault();
+      void (e.shiftKey ? saveAs() : save());
+    } else if (mod && key === 'z' && !inField) {
+      e.preventDefault();
+      if (e.shiftKey) redo();
+      else undo();
+    } else if (mod && key === 'y' && !inField) {
+      e.preventDefault();
+      redo();
+    } else if (e.key === 'F5') {
+      e.preventDefault();
+      void run();
+    }
+  }
+
+  return {
+    phase, hostKind, notice, openErrors, recents, recovery, pathPrompt, fitRequests,
+    start, stop, openDemo, openPath, recover, save, saveAs, answerPathPrompt, autosave, run, cancel, undo, redo,
+    menuCommand, print, onKeydown, syncDirty, say,
+  };
+}
+
+export type AppActions = ReturnType<typeof createAppActions>;

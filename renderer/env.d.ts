@@ -1,0 +1,2 @@
+// Stylesheets are bundled by Vite; they export nothing.
+declare module '*.css';

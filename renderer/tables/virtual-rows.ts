@@ -1,0 +1,16 @@
+/**
+ * Windowing for long tables (20,000 members): only the rows in view (plus a margin) are in the
+ * DOM. Fixed row height, px.
+ */
+export interface RowWindow {
+  first: number;
+  last: number; // exclusive
+  padTop: number;
+  padBottom: number;
+}
+
+export function rowWindow(scrollTop: number, viewHeight: number, rowHeight: number, rowCount: number, margin = 10): RowWindow {
+  const first = Math.max(0, Math.floor(scrollTop / rowHeight) - margin);
+  const last = Math.min(rowCount, Math.ceil((scrollTop + viewHeight) / rowHeight) + margin);
+  return { first, last: Math.max(first, last), padTop: first * rowHeight, padBottom: Math.max(0, (rowCount - last) * rowHeight) };
+}
