@@ -28,6 +28,8 @@ export class SupernodalLDL implements FactorBackend {
   private readonly relBuf: Int32Array;
   private readonly tmp: Float64Array;
   private readonly w: Float64Array;
+  private readonly w2: Float64Array;
+  private readonly tmp2: Float64Array;
   private readonly head: Int32Array;
   private readonly link: Int32Array;
   private readonly pos: Int32Array;
@@ -48,13 +50,15 @@ export class SupernodalLDL implements FactorBackend {
     this.relBuf = new Int32Array(st.maxRows);
     this.tmp = new Float64Array(st.maxRows);
     this.w = new Float64Array(st.maxCols);
+    this.w2 = new Float64Array(st.maxCols);
+    this.tmp2 = new Float64Array(st.maxRows);
     this.head = new Int32Array(st.nsuper);
     this.link = new Int32Array(st.nsuper);
     this.pos = new Int32Array(st.nsuper);
   }
 
   factor(values: Float64Array, tol: number, tiny: number): number {
-    const { st, map, Lx, D, diagPos, aDiag, relMap, relBuf, tmp, w, head, link, pos } = this;
+    const { st, map, Lx, D, diagPos, aDiag, relMap, relBuf, tmp, tmp2, w, w2, head, link, pos } = this;
     const { n, nsuper, superStart, colToSuper, rowPtr, rows, valPtr } = st;
     Lx.fill(0);
     for (let q = 0; q < map.length; q++) Lx[map[q]] += values[q];
@@ -73,17 +77,7 @@ export class SupernodalLDL implements FactorBackend {
         const i1 = pos[d];
         let i2 = i1 + 1;
         while (i2 < nrd && rows[rpd + i2] < l) i2++;
-        const m = nrd - i1;
-        for (let ii = 0; ii < m; ii++) relBuf[ii] = relMap[rows[rpd + i1 + ii]];
-        const ncu = i2 - i1;
-        for (let j = 0; j < ncu; j++) {
-          const row0 = based + i1 + j; // Ld[i1 + j, 0]
-          for (let t = 0; t < ncd; t++) w[t] = Lx[row0 + t * nrd] * D[fd + t];
-          const len = m - j;
-          accumulateColumns(Lx, row0, nrd, w, ncd, tmp, len);
-          const colBase = base + relBuf[j] * nr; // target column = local row index (< nc)
-          for (let ii = 0; ii < len; ii++) Lx[colBase + relBuf[j + ii]] -= tmp[ii];
-        }
+        updateFromDescendant(Lx, D, w, w2, tmp, tmp2, relMap, relBuf, rows, rpd, nrd, based, fd, ncd, i1, i2, base, nr);
         pos[d] = i2;
         if (i2 < nrd) {
           const s2 = colToSuper[rows[rpd + i2]];
@@ -93,21 +87,8 @@ export class SupernodalLDL implements FactorBackend {
         d = dnext;
       }
       // ---- dense panel factorisation ----
-      for (let j = 0; j < nc; j++) {
-        const cj = base + j * nr;
-        for (let t = 0; t < j; t++) {
-          const ct = base + t * nr;
-          const wt = Lx[ct + j] * D[f + t];
-          if (wt === 0) continue;
-          for (let i = j; i < nr; i++) Lx[cj + i] -= Lx[ct + i] * wt;
-        }
-        const dj = Lx[cj + j];
-        if (!(Math.abs(dj) > tol * Math.max(aDiag[f + j], tiny))) return f + j;
-        D[f + j] = dj;
-        Lx[cj + j] = 1;
-        const inv = 1 / dj;
-        for (let i = j + 1; i < nr; i++) Lx[cj + i] *= inv;
-      }
+      const bad = factorPanel(Lx, base, nr, nc, D, f, aDiag, tol, tiny, w, tmp);
+      if (bad >= 0) return bad;
       pos[s] = nc;
       if (nc < nr) {
         const s2 = colToSuper[rows[rp + nc]];
@@ -154,6 +135,74 @@ export class SupernodalLDL implements FactorBackend {
 }
 
 /**
+ * Subtracts descendant d's contribution L_d(R,:) · D_d · L_d(C,:)ᵀ from the target panel, where
+ * C = d's local rows i1..i2−1 (the target's columns) and R = its rows from i1 on. relMap maps a
+ * global row to the target's local row; the product is built one target column at a time.
+ */
+function updateFromDescendant(
+  Lx: Float64Array, D: Float64Array, w: Float64Array, w2: Float64Array, tmp: Float64Array, tmp2: Float64Array,
+  relMap: Int32Array, relBuf: Int32Array,
+  rows: Int32Array, rpd: number, nrd: number, based: number, fd: number, ncd: number, i1: number, i2: number,
+  base: number, nr: number,
+): void {
+  const m = nrd - i1;
+  for (let ii = 0; ii < m; ii++) relBuf[ii] = relMap[rows[rpd + i1 + ii]];
+  const ncu = i2 - i1;
+  let j = 0;
+  // Two target columns at a time: each loaded entry of L_d serves both.
+  for (; j + 2 <= ncu; j += 2) {
+    const row0 = based + i1 + j; // Ld[i1 + j, 0]
+    for (let t = 0; t < ncd; t++) {
+      const dt = D[fd + t], o = row0 + t * nrd;
+      w[t] = Lx[o] * dt;
+      w2[t] = Lx[o + 1] * dt;
+    }
+    const len = m - j;
+    accumulateColumnsTwice(Lx, row0, nrd, w, w2, ncd, tmp, tmp2, len);
+    const colBase = base + relBuf[j] * nr; // target column = local row index (< nc)
+    for (let ii = 0; ii < len; ii++) Lx[colBase + relBuf[j + ii]] -= tmp[ii];
+    const colBase2 = base + relBuf[j + 1] * nr;
+    for (let ii = 1; ii < len; ii++) Lx[colBase2 + relBuf[j + ii]] -= tmp2[ii];
+  }
+  for (; j < ncu; j++) {
+    const row0 = based + i1 + j;
+    for (let t = 0; t < ncd; t++) w[t] = Lx[row0 + t * nrd] * D[fd + t];
+    const len = m - j;
+    accumulateColumns(Lx, row0, nrd, w, ncd, tmp, len);
+    const colBase = base + relBuf[j] * nr;
+    for (let ii = 0; ii < len; ii++) Lx[colBase + relBuf[j + ii]] -= tmp[ii];
+  }
+}
+
+/**
+ * Dense LDLᵀ of a supernode panel (nr × nc, column-major at base, leading dimension nr) whose
+ * updates from other supernodes are already applied. Returns -1, or the global column f + j of
+ * the first pivot with |d_j| <= tol · max(aDiag, tiny).
+ */
+function factorPanel(
+  Lx: Float64Array, base: number, nr: number, nc: number, D: Float64Array, f: number,
+  aDiag: Float64Array, tol: number, tiny: number, w: Float64Array, tmp: Float64Array,
+): number {
+  for (let j = 0; j < nc; j++) {
+    const cj = base + j * nr;
+    if (j > 0) {
+      // column j −= Σ_{t<j} L(:,t) · d_t · l_jt, rows j..nr−1, as one dense matrix–vector product
+      for (let t = 0; t < j; t++) w[t] = Lx[base + t * nr + j] * D[f + t];
+      const len = nr - j;
+      accumulateColumns(Lx, base + j, nr, w, j, tmp, len);
+      for (let i = 0; i < len; i++) Lx[cj + j + i] -= tmp[i];
+    }
+    const dj = Lx[cj + j];
+    if (!(Math.abs(dj) > tol * Math.max(aDiag[f + j], tiny))) return f + j;
+    D[f + j] = dj;
+    Lx[cj + j] = 1;
+    const inv = 1 / dj;
+    for (let i = j + 1; i < nr; i++) Lx[cj + i] *= inv;
+  }
+  return -1;
+}
+
+/**
  * tmp[0..len) = Σ_t w[t] · Lx[off + t·ld + (0..len)] — a dense matrix–vector product over k
  * columns of leading dimension ld, unrolled by four columns.
  */
@@ -185,5 +234,45 @@ function accumulateColumns(
     const w0 = w[t];
     const o0 = off + t * ld;
     for (let i = 0; i < len; i++) tmp[i] += Lx[o0 + i] * w0;
+  }
+}
+
+/**
+ * tmp[i] = Σ_t w[t] · Lx[off + t·ld + i] and tmp2[i] = Σ_t w2[t] · Lx[off + t·ld + i], i < len:
+ * two dense matrix–vector products sharing the loads of the matrix, unrolled by two columns.
+ */
+function accumulateColumnsTwice(
+  Lx: Float64Array, off: number, ld: number, w: Float64Array, w2: Float64Array, k: number,
+  tmp: Float64Array, tmp2: Float64Array, len: number,
+): void {
+  for (let i = 0; i < len; i++) { tmp[i] = 0; tmp2[i] = 0; }
+  let t = 0;
+  for (; t + 4 <= k; t += 4) {
+    const a0 = w[t], a1 = w[t + 1], a2 = w[t + 2], a3 = w[t + 3];
+    const b0 = w2[t], b1 = w2[t + 1], b2 = w2[t + 2], b3 = w2[t + 3];
+    const o0 = off + t * ld, o1 = o0 + ld, o2 = o1 + ld, o3 = o2 + ld;
+    for (let i = 0; i < len; i++) {
+      const x0 = Lx[o0 + i], x1 = Lx[o1 + i], x2 = Lx[o2 + i], x3 = Lx[o3 + i];
+      tmp[i] += x0 * a0 + x1 * a1 + x2 * a2 + x3 * a3;
+      tmp2[i] += x0 * b0 + x1 * b1 + x2 * b2 + x3 * b3;
+    }
+  }
+  for (; t + 2 <= k; t += 2) {
+    const a0 = w[t], a1 = w[t + 1], b0 = w2[t], b1 = w2[t + 1];
+    const o0 = off + t * ld, o1 = o0 + ld;
+    for (let i = 0; i < len; i++) {
+      const x0 = Lx[o0 + i], x1 = Lx[o1 + i];
+      tmp[i] += x0 * a0 + x1 * a1;
+      tmp2[i] += x0 * b0 + x1 * b1;
+    }
+  }
+  if (t < k) {
+    const a0 = w[t], b0 = w2[t];
+    const o0 = off + t * ld;
+    for (let i = 0; i < len; i++) {
+      const x0 = Lx[o0 + i];
+      tmp[i] += x0 * a0;
+      tmp2[i] += x0 * b0;
+    }
   }
 }
