@@ -1,0 +1,142 @@
+/**
+ * Project + solution + checks + installation data (+ tuning) → ScheduleDocument.
+ * Pure: no I/O; the CLI, the desktop print route and tests all build the schedule here.
+ * Results are for review by a qualified engineer; local codes and licensed practice govern.
+ */
+import { envelopeOf, membersOfGroup } from '../../../solver/index.ts';
+import type { CheckReport, InstallationData, ProjectFile, SolveReport, TuningResult } from '../../../solver/index.ts';
+import { SCHEDULE_CAUTION, type PaperSize, type ScheduleDocument, type ScheduleMemberRow, type ScheduleTuning } from './schedule-types.ts';
+import { formatForce, formatLength, formatNumber, unitLabels, type ScheduleUnits } from './schedule-units.ts';
+
+export interface ScheduleSource {
+  project: ProjectFile;
+  report: SolveReport;
+  checks?: CheckReport | null;
+  installation?: InstallationData | null;
+  /** A tuning run to summarise; without it project.tuning.lastRun is used when present. */
+  tuning?: TuningResult | null;
+}
+
+export interface ScheduleOptions {
+  units?: ScheduleUnits;
+  paper?: PaperSize;
+  /** ISO date of issue (YYYY-MM-DD); the caller supplies it (pure builder, no clock). */
+  issueDate: string;
+}
+
+export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): ScheduleDocument {
+  const { project, report } = src;
+  const units = options.units ?? project.display?.units ?? 'SI';
+  if (units !== 'SI' && units !== 'US') throw new Error(`units must be SI or US, got ${JSON.stringify(units)}`);
+  const paper = options.paper ?? 'a4';
+  if (paper !== 'a4' && paper !== 'letter') throw new Error(`paper must be a4 or letter, got ${JSON.stringify(paper)}`);
+  const labels = unitLabels(units);
+  const notes: string[] = [];
+  const caseLabel = new Map<string, string>([
+    ...project.loadCases.map((c) => [c.id, c.label ?? c.id] as const),
+    ...(project.combinations ?? []).map((c) => [c.id, c.label ?? c.id] as const),
+  ]);
+  const cases = report.cases.map((c) => ({ id: c.id, label: caseLabel.get(c.id) ?? c.id, converged: c.converged }));
+  for (const c of report.cases) if (!c.converged) notes.push(`Case '${c.id}' did not converge (${c.status}); its results are left out (shown as —). ${c.message ?? ''}`.trim());
+
+  const groupsOf = new Map<string, string[]>(project.members.map((m) => [m.id, []]));
+  const groupIds = new Set<string>([...(project.groups ?? []).map((g) => g.id), ...project.members.flatMap((m) => m.groups ?? [])]);
+  for (const g of groupIds) for (const id of membersOfGroup(project, g)) groupsOf.get(id)?.push(g);
+
+  const env = envelopeOf(report);
+  const envById = new Map(env.members.map((m) => [m.id, m]));
+  const checkById = new Map((src.checks?.members ?? []).map((m) => [m.id, m]));
+  const instById = new Map((src.installation?.members ?? []).map((m) => [m.id, m]));
+  const caseMembers = report.cases.map((c) => (c.converged ? new Map(c.members.map((m) => [m.id, m])) : null));
+
+  const members: ScheduleMemberRow[] = project.members.map((m) => {
+    const e = envById.get(m.id);
+    const chk = checkById.get(m.id);
+    const inst = instById.get(m.id);
+    return {
+      id: m.id,
+      groups: groupsOf.get(m.id) ?? [],
+      section: m.section,
+      kind: m.kind,
+      cutLength: inst?.cutLength ?? null,
+      installationTension: inst?.installationTension ?? null,
+      frequency: inst?.frequencies?.tautString ?? null,
+      frequencyInPlane: inst?.frequencies?.lowestInPlane ?? null,
+      tensionByCase: caseMembers.map((cm) => cm?.get(m.id)?.tensionMax ?? null),
+      envelopeMax: e?.tensionMax ?? null,
+      envelopeMaxCase: e?.tensionMaxCase ?? '',
+      envelopeMin: e?.tensionMin ?? null,
+      envelopeMinCase: e?.tensionMinCase ?? '',
+      utilisation: chk?.utilisation ?? null,
+      utilisationCase: chk?.utilisationCase ?? '',
+      checkStatus: chk?.status ?? 'unchecked',
+      failedChecks: chk?.failed ?? [],
+    };
+  });
+
+  const reactions = report.cases.filter((c) => c.converged).flatMap((c) => c.reactions.map((r) => ({
+    node: r.node, case: c.id, force: [...r.force] as [number, number, number], magnitude: Math.hypot(...r.force),
+  })));
+  reactions.sort((a, b) => (a.node < b.node ? -1 : a.node > b.node ? 1 : 0));
+
+  let tuning: ScheduleTuning | null = null;
+  if (src.tuning) {
+    const t = src.tuning;
+    tuning = {
+      summary: t.summary,
+      date: options.issueDate,
+      targets: t.targets.map((o) => ({ label: o.label, met: o.met, value: targetValueText(units, o.value, o.limit, o.unit, o.sense) })),
+      variables: t.variables.map((v) => ({
+        group: v.group, by: v.by,
+        value: v.by === 'pretension' ? `${formatForce(units, v.final)} ${labels.force}` : `length factor ${formatNumber(v.final, 5)}`,
+      })),
+      diagnosis: t.diagnosis,
+    };
+  } else if (project.tuning?.lastRun) {
+    tuning = { summary: project.tuning.lastRun.summary, date: project.tuning.lastRun.date, targets: [], variables: [], diagnosis: [] };
+  }
+
+  const inst = src.installation;
+  if (inst) notes.push(...inst.warnings);
+  else notes.push('Installation data (cut lengths, frequencies, temperature table) was not computed.');
+  if (!src.checks) notes.push('Design checks were not run: utilisation and check columns are empty.');
+  else notes.push(...src.checks.warnings);
+  const temperatureTable = inst ? {
+    temperatures: inst.table.map((r) => r.temperature),
+    rows: inst.members.map((m, k) => ({ member: m.id, kind: m.kind, tensions: inst.table.map((r) => (r.converged ? r.tensions[k] : null)) }))
+      .filter((r) => r.kind === 'cable').map(({ member, tensions }) => ({ member, tensions })),
+  } : null;
+
+  const meta = project.meta ?? {};
+  return {
+    title: 'Member tension schedule',
+    caution: SCHEDULE_CAUTION,
+    units,
+    paper,
+    header: {
+      projectName: meta.name ?? '(unnamed project)',
+      site: meta.site ?? '',
+      client: meta.client ?? '',
+      engineer: meta.engineer ?? '',
+      issueDate: options.issueDate,
+      referenceTemperature: inst?.referenceTemperature ?? meta.referenceTemperature ?? NaN,
+      referenceTemperatureAssumed: inst?.referenceTemperatureAssumed ?? meta.referenceTemperature === undefined,
+      referenceCase: inst?.referenceCase ?? '',
+    },
+    cases,
+    members,
+    reactions,
+    tuning,
+    temperatureTable,
+    checksPass: src.checks ? src.checks.pass : null,
+    notes,
+  };
+}
+
+function targetValueText(units: ScheduleUnits, value: number, limit: number, unit: 'm' | 'N' | 'share', sense: 'atMost' | 'equal'): string {
+  const l = unitLabels(units);
+  const op = sense === 'equal' ? 'target' : 'limit';
+  if (unit === 'share') return `${formatNumber(value * 100, 2)} % (${op} ${formatNumber(limit * 100, 2)} %)`;
+  if (unit === 'm') return `${formatLength(units, value)} ${l.length} (${op} ${formatLength(units, limit)} ${l.length})`;
+  return `${formatForce(units, value)} ${l.force} (${op} ${formatForce(units, limit)} ${l.force})`;
+}

@@ -1,0 +1,52 @@
+/**
+ * ScheduleDocument → CSV (RFC 4180 quoting by csv-stringify). One file with several blocks, each
+ * introduced by a one-cell title record and separated by an empty record, so spreadsheets open it
+ * directly: header and caution, members, tension per case, reactions, installation temperatures.
+ * Numbers are plain decimals in the chosen units (named in each column header); "—" is written as
+ * an empty cell.
+ */
+import { stringify } from 'csv-stringify/sync';
+import type { ScheduleDocument } from './schedule-types.ts';
+import { forceIn, lengthIn, temperatureIn, unitLabels } from './schedule-units.ts';
+
+const num = (v: number | null, digits: number): string => (v === null || !Number.isFinite(v) ? '' : v.toFixed(digits));
+
+export function scheduleCsv(doc: ScheduleDocument): string {
+  const u = doc.units;
+  const l = unitLabels(u);
+  const fd = u === 'US' ? 3 : 2;
+  const F = (n: number | null) => num(n === null ? null : forceIn(u, n), fd);
+  const L = (m: number | null) => num(m === null ? null : lengthIn(u, m), 4);
+  const h = doc.header;
+  const records: string[][] = [
+    [doc.title, h.projectName],
+    ['Caution', doc.caution],
+    ['Site', h.site], ['Client', h.client], ['Engineer', h.engineer], ['Date of issue', h.issueDate],
+    ['Units', u], ['Reference temperature (' + l.temperature + ')', num(Number.isFinite(h.referenceTemperature) ? temperatureIn(u, h.referenceTemperature) : null, 1)],
+    ['Installation case', h.referenceCase],
+    [],
+    ['Members'],
+    ['member', 'groups', 'section', 'kind', `cut length (${l.length})`, `installation tension (${l.force})`, 'f1 string (Hz)', 'f in-plane (Hz)',
+      `max tension (${l.force})`, 'max tension case', `min tension (${l.force})`, 'min tension case', 'utilisation', 'utilisation case', 'check', 'failed checks'],
+    ...doc.members.map((m) => [
+      m.id, m.groups.join(' '), m.section, m.kind, L(m.cutLength), F(m.installationTension), num(m.frequency, 3), num(m.frequencyInPlane, 3),
+      F(m.envelopeMax), m.envelopeMaxCase, F(m.envelopeMin), m.envelopeMinCase, num(m.utilisation, 4), m.utilisationCase,
+      m.checkStatus.toUpperCase(), m.failedChecks.join(' '),
+    ]),
+    [],
+    [`Tension per case (${l.force})`],
+    ['member', ...doc.cases.map((c) => c.id)],
+    ...doc.members.map((m) => [m.id, ...m.tensionByCase.map(F)]),
+    [],
+    [`Reactions (${l.force})`],
+    ['support', 'case', 'Fx', 'Fy', 'Fz', '|R|'],
+    ...doc.reactions.map((r) => [r.node, r.case, ...r.force.map(F), F(r.magnitude)]),
+  ];
+  if (doc.temperatureTable) {
+    records.push([], [`Installation tension by temperature (${l.force}); header = temperature (${l.temperature})`],
+      ['member', ...doc.temperatureTable.temperatures.map((t) => num(temperatureIn(u, t), 1))],
+      ...doc.temperatureTable.rows.map((r) => [r.member, ...r.tensions.map(F)]));
+  }
+  if (doc.tuning) records.push([], ['Tuning'], ['summary', doc.tuning.summary], ...doc.tuning.targets.map((t) => [t.label, t.value, t.met ? 'met' : 'NOT MET']));
+  return stringify(records, { record_delimiter: '\r\n' });
+}

@@ -1,0 +1,147 @@
+/**
+ * ScheduleDocument → a complete, standalone HTML document for printing (no scripts, no external
+ * resources). Print CSS: @page A4 or US Letter (portrait, 12 mm margins), table headers repeat on
+ * every page (thead as table-header-group), rows never split, black-and-white readable — status
+ * is always spelled out (PASS / FAIL / NOT CHECKED, "yes"/"NO") and emphasised by weight and
+ * borders, never by colour alone.
+ */
+import type { ScheduleDocument } from './schedule-types.ts';
+import { formatForce, formatLength, formatNumber, formatTemperature, unitLabels } from './schedule-units.ts';
+
+export function escapeHtml(s: string): string {
+  return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
+}
+
+const CASES_PER_TABLE = 8;
+
+function table(caption: string, head: string[], rows: string[][], numericFrom = 1): string {
+  const th = head.map((h, i) => `<th${i >= numericFrom ? ' class="num"' : ''} scope="col">${h}</th>`).join('');
+  const body = rows.map((r) => `<tr>${r.map((c, i) => `<td${i >= numericFrom ? ' class="num"' : ''}>${c}</td>`).join('')}</tr>`).join('\n');
+  return `<table><caption>${caption}</caption><thead><tr>${th}</tr></thead><tbody>\n${body}\n</tbody></table>`;
+}
+
+function statusCell(status: 'pass' | 'fail' | 'unchecked', failed: string[]): string {
+  if (status === 'fail') return `<span class="fail">FAIL</span> ${escapeHtml(failed.join(', '))}`;
+  if (status === 'pass') return 'PASS';
+  return '<span class="unchecked">NOT CHECKED</span>';
+}
+
+export function scheduleHtml(doc: ScheduleDocument): string {
+  const u = doc.units;
+  const l = unitLabels(u);
+  const h = doc.header;
+  const e = escapeHtml;
+  const pageSize = doc.paper === 'letter' ? 'letter portrait' : 'A4 portrait';
+  const tRef = Number.isFinite(h.referenceTemperature)
+    ? `${formatTemperature(u, h.referenceTemperature)} ${l.temperature}${h.referenceTemperatureAssumed ? ' (assumed: not set in the project)' : ''}`
+    : 'not set';
+
+  const headerRows: [string, string][] = [
+    ['Project', h.projectName], ['Site', h.site], ['Client', h.client], ['Engineer', h.engineer],
+    ['Date of issue', h.issueDate], ['Units', u === 'US' ? 'US customary (kip, ft, °F)' : 'SI (kN, m, °C)'],
+    ['Reference temperature', tRef], ['Installation (reference) case', h.referenceCase || '—'],
+    ['Design checks', doc.checksPass === null ? 'NOT RUN' : doc.checksPass ? 'ALL PASS' : 'SOME FAIL — see the Checks column'],
+  ];
+  const headerHtml = `<table class="meta"><tbody>${headerRows.map(([k, v]) => `<tr><th scope="row">${e(k)}</th><td>${e(v)}</td></tr>`).join('')}</tbody></table>`;
+
+  const memberRows = doc.members.map((m) => [
+    `<b>${e(m.id)}</b>`, e(m.groups.join(', ')), e(m.section), m.kind,
+    formatLength(u, m.cutLength), formatForce(u, m.installationTension),
+    formatNumber(m.frequency, 2), formatNumber(m.frequencyInPlane, 2),
+    `${formatForce(u, m.envelopeMax)}<br><small>${e(m.envelopeMaxCase)}</small>`,
+    `${formatForce(u, m.envelopeMin)}<br><small>${e(m.envelopeMinCase)}</small>`,
+    m.utilisation === null ? '—' : `${m.utilisation > 1 ? '<b class="fail">' : ''}${formatNumber(m.utilisation, 3)}${m.utilisation > 1 ? '</b>' : ''}<br><small>${e(m.utilisationCase)}</small>`,
+    statusCell(m.checkStatus, m.failedChecks),
+  ]);
+  const membersHtml = table(`Members — cut lengths, installation tension at the reference temperature, frequencies, envelope and checks`,
+    ['Member', 'Groups', 'Section', 'Kind', `Cut length (${l.length})`, `Install. tension (${l.force})`, 'f₁ string (Hz)', 'f in-plane (Hz)',
+      `Max tension (${l.force})`, `Min tension (${l.force})`, 'Utilisation', 'Checks'], memberRows, 4)
+
+  const caseTables: string[] = [];
+  for (let start = 0; start < doc.cases.length; start += CASES_PER_TABLE) {
+    const cs = doc.cases.slice(start, start + CASES_PER_TABLE);
+    const rows = doc.members.map((m) => [`<b>${e(m.id)}</b>`, ...cs.map((_, j) => formatForce(u, m.tensionByCase[start + j]))]);
+    caseTables.push(table(`Largest member tension per case (${l.force})${doc.cases.length > CASES_PER_TABLE ? ` — cases ${start + 1}–${start + cs.length} of ${doc.cases.length}` : ''}`,
+      ['Member', ...cs.map((c) => `${e(c.label)}${c.converged ? '' : ' <b>(NOT CONVERGED)</b>'}<br><small>${e(c.id)}</small>`)], rows));
+  }
+
+  const reactionRows = doc.reactions.map((r) => [`<b>${e(r.node)}</b>`, e(r.case), ...r.force.map((f) => formatForce(u, f)), formatForce(u, r.magnitude)]);
+  const reactionsHtml = doc.reactions.length
+    ? table(`Anchor and base reactions (force the support exerts on the structure, ${l.force})`, ['Support', 'Case', 'Fx', 'Fy', 'Fz', '|R|'], reactionRows, 2)
+    : '<p>No support reactions (no converged case).</p>';
+
+  let tuningHtml = '<p>No tuning run is recorded for this project.</p>';
+  if (doc.tuning) {
+    const t = doc.tuning;
+    tuningHtml = `<p><b>${e(t.summary)}</b> (${e(t.date)})</p>`;
+    if (t.targets.length) tuningHtml += table('Tuning targets', ['Target', 'Value reached', 'Met'], t.targets.map((x) => [e(x.label), e(x.value), x.met ? 'yes' : '<b class="fail">NO</b>']), 99);
+    if (t.variables.length) tuningHtml += table('Tuned variables', ['Group', 'Variable', 'Final value'], t.variables.map((v) => [e(v.group), e(v.by), e(v.value)]), 99);
+    if (t.diagnosis.length) tuningHtml += `<ul class="diagnosis">${t.diagnosis.map((d) => `<li>${e(d)}</li>`).join('')}</ul>`;
+  }
+
+  let tempHtml = '<p>No installation temperature table.</p>';
+  if (doc.temperatureTable && doc.temperatureTable.rows.length) {
+    const tt = doc.temperatureTable;
+    tempHtml = table(`Tension to set at installation (${l.force}, at the lower end) by air temperature (${l.temperature}) — same unstressed lengths as the design state`,
+      ['Member', ...tt.temperatures.map((t) => `${formatTemperature(u, t)}`)],
+      tt.rows.map((r) => [`<b>${e(r.member)}</b>`, ...r.tensions.map((x) => formatForce(u, x))]));
+  }
+
+  const notesHtml = doc.notes.length ? `<h2>Notes</h2><ul>${doc.notes.map((n) => `<li>${e(n)}</li>`).join('')}</ul>` : '';
+
+  return `<!DOCTYPE html>
+<html lang="en">
+<head>
+<meta charset="utf-8">
+<title>${e(doc.title)} — ${e(h.projectName)}</title>
+<style>
+@page { size: ${pageSize}; margin: 12mm 10mm 14mm 10mm;
+  @bottom-left { content: "${e(h.projectName).replace(/"/g, '')} — issued ${e(h.issueDate)}"; font: 7pt sans-serif; }
+  @bottom-right { content: "page " counter(page) " of " counter(pages); font: 7pt sans-serif; } }
+html { color: #000; background: #fff; }
+body { font: 8pt/1.25 "DejaVu Sans", "Liberation Sans", Arial, sans-serif; margin: 0; }
+h1 { font-size: 14pt; margin: 0 0 2mm; }
+h2 { font-size: 10.5pt; margin: 5mm 0 1.5mm; border-bottom: 1.5pt solid #000; break-after: avoid; }
+.caution { border: 2.5pt solid #000; padding: 2mm 3mm; margin: 2mm 0 3mm; font-size: 10pt; font-weight: bold; }
+.caution::before { content: "CAUTION — "; }
+table { border-collapse: collapse; width: 100%; margin: 0 0 3mm; }
+caption { text-align: left; font-weight: bold; padding: 1mm 0; caption-side: top; }
+thead { display: table-header-group; }
+tr { break-inside: avoid; }
+th, td { border: 0.6pt solid #000; padding: 0.6mm 1mm; vertical-align: top; }
+thead th { background: #fff; border-bottom: 1.5pt solid #000; font-weight: bold; text-align: left; }
+.num { text-align: right; font-variant-numeric: tabular-nums; }
+small { font-size: 6.5pt; }
+.fail { font-weight: bold; text-decoration: underline; }
+.unchecked { font-style: italic; }
+table.meta { width: auto; }
+table.meta th { text-align: left; padding-right: 4mm; border: none; font-weight: bold; }
+table.meta td { border: none; }
+tbody tr:nth-child(even) td { border-bottom-style: dotted; }
+@media screen { body { max-width: 190mm; margin: 8mm auto; } }
+</style>
+</head>
+<body>
+<header>
+<h1>${e(doc.title)}</h1>
+${headerHtml}
+<p class="caution" role="note">${e(doc.caution)}</p>
+</header>
+<main>
+<h2>Members</h2>
+${membersHtml}
+<h2>Tension per case</h2>
+${caseTables.join('\n')}
+<h2>Reactions</h2>
+${reactionsHtml}
+<h2>Tuning summary</h2>
+${tuningHtml}
+<h2>Installation temperature table</h2>
+${tempHtml}
+${notesHtml}
+<p class="caution" role="note">${e(doc.caution)}</p>
+</main>
+</body>
+</html>
+`;
+}

@@ -1,0 +1,99 @@
+/**
+ * The member tension schedule as data: what the printed schedule (HTML/PDF), the CSV and the
+ * renderer's print route all show. Numbers are SI (N, m, Hz, K); formatting is schedule-units.ts.
+ * Built by buildSchedule (build-schedule.ts) from project + solution + checks + installation data.
+ */
+import type { ScheduleUnits } from './schedule-units.ts';
+
+export const SCHEDULE_CAUTION = 'Results are for review by a qualified engineer; local codes and licensed practice govern.';
+
+export type PaperSize = 'a4' | 'letter';
+
+export interface ScheduleHeader {
+  projectName: string;
+  site: string;
+  client: string;
+  engineer: string;
+  /** Date of issue, ISO 8601 (YYYY-MM-DD). */
+  issueDate: string;
+  /** Reference (design) temperature, K. */
+  referenceTemperature: number;
+  referenceTemperatureAssumed: boolean;
+  /** Id of the installation (reference) case. */
+  referenceCase: string;
+}
+
+export interface ScheduleCase {
+  id: string;
+  label: string;
+  converged: boolean;
+}
+
+export interface ScheduleMemberRow {
+  id: string;
+  /** Group ids the member belongs to, comma-joined for display. */
+  groups: string[];
+  section: string;
+  kind: 'cable' | 'bar';
+  /** Unstressed (cut) length, m; null when installation data is missing. */
+  cutLength: number | null;
+  /** Tension at the lower end in the reference state at T_ref, N. */
+  installationTension: number | null;
+  /** Taut-string / first out-of-plane frequency, Hz (cables only). */
+  frequency: number | null;
+  /** Lowest in-plane frequency (Irvine sag-corrected), Hz (cables only). */
+  frequencyInPlane: number | null;
+  /** Largest element tension per case, same order as ScheduleDocument.cases; null = not converged. */
+  tensionByCase: (number | null)[];
+  envelopeMax: number | null;
+  envelopeMaxCase: string;
+  envelopeMin: number | null;
+  envelopeMinCase: string;
+  /** T_max / (φ·MBL), null without a breaking load or checks. */
+  utilisation: number | null;
+  utilisationCase: string;
+  /** 'pass' | 'fail' | 'unchecked' (checks not run or member without limits). */
+  checkStatus: 'pass' | 'fail' | 'unchecked';
+  /** Failed check kinds (e.g. "utilisation", "slack"). */
+  failedChecks: string[];
+}
+
+export interface ScheduleReactionRow {
+  node: string;
+  case: string;
+  /** Force the support exerts on the structure [Fx, Fy, Fz], N. */
+  force: [number, number, number];
+  magnitude: number;
+}
+
+export interface ScheduleTuning {
+  summary: string;
+  /** Date of the tuning run (ISO), when known. */
+  date: string;
+  targets: { label: string; value: string; met: boolean }[];
+  variables: { group: string; by: string; value: string }[];
+  diagnosis: string[];
+}
+
+export interface ScheduleTemperatureTable {
+  /** Installation temperatures, K. */
+  temperatures: number[];
+  rows: { member: string; tensions: (number | null)[] }[];
+}
+
+export interface ScheduleDocument {
+  title: string;
+  caution: string;
+  units: ScheduleUnits;
+  paper: PaperSize;
+  header: ScheduleHeader;
+  cases: ScheduleCase[];
+  members: ScheduleMemberRow[];
+  reactions: ScheduleReactionRow[];
+  tuning: ScheduleTuning | null;
+  temperatureTable: ScheduleTemperatureTable | null;
+  /** Overall result of the design checks, null when not run. */
+  checksPass: boolean | null;
+  /** Notes for the reader: warnings, assumptions, cases that did not converge. */
+  notes: string[];
+}

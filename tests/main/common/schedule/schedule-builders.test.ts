@@ -1,0 +1,116 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import { parse } from 'csv-parse/sync';
+import { buildModel, installationData, runChecks, solveProject } from '../../../../solver/index.ts';
+import type { CheckReport, InstallationData, ProjectFile, SolveReport } from '../../../../solver/index.ts';
+import { buildSchedule, scheduleCsv, scheduleHtml, SCHEDULE_CAUTION, NEWTONS_PER_KIP, METRES_PER_FOOT } from '../../../../main/common/schedule/index.ts';
+import { mastProject } from './mast-fixture.ts';
+
+let project: ProjectFile;
+let report: SolveReport;
+let checks: CheckReport;
+let installation: InstallationData;
+
+beforeAll(() => {
+  project = mastProject();
+  report = solveProject(project).report;
+  checks = runChecks(project, report);
+  installation = installationData(project);
+});
+
+/** Rows of one CSV block: the records after the block's title record, up to the next empty record. */
+function block(records: string[][], title: string): string[][] {
+  const start = records.findIndex((r) => r[0].startsWith(title));
+  expect(start, `block "${title}"`).toBeGreaterThanOrEqual(0);
+  const out: string[][] = [];
+  for (let i = start + 1; i < records.length && !(records[i].length === 1 && records[i][0] === ''); i++) out.push(records[i]);
+  return out;
+}
+
+describe('schedule CSV against the solver numbers', () => {
+  it('every member tension per case equals the solver result (kN, 2 decimals)', () => {
+    const doc = buildSchedule({ project, report, checks, installation }, { issueDate: '2026-12-01' });
+    const records = parse(scheduleCsv(doc), { relax_column_count: true, skip_empty_lines: false }) as string[][];
+    expect(records[1]).toEqual(['Caution', SCHEDULE_CAUTION]);
+    const [head, ...rows] = block(records, 'Tension per case');
+    expect(head).toEqual(['member', ...report.cases.map((c) => c.id)]);
+    expect(rows.length).toBe(project.members.length);
+    for (const row of rows) {
+      report.cases.forEach((c, j) => {
+        const m = c.members.find((x) => x.id === row[0])!;
+        expect(Number(row[j + 1])).toBeCloseTo(m.tensionMax / 1000, 2);
+      });
+    }
+  });
+
+  it('cut lengths are the sums of the model element unstressed lengths; installation tensions match', () => {
+    const doc = buildSchedule({ project, report, checks, installation }, { issueDate: '2026-12-01' });
+    const records = parse(scheduleCsv(doc), { relax_column_count: true }) as string[][];
+    const [head, ...rows] = block(records, 'Members');
+    const cutCol = head.indexOf('cut length (m)');
+    const instCol = head.indexOf('installation tension (kN)');
+    const model = buildModel(project);
+    for (const row of rows) {
+      const topo = model.members.find((m) => m.id === row[0])!;
+      let sum = 0;
+      for (let e = topo.firstElement; e < topo.firstElement + topo.elementCount; e++) sum += model.elemUnstressedLength[e];
+      expect(Number(row[cutCol])).toBeCloseTo(sum, 4);
+      const dead = report.cases.find((c) => c.id === 'dead')!.members.find((m) => m.id === row[0])!;
+      // Installation tension = lower-end tension in the dead case at T_ref.
+      const from = project.nodes.find((n) => n.id === project.members.find((m) => m.id === row[0])!.from)!;
+      const to = project.nodes.find((n) => n.id === project.members.find((m) => m.id === row[0])!.to)!;
+      const lower = from.at[2] <= to.at[2] ? dead.tensionStart : dead.tensionEnd;
+      expect(Number(row[instCol])).toBeCloseTo(lower / 1000, 2);
+    }
+  });
+
+  it('US units convert by the exact definitions (1 kip = 4448.2216152605 N, 1 ft = 0.3048 m; NIST SP 811)', () => {
+    const si = buildSchedule({ project, report, checks, installation }, { issueDate: '2026-12-01' });
+    const us = buildSchedule({ project, report, checks, installation }, { issueDate: '2026-12-01', units: 'US' });
+    const siRows = block(parse(scheduleCsv(si), { relax_column_count: true }) as string[][], 'Members');
+    const usRows = block(parse(scheduleCsv(us), { relax_column_count: true }) as string[][], 'Members');
+    expect(usRows[0]).toContain('cut length (ft)');
+    for (let i = 1; i < siRows.length; i++) {
+      expect(Number(usRows[i][4])).toBeCloseTo(Number(siRows[i][4]) / METRES_PER_FOOT, 3);
+      expect(Number(usRows[i][5])).toBeCloseTo((Number(siRows[i][5]) * 1000) / NEWTONS_PER_KIP, 2);
+    }
+    expect(us.temperatureTable!.temperatures[0]).toBeCloseTo(253.15, 6); // model stays SI
+    expect(scheduleCsv(us)).toContain('-4.0'); // −20 °C = −4 °F (°F = °C·9/5 + 32)
+  });
+
+  it('the temperature block lists every cable at every installation temperature', () => {
+    const doc = buildSchedule({ project, report, checks, installation }, { issueDate: '2026-12-01' });
+    const [head, ...rows] = block(parse(scheduleCsv(doc), { relax_column_count: true }) as string[][], 'Installation tension by temperature');
+    expect(head.slice(1).map(Number)).toEqual([-20, -15, -10, -5, 0, 5, 10, 15, 20, 25, 30, 35, 40]);
+    expect(rows.length).toBe(project.members.filter((m) => m.kind === 'cable').length);
+    // At the reference temperature (10 °C) the table gives the installation tension itself.
+    const col = head.indexOf('10.0');
+    for (const r of rows) expect(Number(r[col])).toBeCloseTo(installation.members.find((m) => m.id === r[0])!.installationTension / 1000, 2);
+  });
+});
+
+describe('schedule HTML', () => {
+  it('is a standalone document with the caution, repeating headers and the chosen paper', () => {
+    const a4 = scheduleHtml(buildSchedule({ project, report, checks, installation }, { issueDate: '2026-12-01' }));
+    const letter = scheduleHtml(buildSchedule({ project, report, checks, installation }, { issueDate: '2026-12-01', paper: 'letter' }));
+    expect(a4.startsWith('<!DOCTYPE html>')).toBe(true);
+    expect(a4).toContain(SCHEDULE_CAUTION);
+    expect(a4).toContain('thead { display: table-header-group; }');
+    expect(a4).toContain('size: A4 portrait');
+    expect(letter).toContain('size: letter portrait');
+    expect(a4).not.toMatch(/<script|<link|src=/);
+  });
+
+  it('escapes text from the project file', () => {
+    const p = structuredClone(project);
+    p.meta!.name = '<img src=x onerror=alert(1)> & "Co"';
+    const html = scheduleHtml(buildSchedule({ project: p, report, checks: null, installation: null }, { issueDate: '2026-12-01' }));
+    expect(html).not.toContain('<img src=x');
+    expect(html).toContain('&lt;img src=x onerror=alert(1)&gt; &amp; &quot;Co&quot;');
+    expect(html).toContain('Design checks were not run');
+  });
+
+  it('rejects an unknown unit system or paper, naming it', () => {
+    expect(() => buildSchedule({ project, report }, { issueDate: '2026-12-01', units: 'imperial' as never })).toThrow(/units must be SI or US/);
+    expect(() => buildSchedule({ project, report }, { issueDate: '2026-12-01', paper: 'a3' as never })).toThrow(/paper must be a4 or letter/);
+  });
+});
