@@ -46,8 +46,8 @@ export const DEFAULT_NEWTON_OPTIONS: NewtonOptions = {
 
 export interface NewtonOutcome {
   status: AnalysisStatus;
-  /** Final positions (the last converged state when not converged), m. */
-  x: Float64Array;
+  /** Final displacements from the start positions (the last converged state when not converged), m. */
+  u: Float64Array;
   iterations: number;
   loadSteps: number;
   /** Relative residual of the final state. */
@@ -76,15 +76,15 @@ export function solveEquilibrium(
   const n = ws.fInt.length;
   const fixedLoad = fixedDirectionLoads(ws, loads);
 
-  const x = new Float64Array(ws.model.coords);
+  const x = new Float64Array(n); // displacement u from the start positions
   const saved = new Float64Array(n);
   const counters = { iterations: 0, residual: 0, negativePivots: 0, singularDof: -1 };
 
   if (start) {
-    x.set(start);
+    for (let d = 0; d < n; d++) x[d] = start[d] - ws.model.coords[d];
     const r = newtonAtLoad(ws, loads, fixedLoad, x, 1, options, control, tag, counters);
     if (r === 'converged' || r === 'cancelled') return outcome(r, x, counters, 1, 1);
-    x.set(ws.model.coords);
+    x.fill(0);
   }
 
   let lambda = 0;
@@ -125,7 +125,7 @@ function fixedDirectionLoads(ws: Workspace, loads: CaseLoads): Float64Array {
 }
 
 /**
- * Evaluate the full case (λ = 1) at positions x: fills ws.fInt, ws.fExt, ws.residual and the element
+ * Evaluate the full case (λ = 1) at displacements x: fills ws.fInt, ws.fExt, ws.residual and the element
  * state; returns the relative residual.
  */
 export function evaluateState(ws: Workspace, loads: CaseLoads, x: Float64Array): number {
@@ -137,17 +137,21 @@ function outcome(
   status: AnalysisStatus, x: Float64Array,
   c: { iterations: number; residual: number; negativePivots: number }, loadFactor: number, loadSteps: number,
 ): NewtonOutcome {
-  return { status, x, iterations: c.iterations, loadSteps, residual: c.residual, loadFactor, negativePivots: c.negativePivots };
+  return { status, u: x, iterations: c.iterations, loadSteps, residual: c.residual, loadFactor, negativePivots: c.negativePivots };
 }
 
-/** Residual R(x, λ) into ws.residual (zero at restrained DOFs); returns [‖R‖, reference norm]. */
+/** Residual R(u, λ) into ws.residual (zero at restrained DOFs); returns [‖R‖, reference norm]. */
 function evaluateResidual(
   ws: Workspace, loads: CaseLoads, fixedLoad: Float64Array, x: Float64Array, lambda: number, tangent: boolean,
 ): [number, number] {
   const { fInt, fExt, residual, fInt0, model } = ws;
-  assemble(model, tangent ? ws.pattern : null, x, lambda * loads.temperatureChange, fInt, ws.elements, tangent ? ws.values : null);
+  assemble(model, tangent ? ws.pattern : null, ws.startVectors, x, lambda * loads.temperatureChange, fInt, ws.elements, tangent ? ws.values : null);
   for (let d = 0; d < fExt.length; d++) fExt[d] = lambda * fixedLoad[d];
-  if (loads.follower) loads.follower.accumulate(x, lambda, fExt);
+  if (loads.follower) {
+    const p = ws.positions, c = model.coords;
+    for (let d = 0; d < p.length; d++) p[d] = c[d] + x[d];
+    loads.follower.accumulate(p, lambda, fExt);
+  }
   const fixed = model.fixed;
   let r2 = 0, e2 = 0, i2 = 0;
   const w = 1 - lambda;
@@ -168,7 +172,7 @@ function newtonAtLoad(
   options: NewtonOptions, control: SolveControl, tag: CaseTag,
   counters: { iterations: number; residual: number; negativePivots: number; singularDof: number },
 ): StepResult {
-  const { step, trial, residual, ldl, values } = ws;
+  const { step, residual, ldl, values } = ws;
   const maxNodalStep = options.maxStepFraction * ws.size;
   let [norm, ref] = evaluateResidual(ws, loads, fixedLoad, x, lambda, true);
   let previous = Infinity;

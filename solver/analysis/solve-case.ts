@@ -29,13 +29,15 @@ export function solveCase(ws: Workspace, id: string, loads: CaseLoads, options: 
   const out = solveEquilibrium(ws, loads, newton, options.control ?? {}, tag, options.start);
   const model = ws.model;
   const converged = out.status === 'converged';
-  const residual = evaluateState(ws, loads, out.x);
+  const residual = evaluateState(ws, loads, out.u);
+  const positions = new Float64Array(out.u);
+  for (let d = 0; d < positions.length; d++) positions[d] += model.coords[d];
   const fields: CaseFields = {
-    positions: out.x,
+    positions,
     elementTension: new Float64Array(ws.elements.tension),
     elementSlack: new Uint8Array(ws.elements.slack),
   };
-  const members = memberResults(model, out.x, fields.elementTension, fields.elementSlack);
+  const members = memberResults(model, positions, fields.elementTension, fields.elementSlack);
   let freeDofs = 0;
   for (let d = 0; d < model.fixed.length; d++) if (!model.fixed[d]) freeDofs++;
   const result: CaseResult = {
@@ -43,7 +45,7 @@ export function solveCase(ws: Workspace, id: string, loads: CaseLoads, options: 
     converged,
     status: out.status,
     slackMembers: members.filter((m) => m.slack).map((m) => m.id),
-    nodes: nodeResults(model, out.x),
+    nodes: nodeResults(model, positions),
     members,
     reactions: reactionResults(model, ws.fInt, ws.fExt),
     stats: {

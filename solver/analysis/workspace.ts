@@ -4,7 +4,7 @@
  */
 import type { AnalysisModel } from '../model/analysis-model.ts';
 import { buildBlockPattern, type BlockPattern } from '../assembly/block-pattern.ts';
-import { assemble, type ElementState } from '../assembly/assemble.ts';
+import { assemble, startVectors, type ElementState } from '../assembly/assemble.ts';
 import { SparseLDL } from '../linalg/index.ts';
 
 export interface Workspace {
@@ -20,6 +20,10 @@ export interface Workspace {
   step: Float64Array;
   trial: Float64Array;
   elements: ElementState;
+  /** Element start vectors X_b − X_a (3 × elementCount), m. */
+  startVectors: Float64Array;
+  /** Scratch positions X + u for follower loads (3 × nodeCount), m. */
+  positions: Float64Array;
   /** Characteristic size of the model (bounding-box diagonal), m. */
   size: number;
 }
@@ -33,11 +37,13 @@ export function createWorkspace(model: AnalysisModel): Workspace {
     slack: new Uint8Array(model.elementCount),
   };
   const fInt0 = new Float64Array(n);
-  assemble(model, null, model.coords, 0, fInt0, elements, null);
+  const dX = startVectors(model);
+  assemble(model, null, dX, new Float64Array(n), 0, fInt0, elements, null);
   return {
     model, pattern, ldl, values: new Float64Array(pattern.rowIdx.length), fInt0,
     fInt: new Float64Array(n), fExt: new Float64Array(n), residual: new Float64Array(n),
-    step: new Float64Array(n), trial: new Float64Array(n), elements, size: modelSize(model.coords),
+    step: new Float64Array(n), trial: new Float64Array(n), elements, startVectors: dX,
+    positions: new Float64Array(n), size: modelSize(model.coords),
   };
 }
 

@@ -1,8 +1,10 @@
 /**
  * Element loop: internal forces, element axial forces and (optionally) the global tangent.
  *
- * Conventions: x is the current position vector (3 × nodeCount, m); f_int is the gradient of the
- * strain energy with respect to x (N), so equilibrium at free DOFs is f_ext − f_int = 0 and the
+ * Conventions: u is the displacement from the start positions X (3 × nodeCount, m); each element's
+ * current end-to-end vector is d = (X_b − X_a) + (u_b − u_a), with X_b − X_a precomputed once
+ * (`startVectors`), so round-off does not scale with the coordinates' magnitude. f_int is the
+ * gradient of the strain energy (N), so equilibrium at free DOFs is f_ext − f_int = 0 and the
  * support reaction at a restrained DOF is r = f_int − f_ext. Tangent values follow the
  * BlockPattern layout; restrained DOFs get identity rows.
  */
@@ -23,12 +25,23 @@ export interface ElementState {
 const out = new Float64Array(OUT_SIZE);
 const kb = new Float64Array(9);
 
+/** Element start vectors X_b − X_a (3 × elementCount, m). */
+export function startVectors(model: AnalysisModel): Float64Array {
+  const v = new Float64Array(3 * model.elementCount);
+  const { elemNodes, coords } = model;
+  for (let e = 0; e < model.elementCount; e++) {
+    const a3 = 3 * elemNodes[2 * e], b3 = 3 * elemNodes[2 * e + 1];
+    for (let q = 0; q < 3; q++) v[3 * e + q] = coords[b3 + q] - coords[a3 + q];
+  }
+  return v;
+}
+
 /**
- * Evaluate every element at positions x with temperature change dT (K).
+ * Evaluate every element at displacements u with temperature change dT (K).
  * Writes f_int (zeroed first) and element state; when `values` is given, also the tangent.
  */
 export function assemble(
-  model: AnalysisModel, pattern: BlockPattern | null, x: Float64Array, dT: number,
+  model: AnalysisModel, pattern: BlockPattern | null, dX: Float64Array, u: Float64Array, dT: number,
   fInt: Float64Array, state: ElementState, values: Float64Array | null,
 ): void {
   const { elemNodes, elemRefLength, elemS0, elemE, elemArea, elemAlpha, elemTensionOnly, fixed } = model;
@@ -42,7 +55,7 @@ export function assemble(
     const tensionOnly = elemTensionOnly[e] === 1;
     const E = elemE[e];
     evaluateTrussTL(
-      x[b3] - x[a3], x[b3 + 1] - x[a3 + 1], x[b3 + 2] - x[a3 + 2],
+      dX[3 * e] + u[b3] - u[a3], dX[3 * e + 1] + u[b3 + 1] - u[a3 + 1], dX[3 * e + 2] + u[b3 + 2] - u[a3 + 2],
       elemRefLength[e], elemS0[e], E, elemArea[e], elemAlpha[e] * dT,
       tensionOnly, CABLE_STRESS_FLOOR_RATIO * E, out, values ? kb : null, 0,
     );
