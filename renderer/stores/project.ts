@@ -50,7 +50,7 @@ export const useProjectStore = defineStore('project', () => {
     path.value = opened.path;
     name.value = opened.name;
     migratedFrom.value = opened.migratedFrom ?? null;
-    savedProject.value = opened.migratedFrom ? null : opened.project;
+    savedProject.value = opened.migratedFrom !== undefined ? null : opened.project;
     setCurrent(opened.project);
   }
 
