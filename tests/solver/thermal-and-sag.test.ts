@@ -55,7 +55,7 @@ describe('parabolic sag, small-sag limit', () => {
     // Vertical reactions carry half the weight each (symmetry); the weight is that of the
     // unstressed length l·√(1 − 2T/EA) (where the law S = T/A + Eε gives S = 0).
     const Va = c.reactions.find((r) => r.node === 'A')!.force[2];
-    expect(Va / ((w * l * Math.sqrt(1 - (2 * T) / EA)) / 2)).toBeCloseTo(1, 8);
+    expect(Va / ((STRAND.massPerLength * STANDARD_GRAVITY * l * Math.sqrt(1 - (2 * T) / EA)) / 2)).toBeCloseTo(1, 8);
   });
 });
 
