@@ -1,0 +1,117 @@
+import { describe, expect, it } from 'vitest';
+import { solveProject } from '../../../../solver/index.ts';
+import type { GeneratorRecord, ProjectFile } from '../../../../solver/index.ts';
+import { GeneratorInputError, runGenerator, solveForceDensity } from '../../../../main/common/generators/index.ts';
+import { emptyProject, mastRecord, strand } from './fixtures.ts';
+
+const saddle = (outline: 'rectangle' | 'ellipse'): GeneratorRecord => ({
+  id: 'canopy', kind: 'saddleNet',
+  params: {
+    outline, lengthX: 20, lengthY: 14, spacing: 2, highPointHeight: 8, lowPointHeight: 2.5, netTension: 8e3,
+    netCable: strand(0.012), edgeCable: strand(0.026), backstay: strand(0.026),
+    mast: { E: 2.1e11, area: 3e-3, massPerLength: 24, diameter: 0.22 },
+  },
+});
+const radial: GeneratorRecord = {
+  id: 'roof', kind: 'radialNet',
+  params: { outerRadius: 12, innerRadius: 2.5, radialCount: 10, outerHeight: 4, mastHeight: 11, radialTension: 15e3,
+    radialCable: strand(0.014), ringCable: strand(0.02), hanger: strand(0.014), mast: { E: 2.1e11, area: 3e-3, massPerLength: 24 } },
+};
+
+function converges(p: ProjectFile): void {
+  const sol = solveProject(p);
+  for (const c of sol.report.cases) expect({ id: c.id, status: c.status }).toEqual({ id: c.id, status: 'converged' });
+}
+
+describe('generated models solve', () => {
+  it('guyed mast, lattice and single bar, 3 and 4 guys', () => {
+    converges(runGenerator(emptyProject(), mastRecord()).project);
+    converges(runGenerator(emptyProject(), mastRecord({ guysPerLevel: 4, anchorRadius: [16, 22] })).project);
+    converges(runGenerator(emptyProject(), mastRecord({ mastModel: 'singleBar', guyLevels: [14, 30] })).project);
+  });
+  it('saddle nets over a rectangle and an ellipse, radial net', () => {
+    converges(runGenerator(emptyProject(), saddle('rectangle')).project);
+    converges(runGenerator(emptyProject(), saddle('ellipse')).project);
+    converges(runGenerator(emptyProject(), radial).project);
+  });
+  it('form-found nets are in equilibrium under pretension alone (no movement without loads)', () => {
+    for (const rec of [saddle('rectangle'), saddle('ellipse'), radial]) {
+      const p = runGenerator(emptyProject(), rec).project;
+      p.loadCases = [{ id: 'prestress', selfWeight: false }];
+      const c = solveProject(p).report.cases[0];
+      expect(Math.max(...c.nodes.map((n) => Math.hypot(...n.displacement)))).toBeLessThan(1e-4);
+    }
+  });
+});
+
+describe('guyed mast parts', () => {
+  const { project } = runGenerator(emptyProject(), mastRecord());
+  it('tags members, groups by level, pretension 10 % of breaking load (common practice default)', () => {
+    expect(project.members.every((m) => m.generatedBy === 'mast')).toBe(true);
+    const g2 = project.groups!.find((g) => g.id === 'mast/guys level 2')!;
+    expect(g2.members).toHaveLength(3);
+    const guy = project.members.find((m) => m.id === g2.members[0])!;
+    expect(guy.pretension).toBeCloseTo(0.1 * strand(0.012).breakingLoad, -1);
+    expect(guy.segments).toBe(8);
+    expect(project.nodes.find((n) => n.id === 'mast/base')!.fixed).toBe('xyz');
+    expect(project.nodes.filter((n) => n.fixed === 'xyz')).toHaveLength(4); // base + 3 shared anchors
+  });
+  it('panel levels include every guy level; top at the height', () => {
+    const zs = new Set(project.nodes.map((n) => n.at[2]));
+    expect(zs.has(14) && zs.has(28) && zs.has(30)).toBe(true);
+  });
+  it('names bad parameters', () => {
+    expect(() => runGenerator(emptyProject(), mastRecord({ guyLevels: [20, 10], anchorRadius: [1, 2, 3] }))).toThrow(GeneratorInputError);
+    try { runGenerator(emptyProject(), mastRecord({ guyLevels: [20, 10], guysPerLevel: 5, height: -1 })); } catch (e) {
+      const text = (e as GeneratorInputError).problems.join('\n');
+      expect(text).toMatch(/params\.height/);
+      expect(text).toMatch(/guysPerLevel/);
+      expect(text).toMatch(/guyLevels\[1\]/);
+    }
+  });
+});
+
+describe('re-running a generator', () => {
+  it('replaces its parts and keeps the user’s edits', () => {
+    const first = runGenerator(emptyProject(), mastRecord()).project;
+    first.sections.push({ id: 'aerial', E: 2e11, area: 1e-4 });
+    first.nodes.push({ id: 'dish', at: [1, 0, 29] });
+    first.members.push({ id: 'bracket', kind: 'bar', from: 'mast/P30a', to: 'dish', section: 'aerial' });
+    first.members.push({ id: 'feeder', kind: 'bar', from: 'mast/P14a', to: 'dish', section: 'aerial' });
+    first.groups!.push({ id: 'mine', members: ['bracket', 'mast/guy L2-1'] });
+    const again = runGenerator(first, mastRecord({ height: 28, guyLevels: [14, 28] }));
+    const p = again.project;
+    expect(p.generators).toHaveLength(1);
+    expect(p.members.filter((m) => m.generatedBy === 'mast').length).toBeLessThan(first.members.length);
+    expect(p.members.some((m) => m.id === 'bracket') && p.nodes.some((n) => n.id === 'dish')).toBe(true);
+    // mast/P30a is no longer generated (top now at 28 m) but "bracket" uses it: kept and reported
+    expect(p.nodes.some((n) => n.id === 'mast/P30a')).toBe(true);
+    expect(again.notes.join('\n')).toMatch(/node "mast\/P30a".*member "bracket"/);
+    // a node still generated is simply the new one
+    expect(p.nodes.filter((n) => n.id === 'mast/P14a')).toHaveLength(1);
+    // unused old nodes are gone; no duplicate ids
+    expect(p.nodes.some((n) => n.id === 'mast/P29a')).toBe(false);
+    expect(new Set(p.nodes.map((n) => n.id)).size).toBe(p.nodes.length);
+    expect(p.groups!.find((g) => g.id === 'mine')!.members).toEqual(['bracket', 'mast/guy L2-1']);
+  });
+});
+
+describe('force density form finding', () => {
+  it('a uniformly loaded string takes the funicular parabola', () => {
+    // Funicular polygon of a string with equal force densities and equal nodal loads P
+    // (e.g. Irvine, Cable Structures (1981), ch. 1): q (z_{i+1} − 2 z_i + z_{i−1}) = P, so
+    // z_i = −(P / 2q) · i (n − i) between supports at equal height.
+    const n = 8, P = 100, q = 250;
+    const coords = new Float64Array(3 * (n + 1));
+    for (let i = 0; i <= n; i++) coords[3 * i] = i;
+    const fixed = new Uint8Array(n + 1); fixed[0] = 1; fixed[n] = 1;
+    const links = new Int32Array(Array.from({ length: n }, (_, i) => [i, i + 1]).flat());
+    const loads = new Float64Array(3 * (n + 1));
+    for (let i = 1; i < n; i++) loads[3 * i + 2] = -P;
+    const x = solveForceDensity({ coords, fixed, links, q: new Float64Array(n).fill(q), loads });
+    for (let i = 0; i <= n; i++) {
+      expect(x[3 * i + 2]).toBeCloseTo((-P / (2 * q)) * i * (n - i), 9);
+      expect(x[3 * i]).toBeCloseTo(i, 9);
+    }
+  });
+});
