@@ -3,7 +3,7 @@
  * of every load case and combination (or the chosen ones) and print the results.
  */
 import { solveProject } from '../../../solver/index.ts';
-import type { SolveReport } from '../../../solver/index.ts';
+import type { ProjectFile, ProjectSolution, SolveControl, SolveProjectOptions, SolveReport } from '../../../solver/index.ts';
 import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
 import type { CliIO } from '../cli-io.ts';
@@ -29,7 +29,10 @@ Exit status:
   1  some case did not converge (results still printed, marked not converged) or the solver failed
   2  bad input: missing or invalid file, unknown option or case (messages on stderr, nothing on stdout)`;
 
-async function run(args: string[], io: CliIO): Promise<number> {
+/** The solver entry the command calls (solveProject; replaceable in tests of the output guards). */
+export type ProjectSolver = (project: ProjectFile, control?: SolveControl, options?: SolveProjectOptions) => ProjectSolution;
+
+async function run(solver: ProjectSolver, args: string[], io: CliIO): Promise<number> {
   const opts = parseOptions(args, { json: { type: 'boolean' }, case: { type: 'string', multiple: true } });
   if (opts.positionals.length !== 1) {
     throw new UsageError(opts.positionals.length === 0 ? 'solve needs a project FILE' : `solve takes one FILE (got ${opts.positionals.length})`);
@@ -50,7 +53,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   let report: SolveReport;
   try {
     const only = requested.length > 0 ? { only: [...new Set(requested)] } : {};
-    report = filterReport(solveProject(project, {}, only).report, requested);
+    report = filterReport(solver(project, {}, only).report, requested);
   } catch (e) {
     io.err(`${file}: the analysis failed: ${(e as Error).message}\n`);
     return EXIT.notConverged;
@@ -68,10 +71,14 @@ async function run(args: string[], io: CliIO): Promise<number> {
   return guarded.value.cases.every((c) => c.converged) ? EXIT.ok : EXIT.notConverged;
 }
 
-export const solveCommand: CliCommand = {
-  name: 'solve',
-  summary: 'analyse a project file and print member forces, displacements and reactions',
-  usage: 'stayset solve FILE [--json] [--case ID ...]',
-  help: HELP,
-  run,
-};
+export function makeSolveCommand(solver: ProjectSolver): CliCommand {
+  return {
+    name: 'solve',
+    summary: 'analyse a project file and print member forces, displacements and reactions',
+    usage: 'stayset solve FILE [--json] [--case ID ...]',
+    help: HELP,
+    run: (args, io) => run(solver, args, io),
+  };
+}
+
+export const solveCommand: CliCommand = makeSolveCommand(solveProject);

@@ -1,0 +1,53 @@
+// Bad input: exit status 2, messages on stderr naming the file, the entry and the problem, and
+// nothing at all on stdout.
+import { describe, expect, it } from 'vitest';
+import { fixture, runStayset } from './run-stayset.ts';
+
+function expectBadInput(args: string[], ...messages: string[]): void {
+  const r = runStayset(args);
+  expect(r.code).toBe(2);
+  expect(r.stdout).toBe('');
+  for (const m of messages) expect(r.stderr).toContain(m);
+}
+
+describe('stayset solve on bad files', () => {
+  const f = (name: string) => fixture(name);
+  it.each([
+    ['bad-missing-node.stayset.json', 'members[2] "G2": node "TOP2" does not exist'],
+    ['bad-duplicate-id.stayset.json', 'members[3] "G1": id "G1" is already used by members[1]'],
+    ['bad-fixed-letters.stayset.json', 'nodes[2] "AN1": "fixed" must be made of the letters x, y, z, each at most once (got "xxz")'],
+    ['bad-both-lengths.stayset.json', 'members[1] "G1": give either "pretension" or "unstressedLength", not both'],
+    ['bad-typo-property.stayset.json', 'members[1] "G1": unknown property "pretention" (did you mean "pretension"?)'],
+    ['bad-newer-version.stayset.json', 'this file was written by a newer Stayset (format version 3); this version reads up to 1'],
+    ['bad-other-format.stayset.json', 'this is not a Stayset project file'],
+    ['bad-truncated.stayset.json', 'the file is truncated: it ends at line'],
+    ['bad-empty.stayset.json', 'the file is empty'],
+    ['bad-not-json.stayset.json', 'not valid JSON at line 1, column 1'],
+  ])('%s', (name, message) => {
+    expectBadInput(['solve', f(name)], `${f(name)}: `, message);
+  });
+
+  it('lists every problem of a file, one per line', () => {
+    const r = runStayset(['solve', f('bad-many-problems.stayset.json')]);
+    expect(r.code).toBe(2);
+    expect(r.stdout).toBe('');
+    const lines = r.stderr.trimEnd().split('\n');
+    expect(lines).toHaveLength(6);
+    expect(lines.every((l) => l.startsWith(`${f('bad-many-problems.stayset.json')}: `))).toBe(true);
+  });
+
+  it('missing file and a folder instead of a file', () => {
+    expectBadInput(['solve', 'no-such-project.stayset.json'], 'no-such-project.stayset.json: no such file');
+    expectBadInput(['solve', 'tests/fixtures/projects'], 'tests/fixtures/projects: is a folder, not a project file');
+  });
+
+  it('bad options and arguments', () => {
+    const ok = f('axial-bar.stayset.json');
+    expectBadInput(['solve'], 'stayset: solve: solve needs a project FILE', 'Usage: stayset solve FILE');
+    expectBadInput(['solve', ok, ok], 'solve takes one FILE (got 2)');
+    expectBadInput(['solve', ok, '--jsno'], 'unknown option "--jsno"');
+    expectBadInput(['solve', ok, '--case'], 'option "--case" needs a value');
+    expectBadInput(['solve', ok, '--json=yes'], 'option "--json" takes no value');
+    expectBadInput(['solve', ok, '--case', 'storm'], 'unknown case "storm" (the file has: pull)');
+  });
+});

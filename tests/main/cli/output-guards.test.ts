@@ -1,0 +1,87 @@
+// Output guards and helpers, in process: non-finite numbers never reach the output, table
+// layout, number text, and the option parser.
+import { describe, expect, it } from 'vitest';
+import { makeSolveCommand } from '../../../main/cli/commands/solve.ts';
+import type { ProjectSolver } from '../../../main/cli/commands/solve.ts';
+import { dispatch } from '../../../main/cli/dispatch.ts';
+import type { CliIO } from '../../../main/cli/cli-io.ts';
+import { replaceNonFinite } from '../../../main/cli/format/finite-guard.ts';
+import { fixed, kN } from '../../../main/cli/format/number-text.ts';
+import { textTable } from '../../../main/cli/format/text-table.ts';
+import { parseOptions } from '../../../main/cli/options.ts';
+import type { CaseResult } from '../../../solver/index.ts';
+import { REPO_ROOT, fixture } from './run-stayset.ts';
+
+function memoryIO(): CliIO & { stdout: string; stderr: string } {
+  const io = { stdout: '', stderr: '', cwd: REPO_ROOT, out: (t: string) => void (io.stdout += t), err: (t: string) => void (io.stderr += t) };
+  return io;
+}
+
+/** A broken solver: returns a converged-looking case with NaN and Infinity in it. */
+const brokenSolver: ProjectSolver = () => {
+  const c: CaseResult = {
+    id: 'pull', converged: true, status: 'converged', slackMembers: [],
+    nodes: [{ id: 'B', position: [10, 0, 0], displacement: [NaN, 0, 0] }],
+    members: [{ id: 'R1', tensionMax: Infinity, tensionMin: 0, tensionStart: 0, tensionEnd: 0, slack: false, sag: 0, chordLength: 10 }],
+    reactions: [], stats: { dofs: 1, iterations: 1, seconds: 0, loadSteps: 1, residual: 0 },
+  };
+  return { report: { cases: [c] }, fields: [] };
+};
+
+describe('non-finite guard', () => {
+  it('replaces NaN and ±Infinity by null and lists where', () => {
+    const g = replaceNonFinite({ a: [1, NaN], b: { c: -Infinity, d: 'x' } });
+    expect(g).toEqual({ value: { a: [1, null], b: { c: null, d: 'x' } }, paths: ['a[1]', 'b.c'] });
+  });
+
+  it('solve fails loudly (exit 1) when the solver hands back a non-finite number, JSON stays valid', async () => {
+    const io = memoryIO();
+    const code = await dispatch(['solve', fixture('axial-bar.stayset.json'), '--json'], io, [makeSolveCommand(brokenSolver)], { version: '0' });
+    expect(code).toBe(1);
+    const out = JSON.parse(io.stdout) as { cases: CaseResult[] };
+    expect(out.cases[0].nodes[0].displacement[0]).toBeNull();
+    expect(io.stderr).toContain('non-finite numbers');
+    expect(io.stderr).toContain('cases[0].nodes[0].displacement[0]');
+    expect(io.stderr).toContain('cases[0].members[0].tensionMax');
+  });
+
+  it('a solver that throws gives exit 1 and a message, nothing on stdout', async () => {
+    const io = memoryIO();
+    const throwing: ProjectSolver = () => {
+      throw new Error('out of memory in factorisation');
+    };
+    const code = await dispatch(['solve', fixture('axial-bar.stayset.json')], io, [makeSolveCommand(throwing)], { version: '0' });
+    expect(code).toBe(1);
+    expect(io.stdout).toBe('');
+    expect(io.stderr).toContain('the analysis failed: out of memory in factorisation');
+  });
+});
+
+describe('text helpers (common practice for fixed-width reports)', () => {
+  it('never prints negative zero and shows n/a for non-finite values', () => {
+    expect(fixed(-0.0004, 3)).toBe('0.000');
+    expect(fixed(-0.0006, 3)).toBe('-0.001');
+    expect(kN(-1)).toBe('0.00');
+    expect(kN(12345.6)).toBe('12.35');
+    expect(fixed(NaN, 2)).toBe('n/a');
+  });
+
+  it('aligns columns: text left, numbers right', () => {
+    const t = textTable([{ title: 'id' }, { title: 'T kN', align: 'right' }], [['G1', '1.00'], ['LONGID', '123.45']], '');
+    expect(t.split('\n')).toEqual(['id        T kN', '------  ------', 'G1        1.00', 'LONGID  123.45']);
+  });
+});
+
+describe('option parser', () => {
+  const spec = { json: { type: 'boolean' as const }, case: { type: 'string' as const, multiple: true } };
+  it('flags, repeated values, --name=value and -- ', () => {
+    const p = parseOptions(['a.json', '--json', '--case', 'x', '--case=y', '--', '--weird'], spec);
+    expect([...p.flags]).toEqual(['json']);
+    expect(p.values.get('case')).toEqual(['x', 'y']);
+    expect(p.positionals).toEqual(['a.json', '--weird']);
+  });
+  it('rejects unknown options and short flags it does not know', () => {
+    expect(() => parseOptions(['-j'], spec)).toThrow('unknown option "-j"');
+    expect(() => parseOptions(['--cases=x'], spec)).toThrow('unknown option "--cases"');
+  });
+});
