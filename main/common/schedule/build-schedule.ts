@@ -41,7 +41,8 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
 
   const groupsOf = new Map<string, string[]>(project.members.map((m) => [m.id, []]));
   const groupIds = new Set<string>([...(project.groups ?? []).map((g) => g.id), ...project.members.flatMap((m) => m.groups ?? [])]);
-  for (const g of groupIds) for (const id of membersOfGroup(project, g)) groupsOf.get(id)?.push(g);
+  const groupLabel = (g: string) => project.groups?.find((x) => x.id === g)?.label ?? g;
+  for (const g of groupIds) for (const id of membersOfGroup(project, g)) groupsOf.get(id)?.push(groupLabel(g));
 
   const env = envelopeOf(report);
   const envById = new Map(env.members.map((m) => [m.id, m]));
@@ -85,9 +86,9 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
     tuning = {
       summary: t.summary,
       date: options.issueDate,
-      targets: t.targets.map((o) => ({ label: o.label, met: o.met, value: targetValueText(units, o.value, o.limit, o.unit, o.sense) })),
+      targets: t.targets.map((o) => ({ label: o.label, met: o.met, value: o.target.kind === 'noSlack' ? `least tension ${formatForce(units, o.value)} ${labels.force} (must stay above 0)` : targetValueText(units, o.value, o.limit, o.unit, o.sense) })),
       variables: t.variables.map((v) => ({
-        group: v.group, by: v.by,
+        group: groupLabel(v.group), by: v.by,
         value: v.by === 'pretension' ? `${formatForce(units, v.final)} ${labels.force}` : `length factor ${formatNumber(v.final, 5)}`,
       })),
       diagnosis: t.diagnosis,

@@ -29,7 +29,7 @@ export function scheduleCsv(doc: ScheduleDocument): string {
     ['member', 'groups', 'section', 'kind', `cut length (${l.length})`, `installation tension (${l.force})`, 'f1 string (Hz)', 'f in-plane (Hz)',
       `max tension (${l.force})`, 'max tension case', `min tension (${l.force})`, 'min tension case', 'utilisation', 'utilisation case', 'check', 'failed checks'],
     ...doc.members.map((m) => [
-      m.id, m.groups.join(' '), m.section, m.kind, L(m.cutLength), F(m.installationTension), num(m.frequency, 3), num(m.frequencyInPlane, 3),
+      m.id, m.groups.join('; '), m.section, m.kind, L(m.cutLength), F(m.installationTension), num(m.frequency, 3), num(m.frequencyInPlane, 3),
       F(m.envelopeMax), m.envelopeMaxCase, F(m.envelopeMin), m.envelopeMinCase, num(m.utilisation, 4), m.utilisationCase,
       m.checkStatus.toUpperCase(), m.failedChecks.join(' '),
     ]),

@@ -83,7 +83,7 @@ export function scheduleHtml(doc: ScheduleDocument): string {
   if (doc.temperatureTable && doc.temperatureTable.rows.length) {
     const tt = doc.temperatureTable;
     tempHtml = table(`Tension to set at installation (${l.force}, at the lower end) by air temperature (${l.temperature}) — same unstressed lengths as the design state`,
-      ['Member', ...tt.temperatures.map((t) => `${formatTemperature(u, t)}`)],
+      ['Member', ...tt.temperatures.map((t) => `${formatTemperature(u, t)} ${l.temperature}`)],
       tt.rows.map((r) => [`<b>${e(r.member)}</b>`, ...r.tensions.map((x) => formatForce(u, x))]));
   }
 
@@ -117,7 +117,6 @@ small { font-size: 6.5pt; }
 table.meta { width: auto; }
 table.meta th { text-align: left; padding-right: 4mm; border: none; font-weight: bold; }
 table.meta td { border: none; }
-tbody tr:nth-child(even) td { border-bottom-style: dotted; }
 @media screen { body { max-width: 190mm; margin: 8mm auto; } }
 </style>
 </head>

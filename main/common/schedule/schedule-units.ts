@@ -35,8 +35,12 @@ export function temperatureIn(units: ScheduleUnits, kelvin: number): number {
   return units === 'US' ? (c * 9) / 5 + 32 : c;
 }
 
-const text = (v: number | null | undefined, digits: number): string =>
-  v === null || v === undefined || !Number.isFinite(v) ? '—' : v.toFixed(digits);
+/** Fixed decimals; '—' for a missing value; never "-0.0" (values that round to zero print unsigned). */
+const text = (v: number | null | undefined, digits: number): string => {
+  if (v === null || v === undefined || !Number.isFinite(v)) return '—';
+  const s = v.toFixed(digits);
+  return Number(s) === 0 ? (0).toFixed(digits) : s;
+};
 
 export function formatForce(units: ScheduleUnits, newtons: number | null | undefined): string {
   return text(newtons === null || newtons === undefined ? newtons : forceIn(units, newtons), units === 'US' ? 2 : 1);

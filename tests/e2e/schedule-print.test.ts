@@ -1,0 +1,109 @@
+/**
+ * The printed schedule: HTML → PDF in headless Chromium (playwright-core, the Debian chromium),
+ * A4 and US Letter; pages rendered to PNG with poppler's pdftoppm and read back with pdftotext.
+ * Artifacts go to test-artifacts/schedule/ for a human look.
+ * Page sizes: ISO 216 A4 = 210 × 297 mm = 595.28 × 841.89 pt; ANSI Letter = 8.5 × 11 in = 612 × 792 pt.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { chromium, type BrowserContext } from 'playwright-core';
+import { execFileSync } from 'node:child_process';
+import { mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync, existsSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+import { installationData, runChecks, solveProject, tuneProject, solveNamedCases } from '../../solver/index.ts';
+import { buildSchedule, scheduleHtml, SCHEDULE_CAUTION } from '../../main/common/schedule/index.ts';
+import { mastProject } from '../main/common/schedule/mast-fixture.ts';
+
+const ARTIFACTS = resolve('test-artifacts/schedule');
+const CHROMIUM = '/usr/bin/chromium';
+let context: BrowserContext;
+let profile: string;
+let html: { a4: string; letter: string };
+
+beforeAll(async () => {
+  const project = mastProject();
+  project.tuning = {
+    variables: [{ group: 'mast/guys level 1', by: 'pretension' }, { group: 'mast/guys level 2', by: 'pretension' }],
+    targets: [
+      { kind: 'tensionShare', group: 'mast/guys level 1', share: 0.1 },
+      { kind: 'tensionShare', group: 'mast/guys level 2', share: 0.1 },
+      { kind: 'noSlack', group: 'mast/guys', case: 'wind0' },
+    ],
+  };
+  const tuning = tuneProject(project, { solveCases: solveNamedCases });
+  const tuned = tuning.project;
+  const report = solveProject(tuned).report;
+  const src = { project: tuned, report, checks: runChecks(tuned, report), installation: installationData(tuned), tuning };
+  html = {
+    a4: scheduleHtml(buildSchedule(src, { issueDate: '2026-12-01', paper: 'a4' })),
+    letter: scheduleHtml(buildSchedule(src, { issueDate: '2026-12-01', paper: 'letter', units: 'US' })),
+  };
+  mkdirSync(ARTIFACTS, { recursive: true });
+  profile = mkdtempSync(join(tmpdir(), 'stayset-print-'));
+  context = await chromium.launchPersistentContext(profile, {
+    executablePath: CHROMIUM, headless: true,
+    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+});
+
+afterAll(async () => {
+  await context?.close();
+  if (profile) rmSync(profile, { recursive: true, force: true });
+});
+
+function pdfInfo(pdf: string): { pages: number; width: number; height: number } {
+  const out = execFileSync('pdfinfo', [pdf], { encoding: 'utf8' });
+  const pages = Number(/Pages:\s+(\d+)/.exec(out)![1]);
+  const size = /Page size:\s+([\d.]+) x ([\d.]+) pts/.exec(out)!;
+  return { pages, width: Number(size[1]), height: Number(size[2]) };
+}
+
+/** Share of pixels darker than mid-grey in a PNG rendered by pdftoppm (-gray -> PGM is simpler to read). */
+function inkShare(pgm: Buffer): number {
+  // Binary PGM (P5): header "P5\n<w> <h>\n<max>\n" then w·h bytes.
+  const text = pgm.subarray(0, 64).toString('latin1');
+  const m = /^P5\s+(\d+)\s+(\d+)\s+(\d+)\s/.exec(text)!;
+  const offset = m[0].length;
+  const w = Number(m[1]), h = Number(m[2]);
+  let dark = 0;
+  for (let i = 0; i < w * h; i++) if (pgm[offset + i] < 128) dark++;
+  return dark / (w * h);
+}
+
+describe.runIf(existsSync(CHROMIUM))('printed member tension schedule', () => {
+  for (const [paper, format, w, h] of [['a4', 'A4', 595.28, 841.89], ['letter', 'Letter', 612, 792]] as const) {
+    it(`prints on ${format} with the caution, readable pages and repeating headers`, async () => {
+      const page = await context.newPage();
+      await page.setContent(html[paper], { waitUntil: 'load' });
+      const pdf = join(ARTIFACTS, `schedule-${paper}.pdf`);
+      writeFileSync(join(ARTIFACTS, `schedule-${paper}.html`), html[paper]);
+      await page.pdf({ path: pdf, format, printBackground: true });
+      await page.close();
+
+      const info = pdfInfo(pdf);
+      expect(info.pages).toBeGreaterThanOrEqual(1);
+      // Chromium rounds A4 to 8.27 × 11.7 in (595.92 × 842.4 pt): allow 1.5 pt.
+      expect(Math.abs(info.width - w)).toBeLessThan(1.5);
+      expect(Math.abs(info.height - h)).toBeLessThan(1.5);
+
+      const text = execFileSync('pdftotext', ['-layout', pdf, '-'], { encoding: 'utf8' });
+      expect(text.replace(/\s+/g, ' ')).toContain(SCHEDULE_CAUTION);
+      expect(text).toContain('Harrow Fell relay mast');
+      expect(text).toContain('Installation temperature table');
+      expect(text).toContain(paper === 'letter' ? 'kip' : 'kN');
+
+      for (const f of readdirSync(ARTIFACTS)) if (f.startsWith(`schedule-${paper}-`)) rmSync(join(ARTIFACTS, f));
+      execFileSync('pdftoppm', ['-r', '60', '-png', pdf, join(ARTIFACTS, `schedule-${paper}`)]);
+      const pngs = readdirSync(ARTIFACTS).filter((f) => f.startsWith(`schedule-${paper}-`) && f.endsWith('.png'));
+      expect(pngs.length).toBe(info.pages);
+      // Not blank: every page carries ink (grey render of the same pages).
+      const grey = join(profile, `grey-${paper}`);
+      execFileSync('pdftoppm', ['-r', '30', '-gray', pdf, grey]);
+      for (const f of readdirSync(profile).filter((x) => x.startsWith(`grey-${paper}`))) {
+        const share = inkShare(readFileSync(join(profile, f)));
+        expect(share, f).toBeGreaterThan(0.005);
+        expect(share, f).toBeLessThan(0.6);
+      }
+    });
+  }
+});
