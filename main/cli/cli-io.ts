@@ -11,7 +11,7 @@ export interface CliIO {
   cwd: string;
 }
 
-/** Exit statuses of every command. */
+/** Exit statuses shared by every command (a command may document further ones, e.g. check: 3). */
 export const EXIT = {
   /** Done, and every analysis converged. */
   ok: 0,
