@@ -1,0 +1,27 @@
+/**
+ * Electron wiring of the security rules in navigation-policy.ts: session-wide permission and
+ * request filters, CSP on every response, and per-window navigation / popup / webview blocks.
+ */
+import type { Session, WebContents } from 'electron';
+import { STAYSET_CSP } from '../common/web-protocol.ts';
+import { decideNavigation, decidePermission, decideWindowOpen, isAllowedRequest } from './navigation-policy.ts';
+
+export function hardenSession(session: Session): void {
+  session.setPermissionRequestHandler((_wc, permission, callback) => callback(decidePermission(permission)));
+  session.setPermissionCheckHandler((_wc, permission) => decidePermission(permission));
+  session.webRequest.onBeforeRequest((details, callback) => callback({ cancel: !isAllowedRequest(details.url) }));
+  session.webRequest.onHeadersReceived((details, callback) => {
+    callback({ responseHeaders: { ...details.responseHeaders, 'Content-Security-Policy': [STAYSET_CSP] } });
+  });
+}
+
+export function hardenWebContents(wc: WebContents): void {
+  wc.on('will-navigate', (event, url) => {
+    if (decideNavigation(url) === 'deny') event.preventDefault();
+  });
+  wc.on('will-redirect', (event, url) => {
+    if (decideNavigation(url) === 'deny') event.preventDefault();
+  });
+  wc.on('will-attach-webview', (event) => event.preventDefault());
+  wc.setWindowOpenHandler(({ url }) => decideWindowOpen(url));
+}
