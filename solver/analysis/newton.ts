@@ -22,6 +22,7 @@ import type { SolveControl } from './progress.ts';
 import type { Workspace } from './workspace.ts';
 import { addGravity, assemble } from '../assembly/assemble.ts';
 import { STANDARD_GRAVITY } from '../model/constants.ts';
+import { nowMs } from './clock.ts';
 
 export interface NewtonOptions {
   /** Relative residual for convergence (default 1e-10). */
@@ -58,6 +59,16 @@ export interface NewtonOutcome {
   singularDofs?: number[];
   /** Negative pivots of the last tangent (inertia: > 0 means not positive definite). */
   negativePivots: number;
+  /** Time spent in numeric factorisations, s. */
+  factorSeconds: number;
+}
+
+interface Counters {
+  iterations: number;
+  residual: number;
+  negativePivots: number;
+  singularDof: number;
+  factorMs: number;
 }
 
 export interface CaseTag {
@@ -78,7 +89,7 @@ export function solveEquilibrium(
 
   const x = new Float64Array(n); // displacement u from the start positions
   const saved = new Float64Array(n);
-  const counters = { iterations: 0, residual: 0, negativePivots: 0, singularDof: -1 };
+  const counters: Counters = { iterations: 0, residual: 0, negativePivots: 0, singularDof: -1, factorMs: 0 };
 
   if (start) {
     for (let d = 0; d < n; d++) x[d] = start[d] - ws.model.coords[d];
@@ -135,9 +146,12 @@ export function evaluateState(ws: Workspace, loads: CaseLoads, x: Float64Array):
 
 function outcome(
   status: AnalysisStatus, x: Float64Array,
-  c: { iterations: number; residual: number; negativePivots: number }, loadFactor: number, loadSteps: number,
+  c: Counters, loadFactor: number, loadSteps: number,
 ): NewtonOutcome {
-  return { status, u: x, iterations: c.iterations, loadSteps, residual: c.residual, loadFactor, negativePivots: c.negativePivots };
+  return {
+    status, u: x, iterations: c.iterations, loadSteps, residual: c.residual, loadFactor,
+    negativePivots: c.negativePivots, factorSeconds: c.factorMs / 1000,
+  };
 }
 
 /** Residual R(u, λ) into ws.residual (zero at restrained DOFs); returns [‖R‖, reference norm]. */
@@ -170,7 +184,7 @@ function evaluateResidual(
 function newtonAtLoad(
   ws: Workspace, loads: CaseLoads, fixedLoad: Float64Array, x: Float64Array, lambda: number,
   options: NewtonOptions, control: SolveControl, tag: CaseTag,
-  counters: { iterations: number; residual: number; negativePivots: number; singularDof: number },
+  counters: Counters,
 ): StepResult {
   const { step, residual, ldl, values } = ws;
   const maxNodalStep = options.maxStepFraction * ws.size;
@@ -186,7 +200,9 @@ function newtonAtLoad(
     if (control.isCancelled?.()) return 'cancelled';
     previous = norm;
 
+    const t0 = nowMs();
     const pivot = ldl.factor(values, options.pivotTolerance);
+    counters.factorMs += nowMs() - t0;
     counters.iterations++;
     if (pivot >= 0) { counters.singularDof = pivot; return 'singular'; }
     counters.negativePivots = ldl.negativePivots;
