@@ -1,5 +1,5 @@
 import type { GroupSpec, MemberSpec, NodeSpec, SectionSpec, Vec3 } from '../../../solver/index.ts';
-import { DEFAULT_GUY_PRETENSION_SHARE } from '../../../solver/index.ts';
+import { DEFAULT_GUY_PRETENSION_SHARE, DEFAULT_LATTICE_DRAG_FACTOR } from '../../../solver/index.ts';
 import type { GeneratedParts, SectionInput } from './types.ts';
 import { ParamCheck, roundCoord, sectionSpec } from './types.ts';
 
@@ -120,7 +120,13 @@ export function generateGuyedMast(recordId: string, p: GuyedMastParams): Generat
   let topId = baseId;
 
   if (lattice) {
-    sections.push(sectionSpec(id('leg'), p.leg, { lattice: { ...latticeInfo, share: 1 / 3 }, label: p.leg.label ?? 'mast leg' }));
+    // Each of the 3 leg lines carries a third of the whole-mast lattice drag: the drag factor per
+    // leg is Cf / 3 (the format's lattice.share would say this directly once the schema has it).
+    const cf = p.latticeDragFactor ?? DEFAULT_LATTICE_DRAG_FACTOR;
+    sections.push(sectionSpec(id('leg'), p.leg, {
+      lattice: { faceWidth: p.faceWidth, solidity: latticeInfo.solidity, dragFactor: roundCoord(cf / 3) },
+      label: p.leg.label ?? `mast leg (lattice drag factor ${cf} shared by 3 legs)`,
+    }));
     sections.push(sectionSpec(id('bracing'), { ...p.bracing!, diameter: undefined, dragCoefficient: undefined }, { label: p.bracing!.label ?? 'mast bracing' }));
     const r = p.faceWidth / Math.sqrt(3);
     const levels = panelLevels(p);
