@@ -22,6 +22,8 @@ export interface ElementState {
   slack: Uint8Array;
 }
 
+// Module-scope alias: some loaders compile imports to getter calls; keep them out of the hot loop.
+const evaluateElement = evaluateTrussTL;
 const out = new Float64Array(OUT_SIZE);
 const kb = new Float64Array(9);
 
@@ -54,7 +56,7 @@ export function assemble(
     const a3 = 3 * a, b3 = 3 * b;
     const tensionOnly = elemTensionOnly[e] === 1;
     const E = elemE[e];
-    evaluateTrussTL(
+    evaluateElement(
       dX[3 * e] + u[b3] - u[a3], dX[3 * e + 1] + u[b3 + 1] - u[a3 + 1], dX[3 * e + 2] + u[b3 + 2] - u[a3 + 2],
       elemRefLength[e], elemS0[e], E, elemArea[e], elemAlpha[e] * dT,
       tensionOnly, CABLE_STRESS_FLOOR_RATIO * E, out, values ? kb : null, 0,
