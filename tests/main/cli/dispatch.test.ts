@@ -42,3 +42,17 @@ describe('stayset dispatcher', () => {
     }
   });
 });
+
+describe('stayset from another folder', () => {
+  it('finds its sources relative to the bin and resolves FILE against the working folder', async () => {
+    const { tmpdir } = await import('node:os');
+    const { mkdtempSync, copyFileSync } = await import('node:fs');
+    const dir = mkdtempSync(`${tmpdir()}/stayset-cli-`);
+    copyFileSync(`${REPO_ROOT}tests/fixtures/projects/axial-bar.stayset.json`, `${dir}/bar.stayset.json`);
+    const before = readFileSync(`${dir}/bar.stayset.json`, 'utf8');
+    const r = runStayset(['solve', 'bar.stayset.json', '--json'], dir);
+    expect(r.code).toBe(0);
+    expect(JSON.parse(r.stdout).cases[0].id).toBe('pull');
+    expect(readFileSync(`${dir}/bar.stayset.json`, 'utf8')).toBe(before);
+  });
+});

@@ -20,6 +20,11 @@ class Stop extends Error {
   }
 }
 
+/** Characters that need no attention inside a string (sticky: matched from lastIndex). */
+const PLAIN_RUN = /[^"\\\u0000-\u001f]*/y;
+/** The characters a number can be made of (sticky). */
+const NUMBER_RUN = /[-+\d.eE]*/y;
+
 function describe(ch: string): string {
   if (ch === '\n') return 'a line break';
   if (ch === '\t') return 'a tab';
@@ -36,17 +41,25 @@ export function scanJson(text: string): JsonProblem | null {
     throw new Stop({ offset: text.length, problem: `the file ends in the middle of ${what}`, truncated: true });
   };
   const ws = (): void => {
-    while (i < text.length && ' \t\n\r'.includes(text[i])) i++;
+    for (;;) {
+      const c = text.charCodeAt(i);
+      if (c === 0x20 || c === 0x0a || c === 0x0d || c === 0x09) i++;
+      else return;
+    }
   };
   const str = (): string => {
     const start = i;
     i++; // opening quote
     for (;;) {
+      PLAIN_RUN.lastIndex = i;
+      PLAIN_RUN.test(text);
+      i = PLAIN_RUN.lastIndex;
       if (i >= text.length) end('a string');
       const c = text[i];
       if (c === '"') {
         i++;
-        return JSON.parse(text.slice(start, i)) as string;
+        const raw = text.slice(start + 1, i - 1);
+        return raw.includes('\\') ? (JSON.parse(text.slice(start, i)) as string) : raw;
       }
       if (c === '\\') {
         const n = text[i + 1];
@@ -61,15 +74,17 @@ export function scanJson(text: string): JsonProblem | null {
     }
   };
   const number = (): void => {
-    const run = /^[-+\d.eE]*/.exec(text.slice(i, i + 400))![0];
+    NUMBER_RUN.lastIndex = i;
+    const run = NUMBER_RUN.exec(text)![0];
     const m = /^-?(0|[1-9]\d*)(\.\d+)?([eE][+-]?\d+)?$/.exec(run);
     if (!m && i + run.length >= text.length) end('a number');
     if (!m) fail('a malformed number');
     i += run.length;
   };
-  const value = (what: string): void => {
+  /** `what` names the value for a truncation message; `key` (if any) is its property name. */
+  const value = (what: string, key?: string): void => {
     ws();
-    if (i >= text.length) end(what);
+    if (i >= text.length) end(key === undefined ? what : `the value of ${JSON.stringify(key)}`);
     const c = text[i];
     if (c === '{') return object();
     if (c === '[') return array();
@@ -111,7 +126,7 @@ export function scanJson(text: string): JsonProblem | null {
       if (i >= text.length) end('an object');
       if (text[i] !== ':') fail(`expected ":" after property ${JSON.stringify(key)}`);
       i++;
-      value(`the value of ${JSON.stringify(key)}`);
+      value('a value', key);
       ws();
       if (i >= text.length) end('an object');
       if (text[i] === ',') i++;
