@@ -15,6 +15,9 @@ export interface SparseLDLOptions {
   ordering?: 'amd' | 'natural';
   /** Numeric kernel: 'supernodal' (default, fast) or 'simplicial' (up-looking, the reference). */
   kernel?: 'supernodal' | 'simplicial';
+  /** Supernodal kernel: merge small supernodes into their parents (explicit zeros). Default false:
+   *  no measurable gain on the benchmark nets, 9 % more storage. */
+  relaxedSupernodes?: boolean;
 }
 
 /** Default pivot tolerance: a pivot smaller than 1e-12 of its original diagonal counts as zero. */
@@ -75,7 +78,7 @@ export class SparseLDL {
     if (kernel === 'simplicial') {
       backend = new SimplicialBackend(n, upper, parent, counts);
     } else {
-      const st = supernodalStructure(n, upper.ptr, upper.idx, parent, counts);
+      const st = supernodalStructure(n, upper.ptr, upper.idx, parent, counts, options.relaxedSupernodes ?? false);
       backend = new SupernodalLDL(st, supernodalScatterMap(st, pattern.colPtr, pattern.rowIdx, pinv));
     }
     return new SparseLDL(n, perm, backend, pattern.colPtr[n]);

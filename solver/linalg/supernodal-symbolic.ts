@@ -1,12 +1,14 @@
+import { supernodePartition } from './supernode-partition.ts';
+
 /**
  * Symbolic analysis for the supernodal LDLᵀ: supernode partition, row structure of each
  * supernode, storage offsets and the scatter map from A's values into L's storage.
  *
  * Input is the permuted matrix C = P A Pᵀ with P including a postorder of the elimination tree,
  * so the columns of every subtree are contiguous and children precede parents.
- * A supernode is a run of columns f..l−1 with parent[j] = j+1 and |L(:,j)| = |L(:,j+1)| + 1,
- * i.e. identical structure below the diagonal block (fundamental supernodes in the sense of
- * Liu, Ng & Peyton, SIAM J. Matrix Anal. Appl. 14(1), 1993; Davis 2006, §4.6 and ch. 9 remarks).
+ * Supernodes come from supernodePartition (fundamental supernodes, optionally relaxed). Within a
+ * supernode the structures of the columns are nested, so its rows are its columns plus the
+ * structure of its last column below the block; relaxed supernodes store explicit zeros.
  * Row structure: Struct(s) = {f..l−1} ∪ rows ≥ l of A(:, f..l−1) ∪ Struct(children) ∩ [l, n)
  * (Davis 2006, §4.1: the pattern of L(:,j) is A's column plus the children's patterns).
  *
@@ -31,22 +33,17 @@ export interface SupernodalStructure {
   /** Largest nrows and ncols over the supernodes (workspace sizes). */
   maxRows: number;
   maxCols: number;
-  /** nnz(L) including the diagonal (counting the lower trapezoid of each block). */
+  /** nnz(L) including the diagonal (structural, without the explicit zeros of relaxed supernodes). */
   factorNonzeros: number;
+  /** Stored entries of L: the lower trapezoid of every supernode block, explicit zeros included. */
+  storedNonzeros: number;
 }
 
 export function supernodalStructure(
-  n: number, upPtr: Int32Array, upIdx: Int32Array, parent: Int32Array, colCount: Int32Array,
+  n: number, upPtr: Int32Array, upIdx: Int32Array, parent: Int32Array, colCount: Int32Array, relax = true,
 ): SupernodalStructure {
-  // ---- partition ----
-  const starts: number[] = [];
-  for (let j = 0; j < n; j++) {
-    const joins = j > 0 && parent[j - 1] === j && colCount[j - 1] === colCount[j] + 1;
-    if (!joins) starts.push(j);
-  }
-  const nsuper = starts.length;
-  starts.push(n);
-  const superStart = Int32Array.from(starts);
+  const superStart = supernodePartition(n, parent, colCount, relax);
+  const nsuper = superStart.length - 1;
   const colToSuper = new Int32Array(n);
   for (let s = 0; s < nsuper; s++) for (let j = superStart[s]; j < superStart[s + 1]; j++) colToSuper[j] = s;
   // ---- lower-triangle rows of C by column (transpose of the upper part) ----
@@ -67,8 +64,12 @@ export function supernodalStructure(
     childHead[ps] = s;
   }
   // ---- row structure ----
+  // A supernode's rows are those of its first column (its columns' structures are nested).
   const rowPtr = new Int32Array(nsuper + 1);
-  for (let s = 0; s < nsuper; s++) rowPtr[s + 1] = rowPtr[s] + colCount[superStart[s]] + 1;
+  for (let s = 0; s < nsuper; s++) {
+    const f = superStart[s], l = superStart[s + 1];
+    rowPtr[s + 1] = rowPtr[s] + (l - f) + colCount[l - 1];
+  }
   const rows = new Int32Array(rowPtr[nsuper]);
   const mark = new Int32Array(n).fill(-1);
   const buf = new Int32Array(n);
@@ -97,15 +98,16 @@ export function supernodalStructure(
   }
   // ---- storage ----
   const valPtr = new Int32Array(nsuper + 1);
-  let maxRows = 0, maxCols = 0, lnz = 0;
+  let maxRows = 0, maxCols = 0, lnz = n, stored = 0;
+  for (let j = 0; j < n; j++) lnz += colCount[j];
   for (let s = 0; s < nsuper; s++) {
     const nr = rowPtr[s + 1] - rowPtr[s], nc = superStart[s + 1] - superStart[s];
     if (nr > maxRows) maxRows = nr;
     if (nc > maxCols) maxCols = nc;
     valPtr[s + 1] = valPtr[s] + nr * nc;
-    lnz += nr * nc - (nc * (nc - 1)) / 2;
+    stored += nr * nc - (nc * (nc - 1)) / 2;
   }
-  return { n, nsuper, superStart, colToSuper, rowPtr, rows, valPtr, maxRows, maxCols, factorNonzeros: lnz };
+  return { n, nsuper, superStart, colToSuper, rowPtr, rows, valPtr, maxRows, maxCols, factorNonzeros: lnz, storedNonzeros: stored };
 }
 
 /**

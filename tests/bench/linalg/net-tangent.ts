@@ -11,9 +11,10 @@ import { patternFromCoordinates, type SymmetricPattern } from '../../../solver/l
  */
 export interface NetTangent { pattern: SymmetricPattern; values: Float64Array; n: number }
 
-export function netTangent(cells: number): NetTangent {
+/** `axialForce` N in every cable (default the 50 kN pretension; negative = compression, for tests). */
+export function netTangent(cells: number, axialForce = 50e3): NetTangent {
   const EA = 1.5e-4 * 160e9; // N
-  const N = 50e3; // N
+  const N = axialForce; // N
   const side = cells + 1;
   const free = (ix: number, iy: number): number =>
     ix <= 0 || iy <= 0 || ix >= cells || iy >= cells ? -1 : (iy - 1) * (cells - 1) + (ix - 1);
