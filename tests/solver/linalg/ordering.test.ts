@@ -40,3 +40,35 @@ describe('fill-reducing ordering', () => {
     expect(amd).toBeLessThan(0.5 * natural);
   });
 });
+
+describe('edge cases', () => {
+  it('handles 0×0, 1×1, diagonal, disconnected and dense patterns', () => {
+    const rand = prng(11);
+    const cases = [
+      randomSystem(rand, 1, 1, 0),
+      randomSystem(rand, 7, 3, 0), // diagonal blocks only: seven disconnected nodes
+      randomSystem(rand, 12, 1, 1), // dense
+      randomSystem(rand, 30, 3, 0.02), // sparse, likely disconnected
+    ];
+    for (const sys of cases) {
+      for (const kernel of ['supernodal', 'simplicial'] as const) {
+        const ldl = SparseLDL.analyse(sys.pattern, { kernel });
+        expect(() => validatePermutation(ldl.perm, sys.pattern.n)).not.toThrow();
+        expect(ldl.factor(sys.values)).toBe(-1);
+        const b = Float64Array.from({ length: ldl.n }, (_, i) => i + 1);
+        const x = new Float64Array(ldl.n), r = new Float64Array(ldl.n);
+        ldl.solve(b, x);
+        for (let i = 0; i < ldl.n; i++) {
+          let s = 0;
+          for (let j = 0; j < ldl.n; j++) s += sys.dense[i][j] * x[j];
+          r[i] = s;
+        }
+        for (let i = 0; i < ldl.n; i++) expect(r[i]).toBeCloseTo(b[i], 10);
+      }
+    }
+    const empty = SparseLDL.analyse({ n: 0, colPtr: Int32Array.from([0]), rowIdx: new Int32Array(0) });
+    expect(empty.factor(new Float64Array(0))).toBe(-1);
+    expect(empty.factorNonzeros).toBe(0);
+    empty.solve(new Float64Array(0), new Float64Array(0));
+  });
+});
