@@ -7,7 +7,7 @@ import { parseProjectText, serializeProject } from '../../main/common/project/in
 import { demoCanopy, demoMast } from '../fixtures/make-demos.ts';
 
 const assets = fileURLToPath(new URL('../../assets/', import.meta.url));
-const files = readdirSync(assets).filter((f) => f.endsWith('.stayset.json'));
+const files = readdirSync(assets).filter((f) => f.endsWith('.stayset') || f.endsWith('.stayset.json'));
 const read = (f: string): ProjectFile => {
   const r = parseProjectText(readFileSync(assets + f, 'utf8'));
   if (!r.ok) throw new Error(`${f}: ${r.errors.join('\n')}`);
@@ -18,7 +18,7 @@ const caseOf = (f: string, id: string): CaseResult => solved.get(f)!.cases.find(
 const maxTension = (c: CaseResult) => Math.max(...c.members.map((m) => m.tensionMax));
 
 describe('demo projects in assets/', () => {
-  it('there are demos', () => expect(files).toEqual(expect.arrayContaining(['demo-mast.stayset.json', 'demo-canopy.stayset.json'])));
+  it('there are demos', () => expect(files).toEqual(expect.arrayContaining(['demo-mast.stayset', 'demo-canopy.stayset'])));
 
   for (const f of files) {
     it(`${f}: validates, every case converges and the checks pass`, () => {
@@ -39,19 +39,19 @@ describe('demo projects in assets/', () => {
   }
 
   it('committed demo files are what tests/fixtures/make-demos.ts writes', () => {
-    expect(readFileSync(assets + 'demo-mast.stayset.json', 'utf8')).toBe(serializeProject(demoMast()));
-    expect(readFileSync(assets + 'demo-canopy.stayset.json', 'utf8')).toBe(serializeProject(demoCanopy()));
+    expect(readFileSync(assets + 'demo-mast.stayset', 'utf8')).toBe(serializeProject(demoMast()));
+    expect(readFileSync(assets + 'demo-canopy.stayset', 'utf8')).toBe(serializeProject(demoCanopy()));
   });
 
   it('demo mast: three-fold symmetry — wind toward θ and θ + 120° give the same peak guy tension', () => {
     // Guys at 90°, 210°, 330° and a triangular mast: rotating the wind by 120° maps the structure onto itself.
-    const f = 'demo-mast.stayset.json';
+    const f = 'demo-mast.stayset';
     expect(maxTension(caseOf(f, 'wind 120'))).toBeCloseTo(maxTension(caseOf(f, 'wind 0')), 3);
     expect(maxTension(caseOf(f, 'wind 180'))).toBeCloseTo(maxTension(caseOf(f, 'wind 60')), 3);
   });
 
   it('demo mast: key numbers (locked from a converged run; regression, not a reference)', () => {
-    const f = 'demo-mast.stayset.json';
+    const f = 'demo-mast.stayset';
     expect(maxTension(caseOf(f, 'dead'))).toBeCloseTo(18532.4, 0);
     expect(maxTension(caseOf(f, 'wind 0'))).toBeCloseTo(22911.9, 0);
     expect(maxTension(caseOf(f, 'ice + wind'))).toBeCloseTo(24193.8, 0);
@@ -61,7 +61,7 @@ describe('demo projects in assets/', () => {
   });
 
   it('demo canopy: key numbers (locked from a converged run; regression, not a reference)', () => {
-    const f = 'demo-canopy.stayset.json';
+    const f = 'demo-canopy.stayset';
     expect(maxTension(caseOf(f, 'dead'))).toBeCloseTo(106717.7, 0);
     expect(maxTension(caseOf(f, 'cold'))).toBeCloseTo(125355.7, 0);
     expect(maxTension(caseOf(f, 'snow'))).toBeCloseTo(118633.6, 0);
