@@ -49,8 +49,8 @@ export interface CaseStats {
   loadSteps: number;
   /** Final relative residual ‖R‖ / ‖F_ref‖. */
   residual: number;
-  /** Time in numeric factorisations of the tangent, s (included in `seconds`). */
-  factorSeconds: number;
+  /** Time in numeric factorisations of the tangent, s (included in `seconds`; always set by the solver). */
+  factorSeconds?: number;
 }
 
 export interface CaseResult {

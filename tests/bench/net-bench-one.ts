@@ -26,7 +26,7 @@ function runOnce(cells: number): NetBenchRow {
   const c = report.cases[0];
   return {
     cells, dofs: c.stats.dofs, iterations: c.stats.iterations, loadSteps: c.stats.loadSteps,
-    factorSeconds: c.stats.factorSeconds, totalSeconds, peakMiB: process.resourceUsage().maxRSS / 1024,
+    factorSeconds: c.stats.factorSeconds ?? 0, totalSeconds, peakMiB: process.resourceUsage().maxRSS / 1024,
     converged: c.converged, residual: c.stats.residual,
     maxDeflection: Math.max(...c.nodes.map((n) => -n.displacement[2])),
   };
