@@ -113,19 +113,26 @@ export function approximateMinimumDegree(
     // ---- prune A_i and E_i, partial degrees, mass elimination ----
     const keep: number[] = [];
     for (const i of Lp) {
-      const newE: number[] = [p];
+      // Compact E_i and A_i in place (fewer short-lived arrays), then add p to E_i.
+      const Ei = E[i];
       let d = 0;
       let h = p;
-      for (const e of E[i]) {
+      let ne = 0;
+      for (let t = 0; t < Ei.length; t++) {
+        const e = Ei[t];
         if (status[e] !== ELEMENT) continue;
         const de = ext[e];
-        if (de > 0) { d += de; newE.push(e); h += e; } else { status[e] = DEAD; Lel[e] = []; }
+        if (de > 0) { d += de; Ei[ne++] = e; h += e; } else { status[e] = DEAD; Lel[e] = []; }
       }
-      const newA: number[] = [];
-      for (const j of A[i]) {
-        if (status[j] === VARIABLE && mark[j] !== tag) { newA.push(j); d += nv[j]; h += j; }
+      Ei.length = ne;
+      Ei.push(p);
+      const Ai = A[i];
+      let na = 0;
+      for (let t = 0; t < Ai.length; t++) {
+        const j = Ai[t];
+        if (status[j] === VARIABLE && mark[j] !== tag) { Ai[na++] = j; d += nv[j]; h += j; }
       }
-      A[i] = newA; E[i] = newE;
+      Ai.length = na;
       if (d === 0) {
         // Mass elimination: i is adjacent to element p only, eliminate it together with p.
         emit(i);
