@@ -2,5 +2,7 @@
 import type { CommandRegistry } from '../command.ts';
 import { solveCommand } from './solve.ts';
 import { checkCommand } from './check.ts';
+import { tuneCommand } from './tune.ts';
+import { scheduleCommand } from './schedule.ts';
 
-export const COMMANDS: CommandRegistry = [solveCommand, checkCommand];
+export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand];

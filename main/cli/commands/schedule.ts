@@ -1,0 +1,126 @@
+/**
+ * `stayset schedule FILE --html OUT.html --csv OUT.csv [--paper a4|letter] [--units SI|US]
+ * [--date YYYY-MM-DD]`: solve every case, run the design checks and the installation data
+ * (cut lengths, temperature table, frequencies) and write the member tension schedule as a
+ * standalone printable HTML document and/or CSV. Each output is written atomically (temp file
+ * beside it, synced, renamed), so a partial file is never left behind.
+ */
+import { resolve } from 'node:path';
+import { CheckInputError, installationData, runChecks, solveProject } from '../../../solver/index.ts';
+import type { CheckReport, InstallationData, SolveReport } from '../../../solver/index.ts';
+import { buildSchedule, scheduleCsv, scheduleHtml } from '../../common/schedule/index.ts';
+import type { PaperSize, ScheduleUnits } from '../../common/schedule/index.ts';
+import type { CliCommand } from '../command.ts';
+import { EXIT, UsageError } from '../cli-io.ts';
+import type { CliIO } from '../cli-io.ts';
+import { parseOptions } from '../options.ts';
+import { readProjectFile } from '../read-project-file.ts';
+import { writeFileAtomic } from '../../store/atomic-write.ts';
+
+const HELP = `Writes the member tension schedule: project header and caution, per member the cut
+length, installation tension at the reference temperature, cable frequencies, tension per case
+and envelope, utilisation and check results; then support reactions, the last tuning run and
+the installation temperature table.
+
+Options:
+  --html FILE     Write the printable HTML document (print it to PDF from a browser or the app).
+  --csv FILE      Write the CSV (blocks separated by empty lines; numbers in the chosen units).
+  --paper a4|letter   Page size of the printed document (default a4).
+  --units SI|US   kN, m, °C (default, or the project's display.units) or kip, ft, °F.
+  --date YYYY-MM-DD   Date of issue printed on the schedule (default today).
+  --help          Show this help.
+At least one of --html and --csv is needed. Existing output files are replaced atomically.
+
+Exit status:
+  0  written, every case converged
+  1  written, but some case did not converge (its columns are empty and a note says so),
+     or the analysis failed (nothing written)
+  2  bad input: missing or invalid file, bad option values, output path equal to FILE`;
+
+function oneValue(opts: ReturnType<typeof parseOptions>, name: string): string | undefined {
+  const v = opts.values.get(name);
+  if (!v) return undefined;
+  if (v.length > 1) throw new UsageError(`option "--${name}" given more than once`);
+  return v[0];
+}
+
+function today(): string {
+  const d = new Date();
+  const p = (n: number) => String(n).padStart(2, '0');
+  return `${d.getFullYear()}-${p(d.getMonth() + 1)}-${p(d.getDate())}`;
+}
+
+async function run(args: string[], io: CliIO): Promise<number> {
+  const opts = parseOptions(args, {
+    html: { type: 'string', multiple: true }, csv: { type: 'string', multiple: true },
+    paper: { type: 'string', multiple: true }, units: { type: 'string', multiple: true }, date: { type: 'string', multiple: true },
+  });
+  if (opts.positionals.length !== 1) {
+    throw new UsageError(opts.positionals.length === 0 ? 'schedule needs a project FILE' : `schedule takes one FILE (got ${opts.positionals.length})`);
+  }
+  const file = opts.positionals[0];
+  const htmlOut = oneValue(opts, 'html');
+  const csvOut = oneValue(opts, 'csv');
+  if (!htmlOut && !csvOut) throw new UsageError('schedule needs --html FILE and/or --csv FILE');
+  const paper = (oneValue(opts, 'paper') ?? 'a4').toLowerCase();
+  if (paper !== 'a4' && paper !== 'letter') throw new UsageError(`--paper must be a4 or letter, got "${paper}"`);
+  const unitsRaw = oneValue(opts, 'units');
+  const units = unitsRaw?.toUpperCase();
+  if (units !== undefined && units !== 'SI' && units !== 'US') throw new UsageError(`--units must be SI or US, got "${unitsRaw}"`);
+  const date = oneValue(opts, 'date') ?? today();
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(date) || Number.isNaN(Date.parse(date))) throw new UsageError(`--date must be a date as YYYY-MM-DD, got "${date}"`);
+  const inputPath = resolve(io.cwd, file);
+  const outputs = [htmlOut, csvOut].filter((x): x is string => !!x).map((o) => resolve(io.cwd, o));
+  if (outputs.includes(inputPath)) throw new UsageError(`an output path is the project file itself (${file}); choose another name`);
+  if (outputs.length === 2 && outputs[0] === outputs[1]) throw new UsageError('--html and --csv name the same file');
+
+  const read = readProjectFile(file, io.cwd);
+  if (!read.ok) {
+    for (const m of read.errors) io.err(`${m}\n`);
+    return EXIT.badInput;
+  }
+  const project = read.project;
+  let report: SolveReport;
+  let checks: CheckReport | null = null;
+  let installation: InstallationData | null = null;
+  try {
+    report = solveProject(project).report;
+  } catch (e) {
+    io.err(`${file}: the analysis failed: ${(e as Error).message}\n`);
+    return EXIT.notConverged;
+  }
+  try {
+    checks = runChecks(project, report);
+  } catch (e) {
+    if (e instanceof CheckInputError) {
+      io.err(`${file}: ${e.message}\n`);
+      return EXIT.badInput;
+    }
+    throw e;
+  }
+  try {
+    installation = installationData(project);
+  } catch (e) {
+    io.err(`${file}: installation data left out: ${(e as Error).message}\n`);
+  }
+  const doc = buildSchedule({ project, report, checks, installation }, {
+    issueDate: date, paper: paper as PaperSize, units: units as ScheduleUnits | undefined,
+  });
+  try {
+    if (htmlOut) await writeFileAtomic(resolve(io.cwd, htmlOut), scheduleHtml(doc));
+    if (csvOut) await writeFileAtomic(resolve(io.cwd, csvOut), scheduleCsv(doc));
+  } catch (e) {
+    io.err(`${file}: writing the schedule failed (${(e as NodeJS.ErrnoException).code ?? (e as Error).message}); existing files are unchanged\n`);
+    return EXIT.badInput;
+  }
+  for (const o of [htmlOut, csvOut]) if (o) io.err(`wrote ${o}\n`);
+  return report.cases.every((c) => c.converged) ? EXIT.ok : EXIT.notConverged;
+}
+
+export const scheduleCommand: CliCommand = {
+  name: 'schedule',
+  summary: 'write the member tension schedule (printable HTML and CSV)',
+  usage: 'stayset schedule FILE --html OUT.html --csv OUT.csv [--paper a4|letter] [--units SI|US] [--date YYYY-MM-DD]',
+  help: HELP,
+  run,
+};

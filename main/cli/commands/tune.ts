@@ -1,0 +1,121 @@
+/**
+ * `stayset tune FILE [--write] [--json]`: adjust group pretensions (tuning.variables) so the
+ * tuning targets are met, print per target the value reached and per variable its final value,
+ * and with --write save the tuned pretensions into FILE (atomic replace, previous file kept as
+ * FILE.bak).
+ */
+import { serializeProject } from '../../common/project/index.ts';
+import { solveNamedCases, tuneProject } from '../../../solver/index.ts';
+import type { ProjectFile, TuningResult } from '../../../solver/index.ts';
+import type { CliCommand } from '../command.ts';
+import { EXIT, UsageError } from '../cli-io.ts';
+import type { CliIO } from '../cli-io.ts';
+import { parseOptions } from '../options.ts';
+import { readProjectFile } from '../read-project-file.ts';
+import { fixed, kN } from '../format/number-text.ts';
+import { textTable } from '../format/text-table.ts';
+import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
+import { writeFileAtomic } from '../../store/atomic-write.ts';
+import { resolve } from 'node:path';
+
+/** Exit status when every case converged but some tuning target is not met. */
+export const EXIT_TARGETS_UNMET = 3;
+
+const HELP = `Tunes the pretension of the groups listed in the project's tuning.variables (one value
+per group: a force in N, or a factor on the unstressed length) so that tuning.targets are met:
+sag limits, tension share of the breaking load at installation (reference case, normally dead
+load), no slack, mast plumb, reaction limits. Each step re-solves the cases the targets name
+(Levenberg–Marquardt with finite-difference sensitivities, bounds by projection). Targets that
+conflict or cannot be met are explained.
+
+Options:
+  --write       Save the tuned pretensions (and tuning.lastRun) into FILE: written to a temp file
+                beside it, synced, then renamed over it; the previous file is kept as FILE.bak.
+                Not done when a case did not converge.
+  --json        Print {"status", "targets", "variables", "iterations", "evaluations",
+                "diagnosis", "summary", "disclaimer"} instead of tables (SI: N, m).
+  --help        Show this help.
+
+Exit status:
+  0  every target met
+  1  a case did not converge (nothing written)
+  2  bad input: missing or invalid file, no tuning section, unknown groups, cases or nodes
+  3  the cases converged but some target is not met`;
+
+function valueText(unit: 'm' | 'N' | 'share', v: number): string {
+  if (unit === 'share') return `${fixed(v * 100, 2)} %`;
+  if (unit === 'm') return `${fixed(v, 3)} m`;
+  return `${kN(v)} kN`;
+}
+
+function variableText(by: 'pretension' | 'unstressedLength', v: number): string {
+  return by === 'pretension' ? `${kN(v)} kN` : `factor ${fixed(v, 6)}`;
+}
+
+export function tuningText(r: TuningResult): string {
+  const targets = textTable(
+    [{ title: 'target' }, { title: 'value', align: 'right' }, { title: 'limit', align: 'right' }, { title: 'governing' }, { title: 'met' }],
+    r.targets.map((t) => [t.label, valueText(t.unit, t.value), t.target.kind === 'noSlack' ? '> 0 kN' : (t.sense === 'equal' ? '= ' : '≤ ') + valueText(t.unit, t.limit), t.governing, t.met ? 'yes' : 'NO']),
+  );
+  const vars = textTable(
+    [{ title: 'group' }, { title: 'by' }, { title: 'start', align: 'right' }, { title: 'final', align: 'right' }, { title: 'bounds' }],
+    r.variables.map((v) => [v.group, v.by, variableText(v.by, v.initial), variableText(v.by, v.final),
+      `${variableText(v.by, v.lower)} … ${variableText(v.by, v.upper)}${v.atBound ? ` (at ${v.atBound} bound)` : ''}`]),
+  );
+  const diag = r.diagnosis.length ? `\nWhy:\n${r.diagnosis.map((d) => `  - ${d}`).join('\n')}\n` : '';
+  return `Tuning targets\n${targets}\nVariables\n${vars}\n${r.summary}\n${diag}\n${RESULTS_DISCLAIMER}\n`;
+}
+
+async function run(args: string[], io: CliIO): Promise<number> {
+  const opts = parseOptions(args, { write: { type: 'boolean' }, json: { type: 'boolean' } });
+  if (opts.positionals.length !== 1) {
+    throw new UsageError(opts.positionals.length === 0 ? 'tune needs a project FILE' : `tune takes one FILE (got ${opts.positionals.length})`);
+  }
+  const file = opts.positionals[0];
+  const read = readProjectFile(file, io.cwd);
+  if (!read.ok) {
+    for (const m of read.errors) io.err(`${m}\n`);
+    return EXIT.badInput;
+  }
+  const project: ProjectFile = read.project;
+  let result: TuningResult;
+  try {
+    result = tuneProject(project, { solveCases: solveNamedCases });
+  } catch (e) {
+    io.err(`${file}: ${(e as Error).message}\n`);
+    return EXIT.badInput;
+  }
+  if (opts.flags.has('json')) {
+    const { project: _omit, ...rest } = result;
+    io.out(`${JSON.stringify({ ...rest, disclaimer: RESULTS_DISCLAIMER }, null, 2)}\n`);
+  } else {
+    io.out(tuningText(result));
+  }
+  if (result.status === 'notConverged') {
+    io.err(`${file}: ${result.diagnosis.join(' ')}\n`);
+    return EXIT.notConverged;
+  }
+  if (opts.flags.has('write')) {
+    const tuned: ProjectFile = {
+      ...result.project,
+      tuning: { ...result.project.tuning!, lastRun: { date: new Date().toISOString(), summary: result.summary } },
+    };
+    const target = resolve(io.cwd, file);
+    try {
+      await writeFileAtomic(target, serializeProject(tuned), { backup: true });
+    } catch (e) {
+      io.err(`${file}: saving failed (${(e as NodeJS.ErrnoException).code ?? (e as Error).message}); the file is unchanged\n`);
+      return EXIT.notConverged;
+    }
+    io.err(`${file}: tuned pretensions written (previous file kept as ${file}.bak)\n`);
+  }
+  return result.status === 'met' ? EXIT.ok : EXIT_TARGETS_UNMET;
+}
+
+export const tuneCommand: CliCommand = {
+  name: 'tune',
+  summary: 'tune group pretensions to meet sag, tension-share, slack, plumb and reaction targets',
+  usage: 'stayset tune FILE [--write] [--json]',
+  help: HELP,
+  run,
+};

@@ -1,0 +1,65 @@
+import { describe, expect, it } from 'vitest';
+import { copyFileSync, existsSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fixture, REPO_ROOT, runStayset } from './run-stayset.ts';
+
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- free-form edits of a JSON fixture
+function copyOfMast(edit?: (p: any) => void): { dir: string; file: string } {
+  const dir = mkdtempSync(join(tmpdir(), 'stayset-tune-'));
+  const file = join(dir, 'mast.stayset.json');
+  copyFileSync(join(REPO_ROOT, fixture('kestrel-moor-mast.stayset.json')), file);
+  if (edit) {
+    const p = JSON.parse(readFileSync(file, 'utf8'));
+    edit(p);
+    writeFileSync(file, JSON.stringify(p, null, 2));
+  }
+  return { dir, file };
+}
+
+describe('stayset tune', () => {
+  it('meets a tension-share target, writes the pretensions atomically and keeps a .bak', () => {
+    const { file } = copyOfMast((p) => { p.tuning.targets = [{ kind: 'tensionShare', group: 'guys', share: 0.12 }]; });
+    const before = readFileSync(file, 'utf8');
+    const r = runStayset(['tune', file, '--write', '--json']);
+    expect(r.stderr).toContain('tuned pretensions written');
+    expect(r.code).toBe(0);
+    const out = JSON.parse(r.stdout);
+    expect(out.status).toBe('met');
+    expect(out.targets[0].value).toBeCloseTo(0.12, 3);
+    expect(out.disclaimer).toMatch(/qualified engineer/);
+    expect(readFileSync(`${file}.bak`, 'utf8')).toBe(before);
+    const saved = JSON.parse(readFileSync(file, 'utf8'));
+    for (const m of saved.members.filter((x: { groups?: string[] }) => x.groups?.includes('guys'))) {
+      expect(m.pretension).toBeCloseTo(out.variables[0].final, 6);
+    }
+    expect(saved.tuning.lastRun.summary).toContain('1 of 1 targets met');
+    // A second run starts at the tuned state: already met, no iteration needed.
+    const again = runStayset(['tune', file, '--json']);
+    expect(again.code).toBe(0);
+    expect(JSON.parse(again.stdout).iterations).toBe(0);
+  });
+
+  it('exits 3 and explains when a target cannot be met within the bounds', () => {
+    const { file } = copyOfMast((p) => { p.tuning.targets = [{ kind: 'sag', group: 'guys', case: 'dead', limit: { absolute: 0.01 } }]; });
+    const r = runStayset(['tune', file]);
+    expect(r.code).toBe(3);
+    expect(r.stdout).toMatch(/above its upper bound 40\.0 kN/);
+    expect(r.stdout).toMatch(/NO/);
+  });
+
+  it('exits 2 on bad input, naming the entry, and writes nothing', () => {
+    const { file } = copyOfMast((p) => { p.tuning.variables[0].group = 'stays'; });
+    const before = readFileSync(file, 'utf8');
+    const r = runStayset(['tune', file, '--write']);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/variables\[0\].*"stays".*does not exist/);
+    expect(r.stdout).toBe('');
+    expect(readFileSync(file, 'utf8')).toBe(before);
+    expect(existsSync(`${file}.bak`)).toBe(false);
+    const none = copyOfMast((p) => { delete p.tuning; });
+    const r2 = runStayset(['tune', none.file]);
+    expect(r2.code).toBe(2);
+    expect(r2.stderr).toMatch(/no "tuning" section/);
+  });
+});
