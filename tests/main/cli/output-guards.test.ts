@@ -23,7 +23,7 @@ const brokenSolver: ProjectSolver = () => {
     id: 'pull', converged: true, status: 'converged', slackMembers: [],
     nodes: [{ id: 'B', position: [10, 0, 0], displacement: [NaN, 0, 0] }],
     members: [{ id: 'R1', tensionMax: Infinity, tensionMin: 0, tensionStart: 0, tensionEnd: 0, slack: false, sag: 0, chordLength: 10 }],
-    reactions: [], stats: { dofs: 1, iterations: 1, seconds: 0, loadSteps: 1, residual: 0 },
+    reactions: [], stats: { dofs: 1, iterations: 1, seconds: 0, factorSeconds: 0, loadSteps: 1, residual: 0 },
   };
   return { report: { cases: [c] }, fields: [] };
 };

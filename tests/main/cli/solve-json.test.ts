@@ -88,7 +88,8 @@ describe('stayset solve --json', () => {
     );
     expect(Object.keys((c.nodes as object[])[0]).sort()).toEqual(['displacement', 'id', 'position']);
     expect(Object.keys((c.reactions as object[])[0]).sort()).toEqual(['force', 'node']);
-    expect(Object.keys(c.stats as object).sort()).toEqual(['dofs', 'iterations', 'loadSteps', 'residual', 'seconds']);
+    // CaseStats of solver/results/types.ts (the solver may add fields; these must be there).
+    expect(Object.keys(c.stats as object)).toEqual(expect.arrayContaining(['dofs', 'iterations', 'loadSteps', 'residual', 'seconds']));
   });
 
   it('a mechanism does not converge: exit 1, status "singular", output still printed', () => {
