@@ -20,6 +20,9 @@ class Stop extends Error {
   }
 }
 
+/** Deepest nesting accepted; a project needs about 6 levels (and recursion must stay bounded). */
+export const MAX_DEPTH = 200;
+
 /** Characters that need no attention inside a string (sticky: matched from lastIndex). */
 const PLAIN_RUN = /[^"\\\u0000-\u001f]*/y;
 /** The characters a number can be made of (sticky). */
@@ -34,6 +37,7 @@ function describe(ch: string): string {
 /** Scans `text`; returns the first problem, or null when it is valid JSON. */
 export function scanJson(text: string): JsonProblem | null {
   let i = 0;
+  let depth = 0;
   const fail = (problem: string, at = i): never => {
     throw new Stop({ offset: at, problem, truncated: false });
   };
@@ -86,8 +90,13 @@ export function scanJson(text: string): JsonProblem | null {
     ws();
     if (i >= text.length) end(key === undefined ? what : `the value of ${JSON.stringify(key)}`);
     const c = text[i];
-    if (c === '{') return object();
-    if (c === '[') return array();
+    if (c === '{' || c === '[') {
+      if (++depth > MAX_DEPTH) fail(`lists and objects nested more than ${MAX_DEPTH} deep`);
+      if (c === '{') object();
+      else array();
+      depth--;
+      return;
+    }
     if (c === '"') {
       str();
       return;

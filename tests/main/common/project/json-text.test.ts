@@ -82,3 +82,11 @@ describe('parseProjectText on broken text', () => {
     expect(parseProjectText(`\uFEFF${SPEC_SUBSET}`).ok).toBe(true);
   });
 });
+
+describe('nesting limit', () => {
+  it('refuses absurdly deep nesting with a message instead of a stack overflow', () => {
+    const deep = `${'['.repeat(100_000)}${']'.repeat(100_000)}`;
+    expect(scanJson(deep)?.problem).toBe('lists and objects nested more than 200 deep');
+    expect(scanJson(`${'['.repeat(200)}${']'.repeat(200)}`)).toBeNull();
+  });
+});
