@@ -164,7 +164,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
     const p = projectStore.project;
     if (!p) return false;
     if (!path && hostKind.value === 'web') {
-      pathPrompt.value = { purpose: 'saveAs', suggestion: projectStore.name.replace(/\.stayset\.json$/, '') + '-copy.stayset.json' };
+      pathPrompt.value = { purpose: 'saveAs', suggestion: projectStore.name.replace(/\.stayset(\.json)?$/, '') + '-copy.stayset' };
       return false;
     }
     const r = await h().saveAs(p, path).catch((e: Error) => ({ ok: false as const, error: e.message }));

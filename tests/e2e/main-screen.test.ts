@@ -1,0 +1,135 @@
+/**
+ * End to end, in headless Chromium against the real web host: open the demo, run the analysis,
+ * find tensions in the member table and tension colours in the 3D view, edit a pretension, save,
+ * reload and see it persisted (and on disk), and see the messages for bad entries.
+ *
+ * Reference for the numbers on screen: the same project solved in Node by solveProject (the table
+ * must show what the solver computed, converted to kN).
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { mkdir, readFile } from 'node:fs/promises';
+import path from 'node:path';
+import type { Page } from 'playwright-core';
+import type { MemberSpec, ProjectFile } from '../../solver/index.ts';
+import { solveProject } from '../../solver/index.ts';
+import { launchBrowser, type Browser } from './browser.ts';
+import { buildRenderer, SCREENSHOTS, startApp, type AppRig } from './serve-app.ts';
+import { pixelStats } from './pixels.ts';
+import { TENSION_STOPS } from '../../renderer/view3d/colour-scale.ts';
+
+let rig: AppRig;
+let browser: Browser;
+let page: Page;
+let project: ProjectFile;
+let guy: MemberSpec;
+const pageErrors: string[] = [];
+
+const shot = (name: string) => page.screenshot({ path: path.join(SCREENSHOTS, name) });
+const to255 = (c: readonly number[]) => c.map((v) => Math.round(v * 255));
+const MEMBER_ROW_PX = 24; // DataTable row height
+
+beforeAll(async () => {
+  await mkdir(SCREENSHOTS, { recursive: true });
+  await buildRenderer();
+  rig = await startApp();
+  project = JSON.parse(await readFile(rig.demoPath, 'utf8')) as ProjectFile;
+  guy = project.members.find((m) => m.kind === 'cable' && m.pretension !== undefined)!;
+  browser = await launchBrowser();
+  page = await browser.context.newPage();
+  page.on('pageerror', (e) => pageErrors.push(e.message));
+  page.on('console', (m) => { if (m.type() === 'error' && !m.text().includes('404')) pageErrors.push(m.text()); });
+});
+
+afterAll(async () => {
+  await browser?.close();
+  await rig?.close();
+});
+
+/** The members-table cell of `id`, scrolled into the table's window. */
+async function membersCell(id: string, col: string) {
+  await page.getByTestId('tab-members').click();
+  const index = project.members.findIndex((m) => m.id === id);
+  await page.locator('[data-testid="table-members"] .scroller').evaluate((el, top) => {
+    el.scrollTop = top;
+    el.dispatchEvent(new Event('scroll'));
+  }, Math.max(0, index * MEMBER_ROW_PX - 100));
+  return page.locator(`[data-testid="table-members"] tr[data-row-id="${id}"] td[data-col="${col}"]`);
+}
+
+async function typeInto(id: string, col: string, text: string): Promise<void> {
+  const cell = await membersCell(id, col);
+  await cell.locator('.cell-text').click();
+  const editor = cell.locator('.cell-editor');
+  await editor.fill(text);
+  await editor.press('Enter');
+}
+
+describe('main screen in the browser edition', () => {
+  it('opens the demo project from the web host', async () => {
+    expect(guy).toBeDefined();
+    await page.goto(rig.host.url);
+    await expect.poll(() => page.getByTestId('project-name').textContent(), { timeout: 20_000 }).toContain('demo-mast');
+    await expect.poll(() => page.getByTestId('status-line').textContent()).toContain('host: web');
+    expect(await page.getByTestId('status-line').textContent()).toContain('Results are for review by a qualified engineer');
+    expect(await page.getByTestId('status-line').textContent()).toContain(`${project.members.length} members`);
+    await page.waitForTimeout(300);
+    await shot('01-model-as-entered.png');
+  });
+
+  it('runs the analysis and shows tensions in the table and tension colours in the 3D view', async () => {
+    await page.getByTestId('run').click();
+    await expect.poll(() => page.getByTestId('analysis-state').textContent(), { timeout: 60_000 }).toMatch(/cases converged/);
+    const first = project.loadCases[0].id;
+    expect(await page.getByTestId('case-select').inputValue()).toBe(first);
+    const reference = solveProject(project).report.cases.find((c) => c.id === first)!.members.find((m) => m.id === guy.id)!;
+    const cell = page.locator(`[data-testid="results-table"] tr[data-member="${guy.id}"] td[data-col="tensionMax"]`);
+    const shown = Number(await cell.textContent());
+    // Shown in kN with 5 significant figures: agrees with the solver's value to that precision.
+    expect(shown).toBeCloseTo(reference.tensionMax / 1000, 1);
+    expect(Math.abs(shown - reference.tensionMax / 1000) / (reference.tensionMax / 1000)).toBeLessThan(1e-4);
+    await page.waitForTimeout(300);
+    const png = await page.getByTestId('view3d-canvas').screenshot();
+    const stats = await pixelStats(page, png, [0x1b, 0x23, 0x30], TENSION_STOPS.map(to255), 60);
+    expect(stats.nonBackground / stats.total).toBeGreaterThan(0.002); // not blank
+    expect(stats.matches.reduce((a, b) => a + b, 0)).toBeGreaterThan(30); // tension-scale colours drawn
+    await shot('02-after-analysis.png');
+    // Another case, and selection from the results table to the inspector.
+    await page.getByTestId('case-select').selectOption(project.loadCases[1].id);
+    await page.locator(`[data-testid="results-table"] tr[data-member="${guy.id}"]`).click();
+    await expect.poll(() => page.getByTestId('inspector').textContent()).toContain(`Member ${guy.id}`);
+    await page.waitForTimeout(300);
+    await shot('03-case-and-selection.png');
+  });
+
+  it('edits a pretension, saves with Ctrl+S, and finds it after a reload and on disk', async () => {
+    const next = Math.round(guy.pretension! / 1000 + 1);
+    await typeInto(guy.id, 'pretension', `${next} kN`);
+    await expect.poll(async () => (await membersCell(guy.id, 'pretension')).textContent()).toBe(String(next));
+    expect(await page.getByTestId('dirty-mark').count()).toBe(1);
+    await page.keyboard.press('Control+s');
+    await expect.poll(() => page.getByTestId('notice').textContent()).toContain('Saved');
+    expect(await page.getByTestId('dirty-mark').count()).toBe(0);
+    const onDisk = JSON.parse(await readFile(rig.demoPath, 'utf8')) as ProjectFile;
+    expect(onDisk.members.find((m) => m.id === guy.id)?.pretension).toBeCloseTo(next * 1000, 9);
+    await page.reload();
+    await expect.poll(() => page.getByTestId('project-name').textContent(), { timeout: 20_000 }).toContain('demo-mast');
+    await expect.poll(async () => (await membersCell(guy.id, 'pretension')).textContent()).toBe(String(next));
+  });
+
+  it('shows the validator message for a missing node and a unit message for a force typed into a length', async () => {
+    await typeInto(guy.id, 'from', 'NOPE');
+    const messages = page.getByTestId('cell-messages');
+    await expect.poll(() => messages.textContent()).toMatch(new RegExp(`members\\[\\d+\\] "${guy.id}".*NOPE`));
+    // The typed text stays visible in the cell for correction.
+    expect(await (await membersCell(guy.id, 'from')).locator('.cell-editor').inputValue()).toBe('NOPE');
+    await shot('04-bad-node-reference.png');
+    await (await membersCell(guy.id, 'from')).locator('.cell-editor').press('Escape');
+    await typeInto(guy.id, 'unstressedLength', '12 kN');
+    await expect.poll(() => messages.textContent()).toContain('"12 kN" is a force, not a length');
+    await shot('05-bad-unit.png');
+    await (await membersCell(guy.id, 'unstressedLength')).locator('.cell-editor').press('Escape');
+    // Nothing was changed by the refused entries.
+    expect(await page.getByTestId('dirty-mark').count()).toBe(0);
+    expect(pageErrors).toEqual([]);
+  });
+});
