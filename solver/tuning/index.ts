@@ -5,3 +5,4 @@ export { solveNamedCases } from './project-case-solver.ts';
 export { referenceCaseId } from './reference-case.ts';
 export { describeTarget } from './target-evaluation.ts';
 export { memberPretension, memberUnstressedLength, resolveVariables, applyVariables } from './tuning-variables.ts';
+export { createLiveResolver, type LiveResolver, type LiveStep } from './live-resolve.ts';
