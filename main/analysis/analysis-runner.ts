@@ -6,7 +6,7 @@
  *   'cancelled'); a worker that has not finished `cancelGraceMs` later is terminated.
  * - One run at a time: starting a run cancels the previous one (reported as 'cancelled').
  * - The worker file is `analysis-worker.ts` beside this file when running from sources (started
- *   with tsx as loader) or `analysis-worker.js` beside the bundle (dist/main/electron/).
+ *   with tsx as loader) or `analysis-worker.mjs` beside the bundle (dist/main/electron/).
  */
 import { randomBytes } from 'node:crypto';
 import { createRequire } from 'node:module';
@@ -21,7 +21,7 @@ export interface AnalysisRunnerOptions {
   onProgress: (p: AnalysisProgress) => void;
   /** Called exactly once per run. `fields` are the raw per-case arrays when status is 'done'. */
   onDone: (d: AnalysisDone, fields?: CaseFields[]) => void;
-  /** Worker script; default: analysis-worker.(ts|js) beside this module. */
+  /** Worker script; default: analysis-worker.(ts|mjs) beside this module. */
   workerUrl?: URL;
   /** Node options for the worker (default none). */
   execArgv?: string[];
@@ -38,7 +38,7 @@ interface ActiveRun {
 }
 
 export function defaultWorkerUrl(moduleUrl: string = import.meta.url): URL {
-  const ext = new URL(moduleUrl).pathname.endsWith('.ts') ? '.ts' : '.js';
+  const ext = new URL(moduleUrl).pathname.endsWith('.ts') ? '.ts' : '.mjs';
   return new URL(`./analysis-worker${ext}`, moduleUrl);
 }
 

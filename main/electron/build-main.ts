@@ -2,7 +2,7 @@
  * Bundles the Electron side into dist/main/electron/ with esbuild:
  *   main.js            ESM, the main process (package.json "main")
  *   preload.cjs        CommonJS, the sandboxed preload (sandboxed preloads cannot import files)
- *   analysis-worker.js ESM, the worker_threads analysis worker (unpacked from asar)
+ *   analysis-worker.mjs ESM, the worker_threads analysis worker (unpacked from asar)
  * `electron` stays external; everything else (solver, project validation, ajv) is bundled.
  * Run: node --import tsx main/electron/build-main.ts [OUTDIR]
  */
@@ -30,7 +30,7 @@ export async function buildMain(outdir: string = DEFAULT_OUTDIR, logLevel: Build
   const o = { ...common, logLevel };
   await Promise.all([
     build({ ...o, entryPoints: [path.join(repo, 'main/electron/main.ts')], outfile: path.join(outdir, 'main.js'), format: 'esm', banner: { js: requireShim } }),
-    build({ ...o, entryPoints: [path.join(repo, 'main/analysis/analysis-worker.ts')], outfile: path.join(outdir, 'analysis-worker.js'), format: 'esm', banner: { js: requireShim } }),
+    build({ ...o, entryPoints: [path.join(repo, 'main/analysis/analysis-worker.ts')], outfile: path.join(outdir, 'analysis-worker.mjs'), format: 'esm', banner: { js: requireShim } }),
     build({ ...o, entryPoints: [path.join(repo, 'main/electron/preload.ts')], outfile: path.join(outdir, 'preload.cjs'), format: 'cjs', platform: 'browser', target: 'chrome130' }),
   ]);
 }

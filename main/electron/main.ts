@@ -32,8 +32,9 @@ const appRoot = app.getAppPath();
 const rendererDir = path.join(appRoot, 'dist', 'renderer');
 const assetsDir = path.join(appRoot, 'assets');
 const preloadPath = path.join(here, 'preload.cjs');
-// Workers cannot load from inside an asar archive; electron-builder unpacks the worker.
-const workerUrl = pathToFileURL(path.join(here, 'analysis-worker.js').replace(`app.asar${path.sep}`, `app.asar.unpacked${path.sep}`));
+// Workers cannot load from inside an asar archive; electron-builder unpacks the worker. It is .mjs
+// because the unpacked folder has no package.json saying "type": "module".
+const workerUrl = pathToFileURL(path.join(here, 'analysis-worker.mjs').replace(`app.asar${path.sep}`, `app.asar.unpacked${path.sep}`));
 const PROJECT_FILTERS = [{ name: 'Stayset project', extensions: ['stayset'] }];
 
 app.setName('Stayset');
@@ -105,7 +106,7 @@ const handlers = createDesktopHandlers({
   printPdf: (project, pdfPath) => printScheduleToPdf(project, pdfPath, { preloadPath, printJobs, allowedSenders }),
   onDirtyChanged: (dirty, title) => {
     win?.setTitle(`${title || 'Untitled'}${dirty ? ' •' : ''} — Stayset`);
-    win?.setDocumentEdited(dirty);
+    if (process.platform === 'darwin') win?.setDocumentEdited(dirty);
     if (quit.setDirty(dirty, title).kind === 'close') win?.close();
     void refreshMenu();
   },

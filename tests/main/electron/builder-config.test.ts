@@ -38,6 +38,6 @@ describe('electron-builder.yml', () => {
 
   it('starts the bundled main and unpacks the worker from asar', () => {
     expect(pkg.main).toBe('dist/main/electron/main.js');
-    expect(cfg.asarUnpack).toContain('dist/main/electron/analysis-worker.js');
+    expect(cfg.asarUnpack).toContain('dist/main/electron/analysis-worker.mjs');
   });
 });

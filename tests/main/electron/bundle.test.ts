@@ -24,7 +24,7 @@ const importsOf = (code: string) => [...code.matchAll(/(?:from\s+|import\()\s*["
 
 describe('electron bundle', () => {
   it('main and worker import only node: built-ins and electron', () => {
-    for (const f of ['main.js', 'analysis-worker.js']) {
+    for (const f of ['main.js', 'analysis-worker.mjs']) {
       const imports = importsOf(readFileSync(path.join(tmp.dir, f), 'utf8'));
       expect(imports.filter((i) => !i.startsWith('node:') && i !== 'electron'), f).toEqual([]);
     }
@@ -39,7 +39,7 @@ describe('electron bundle', () => {
 
   it('the bundled worker solves in a plain worker thread', async () => {
     const done = await new Promise<AnalysisDone>((resolve) => {
-      const runner = new AnalysisRunner({ workerUrl: pathToFileURL(path.join(tmp.dir, 'analysis-worker.js')), onProgress: () => undefined, onDone: resolve });
+      const runner = new AnalysisRunner({ workerUrl: pathToFileURL(path.join(tmp.dir, 'analysis-worker.mjs')), onProgress: () => undefined, onDone: resolve });
       runner.start(sampleMast());
     });
     expect(done.status, done.error).toBe('done');
