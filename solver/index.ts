@@ -15,7 +15,7 @@ export type { NewtonOptions } from './analysis/newton.ts';
 export type { SolveProjectOptions } from './analysis/solve-project.ts';
 export type { SymmetricPattern } from './linalg/index.ts';
 
-export { buildModel } from './model/build-model.ts';
+export { buildModel, stressFreeLength } from './model/build-model.ts';
 export { STANDARD_GRAVITY } from './model/constants.ts';
 export { resolveCaseLoads, resolveCombinationLoads } from './loads/resolve-case-loads.ts';
 export { createWorkspace } from './analysis/workspace.ts';

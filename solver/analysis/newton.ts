@@ -77,7 +77,11 @@ export interface CaseTag {
   caseId: string;
 }
 
-type StepResult = 'converged' | 'maxIterations' | 'diverged' | 'singular' | 'cancelled';
+/**
+ * 'unstable': the increment converged only through tangents that were not positive definite —
+ * it crossed a limit point (snap-through or buckling), which load control must not jump over.
+ */
+type StepResult = 'converged' | 'maxIterations' | 'diverged' | 'singular' | 'cancelled' | 'unstable';
 
 /** Solve one case. `start` (optional) warm-starts from positions of a nearby solution. */
 export function solveEquilibrium(
@@ -102,6 +106,7 @@ export function solveEquilibrium(
   let increment = 1;
   let steps = 0;
   let lastFailure: StepResult = 'maxIterations';
+  let crossedLimit = false;
   while (lambda < 1) {
     const target = Math.min(1, lambda + increment);
     saved.set(x);
@@ -119,9 +124,11 @@ export function solveEquilibrium(
       return { ...outcome('singular', x, counters, lambda, steps), singularDofs: singularDofs(ws, counters.singularDof) };
     }
     lastFailure = r;
+    if (r === 'unstable') crossedLimit = true;
     increment /= 2;
     if (increment < options.minStep) {
-      const status: AnalysisStatus = counters.negativePivots > 0 ? 'limitPoint' : lastFailure === 'diverged' ? 'diverged' : 'maxIterations';
+      const status: AnalysisStatus = crossedLimit || counters.negativePivots > 0
+        ? 'limitPoint' : lastFailure === 'diverged' ? 'diverged' : 'maxIterations';
       return outcome(status, x, counters, lambda, steps);
     }
   }
@@ -190,13 +197,15 @@ function newtonAtLoad(
   const maxNodalStep = options.maxStepFraction * ws.size;
   let [norm, ref] = evaluateResidual(ws, loads, fixedLoad, x, lambda, true);
   let previous = Infinity;
+  let indefinite = false;
   for (let it = 0; it < options.maxIterationsPerStep; it++) {
     const rel = ref > 0 ? norm / ref : 0;
     counters.residual = rel;
     if (!Number.isFinite(norm)) return 'diverged';
-    if (rel <= options.tolerance || norm === 0) return 'converged';
     // Round-off floor: accept a stagnating residual that already meets the published bound 1e-9.
-    if (rel <= 1e-9 && norm >= 0.5 * previous) return 'converged';
+    if (rel <= options.tolerance || norm === 0 || (rel <= 1e-9 && norm >= 0.5 * previous)) {
+      return indefinite ? 'unstable' : 'converged';
+    }
     if (control.isCancelled?.()) return 'cancelled';
     previous = norm;
 
@@ -206,6 +215,7 @@ function newtonAtLoad(
     counters.iterations++;
     if (pivot >= 0) { counters.singularDof = pivot; return 'singular'; }
     counters.negativePivots = ldl.negativePivots;
+    if (ldl.negativePivots > 0) indefinite = true;
     ldl.solve(residual, step);
 
     let scale = 1;
@@ -220,7 +230,8 @@ function newtonAtLoad(
     control.onProgress?.({ ...tag, iteration: counters.iterations, loadFactor: lambda, residual: ref > 0 ? norm / ref : 0 });
   }
   counters.residual = ref > 0 ? norm / ref : 0;
-  return counters.residual <= options.tolerance ? 'converged' : 'maxIterations';
+  if (counters.residual > options.tolerance) return 'maxIterations';
+  return indefinite ? 'unstable' : 'converged';
 }
 
 const LINE_SEARCH_TOLERANCE = 0.5;

@@ -34,7 +34,10 @@ export interface AnalysisModel {
   elemAlpha: Float64Array;
   /** 1 = tension-only (cable), 0 = bar. */
   elemTensionOnly: Uint8Array;
-  /** Stress-free length of the element, m (where S = 0): Lr·√(1 − 2 S0/E). */
+  /**
+   * Stress-free (cut) length of the element, m: Lr for S0 = 0; otherwise the unstressed length
+   * that carries the same force at Lr when entered as an unstressed length (see stressFreeLength).
+   */
   elemUnstressedLength: Float64Array;
   /** Mass per unstressed length, kg/m. */
   elemMassPerLength: Float64Array;

@@ -63,7 +63,7 @@ export function buildModel(project: ProjectFile): AnalysisModel {
     for (let k = 1; k < n; k++) chain[k] = nextNode++;
     placeInteriorNodes(coords, chain, xa, xb, m, section, refLength * n, s0);
 
-    const unstressed = refLength * Math.sqrt(Math.max(0, 1 - (2 * s0) / section.E));
+    const unstressed = stressFreeLength(refLength, s0, section.E);
     for (let k = 0; k < n; k++, e++) {
       elemNodes[2 * e] = chain[k];
       elemNodes[2 * e + 1] = chain[k + 1];
@@ -130,4 +130,24 @@ function lookup(index: Map<string, number>, id: string, m: MemberSpec, what: str
   const i = index.get(id);
   if (i === undefined) throw new Error(`member "${m.id}": ${what} "${id}" does not exist`);
   return i;
+}
+
+/**
+ * Stress-free (cut) length of an element with reference length Lr and initial stress S0, m:
+ * the length l_u such that the same element entered by its unstressed length (Lr = l_u, S0 = 0)
+ * carries the same force N = A S0 at the modelled length, so pretension and unstressed length
+ * round-trip exactly. With λ = Lr / l_u, N = E A λ (λ² − 1) / 2, hence λ (λ² − 1) = 2 S0 / E
+ * (Newton from λ = 1 + S0/E; the root is unique for λ > 1/√3).
+ */
+export function stressFreeLength(Lr: number, S0: number, E: number): number {
+  if (S0 === 0) return Lr;
+  const target = (2 * S0) / E;
+  let lambda = 1 + S0 / E;
+  for (let i = 0; i < 50; i++) {
+    const f = lambda * (lambda * lambda - 1) - target;
+    const step = f / (3 * lambda * lambda - 1);
+    lambda -= step;
+    if (Math.abs(step) < 1e-15 * lambda) break;
+  }
+  return Lr / lambda;
 }

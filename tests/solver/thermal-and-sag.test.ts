@@ -41,6 +41,24 @@ describe('temperature in a taut cable', () => {
   });
 });
 
+/** Unstressed length of a member pretensioned to T at length l: l/λ with λ(λ² − 1)/2 = T/EA (Green–Lagrange). */
+function unstressed(l: number, T: number): number {
+  let lo = 1, hi = 2;
+  for (let i = 0; i < 200; i++) { const mid = 0.5 * (lo + hi); if ((mid * (mid * mid - 1)) / 2 < T / EA) lo = mid; else hi = mid; }
+  return l / (0.5 * (lo + hi));
+}
+
+describe('pretension and unstressed length round-trip', () => {
+  it('a member entered by its reported cut length carries the same pretension at the modelled geometry', () => {
+    const T = 60e3, l = 50;
+    const weightless = { ...STRAND, massPerLength: 0 };
+    const byForce = solveProject(singleCable([l, 0, 0], { pretension: T }, weightless)).report.cases[0];
+    const byLength = solveProject(singleCable([l, 0, 0], { unstressedLength: unstressed(l, T) }, weightless)).report.cases[0];
+    expect(byForce.members[0].tensionMax).toBeCloseTo(T, 6);
+    expect(byLength.members[0].tensionMax / T).toBeCloseTo(1, 10);
+  });
+});
+
 describe('parabolic sag, small-sag limit', () => {
   // Level cable, sag d = w l² / (8 H) for small sag (Irvine 1981, §1.2, the shallow parabola).
   it.each([20e3, 60e3])('matches w l²/(8H) with H the horizontal reaction (T = %s N)', (T) => {
@@ -48,14 +66,14 @@ describe('parabolic sag, small-sag limit', () => {
     const c = solveProject(singleCable([l, 0, 0], { segments: 40, pretension: T })).report.cases[0];
     expect(c.converged).toBe(true);
     const H = -c.reactions.find((r) => r.node === 'A')!.force[0];
-    // Load per horizontal length: weight of the unstressed length l·√(1 − 2T/EA) spread over l.
-    const w = STRAND.massPerLength * STANDARD_GRAVITY * Math.sqrt(1 - (2 * T) / EA);
+    // Load per horizontal length: weight of the unstressed length l/λ, λ(λ² − 1) = 2T/EA, over l.
+    const lu = unstressed(l, T);
+    const w = (STRAND.massPerLength * STANDARD_GRAVITY * lu) / l;
     // Relative error of the parabola is O((d/l)²) ≈ 1e-5 here; the lumped chain is exact at the nodes.
     expect(c.members[0].sag / ((w * l * l) / (8 * H))).toBeCloseTo(1, 4);
-    // Vertical reactions carry half the weight each (symmetry); the weight is that of the
-    // unstressed length l·√(1 − 2T/EA) (where the law S = T/A + Eε gives S = 0).
+    // Vertical reactions carry half the weight each (symmetry).
     const Va = c.reactions.find((r) => r.node === 'A')!.force[2];
-    expect(Va / ((STRAND.massPerLength * STANDARD_GRAVITY * l * Math.sqrt(1 - (2 * T) / EA)) / 2)).toBeCloseTo(1, 8);
+    expect(Va / ((STRAND.massPerLength * STANDARD_GRAVITY * lu) / 2)).toBeCloseTo(1, 8);
   });
 });
 
