@@ -1,5 +1,7 @@
 import type { FactorBackend } from './factor-backend.ts';
 import type { SupernodalStructure } from './supernodal-symbolic.ts';
+import { accumulateColumns, accumulateColumnsTwice } from './dense-kernels.ts';
+import { factorPanel } from './dense-panel.ts';
 
 /**
  * Supernodal left-looking LDLᵀ without pivoting (the supernodal form of the left-looking
@@ -11,8 +13,7 @@ import type { SupernodalStructure } from './supernodal-symbolic.ts';
  *     d's rows inside [f, l) and R its rows from C on; the product is formed one target column at
  *     a time in a dense buffer and subtracted through a relative-row map; d then moves to the list
  *     of the supernode holding its next row (Davis 2006 §4.8 linked lists);
- *  2. the panel (diagonal block and rows below) is factorised densely, column by column:
- *     l_ij = (a_ij − Σ_t l_it d_t l_jt) / d_j.
+ *  2. the panel (diagonal block and rows below) is factorised densely (dense-panel.ts).
  * Storage as in SupernodalStructure; D separately (length n); unit diagonal stored as 1.
  * All memory is allocated in the constructor; factor() and solveInPlace() allocate nothing.
  */
@@ -171,142 +172,5 @@ function updateFromDescendant(
     accumulateColumns(Lx, row0, nrd, w, ncd, tmp, len);
     const colBase = base + relBuf[j] * nr;
     for (let ii = 0; ii < len; ii++) Lx[colBase + relBuf[j + ii]] -= tmp[ii];
-  }
-}
-
-/**
- * Dense LDLᵀ of a supernode panel (nr × nc, column-major at base, leading dimension nr) whose
- * updates from other supernodes are already applied. Returns -1, or the global column f + j of
- * the first pivot with |d_j| <= tol · max(aDiag, tiny).
- */
-function factorPanel(
-  Lx: Float64Array, base: number, nr: number, nc: number, D: Float64Array, f: number,
-  aDiag: Float64Array, tol: number, tiny: number, w: Float64Array, w2: Float64Array,
-  tmp: Float64Array, tmp2: Float64Array,
-): number {
-  let j = 0;
-  // Two columns at a time: the updates from columns t < j share their loads (as in the update).
-  for (; j + 2 <= nc; j += 2) {
-    const cj = base + j * nr, cj1 = cj + nr;
-    const len = nr - j;
-    if (j > 0) {
-      for (let t = 0; t < j; t++) {
-        const o = base + t * nr + j, dt = D[f + t];
-        w[t] = Lx[o] * dt;
-        w2[t] = Lx[o + 1] * dt;
-      }
-      accumulateColumnsTwice(Lx, base + j, nr, w, w2, j, tmp, tmp2, len);
-      for (let i = 0; i < len; i++) Lx[cj + j + i] -= tmp[i];
-      for (let i = 1; i < len; i++) Lx[cj1 + j + i] -= tmp2[i];
-    }
-    const bad = finishColumn(Lx, cj, j, nr, D, f, aDiag, tol, tiny);
-    if (bad >= 0) return bad;
-    // column j+1 −= L(:,j) · d_j · l_{j+1,j}
-    const wj = Lx[cj + j + 1] * D[f + j];
-    if (wj !== 0) for (let i = j + 1; i < nr; i++) Lx[cj1 + i] -= Lx[cj + i] * wj;
-    const bad1 = finishColumn(Lx, cj1, j + 1, nr, D, f, aDiag, tol, tiny);
-    if (bad1 >= 0) return bad1;
-  }
-  for (; j < nc; j++) {
-    const cj = base + j * nr;
-    if (j > 0) {
-      // column j −= Σ_{t<j} L(:,t) · d_t · l_jt, rows j..nr−1, as one dense matrix–vector product
-      for (let t = 0; t < j; t++) w[t] = Lx[base + t * nr + j] * D[f + t];
-      const len = nr - j;
-      accumulateColumns(Lx, base + j, nr, w, j, tmp, len);
-      for (let i = 0; i < len; i++) Lx[cj + j + i] -= tmp[i];
-    }
-    const bad = finishColumn(Lx, cj, j, nr, D, f, aDiag, tol, tiny);
-    if (bad >= 0) return bad;
-  }
-  return -1;
-}
-
-/** Pivot test, D entry and scaling of an updated panel column j (at offset cj). */
-function finishColumn(
-  Lx: Float64Array, cj: number, j: number, nr: number, D: Float64Array, f: number,
-  aDiag: Float64Array, tol: number, tiny: number,
-): number {
-  const dj = Lx[cj + j];
-  if (!(Math.abs(dj) > tol * Math.max(aDiag[f + j], tiny))) return f + j;
-  D[f + j] = dj;
-  Lx[cj + j] = 1;
-  const inv = 1 / dj;
-  for (let i = j + 1; i < nr; i++) Lx[cj + i] *= inv;
-  return -1;
-}
-
-/**
- * tmp[0..len) = Σ_t w[t] · Lx[off + t·ld + (0..len)] — a dense matrix–vector product over k
- * columns of leading dimension ld, unrolled by four columns.
- */
-function accumulateColumns(
-  Lx: Float64Array, off: number, ld: number, w: Float64Array, k: number, tmp: Float64Array, len: number,
-): void {
-  let t = 0;
-  if (k >= 4) {
-    {
-      const w0 = w[0], w1 = w[1], w2 = w[2], w3 = w[3];
-      const o0 = off, o1 = off + ld, o2 = off + 2 * ld, o3 = off + 3 * ld;
-      for (let i = 0; i < len; i++) tmp[i] = Lx[o0 + i] * w0 + Lx[o1 + i] * w1 + Lx[o2 + i] * w2 + Lx[o3 + i] * w3;
-    }
-    t = 4;
-    for (; t + 4 <= k; t += 4) {
-      const w0 = w[t], w1 = w[t + 1], w2 = w[t + 2], w3 = w[t + 3];
-      const o0 = off + t * ld, o1 = o0 + ld, o2 = o1 + ld, o3 = o2 + ld;
-      for (let i = 0; i < len; i++) tmp[i] += Lx[o0 + i] * w0 + Lx[o1 + i] * w1 + Lx[o2 + i] * w2 + Lx[o3 + i] * w3;
-    }
-  } else {
-    for (let i = 0; i < len; i++) tmp[i] = 0;
-  }
-  for (; t + 2 <= k; t += 2) {
-    const w0 = w[t], w1 = w[t + 1];
-    const o0 = off + t * ld, o1 = o0 + ld;
-    for (let i = 0; i < len; i++) tmp[i] += Lx[o0 + i] * w0 + Lx[o1 + i] * w1;
-  }
-  for (; t < k; t++) {
-    const w0 = w[t];
-    const o0 = off + t * ld;
-    for (let i = 0; i < len; i++) tmp[i] += Lx[o0 + i] * w0;
-  }
-}
-
-/**
- * tmp[i] = Σ_t w[t] · Lx[off + t·ld + i] and tmp2[i] = Σ_t w2[t] · Lx[off + t·ld + i], i < len:
- * two dense matrix–vector products sharing the loads of the matrix, unrolled by two columns.
- */
-function accumulateColumnsTwice(
-  Lx: Float64Array, off: number, ld: number, w: Float64Array, w2: Float64Array, k: number,
-  tmp: Float64Array, tmp2: Float64Array, len: number,
-): void {
-  for (let i = 0; i < len; i++) { tmp[i] = 0; tmp2[i] = 0; }
-  let t = 0;
-  for (; t + 4 <= k; t += 4) {
-    const a0 = w[t], a1 = w[t + 1], a2 = w[t + 2], a3 = w[t + 3];
-    const b0 = w2[t], b1 = w2[t + 1], b2 = w2[t + 2], b3 = w2[t + 3];
-    const o0 = off + t * ld, o1 = o0 + ld, o2 = o1 + ld, o3 = o2 + ld;
-    for (let i = 0; i < len; i++) {
-      const x0 = Lx[o0 + i], x1 = Lx[o1 + i], x2 = Lx[o2 + i], x3 = Lx[o3 + i];
-      tmp[i] += x0 * a0 + x1 * a1 + x2 * a2 + x3 * a3;
-      tmp2[i] += x0 * b0 + x1 * b1 + x2 * b2 + x3 * b3;
-    }
-  }
-  for (; t + 2 <= k; t += 2) {
-    const a0 = w[t], a1 = w[t + 1], b0 = w2[t], b1 = w2[t + 1];
-    const o0 = off + t * ld, o1 = o0 + ld;
-    for (let i = 0; i < len; i++) {
-      const x0 = Lx[o0 + i], x1 = Lx[o1 + i];
-      tmp[i] += x0 * a0 + x1 * a1;
-      tmp2[i] += x0 * b0 + x1 * b1;
-    }
-  }
-  if (t < k) {
-    const a0 = w[t], b0 = w2[t];
-    const o0 = off + t * ld;
-    for (let i = 0; i < len; i++) {
-      const x0 = Lx[o0 + i];
-      tmp[i] += x0 * a0;
-      tmp2[i] += x0 * b0;
-    }
   }
 }
