@@ -26,7 +26,7 @@ export interface SceneData {
   memberValue: Float64Array;
   polyOffsets: Int32Array;
   polyPoints: Float64Array;
-  /** Colour range [min, max] of memberValue over members in tension. */
+  /** Colour range [min, max] of memberValue over members in tension (min is 0 unless a value is below 0). */
   valueRange: [number, number];
 }
 
@@ -118,5 +118,7 @@ export function buildSceneData(project: ProjectFile, options: SceneOptions): Sce
     lo = 0;
     hi = 0;
   }
+  // The scale starts at zero when every tension is positive, so colour reads as a share of the largest.
+  if (lo > 0) lo = 0;
   return { nodeIds, nodePositions, nodeSupport, memberIds, memberKind, memberState, memberValue, polyOffsets, polyPoints, valueRange: [lo, hi] };
 }

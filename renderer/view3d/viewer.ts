@@ -35,8 +35,8 @@ export class Viewer3D {
     this.scene.background = new THREE.Color(BACKGROUND);
     this.camera.up.set(0, 0, 1);
     this.camera.position.set(30, -40, 25);
-    this.scene.add(new THREE.HemisphereLight(0xffffff, 0x334455, 2.2));
-    const sun = new THREE.DirectionalLight(0xffffff, 1.2);
+    this.scene.add(new THREE.HemisphereLight(0xffffff, 0x445566, 1.1));
+    const sun = new THREE.DirectionalLight(0xffffff, 0.9);
     sun.position.set(1, -2, 3);
     this.scene.add(sun);
     this.scene.add(this.content, this.overlay);
@@ -106,13 +106,22 @@ export class Viewer3D {
     this.requestRender();
   }
 
-  /** Frame the whole model. */
+  /** Frame the whole model (its nodes and member polylines; the ground grid does not count). */
   fit(): void {
-    const box = new THREE.Box3().setFromObject(this.content);
+    const box = new THREE.Box3();
+    const v = new THREE.Vector3();
+    for (const buf of this.buffers ? [this.buffers.taut, this.buffers.slack, this.buffers.bars] : []) {
+      for (let i = 0; i < buf.positions.length; i += 3) box.expandByPoint(v.set(buf.positions[i], buf.positions[i + 1], buf.positions[i + 2]));
+    }
+    if (this.data && this.buffers) {
+      const [ox, oy, oz] = this.buffers.origin;
+      const p = this.data.nodePositions;
+      for (let i = 0; i < p.length; i += 3) box.expandByPoint(v.set(p[i] - ox, p[i + 1] - oy, p[i + 2] - oz));
+    }
     if (box.isEmpty()) return;
     const centre = box.getCenter(new THREE.Vector3());
     const radius = Math.max(1e-3, box.getSize(new THREE.Vector3()).length() / 2);
-    const distance = radius / Math.sin(THREE.MathUtils.degToRad(this.camera.fov / 2)) * 1.05;
+    const distance = (radius / Math.sin(THREE.MathUtils.degToRad(this.camera.fov / 2))) * 1.1;
     const dir = new THREE.Vector3(0.75, -1, 0.55).normalize();
     this.camera.position.copy(centre).addScaledVector(dir, distance);
     this.camera.near = Math.max(distance / 1000, 0.01);
@@ -224,8 +233,8 @@ export class Viewer3D {
     }
     const g = new THREE.BufferGeometry();
     g.setAttribute('position', new THREE.BufferAttribute(p, 3));
-    const size = data.nodeIds.length > 5000 ? 2 : 5;
-    return new THREE.Points(g, new THREE.PointsMaterial({ color: 0xe8edf5, size, sizeAttenuation: false }));
+    const size = data.nodeIds.length > 5000 ? 2 : data.nodeIds.length > 100 ? 3 : 5;
+    return new THREE.Points(g, new THREE.PointsMaterial({ color: 0xaab4c4, size, sizeAttenuation: false }));
   }
 
   private makeSupports(data: SceneData): THREE.Object3D[] {

@@ -10,10 +10,10 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdir, readFile } from 'node:fs/promises';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
-import type { MemberSpec, ProjectFile } from '../../solver/index.ts';
+import type { MemberSpec, ProjectFile, SolveReport } from '../../solver/index.ts';
 import { solveProject } from '../../solver/index.ts';
 import { launchBrowser, type Browser } from './browser.ts';
-import { buildRenderer, SCREENSHOTS, startApp, type AppRig } from './serve-app.ts';
+import { buildRenderer, SCREENSHOTS, startApp, startBareHost, type AppRig } from './serve-app.ts';
 import { pixelStats } from './pixels.ts';
 import { TENSION_STOPS } from '../../renderer/view3d/colour-scale.ts';
 
@@ -23,6 +23,9 @@ let page: Page;
 let project: ProjectFile;
 let guy: MemberSpec;
 const pageErrors: string[] = [];
+let solved: SolveReport | null = null;
+/** The demo as opened, solved in Node: what the screen must show. */
+const reference = (): SolveReport => (solved ??= solveProject(project).report);
 
 const shot = (name: string) => page.screenshot({ path: path.join(SCREENSHOTS, name) });
 const to255 = (c: readonly number[]) => c.map((v) => Math.round(v * 255));
@@ -81,12 +84,12 @@ describe('main screen in the browser edition', () => {
     await expect.poll(() => page.getByTestId('analysis-state').textContent(), { timeout: 60_000 }).toMatch(/cases converged/);
     const first = project.loadCases[0].id;
     expect(await page.getByTestId('case-select').inputValue()).toBe(first);
-    const reference = solveProject(project).report.cases.find((c) => c.id === first)!.members.find((m) => m.id === guy.id)!;
+    const ref1 = reference().cases.find((c) => c.id === first)!.members.find((m) => m.id === guy.id)!;
     const cell = page.locator(`[data-testid="results-table"] tr[data-member="${guy.id}"] td[data-col="tensionMax"]`);
     const shown = Number(await cell.textContent());
     // Shown in kN with 5 significant figures: agrees with the solver's value to that precision.
-    expect(shown).toBeCloseTo(reference.tensionMax / 1000, 1);
-    expect(Math.abs(shown - reference.tensionMax / 1000) / (reference.tensionMax / 1000)).toBeLessThan(1e-4);
+    expect(shown).toBeCloseTo(ref1.tensionMax / 1000, 1);
+    expect(Math.abs(shown - ref1.tensionMax / 1000) / (ref1.tensionMax / 1000)).toBeLessThan(1e-4);
     await page.waitForTimeout(300);
     const png = await page.getByTestId('view3d-canvas').screenshot();
     const stats = await pixelStats(page, png, [0x1b, 0x23, 0x30], TENSION_STOPS.map(to255), 60);
@@ -99,6 +102,14 @@ describe('main screen in the browser edition', () => {
     await expect.poll(() => page.getByTestId('inspector').textContent()).toContain(`Member ${guy.id}`);
     await page.waitForTimeout(300);
     await shot('03-case-and-selection.png');
+    // US customary display: same tension in kip (1 kip = 4448.2216152605 N exactly, NIST SP 811).
+    await page.getByTestId('units-us').click();
+    const kip = Number(await page.locator(`[data-testid="results-table"] tr[data-member="${guy.id}"] td[data-col="tensionMax"]`).textContent());
+    const ref2 = reference().cases.find((c) => c.id === project.loadCases[1].id)!.members.find((m) => m.id === guy.id)!;
+    expect(Math.abs(kip - ref2.tensionMax / 4448.2216152605) / kip).toBeLessThan(1e-4);
+    expect(await page.locator('[data-testid="results-table"] thead').textContent()).toContain('kip');
+    await shot('06-us-units.png');
+    await page.getByTestId('units-si').click();
   });
 
   it('edits a pretension, saves with Ctrl+S, and finds it after a reload and on disk', async () => {
@@ -131,5 +142,23 @@ describe('main screen in the browser edition', () => {
     // Nothing was changed by the refused entries.
     expect(await page.getByTestId('dirty-mark').count()).toBe(0);
     expect(pageErrors).toEqual([]);
+  });
+
+  it('without an initial project shows the empty state and opens a typed path', async () => {
+    const bare = await startBareHost(rig.root);
+    const second = await browser.context.newPage();
+    try {
+      await second.goto(bare.url);
+      await second.getByTestId('open-demo').waitFor({ timeout: 20_000 });
+      expect(await second.getByTestId('empty-state').textContent()).toContain('Results are for review by a qualified engineer');
+      await second.screenshot({ path: path.join(SCREENSHOTS, '00-empty-state.png') });
+      await second.getByRole('button', { name: 'Open a file…' }).first().click();
+      await second.getByTestId('path-input').fill('demo-mast.stayset');
+      await second.getByTestId('path-input').press('Enter');
+      await expect.poll(() => second.getByTestId('project-name').textContent(), { timeout: 20_000 }).toContain('demo-mast');
+    } finally {
+      await second.close();
+      await bare.close();
+    }
   });
 });

@@ -25,6 +25,12 @@ export async function buildRenderer(): Promise<void> {
   await build({ configFile: path.join(REPO, 'vite.config.ts'), logLevel: 'warn' });
 }
 
+/** A second web host on the same project folder, started without an initial project. */
+export async function startBareHost(root: string): Promise<WebHost> {
+  const userData = await mkdtemp(path.join(os.tmpdir(), 'stayset-e2e-data-'));
+  return startWebHost({ root, staticDir: path.join(REPO, 'dist', 'renderer'), assetsDir: path.join(root, 'assets'), userDataDir: userData, port: 0, initialPath: null });
+}
+
 export async function startApp(): Promise<AppRig> {
   const root = await mkdtemp(path.join(os.tmpdir(), 'stayset-e2e-root-'));
   const userData = path.join(root, '.user-data');
