@@ -101,32 +101,43 @@ export class SupernodalLDL implements FactorBackend {
   }
 
   solveInPlace(x: Float64Array): void {
-    const { st, Lx, D } = this;
+    const { st, Lx, D, tmp } = this;
     const { n, nsuper, superStart, rowPtr, rows, valPtr } = st;
+    // Forward: L y = b. Per supernode: the dense unit-triangular block, then the rows below are
+    // accumulated densely in tmp and scattered once.
     for (let s = 0; s < nsuper; s++) {
       const f = superStart[s], nc = superStart[s + 1] - f;
       const rp = rowPtr[s], nr = rowPtr[s + 1] - rp, base = valPtr[s];
+      const nb = nr - nc;
+      for (let i = 0; i < nb; i++) tmp[i] = 0;
       for (let j = 0; j < nc; j++) {
         const xj = x[f + j];
         if (xj === 0) continue;
         const cj = base + j * nr;
         for (let i = j + 1; i < nc; i++) x[f + i] -= Lx[cj + i] * xj;
-        for (let i = nc; i < nr; i++) x[rows[rp + i]] -= Lx[cj + i] * xj;
+        const cb = cj + nc;
+        for (let i = 0; i < nb; i++) tmp[i] += Lx[cb + i] * xj;
       }
+      for (let i = 0; i < nb; i++) x[rows[rp + nc + i]] -= tmp[i];
     }
     for (let j = 0; j < n; j++) x[j] /= D[j];
+    // Backward: Lᵀ x = y. Per supernode: gather the solution at the rows below into tmp once.
     for (let s = nsuper - 1; s >= 0; s--) {
       const f = superStart[s], nc = superStart[s + 1] - f;
       const rp = rowPtr[s], nr = rowPtr[s + 1] - rp, base = valPtr[s];
+      const nb = nr - nc;
+      for (let i = 0; i < nb; i++) tmp[i] = x[rows[rp + nc + i]];
       for (let j = nc - 1; j >= 0; j--) {
         const cj = base + j * nr;
         let sum = x[f + j];
         for (let i = j + 1; i < nc; i++) sum -= Lx[cj + i] * x[f + i];
-        for (let i = nc; i < nr; i++) sum -= Lx[cj + i] * x[rows[rp + i]];
+        const cb = cj + nc;
+        for (let i = 0; i < nb; i++) sum -= Lx[cb + i] * tmp[i];
         x[f + j] = sum;
       }
     }
   }
+
 
   negativeCount(): number {
     let c = 0;
