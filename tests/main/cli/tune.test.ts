@@ -62,4 +62,21 @@ describe('stayset tune', () => {
     expect(r2.code).toBe(2);
     expect(r2.stderr).toMatch(/no "tuning" section/);
   });
+
+  it('exits 1 and writes nothing when a case does not converge', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'stayset-tune-'));
+    const file = join(dir, 'mech.stayset.json');
+    const p = JSON.parse(readFileSync(join(REPO_ROOT, fixture('mechanism-free-node.stayset.json')), 'utf8'));
+    p.members[0].groups = ['rods'];
+    // No pretension: the bar gives node B no sideways stiffness (a mechanism at the start).
+    p.members[0].kind = 'cable';
+    p.tuning = { variables: [{ group: 'rods', by: 'pretension', min: 1e-6, max: 1e-3 }], targets: [{ kind: 'noSlack', group: 'rods', case: 'dead' }] };
+    writeFileSync(file, JSON.stringify(p));
+    const before = readFileSync(file, 'utf8');
+    const r = runStayset(['tune', file, '--write']);
+    expect(r.code).toBe(1);
+    expect(r.stderr).toMatch(/did not converge/);
+    expect(readFileSync(file, 'utf8')).toBe(before);
+    expect(existsSync(`${file}.bak`)).toBe(false);
+  });
 });
