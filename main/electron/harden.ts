@@ -4,13 +4,16 @@
  */
 import type { Session, WebContents } from 'electron';
 import { STAYSET_CSP } from '../common/web-protocol.ts';
+import { isAppUrl } from './app-url.ts';
 import { decideNavigation, decidePermission, decideWindowOpen, isAllowedRequest } from './navigation-policy.ts';
 
 export function hardenSession(session: Session): void {
   session.setPermissionRequestHandler((_wc, permission, callback) => callback(decidePermission(permission)));
   session.setPermissionCheckHandler((_wc, permission) => decidePermission(permission));
   session.webRequest.onBeforeRequest((details, callback) => callback({ cancel: !isAllowedRequest(details.url) }));
+  // Our pages get the CSP (the app scheme also sets it); other pages (developer tools) keep theirs.
   session.webRequest.onHeadersReceived((details, callback) => {
+    if (!isAppUrl(details.url)) return callback({});
     callback({ responseHeaders: { ...details.responseHeaders, 'Content-Security-Policy': [STAYSET_CSP] } });
   });
 }

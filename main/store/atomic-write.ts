@@ -12,7 +12,8 @@
  * On any failure the temp file is removed and the target is untouched.
  *
  * Leftover temp files from a killed process are named `.<name>.<random>.stayset-tmp` and are
- * removed by the next write of the same target (one writer per file is assumed).
+ * removed by the next write of the same target. Writes to one target from this process are
+ * queued (never interleaved); one writing process per file is assumed.
  */
 import { randomBytes } from 'node:crypto';
 import { promises as fs } from 'node:fs';
@@ -104,8 +105,22 @@ async function keepBackup(target: string): Promise<void> {
   }
 }
 
+const queues = new Map<string, Promise<void>>();
+
 /** Replace `target` with `data` atomically (see the module comment). */
-export async function writeFileAtomic(target: string, data: string | Uint8Array, options: AtomicWriteOptions = {}): Promise<void> {
+export function writeFileAtomic(target: string, data: string | Uint8Array, options: AtomicWriteOptions = {}): Promise<void> {
+  const key = path.resolve(target);
+  const previous = queues.get(key) ?? Promise.resolve();
+  const next = previous.catch(() => undefined).then(() => replaceFile(key, data, options));
+  queues.set(key, next);
+  const forget = (): void => {
+    if (queues.get(key) === next) queues.delete(key);
+  };
+  next.then(forget, forget);
+  return next;
+}
+
+async function replaceFile(target: string, data: string | Uint8Array, options: AtomicWriteOptions): Promise<void> {
   await removeStaleTemps(target);
   await removeStaleTemps(target + BACKUP_SUFFIX);
   const temp = tempPathFor(target);

@@ -59,3 +59,14 @@ describe('writeFileAtomic', () => {
     expect(readdirSync(tmp.dir)).toEqual(['.other.stayset.0123456789ab.stayset-tmp']);
   });
 });
+
+describe('concurrent writes in one process', () => {
+  it('are queued: all succeed and the last one wins', async () => {
+    const target = path.join(tmp.dir, 'q.stayset');
+    const big = (c: string) => c.repeat(2_000_000);
+    await Promise.all(['a', 'b', 'c', 'd'].map((c) => writeFileAtomic(target, big(c), { backup: true })));
+    expect(readFileSync(target, 'utf8')).toBe(big('d'));
+    expect(readFileSync(target + '.bak', 'utf8')).toBe(big('c'));
+    expect(readdirSync(tmp.dir).sort()).toEqual(['q.stayset', 'q.stayset.bak']);
+  });
+});
