@@ -12,6 +12,7 @@ import { readProjectFile } from '../read-project-file.ts';
 import { checkCaseIds, filterReport } from '../case-selection.ts';
 import { replaceNonFinite } from '../format/finite-guard.ts';
 import { solveReportText } from '../format/solve-report-text.ts';
+import { jsonOutput } from '../format/json-output.ts';
 import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
 
 const HELP = `Solves every load case and combination of a project file (geometrically nonlinear,
@@ -59,7 +60,7 @@ async function run(solver: ProjectSolver, args: string[], io: CliIO): Promise<nu
     return EXIT.notConverged;
   }
   const guarded = replaceNonFinite(report);
-  if (opts.flags.has('json')) io.out(`${JSON.stringify({ cases: guarded.value.cases, disclaimer: RESULTS_DISCLAIMER }, null, 2)}\n`);
+  if (opts.flags.has('json')) io.out(jsonOutput({ cases: guarded.value.cases, disclaimer: RESULTS_DISCLAIMER }));
   else io.out(solveReportText(project, guarded.value, RESULTS_DISCLAIMER));
 
   if (guarded.paths.length > 0) {

@@ -8,6 +8,7 @@ import type { CliIO } from '../../../main/cli/cli-io.ts';
 import { replaceNonFinite } from '../../../main/cli/format/finite-guard.ts';
 import { fixed, kN } from '../../../main/cli/format/number-text.ts';
 import { textTable } from '../../../main/cli/format/text-table.ts';
+import { jsonOutput } from '../../../main/cli/format/json-output.ts';
 import { parseOptions } from '../../../main/cli/options.ts';
 import type { CaseResult } from '../../../solver/index.ts';
 import { REPO_ROOT, fixture } from './run-stayset.ts';
@@ -69,6 +70,17 @@ describe('text helpers (common practice for fixed-width reports)', () => {
   it('aligns columns: text left, numbers right', () => {
     const t = textTable([{ title: 'id' }, { title: 'T kN', align: 'right' }], [['G1', '1.00'], ['LONGID', '123.45']], '');
     expect(t.split('\n')).toEqual(['id        T kN', '------  ------', 'G1        1.00', 'LONGID  123.45']);
+  });
+});
+
+describe('JSON output layout', () => {
+  it('puts number lists on one line and reads back to the same value', () => {
+    const v = { a: [1, -2.5e-7, null, 3], b: [{ c: [0, 0] }], s: 'x[\n1\n]', e: [], m: ['p', 1] };
+    const text = jsonOutput(v);
+    expect(JSON.parse(text)).toEqual(v);
+    expect(text).toContain('"a": [1, -2.5e-7, null, 3]');
+    expect(text).toContain('"c": [0, 0]');
+    expect(text.endsWith('}\n')).toBe(true);
   });
 });
 

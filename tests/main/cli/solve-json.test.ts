@@ -32,6 +32,11 @@ describe('stayset solve --json', () => {
     const ux = c.nodes.find((n) => n.id === 'B')!.displacement[0];
     // Small-strain Hooke's law; the Green–Lagrange law differs by O(ε) = 1e-4 relative.
     expect(Math.abs(ux - (F * L) / EA) / ((F * L) / EA)).toBeLessThan(1e-3);
+    // Exact for a Total Lagrangian bar with Green strain (Crisfield, Non-linear Finite Element
+    // Analysis of Solids and Structures, vol. 1, 1991, ch. 3 — recalled from memory):
+    // ε = (λ² − 1)/2, S = E·ε, true force N = A·S·λ with stretch λ = l/L.
+    const lambda = (L + ux) / L;
+    expect((EA * ((lambda * lambda - 1) / 2) * lambda) / F).toBeCloseTo(1, 6);
     const m = c.members[0];
     expect(m.tensionMax).toBeCloseTo(F, 3);
     expect(m.chordLength).toBeCloseTo(L + ux, 9);

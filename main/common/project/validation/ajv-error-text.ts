@@ -71,7 +71,7 @@ function defaultTemplate(e: ErrorObject): string {
   }
 }
 
-/** One ajv error as a finished message, or undefined when it is noise under a summarised parent. */
+/** One ajv error as a finished message. */
 export function ajvErrorText(root: unknown, e: ErrorObject): string {
   const path = pointerToPath(e.instancePath);
   const p = e.params as Record<string, unknown>;
