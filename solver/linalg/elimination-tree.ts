@@ -23,6 +23,31 @@ export function eliminationTree(n: number, ptr: Int32Array, idx: Int32Array): In
   return parent;
 }
 
+/**
+ * Elimination tree of C = P A Pᵀ straight from the adjacency graph of A (both triangles, no
+ * diagonal) and the permutation, without forming C: column k of C's upper triangle holds
+ * pinv[u] for the neighbours u of perm[k] with pinv[u] < k. Same algorithm as eliminationTree.
+ */
+export function eliminationTreeOfPermuted(
+  n: number, gptr: Int32Array, gidx: Int32Array, perm: Int32Array, pinv: Int32Array,
+): Int32Array {
+  const parent = new Int32Array(n).fill(-1);
+  const ancestor = new Int32Array(n).fill(-1);
+  for (let k = 0; k < n; k++) {
+    const v = perm[k];
+    for (let q = gptr[v]; q < gptr[v + 1]; q++) {
+      let i = pinv[gidx[q]];
+      while (i !== -1 && i < k) {
+        const inext = ancestor[i];
+        ancestor[i] = k;
+        if (inext === -1) parent[i] = k;
+        i = inext;
+      }
+    }
+  }
+  return parent;
+}
+
 /** Postorder of a forest: post[k] = node visited k-th (children before parents, in index order). */
 export function postorderTree(parent: Int32Array): Int32Array {
   const n = parent.length;

@@ -9,10 +9,11 @@ import { approximateMinimumDegree } from './amd.ts';
  * model) become one weighted vertex; AMD orders the weighted node graph and the order is
  * expanded back to DOFs. Identical closed adjacency makes the DOFs indistinguishable, so this
  * changes nothing but the cost of the ordering (Amestoy, Davis & Duff 1996, §2 on
- * indistinguishable nodes).
+ * indistinguishable nodes). `graph` = adjacencyGraph(p), passed in when the caller has it.
  */
 export function fillReducingOrdering(
   p: SymmetricPattern, method: 'amd' | 'natural', blockSize = 1,
+  graph: { ptr: Int32Array; idx: Int32Array } = adjacencyGraph(p),
 ): Int32Array {
   const n = p.n;
   if (method === 'natural' || n === 0) {
@@ -20,8 +21,7 @@ export function fillReducingOrdering(
     for (let k = 0; k < n; k++) perm[k] = k;
     return perm;
   }
-  const g = adjacencyGraph(p);
-  for (let j = 0; j < n; j++) g.idx.subarray(g.ptr[j], g.ptr[j + 1]).sort();
+  const g = graph; // lists sorted ascending (adjacencyGraph)
   const groupOf = new Int32Array(n);
   const groupStart: number[] = [];
   for (let j = 0; j < n; j++) {

@@ -1,8 +1,8 @@
-import { validatePattern, type SymmetricPattern } from './symmetric-pattern.ts';
+import { validatePattern, adjacencyGraph, type SymmetricPattern } from './symmetric-pattern.ts';
 import { fillReducingOrdering } from './ordering.ts';
 import { invertPermutation, composePermutations } from './permutation.ts';
 import { permutedUpper } from './permuted-upper.ts';
-import { eliminationTree, postorderTree, columnCounts } from './elimination-tree.ts';
+import { eliminationTree, eliminationTreeOfPermuted, postorderTree, columnCounts } from './elimination-tree.ts';
 import type { FactorBackend } from './factor-backend.ts';
 import { SimplicialBackend } from './simplicial-backend.ts';
 import { SupernodalLDL } from './supernodal-ldl.ts';
@@ -63,10 +63,10 @@ export class SparseLDL {
     if (!Number.isInteger(blockSize) || blockSize < 1) throw new Error(`SparseLDL: blockSize must be a positive integer, got ${blockSize}`);
     const method = options.ordering ?? 'amd';
     if (method !== 'amd' && method !== 'natural') throw new Error(`SparseLDL: unknown ordering '${String(method)}'`);
-    const order = fillReducingOrdering(pattern, method, blockSize);
+    const graph = adjacencyGraph(pattern);
+    const order = fillReducingOrdering(pattern, method, blockSize, graph);
     // Postorder the elimination tree of the ordered matrix (same fill, contiguous subtrees).
-    const up0 = permutedUpper(pattern, invertPermutation(order));
-    const post = postorderTree(eliminationTree(n, up0.ptr, up0.idx));
+    const post = postorderTree(eliminationTreeOfPermuted(n, graph.ptr, graph.idx, order, invertPermutation(order)));
     const perm = composePermutations(order, post);
     const kernel = options.kernel ?? 'supernodal';
     if (kernel !== 'supernodal' && kernel !== 'simplicial') throw new Error(`SparseLDL: unknown kernel '${String(kernel)}'`);

@@ -100,6 +100,8 @@ export function findEntry(p: SymmetricPattern, i: number, j: number): number {
 /**
  * Adjacency graph of the full symmetric pattern without the diagonal, in CSC form
  * (both triangles: j appears in column i and i in column j). Used by the orderings.
+ * Each list comes out sorted ascending: vertex v first receives the columns j < v that hold it
+ * (in increasing j), then its own lower entries (rows > v, already ascending).
  */
 export function adjacencyGraph(p: SymmetricPattern): { ptr: Int32Array; idx: Int32Array } {
   const { n, colPtr, rowIdx } = p;

@@ -3,6 +3,7 @@ import { multiply, matrix } from 'mathjs';
 import {
   patternFromCoordinates, validatePattern, findEntry, symmetricMultiply,
 } from '../../../solver/linalg/index.ts';
+import { adjacencyGraph } from '../../../solver/linalg/symmetric-pattern.ts';
 import { prng, randomSystem } from './random-systems.ts';
 
 describe('SymmetricPattern helpers', () => {
@@ -33,6 +34,25 @@ describe('SymmetricPattern helpers', () => {
     expect(() => validatePattern({ ...good, rowIdx: Int32Array.from([1, 0, 1, 2, 2]) })).toThrow(/column 0 must start with its diagonal/);
     expect(() => validatePattern({ n: 2, colPtr: Int32Array.from([0, 1, 1]), rowIdx: Int32Array.from([0]) })).toThrow(/column 1 is empty/);
     expect(() => validatePattern({ n: 2, colPtr: Int32Array.from([0, 2, 3]), rowIdx: Int32Array.from([0, 5, 1]) })).toThrow(/row 5 outside/);
+  });
+
+  it('builds sorted, symmetric adjacency lists without the diagonal', () => {
+    const sys = randomSystem(prng(4), 40, 3, 0.1);
+    const g = adjacencyGraph(sys.pattern);
+    const n = sys.pattern.n;
+    let edges = 0;
+    for (let v = 0; v < n; v++) {
+      for (let q = g.ptr[v]; q < g.ptr[v + 1]; q++) {
+        const u = g.idx[q];
+        expect(u).not.toBe(v);
+        if (q > g.ptr[v]) expect(u).toBeGreaterThan(g.idx[q - 1]);
+        expect(sys.dense[u][v]).not.toBe(0);
+        edges++;
+      }
+    }
+    let offDiagonal = 0;
+    for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) if (i !== j && sys.dense[i][j] !== 0) offDiagonal++;
+    expect(edges).toBe(offDiagonal);
   });
 
   it('multiplies like mathjs on the dense matrix', () => {
