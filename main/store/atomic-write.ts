@@ -98,7 +98,7 @@ async function keepBackup(target: string): Promise<void> {
     try { await h.sync(); } finally { await h.close(); }
   }
   try {
-    await fs.rename(staging, backup);
+    await renameWithRetry(staging, backup);
   } catch (e) {
     await fs.rm(staging, { force: true });
     throw e;
@@ -120,6 +120,21 @@ export function writeFileAtomic(target: string, data: string | Uint8Array, optio
   return next;
 }
 
+/** Errors a virus scanner or indexer holding the file briefly can cause on Windows. */
+const TRANSIENT = new Set(['EPERM', 'EBUSY', 'EACCES']);
+
+async function renameWithRetry(from: string, to: string, attempts = 6): Promise<void> {
+  for (let i = 1; ; i++) {
+    try {
+      return await fs.rename(from, to);
+    } catch (e) {
+      const code = (e as NodeJS.ErrnoException).code ?? '';
+      if (process.platform !== 'win32' || !TRANSIENT.has(code) || i >= attempts) throw e;
+      await new Promise((r) => setTimeout(r, 40 * i));
+    }
+  }
+}
+
 async function replaceFile(target: string, data: string | Uint8Array, options: AtomicWriteOptions): Promise<void> {
   await removeStaleTemps(target);
   await removeStaleTemps(target + BACKUP_SUFFIX);
@@ -127,7 +142,7 @@ async function replaceFile(target: string, data: string | Uint8Array, options: A
   try {
     await writeAndSync(temp, data);
     if (options.backup && (await exists(target))) await keepBackup(target);
-    await fs.rename(temp, target);
+    await renameWithRetry(temp, target);
   } catch (e) {
     await fs.rm(temp, { force: true });
     throw e;
