@@ -29,19 +29,22 @@ export function approximateMinimumDegree(
   let total = 0;
   for (let i = 0; i < n; i++) total += nv[i];
   const status = new Uint8Array(n);
-  const A: number[][] = new Array(n);
+  // A_i only ever shrinks: it lives in place in aIdx[aStart[i] .. aStart[i] + aLen[i]).
+  const aIdx = new Int32Array(ptr[n]);
+  const aStart = new Int32Array(n), aLen = new Int32Array(n);
   const E: number[][] = new Array(n);
   const Lel: number[][] = new Array(n);
   const Lsize = new Int32Array(n);
   const deg = new Int32Array(n);
   for (let i = 0; i < n; i++) {
-    const a: number[] = [];
-    let d = 0;
+    let d = 0, len = 0;
+    aStart[i] = ptr[i];
     for (let q = ptr[i]; q < ptr[i + 1]; q++) {
       const j = idx[q];
-      if (j !== i) { a.push(j); d += nv[j]; }
+      if (j !== i) { aIdx[ptr[i] + len++] = j; d += nv[j]; }
     }
-    A[i] = a; E[i] = []; Lel[i] = [];
+    aLen[i] = len;
+    E[i] = []; Lel[i] = [];
     deg[i] = d;
   }
   // Degree buckets: doubly linked lists, head[d].
@@ -71,8 +74,11 @@ export function approximateMinimumDegree(
   const mark = new Int32Array(n);
   const extTag = new Int32Array(n);
   const ext = new Int32Array(n);
+  const partial = new Int32Array(n);
   const cmp = new Int32Array(n);
-  const hash = new Float64Array(n);
+  const hashOf = new Int32Array(n);
+  const hHead = new Int32Array(n).fill(-1), hNext = new Int32Array(n);
+  const Lp = new Int32Array(n);
   let tag = 0;
   let nleft = total;
   let mindeg = 0;
@@ -85,105 +91,120 @@ export function approximateMinimumDegree(
     // ---- form L_p = (A_p ∪ ⋃_{e∈E_p} L_e) \ {p}; absorb the elements of E_p ----
     tag++;
     mark[p] = tag;
-    const Lp: number[] = [];
-    for (const j of A[p]) {
-      if (status[j] === VARIABLE && mark[j] !== tag) { mark[j] = tag; Lp.push(j); }
+    let lpLen = 0;
+    for (let q = aStart[p], qe = q + aLen[p]; q < qe; q++) {
+      const j = aIdx[q];
+      if (status[j] === VARIABLE && mark[j] !== tag) { mark[j] = tag; Lp[lpLen++] = j; }
     }
-    for (const e of E[p]) {
+    const Ep = E[p];
+    for (let t = 0; t < Ep.length; t++) {
+      const e = Ep[t];
       if (status[e] !== ELEMENT) continue;
-      for (const j of Lel[e]) {
-        if (status[j] === VARIABLE && mark[j] !== tag) { mark[j] = tag; Lp.push(j); }
+      const Le = Lel[e];
+      for (let u = 0; u < Le.length; u++) {
+        const j = Le[u];
+        if (status[j] === VARIABLE && mark[j] !== tag) { mark[j] = tag; Lp[lpLen++] = j; }
       }
       status[e] = DEAD;
       Lel[e] = [];
     }
-    A[p] = []; E[p] = [];
+    aLen[p] = 0; E[p] = [];
     emit(p);
     nleft -= nv[p];
-    for (const i of Lp) remove(i);
+    for (let t = 0; t < lpLen; t++) remove(Lp[t]);
     // ---- |L_e \ L_p| for every element adjacent to L_p ----
-    for (const i of Lp) {
-      const w = nv[i];
-      for (const e of E[i]) {
+    for (let t = 0; t < lpLen; t++) {
+      const i = Lp[t], w = nv[i], Ei = E[i];
+      for (let u = 0; u < Ei.length; u++) {
+        const e = Ei[u];
         if (status[e] !== ELEMENT) continue;
         if (extTag[e] !== tag) { extTag[e] = tag; ext[e] = Lsize[e]; }
         ext[e] -= w;
       }
     }
-    // ---- prune A_i and E_i, partial degrees, mass elimination ----
-    const keep: number[] = [];
-    for (const i of Lp) {
-      // Compact E_i and A_i in place (fewer short-lived arrays), then add p to E_i.
+    // ---- prune A_i and E_i (in place), partial degrees, mass elimination, hash buckets ----
+    let keepLen = 0;
+    for (let t = 0; t < lpLen; t++) {
+      const i = Lp[t];
       const Ei = E[i];
-      let d = 0;
-      let h = p;
-      let ne = 0;
-      for (let t = 0; t < Ei.length; t++) {
-        const e = Ei[t];
+      let d = 0, h = p, ne = 0;
+      for (let u = 0; u < Ei.length; u++) {
+        const e = Ei[u];
         if (status[e] !== ELEMENT) continue;
         const de = ext[e];
         if (de > 0) { d += de; Ei[ne++] = e; h += e; } else { status[e] = DEAD; Lel[e] = []; }
       }
       Ei.length = ne;
       Ei.push(p);
-      const Ai = A[i];
       let na = 0;
-      for (let t = 0; t < Ai.length; t++) {
-        const j = Ai[t];
-        if (status[j] === VARIABLE && mark[j] !== tag) { Ai[na++] = j; d += nv[j]; h += j; }
+      const a0 = aStart[i];
+      for (let q = a0, qe = a0 + aLen[i]; q < qe; q++) {
+        const j = aIdx[q];
+        if (status[j] === VARIABLE && mark[j] !== tag) { aIdx[a0 + na++] = j; d += nv[j]; h += j; }
       }
-      Ai.length = na;
+      aLen[i] = na;
       if (d === 0) {
         // Mass elimination: i is adjacent to element p only, eliminate it together with p.
         emit(i);
         nleft -= nv[i];
         nv[i] = 0;
         status[i] = DEAD;
-        A[i] = []; E[i] = [];
+        aLen[i] = 0; E[i] = [];
         continue;
       }
-      ext[i] = d; // partial degree (outside L_p), kept in ext[] of the variable slot
-      hash[i] = h % 1000003;
-      keep.push(i);
+      partial[i] = d; // degree outside L_p
+      const b = h % n;
+      hashOf[i] = b;
+      hNext[i] = hHead[b];
+      hHead[b] = i;
+      Lp[keepLen++] = i;
     }
-    // ---- supervariable detection: equal hash, then equal (A_i, E_i) ----
-    keep.sort((a, b) => hash[a] - hash[b] || a - b);
-    for (let s = 0; s < keep.length; s++) {
-      const i = keep[s];
-      if (status[i] !== VARIABLE) continue;
-      let marked = false;
-      for (let t = s + 1; t < keep.length && hash[keep[t]] === hash[i]; t++) {
-        const j = keep[t];
-        if (status[j] !== VARIABLE) continue;
-        if (A[j].length !== A[i].length || E[j].length !== E[i].length) continue;
-        if (!marked) {
-          tag++;
-          for (const v of A[i]) cmp[v] = tag;
-          for (const v of E[i]) cmp[v] = tag;
-          marked = true;
+    // ---- supervariable detection: same hash bucket, then equal (A_i, E_i) ----
+    for (let t = 0; t < keepLen; t++) {
+      const b = hashOf[Lp[t]];
+      let i = hHead[b];
+      if (i === -1) continue; // bucket already done
+      hHead[b] = -1;
+      for (; i !== -1; i = hNext[i]) {
+        if (status[i] !== VARIABLE) continue;
+        let marked = false;
+        const Ei = E[i];
+        for (let j = hNext[i]; j !== -1; j = hNext[j]) {
+          if (status[j] !== VARIABLE || aLen[j] !== aLen[i] || E[j].length !== Ei.length) continue;
+          if (!marked) {
+            tag++;
+            for (let q = aStart[i], qe = q + aLen[i]; q < qe; q++) cmp[aIdx[q]] = tag;
+            for (let u = 0; u < Ei.length; u++) cmp[Ei[u]] = tag;
+            marked = true;
+          }
+          let same = true;
+          for (let q = aStart[j], qe = q + aLen[j]; q < qe && same; q++) if (cmp[aIdx[q]] !== tag) same = false;
+          const Ej = E[j];
+          for (let u = 0; u < Ej.length && same; u++) if (cmp[Ej[u]] !== tag) same = false;
+          if (!same) continue;
+          nv[i] += nv[j];
+          nv[j] = 0;
+          status[j] = DEAD;
+          aLen[j] = 0; E[j] = [];
+          mNext[mTail[i]] = mHead[j];
+          mTail[i] = mTail[j];
+          deg[i] = Math.min(deg[i], deg[j]);
         }
-        let same = true;
-        for (const v of A[j]) if (cmp[v] !== tag) { same = false; break; }
-        if (same) for (const v of E[j]) if (cmp[v] !== tag) { same = false; break; }
-        if (!same) continue;
-        nv[i] += nv[j];
-        nv[j] = 0;
-        status[j] = DEAD;
-        A[j] = []; E[j] = [];
-        mNext[mTail[i]] = mHead[j];
-        mTail[i] = mTail[j];
-        deg[i] = Math.min(deg[i], deg[j]);
       }
     }
     // ---- final approximate degrees, element p ----
     const Lfinal: number[] = [];
     let lpw = 0;
-    for (const i of keep) if (status[i] === VARIABLE) { Lfinal.push(i); lpw += nv[i]; }
+    for (let t = 0; t < keepLen; t++) {
+      const i = Lp[t];
+      if (status[i] === VARIABLE) { Lfinal.push(i); lpw += nv[i]; }
+    }
     Lel[p] = Lfinal;
     Lsize[p] = lpw;
-    for (const i of Lfinal) {
+    for (let t = 0; t < Lfinal.length; t++) {
+      const i = Lfinal[t];
       const w = nv[i];
-      let d = Math.min(deg[i], ext[i]) + lpw - w;
+      let d = Math.min(deg[i], partial[i]) + lpw - w;
       d = Math.min(d, nleft - w);
       if (d < 0) d = 0;
       insert(i, d);
