@@ -4,5 +4,6 @@ import { solveCommand } from './solve.ts';
 import { checkCommand } from './check.ts';
 import { tuneCommand } from './tune.ts';
 import { scheduleCommand } from './schedule.ts';
+import { validateCommand } from './validate.ts';
 
-export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand];
+export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand];

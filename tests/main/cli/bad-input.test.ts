@@ -51,3 +51,27 @@ describe('stayset solve on bad files', () => {
     expectBadInput(['solve', ok, '--case', 'storm'], 'unknown case "storm" (the file has: pull)');
   });
 });
+
+describe('stayset validate', () => {
+  it('a valid file: summary line, exit 0', () => {
+    const r = runStayset(['validate', fixture('kestrel-moor-mast.stayset.json')]);
+    expect(r).toEqual({
+      code: 0,
+      stdout: `${fixture('kestrel-moor-mast.stayset.json')}: valid: 5 nodes, 4 members, 2 sections, 3 load cases, 1 combination\n`,
+      stderr: '',
+    });
+  });
+
+  it('an invalid file: every message on stderr, exit 2; --json also reports them on stdout', () => {
+    const bad = fixture('bad-many-problems.stayset.json');
+    const r = runStayset(['validate', bad]);
+    expect(r.code).toBe(2);
+    expect(r.stdout).toBe('');
+    expect(r.stderr.trimEnd().split('\n')).toHaveLength(6);
+    const j = runStayset(['validate', bad, '--json']);
+    expect(j.code).toBe(2);
+    const out = JSON.parse(j.stdout) as { valid: boolean; errors: string[] };
+    expect(out.valid).toBe(false);
+    expect(out.errors).toEqual(r.stderr.trimEnd().split('\n'));
+  });
+});
