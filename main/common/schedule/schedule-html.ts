@@ -14,9 +14,11 @@ export function escapeHtml(s: string): string {
 
 const CASES_PER_TABLE = 8;
 
-function table(caption: string, head: string[], rows: string[][], numericFrom = 1): string {
-  const th = head.map((h, i) => `<th${i >= numericFrom ? ' class="num"' : ''} scope="col">${h}</th>`).join('');
-  const body = rows.map((r) => `<tr>${r.map((c, i) => `<td${i >= numericFrom ? ' class="num"' : ''}>${c}</td>`).join('')}</tr>`).join('\n');
+/** A table; columns from `numericFrom` up to (not including) `numericTo` are right-aligned numbers. */
+function table(caption: string, head: string[], rows: string[][], numericFrom = 1, numericTo = Infinity): string {
+  const num = (i: number) => (i >= numericFrom && i < numericTo ? ' class="num"' : '');
+  const th = head.map((h, i) => `<th${num(i)} scope="col">${h}</th>`).join('');
+  const body = rows.map((r) => `<tr>${r.map((c, i) => `<td${num(i)}>${c}</td>`).join('')}</tr>`).join('\n');
   return `<table><caption>${caption}</caption><thead><tr>${th}</tr></thead><tbody>\n${body}\n</tbody></table>`;
 }
 
@@ -55,7 +57,7 @@ export function scheduleHtml(doc: ScheduleDocument): string {
   ]);
   const membersHtml = table(`Members — cut lengths, installation tension at the reference temperature, frequencies, envelope and checks`,
     ['Member', 'Groups', 'Section', 'Kind', `Cut length (${l.length})`, `Install. tension (${l.force})`, 'f₁ string (Hz)', 'f in-plane (Hz)',
-      `Max tension (${l.force})`, `Min tension (${l.force})`, 'Utilisation', 'Checks'], memberRows, 4)
+      `Max tension (${l.force})`, `Min tension (${l.force})`, 'Utilisation', 'Checks'], memberRows, 4, 11)
 
   const caseTables: string[] = [];
   for (let start = 0; start < doc.cases.length; start += CASES_PER_TABLE) {
