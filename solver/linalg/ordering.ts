@@ -39,18 +39,19 @@ export function fillReducingOrdering(
   for (let s = 0; s < m; s++) weight[s] = groupStart[s + 1] - groupStart[s];
   // Quotient graph of the groups: neighbours of a group's first DOF, mapped to groups.
   const gptr = new Int32Array(m + 1);
-  const gidx: number[] = [];
+  const gidx = new Int32Array(g.idx.length);
   const seen = new Int32Array(m).fill(-1);
+  let len = 0;
   for (let s = 0; s < m; s++) {
     const j = groupStart[s];
     seen[s] = s;
     for (let q = g.ptr[j]; q < g.ptr[j + 1]; q++) {
       const t = groupOf[g.idx[q]];
-      if (seen[t] !== s) { seen[t] = s; gidx.push(t); }
+      if (seen[t] !== s) { seen[t] = s; gidx[len++] = t; }
     }
-    gptr[s + 1] = gidx.length;
+    gptr[s + 1] = len;
   }
-  const gperm = approximateMinimumDegree(m, gptr, Int32Array.from(gidx), weight);
+  const gperm = approximateMinimumDegree(m, gptr, gidx.subarray(0, len), weight);
   const perm = new Int32Array(n);
   let k = 0;
   for (let t = 0; t < m; t++) {
@@ -60,21 +61,20 @@ export function fillReducingOrdering(
   return perm;
 }
 
-/** True when {a} ∪ adj(a) equals {b} ∪ adj(b), with adjacency lists sorted ascending. */
+/**
+ * True when {a} ∪ adj(a) equals {b} ∪ adj(b) (a != b, lists sorted ascending, no self loops):
+ * b ∈ adj(a) and adj(a) \ {b} = adj(b) \ {a}.
+ */
 function sameClosedNeighbourhood(ptr: Int32Array, idx: Int32Array, a: number, b: number): boolean {
-  // Both closed sets have the same size iff the open lists have the same length (a ∈ adj(b) required).
-  if (ptr[a + 1] - ptr[a] !== ptr[b + 1] - ptr[b]) return false;
-  let qa = ptr[a], qb = ptr[b];
   const ea = ptr[a + 1], eb = ptr[b + 1];
-  // Merge-walk the sets adj(a) ∪ {a} and adj(b) ∪ {b}.
-  let insA = false, insB = false;
+  if (ea - ptr[a] !== eb - ptr[b]) return false;
+  let qa = ptr[a], qb = ptr[b];
+  let sawB = false;
   for (;;) {
-    let va: number, vb: number;
-    if (!insA && (qa >= ea || idx[qa] > a)) { va = a; } else va = qa < ea ? idx[qa] : -1;
-    if (!insB && (qb >= eb || idx[qb] > b)) { vb = b; } else vb = qb < eb ? idx[qb] : -1;
-    if (va === -1 && vb === -1) return true;
-    if (va !== vb) return false;
-    if (va === a && !insA) insA = true; else qa++;
-    if (vb === b && !insB) insB = true; else qb++;
+    if (qa < ea && idx[qa] === b) { qa++; sawB = true; continue; }
+    if (qb < eb && idx[qb] === a) { qb++; continue; }
+    if (qa >= ea || qb >= eb) return sawB && qa >= ea && qb >= eb;
+    if (idx[qa] !== idx[qb]) return false;
+    qa++; qb++;
   }
 }
