@@ -10,7 +10,7 @@
  */
 import type { ProjectFile } from '../project/types.ts';
 import type { CaseFields, CaseResult } from '../results/types.ts';
-import { buildModel } from '../model/build-model.ts';
+import { buildModel, stressFreeLength } from '../model/build-model.ts';
 import { resolveCaseLoads, resolveCombinationLoads } from '../loads/resolve-case-loads.ts';
 import { createWorkspace } from '../analysis/workspace.ts';
 import { solveCase } from '../analysis/solve-case.ts';
@@ -70,7 +70,7 @@ export function createLiveResolver(project: ProjectFile, caseId: string, group: 
         const s0 = pretension / model.elemArea[e];
         model.elemS0[e] = s0;
         model.elemRefLength[e] = chordShare[k];
-        model.elemUnstressedLength[e] = chordShare[k] * Math.sqrt(Math.max(0, 1 - (2 * s0) / model.elemE[e]));
+        model.elemUnstressedLength[e] = stressFreeLength(chordShare[k], s0, model.elemE[e]);
       });
       assemble(model, null, ws.startVectors, zero, 0, ws.fInt0, ws.elements, null);
       const t0 = nowMs();

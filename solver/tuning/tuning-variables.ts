@@ -7,13 +7,14 @@
  *   without a breaking load.
  * - by 'unstressedLength': x is a factor on each member's unstressed length at the start
  *   (MemberSpec.unstressedLength = x · L0, pretension removed); x < 1 shortens (tightens).
- *   L0 = the file's unstressedLength, or from the pretension: L0 = Lc·√(1 − 2P/(E·A)) with Lc the
- *   chord between the end nodes (the inverse of the model's S0 = P/A at Lr = Lc, see
- *   solver/model/analysis-model.ts). Default bounds [0.99, 1.01].
+ *   L0 = the file's unstressedLength, or from the pretension: L0 = stressFreeLength(Lc, P/A, E)
+ *   with Lc the chord between the end nodes (the length that carries P at the chord, see
+ *   solver/model/build-model.ts). Default bounds [0.99, 1.01].
  */
 import type { MemberSpec, ProjectFile } from '../project/types.ts';
 import { membersOfGroup, groupExists } from '../checks/groups.ts';
 import type { ResolvedVariable } from './tuning-types.ts';
+import { stressFreeLength } from '../model/build-model.ts';
 
 function chordOf(project: ProjectFile, m: MemberSpec): number {
   const a = project.nodes.find((n) => n.id === m.from);
@@ -28,13 +29,17 @@ function sectionOf(project: ProjectFile, m: MemberSpec) {
   return s;
 }
 
-/** Pretension P (N) a member describes: its own, or the one its unstressed length implies at the chord. */
+/**
+ * Pretension P (N) a member describes: its own, or the one its unstressed length L0 implies at
+ * the chord Lc. Inverse of stressFreeLength (solver/model/build-model.ts): with λ = Lc / L0,
+ * P = E A λ (λ² − 1) / 2 (Green–Lagrange strain at the chord, true force).
+ */
 export function memberPretension(project: ProjectFile, m: MemberSpec): number {
   if (m.pretension !== undefined) return m.pretension;
   if (m.unstressedLength === undefined) return 0;
   const s = sectionOf(project, m);
-  const ratio = m.unstressedLength / chordOf(project, m);
-  return (s.area * s.E * (1 - ratio * ratio)) / 2;
+  const lambda = chordOf(project, m) / m.unstressedLength;
+  return (s.E * s.area * lambda * (lambda * lambda - 1)) / 2;
 }
 
 /** Unstressed length (m) a member describes (see the file comment). */
@@ -42,7 +47,7 @@ export function memberUnstressedLength(project: ProjectFile, m: MemberSpec): num
   if (m.unstressedLength !== undefined) return m.unstressedLength;
   const s = sectionOf(project, m);
   const p = m.pretension ?? 0;
-  return chordOf(project, m) * Math.sqrt(Math.max(0, 1 - (2 * p) / (s.E * s.area)));
+  return stressFreeLength(chordOf(project, m), p / s.area, s.E);
 }
 
 /** Resolve TuningSpec.variables; throws naming the entry on bad input. */

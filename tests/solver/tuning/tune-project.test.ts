@@ -3,6 +3,7 @@ import { tuneProject } from '../../../solver/tuning/tune-project.ts';
 import { solveNamedCases } from '../../../solver/tuning/project-case-solver.ts';
 import type { ProjectFile } from '../../../solver/project/types.ts';
 import { singleSpan } from './fixtures.ts';
+import { findBracketedRoot } from '../../../solver/installation/bracketed-root.ts';
 
 const P_TRUE = 30e3;
 
@@ -52,10 +53,10 @@ describe('pretension tuning through the nonlinear solver', () => {
     const res = tuneProject(p, { solveCases: solveNamedCases });
     expect(res.status).toBe('met');
     expect(res.variables[0].final).toBeGreaterThan(1); // a lower tension needs a longer cable
-    // The same state: the unstressed length equals that of the pretension P_TRUE at the chord
-    // (L0 = Lc √(1 − 2P/EA), the model's S0 = P/A at Lr = Lc).
-    const l0 = 100 * Math.sqrt(1 - (2 * P_TRUE) / (160e9 * 400e-6));
-    expect(res.project.members[0].unstressedLength! / l0).toBeCloseTo(1, 5);
+    // The same state: the unstressed length L0 that carries P_TRUE at the 100 m chord under the
+    // Green–Lagrange law, N = EA λ(λ² − 1)/2 with λ = Lc/L0 (solved here independently).
+    const lambda = findBracketedRoot((x) => x * (x * x - 1) - (2 * P_TRUE) / (160e9 * 400e-6), 1, 1.1);
+    expect(res.project.members[0].unstressedLength! / (100 / lambda)).toBeCloseTo(1, 5);
   });
 
   it('explains a conflict: the sag limit needs more pretension than the tension-share cap allows', () => {
