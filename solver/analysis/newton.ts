@@ -78,8 +78,8 @@ export interface CaseTag {
 }
 
 /**
- * 'unstable': the increment converged only through tangents that were not positive definite —
- * it crossed a limit point (snap-through or buckling), which load control must not jump over.
+ * 'unstable': the increment crossed a limit point (snap-through or buckling), which load control
+ * must not jump over — see `acceptIndefinite`.
  */
 type StepResult = 'converged' | 'maxIterations' | 'diverged' | 'singular' | 'cancelled' | 'unstable';
 
@@ -198,13 +198,15 @@ function newtonAtLoad(
   let [norm, ref] = evaluateResidual(ws, loads, fixedLoad, x, lambda, true);
   let previous = Infinity;
   let indefinite = false;
+  let predictor = 0;
+  ws.stepStart.set(x);
   for (let it = 0; it < options.maxIterationsPerStep; it++) {
     const rel = ref > 0 ? norm / ref : 0;
     counters.residual = rel;
     if (!Number.isFinite(norm)) return 'diverged';
     // Round-off floor: accept a stagnating residual that already meets the published bound 1e-9.
     if (rel <= options.tolerance || norm === 0 || (rel <= 1e-9 && norm >= 0.5 * previous)) {
-      return indefinite ? 'unstable' : 'converged';
+      return indefinite && !acceptIndefinite(ws, x, predictor, options) ? 'unstable' : 'converged';
     }
     if (control.isCancelled?.()) return 'cancelled';
     previous = norm;
@@ -217,6 +219,7 @@ function newtonAtLoad(
     counters.negativePivots = ldl.negativePivots;
     if (ldl.negativePivots > 0) indefinite = true;
     ldl.solve(residual, step);
+    if (it === 0) predictor = maxNodal(step);
 
     let scale = 1;
     for (let i = 0; i < step.length; i += 3) {
@@ -231,7 +234,29 @@ function newtonAtLoad(
   }
   counters.residual = ref > 0 ? norm / ref : 0;
   if (counters.residual > options.tolerance) return 'maxIterations';
-  return indefinite ? 'unstable' : 'converged';
+  [norm, ref] = evaluateResidual(ws, loads, fixedLoad, x, lambda, true);
+  return indefinite && !acceptIndefinite(ws, x, predictor, options) ? 'unstable' : 'converged';
+}
+
+/** Largest nodal length of a 3-per-node vector, m. */
+function maxNodal(v: Float64Array): number {
+  let m = 0;
+  for (let i = 0; i < v.length; i += 3) m = Math.max(m, Math.hypot(v[i], v[i + 1], v[i + 2]));
+  return m;
+}
+
+/**
+ * An increment whose iterates met indefinite tangents (overshoots do that) is kept when it did not
+ * jump — its converged displacement is within 3× the first Newton predictor — and its converged
+ * tangent (assembled in ws.values by the last residual evaluation) is positive definite. A jump far
+ * beyond the predictor is a snap-through to another branch; an indefinite converged tangent is an
+ * unstable equilibrium. Costs one extra factorisation, only in such increments.
+ */
+function acceptIndefinite(ws: Workspace, x: Float64Array, predictor: number, options: NewtonOptions): boolean {
+  const moved = ws.trial;
+  for (let d = 0; d < x.length; d++) moved[d] = x[d] - ws.stepStart[d];
+  if (maxNodal(moved) > 3 * predictor) return false;
+  return ws.ldl.factor(ws.values, options.pivotTolerance) < 0 && ws.ldl.negativePivots === 0;
 }
 
 const LINE_SEARCH_TOLERANCE = 0.5;

@@ -22,6 +22,8 @@ export interface Workspace {
   elements: ElementState;
   /** Element start vectors X_b − X_a (3 × elementCount), m. */
   startVectors: Float64Array;
+  /** Displacements at the start of the current load increment (3 × nodeCount), m. */
+  stepStart: Float64Array;
   /** Scratch positions X + u for follower loads (3 × nodeCount), m. */
   positions: Float64Array;
   /** Characteristic size of the model (bounding-box diagonal), m. */
@@ -43,7 +45,7 @@ export function createWorkspace(model: AnalysisModel): Workspace {
     model, pattern, ldl, values: new Float64Array(pattern.rowIdx.length), fInt0,
     fInt: new Float64Array(n), fExt: new Float64Array(n), residual: new Float64Array(n),
     step: new Float64Array(n), trial: new Float64Array(n), elements, startVectors: dX,
-    positions: new Float64Array(n), size: modelSize(model.coords),
+    stepStart: new Float64Array(n), positions: new Float64Array(n), size: modelSize(model.coords),
   };
 }
 
