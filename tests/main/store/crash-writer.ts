@@ -2,6 +2,7 @@
  * Child process for the crash test: saves two versions of a project alternately to one target,
  * forever, through the store's atomic write. Prints "ready" after the first complete save.
  * Usage: node --import tsx crash-writer.ts TARGET VERSION_A_FILE VERSION_B_FILE
+ * (the crash test runs it bundled to one .mjs file for a fast start).
  */
 import { readFileSync } from 'node:fs';
 import { writeFileAtomic } from '../../../main/store/atomic-write.ts';
