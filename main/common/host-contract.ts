@@ -29,6 +29,13 @@
  * - added: quit/close with unsaved changes (after setDirty(true)) shows Save / Don't save / Cancel
  *   in the desktop host. On Save the host sends the menu command 'save'; once the renderer's save
  *   succeeds and it calls setDirty(false), the window closes. A cancelled or failed save keeps it open.
+ * - runAnalysis: one run at a time per host; starting a run cancels the previous one (its
+ *   onDidFinishAnalysis says 'cancelled'). A cancelled run may still carry the partial report.
+ *   Progress is rate-limited (about 20 updates per second, always one when a case starts).
+ * - Menu 'undo' / 'redo' (CmdOrCtrl+Z, Ctrl+Y / Cmd+Shift+Z) are sent as commands, also while a
+ *   text field has focus: the renderer decides whether they mean the field or the project history.
+ * - Recent list and recovery files live in the per-user data folder shared by both editions
+ *   (main/store/user-dirs.ts).
  * - printSchedule (desktop) opens a hidden window at `index.html#/schedule?print=1` whose
  *   openInitial() returns the project to print; the renderer calls `printReady()` there when the
  *   schedule is laid out (added), then the host writes the PDF. Web: returns ok:false with a hint
