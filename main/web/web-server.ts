@@ -92,7 +92,8 @@ export async function startWebHost(options: WebHostOptions): Promise<WebHost> {
     host: header(req, 'host'),
     origin: header(req, 'origin'),
     secFetchSite: header(req, 'sec-fetch-site'),
-    token: header(req, TOKEN_HEADER) ?? url.searchParams.get(TOKEN_QUERY) ?? undefined,
+    // The query form is for EventSource only (it cannot send headers); calls use the header.
+    token: header(req, TOKEN_HEADER) ?? (url.pathname === EVENTS_PATH ? url.searchParams.get(TOKEN_QUERY) ?? undefined : undefined),
   });
 
   async function handleApi(req: IncomingMessage, res: ServerResponse, url: URL): Promise<void> {

@@ -66,6 +66,8 @@ describe('web host: access rules', () => {
     expect((await rawRequest('/api/kind', { Host: host0 }, 'POST', '{"args":[]}')).status).toBe(401);
     expect((await rawRequest('/api/kind', { Host: host0, 'X-Stayset-Token': 'ab'.repeat(32) }, 'POST', '{"args":[]}')).status).toBe(401);
     expect((await rawRequest('/api/events', { Host: host0 })).status).toBe(401);
+    // The token in the query is accepted for the event stream only.
+    expect((await rawRequest(`/api/kind?token=${web.token}`, { Host: host0 }, 'POST', '{"args":[]}')).status).toBe(401);
     const ok = await rawRequest('/api/kind', { Host: host0, 'X-Stayset-Token': web.token }, 'POST', '{"args":[]}');
     expect(JSON.parse(ok.text)).toEqual({ ok: true, value: 'web' });
   });
