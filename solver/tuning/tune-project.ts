@@ -1,7 +1,7 @@
 /**
  * Pretension tuning of a project: resolves TuningSpec variables and targets, runs the bounded
  * Levenberg–Marquardt (levenberg-marquardt.ts) with every evaluation a nonlinear re-solve of the
- * cases the targets name (through the injected CaseSolveFn), and explains unmet targets
+ * cases the targets name (warm session by default, or the injected CaseSolveFn), and explains unmet targets
  * (conflict-diagnosis.ts). The input project is not modified.
  * Results are for review by a qualified engineer; local codes and licensed practice govern.
  */
@@ -12,13 +12,19 @@ import { applyVariables, memberPretension, resolveVariables } from './tuning-var
 import { describeTarget, evaluateTarget, targetCases, validateTarget } from './target-evaluation.ts';
 import { finiteDifferenceJacobian, isMet, solveBoundedLeastSquares, type GapProblem, type LmOptions } from './levenberg-marquardt.ts';
 import { diagnoseTargets } from './conflict-diagnosis.ts';
+import { createWarmSession } from './warm-session.ts';
 import type { CaseSolveFn, TargetValue, TuningResult, VariableOutcome } from './tuning-types.ts';
 
 export interface TuneOptions extends LmOptions {
-  solveCases: CaseSolveFn;
+  /**
+   * How to solve the cases of an edited project. Default: a warm session (warm-session.ts) that
+   * keeps one model and warm-starts every case; pass solveNamedCases to rebuild and solve the
+   * edited project from scratch each time (slower, the reference path).
+   */
+  solveCases?: CaseSolveFn;
 }
 
-export function tuneProject(project: ProjectFile, options: TuneOptions): TuningResult {
+export function tuneProject(project: ProjectFile, options: TuneOptions = {}): TuningResult {
   const spec = project.tuning;
   if (!spec) throw new Error('project has no "tuning" section: add tuning.variables and tuning.targets');
   if (spec.targets.length === 0) throw new Error('tuning: no targets (tuning.targets is empty)');
@@ -41,12 +47,15 @@ export function tuneProject(project: ProjectFile, options: TuneOptions): TuningR
     return s;
   };
 
+  const session = options.solveCases ? null : createWarmSession(project, vars, caseIds);
+  const solveAt = (x: number[]): Map<string, CaseResult> =>
+    session ? session(x) : options.solveCases!(applyVariables(project, vars, x), caseIds);
   const cache = new Map<string, { values: TargetValue[] } | { failure: string }>();
   const evaluateAt = (x: number[]) => {
     const key = x.map((v) => v.toPrecision(15)).join(',');
     let hit = cache.get(key);
     if (!hit) {
-      const results: Map<string, CaseResult> = options.solveCases(applyVariables(project, vars, x), caseIds);
+      const results = solveAt(x);
       const bad = [...results.values()].find((r) => !r.converged);
       hit = bad
         ? { failure: `case '${bad.id}' did not converge (${bad.status}${bad.message ? `: ${bad.message}` : ''})` }

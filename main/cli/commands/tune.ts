@@ -5,7 +5,7 @@
  * FILE.bak).
  */
 import { serializeProject } from '../../common/project/index.ts';
-import { solveNamedCases, tuneProject } from '../../../solver/index.ts';
+import { tuneProject } from '../../../solver/index.ts';
 import type { ProjectFile, TuningResult } from '../../../solver/index.ts';
 import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
@@ -80,7 +80,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   const project: ProjectFile = read.project;
   let result: TuningResult;
   try {
-    result = tuneProject(project, { solveCases: solveNamedCases });
+    result = tuneProject(project);
   } catch (e) {
     io.err(`${file}: ${(e as Error).message}\n`);
     return EXIT.badInput;

@@ -3,10 +3,11 @@
  * DOFs): an invented 200 m lattice guyed mast from the guyed-mast generator, four guy levels of
  * three guys, 40 elements per guy. The slider moves the top guy level's pretension in 1 % steps;
  * every step is one warm-started Newton solve of the dead-load case (createLiveResolver).
- * Prints a table; nothing is asserted. Run alone: node --import tsx tests/bench/tuning/live-resolve-bench.ts
+ * Then a full tuning run on the same mast, warm session against rebuilding per solve.
+ * Prints tables; nothing is asserted. Run alone: node --import tsx tests/bench/tuning/live-resolve-bench.ts
  */
 import { fileURLToPath } from 'node:url';
-import { createLiveResolver } from '../../../solver/index.ts';
+import { createLiveResolver, solveNamedCases, tuneProject } from '../../../solver/index.ts';
 import type { ProjectFile } from '../../../solver/index.ts';
 import { generateGuyedMast } from '../../../main/common/generators/guyed-mast.ts';
 import { applyGenerated } from '../../../main/common/generators/apply-generated.ts';
@@ -65,12 +66,31 @@ export function runLiveResolveBench(steps = 20): LiveResolveBenchResult {
   };
 }
 
+export interface TuneBenchRow { path: 'warm session' | 'rebuild each solve'; seconds: number; solves: number; summary: string }
+
+/** Full tuning run on the same mast: four tension-share targets, one variable per guy level. */
+export function runTuneBench(): TuneBenchRow[] {
+  const project = mastForBench();
+  project.tuning = {
+    variables: [1, 2, 3, 4].map((k) => ({ group: `mast/guys level ${k}`, by: 'pretension' as const })),
+    targets: [1, 2, 3, 4].map((k) => ({ kind: 'tensionShare' as const, group: `mast/guys level ${k}`, share: 0.08 + 0.01 * k })),
+  };
+  return (['warm session', 'rebuild each solve'] as const).map((path) => {
+    const t0 = performance.now();
+    const r = tuneProject(project, path === 'warm session' ? {} : { solveCases: solveNamedCases });
+    return { path, seconds: (performance.now() - t0) / 1000, solves: r.evaluations, summary: r.summary };
+  });
+}
+
 export function runLiveResolveBenchmark(): LiveResolveBenchResult {
   const r = runLiveResolveBench();
   console.log('\nLive re-solve per pretension-slider step (200 m lattice guyed mast, dead load, warm start)');
   console.log('   DOFs  elements  cold s  cold it  steps  median step s  max step s  it/step  warm');
   console.log(`${String(r.dofs).padStart(7)} ${String(r.elements).padStart(9)} ${r.coldSeconds.toFixed(3).padStart(7)} ${String(r.coldIterations).padStart(8)}`
     + ` ${String(r.steps).padStart(6)} ${r.medianStepSeconds.toFixed(4).padStart(14)} ${r.maxStepSeconds.toFixed(4).padStart(11)} ${r.meanStepIterations.toFixed(1).padStart(8)} ${(r.warmShare * 100).toFixed(0).padStart(4)} %`);
+  console.log('\nTuning run on the same mast (4 guy levels, 4 tension-share targets)');
+  console.log('path                  seconds  solves  outcome');
+  for (const t of runTuneBench()) console.log(`${t.path.padEnd(20)} ${t.seconds.toFixed(2).padStart(8)} ${String(t.solves).padStart(7)}  ${t.summary}`);
   return r;
 }
 
