@@ -27,8 +27,16 @@ export function addRecent(list: RecentEntry[], entry: RecentEntry, limit = RECEN
 
 export class RecentProjects {
   private readonly file: string;
+  /** Updates run one after another (read-modify-write). */
+  private chain: Promise<unknown> = Promise.resolve();
   constructor(userDataDir: string) {
     this.file = path.join(userDataDir, RECENT_FILE);
+  }
+
+  private serial<T>(job: () => Promise<T>): Promise<T> {
+    const next = this.chain.catch(() => undefined).then(job);
+    this.chain = next;
+    return next;
   }
 
   async list(): Promise<RecentEntry[]> {
@@ -40,19 +48,23 @@ export class RecentProjects {
     }
   }
 
-  async add(projectPath: string, now = new Date()): Promise<RecentEntry[]> {
-    const resolved = path.resolve(projectPath);
-    const next = addRecent(await this.list(), { path: resolved, name: path.basename(resolved), openedAt: now.toISOString() });
-    await fs.mkdir(path.dirname(this.file), { recursive: true });
-    await writeFileAtomic(this.file, JSON.stringify(next, null, 2) + '\n');
-    return next;
+  add(projectPath: string, now = new Date()): Promise<RecentEntry[]> {
+    return this.serial(async () => {
+      const resolved = path.resolve(projectPath);
+      const next = addRecent(await this.list(), { path: resolved, name: path.basename(resolved), openedAt: now.toISOString() });
+      await fs.mkdir(path.dirname(this.file), { recursive: true });
+      await writeFileAtomic(this.file, JSON.stringify(next, null, 2) + '\n');
+      return next;
+    });
   }
 
-  async remove(projectPath: string): Promise<void> {
-    const resolved = path.resolve(projectPath);
-    const list = await this.list();
-    const next = list.filter((e) => !samePath(e.path, resolved));
-    if (next.length === list.length) return;
-    await writeFileAtomic(this.file, JSON.stringify(next, null, 2) + '\n');
+  remove(projectPath: string): Promise<void> {
+    return this.serial(async () => {
+      const resolved = path.resolve(projectPath);
+      const list = await this.list();
+      const next = list.filter((e) => !samePath(e.path, resolved));
+      if (next.length === list.length) return;
+      await writeFileAtomic(this.file, JSON.stringify(next, null, 2) + '\n');
+    });
   }
 }

@@ -81,3 +81,11 @@ describe('recovery', () => {
     expect((await svc.recentProjects()).map((e) => e.path)).toEqual([file]);
   });
 });
+
+describe('recent projects under concurrent opens', () => {
+  it('keeps every entry when adds overlap', async () => {
+    const recent = new RecentProjects(tmp.dir);
+    await Promise.all([0, 1, 2, 3, 4].map((i) => recent.add(path.join(tmp.dir, `c${i}.stayset`))));
+    expect((await recent.list()).map((e) => e.name).sort()).toEqual(['c0.stayset', 'c1.stayset', 'c2.stayset', 'c3.stayset', 'c4.stayset']);
+  });
+});
