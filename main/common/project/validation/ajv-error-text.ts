@@ -88,7 +88,9 @@ export function ajvErrorText(root: unknown, e: ErrorObject): string {
   }
   const up = Number((e.parentSchema as Record<string, unknown> | undefined)?.['x-field-up'] ?? 0);
   const fieldPath = up > 0 ? path.slice(0, Math.max(0, path.length - up)) : path;
-  const got = up > 0 ? undefined : shortValue(e.data);
+  const composite = Array.isArray(e.data) ? 'a list' : typeof e.data === 'object' && e.data !== null ? 'an object' : undefined;
+  // A wrong-type list or object is named by kind; for other keywords it would only be noise.
+  const got = up > 0 ? undefined : (shortValue(e.data) ?? (e.keyword === 'type' ? composite : undefined));
   const gotText = got !== undefined && e.keyword !== 'oneOf' ? ` (got ${got})` : '';
   return messageAt(root, fieldPath, (customTemplate(e) ?? defaultTemplate(e)) + gotText);
 }
