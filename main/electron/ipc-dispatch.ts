@@ -12,6 +12,34 @@ export interface IpcContext {
   printJobs: PrintJobs;
 }
 
+/**
+ * A hidden print window runs the same renderer but must not act on the user's project: it gets
+ * its print project from openInitial, may report printReady, gets neutral answers for the
+ * start-up calls (kind, recent, recovery, dirty flag, autosave) and is refused everything else.
+ */
+function printWindowReply(jobs: PrintJobs, senderId: number, method: HostMethodName): RpcReply {
+  switch (method) {
+    case 'openInitial': {
+      const opened = jobs.projectFor(senderId);
+      return { ok: true, value: opened ? { ok: true, value: opened } : null };
+    }
+    case 'printReady':
+      jobs.markReady(senderId);
+      return { ok: true, value: null };
+    case 'kind':
+      return { ok: true, value: 'desktop' };
+    case 'recentProjects':
+    case 'listRecovery':
+      return { ok: true, value: [] };
+    case 'setDirty':
+    case 'autosave':
+    case 'discardRecovery':
+      return { ok: true, value: null };
+    default:
+      return { ok: false, error: `${method} is not available in the print window` };
+  }
+}
+
 export async function dispatchIpcCall(
   handlers: HostHandlers, ctx: IpcContext, method: HostMethodName, caller: IpcCaller, args: unknown[],
 ): Promise<RpcReply> {
@@ -20,16 +48,7 @@ export async function dispatchIpcCall(
   const checked = validateHostArgs(method, args);
   if (!checked.ok) return { ok: false, error: checked.error };
   const senderId = caller.senderId;
-  if (ctx.printJobs.has(senderId)) {
-    if (method === 'openInitial') {
-      const opened = ctx.printJobs.projectFor(senderId);
-      return { ok: true, value: opened ? { ok: true, value: opened } : null };
-    }
-    if (method === 'printReady') {
-      ctx.printJobs.markReady(senderId);
-      return { ok: true, value: null };
-    }
-  }
+  if (ctx.printJobs.has(senderId)) return printWindowReply(ctx.printJobs, senderId, method);
   try {
     const handler = handlers[method] as (...a: unknown[]) => Promise<unknown>;
     const value = await handler(...(checked.value as unknown[]));

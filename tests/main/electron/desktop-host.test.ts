@@ -106,6 +106,12 @@ describe('desktop host', () => {
     const printCaller = { senderId: 5, isMainFrame: true, frameUrl: appPageUrl('/schedule?print=1') };
     const initial = await dispatchIpcCall(handlers, ctx, 'openInitial', printCaller, []);
     expect(initial).toMatchObject({ ok: true, value: { ok: true, value: { path: null, name: 'Test mast Ridgeback Hill' } } });
+    // The print window cannot touch the user's project or window state.
+    await dispatchIpcCall(handlers, ctx, 'setDirty', printCaller, [true, 'print']);
+    expect(quit.dirty).toBe(false);
+    expect(await dispatchIpcCall(handlers, ctx, 'listRecovery', printCaller, [])).toEqual({ ok: true, value: [] });
+    expect(await dispatchIpcCall(handlers, ctx, 'save', printCaller, [path.join(tmp.dir, 'x.stayset'), sampleMast()]))
+      .toEqual({ ok: false, error: 'save is not available in the print window' });
     await dispatchIpcCall(handlers, ctx, 'printReady', printCaller, []);
     await expect(ready).resolves.toBeUndefined();
     jobs.remove(5);
