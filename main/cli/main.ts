@@ -9,6 +9,11 @@ import type { CliIO } from './cli-io.ts';
 import { packageVersion } from './version.ts';
 
 export async function runCli(argv: readonly string[]): Promise<number> {
+  // `stayset solve big.json | head`: the reader closed the pipe; stop quietly, not with a trace.
+  process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+    if (e.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+    throw e;
+  });
   const io: CliIO = {
     out: (text) => void process.stdout.write(text),
     err: (text) => void process.stderr.write(text),
