@@ -128,6 +128,10 @@ export async function startWebHost(options: WebHostOptions): Promise<WebHost> {
       return;
     }
     const file = await resolveStaticFile(options.staticDir, url.pathname);
+    if (!file && url.pathname === '/favicon.ico') {
+      res.writeHead(204, SECURITY_HEADERS).end(); // browsers ask for it; the app has none
+      return;
+    }
     if (!file) {
       res.writeHead(404, { ...SECURITY_HEADERS, 'Content-Type': 'text/plain; charset=utf-8' });
       res.end(url.pathname === '/' ? 'The renderer is not built: run `npm run build:renderer` first.\n' : 'Not found\n');
