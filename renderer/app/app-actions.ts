@@ -10,6 +10,7 @@ import { useProjectStore } from '../stores/project.ts';
 import { useResultsStore } from '../stores/results.ts';
 import { useSelectionStore } from '../stores/selection.ts';
 import { useSettingsStore } from '../stores/settings.ts';
+import { buildSchedulePage, isoDate, type SchedulePage } from '../schedule/schedule-document.ts';
 
 /** Interval of the autosave while there are unsaved changes, ms. */
 export const AUTOSAVE_MS = 10_000;
@@ -35,6 +36,8 @@ export function createAppActions(hostOverride?: StaysetHost) {
   const recovery = shallowRef<RecoveryEntry[]>([]);
   /** Set when the user must type a path (web Save As / Open). */
   const pathPrompt = shallowRef<{ purpose: 'open' | 'saveAs'; suggestion: string } | null>(null);
+  /** The tension schedule shown over the main screen, or null. */
+  const schedule = shallowRef<SchedulePage | null>(null);
   let host: StaysetHost | null = hostOverride ?? null;
   let autosaveTimer: ReturnType<typeof setInterval> | null = null;
   const unsubscribers: (() => void)[] = [];
@@ -239,9 +242,28 @@ export function createAppActions(hostOverride?: StaysetHost) {
     }
   }
 
+  /** Show the schedule of the current results (browser edition: print it with the browser). */
+  function showSchedule(): void {
+    const p = projectStore.project;
+    if (!p) return;
+    if (!results.report || results.isStale(projectStore.revision)) {
+      say('error', 'Run the analysis first: the schedule is built from current results.');
+      return;
+    }
+    try {
+      schedule.value = buildSchedulePage({ project: p, report: results.report, units: settings.units, paper: settings.units === 'US' ? 'letter' : 'a4', withInstallation: false, issueDate: isoDate(new Date()) });
+    } catch (e) {
+      say('error', `The schedule could not be built: ${(e as Error).message}`);
+    }
+  }
+
   async function print(): Promise<void> {
     const p = projectStore.project;
     if (!p) return;
+    if (hostKind.value === 'web') {
+      showSchedule();
+      return;
+    }
     const r = await h().printSchedule(p).catch((e: Error) => ({ ok: false as const, error: e.message }));
     if (r && !r.ok) say('error', r.error);
     else if (r) say('info', `Schedule written to ${r.value.path}`);
@@ -269,8 +291,8 @@ export function createAppActions(hostOverride?: StaysetHost) {
   }
 
   return {
-    phase, hostKind, notice, openErrors, recents, recovery, pathPrompt, fitRequests,
-    start, stop, openDemo, openPath, recover, save, saveAs, answerPathPrompt, autosave, run, cancel, undo, redo,
+    phase, hostKind, notice, openErrors, recents, recovery, pathPrompt, fitRequests, schedule,
+    start, showSchedule, stop, openDemo, openPath, recover, save, saveAs, answerPathPrompt, autosave, run, cancel, undo, redo,
     menuCommand, print, onKeydown, syncDirty, say,
   };
 }

@@ -110,6 +110,12 @@ describe('main screen in the browser edition', () => {
     expect(await page.locator('[data-testid="results-table"] thead').textContent()).toContain('kip');
     await shot('06-us-units.png');
     await page.getByTestId('units-si').click();
+    // The printable tension schedule from the same results (main/common/schedule).
+    await page.getByTestId('schedule').click();
+    await expect.poll(() => page.getByTestId('schedule-view').textContent()).toContain(guy.id);
+    expect(await page.getByTestId('schedule-view').textContent()).toMatch(/qualified engineer/);
+    await shot('07-schedule.png');
+    await page.getByTestId('schedule-close').click();
   });
 
   it('edits a pretension, saves with Ctrl+S, and finds it after a reload and on disk', async () => {
