@@ -2,5 +2,5 @@
 export * from './schedule-types.ts';
 export * from './schedule-units.ts';
 export { buildSchedule, type ScheduleSource, type ScheduleOptions } from './build-schedule.ts';
-export { scheduleHtml, escapeHtml } from './schedule-html.ts';
+export { scheduleHtml, scheduleCss, scheduleFragment, escapeHtml } from './schedule-html.ts';
 export { scheduleCsv } from './schedule-csv.ts';

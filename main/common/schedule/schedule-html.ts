@@ -28,12 +28,11 @@ function statusCell(status: 'pass' | 'fail' | 'unchecked', failed: string[]): st
   return '<span class="unchecked">NOT CHECKED</span>';
 }
 
-export function scheduleHtml(doc: ScheduleDocument): string {
+function scheduleMarkup(doc: ScheduleDocument): { title: string; body: string } {
   const u = doc.units;
   const l = unitLabels(u);
   const h = doc.header;
   const e = escapeHtml;
-  const pageSize = doc.paper === 'letter' ? 'letter portrait' : 'A4 portrait';
   const tRef = Number.isFinite(h.referenceTemperature)
     ? `${formatTemperature(u, h.referenceTemperature)} ${l.temperature}${h.referenceTemperatureAssumed ? ' (assumed: not set in the project)' : ''}`
     : 'not set';
@@ -91,39 +90,7 @@ export function scheduleHtml(doc: ScheduleDocument): string {
 
   const notesHtml = doc.notes.length ? `<h2>Notes</h2><ul>${doc.notes.map((n) => `<li>${e(n)}</li>`).join('')}</ul>` : '';
 
-  return `<!DOCTYPE html>
-<html lang="en">
-<head>
-<meta charset="utf-8">
-<title>${e(doc.title)} — ${e(h.projectName)}</title>
-<style>
-@page { size: ${pageSize}; margin: 12mm 10mm 14mm 10mm;
-  @bottom-left { content: "${e(h.projectName).replace(/"/g, '')} — issued ${e(h.issueDate)}"; font: 7pt sans-serif; }
-  @bottom-right { content: "page " counter(page) " of " counter(pages); font: 7pt sans-serif; } }
-html { color: #000; background: #fff; }
-body { font: 8pt/1.25 "DejaVu Sans", "Liberation Sans", Arial, sans-serif; margin: 0; }
-h1 { font-size: 14pt; margin: 0 0 2mm; }
-h2 { font-size: 10.5pt; margin: 5mm 0 1.5mm; border-bottom: 1.5pt solid #000; break-after: avoid; }
-.caution { border: 2.5pt solid #000; padding: 2mm 3mm; margin: 2mm 0 3mm; font-size: 10pt; font-weight: bold; }
-.caution::before { content: "CAUTION — "; }
-table { border-collapse: collapse; width: 100%; margin: 0 0 3mm; }
-caption { text-align: left; font-weight: bold; padding: 1mm 0; caption-side: top; }
-thead { display: table-header-group; }
-tr { break-inside: avoid; }
-th, td { border: 0.6pt solid #000; padding: 0.6mm 1mm; vertical-align: top; }
-thead th { background: #fff; border-bottom: 1.5pt solid #000; font-weight: bold; text-align: left; }
-.num { text-align: right; font-variant-numeric: tabular-nums; }
-small { font-size: 6.5pt; }
-.fail { font-weight: bold; text-decoration: underline; }
-.unchecked { font-style: italic; }
-table.meta { width: auto; }
-table.meta th { text-align: left; padding-right: 4mm; border: none; font-weight: bold; }
-table.meta td { border: none; }
-@media screen { body { max-width: 190mm; margin: 8mm auto; } }
-</style>
-</head>
-<body>
-<header>
+  return { title: `${e(doc.title)} — ${e(h.projectName)}`, body: `<header>
 <h1>${e(doc.title)}</h1>
 ${headerHtml}
 <p class="caution" role="note">${e(doc.caution)}</p>
@@ -141,8 +108,83 @@ ${tuningHtml}
 ${tempHtml}
 ${notesHtml}
 <p class="caution" role="note">${e(doc.caution)}</p>
-</main>
+</main>` };
+}
+
+/** Print style rules as [selector, declarations]; selectors are scoped by scheduleCss. */
+const RULES: [string, string][] = [
+  ['html', 'color: #000; background: #fff;'],
+  ['body', 'font: 8pt/1.25 "DejaVu Sans", "Liberation Sans", Arial, sans-serif; margin: 0;'],
+  ['h1', 'font-size: 14pt; margin: 0 0 2mm;'],
+  ['h2', 'font-size: 10.5pt; margin: 5mm 0 1.5mm; border-bottom: 1.5pt solid #000; break-after: avoid;'],
+  ['.caution', 'border: 2.5pt solid #000; padding: 2mm 3mm; margin: 2mm 0 3mm; font-size: 10pt; font-weight: bold;'],
+  ['.caution::before', 'content: "CAUTION — ";'],
+  ['table', 'border-collapse: collapse; width: 100%; margin: 0 0 3mm;'],
+  ['caption', 'text-align: left; font-weight: bold; padding: 1mm 0; caption-side: top;'],
+  ['thead', 'display: table-header-group;'],
+  ['tr', 'break-inside: avoid;'],
+  ['th, td', 'border: 0.6pt solid #000; padding: 0.6mm 1mm; vertical-align: top;'],
+  ['thead th', 'background: #fff; border-bottom: 1.5pt solid #000; font-weight: bold; text-align: left;'],
+  ['.num', 'text-align: right; font-variant-numeric: tabular-nums;'],
+  ['small', 'font-size: 6.5pt;'],
+  ['.fail', 'font-weight: bold; text-decoration: underline;'],
+  ['.unchecked', 'font-style: italic;'],
+  ['table.meta', 'width: auto;'],
+  ['table.meta th', 'text-align: left; padding-right: 4mm; border: none; font-weight: bold;'],
+  ['table.meta td', 'border: none;'],
+];
+
+/**
+ * The print CSS. Without `scope` it styles a whole document (html, body, elements). With a
+ * class name, every rule is limited to elements inside `.scope` and the html/body rules apply to
+ * the `.scope` element itself, so the schedule can sit inside another page (the app's print
+ * route) without restyling it. The @page rule (paper size, margins, page footer) is global
+ * either way: it only acts when printing.
+ */
+export function scheduleCss(doc: ScheduleDocument, scope?: string): string {
+  const pageSize = doc.paper === 'letter' ? 'letter portrait' : 'A4 portrait';
+  const h = doc.header;
+  // A CSS string, not HTML: drop quotes, backslashes, angle brackets and line breaks (no escapes needed).
+  const cssText = (t: string) => t.replace(/["\\<>\r\n]/g, '');
+  const footer = `${cssText(h.projectName)} — issued ${cssText(h.issueDate)}`;
+  const page = `@page { size: ${pageSize}; margin: 12mm 10mm 14mm 10mm;
+  @bottom-left { content: "${footer}"; font: 7pt sans-serif; }
+  @bottom-right { content: "page " counter(page) " of " counter(pages); font: 7pt sans-serif; } }`;
+  if (scope !== undefined && !/^[A-Za-z][\w-]*$/.test(scope)) throw new Error(`schedule CSS scope must be a class name, got ${JSON.stringify(scope)}`);
+  const sel = (selector: string): string => selector.split(',').map((x) => x.trim()).map((x) => {
+    if (!scope) return x;
+    return x === 'html' || x === 'body' ? `.${scope}` : `.${scope} ${x}`;
+  }).join(', ');
+  const rules = RULES.map(([s, d]) => `${sel(s)} { ${d} }`);
+  if (!scope) rules.push('@media screen { body { max-width: 190mm; margin: 8mm auto; } }');
+  return `${page}\n${rules.join('\n')}`;
+}
+
+/** A complete standalone HTML document (see the file comment). */
+export function scheduleHtml(doc: ScheduleDocument): string {
+  const m = scheduleMarkup(doc);
+  return `<!DOCTYPE html>
+<html lang="en">
+<head>
+<meta charset="utf-8">
+<title>${m.title}</title>
+<style>
+${scheduleCss(doc)}
+</style>
+</head>
+<body>
+${m.body}
 </body>
 </html>
 `;
+}
+
+/**
+ * The schedule for embedding in a page: markup wrapped in a div of class `scope` and CSS
+ * scoped to it (scheduleCss with scope). Insert the CSS in a <style> element and the HTML as
+ * markup; every text from the project is escaped.
+ */
+export function scheduleFragment(doc: ScheduleDocument, scope = 'stayset-schedule'): { css: string; html: string } {
+  const css = scheduleCss(doc, scope);
+  return { css, html: `<div class="${scope}">\n${scheduleMarkup(doc).body}\n</div>` };
 }

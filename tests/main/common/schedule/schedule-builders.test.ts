@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { parse } from 'csv-parse/sync';
 import { buildModel, installationData, runChecks, solveProject } from '../../../../solver/index.ts';
 import type { CheckReport, InstallationData, ProjectFile, SolveReport } from '../../../../solver/index.ts';
-import { buildSchedule, scheduleCsv, scheduleHtml, SCHEDULE_CAUTION, NEWTONS_PER_KIP, METRES_PER_FOOT } from '../../../../main/common/schedule/index.ts';
+import { buildSchedule, scheduleCsv, scheduleFragment, scheduleHtml, SCHEDULE_CAUTION, NEWTONS_PER_KIP, METRES_PER_FOOT } from '../../../../main/common/schedule/index.ts';
 import { mastProject } from './mast-fixture.ts';
 
 let project: ProjectFile;
@@ -112,5 +112,29 @@ describe('schedule HTML', () => {
   it('rejects an unknown unit system or paper, naming it', () => {
     expect(() => buildSchedule({ project, report }, { issueDate: '2026-12-01', units: 'imperial' as never })).toThrow(/units must be SI or US/);
     expect(() => buildSchedule({ project, report }, { issueDate: '2026-12-01', paper: 'a3' as never })).toThrow(/paper must be a4 or letter/);
+  });
+
+  it('embeds as a fragment whose CSS only styles inside its wrapper', () => {
+    const doc = buildSchedule({ project, report, checks, installation }, { issueDate: '2026-12-01' });
+    const f = scheduleFragment(doc);
+    expect(f.html.startsWith('<div class="stayset-schedule">')).toBe(true);
+    expect(f.html).toContain(SCHEDULE_CAUTION);
+    // Every rule outside @page starts with the scope class; no bare html/body/table selectors.
+    const rules = f.css.replace(/@page \{[\s\S]*?\} \}/, '').split('\n').filter((x) => x.trim());
+    expect(rules.length).toBeGreaterThan(10);
+    for (const r of rules) {
+      const selectors = r.slice(0, r.indexOf('{')).split(',');
+      for (const sel of selectors) expect(sel.trim().startsWith('.stayset-schedule')).toBe(true);
+    }
+    expect(() => scheduleFragment(doc, 'x"}body{')).toThrow(/class name/);
+  });
+
+  it('keeps project text out of the CSS page footer syntax', () => {
+    const p = structuredClone(project);
+    p.meta!.name = 'Mast "A"\\ </style><script>x</script>';
+    const html = scheduleHtml(buildSchedule({ project: p, report }, { issueDate: '2026-12-01' }));
+    const style = /<style>([\s\S]*?)<\/style>/.exec(html)![1];
+    expect(style).toContain('content: "Mast A /stylescriptx/script — issued 2026-12-01"');
+    expect(html).not.toContain('<script>');
   });
 });
