@@ -71,6 +71,21 @@ describe('guyed mast parts', () => {
   });
 });
 
+describe('canopy parameters', () => {
+  it('names bad saddle and radial parameters', () => {
+    const bad = saddle('rectangle');
+    Object.assign(bad.params, { spacing: 30, outline: 'circle' });
+    expect(() => runGenerator(emptyProject(), bad)).toThrow(/outline: "circle".*|spacing: must allow/s);
+    const r = structuredClone(radial);
+    Object.assign(r.params, { innerRadius: 20, radialCount: 2 });
+    try { runGenerator(emptyProject(), r); expect.unreachable(); } catch (e) {
+      const text = (e as GeneratorInputError).problems.join('\n');
+      expect(text).toMatch(/innerRadius: must be smaller than outerRadius/);
+      expect(text).toMatch(/radialCount: 2 must be a whole number from 3/);
+    }
+  });
+});
+
 describe('re-running a generator', () => {
   it('replaces its parts and keeps the user’s edits', () => {
     const first = runGenerator(emptyProject(), mastRecord()).project;
