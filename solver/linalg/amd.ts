@@ -32,8 +32,27 @@ export function approximateMinimumDegree(
   // A_i only ever shrinks: it lives in place in aIdx[aStart[i] .. aStart[i] + aLen[i]).
   const aIdx = new Int32Array(ptr[n]);
   const aStart = new Int32Array(n), aLen = new Int32Array(n);
-  const E: number[][] = new Array(n);
-  const Lel: number[][] = new Array(n);
+  // E_i: segments of ePool (eStart, eLen, capacity eCap), moved to the end of the pool with
+  // twice the capacity when full. L_e: written once into lPool (lStart, lLen) when e is formed.
+  let ePool = new Int32Array(Math.max(16, 4 * n));
+  const eStart = new Int32Array(n), eLen = new Int32Array(n), eCap = new Int32Array(n);
+  let eTop = 0;
+  let lPool = new Int32Array(Math.max(16, ptr[n]));
+  const lStart = new Int32Array(n), lLen = new Int32Array(n);
+  let lTop = 0;
+  const appendE = (i: number, e: number): void => {
+    if (eLen[i] === eCap[i]) {
+      const cap = Math.max(4, 2 * eCap[i]);
+      if (eTop + cap > ePool.length) {
+        const grown = new Int32Array(2 * (eTop + cap));
+        grown.set(ePool.subarray(0, eTop));
+        ePool = grown;
+      }
+      ePool.copyWithin(eTop, eStart[i], eStart[i] + eLen[i]);
+      eStart[i] = eTop; eCap[i] = cap; eTop += cap;
+    }
+    ePool[eStart[i] + eLen[i]++] = e;
+  };
   const Lsize = new Int32Array(n);
   const deg = new Int32Array(n);
   for (let i = 0; i < n; i++) {
@@ -44,7 +63,6 @@ export function approximateMinimumDegree(
       if (j !== i) { aIdx[ptr[i] + len++] = j; d += nv[j]; }
     }
     aLen[i] = len;
-    E[i] = []; Lel[i] = [];
     deg[i] = d;
   }
   // Degree buckets: doubly linked lists, head[d].
@@ -96,27 +114,24 @@ export function approximateMinimumDegree(
       const j = aIdx[q];
       if (status[j] === VARIABLE && mark[j] !== tag) { mark[j] = tag; Lp[lpLen++] = j; }
     }
-    const Ep = E[p];
-    for (let t = 0; t < Ep.length; t++) {
-      const e = Ep[t];
+    for (let t = eStart[p], te = t + eLen[p]; t < te; t++) {
+      const e = ePool[t];
       if (status[e] !== ELEMENT) continue;
-      const Le = Lel[e];
-      for (let u = 0; u < Le.length; u++) {
-        const j = Le[u];
+      for (let u = lStart[e], ue = u + lLen[e]; u < ue; u++) {
+        const j = lPool[u];
         if (status[j] === VARIABLE && mark[j] !== tag) { mark[j] = tag; Lp[lpLen++] = j; }
       }
       status[e] = DEAD;
-      Lel[e] = [];
     }
-    aLen[p] = 0; E[p] = [];
+    aLen[p] = 0; eLen[p] = 0;
     emit(p);
     nleft -= nv[p];
     for (let t = 0; t < lpLen; t++) remove(Lp[t]);
     // ---- |L_e \ L_p| for every element adjacent to L_p ----
     for (let t = 0; t < lpLen; t++) {
-      const i = Lp[t], w = nv[i], Ei = E[i];
-      for (let u = 0; u < Ei.length; u++) {
-        const e = Ei[u];
+      const i = Lp[t], w = nv[i];
+      for (let u = eStart[i], ue = u + eLen[i]; u < ue; u++) {
+        const e = ePool[u];
         if (status[e] !== ELEMENT) continue;
         if (extTag[e] !== tag) { extTag[e] = tag; ext[e] = Lsize[e]; }
         ext[e] -= w;
@@ -126,16 +141,16 @@ export function approximateMinimumDegree(
     let keepLen = 0;
     for (let t = 0; t < lpLen; t++) {
       const i = Lp[t];
-      const Ei = E[i];
       let d = 0, h = p, ne = 0;
-      for (let u = 0; u < Ei.length; u++) {
-        const e = Ei[u];
+      const e0 = eStart[i];
+      for (let u = e0, ue = e0 + eLen[i]; u < ue; u++) {
+        const e = ePool[u];
         if (status[e] !== ELEMENT) continue;
         const de = ext[e];
-        if (de > 0) { d += de; Ei[ne++] = e; h += e; } else { status[e] = DEAD; Lel[e] = []; }
+        if (de > 0) { d += de; ePool[e0 + ne++] = e; h += e; } else status[e] = DEAD; // aggressive absorption
       }
-      Ei.length = ne;
-      Ei.push(p);
+      eLen[i] = ne;
+      appendE(i, p);
       let na = 0;
       const a0 = aStart[i];
       for (let q = a0, qe = a0 + aLen[i]; q < qe; q++) {
@@ -149,7 +164,7 @@ export function approximateMinimumDegree(
         nleft -= nv[i];
         nv[i] = 0;
         status[i] = DEAD;
-        aLen[i] = 0; E[i] = [];
+        aLen[i] = 0; eLen[i] = 0;
         continue;
       }
       partial[i] = d; // degree outside L_p
@@ -168,24 +183,22 @@ export function approximateMinimumDegree(
       for (; i !== -1; i = hNext[i]) {
         if (status[i] !== VARIABLE) continue;
         let marked = false;
-        const Ei = E[i];
         for (let j = hNext[i]; j !== -1; j = hNext[j]) {
-          if (status[j] !== VARIABLE || aLen[j] !== aLen[i] || E[j].length !== Ei.length) continue;
+          if (status[j] !== VARIABLE || aLen[j] !== aLen[i] || eLen[j] !== eLen[i]) continue;
           if (!marked) {
             tag++;
             for (let q = aStart[i], qe = q + aLen[i]; q < qe; q++) cmp[aIdx[q]] = tag;
-            for (let u = 0; u < Ei.length; u++) cmp[Ei[u]] = tag;
+            for (let u = eStart[i], ue = u + eLen[i]; u < ue; u++) cmp[ePool[u]] = tag;
             marked = true;
           }
           let same = true;
           for (let q = aStart[j], qe = q + aLen[j]; q < qe && same; q++) if (cmp[aIdx[q]] !== tag) same = false;
-          const Ej = E[j];
-          for (let u = 0; u < Ej.length && same; u++) if (cmp[Ej[u]] !== tag) same = false;
+          for (let u = eStart[j], ue = u + eLen[j]; u < ue && same; u++) if (cmp[ePool[u]] !== tag) same = false;
           if (!same) continue;
           nv[i] += nv[j];
           nv[j] = 0;
           status[j] = DEAD;
-          aLen[j] = 0; E[j] = [];
+          aLen[j] = 0; eLen[j] = 0;
           mNext[mTail[i]] = mHead[j];
           mTail[i] = mTail[j];
           deg[i] = Math.min(deg[i], deg[j]);
@@ -193,16 +206,21 @@ export function approximateMinimumDegree(
       }
     }
     // ---- final approximate degrees, element p ----
-    const Lfinal: number[] = [];
+    if (lTop + keepLen > lPool.length) {
+      const grown = new Int32Array(2 * (lTop + keepLen));
+      grown.set(lPool.subarray(0, lTop));
+      lPool = grown;
+    }
+    lStart[p] = lTop;
     let lpw = 0;
     for (let t = 0; t < keepLen; t++) {
       const i = Lp[t];
-      if (status[i] === VARIABLE) { Lfinal.push(i); lpw += nv[i]; }
+      if (status[i] === VARIABLE) { lPool[lTop++] = i; lpw += nv[i]; }
     }
-    Lel[p] = Lfinal;
+    lLen[p] = lTop - lStart[p];
     Lsize[p] = lpw;
-    for (let t = 0; t < Lfinal.length; t++) {
-      const i = Lfinal[t];
+    for (let u = lStart[p], ue = lTop; u < ue; u++) {
+      const i = lPool[u];
       const w = nv[i];
       let d = Math.min(deg[i], partial[i]) + lpw - w;
       d = Math.min(d, nleft - w);

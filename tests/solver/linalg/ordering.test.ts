@@ -22,6 +22,23 @@ describe('fill-reducing ordering', () => {
     }
   });
 
+  it('orders many random graphs validly and the factor stays exact', () => {
+    const rand = prng(123);
+    for (let trial = 0; trial < 24; trial++) {
+      const block = 1 + (trial % 3);
+      const sys = randomSystem(rand, 10 + Math.floor(rand() * 60), block, 0.02 + 0.3 * rand());
+      const ldl = SparseLDL.analyse(sys.pattern, { blockSize: block });
+      expect(() => validatePermutation(ldl.perm, sys.pattern.n)).not.toThrow();
+      // SPD by construction: the factor must succeed and reproduce K x = b.
+      expect(ldl.factor(sys.values)).toBe(-1);
+      const x = Float64Array.from({ length: ldl.n }, () => rand());
+      const b = new Float64Array(ldl.n);
+      for (let i = 0; i < ldl.n; i++) for (let j = 0; j < ldl.n; j++) b[i] += sys.dense[i][j] * x[j];
+      ldl.solve(b, b);
+      for (let i = 0; i < ldl.n; i++) expect(b[i]).toBeCloseTo(x[i], 9);
+    }
+  });
+
   it('keeps the DOFs of a node together when blockSize = 3', () => {
     const sys = randomSystem(prng(9), 40, 3, 0.08);
     const perm = fillReducingOrdering(sys.pattern, 'amd', 3);
