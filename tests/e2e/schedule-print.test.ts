@@ -13,12 +13,17 @@ import { join, resolve } from 'node:path';
 import { installationData, runChecks, solveProject, tuneProject, solveNamedCases } from '../../solver/index.ts';
 import { buildSchedule, scheduleHtml, SCHEDULE_CAUTION } from '../../main/common/schedule/index.ts';
 import { mastProject } from '../main/common/schedule/mast-fixture.ts';
+import { build } from 'vite';
+import vue from '@vitejs/plugin-vue';
+import { createServer, type Server } from 'node:http';
+import type { ScheduleDocument } from '../../main/common/schedule/index.ts';
 
 const ARTIFACTS = resolve('test-artifacts/schedule');
 const CHROMIUM = '/usr/bin/chromium';
 let context: BrowserContext;
 let profile: string;
 let html: { a4: string; letter: string };
+let docA4: ScheduleDocument;
 
 beforeAll(async () => {
   const project = mastProject();
@@ -34,8 +39,9 @@ beforeAll(async () => {
   const tuned = tuning.project;
   const report = solveProject(tuned).report;
   const src = { project: tuned, report, checks: runChecks(tuned, report), installation: installationData(tuned), tuning };
+  docA4 = buildSchedule(src, { issueDate: '2026-12-01', paper: 'a4' });
   html = {
-    a4: scheduleHtml(buildSchedule(src, { issueDate: '2026-12-01', paper: 'a4' })),
+    a4: scheduleHtml(docA4),
     letter: scheduleHtml(buildSchedule(src, { issueDate: '2026-12-01', paper: 'letter', units: 'US' })),
   };
   mkdirSync(ARTIFACTS, { recursive: true });
@@ -106,4 +112,56 @@ describe.runIf(existsSync(CHROMIUM))('printed member tension schedule', () => {
       }
     });
   }
+});
+
+/** Numbers as printed (e.g. 22.7, -167.5, 0.253), as a set. */
+function numberTokens(text: string): Set<string> {
+  return new Set(text.match(/-?\d+\.\d+/g) ?? []);
+}
+
+describe.runIf(existsSync(CHROMIUM))('the renderer print component (SchedulePrint.vue)', () => {
+  it('prints the same schedule model as the standalone HTML', async () => {
+    // Build a one-component page with Vite and the Vue plugin, serve it on loopback, print it.
+    // Inside the repository (ignored test-artifacts/) so 'vue' resolves from node_modules.
+    const work = join(ARTIFACTS, 'vue-print-build');
+    rmSync(work, { recursive: true, force: true });
+    mkdirSync(work, { recursive: true });
+    const component = resolve('renderer/components/schedule/SchedulePrint.vue').replace(/\\/g, '/');
+    writeFileSync(join(work, 'index.html'), '<!DOCTYPE html><html><head><meta charset="utf-8"></head><body><div id="app"></div><script type="module" src="./main.ts"></script></body></html>');
+    writeFileSync(join(work, 'main.ts'), `import { createApp } from 'vue';\nimport SchedulePrint from '${component}';\ncreateApp(SchedulePrint, { doc: (window as any).__STAYSET_DOC__ }).mount('#app');\n`);
+    const out = join(work, 'dist');
+    await build({ configFile: false, root: work, base: './', logLevel: 'warn', plugins: [vue()], build: { outDir: out, emptyOutDir: true } });
+    const server: Server = createServer((req, res) => {
+      const name = (req.url ?? '/').split('?')[0];
+      const file = join(out, name === '/' ? 'index.html' : name);
+      if (!file.startsWith(out) || !existsSync(file)) { res.statusCode = 404; res.end(); return; }
+      res.setHeader('content-type', file.endsWith('.js') ? 'text/javascript' : file.endsWith('.css') ? 'text/css' : 'text/html');
+      res.end(readFileSync(file));
+    });
+    await new Promise<void>((ok) => server.listen(0, '127.0.0.1', ok));
+    try {
+      const port = (server.address() as { port: number }).port;
+      const page = await context.newPage();
+      await page.addInitScript((d) => { (window as unknown as { __STAYSET_DOC__: unknown }).__STAYSET_DOC__ = d; }, docA4);
+      await page.goto(`http://127.0.0.1:${port}/`);
+      await page.waitForSelector('[data-testid="schedule-print"]');
+      const pdf = join(ARTIFACTS, 'schedule-vue-a4.pdf');
+      await page.pdf({ path: pdf, format: 'A4', printBackground: true });
+      await page.close();
+      const info = pdfInfo(pdf);
+      expect(info.pages).toBeGreaterThanOrEqual(1);
+      const vueText = execFileSync('pdftotext', ['-layout', pdf, '-'], { encoding: 'utf8' });
+      expect(vueText.replace(/\s+/g, ' ')).toContain(SCHEDULE_CAUTION);
+      const htmlText = execFileSync('pdftotext', ['-layout', join(ARTIFACTS, 'schedule-a4.pdf'), '-'], { encoding: 'utf8' });
+      // Same model, same formatting: the printed numbers agree (footers aside).
+      const a = numberTokens(vueText), b = numberTokens(htmlText);
+      expect(a.size).toBeGreaterThan(50);
+      expect([...b].filter((x) => !a.has(x))).toEqual([]);
+      expect([...a].filter((x) => !b.has(x))).toEqual([]);
+      execFileSync('pdftoppm', ['-r', '60', '-png', '-f', '1', '-l', '1', pdf, join(ARTIFACTS, 'schedule-vue-a4')]);
+    } finally {
+      server.close();
+      rmSync(work, { recursive: true, force: true });
+    }
+  });
 });
