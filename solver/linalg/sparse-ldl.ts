@@ -41,21 +41,28 @@ export class SparseLDL {
   /** perm[k] = original index of permuted row/column k. */
   readonly perm: Int32Array;
   private readonly backend: FactorBackend;
+  private readonly pattern: SymmetricPattern;
   private readonly nnzA: number;
   private readonly work: Float64Array;
   private negatives = 0;
   private factored = false;
 
-  private constructor(n: number, perm: Int32Array, backend: FactorBackend, nnzA: number) {
+  private constructor(pattern: SymmetricPattern, perm: Int32Array, backend: FactorBackend) {
+    const n = pattern.n;
     this.n = n;
     this.perm = perm;
     this.backend = backend;
+    this.pattern = pattern;
     this.factorNonzeros = backend.factorNonzeros;
-    this.nnzA = nnzA;
+    this.nnzA = pattern.colPtr[n];
     this.work = new Float64Array(n);
   }
 
-  /** Symbolic analysis: ordering + structure; allocates all workspaces. */
+  /**
+   * Symbolic analysis: ordering + structure; allocates all workspaces. The elimination order is
+   * the chosen ordering followed by a postorder of its elimination tree (same fill; 'natural' is
+   * therefore natural up to that postorder). The pattern must not change afterwards.
+   */
   static analyse(pattern: SymmetricPattern, options: SparseLDLOptions = {}): SparseLDL {
     validatePattern(pattern);
     const n = pattern.n;
@@ -81,7 +88,7 @@ export class SparseLDL {
       const st = supernodalStructure(n, upper.ptr, upper.idx, parent, counts, options.relaxedSupernodes ?? false);
       backend = new SupernodalLDL(st, supernodalScatterMap(st, pattern.colPtr, pattern.rowIdx, pinv));
     }
-    return new SparseLDL(n, perm, backend, pattern.colPtr[n]);
+    return new SparseLDL(pattern, perm, backend);
   }
 
   /**
@@ -93,12 +100,28 @@ export class SparseLDL {
     if (values.length !== this.nnzA) {
       throw new Error(`SparseLDL.factor: values has ${values.length} entries, the pattern has ${this.nnzA}`);
     }
+    if (!(pivotTolerance >= 0 && pivotTolerance < 1)) {
+      throw new Error(`SparseLDL.factor: pivotTolerance must be in [0, 1), got ${pivotTolerance}`);
+    }
+    this.checkFinite(values);
     this.factored = false;
     const k = this.backend.factor(values, pivotTolerance, TINY);
     if (k >= 0) return this.perm[k];
     this.negatives = this.backend.negativeCount();
     this.factored = true;
     return -1;
+  }
+
+  /** Throws, naming the first entry (row, column) that is NaN or infinite. */
+  private checkFinite(values: Float64Array): void {
+    let bad = -1;
+    for (let q = 0; q < values.length; q++) if (values[q] - values[q] !== 0) { bad = q; break; } // NaN or ±∞
+    if (bad < 0) return;
+    const { colPtr, rowIdx } = this.pattern;
+    let j = 0;
+    while (colPtr[j + 1] <= bad) j++;
+    this.factored = false;
+    throw new Error(`SparseLDL.factor: matrix entry (${rowIdx[bad]}, ${j}) is ${values[bad]}; the tangent must be finite`);
   }
 
   /** Number of negative entries of D after the last successful factor. */

@@ -46,6 +46,13 @@ describe('SparseLDL on a pretensioned net tangent', () => {
     expect(() => ldl.factor(new Float64Array(3))).toThrow(/values has 3 entries, the pattern has/);
     expect(() => SparseLDL.analyse(net.pattern, { blockSize: 0 })).toThrow(/blockSize must be a positive integer/);
     expect(() => SparseLDL.analyse(net.pattern, { ordering: 'metis' as never })).toThrow(/unknown ordering 'metis'/);
+    expect(() => ldl.factor(net.values, -1)).toThrow(/pivotTolerance must be in \[0, 1\)/);
+    const broken = Float64Array.from(net.values);
+    broken[net.pattern.colPtr[5] + 1] = Number.NaN;
+    const row = net.pattern.rowIdx[net.pattern.colPtr[5] + 1];
+    expect(() => ldl.factor(broken)).toThrow(new RegExp(`entry \\(${row}, 5\\) is NaN`));
+    expect(() => ldl.solve(new Float64Array(net.n), new Float64Array(net.n))).toThrow(/no successful factorisation/);
+    expect(ldl.factor(net.values)).toBe(-1); // the instance stays usable
   });
 
   it('counts negative pivots of an indefinite tangent (compressed net)', () => {
