@@ -21,8 +21,10 @@ export interface AppRig {
   close(): Promise<void>;
 }
 
-export async function buildRenderer(): Promise<void> {
-  await build({ configFile: path.join(REPO, 'vite.config.ts'), logLevel: 'warn' });
+/** Build into dist/renderer (default) or another folder (so test files running at once do not clobber each other). */
+export async function buildRenderer(outDir = path.join(REPO, 'dist', 'renderer')): Promise<string> {
+  await build({ configFile: path.join(REPO, 'vite.config.ts'), logLevel: 'warn', build: { outDir, emptyOutDir: true } });
+  return outDir;
 }
 
 /** A second web host on the same project folder, started without an initial project. */
