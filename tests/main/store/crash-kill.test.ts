@@ -48,6 +48,8 @@ describe('atomic save under SIGKILL', () => {
     writeFileSync(fileA, a);
     writeFileSync(fileB, b);
     const target = path.join(dir, 'grid.stayset');
+    // A previous version exists from the start, so every save has something to back up.
+    await writeFileAtomic(target, b);
     const started = Date.now();
     let kills = 0;
     const seen = new Set<string>();
