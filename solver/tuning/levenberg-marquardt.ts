@@ -8,9 +8,11 @@
  *   inequality only pulls while it is violated or within `margin` of its limit;
  * - sensitivities J = ∂g/∂u by forward differences (backward at an upper bound), each a full
  *   re-solve of the affected cases through `evaluate`;
- * - step (JᵀJ + μ (diag JᵀJ + δI)) Δu = −Jᵀr on the free variables (those at a bound whose
+ * - step (JᵀJ + μ·max(diag JᵀJ)·I) Δu = −Jᵀr on the free variables (those at a bound whose
  *   gradient points outward are held), then x ← clamp(x + Δu · scale); a step is accepted only if
- *   ½‖r‖² decreases, else μ grows ×4 (shrinks ÷3 on success).
+ *   ½‖r‖² decreases, else μ grows ×4 (shrinks ÷3 on success). Levenberg's identity damping in the
+ *   scaled variables (not Marquardt's diag JᵀJ) keeps the change of the scaled variables least:
+ *   a group that no unmet target needs is not moved just because it couples weakly.
  * Stops when every target is met, the cost stalls, or after maxIterations.
  */
 import { solveDense } from './dense-solve.ts';
@@ -120,7 +122,7 @@ export function solveBoundedLeastSquares(p: GapProblem, options: LmOptions = {})
     const maxDiag = Math.max(...free.map((k) => A[k][k]), 1e-12);
     let accepted = false;
     for (let attempt = 0; attempt < 10 && !accepted; attempt++) {
-      const Af = free.map((k) => free.map((l) => A[k][l] + (k === l ? mu * (A[k][k] + 1e-6 * maxDiag) : 0)));
+      const Af = free.map((k) => free.map((l) => A[k][l] + (k === l ? mu * maxDiag : 0)));
       let du: number[];
       try { du = solveDense(Af, free.map((k) => -grad[k])); } catch { mu *= 4; continue; }
       const xt = [...x];
