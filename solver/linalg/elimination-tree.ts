@@ -1,6 +1,7 @@
 /**
  * Elimination tree, postorder and column counts of L for C = LDLᵀ, from the upper triangle of C
- * in CSC form (column k holds rows i <= k). Methods: Liu's elimination-tree algorithm with path
+ * in CSC form (column k holds rows i <= k; entries i > k, as in a full symmetric adjacency graph,
+ * are ignored, so the graph from permuteGraph works as well). Methods: Liu's elimination-tree algorithm with path
  * compression and the row-subtree traversal for the pattern of row k of L
  * (T. A. Davis, Direct Methods for Sparse Linear Systems, SIAM 2006, §4.1–4.2, §4.4).
  */

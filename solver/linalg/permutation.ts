@@ -28,3 +28,23 @@ export function composePermutations(perm: Int32Array, inner: Int32Array): Int32A
   for (let k = 0; k < perm.length; k++) out[k] = perm[inner[k]];
   return out;
 }
+
+/**
+ * Adjacency graph relabelled by a permutation: column k lists pinv[u] for every neighbour u of
+ * perm[k] (both triangles of C = P A Pᵀ, no diagonal, unsorted). The symbolic routines read the
+ * entries below (i > k) or above (i < k) the diagonal from it without forming C.
+ */
+export function permuteGraph(
+  ptr: Int32Array, idx: Int32Array, perm: Int32Array, pinv: Int32Array,
+): { ptr: Int32Array; idx: Int32Array } {
+  const n = perm.length;
+  const p2 = new Int32Array(n + 1);
+  const i2 = new Int32Array(ptr[n]);
+  let len = 0;
+  for (let k = 0; k < n; k++) {
+    const v = perm[k];
+    for (let q = ptr[v]; q < ptr[v + 1]; q++) i2[len++] = pinv[idx[q]];
+    p2[k + 1] = len;
+  }
+  return { ptr: p2, idx: i2 };
+}

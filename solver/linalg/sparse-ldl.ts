@@ -1,6 +1,6 @@
 import { validatePattern, adjacencyGraph, type SymmetricPattern } from './symmetric-pattern.ts';
 import { fillReducingOrdering } from './ordering.ts';
-import { invertPermutation, composePermutations } from './permutation.ts';
+import { invertPermutation, composePermutations, permuteGraph } from './permutation.ts';
 import { permutedUpper } from './permuted-upper.ts';
 import { eliminationTree, eliminationTreeOfPermuted, postorderTree, columnCounts } from './elimination-tree.ts';
 import type { FactorBackend } from './factor-backend.ts';
@@ -78,14 +78,14 @@ export class SparseLDL {
     const kernel = options.kernel ?? 'supernodal';
     if (kernel !== 'supernodal' && kernel !== 'simplicial') throw new Error(`SparseLDL: unknown kernel '${String(kernel)}'`);
     const pinv = invertPermutation(perm);
-    const upper = permutedUpper(pattern, pinv);
-    const parent = eliminationTree(n, upper.ptr, upper.idx);
-    const counts = columnCounts(n, upper.ptr, upper.idx, parent);
+    const pg = permuteGraph(graph.ptr, graph.idx, perm, pinv); // C's adjacency, both triangles
+    const parent = eliminationTree(n, pg.ptr, pg.idx);
+    const counts = columnCounts(n, pg.ptr, pg.idx, parent);
     let backend: FactorBackend;
     if (kernel === 'simplicial') {
-      backend = new SimplicialBackend(n, upper, parent, counts);
+      backend = new SimplicialBackend(n, permutedUpper(pattern, pinv), parent, counts);
     } else {
-      const st = supernodalStructure(n, upper.ptr, upper.idx, parent, counts, options.relaxedSupernodes ?? false);
+      const st = supernodalStructure(n, pg.ptr, pg.idx, parent, counts, options.relaxedSupernodes ?? false);
       backend = new SupernodalLDL(st, supernodalScatterMap(st, pattern.colPtr, pattern.rowIdx, pinv));
     }
     return new SparseLDL(pattern, perm, backend);

@@ -39,20 +39,17 @@ export interface SupernodalStructure {
   storedNonzeros: number;
 }
 
+/**
+ * gPtr/gIdx: adjacency of C (both triangles, any order, no diagonal needed; permuteGraph);
+ * parent/colCount: elimination tree and below-diagonal column counts of C.
+ */
 export function supernodalStructure(
-  n: number, upPtr: Int32Array, upIdx: Int32Array, parent: Int32Array, colCount: Int32Array, relax = true,
+  n: number, gPtr: Int32Array, gIdx: Int32Array, parent: Int32Array, colCount: Int32Array, relax = true,
 ): SupernodalStructure {
   const superStart = supernodePartition(n, parent, colCount, relax);
   const nsuper = superStart.length - 1;
   const colToSuper = new Int32Array(n);
   for (let s = 0; s < nsuper; s++) for (let j = superStart[s]; j < superStart[s + 1]; j++) colToSuper[j] = s;
-  // ---- lower-triangle rows of C by column (transpose of the upper part) ----
-  const lowPtr = new Int32Array(n + 1);
-  for (let q = 0; q < upPtr[n]; q++) lowPtr[upIdx[q] + 1]++;
-  for (let j = 0; j < n; j++) lowPtr[j + 1] += lowPtr[j];
-  const fill = lowPtr.slice(0, n);
-  const lowIdx = new Int32Array(upPtr[n]);
-  for (let k = 0; k < n; k++) for (let q = upPtr[k]; q < upPtr[k + 1]; q++) lowIdx[fill[upIdx[q]]++] = k;
   // ---- supernode tree and children lists ----
   const childHead = new Int32Array(nsuper).fill(-1);
   const childNext = new Int32Array(nsuper).fill(-1);
@@ -78,9 +75,9 @@ export function supernodalStructure(
     let len = 0;
     for (let j = f; j < l; j++) { mark[j] = s; buf[len++] = j; }
     for (let j = f; j < l; j++) {
-      for (let q = lowPtr[j]; q < lowPtr[j + 1]; q++) {
-        const i = lowIdx[q];
-        if (mark[i] !== s) { mark[i] = s; buf[len++] = i; }
+      for (let q = gPtr[j]; q < gPtr[j + 1]; q++) {
+        const i = gIdx[q];
+        if (i > j && mark[i] !== s) { mark[i] = s; buf[len++] = i; } // rows below the diagonal
       }
     }
     for (let c = childHead[s]; c !== -1; c = childNext[c]) {
