@@ -139,7 +139,7 @@ export async function startWebHost(options: WebHostOptions): Promise<WebHost> {
     }
     res.writeHead(200, { ...SECURITY_HEADERS, 'Content-Type': contentTypeFor(file), 'Cache-Control': 'no-cache' });
     if (req.method === 'HEAD') return void res.end();
-    createReadStream(file).pipe(res);
+    createReadStream(file).on('error', () => res.destroy()).pipe(res);
   }
 
   const server = http.createServer((req, res) => {
