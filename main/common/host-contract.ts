@@ -15,6 +15,9 @@
  *
  * Contract notes (changes since the first draft are marked "added"):
  * - Methods returning `HostResult | null`: null means the user cancelled a dialog (desktop only).
+ * - Arguments must be plain data: on the desktop they cross contextBridge + structured clone, which
+ *   refuses Vue reactive proxies ("could not be cloned"). Pass a plain copy of the project
+ *   (e.g. `JSON.parse(JSON.stringify(project))` or a deep `toRaw`). The web client JSON-encodes anyway.
  * - save(path) only replaces a file that currently reads as a current-version Stayset project (or
  *   does not exist). A file that is corrupt, of an unknown/newer format, or of an older format
  *   version (migrated on load) is never overwritten by save(): the error says so, and the renderer
