@@ -102,6 +102,12 @@ describe('main screen in the browser edition', () => {
     await expect.poll(() => page.getByTestId('inspector').textContent()).toContain(`Member ${guy.id}`);
     await page.waitForTimeout(300);
     await shot('03-case-and-selection.png');
+    // Click in the 3D view: the view is framed on the model's centre, which lies on the mast axis,
+    // so the centre pixel picks a mast member or node and the inspector follows.
+    const box = (await page.getByTestId('view3d-canvas').boundingBox())!;
+    await page.mouse.click(box.x + box.width / 2, box.y + box.height / 2);
+    await expect.poll(() => page.getByTestId('inspector').textContent()).toMatch(/^\s*(Member|Node) mast\//);
+    await page.locator(`[data-testid="results-table"] tr[data-member="${guy.id}"]`).click();
     // US customary display: same tension in kip (1 kip = 4448.2216152605 N exactly, NIST SP 811).
     await page.getByTestId('units-us').click();
     const kip = Number(await page.locator(`[data-testid="results-table"] tr[data-member="${guy.id}"] td[data-col="tensionMax"]`).textContent());
