@@ -37,6 +37,8 @@ export interface LmOptions {
   /** Finite-difference step in scaled units. Default 1e-3. */
   fdStep?: number;
   onIteration?: (iteration: number, x: number[], cost: number) => void;
+  /** Checked before every iteration; return true to stop with the best state so far. */
+  isCancelled?: () => boolean;
 }
 
 export interface LmOutcome {
@@ -49,6 +51,8 @@ export interface LmOutcome {
   evaluations: number;
   /** A trial or the start point did not converge and no progress was possible because of it. */
   failedEvaluation: boolean;
+  /** Stopped by isCancelled. */
+  cancelled: boolean;
 }
 
 export function isMet(g: number, sense: TargetSense, equalityTolerance: number): boolean {
@@ -91,7 +95,8 @@ export function solveBoundedLeastSquares(p: GapProblem, options: LmOptions = {})
 
   let x = clamp(p.x0);
   let g = evaluate(x);
-  if (!g) return { x, gaps: null, jacobian: null, iterations: 0, evaluations, failedEvaluation: true };
+  if (!g) return { x, gaps: null, jacobian: null, iterations: 0, evaluations, failedEvaluation: true, cancelled: false };
+  let cancelled = false;
   let jacobian: number[][] | null = null;
   let mu = 1e-3;
   let iterations = 0;
@@ -100,6 +105,7 @@ export function solveBoundedLeastSquares(p: GapProblem, options: LmOptions = {})
   const sensitivities = (xc: number[], gc: number[]) => finiteDifferenceJacobian(p, xc, gc, h, evaluate);
 
   while (iterations < maxIt && !allMet(g)) {
+    if (options.isCancelled?.()) { cancelled = true; break; }
     iterations++;
     const J = sensitivities(x, g);
     if (!J) { failedEvaluation = true; break; }
@@ -142,5 +148,5 @@ export function solveBoundedLeastSquares(p: GapProblem, options: LmOptions = {})
     if (!accepted) break;
     failedEvaluation = false;
   }
-  return { x, gaps: g, jacobian, iterations, evaluations, failedEvaluation };
+  return { x, gaps: g, jacobian, iterations, evaluations, failedEvaluation, cancelled };
 }

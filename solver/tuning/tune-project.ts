@@ -88,7 +88,7 @@ export function tuneProject(project: ProjectFile, options: TuneOptions = {}): Tu
     const diagnosis = [`The starting state could not be solved: ${lastFailure}.`];
     return {
       status: 'notConverged', targets: [], variables, iterations: 0, evaluations: lm.evaluations,
-      diagnosis, project: tuned, summary: `tuning stopped: ${lastFailure}`,
+      diagnosis, project: tuned, summary: `tuning stopped: ${lastFailure}`, cancelled: false,
     };
   }
   const final = evaluateAt(lm.x) as { values: TargetValue[] };
@@ -109,11 +109,12 @@ export function tuneProject(project: ProjectFile, options: TuneOptions = {}): Tu
     if (lm.failedEvaluation) diagnosis.push(`A trial step could not be solved (${lastFailure}); the tuner stopped at the last state that solved.`);
   }
   const metCount = met.filter(Boolean).length;
-  const summary = `${metCount} of ${met.length} targets met after ${lm.iterations} iterations (${lm.evaluations} solves)` +
+  if (lm.cancelled) diagnosis.push('The tuning run was cancelled; the values shown are the best reached so far.');
+  const summary = `${lm.cancelled ? 'cancelled: ' : ''}${metCount} of ${met.length} targets met after ${lm.iterations} iterations (${lm.evaluations} solves)` +
     (metCount < met.length ? `; not met: ${labels.filter((_, i) => !met[i]).join('; ')}` : '');
   return {
     status: metCount === met.length ? 'met' : 'unmet', targets, variables, iterations: lm.iterations,
-    evaluations: lm.evaluations, diagnosis, project: tuned, summary,
+    evaluations: lm.evaluations, diagnosis, project: tuned, summary, cancelled: lm.cancelled,
   };
 }
 

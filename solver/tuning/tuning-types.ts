@@ -83,4 +83,6 @@ export interface TuningResult {
   project: ProjectFile;
   /** One-line summary (also stored as tuning.lastRun.summary by `stayset tune --write`). */
   summary: string;
+  /** True when the run was stopped by TuneOptions.isCancelled (state = best so far). */
+  cancelled: boolean;
 }

@@ -103,4 +103,15 @@ describe('pretension tuning through the nonlinear solver', () => {
     p.tuning = { variables: [{ group: 'span', by: 'pretension' }], targets: [{ kind: 'noSlack', group: 'span', case: 'storm' }] };
     expect(() => tuneProject(p, { solveCases: solveNamedCases })).toThrow(/tuning\.targets\[0\] \(noSlack\): case "storm" does not exist/);
   });
+
+  it('stops when cancelled, keeping the start state and saying so', () => {
+    const p = singleSpan(12e3);
+    p.tuning = { variables: [{ group: 'span', by: 'pretension' }], targets: [{ kind: 'tensionShare', group: 'span', share: 0.1 }] };
+    const res = tuneProject(p, { isCancelled: () => true });
+    expect(res.cancelled).toBe(true);
+    expect(res.iterations).toBe(0);
+    expect(res.status).toBe('unmet');
+    expect(res.variables[0].final).toBe(12e3);
+    expect(res.summary).toMatch(/^cancelled:/);
+  });
 });
