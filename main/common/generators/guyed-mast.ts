@@ -182,7 +182,9 @@ export function generateGuyedMast(recordId: string, p: GuyedMastParams): Generat
     const level: string[] = [];
     for (let j = 0; j < p.guysPerLevel; j++) {
       const psi = ((az0 + (360 * j) / p.guysPerLevel) * Math.PI) / 180;
-      const key = shared ? `A${j + 1}` : `A${j + 1}-L${k + 1}`;
+      // levels with the same radius share their anchors (named after the first such level)
+      const firstSame = shared ? 0 : p.guyLevels.findIndex((_, kk) => perLevel(p.anchorRadius, kk) === R);
+      const key = shared ? `A${j + 1}` : `A${j + 1}-L${firstSame + 1}`;
       let aid = anchorAt.get(key);
       if (!aid) {
         aid = node(id(key), [bx + R * Math.cos(psi), by + R * Math.sin(psi), bz + (p.anchorElevation ?? 0)], 'xyz');

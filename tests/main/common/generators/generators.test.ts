@@ -56,6 +56,11 @@ describe('guyed mast parts', () => {
     expect(project.nodes.find((n) => n.id === 'mast/base')!.fixed).toBe('xyz');
     expect(project.nodes.filter((n) => n.fixed === 'xyz')).toHaveLength(4); // base + 3 shared anchors
   });
+  it('per-level anchor radii: equal radii share anchors, different radii get their own', () => {
+    const anchors = (r: number[]) => runGenerator(emptyProject(), mastRecord({ anchorRadius: r })).project.nodes.filter((n) => n.fixed === 'xyz').length - 1;
+    expect(anchors([20, 20])).toBe(3);
+    expect(anchors([16, 22])).toBe(6);
+  });
   it('panel levels include every guy level; top at the height', () => {
     const zs = new Set(project.nodes.map((n) => n.at[2]));
     expect(zs.has(14) && zs.has(28) && zs.has(30)).toBe(true);
