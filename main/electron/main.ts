@@ -26,6 +26,7 @@ import { PrintJobs } from './print-jobs.ts';
 import { printScheduleToPdf } from './print-window.ts';
 import { CLOSE_PROMPT, QuitGuard } from './quit-guard.ts';
 import { mainWindowOptions } from './window-options.ts';
+import { windowTitle } from './window-title.ts';
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 const appRoot = app.getAppPath();
@@ -105,7 +106,7 @@ const handlers = createDesktopHandlers({
   initialPath: () => startFile ?? path.join(assetsDir, 'demo-mast.stayset'),
   printPdf: (project, pdfPath) => printScheduleToPdf(project, pdfPath, { preloadPath, printJobs, allowedSenders }),
   onDirtyChanged: (dirty, title) => {
-    win?.setTitle(`${title || 'Untitled'}${dirty ? ' •' : ''} — Stayset`);
+    win?.setTitle(windowTitle(title, dirty));
     if (process.platform === 'darwin') win?.setDocumentEdited(dirty);
     if (quit.setDirty(dirty, title).kind === 'close') win?.close();
     void refreshMenu();

@@ -7,6 +7,8 @@
  *   Don't save  → forget the autosave of this project and close.
  *   Cancel      → stay open.
  */
+import { plainProjectTitle } from './window-title.ts';
+
 export type CloseChoice = 'save' | 'discard' | 'cancel';
 
 /** Buttons of the prompt in order; the index is what the dialog returns. */
@@ -36,7 +38,7 @@ export class QuitGuard {
 
   setDirty(dirty: boolean, title: string): CloseStep {
     this.dirty = dirty;
-    this.title = title;
+    this.title = plainProjectTitle(title);
     if (!dirty && this.closeAfterSave) {
       this.closeAfterSave = false;
       this.allowClose = true;

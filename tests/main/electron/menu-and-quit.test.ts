@@ -5,6 +5,7 @@ import { projectFileFromArgv } from '../../../main/electron/launch-args.ts';
 import { toElectronTemplate } from '../../../main/electron/menu-build.ts';
 import { flattenMenu, menuTemplate } from '../../../main/electron/menu-template.ts';
 import { CLOSE_PROMPT, QuitGuard } from '../../../main/electron/quit-guard.ts';
+import { windowTitle } from '../../../main/electron/window-title.ts';
 
 const recent = [{ path: '/p/north.stayset', name: 'north.stayset', openedAt: '2030-01-01T00:00:00Z' }];
 
@@ -71,6 +72,16 @@ describe('quit guard', () => {
     q.onSaveAbandoned();
     expect(q.setDirty(false, 'x')).toEqual({ kind: 'stay' });
   });
+  it('window title marks unsaved changes once, whatever mark the page sent', () => {
+    expect(windowTitle('north.stayset', true)).toBe('north.stayset • — Stayset');
+    expect(windowTitle('north.stayset •', true)).toBe('north.stayset • — Stayset');
+    expect(windowTitle('north.stayset *', false)).toBe('north.stayset — Stayset');
+    expect(windowTitle('', false)).toBe('Untitled — Stayset');
+    const q = new QuitGuard();
+    q.setDirty(true, 'north.stayset •');
+    expect(CLOSE_PROMPT.message(q.title)).toBe('Save changes to north.stayset before closing?');
+  });
+
   it('prompt text names the project', () => {
     expect(CLOSE_PROMPT.message('north.stayset')).toBe('Save changes to north.stayset before closing?');
     expect(CLOSE_PROMPT.buttons).toEqual(['Save', "Don't Save", 'Cancel']);
