@@ -22,6 +22,8 @@ const HELP = `Solves every load case and combination, then checks them against t
 "checks" settings: utilisation T / (φ · breaking load) (φ default 0.5), members that must
 not go slack, sag limits, node displacement limits, mast tilt limits and uplift at listed
 supports. Prints the governing case of every failure and a pass/fail line.
+Not checked: compression, buckling or connection strength of bars (mast members); check
+those separately.
 
 Options:
   --json        Print {"pass", "check": CheckReport, "envelope", "disclaimer"} instead of tables.
@@ -77,6 +79,7 @@ export function checkReportText(project: ProjectFile, check: CheckReport, env: E
     out.push('');
   }
   for (const w of check.warnings) out.push(`note: ${w}`);
+  if (project.members.some((m) => m.kind === 'bar')) out.push('note: bars (mast members) are not checked for compression, buckling or connections here');
   const verdict = !check.allConverged
     ? 'CHECK INCOMPLETE: some case did not converge — do not use these results'
     : check.pass ? `CHECK PASSED: ${check.cases.length} case(s), every check within its limit`
