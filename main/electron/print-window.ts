@@ -13,7 +13,8 @@ import type { PrintJobs } from './print-jobs.ts';
 import { printWindowOptions } from './window-options.ts';
 
 export const PRINT_ROUTE = '/schedule?print=1';
-const READY_TIMEOUT_MS = 30_000;
+// The print page solves the project itself before it reports ready; large models take a while.
+const READY_TIMEOUT_MS = 180_000;
 
 export async function printScheduleToPdf(
   project: ProjectFile,
