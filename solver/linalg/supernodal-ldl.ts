@@ -20,7 +20,10 @@ import { factorPanel } from './dense-panel.ts';
 export class SupernodalLDL implements FactorBackend {
   readonly factorNonzeros: number;
   private readonly st: SupernodalStructure;
-  private readonly map: Int32Array;
+  /** A's entries in storage order: value aSrc[t] goes to Lx[aPos[t]]; supernode s owns t in aSupPtr[s]..aSupPtr[s+1]. */
+  private readonly aSrc: Int32Array;
+  private readonly aPos: Int32Array;
+  private readonly aSupPtr: Int32Array;
   private readonly Lx: Float64Array;
   private readonly D: Float64Array;
   private readonly diagPos: Int32Array;
@@ -37,7 +40,20 @@ export class SupernodalLDL implements FactorBackend {
 
   constructor(st: SupernodalStructure, scatterMap: Int32Array) {
     this.st = st;
-    this.map = scatterMap;
+    // Sort A's entries by target position (positions are unique: one per pattern entry), so the
+    // scatter of supernode s writes its own block in increasing address order.
+    const owner = new Int32Array(st.valPtr[st.nsuper]).fill(-1);
+    for (let q = 0; q < scatterMap.length; q++) owner[scatterMap[q]] = q;
+    this.aSrc = new Int32Array(scatterMap.length);
+    this.aPos = new Int32Array(scatterMap.length);
+    this.aSupPtr = new Int32Array(st.nsuper + 1);
+    let t = 0;
+    for (let s = 0; s < st.nsuper; s++) {
+      for (let x = st.valPtr[s]; x < st.valPtr[s + 1]; x++) {
+        if (owner[x] >= 0) { this.aSrc[t] = owner[x]; this.aPos[t] = x; t++; }
+      }
+      this.aSupPtr[s + 1] = t;
+    }
     this.factorNonzeros = st.factorNonzeros;
     this.Lx = new Float64Array(st.valPtr[st.nsuper]);
     this.D = new Float64Array(st.n);
@@ -59,15 +75,16 @@ export class SupernodalLDL implements FactorBackend {
   }
 
   factor(values: Float64Array, tol: number, tiny: number): number {
-    const { st, map, Lx, D, diagPos, aDiag, relMap, relBuf, tmp, tmp2, w, w2, head, link, pos } = this;
-    const { n, nsuper, superStart, colToSuper, rowPtr, rows, valPtr } = st;
-    Lx.fill(0);
-    for (let q = 0; q < map.length; q++) Lx[map[q]] += values[q];
-    for (let j = 0; j < n; j++) aDiag[j] = Math.abs(Lx[diagPos[j]]);
+    const { st, aSrc, aPos, aSupPtr, Lx, D, diagPos, aDiag, relMap, relBuf, tmp, tmp2, w, w2, head, link, pos } = this;
+    const { nsuper, superStart, colToSuper, rowPtr, rows, valPtr } = st;
     head.fill(-1);
     for (let s = 0; s < nsuper; s++) {
       const f = superStart[s], l = superStart[s + 1], nc = l - f;
       const rp = rowPtr[s], nr = rowPtr[s + 1] - rp, base = valPtr[s];
+      // ---- this supernode's columns of A (block zeroed here, while it is about to be used) ----
+      Lx.fill(0, base, valPtr[s + 1]);
+      for (let t = aSupPtr[s]; t < aSupPtr[s + 1]; t++) Lx[aPos[t]] = values[aSrc[t]];
+      for (let j = f; j < l; j++) aDiag[j] = Math.abs(Lx[diagPos[j]]);
       for (let t = 0; t < nr; t++) relMap[rows[rp + t]] = t;
       // ---- updates from descendants ----
       let d = head[s];
