@@ -55,6 +55,19 @@ describe('SparseLDL on a pretensioned net tangent', () => {
     expect(ldl.factor(net.values)).toBe(-1); // the instance stays usable
   });
 
+  it('reports the first out-of-plane DOF of an unpretensioned flat net as a zero pivot', () => {
+    // A flat net without pretension has no stiffness normal to its plane (a first-order mechanism;
+    // common practice: the transverse stiffness of a straight cable element is N/L, the geometric
+    // term of its tangent, zero for N = 0). K's z block is then zero, so the first z DOF in
+    // elimination order gives d = 0 exactly.
+    const slackNet = netTangent(8, 0);
+    for (const kernel of ['supernodal', 'simplicial'] as const) {
+      const ldl = SparseLDL.analyse(slackNet.pattern, { kernel });
+      const firstZ = Array.from(ldl.perm).find((dof) => dof % 3 === 2);
+      expect(ldl.factor(slackNet.values)).toBe(firstZ);
+    }
+  });
+
   it('counts negative pivots of an indefinite tangent (compressed net)', () => {
     // Negating the pretension makes the geometric term −|N|/L I: the out-of-plane (z) stiffness of
     // every free node is then negative, so K has exactly one negative eigenvalue per free node
