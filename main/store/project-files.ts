@@ -61,11 +61,40 @@ export async function readProjectFile(file: string): Promise<ReadOutcome> {
   }
   const opened: OpenedProject = { path: path.resolve(file), name, project: parsed.project };
   if (parsed.migratedFrom !== undefined) opened.migratedFrom = parsed.migratedFrom;
+  else await remember(file);
   return { ok: true, opened };
+}
+
+/**
+ * Files this process last read as valid current-version projects or wrote itself, by resolved
+ * path, with their size and modification time then. Unchanged since → no need to re-read them
+ * before the next save (a 6 MB project takes about half a second to validate).
+ */
+const knownGood = new Map<string, { size: number; mtimeMs: number }>();
+
+async function remember(file: string): Promise<void> {
+  try {
+    const st = await fs.stat(file);
+    knownGood.set(path.resolve(file), { size: st.size, mtimeMs: st.mtimeMs });
+  } catch {
+    knownGood.delete(path.resolve(file));
+  }
+}
+
+async function unchangedSinceKnownGood(file: string): Promise<boolean> {
+  const known = knownGood.get(path.resolve(file));
+  if (!known) return false;
+  try {
+    const st = await fs.stat(file);
+    return st.size === known.size && st.mtimeMs === known.mtimeMs;
+  } catch {
+    return false;
+  }
 }
 
 /** Why `save` may not replace `file`, or null when it may. */
 export async function saveRefusal(file: string): Promise<string | null> {
+  if (await unchangedSinceKnownGood(file)) return null;
   const current = await readProjectFile(file);
   if (current.ok) {
     if (current.opened.migratedFrom === undefined) return null;
@@ -94,6 +123,7 @@ export async function writeProjectFile(file: string, project: ProjectFile, mode:
   }
   try {
     await writeFileAtomic(target, text, { backup: true });
+    await remember(target);
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
     return { ok: false, error: `Saving ${path.basename(target)} failed (${code ?? (e as Error).message}); the previous file is unchanged.` };
