@@ -44,6 +44,18 @@ export interface MemberInstallation {
   sag: number;
   /** Frequencies in the reference state (cables with mass and positive tension only), else null. */
   frequencies: CableFrequencies | null;
+  /** Reference-state geometry and section data for site checks (site-check-member.ts). */
+  chordLength: number;
+  /** Chord inclination to the horizontal, radians (≥ 0). */
+  inclination: number;
+  /** Horizontal distance between the end points, m. */
+  horizontalSpan: number;
+  /** Height of the upper end above the lower end, m (≥ 0). */
+  heightDifference: number;
+  /** kg/m. */
+  massPerLength: number;
+  /** E·A, N. */
+  axialStiffness: number;
 }
 
 export interface TemperatureRow {
@@ -112,7 +124,11 @@ export function installationData(project: ProjectFile, options: { temperatures?:
     const frequencies = m.kind === 'cable' && mass > 0 && meanTension > 0
       ? cableFrequencies({ length: r.chordLength, inclination: Math.atan2(Math.abs(dz), horizontal), tension: meanTension, massPerLength: mass, axialStiffness: section.E * section.area })
       : null;
-    return { id: spec.id, kind: m.kind, section: section.id, cutLength: cut[k], installationTension: refTensions[k], sag: r.sag, frequencies };
+    return {
+      id: spec.id, kind: m.kind, section: section.id, cutLength: cut[k], installationTension: refTensions[k], sag: r.sag, frequencies,
+      chordLength: r.chordLength, inclination: Math.atan2(Math.abs(dz), horizontal), horizontalSpan: horizontal,
+      heightDifference: Math.abs(dz), massPerLength: mass, axialStiffness: section.E * section.area,
+    };
   });
 
   let start: Float64Array | undefined = ref.fields.positions;
