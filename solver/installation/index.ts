@@ -11,4 +11,4 @@ export {
   type InstallationData, type MemberInstallation, type TemperatureRow,
 } from './installation-data.ts';
 export { findBracketedRoot } from './bracketed-root.ts';
-export { targetTensionAt, checkMemberFrequency, checkMemberSag, type MemberSiteCheck } from './site-check-member.ts';
+export { targetTensionAt, checkMemberFrequency, checkMemberSag, expectedStringFrequency, type MemberSiteCheck } from './site-check-member.ts';

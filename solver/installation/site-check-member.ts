@@ -87,3 +87,14 @@ export function checkMemberSag(data: InstallationData, memberId: string, tempera
   });
   return { ...atLowerEnd(r, m, targetTension), member: memberId, temperature, targetTension };
 }
+
+/**
+ * Taut-string frequency f1 = (1/2L)·√(T/m) (Irvine 1981, ch. 4) a member should show when its
+ * lower-end tension is `lowerEndTension` (N): T is the mid-length tension, lower + m g h / 2.
+ * Null for a member without mass or tension. The first out-of-plane mode; see cable-frequency.ts.
+ */
+export function expectedStringFrequency(m: MemberInstallation, lowerEndTension: number): number | null {
+  const t = lowerEndTension + (m.massPerLength * STANDARD_GRAVITY * m.heightDifference) / 2;
+  if (!(m.massPerLength > 0) || !(t > 0) || !Number.isFinite(t)) return null;
+  return Math.sqrt(t / m.massPerLength) / (2 * m.chordLength);
+}

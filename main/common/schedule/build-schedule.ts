@@ -3,7 +3,7 @@
  * Pure: no I/O; the CLI, the desktop print route and tests all build the schedule here.
  * Results are for review by a qualified engineer; local codes and licensed practice govern.
  */
-import { envelopeOf, membersOfGroup } from '../../../solver/index.ts';
+import { envelopeOf, expectedStringFrequency, membersOfGroup } from '../../../solver/index.ts';
 import type { CheckReport, InstallationData, ProjectFile, SolveReport, TuningResult } from '../../../solver/index.ts';
 import { SCHEDULE_CAUTION, type PaperSize, type ScheduleDocument, type ScheduleMemberRow, type ScheduleTuning } from './schedule-types.ts';
 import { formatForce, formatLength, formatNumber, unitLabels, type ScheduleUnits } from './schedule-units.ts';
@@ -104,8 +104,11 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
   else notes.push(...src.checks.warnings);
   const temperatureTable = inst ? {
     temperatures: inst.table.map((r) => r.temperature),
-    rows: inst.members.map((m, k) => ({ member: m.id, kind: m.kind, tensions: inst.table.map((r) => (r.converged ? r.tensions[k] : null)) }))
-      .filter((r) => r.kind === 'cable').map(({ member, tensions }) => ({ member, tensions })),
+    rows: inst.members.map((m, k) => ({
+      member: m.id, kind: m.kind,
+      tensions: inst.table.map((r) => (r.converged ? r.tensions[k] : null)),
+      frequencies: inst.table.map((r) => (r.converged ? expectedStringFrequency(m, r.tensions[k]) : null)),
+    })).filter((r) => r.kind === 'cable').map(({ member, tensions, frequencies }) => ({ member, tensions, frequencies })),
   } : null;
 
   const meta = project.meta ?? {};

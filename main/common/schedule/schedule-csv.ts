@@ -45,7 +45,10 @@ export function scheduleCsv(doc: ScheduleDocument): string {
   if (doc.temperatureTable) {
     records.push([], [`Installation tension by temperature (${l.force}); header = temperature (${l.temperature})`],
       ['member', ...doc.temperatureTable.temperatures.map((t) => num(temperatureIn(u, t), 1))],
-      ...doc.temperatureTable.rows.map((r) => [r.member, ...r.tensions.map(F)]));
+      ...doc.temperatureTable.rows.map((r) => [r.member, ...r.tensions.map(F)]),
+      [], [`Taut-string frequency f1 (Hz) at the installation tension; header = temperature (${l.temperature})`],
+      ['member', ...doc.temperatureTable.temperatures.map((t) => num(temperatureIn(u, t), 1))],
+      ...doc.temperatureTable.rows.map((r) => [r.member, ...r.frequencies.map((f) => num(f, 4))]));
   }
   if (doc.tuning) records.push([], ['Tuning'], ['summary', doc.tuning.summary], ...doc.tuning.targets.map((t) => [t.label, t.value, t.met ? 'met' : 'NOT MET']));
   return stringify(records, { record_delimiter: '\r\n' });

@@ -85,7 +85,10 @@ function scheduleMarkup(doc: ScheduleDocument): { title: string; body: string } 
     const tt = doc.temperatureTable;
     tempHtml = table(`Tension to set at installation (${l.force}, at the lower end) by air temperature (${l.temperature}) — same unstressed lengths as the design state`,
       ['Member', ...tt.temperatures.map((t) => `${formatTemperature(u, t)} ${l.temperature}`)],
-      tt.rows.map((r) => [`<b>${e(r.member)}</b>`, ...r.tensions.map((x) => formatForce(u, x))]));
+      tt.rows.map((r) => [`<b>${e(r.member)}</b>`, ...r.tensions.map((x) => formatForce(u, x))]))
+      + table(`Taut-string frequency f₁ (Hz) the cable should show when set to that tension — for site checks by vibration`,
+        ['Member', ...tt.temperatures.map((t) => `${formatTemperature(u, t)} ${l.temperature}`)],
+        tt.rows.map((r) => [`<b>${e(r.member)}</b>`, ...r.frequencies.map((x) => formatNumber(x, 3))]));
   }
 
   const notesHtml = doc.notes.length ? `<h2>Notes</h2><ul>${doc.notes.map((n) => `<li>${e(n)}</li>`).join('')}</ul>` : '';

@@ -78,7 +78,11 @@ export interface ScheduleTuning {
 export interface ScheduleTemperatureTable {
   /** Installation temperatures, K. */
   temperatures: number[];
-  rows: { member: string; tensions: (number | null)[] }[];
+  /**
+   * Per cable: tension to set (N, lower end) and the taut-string frequency it should then show
+   * (Hz, f1 = (1/2L)√(T/m) with the mid-length tension), per temperature.
+   */
+  rows: { member: string; tensions: (number | null)[]; frequencies: (number | null)[] }[];
 }
 
 export interface ScheduleDocument {

@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { parse } from 'csv-parse/sync';
-import { buildModel, installationData, runChecks, solveProject } from '../../../../solver/index.ts';
+import { buildModel, checkMemberFrequency, installationData, runChecks, solveProject } from '../../../../solver/index.ts';
 import type { CheckReport, InstallationData, ProjectFile, SolveReport } from '../../../../solver/index.ts';
 import { buildSchedule, scheduleCsv, scheduleFragment, scheduleHtml, SCHEDULE_CAUTION, NEWTONS_PER_KIP, METRES_PER_FOOT } from '../../../../main/common/schedule/index.ts';
 import { mastProject } from './mast-fixture.ts';
@@ -85,6 +85,24 @@ describe('schedule CSV against the solver numbers', () => {
     // At the reference temperature (10 °C) the table gives the installation tension itself.
     const col = head.indexOf('10.0');
     for (const r of rows) expect(Number(r[col])).toBeCloseTo(installation.members.find((m) => m.id === r[0])!.installationTension / 1000, 2);
+  });
+});
+
+describe('schedule frequency table for site checks', () => {
+  it('f1 at each temperature is the taut-string frequency of the table tension and reads back as on target', () => {
+    const doc = buildSchedule({ project, report, checks, installation }, { issueDate: '2026-12-01' });
+    const tt = doc.temperatureTable!;
+    for (const row of tt.rows) {
+      const m = installation.members.find((x) => x.id === row.member)!;
+      tt.temperatures.forEach((T, j) => {
+        // f1 = (1/2L)√(T_mid/m), T_mid = T_lower + m g h/2 (Irvine 1981, ch. 1 and 4).
+        const mid = row.tensions[j]! + (m.massPerLength * 9.80665 * m.heightDifference) / 2;
+        expect(row.frequencies[j]).toBeCloseTo(Math.sqrt(mid / m.massPerLength) / (2 * m.chordLength), 10);
+        // Reading exactly that frequency on site at that temperature means "on target".
+        const check = checkMemberFrequency(installation, row.member, T, row.frequencies[j]!);
+        expect(Math.abs(check.relativeDifference)).toBeLessThan(1e-6);
+      });
+    }
   });
 });
 
