@@ -120,12 +120,11 @@ export function generateGuyedMast(recordId: string, p: GuyedMastParams): Generat
   let topId = baseId;
 
   if (lattice) {
-    // Each of the 3 leg lines carries a third of the whole-mast lattice drag: the drag factor per
-    // leg is Cf / 3 (the format's lattice.share would say this directly once the schema has it).
+    // Each of the 3 leg lines carries a third of the whole-mast lattice drag (lattice.share).
     const cf = p.latticeDragFactor ?? DEFAULT_LATTICE_DRAG_FACTOR;
     sections.push(sectionSpec(id('leg'), p.leg, {
-      lattice: { faceWidth: p.faceWidth, solidity: latticeInfo.solidity, dragFactor: roundCoord(cf / 3) },
-      label: p.leg.label ?? `mast leg (lattice drag factor ${cf} shared by 3 legs)`,
+      lattice: { faceWidth: p.faceWidth, solidity: latticeInfo.solidity, dragFactor: cf, share: 1 / 3 },
+      label: p.leg.label ?? 'mast leg (a third of the lattice drag per leg)',
     }));
     sections.push(sectionSpec(id('bracing'), { ...p.bracing!, diameter: undefined, dragCoefficient: undefined }, { label: p.bracing!.label ?? 'mast bracing' }));
     const r = p.faceWidth / Math.sqrt(3);
