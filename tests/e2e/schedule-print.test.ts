@@ -119,49 +119,103 @@ function numberTokens(text: string): Set<string> {
   return new Set(text.match(/-?\d+\.\d+/g) ?? []);
 }
 
-describe.runIf(existsSync(CHROMIUM))('the renderer print component (SchedulePrint.vue)', () => {
-  it('prints the same schedule model as the standalone HTML', async () => {
-    // Build a one-component page with Vite and the Vue plugin, serve it on loopback, print it.
+/** The two renderer components built with Vite + the Vue plugin into one page, served on loopback. */
+const MAIN_TS = (print: string, panel: string) => `import { createApp, h, reactive } from 'vue';
+import SchedulePrint from '${print}';
+import TuningPanel from '${panel}';
+const w = window as any;
+if (location.hash === '#tuning') {
+  w.__events = [];
+  const props = reactive(w.__PANEL_PROPS__);
+  createApp({ render: () => h(TuningPanel, {
+    ...props,
+    onDrag: (g: string, p: number) => w.__events.push(['drag', g, p]),
+    onCommit: (g: string, p: number) => w.__events.push(['commit', g, p]),
+    onRunTuning: () => w.__events.push(['runTuning']),
+    'onUpdate:selectedGroup': (id: string) => { w.__events.push(['select', id]); props.selectedGroup = id; },
+  }) }).mount('#app');
+} else {
+  createApp(SchedulePrint, { doc: w.__STAYSET_DOC__ }).mount('#app');
+}
+`;
+
+describe.runIf(existsSync(CHROMIUM))('the renderer schedule components', () => {
+  let server: Server;
+  let base: string;
+  const work = join(ARTIFACTS, 'vue-print-build');
+
+  beforeAll(async () => {
     // Inside the repository (ignored test-artifacts/) so 'vue' resolves from node_modules.
-    const work = join(ARTIFACTS, 'vue-print-build');
     rmSync(work, { recursive: true, force: true });
     mkdirSync(work, { recursive: true });
-    const component = resolve('renderer/components/schedule/SchedulePrint.vue').replace(/\\/g, '/');
+    const file = (f: string) => resolve(`renderer/components/schedule/${f}`).replace(/\\/g, '/');
     writeFileSync(join(work, 'index.html'), '<!DOCTYPE html><html><head><meta charset="utf-8"></head><body><div id="app"></div><script type="module" src="./main.ts"></script></body></html>');
-    writeFileSync(join(work, 'main.ts'), `import { createApp } from 'vue';\nimport SchedulePrint from '${component}';\ncreateApp(SchedulePrint, { doc: (window as any).__STAYSET_DOC__ }).mount('#app');\n`);
+    writeFileSync(join(work, 'main.ts'), MAIN_TS(file('SchedulePrint.vue'), file('TuningPanel.vue')));
     const out = join(work, 'dist');
     await build({ configFile: false, root: work, base: './', logLevel: 'warn', plugins: [vue()], build: { outDir: out, emptyOutDir: true } });
-    const server: Server = createServer((req, res) => {
+    server = createServer((req, res) => {
       const name = (req.url ?? '/').split('?')[0];
-      const file = join(out, name === '/' ? 'index.html' : name);
-      if (!file.startsWith(out) || !existsSync(file)) { res.statusCode = 404; res.end(); return; }
-      res.setHeader('content-type', file.endsWith('.js') ? 'text/javascript' : file.endsWith('.css') ? 'text/css' : 'text/html');
-      res.end(readFileSync(file));
+      const f = join(out, name === '/' ? 'index.html' : name);
+      if (!f.startsWith(out) || !existsSync(f)) { res.statusCode = 404; res.end(); return; }
+      res.setHeader('content-type', f.endsWith('.js') ? 'text/javascript' : f.endsWith('.css') ? 'text/css' : 'text/html');
+      res.end(readFileSync(f));
     });
     await new Promise<void>((ok) => server.listen(0, '127.0.0.1', ok));
-    try {
-      const port = (server.address() as { port: number }).port;
-      const page = await context.newPage();
-      await page.addInitScript((d) => { (window as unknown as { __STAYSET_DOC__: unknown }).__STAYSET_DOC__ = d; }, docA4);
-      await page.goto(`http://127.0.0.1:${port}/`);
-      await page.waitForSelector('[data-testid="schedule-print"]');
-      const pdf = join(ARTIFACTS, 'schedule-vue-a4.pdf');
-      await page.pdf({ path: pdf, format: 'A4', printBackground: true });
-      await page.close();
-      const info = pdfInfo(pdf);
-      expect(info.pages).toBeGreaterThanOrEqual(1);
-      const vueText = execFileSync('pdftotext', ['-layout', pdf, '-'], { encoding: 'utf8' });
-      expect(vueText.replace(/\s+/g, ' ')).toContain(SCHEDULE_CAUTION);
-      const htmlText = execFileSync('pdftotext', ['-layout', join(ARTIFACTS, 'schedule-a4.pdf'), '-'], { encoding: 'utf8' });
-      // Same model, same formatting: the printed numbers agree (footers aside).
-      const a = numberTokens(vueText), b = numberTokens(htmlText);
-      expect(a.size).toBeGreaterThan(50);
-      expect([...b].filter((x) => !a.has(x))).toEqual([]);
-      expect([...a].filter((x) => !b.has(x))).toEqual([]);
-      execFileSync('pdftoppm', ['-r', '60', '-png', '-f', '1', '-l', '1', pdf, join(ARTIFACTS, 'schedule-vue-a4')]);
-    } finally {
-      server.close();
-      rmSync(work, { recursive: true, force: true });
-    }
+    base = `http://127.0.0.1:${(server.address() as { port: number }).port}/`;
+  });
+
+  afterAll(() => {
+    server?.close();
+    rmSync(work, { recursive: true, force: true });
+  });
+
+  it('SchedulePrint.vue prints the same schedule model as the standalone HTML', async () => {
+    const page = await context.newPage();
+    await page.addInitScript((d) => { (window as unknown as { __STAYSET_DOC__: unknown }).__STAYSET_DOC__ = d; }, docA4);
+    await page.goto(base);
+    await page.waitForSelector('[data-testid="schedule-print"]');
+    const pdf = join(ARTIFACTS, 'schedule-vue-a4.pdf');
+    await page.pdf({ path: pdf, format: 'A4', printBackground: true });
+    await page.close();
+    expect(pdfInfo(pdf).pages).toBeGreaterThanOrEqual(1);
+    const vueText = execFileSync('pdftotext', ['-layout', pdf, '-'], { encoding: 'utf8' });
+    expect(vueText.replace(/\s+/g, ' ')).toContain(SCHEDULE_CAUTION);
+    const htmlText = execFileSync('pdftotext', ['-layout', join(ARTIFACTS, 'schedule-a4.pdf'), '-'], { encoding: 'utf8' });
+    // Same model, same formatting: the printed numbers agree.
+    const a = numberTokens(vueText), b = numberTokens(htmlText);
+    expect(a.size).toBeGreaterThan(50);
+    expect([...b].filter((x) => !a.has(x))).toEqual([]);
+    expect([...a].filter((x) => !b.has(x))).toEqual([]);
+    execFileSync('pdftoppm', ['-r', '60', '-png', '-f', '1', '-l', '1', pdf, join(ARTIFACTS, 'schedule-vue-a4')]);
+  });
+
+  it('TuningPanel.vue emits drag while sliding, commit on release, and group changes', async () => {
+    const page = await context.newPage();
+    const props = {
+      groups: [{ id: 'g1', label: 'guys level 1', value: 20000, min: 5000, max: 45000 }, { id: 'g2', label: 'guys level 2', value: 30000, min: 5000, max: 45000 }],
+      selectedGroup: 'g1', caseId: 'dead', units: 'SI', busy: false,
+      lastStep: { converged: true, seconds: 0.021, tensionMax: 20500, sag: 0.412 },
+      targets: [{ index: 0, target: { kind: 'sag', group: 'g1', case: 'dead', limit: { absolute: 0.3 } }, label: "sag ≤ 0.300 m in 'dead' for 'guys level 1'", value: 0.412, limit: 0.3, unit: 'm', sense: 'atMost', governing: 'G1', met: false }],
+      diagnosis: ["sag ≤ 0.300 m in 'dead' for 'guys level 1' needs the pretension of 'guys level 1' above its upper bound 45.0 kN."],
+    };
+    await page.addInitScript((p) => { (window as unknown as { __PANEL_PROPS__: unknown }).__PANEL_PROPS__ = p; }, props);
+    await page.goto(`${base}#tuning`);
+    await page.waitForSelector('[data-testid="tuning-panel"]');
+    const text = await page.textContent('[data-testid="tuning-panel"]');
+    expect(text).toContain('20.0 kN');
+    expect(text).toContain('solved in 21 ms');
+    expect(text).toContain('NO');
+    expect(text).toContain('above its upper bound 45.0 kN');
+    expect(text).toContain('Results are for review by a qualified engineer');
+    await page.locator('[data-testid="pretension-slider"]').fill('30000');
+    await page.selectOption('[data-testid="tuning-group"]', 'g2');
+    await page.click('[data-testid="run-tuning"]');
+    const events = await page.evaluate(() => (window as unknown as { __events: unknown[] }).__events);
+    expect(events).toContainEqual(['drag', 'g1', 30000]);
+    expect(events).toContainEqual(['commit', 'g1', 30000]);
+    expect(events).toContainEqual(['select', 'g2']);
+    expect(events).toContainEqual(['runTuning']);
+    await page.screenshot({ path: join(ARTIFACTS, 'tuning-panel.png') });
+    await page.close();
   });
 });
