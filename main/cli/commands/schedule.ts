@@ -83,6 +83,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   let report: SolveReport;
   let checks: CheckReport | null = null;
   let installation: InstallationData | null = null;
+  const notes: string[] = [];
   try {
     report = solveProject(project).report;
   } catch (e) {
@@ -101,9 +102,10 @@ async function run(args: string[], io: CliIO): Promise<number> {
   try {
     installation = installationData(project);
   } catch (e) {
+    notes.push(`Installation data left out: ${(e as Error).message}.`);
     io.err(`${file}: installation data left out: ${(e as Error).message}\n`);
   }
-  const doc = buildSchedule({ project, report, checks, installation }, {
+  const doc = buildSchedule({ project, report, checks, installation, notes }, {
     issueDate: date, paper: paper as PaperSize, units: units as ScheduleUnits | undefined,
   });
   try {

@@ -15,6 +15,8 @@ export interface ScheduleSource {
   installation?: InstallationData | null;
   /** A tuning run to summarise; without it project.tuning.lastRun is used when present. */
   tuning?: TuningResult | null;
+  /** Further notes for the reader (e.g. why installation data is missing). */
+  notes?: string[];
 }
 
 export interface ScheduleOptions {
@@ -102,6 +104,7 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
   else notes.push('Installation data (cut lengths, frequencies, temperature table) was not computed.');
   if (!src.checks) notes.push('Design checks were not run: utilisation and check columns are empty.');
   else notes.push(...src.checks.warnings);
+  notes.push(...(src.notes ?? []));
   const temperatureTable = inst ? {
     temperatures: inst.table.map((r) => r.temperature),
     rows: inst.members.map((m, k) => ({

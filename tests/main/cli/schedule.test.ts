@@ -54,4 +54,15 @@ describe('stayset schedule', () => {
     expect(none.code).toBe(2);
     expect(none.stderr).toMatch(/--html FILE and\/or --csv FILE/);
   });
+
+  it('still writes the schedule when a case does not converge, says why, and exits 1', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'stayset-schedule-'));
+    const html = join(dir, 'm.html');
+    const r = runStayset(['schedule', join(REPO_ROOT, fixture('mechanism-free-node.stayset.json')), '--html', html, '--date', '2026-12-01']);
+    expect(r.code).toBe(1);
+    const page = readFileSync(html, 'utf8');
+    expect(page).toMatch(/Case &#39;dead&#39; did not converge \(singular\)/);
+    expect(page).toMatch(/Installation data left out: reference case &#39;dead&#39; did not converge/);
+    expect(page).toContain('Results are for review by a qualified engineer');
+  });
 });
