@@ -67,7 +67,12 @@ export function newRunId(): string {
   return randomBytes(8).toString('hex');
 }
 
+/** How many finished runs keep their raw fields for caseFields(). */
+const KEPT_RUNS = 2;
+
 export class AnalysisRunner {
+  /** Fields of the last finished runs, oldest first (Map keeps insertion order). */
+  private readonly kept = new Map<string, CaseFields[]>();
   private readonly runs = new Map<string, ActiveRun>();
   private readonly workerUrl: URL;
   private readonly execArgv: string[];
@@ -137,6 +142,15 @@ export class AnalysisRunner {
     if (run.killTimer) clearTimeout(run.killTimer);
     this.runs.delete(runId);
     void run.worker.terminate();
+    if (done.status === 'done' && fields) {
+      this.kept.set(runId, fields);
+      for (const old of this.kept.keys()) if (this.kept.size > KEPT_RUNS) this.kept.delete(old);
+    }
     this.options.onDone(done, done.status === 'done' ? fields : undefined);
+  }
+
+  /** Raw fields of case `caseIndex` of one of the last finished runs, or null. */
+  caseFields(runId: string, caseIndex: number): CaseFields | null {
+    return this.kept.get(runId)?.[caseIndex] ?? null;
   }
 }

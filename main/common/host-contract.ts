@@ -44,7 +44,7 @@
  *   schedule is laid out (added), then the host writes the PDF. Web: returns ok:false with a hint
  *   to use the browser's own Print on the schedule view.
  */
-import type { ProjectFile, SolveReport } from '../../solver/index.ts';
+import type { CaseFields, ProjectFile, SolveReport } from '../../solver/index.ts';
 
 /** A project as the host hands it over: the validated document plus where it lives. */
 export interface OpenedProject {
@@ -114,6 +114,12 @@ export interface StaysetHost {
   /** Run every case (and combination) of the project off the UI thread. */
   runAnalysis(project: ProjectFile): Promise<{ runId: string }>;
   cancelAnalysis(runId: string): Promise<void>;
+  /**
+   * Raw per-element fields of case `caseIndex` (report order) of a finished run: deformed
+   * positions of every node including cable interior nodes, element tensions, slack flags.
+   * Hosts keep the last few runs; null when the run or case is not (or no longer) known.
+   */
+  caseFields(runId: string, caseIndex: number): Promise<CaseFields | null>;
   onDidProgress(listener: (p: AnalysisProgress) => void): () => void;
   onDidFinishAnalysis(listener: (d: AnalysisDone) => void): () => void;
   /** Print the schedule route to PDF (desktop: printToPDF and a save dialog). */

@@ -30,6 +30,7 @@ export interface HostArgs {
   discardRecovery: [path: string | null];
   runAnalysis: [project: ProjectFile];
   cancelAnalysis: [runId: string];
+  caseFields: [runId: string, caseIndex: number];
   printSchedule: [project: ProjectFile, path: string | undefined];
   setDirty: [dirty: boolean, title: string];
   printReady: [];
@@ -94,6 +95,12 @@ const checkers: Checkers = {
   discardRecovery: (a) => (checkCount('discardRecovery', a, 1), [nullablePath('discardRecovery', 0, a[0])]),
   runAnalysis: (a) => (checkCount('runAnalysis', a, 1), [checkProject('runAnalysis', 0, a[0])]),
   cancelAnalysis: (a) => (checkCount('cancelAnalysis', a, 1), [checkId('cancelAnalysis', 0, 'runId', a[0])]),
+  caseFields: (a) => {
+    checkCount('caseFields', a, 2);
+    const runId = checkId('caseFields', 0, 'runId', a[0]);
+    if (!Number.isInteger(a[1]) || (a[1] as number) < 0) fail('caseFields', 1, 'caseIndex', 'must be a whole number ≥ 0');
+    return [runId, a[1] as number];
+  },
   printSchedule: (a) => (checkCount('printSchedule', a, 2), [checkProject('printSchedule', 0, a[0]), optionalPath('printSchedule', 1, a[1])]),
   setDirty: (a) => {
     checkCount('setDirty', a, 2);

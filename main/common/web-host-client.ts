@@ -14,6 +14,7 @@
  */
 import type { AnalysisDone, AnalysisProgress, MenuCommand, StaysetHost } from './host-contract.ts';
 import { EVENTS_PATH, methodPath, TOKEN_HEADER, TOKEN_QUERY, type HostMethodName, type RpcReply, type WebEventName } from './web-protocol.ts';
+import { CASE_FIELDS_MIME, decodeCaseFields } from './case-fields-wire.ts';
 
 /** The subset of EventSource this client uses. */
 export interface EventSourceLike {
@@ -52,6 +53,9 @@ export function createWebHostClient(options: WebHostClientOptions): StaysetHost 
       headers: { 'Content-Type': 'application/json', [TOKEN_HEADER]: options.token },
       body: JSON.stringify({ args }),
     });
+    if (res.ok && (res.headers.get('content-type') ?? '').startsWith(CASE_FIELDS_MIME)) {
+      return decodeCaseFields(await res.arrayBuffer()) as T;
+    }
     let reply: RpcReply;
     try {
       reply = (await res.json()) as RpcReply;
@@ -109,6 +113,7 @@ export function createWebHostClient(options: WebHostClientOptions): StaysetHost 
     discardRecovery: (path) => call('discardRecovery', path),
     runAnalysis: (project) => call('runAnalysis', project),
     cancelAnalysis: (runId) => call('cancelAnalysis', runId),
+    caseFields: (runId, caseIndex) => call('caseFields', runId, caseIndex),
     printSchedule: (project, path) => call('printSchedule', project, path),
     setDirty: (dirty, title) => call('setDirty', dirty, title),
     printReady: () => call('printReady'),

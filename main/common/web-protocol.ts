@@ -36,6 +36,7 @@ export const HOST_METHODS = [
   'discardRecovery',
   'runAnalysis',
   'cancelAnalysis',
+  'caseFields',
   'printSchedule',
   'setDirty',
   'printReady',

@@ -3,7 +3,7 @@
  * title) injected so this runs and is tested in plain Node. ipc-handlers.ts connects it to IPC.
  */
 import path from 'node:path';
-import type { ProjectFile } from '../../solver/index.ts';
+import type { CaseFields, ProjectFile } from '../../solver/index.ts';
 import type { HostResult, OpenedProject } from '../common/host-contract.ts';
 import type { HostHandlers } from '../common/host-validation.ts';
 import type { ProjectService } from '../store/project-service.ts';
@@ -21,7 +21,7 @@ export interface DesktopDialogs {
 
 export interface DesktopHostDeps {
   projects: ProjectService;
-  analysis: { start(project: ProjectFile): { runId: string }; cancel(runId: string): void };
+  analysis: { start(project: ProjectFile): { runId: string }; cancel(runId: string): void; caseFields(runId: string, caseIndex: number): CaseFields | null };
   dialogs: DesktopDialogs;
   granted: GrantedPaths;
   quit: QuitGuard;
@@ -109,6 +109,7 @@ export function createDesktopHandlers(deps: DesktopHostDeps): HostHandlers {
     discardRecovery: (file) => deps.projects.discardRecovery(file),
     runAnalysis: async (project) => deps.analysis.start(project),
     cancelAnalysis: async (runId) => deps.analysis.cancel(runId),
+    caseFields: async (runId, caseIndex) => deps.analysis.caseFields(runId, caseIndex),
     printSchedule: async (project, suggested) => {
       const pdf = await deps.dialogs.choosePdfPath(suggested ? path.basename(suggested) : `${baseName(project)} tension schedule.pdf`);
       return pdf === null ? null : deps.printPdf(project, pdf);

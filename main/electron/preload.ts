@@ -36,6 +36,7 @@ const host: StaysetHost = {
   discardRecovery: (path) => invoke('discardRecovery', path),
   runAnalysis: (project) => invoke('runAnalysis', project),
   cancelAnalysis: (runId) => invoke('cancelAnalysis', runId),
+  caseFields: (runId, caseIndex) => invoke('caseFields', runId, caseIndex),
   printSchedule: (project, path) => invoke('printSchedule', project, path),
   setDirty: (dirty, title) => invoke('setDirty', dirty, title),
   printReady: () => invoke('printReady'),

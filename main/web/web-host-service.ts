@@ -49,6 +49,7 @@ export function createWebHostHandlers(o: WebHostServiceOptions): HostHandlers {
     discardRecovery: (file) => o.projects.discardRecovery(file),
     runAnalysis: async (project) => o.runner.start(project),
     cancelAnalysis: async (runId) => o.runner.cancel(runId),
+    caseFields: async (runId, caseIndex) => o.runner.caseFields(runId, caseIndex),
     printSchedule: async () => ({ ok: false, error: "The browser edition prints with the browser: open the Schedule view and use the browser's Print (Ctrl+P), choosing \"Save as PDF\"." }),
     setDirty: async () => undefined,
     printReady: async () => undefined,

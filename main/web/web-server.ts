@@ -17,6 +17,8 @@ import { PathPolicy } from './path-policy.ts';
 import { checkApiRequest, checkOrigin, type GuardInput } from './request-guard.ts';
 import { contentTypeFor, resolveStaticFile } from './static-files.ts';
 import { createWebHostHandlers } from './web-host-service.ts';
+import { CASE_FIELDS_MIME, encodeCaseFields } from '../common/case-fields-wire.ts';
+import type { CaseFields } from '../../solver/index.ts';
 
 export interface WebHostOptions {
   /** Project root folder: the only place projects are opened from and saved to. */
@@ -62,6 +64,13 @@ function sendJson(res: ServerResponse, status: number, body: RpcReply): void {
   const text = JSON.stringify(body);
   res.writeHead(status, { ...SECURITY_HEADERS, 'Content-Type': 'application/json; charset=utf-8', 'Cache-Control': 'no-store' });
   res.end(text);
+}
+
+/** Raw case fields go out binary (see main/common/case-fields-wire.ts), not as JSON. */
+function sendCaseFields(res: ServerResponse, fields: CaseFields): void {
+  const body = Buffer.from(encodeCaseFields(fields));
+  res.writeHead(200, { ...SECURITY_HEADERS, 'Content-Type': CASE_FIELDS_MIME, 'Content-Length': body.length, 'Cache-Control': 'no-store' });
+  res.end(body);
 }
 
 async function readBody(req: IncomingMessage): Promise<string | null> {
@@ -119,6 +128,7 @@ export async function startWebHost(options: WebHostOptions): Promise<WebHost> {
     if (!checked.ok) return sendJson(res, 400, { ok: false, error: checked.error });
     const handler = handlers[method] as (...a: unknown[]) => Promise<unknown>;
     const value = await handler(...(checked.value as unknown[]));
+    if (method === 'caseFields' && value) return sendCaseFields(res, value as CaseFields);
     sendJson(res, 200, { ok: true, value: value ?? null });
   }
 

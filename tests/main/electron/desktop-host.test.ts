@@ -35,7 +35,7 @@ beforeEach(() => {
   quit = new QuitGuard();
   handlers = createDesktopHandlers({
     projects: new ProjectService({ userDataDir: path.join(tmp.dir, 'user') }),
-    analysis: { start: () => ({ runId: '0123456789abcdef' }), cancel: () => undefined },
+    analysis: { start: () => ({ runId: '0123456789abcdef' }), cancel: () => undefined, caseFields: () => null },
     dialogs: {
       chooseProjectToOpen: async () => answers.open.shift() ?? null,
       chooseProjectSavePath: async () => answers.save.shift() ?? null,

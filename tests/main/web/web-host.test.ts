@@ -14,6 +14,7 @@ import { startWebHost, type WebHost } from '../../../main/web/web-server.ts';
 import { largeGrid, sampleMast } from '../store/sample-project.ts';
 import { makeTempDir } from '../store/temp-dir.ts';
 import { fetchEventSource } from './fetch-event-source.ts';
+import { buildModel } from '../../../solver/index.ts';
 
 let tmp: ReturnType<typeof makeTempDir>;
 let web: WebHost;
@@ -172,6 +173,24 @@ describe('web host: analysis over SSE', () => {
     expect(done.report?.cases).toHaveLength(2);
     expect(progress.length).toBeGreaterThan(0);
     expect(progress[0].caseCount).toBe(2);
+
+    // The raw fields of each case come over the binary route and match the solved model.
+    const project = sampleMast();
+    const model = buildModel(project);
+    for (let k = 0; k < 2; k++) {
+      const fields = await host.caseFields(runId, k);
+      expect(fields).not.toBeNull();
+      expect(fields!.positions).toHaveLength(3 * model.nodeCount);
+      expect(fields!.elementTension).toHaveLength(model.elementCount);
+      expect(fields!.elementSlack).toHaveLength(model.elementCount);
+      const top = done.report!.cases[k].nodes[1];
+      expect(Array.from(fields!.positions.subarray(3, 6))).toEqual(top.position);
+      const m0 = done.report!.cases[k].members[0];
+      expect(fields!.elementTension[model.members[0].firstElement]).toBe(m0.tensionStart);
+    }
+    expect(await host.caseFields(runId, 2)).toBeNull();
+    expect(await host.caseFields('0123456789abcdef', 0)).toBeNull();
+    await expect(host.caseFields(runId, -1)).rejects.toThrow(/caseIndex/);
   });
 
   it('cancels a run', async () => {
