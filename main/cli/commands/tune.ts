@@ -12,7 +12,8 @@ import { EXIT, UsageError } from '../cli-io.ts';
 import type { CliIO } from '../cli-io.ts';
 import { parseOptions } from '../options.ts';
 import { readProjectFile } from '../read-project-file.ts';
-import { fixed, kN } from '../format/number-text.ts';
+import { fixed } from '../format/number-text.ts';
+import { forceIn, lengthIn, unitLabels, type ScheduleUnits } from '../../common/schedule/schedule-units.ts';
 import { textTable } from '../format/text-table.ts';
 import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
 import { writeFileAtomic } from '../../store/atomic-write.ts';
@@ -33,7 +34,8 @@ Options:
                 beside it, synced, then renamed over it; the previous file is kept as FILE.bak.
                 Not done when a case did not converge.
   --json        Print {"status", "targets", "variables", "iterations", "evaluations",
-                "diagnosis", "summary", "disclaimer"} instead of tables (SI: N, m).
+                "diagnosis", "summary", "cancelled", "disclaimer"} instead of tables (SI: N, m).
+Tables use the project's display units (display.units: SI → kN, m; US → kip, ft).
   --help        Show this help.
 
 Exit status:
@@ -42,20 +44,20 @@ Exit status:
   2  bad input: missing or invalid file, no tuning section, unknown groups, cases or nodes
   3  the cases converged but some target is not met`;
 
-function valueText(unit: 'm' | 'N' | 'share', v: number): string {
+function valueText(units: ScheduleUnits, unit: 'm' | 'N' | 'share', v: number): string {
+  const l = unitLabels(units);
   if (unit === 'share') return `${fixed(v * 100, 2)} %`;
-  if (unit === 'm') return `${fixed(v, 3)} m`;
-  return `${kN(v)} kN`;
+  if (unit === 'm') return `${fixed(lengthIn(units, v), 3)} ${l.length}`;
+  return `${fixed(forceIn(units, v), 2)} ${l.force}`;
 }
 
-function variableText(by: 'pretension' | 'unstressedLength', v: number): string {
-  return by === 'pretension' ? `${kN(v)} kN` : `factor ${fixed(v, 6)}`;
-}
-
-export function tuningText(r: TuningResult): string {
+/** Tuning result as text tables; forces in kN (SI) or kip (US), lengths in m or ft. */
+export function tuningText(r: TuningResult, units: ScheduleUnits = 'SI'): string {
+  const variableText = (by: 'pretension' | 'unstressedLength', v: number): string =>
+    by === 'pretension' ? valueText(units, 'N', v) : `factor ${fixed(v, 6)}`;
   const targets = textTable(
     [{ title: 'target' }, { title: 'value', align: 'right' }, { title: 'limit', align: 'right' }, { title: 'governing' }, { title: 'met' }],
-    r.targets.map((t) => [t.label, valueText(t.unit, t.value), t.target.kind === 'noSlack' ? '> 0 kN' : (t.sense === 'equal' ? '= ' : '≤ ') + valueText(t.unit, t.limit), t.governing, t.met ? 'yes' : 'NO']),
+    r.targets.map((t) => [t.label, valueText(units, t.unit, t.value), t.target.kind === 'noSlack' ? `> 0 ${unitLabels(units).force}` : (t.sense === 'equal' ? '= ' : '≤ ') + valueText(units, t.unit, t.limit), t.governing, t.met ? 'yes' : 'NO']),
   );
   const vars = textTable(
     [{ title: 'group' }, { title: 'by' }, { title: 'start', align: 'right' }, { title: 'final', align: 'right' }, { title: 'bounds' }],
@@ -89,7 +91,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
     const { project: _omit, ...rest } = result;
     io.out(`${JSON.stringify({ ...rest, disclaimer: RESULTS_DISCLAIMER }, null, 2)}\n`);
   } else {
-    io.out(tuningText(result));
+    io.out(tuningText(result, project.display?.units === 'US' ? 'US' : 'SI'));
   }
   if (result.status === 'notConverged') {
     io.err(`${file}: ${result.diagnosis.join(' ')}\n`);

@@ -79,4 +79,12 @@ describe('stayset tune', () => {
     expect(readFileSync(file, 'utf8')).toBe(before);
     expect(existsSync(`${file}.bak`)).toBe(false);
   });
+
+  it('prints kip in the tables when the project displays US units (1 kip = 4448.2216152605 N, NIST SP 811)', () => {
+    const { file } = copyOfMast((p) => { p.display = { units: 'US' }; });
+    const r = runStayset(['tune', file]);
+    expect(r.code).toBe(0);
+    // 15 kN pretension = 3.37 kip.
+    expect(r.stdout).toMatch(/3\.37 kip/);
+  });
 });
