@@ -1,15 +1,15 @@
 /**
  * Newton–Raphson with load stepping, line search and automatic step cut-back.
  *
- * Homotopy in the load factor λ ∈ [0, 1] from the pretensioned state (positions X, the model's
- * coordinates) to the full case:
- *   R(x, λ) = λ F + λ F_f(x) + (1 − λ) f_int(X, 0) − f_int(x, λ ΔT)     at free DOFs,
- * F the fixed-direction loads (nodal + weight), F_f the follower (wind) load. At λ = 0, x = X is an
+ * Homotopy in the load factor λ ∈ [0, 1] from the pretensioned state (start positions X, the
+ * model's coordinates; u the displacement from them, m) to the full case:
+ *   R(u, λ) = λ F + λ F_f(u) + (1 − λ) f_int(0, 0) − f_int(u, λ ΔT)     at free DOFs, N,
+ * F the fixed-direction loads (nodal + weight), F_f the follower (wind) load. At λ = 0, u = 0 is an
  * exact solution whether or not the initial stresses are in balance at X; at λ = 1 R is the true
  * equilibrium residual. Convergence: ‖R‖₂ ≤ tolerance · max(‖f_ext‖₂, ‖f_int‖₂) over all DOFs
  * (the latter includes the support reactions, so a self-balanced prestress sets the scale too).
  *
- * Line search: on the directional derivative g(s) = Δu · R(x + s Δu) (for a conservative load,
+ * Line search: on the directional derivative g(s) = Δu · R(u + s Δu) (for a conservative load,
  * the slope of the total potential energy along the step; Crisfield, Non-linear Finite Element
  * Analysis of Solids and Structures, vol. 1 (1991), §9.3), bracketed by the Illinois variant of
  * regula falsi, after limiting the largest nodal step to a fraction of the model size; with a
@@ -91,15 +91,15 @@ export function solveEquilibrium(
   const n = ws.fInt.length;
   const fixedLoad = fixedDirectionLoads(ws, loads);
 
-  const x = new Float64Array(n); // displacement u from the start positions
+  const u = new Float64Array(n); // displacement from the start positions, m
   const saved = new Float64Array(n);
   const counters: Counters = { iterations: 0, residual: 0, negativePivots: 0, singularDof: -1, factorMs: 0 };
 
   if (start) {
-    for (let d = 0; d < n; d++) x[d] = start[d] - ws.model.coords[d];
-    const r = newtonAtLoad(ws, loads, fixedLoad, x, 1, options, control, tag, counters);
-    if (r === 'converged' || r === 'cancelled') return outcome(r, x, counters, 1, 1);
-    x.fill(0);
+    for (let d = 0; d < n; d++) u[d] = start[d] - ws.model.coords[d];
+    const r = newtonAtLoad(ws, loads, fixedLoad, u, 1, options, control, tag, counters);
+    if (r === 'converged' || r === 'cancelled') return outcome(r, u, counters, 1, 1);
+    u.fill(0);
   }
 
   let lambda = 0;
@@ -109,19 +109,19 @@ export function solveEquilibrium(
   let crossedLimit = false;
   while (lambda < 1) {
     const target = Math.min(1, lambda + increment);
-    saved.set(x);
+    saved.set(u);
     const before = counters.iterations;
-    const r = newtonAtLoad(ws, loads, fixedLoad, x, target, options, control, tag, counters);
-    if (r === 'cancelled') return outcome('cancelled', x, counters, lambda, steps);
+    const r = newtonAtLoad(ws, loads, fixedLoad, u, target, options, control, tag, counters);
+    if (r === 'cancelled') return outcome('cancelled', u, counters, lambda, steps);
     if (r === 'converged') {
       lambda = target;
       steps++;
       if (counters.iterations - before <= 5) increment = Math.min(1, 2 * increment);
       continue;
     }
-    x.set(saved);
+    u.set(saved);
     if (r === 'singular') {
-      return { ...outcome('singular', x, counters, lambda, steps), singularDofs: singularDofs(ws, counters.singularDof) };
+      return { ...outcome('singular', u, counters, lambda, steps), singularDofs: singularDofs(ws, counters.singularDof) };
     }
     lastFailure = r;
     if (r === 'unstable') crossedLimit = true;
@@ -129,10 +129,10 @@ export function solveEquilibrium(
     if (increment < options.minStep) {
       const status: AnalysisStatus = crossedLimit || counters.negativePivots > 0
         ? 'limitPoint' : lastFailure === 'diverged' ? 'diverged' : 'maxIterations';
-      return outcome(status, x, counters, lambda, steps);
+      return outcome(status, u, counters, lambda, steps);
     }
   }
-  return outcome('converged', x, counters, 1, steps);
+  return outcome('converged', u, counters, 1, steps);
 }
 
 /** Nodal loads plus member weight (fixed direction), N. */
@@ -143,34 +143,34 @@ function fixedDirectionLoads(ws: Workspace, loads: CaseLoads): Float64Array {
 }
 
 /**
- * Evaluate the full case (λ = 1) at displacements x: fills ws.fInt, ws.fExt, ws.residual and the element
+ * Evaluate the full case (λ = 1) at displacements u: fills ws.fInt, ws.fExt, ws.residual and the element
  * state; returns the relative residual.
  */
-export function evaluateState(ws: Workspace, loads: CaseLoads, x: Float64Array): number {
-  const [norm, ref] = evaluateResidual(ws, loads, fixedDirectionLoads(ws, loads), x, 1, false);
+export function evaluateState(ws: Workspace, loads: CaseLoads, u: Float64Array): number {
+  const [norm, ref] = evaluateResidual(ws, loads, fixedDirectionLoads(ws, loads), u, 1, false);
   return ref > 0 ? norm / ref : 0;
 }
 
 function outcome(
-  status: AnalysisStatus, x: Float64Array,
+  status: AnalysisStatus, u: Float64Array,
   c: Counters, loadFactor: number, loadSteps: number,
 ): NewtonOutcome {
   return {
-    status, u: x, iterations: c.iterations, loadSteps, residual: c.residual, loadFactor,
+    status, u, iterations: c.iterations, loadSteps, residual: c.residual, loadFactor,
     negativePivots: c.negativePivots, factorSeconds: c.factorMs / 1000,
   };
 }
 
 /** Residual R(u, λ) into ws.residual (zero at restrained DOFs); returns [‖R‖, reference norm]. */
 function evaluateResidual(
-  ws: Workspace, loads: CaseLoads, fixedLoad: Float64Array, x: Float64Array, lambda: number, tangent: boolean,
+  ws: Workspace, loads: CaseLoads, fixedLoad: Float64Array, u: Float64Array, lambda: number, tangent: boolean,
 ): [number, number] {
   const { fInt, fExt, residual, fInt0, model } = ws;
-  assemble(model, tangent ? ws.pattern : null, ws.startVectors, x, lambda * loads.temperatureChange, fInt, ws.elements, tangent ? ws.values : null);
+  assemble(model, tangent ? ws.pattern : null, ws.startVectors, u, lambda * loads.temperatureChange, fInt, ws.elements, tangent ? ws.values : null);
   for (let d = 0; d < fExt.length; d++) fExt[d] = lambda * fixedLoad[d];
   if (loads.follower) {
     const p = ws.positions, c = model.coords;
-    for (let d = 0; d < p.length; d++) p[d] = c[d] + x[d];
+    for (let d = 0; d < p.length; d++) p[d] = c[d] + u[d];
     loads.follower.accumulate(p, lambda, fExt);
   }
   const fixed = model.fixed;
@@ -189,24 +189,24 @@ function evaluateResidual(
 }
 
 function newtonAtLoad(
-  ws: Workspace, loads: CaseLoads, fixedLoad: Float64Array, x: Float64Array, lambda: number,
+  ws: Workspace, loads: CaseLoads, fixedLoad: Float64Array, u: Float64Array, lambda: number,
   options: NewtonOptions, control: SolveControl, tag: CaseTag,
   counters: Counters,
 ): StepResult {
   const { step, residual, ldl, values } = ws;
   const maxNodalStep = options.maxStepFraction * ws.size;
-  let [norm, ref] = evaluateResidual(ws, loads, fixedLoad, x, lambda, true);
+  let [norm, ref] = evaluateResidual(ws, loads, fixedLoad, u, lambda, true);
   let previous = Infinity;
   let indefinite = false;
   let predictor = 0;
-  ws.stepStart.set(x);
+  ws.stepStart.set(u);
   for (let it = 0; it < options.maxIterationsPerStep; it++) {
     const rel = ref > 0 ? norm / ref : 0;
     counters.residual = rel;
     if (!Number.isFinite(norm)) return 'diverged';
     // Round-off floor: accept a stagnating residual that already meets the published bound 1e-9.
     if (rel <= options.tolerance || norm === 0 || (rel <= 1e-9 && norm >= 0.5 * previous)) {
-      return indefinite && !acceptIndefinite(ws, x, predictor, options) ? 'unstable' : 'converged';
+      return indefinite && !acceptIndefinite(ws, u, predictor, options) ? 'unstable' : 'converged';
     }
     if (control.isCancelled?.()) return 'cancelled';
     previous = norm;
@@ -226,16 +226,16 @@ function newtonAtLoad(
       const s = Math.hypot(step[i], step[i + 1], step[i + 2]);
       if (s * scale > maxNodalStep) scale = maxNodalStep / s;
     }
-    const best = lineSearch(ws, loads, fixedLoad, x, lambda, scale, norm);
+    const best = lineSearch(ws, loads, fixedLoad, u, lambda, scale, norm);
     if (best === 0) return 'diverged';
-    for (let d = 0; d < x.length; d++) x[d] += best * step[d];
-    [norm, ref] = evaluateResidual(ws, loads, fixedLoad, x, lambda, true);
+    for (let d = 0; d < u.length; d++) u[d] += best * step[d];
+    [norm, ref] = evaluateResidual(ws, loads, fixedLoad, u, lambda, true);
     control.onProgress?.({ ...tag, iteration: counters.iterations, loadFactor: lambda, residual: ref > 0 ? norm / ref : 0 });
   }
   counters.residual = ref > 0 ? norm / ref : 0;
   if (counters.residual > options.tolerance) return 'maxIterations';
-  [norm, ref] = evaluateResidual(ws, loads, fixedLoad, x, lambda, true);
-  return indefinite && !acceptIndefinite(ws, x, predictor, options) ? 'unstable' : 'converged';
+  [norm, ref] = evaluateResidual(ws, loads, fixedLoad, u, lambda, true);
+  return indefinite && !acceptIndefinite(ws, u, predictor, options) ? 'unstable' : 'converged';
 }
 
 /** Largest nodal length of a 3-per-node vector, m. */
@@ -252,9 +252,9 @@ function maxNodal(v: Float64Array): number {
  * beyond the predictor is a snap-through to another branch; an indefinite converged tangent is an
  * unstable equilibrium. Costs one extra factorisation, only in such increments.
  */
-function acceptIndefinite(ws: Workspace, x: Float64Array, predictor: number, options: NewtonOptions): boolean {
+function acceptIndefinite(ws: Workspace, u: Float64Array, predictor: number, options: NewtonOptions): boolean {
   const moved = ws.trial;
-  for (let d = 0; d < x.length; d++) moved[d] = x[d] - ws.stepStart[d];
+  for (let d = 0; d < u.length; d++) moved[d] = u[d] - ws.stepStart[d];
   if (maxNodal(moved) > 3 * predictor) return false;
   return ws.ldl.factor(ws.values, options.pivotTolerance) < 0 && ws.ldl.negativePivots === 0;
 }
@@ -263,22 +263,22 @@ const LINE_SEARCH_TOLERANCE = 0.5;
 const LINE_SEARCH_TRIALS = 8;
 
 /**
- * Step length s ∈ (0, sMax] along ws.step from x; 0 when no finite, non-growing step is found.
+ * Step length s ∈ (0, sMax] along ws.step from u; 0 when no finite, non-growing step is found.
  * Leaves ws.trial at the last trial point.
  */
 function lineSearch(
-  ws: Workspace, loads: CaseLoads, fixedLoad: Float64Array, x: Float64Array, lambda: number,
+  ws: Workspace, loads: CaseLoads, fixedLoad: Float64Array, u: Float64Array, lambda: number,
   sMax: number, norm0: number,
 ): number {
   const { step, trial, residual } = ws;
   const slope = (s: number): [number, number] => {
-    for (let d = 0; d < x.length; d++) trial[d] = x[d] + s * step[d];
+    for (let d = 0; d < u.length; d++) trial[d] = u[d] + s * step[d];
     const [tn] = evaluateResidual(ws, loads, fixedLoad, trial, lambda, false);
     let g = 0;
     for (let d = 0; d < step.length; d++) g += step[d] * residual[d];
     return [g, tn];
   };
-  // g(0) = Δu · R(x): ws.residual still holds R(x) here.
+  // g(0) = Δu · R(u): ws.residual still holds R(u) here.
   let g0 = 0;
   for (let d = 0; d < step.length; d++) g0 += step[d] * residual[d];
   let sHi = sMax;
