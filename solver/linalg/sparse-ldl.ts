@@ -7,6 +7,7 @@ import type { FactorBackend } from './factor-backend.ts';
 import { SimplicialBackend } from './simplicial-backend.ts';
 import { SupernodalLDL } from './supernodal-ldl.ts';
 import { warmUpKernels } from './jit-warmup.ts';
+import { dropDecoupledEntries, gatherKeptValues } from './decoupled-dofs.ts';
 import { supernodalStructure, supernodalScatterMap } from './supernodal-symbolic.ts';
 
 export interface SparseLDLOptions {
@@ -19,6 +20,12 @@ export interface SparseLDLOptions {
   /** Supernodal kernel: merge small supernodes into their parents (explicit zeros). Default false:
    *  no measurable gain on the benchmark nets, 9 % more storage. */
   relaxedSupernodes?: boolean;
+  /**
+   * 1 for a DOF whose off-diagonal entries are all zero by value (e.g. a restrained DOF kept as an
+   * identity row): its couplings are left out of ordering and factor (less fill), and factor()
+   * refuses values where one of them is not zero. Length n; default none.
+   */
+  decoupledDofs?: ArrayLike<number>;
 }
 
 /** Default pivot tolerance: a pivot smaller than 1e-12 of its original diagonal counts as zero. */
@@ -46,12 +53,19 @@ export class SparseLDL {
   private readonly backend: FactorBackend;
   private readonly pattern: SymmetricPattern;
   private readonly nnzA: number;
+  /** With decoupledDofs: original entry → entry of the reduced pattern (-1 = dropped), and its values. */
+  private readonly keep: Int32Array | null;
+  private readonly reducedValues: Float64Array | null;
   private readonly work: Float64Array;
   private negatives = 0;
   private factored = false;
 
-  private constructor(pattern: SymmetricPattern, perm: Int32Array, backend: FactorBackend) {
+  private constructor(
+    pattern: SymmetricPattern, perm: Int32Array, backend: FactorBackend, keep: Int32Array | null, reducedNnz: number,
+  ) {
     const n = pattern.n;
+    this.keep = keep;
+    this.reducedValues = keep ? new Float64Array(reducedNnz) : null;
     this.n = n;
     this.perm = perm;
     this.backend = backend;
@@ -66,9 +80,11 @@ export class SparseLDL {
    * the chosen ordering followed by a postorder of its elimination tree (same fill; 'natural' is
    * therefore natural up to that postorder). The pattern must not change afterwards.
    */
-  static analyse(pattern: SymmetricPattern, options: SparseLDLOptions = {}): SparseLDL {
-    validatePattern(pattern);
-    const n = pattern.n;
+  static analyse(original: SymmetricPattern, options: SparseLDLOptions = {}): SparseLDL {
+    validatePattern(original);
+    const n = original.n;
+    const reduction = options.decoupledDofs ? dropDecoupledEntries(original, options.decoupledDofs) : null;
+    const pattern = reduction ? reduction.reduced : original;
     if (n >= WARM_UP_FROM && (options.kernel ?? 'supernodal') === 'supernodal') {
       warmUpKernels((p) => SparseLDL.analyse(p, { blockSize: 3 }));
     }
@@ -94,7 +110,7 @@ export class SparseLDL {
       const st = supernodalStructure(n, pg.ptr, pg.idx, parent, counts, options.relaxedSupernodes ?? false);
       backend = new SupernodalLDL(st, supernodalScatterMap(st, pattern.colPtr, pattern.rowIdx, pinv));
     }
-    return new SparseLDL(pattern, perm, backend);
+    return new SparseLDL(original, perm, backend, reduction ? reduction.keep : null, pattern.colPtr[n]);
   }
 
   /**
@@ -111,7 +127,13 @@ export class SparseLDL {
     }
     this.checkFinite(values);
     this.factored = false;
-    const k = this.backend.factor(values, pivotTolerance, TINY);
+    let v = values;
+    if (this.keep && this.reducedValues) {
+      const bad = gatherKeptValues(this.keep, values, this.reducedValues);
+      if (bad >= 0) throw new Error(`SparseLDL.factor: entry ${this.entryName(bad)} couples a DOF declared decoupled but is ${values[bad]}, not 0`);
+      v = this.reducedValues;
+    }
+    const k = this.backend.factor(v, pivotTolerance, TINY);
     if (k >= 0) return this.perm[k];
     this.negatives = this.backend.negativeCount();
     this.factored = true;
@@ -123,11 +145,16 @@ export class SparseLDL {
     let bad = -1;
     for (let q = 0; q < values.length; q++) if (values[q] - values[q] !== 0) { bad = q; break; } // NaN or ±∞
     if (bad < 0) return;
+    this.factored = false;
+    throw new Error(`SparseLDL.factor: matrix entry ${this.entryName(bad)} is ${values[bad]}; the tangent must be finite`);
+  }
+
+  /** "(row, column)" of original entry q. */
+  private entryName(q: number): string {
     const { colPtr, rowIdx } = this.pattern;
     let j = 0;
-    while (colPtr[j + 1] <= bad) j++;
-    this.factored = false;
-    throw new Error(`SparseLDL.factor: matrix entry (${rowIdx[bad]}, ${j}) is ${values[bad]}; the tangent must be finite`);
+    while (colPtr[j + 1] <= q) j++;
+    return `(${rowIdx[q]}, ${j})`;
   }
 
   /** Number of negative entries of D after the last successful factor. */
