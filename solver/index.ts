@@ -18,7 +18,7 @@ export type { SymmetricPattern } from './linalg/index.ts';
 export { buildModel, stressFreeLength } from './model/build-model.ts';
 export { STANDARD_GRAVITY } from './model/constants.ts';
 export { resolveCaseLoads, resolveCombinationLoads } from './loads/resolve-case-loads.ts';
-export { createWorkspace } from './analysis/workspace.ts';
+export { createWorkspace, setElementPrestress } from './analysis/workspace.ts';
 export { solveCase } from './analysis/solve-case.ts';
 export { solveProject } from './analysis/solve-project.ts';
 export { DEFAULT_NEWTON_OPTIONS } from './analysis/newton.ts';

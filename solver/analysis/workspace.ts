@@ -6,6 +6,7 @@ import type { AnalysisModel } from '../model/analysis-model.ts';
 import { buildBlockPattern, type BlockPattern } from '../assembly/block-pattern.ts';
 import { assemble, startVectors, type ElementState } from '../assembly/assemble.ts';
 import { SparseLDL } from '../linalg/index.ts';
+import { stressFreeLength } from '../model/build-model.ts';
 
 export interface Workspace {
   model: AnalysisModel;
@@ -56,4 +57,23 @@ function modelSize(x: Float64Array): number {
   }
   const d = Math.hypot(hi[0] - lo[0], hi[1] - lo[1], hi[2] - lo[2]);
   return d > 0 ? d : 1;
+}
+
+/**
+ * Change the prestress of elements in place — a pretension P at reference length Lr
+ * (S0 = P / A) or an unstressed length (Lr = L0, S0 = 0) — and refresh the homotopy's λ = 0
+ * balance. Topology and start positions are unchanged, so the sparsity pattern and the symbolic
+ * factorisation stay valid; this is what live pretension dragging and tuning iterate on.
+ */
+export function setElementPrestress(
+  ws: Workspace, elements: ArrayLike<number>, refLength: ArrayLike<number>, initialStress: ArrayLike<number>,
+): void {
+  const m = ws.model;
+  for (let k = 0; k < elements.length; k++) {
+    const e = elements[k];
+    m.elemRefLength[e] = refLength[k];
+    m.elemS0[e] = initialStress[k];
+    m.elemUnstressedLength[e] = stressFreeLength(refLength[k], initialStress[k], m.elemE[e]);
+  }
+  assemble(m, null, ws.startVectors, new Float64Array(3 * m.nodeCount), 0, ws.fInt0, ws.elements, null);
 }

@@ -188,6 +188,12 @@ export interface CheckSettings {
   upliftNodes?: string[];
 }
 
+/**
+ * Tuning targets. sag: sag ≤ limit in `case`; tensionShare: tension / breaking load = share
+ * (fraction, 0..1) at installation (the reference case); noSlack: no member of the group slack in
+ * `case`; plumb: horizontal offset of `top` relative to `base` ≤ tolerance (m) in `case`;
+ * reaction: magnitude of the support reaction at `node` ≤ limit (N) in `case`.
+ */
 export type TuningTarget =
   | { kind: 'sag'; group: string; case: string; limit: SagLimit }
   | { kind: 'tensionShare'; group: string; share: number }
@@ -196,7 +202,11 @@ export type TuningTarget =
   | { kind: 'reaction'; node: string; case: string; limit: number };
 
 export interface TuningSpec {
-  /** Groups whose pretension the tuner may change, and how. */
+  /**
+   * Groups whose pretension the tuner may change, and how: by 'pretension' (one force for every
+   * member of the group, N; min/max in N) or by 'unstressedLength' (one factor on the members'
+   * unstressed lengths, dimensionless; min/max as factors).
+   */
   variables: { group: string; by: 'pretension' | 'unstressedLength'; min?: number; max?: number }[];
   targets: TuningTarget[];
   /** Result of the last tuning run, written by `stayset tune --write`. */

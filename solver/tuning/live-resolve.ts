@@ -10,11 +10,10 @@
  */
 import type { ProjectFile } from '../project/types.ts';
 import type { CaseFields, CaseResult } from '../results/types.ts';
-import { buildModel, stressFreeLength } from '../model/build-model.ts';
+import { buildModel } from '../model/build-model.ts';
 import { resolveCaseLoads, resolveCombinationLoads } from '../loads/resolve-case-loads.ts';
-import { createWorkspace } from '../analysis/workspace.ts';
+import { createWorkspace, setElementPrestress } from '../analysis/workspace.ts';
 import { solveCase } from '../analysis/solve-case.ts';
-import { assemble } from '../assembly/assemble.ts';
 import { membersOfGroup, groupExists } from '../checks/groups.ts';
 import { nowMs } from '../analysis/clock.ts';
 
@@ -57,7 +56,6 @@ export function createLiveResolver(project: ProjectFile, caseId: string, group: 
       chordShare.push(chord / m.elementCount);
     }
   }
-  const zero = new Float64Array(3 * model.nodeCount);
   let previous: Float64Array | undefined;
 
   return {
@@ -66,13 +64,7 @@ export function createLiveResolver(project: ProjectFile, caseId: string, group: 
     reset() { previous = undefined; },
     setPretension(pretension: number): LiveStep {
       if (!(pretension > 0) || !Number.isFinite(pretension)) throw new Error(`live tuning: pretension must be a positive force in N, got ${pretension}`);
-      elements.forEach((e, k) => {
-        const s0 = pretension / model.elemArea[e];
-        model.elemS0[e] = s0;
-        model.elemRefLength[e] = chordShare[k];
-        model.elemUnstressedLength[e] = stressFreeLength(chordShare[k], s0, model.elemE[e]);
-      });
-      assemble(model, null, ws.startVectors, zero, 0, ws.fInt0, ws.elements, null);
+      setElementPrestress(ws, elements, chordShare, elements.map((e) => pretension / model.elemArea[e]));
       const t0 = nowMs();
       const s = solveCase(ws, caseId, loads, previous ? { start: previous } : {});
       const seconds = (nowMs() - t0) / 1000;

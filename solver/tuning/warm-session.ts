@@ -14,11 +14,10 @@
 import type { ProjectFile } from '../project/types.ts';
 import type { CaseResult } from '../results/types.ts';
 import type { CaseLoads } from '../loads/case-loads.ts';
-import { buildModel, stressFreeLength } from '../model/build-model.ts';
+import { buildModel } from '../model/build-model.ts';
 import { resolveCaseLoads, resolveCombinationLoads } from '../loads/resolve-case-loads.ts';
-import { createWorkspace } from '../analysis/workspace.ts';
+import { createWorkspace, setElementPrestress } from '../analysis/workspace.ts';
 import { solveCase } from '../analysis/solve-case.ts';
-import { assemble } from '../assembly/assemble.ts';
 import type { ResolvedVariable } from './tuning-types.ts';
 
 interface ElementSlot { e: number; chordShare: number; baseShare: number }
@@ -45,26 +44,23 @@ export function createWarmSession(
       e: m.firstElement + k, chordShare: chord / m.elementCount, baseShare: v.baseUnstressedLength[j] / m.elementCount,
     }));
   }));
-  const zero = new Float64Array(3 * model.nodeCount);
   const previous = new Map<string, Float64Array>();
 
   return (values) => {
+    const elements: number[] = [], refLength: number[] = [], initialStress: number[] = [];
     vars.forEach((v, k) => {
       for (const s of slots[k]) {
+        elements.push(s.e);
         if (v.by === 'pretension') {
-          const s0 = values[k] / model.elemArea[s.e];
-          model.elemRefLength[s.e] = s.chordShare;
-          model.elemS0[s.e] = s0;
-          model.elemUnstressedLength[s.e] = stressFreeLength(s.chordShare, s0, model.elemE[s.e]);
+          refLength.push(s.chordShare);
+          initialStress.push(values[k] / model.elemArea[s.e]);
         } else {
-          const lr = values[k] * s.baseShare;
-          model.elemRefLength[s.e] = lr;
-          model.elemS0[s.e] = 0;
-          model.elemUnstressedLength[s.e] = lr;
+          refLength.push(values[k] * s.baseShare);
+          initialStress.push(0);
         }
       }
     });
-    assemble(model, null, ws.startVectors, zero, 0, ws.fInt0, ws.elements, null);
+    setElementPrestress(ws, elements, refLength, initialStress);
     const out = new Map<string, CaseResult>();
     for (const id of caseIds) {
       const start = previous.get(id);
