@@ -8,6 +8,9 @@
  * replaces that one module by ajv's standalone (precompiled) code for the same schema and the
  * same ajv options, so the page validates with identical messages and no eval.
  * Keep AJV_OPTIONS and the keywords in step with main/common/project/validation/schema-validator.ts.
+ *
+ * Workers (renderer/tuning/tuning-worker.ts, `new Worker(new URL(...), { type: 'module' })`) are
+ * bundled as ES modules into the same folder, so they load under `worker-src 'self'`.
  */
 import { defineConfig, type Plugin } from 'vite';
 import vue from '@vitejs/plugin-vue';
@@ -73,5 +76,6 @@ export default defineConfig({
     chunkSizeWarningLimit: 2500,
     modulePreload: { polyfill: false },
   },
+  worker: { format: 'es', plugins: () => [precompiledSchemaValidator()] },
   server: { port: 5173, strictPort: false },
 });

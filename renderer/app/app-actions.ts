@@ -38,6 +38,8 @@ export function createAppActions(hostOverride?: StaysetHost) {
   const pathPrompt = shallowRef<{ purpose: 'open' | 'saveAs'; suggestion: string } | null>(null);
   /** The tension schedule shown over the main screen, or null. */
   const schedule = shallowRef<SchedulePage | null>(null);
+  /** The Generate dialog is open. */
+  const generating = ref(false);
   let host: StaysetHost | null = hostOverride ?? null;
   let autosaveTimer: ReturnType<typeof setInterval> | null = null;
   const unsubscribers: (() => void)[] = [];
@@ -237,6 +239,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
       case 'redo': redo(); break;
       case 'run': await run(); break;
       case 'fit': fitRequests.value++; break;
+      case 'generate': generating.value = Boolean(projectStore.project); break;
       case 'print': await print(); break;
       case 'new': say('info', 'New projects start from a generator or a copy of the demo (Save As).'); break;
     }
@@ -291,7 +294,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
   }
 
   return {
-    phase, hostKind, notice, openErrors, recents, recovery, pathPrompt, fitRequests, schedule,
+    phase, hostKind, notice, openErrors, recents, recovery, pathPrompt, fitRequests, schedule, generating,
     start, showSchedule, stop, openDemo, openPath, recover, save, saveAs, answerPathPrompt, autosave, run, cancel, undo, redo,
     menuCommand, print, onKeydown, syncDirty, say,
   };

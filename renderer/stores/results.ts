@@ -17,6 +17,14 @@ export interface CaseIndex {
   nodes: Map<string, NodeResult>;
 }
 
+export interface LiveOverride {
+  caseId: string;
+  group: string;
+  /** N */
+  pretension: number;
+  result: CaseResult;
+}
+
 export const useResultsStore = defineStore('results', () => {
   const state = ref<AnalysisState>('idle');
   const runId = ref<string | null>(null);
@@ -29,12 +37,28 @@ export const useResultsStore = defineStore('results', () => {
   /** Project revision the shown results belong to. */
   const resultRevision = ref<number | null>(null);
   const runRevision = ref<number | null>(null);
+  /**
+   * A live re-solve of one case (tuning slider) shown in place of that case of the report while
+   * the slider moves; cleared by the next analysis. `pretension` N of `group`.
+   */
+  const live = shallowRef<LiveOverride | null>(null);
 
   const caseIds = computed(() => report.value?.cases.map((c) => c.id) ?? []);
-  const currentCase = computed<CaseResult | null>(() => report.value?.cases.find((c) => c.id === caseId.value) ?? null);
+  const currentCase = computed<CaseResult | null>(() => {
+    const l = live.value;
+    if (l && l.caseId === caseId.value && report.value) return l.result;
+    return report.value?.cases.find((c) => c.id === caseId.value) ?? null;
+  });
+  /** The report with the live case (if any) in place of its analysed result: what checks read. */
+  const effectiveReport = computed<SolveReport | null>(() => {
+    const r = report.value;
+    const l = live.value;
+    if (!r || !l) return r;
+    return markRaw({ ...r, cases: r.cases.map((c) => (c.id === l.caseId ? l.result : c)) });
+  });
   const currentFields = computed<CaseFields | null>(() => {
     const r = report.value;
-    if (!r || !fields.value) return null;
+    if (!r || !fields.value || (live.value && live.value.caseId === caseId.value)) return null;
     const i = r.cases.findIndex((c) => c.id === caseId.value);
     return i >= 0 ? fields.value[i] ?? null : null;
   });
@@ -78,6 +102,7 @@ export const useResultsStore = defineStore('results', () => {
     progress.value = null;
     runId.value = null;
     if (done.status === 'done' && done.report) {
+      live.value = null;
       report.value = markRaw(done.report);
       fields.value = doneFields ? markRaw(doneFields) : null;
       resultRevision.value = runRevision.value;
@@ -101,7 +126,17 @@ export const useResultsStore = defineStore('results', () => {
     if (caseIds.value.includes(id)) caseId.value = id;
   }
 
+  /** Show a live re-solve of `caseId` (ignored without a report that has that case). */
+  function setLive(next: LiveOverride): void {
+    if (report.value?.cases.some((c) => c.id === next.caseId)) live.value = markRaw(next);
+  }
+
+  function clearLive(): void {
+    live.value = null;
+  }
+
   function clear(): void {
+    live.value = null;
     state.value = 'idle';
     runId.value = null;
     progress.value = null;
@@ -113,7 +148,7 @@ export const useResultsStore = defineStore('results', () => {
   }
 
   return {
-    state, runId, progress, report, fields, error, caseId, resultRevision, caseIds, currentCase, currentFields,
+    state, runId, progress, report, fields, live, effectiveReport, setLive, clearLive, error, caseId, resultRevision, caseIds, currentCase, currentFields,
     currentIndex, progressText, isStale, started, assignRunId, onProgress, onFinished, failedToStart, selectCase, clear,
   };
 });

@@ -3,8 +3,11 @@ import { defineStore } from 'pinia';
 import { ref } from 'vue';
 import type { UnitSystem } from '../units/quantity-kinds.ts';
 
-/** tension: members coloured by axial force; utilisation: by T max / breaking load; kind: by member kind. */
-export type ColourMode = 'tension' | 'utilisation' | 'kind';
+/**
+ * tension: members coloured by axial force; utilisation: by T max / breaking load; kind: by member
+ * kind; checks: by design-check outcome (pass / fail / not checked, slack in its own colour).
+ */
+export type ColourMode = 'tension' | 'utilisation' | 'kind' | 'checks';
 
 export const useSettingsStore = defineStore('settings', () => {
   const units = ref<UnitSystem>('SI');

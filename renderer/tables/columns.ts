@@ -98,6 +98,7 @@ export const LOAD_CASE_COLUMNS: Column<LoadCaseSpec>[] = [
   field('temperatureChange', 'ΔT', 'quantity', { kind: 'temperatureChange', optional: true }),
   { key: 'nodalLoads', label: 'Nodal loads', type: 'summary', get: nodalSummary },
   { key: 'wind', label: 'Wind', type: 'summary', get: (c) => (c.wind ? `${c.wind.speed} m/s → ${c.wind.direction}°` : '—') },
+  { key: 'ice', label: 'Ice', type: 'summary', get: (c) => (c.ice ? `${+(c.ice.thickness * 1000).toPrecision(4)} mm` : '—') },
 ];
 
 export const COLUMNS: { [K in TableName]: Column<TableRow[K]>[] } = {

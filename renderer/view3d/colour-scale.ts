@@ -16,6 +16,19 @@ export const COMPRESSION_COLOUR: Rgb = [0.2, 0.45, 0.9]; // blue (bars only)
 export const UNANALYSED_CABLE: Rgb = [0.62, 0.66, 0.74];
 export const UNANALYSED_BAR: Rgb = [0.42, 0.47, 0.56];
 export const SELECTED_COLOUR: Rgb = [1.0, 1.0, 1.0];
+/** "Checks" colour mode: members (and nodes) that fail a design check, pass, or are not checked. */
+export const CHECK_FAIL_COLOUR: Rgb = [1.0, 0.23, 0.19]; // signal red
+export const CHECK_PASS_COLOUR: Rgb = [0.3, 0.66, 0.42]; // muted green
+export const CHECK_UNCHECKED_COLOUR: Rgb = [0.45, 0.5, 0.58]; // grey
+
+/** Check status of a member or node in SceneData (memberCheck / nodeCheck). */
+export const CheckState = {
+  None: 0,
+  Pass: 1,
+  Fail: 2,
+  Unchecked: 3,
+} as const;
+export type CheckState = (typeof CheckState)[keyof typeof CheckState];
 
 /** Member drawing state. */
 export const MemberState = {

@@ -7,7 +7,10 @@
  * Positions are Float32 relative to the model centre (`origin`) to keep precision for sites with
  * large coordinates.
  */
-import { COMPRESSION_COLOUR, MemberState, SLACK_COLOUR, UNANALYSED_BAR, UNANALYSED_CABLE, scaleColour, type Rgb } from './colour-scale.ts';
+import {
+  CHECK_FAIL_COLOUR, CHECK_PASS_COLOUR, CHECK_UNCHECKED_COLOUR, COMPRESSION_COLOUR, CheckState, MemberState, SLACK_COLOUR,
+  UNANALYSED_BAR, UNANALYSED_CABLE, scaleColour, type Rgb,
+} from './colour-scale.ts';
 import type { SceneData } from './scene-data.ts';
 
 export interface SegmentBuffer {
@@ -50,8 +53,26 @@ export function modelCentre(data: SceneData): [number, number, number] {
   return [(lo[0] + hi[0]) / 2, (lo[1] + hi[1]) / 2, (lo[2] + hi[2]) / 2];
 }
 
+function copy(c: Rgb, out: Rgb): Rgb {
+  out[0] = c[0]; out[1] = c[1]; out[2] = c[2];
+  return out;
+}
+
+/**
+ * Colour mode 'checks': a failing member is red (drawn dashed when slack), a slack member that
+ * passes keeps the slack colour, others are green (pass) or grey (not checked / no check run).
+ */
+function checkColour(data: SceneData, j: number, out: Rgb): Rgb {
+  const check = data.memberCheck[j];
+  if (check === CheckState.Fail) return copy(CHECK_FAIL_COLOUR, out);
+  if (data.memberState[j] === MemberState.Slack) return copy(SLACK_COLOUR, out);
+  if (check === CheckState.Pass) return copy(CHECK_PASS_COLOUR, out);
+  return copy(CHECK_UNCHECKED_COLOUR, out);
+}
+
 export function memberColour(data: SceneData, j: number, out: Rgb): Rgb {
   const state = data.memberState[j];
+  if (data.colour === 'checks' && state !== MemberState.NotAnalysed) return checkColour(data, j, out);
   if (state === MemberState.NotAnalysed) {
     const c = data.memberKind[j] === 1 ? UNANALYSED_BAR : UNANALYSED_CABLE;
     out[0] = c[0]; out[1] = c[1]; out[2] = c[2];

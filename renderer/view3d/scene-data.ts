@@ -7,14 +7,16 @@
  *   directions restrained, 2 all of x, y, z restrained).
  * - member j: drawn as the polyline polyPoints[3k..] for k in [polyOffsets[j], polyOffsets[j+1]);
  *   memberKind[j] (0 cable, 1 bar), memberState[j] (MemberState), memberValue[j] (what the colour
- *   shows: tension in N or utilisation).
+ *   shows: tension in N or utilisation), memberCheck[j] (CheckState, from the design checks).
+ * - nodeCheck[i] (CheckState); failedNodes lists the node indices whose check failed.
+ * - colour: the colour mode the arrays were built for.
  *
  * Deformed shape: displayed = modelled + scale × displacement at the user nodes. Between the ends,
  * cables follow the solver's interior node positions when available (CaseFields + topology),
  * else a parabola with the reported sag below the chord (sag × scale): a drawing aid only.
  */
-import type { CaseResult, ProjectFile } from '../../solver/index.ts';
-import { MemberState } from './colour-scale.ts';
+import type { CaseResult, ItemStatus, ProjectFile } from '../../solver/index.ts';
+import { CheckState, MemberState } from './colour-scale.ts';
 
 export interface SceneData {
   nodeIds: string[];
@@ -28,9 +30,21 @@ export interface SceneData {
   polyPoints: Float64Array;
   /** Colour range [min, max] of memberValue over members in tension (min is 0 unless a value is below 0). */
   valueRange: [number, number];
+  memberCheck: Uint8Array;
+  nodeCheck: Uint8Array;
+  failedNodes: Int32Array;
+  colour: ColourQuantity;
 }
 
-export type ColourQuantity = 'tension' | 'utilisation' | 'kind';
+export type ColourQuantity = 'tension' | 'utilisation' | 'kind' | 'checks';
+
+/** Design-check status by member and node id (runChecks' members / nodes lists). */
+export interface CheckStatusInput {
+  members: ReadonlyMap<string, ItemStatus>;
+  nodes: ReadonlyMap<string, ItemStatus>;
+}
+
+const CHECK_STATE: Record<ItemStatus, CheckState> = { pass: CheckState.Pass, fail: CheckState.Fail, unchecked: CheckState.Unchecked };
 
 export interface SceneOptions {
   /** Case to draw, or null for the model as entered. */
@@ -39,6 +53,8 @@ export interface SceneOptions {
   colour: ColourQuantity;
   /** Points per sagging cable polyline drawn from the sag (≥ 2). */
   sagPoints?: number;
+  /** Check outcome per item (drawn in colour mode 'checks'). */
+  checks?: CheckStatusInput | null;
 }
 
 export function supportLevel(fixed: string | undefined): number {
@@ -114,11 +130,30 @@ export function buildSceneData(project: ProjectFile, options: SceneOptions): Sce
     }
   }
 
+  const memberCheck = new Uint8Array(m);
+  const nodeCheck = new Uint8Array(n);
+  const failed: number[] = [];
+  const checks = options.checks;
+  if (checks) {
+    for (let j = 0; j < m; j++) {
+      const st = checks.members.get(memberIds[j]);
+      if (st) memberCheck[j] = CHECK_STATE[st];
+    }
+    for (let i = 0; i < n; i++) {
+      const st = checks.nodes.get(nodeIds[i]);
+      if (st) nodeCheck[i] = CHECK_STATE[st];
+      if (st === 'fail') failed.push(i);
+    }
+  }
+
   if (!(lo <= hi)) {
     lo = 0;
     hi = 0;
   }
   // The scale starts at zero when every tension is positive, so colour reads as a share of the largest.
   if (lo > 0) lo = 0;
-  return { nodeIds, nodePositions, nodeSupport, memberIds, memberKind, memberState, memberValue, polyOffsets, polyPoints, valueRange: [lo, hi] };
+  return {
+    nodeIds, nodePositions, nodeSupport, memberIds, memberKind, memberState, memberValue, polyOffsets, polyPoints, valueRange: [lo, hi],
+    memberCheck, nodeCheck, failedNodes: Int32Array.from(failed), colour: options.colour,
+  };
 }

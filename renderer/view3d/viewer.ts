@@ -5,14 +5,15 @@
  * Axes: z up (as the project file). Drawing: cables as 1-px line segments coloured per vertex,
  * slack members dashed in their own colour, bars as instanced cylinders, nodes as screen-size
  * points, pinned supports (x, y, z restrained) as cones under the node, partly restrained supports
- * as flat rings. Selection is an overlay drawn on top.
+ * as flat rings. Selection is an overlay drawn on top. In colour mode 'checks' nodes that fail a
+ * check are large red points drawn over everything (one Points object for all of them).
  */
 import * as THREE from 'three';
 import { OrbitControls } from 'three/examples/jsm/controls/OrbitControls.js';
 import { buildLineBuffers, type LineBuffers, type SegmentBuffer } from './line-buffers.ts';
 import { pickAt, type PickHit } from './pick.ts';
 import type { SceneData } from './scene-data.ts';
-import { SELECTED_COLOUR } from './colour-scale.ts';
+import { CHECK_FAIL_COLOUR, SELECTED_COLOUR } from './colour-scale.ts';
 
 const BACKGROUND = 0x1b2330;
 
@@ -61,6 +62,8 @@ export class Viewer3D {
     const bars = this.makeBars(this.buffers.bars);
     if (bars) this.content.add(bars);
     this.content.add(this.makeNodes(data));
+    const failed = this.makeFailedNodes(data);
+    if (failed) this.content.add(failed);
     for (const s of this.makeSupports(data)) this.content.add(s);
     this.content.add(this.makeGround(data));
     if (first || !keepView) this.fit();
@@ -235,6 +238,24 @@ export class Viewer3D {
     g.setAttribute('position', new THREE.BufferAttribute(p, 3));
     const size = data.nodeIds.length > 5000 ? 2 : data.nodeIds.length > 100 ? 3 : 5;
     return new THREE.Points(g, new THREE.PointsMaterial({ color: 0xaab4c4, size, sizeAttenuation: false }));
+  }
+
+  private makeFailedNodes(data: SceneData): THREE.Points | null {
+    if (data.colour !== 'checks' || data.failedNodes.length === 0) return null;
+    const [ox, oy, oz] = this.buffers!.origin;
+    const p = new Float32Array(3 * data.failedNodes.length);
+    data.failedNodes.forEach((i, k) => {
+      p[3 * k] = data.nodePositions[3 * i] - ox;
+      p[3 * k + 1] = data.nodePositions[3 * i + 1] - oy;
+      p[3 * k + 2] = data.nodePositions[3 * i + 2] - oz;
+    });
+    const g = new THREE.BufferGeometry();
+    g.setAttribute('position', new THREE.BufferAttribute(p, 3));
+    const mat = new THREE.PointsMaterial({ color: new THREE.Color(...CHECK_FAIL_COLOUR), size: 14, sizeAttenuation: false, depthTest: false, transparent: true });
+    const points = new THREE.Points(g, mat);
+    points.renderOrder = 9;
+    points.frustumCulled = false;
+    return points;
   }
 
   private makeSupports(data: SceneData): THREE.Object3D[] {

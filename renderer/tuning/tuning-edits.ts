@@ -1,0 +1,75 @@
+/**
+ * Tuning set-up and results as project edits (pure; each returns a new project): the slider
+ * groups of TuningPanel, writing one group's pretension (applyVariables), adding and removing
+ * tuning variables and targets, and applying a tuning run's final values to the current project.
+ */
+import type { ProjectFile, TuningResult, TuningSpec, TuningTarget } from '../../solver/index.ts';
+import { applyVariables, resolveVariables } from '../../solver/index.ts';
+
+export interface SliderGroup {
+  id: string;
+  label: string;
+  /** N */
+  value: number;
+  min: number;
+  max: number;
+}
+
+/** One slider per `by: 'pretension'` variable, bounds from resolveVariables. Throws naming the bad entry. */
+export function sliderGroups(project: ProjectFile): SliderGroup[] {
+  if (!project.tuning?.variables.length) return [];
+  const labels = new Map((project.groups ?? []).map((g) => [g.id, g.label ?? g.id]));
+  return resolveVariables(project)
+    .filter((v) => v.by === 'pretension')
+    .map((v) => ({ id: v.group, label: labels.get(v.group) ?? v.group, value: v.initial, min: v.lower, max: v.upper }));
+}
+
+/** Write `pretension` N into every member of `group` (the variable must exist and be by pretension). */
+export function commitPretension(project: ProjectFile, group: string, pretension: number): ProjectFile {
+  if (!(pretension > 0) || !Number.isFinite(pretension)) throw new Error(`tuning: pretension of "${group}" must be a positive force, got ${pretension} N`);
+  const v = resolveVariables(project).find((x) => x.group === group && x.by === 'pretension');
+  if (!v) throw new Error(`tuning: group "${group}" is not a pretension variable`);
+  return applyVariables(project, [v], [pretension]);
+}
+
+/** Put a tuning run's final values (matched by group) into `project`, which may have changed since. */
+export function applyTuningResult(project: ProjectFile, result: Pick<TuningResult, 'variables'>): ProjectFile {
+  const finals = new Map(result.variables.map((v) => [`${v.group}\u0000${v.by}`, v.final]));
+  const vars = resolveVariables(project).filter((v) => finals.has(`${v.group}\u0000${v.by}`));
+  if (!vars.length) throw new Error('tuning: none of the tuned groups is a tuning variable of the project any more');
+  return applyVariables(project, vars, vars.map((v) => finals.get(`${v.group}\u0000${v.by}`)!));
+}
+
+/** Values in the order of project.tuning.variables (a cancelled run's best x) → project. */
+export function applyVariableValues(project: ProjectFile, x: readonly number[]): ProjectFile {
+  const vars = resolveVariables(project);
+  if (x.length !== vars.length) throw new Error(`tuning: ${x.length} values for ${vars.length} variables (the set-up changed during the run)`);
+  return applyVariables(project, vars, x);
+}
+
+function withTuning(project: ProjectFile, spec: TuningSpec): ProjectFile {
+  return { ...project, tuning: spec };
+}
+
+const emptySpec = (project: ProjectFile): TuningSpec => project.tuning ?? { variables: [], targets: [] };
+
+export function addVariable(project: ProjectFile, group: string, by: 'pretension' | 'unstressedLength' = 'pretension'): ProjectFile {
+  const spec = emptySpec(project);
+  if (spec.variables.some((v) => v.group === group)) throw new Error(`tuning: group "${group}" is already a variable`);
+  return withTuning(project, { ...spec, variables: [...spec.variables, { group, by }] });
+}
+
+export function removeVariable(project: ProjectFile, index: number): ProjectFile {
+  const spec = emptySpec(project);
+  return withTuning(project, { ...spec, variables: spec.variables.filter((_, i) => i !== index) });
+}
+
+export function addTarget(project: ProjectFile, target: TuningTarget): ProjectFile {
+  const spec = emptySpec(project);
+  return withTuning(project, { ...spec, targets: [...spec.targets, target] });
+}
+
+export function removeTarget(project: ProjectFile, index: number): ProjectFile {
+  const spec = emptySpec(project);
+  return withTuning(project, { ...spec, targets: spec.targets.filter((_, i) => i !== index) });
+}
