@@ -3,7 +3,7 @@ import { accumulateColumns, accumulateColumnsTwice } from './dense-kernels.ts';
 /**
  * Dense LDLᵀ of a supernode panel (nr × nc, column-major at base, leading dimension nr) whose
  * updates from other supernodes are already applied: left-looking within the panel,
- * l_ij = (a_ij − Σ_{t<j} l_it d_t l_jt) / d_j (Davis 2006, §4.8, dense case), two columns at a time.
+ * l_ij = (a_ij − Σ_{t<j} l_it d_t l_jt) / d_j (Davis 2006, ch. 4, dense case), two columns at a time.
  * D receives d_j at f + j; the unit diagonal is stored as 1; w, w2, tmp, tmp2 are workspaces.
  * Returns -1, or the global column f + j of the first pivot with |d_j| <= tol · max(aDiag, tiny)
  * (aDiag = |original diagonal|; a NaN pivot from non-finite input is reported the same way).

@@ -3,7 +3,7 @@
  * in CSC form (column k holds rows i <= k; entries i > k, as in a full symmetric adjacency graph,
  * are ignored, so the graph from permuteGraph works as well). Methods: Liu's elimination-tree algorithm with path
  * compression and the row-subtree traversal for the pattern of row k of L
- * (T. A. Davis, Direct Methods for Sparse Linear Systems, SIAM 2006, §4.1–4.2, §4.4).
+ * (T. A. Davis, Direct Methods for Sparse Linear Systems, SIAM 2006, ch. 4).
  */
 
 /** parent[k] = parent of k in the elimination tree, -1 for a root. */

@@ -8,7 +8,7 @@ import { approximateMinimumDegree } from './amd.ts';
  * whose closed adjacency sets {j} ∪ adj(j) are identical (the DOFs of one node in a truss
  * model) become one weighted vertex; AMD orders the weighted node graph and the order is
  * expanded back to DOFs. Identical closed adjacency makes the DOFs indistinguishable, so this
- * changes nothing but the cost of the ordering (Amestoy, Davis & Duff 1996, §2 on
+ * changes nothing but the cost of the ordering (Amestoy, Davis & Duff 1996, on
  * indistinguishable nodes). `graph` = adjacencyGraph(p), passed in when the caller has it.
  */
 export function fillReducingOrdering(

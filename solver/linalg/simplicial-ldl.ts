@@ -1,6 +1,6 @@
 /**
  * Simplicial up-looking LDLᵀ factorisation without pivoting (T. A. Davis, Direct Methods for
- * Sparse Linear Systems, SIAM 2006, §4.6 "up-looking Cholesky", in its LDLᵀ form).
+ * Sparse Linear Systems, SIAM 2006, ch. 4, up-looking Cholesky, in its LDLᵀ form).
  *
  * Works on a matrix C that is already permuted: its upper triangle by columns (`ptr`, `idx`,
  * column k holds rows i <= k). L is unit lower triangular, stored by columns without the unit

@@ -5,14 +5,14 @@ import { factorPanel } from './dense-panel.ts';
 
 /**
  * Supernodal left-looking LDLᵀ without pivoting (the supernodal form of the left-looking
- * algorithm: T. A. Davis, Direct Methods for Sparse Linear Systems, SIAM 2006, §4.8 and the
+ * algorithm: T. A. Davis, Direct Methods for Sparse Linear Systems, SIAM 2006, ch. 4 (left-looking and supernodal Cholesky) and the
  * supernodal remarks of ch. 9; Ng & Peyton, SIAM J. Sci. Comput. 14(5), 1993).
  *
  * For each supernode s (columns f..l−1, in order):
  *  1. every descendant d with rows in [f, l) contributes  −L_d(R,:) · D_d · L_d(C,:)ᵀ  where C are
  *     d's rows inside [f, l) and R its rows from C on; the product is formed one target column at
  *     a time in a dense buffer and subtracted through a relative-row map; d then moves to the list
- *     of the supernode holding its next row (Davis 2006 §4.8 linked lists);
+ *     of the supernode holding its next row (the linked lists of the left-looking method);
  *  2. the panel (diagonal block and rows below) is factorised densely (dense-panel.ts).
  * Storage as in SupernodalStructure; D separately (length n); unit diagonal stored as 1.
  * All memory is allocated in the constructor; factor() and solveInPlace() allocate nothing.

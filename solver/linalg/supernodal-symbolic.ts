@@ -10,7 +10,7 @@ import { supernodePartition } from './supernode-partition.ts';
  * supernode the structures of the columns are nested, so its rows are its columns plus the
  * structure of its last column below the block; relaxed supernodes store explicit zeros.
  * Row structure: Struct(s) = {f..l−1} ∪ rows ≥ l of A(:, f..l−1) ∪ Struct(children) ∩ [l, n)
- * (Davis 2006, §4.1: the pattern of L(:,j) is A's column plus the children's patterns).
+ * (Davis 2006, ch. 4: the pattern of L(:,j) is A's column plus the children's patterns).
  *
  * Storage layout: supernode s owns a dense column-major block of nrows × ncols doubles at
  * valPtr[s] (leading dimension nrows); local row t is global row rows[rowPtr[s] + t]; the first
