@@ -106,6 +106,33 @@ describe.each(kernels)('SparseLDL (%o)', (kernelOptions) => {
     }
   });
 
+  it('finds the mechanism of a 1D spring chain: a free end DOF and a free-free chain', () => {
+    // Chain of 10 DOFs, unit springs between neighbours. (a) DOF 0 grounded, the last spring
+    // missing (value 0, still in the pattern): the free end DOF 9 has no stiffness → zero pivot 9.
+    // (b) No grounding at all: a rigid-body mode. Every proper principal submatrix of a connected
+    // graph Laplacian is positive definite, so only the last pivot in elimination order vanishes
+    // (in the natural order exactly: d_k = 1 for k < n−1 and d_{n−1} = 1 − 1 = 0).
+    const n = 10;
+    const chain = (grounded: boolean, lastSpring: number) => {
+      const rows: number[] = [], cols: number[] = [], vals: number[] = [];
+      for (let i = 0; i + 1 < n; i++) {
+        const k = i + 1 === n - 1 ? lastSpring : 1;
+        rows.push(i, i + 1, i + 1); cols.push(i, i + 1, i); vals.push(k, k, -k);
+      }
+      if (grounded) { rows.push(0); cols.push(0); vals.push(1); }
+      return patternFromCoords(n, rows, cols, vals);
+    };
+    const freeEnd = chain(true, 0);
+    const freeFree = chain(false, 1);
+    for (const ordering of ['natural', 'amd'] as const) {
+      const a = SparseLDL.analyse(freeEnd.pattern, { ordering, blockSize: 1, ...kernelOptions });
+      expect(a.factor(freeEnd.values)).toBe(9);
+      const b = SparseLDL.analyse(freeFree.pattern, { ordering, blockSize: 1, ...kernelOptions });
+      expect(b.factor(freeFree.values)).toBe(b.perm[n - 1]);
+      if (ordering === 'natural') expect(b.perm[n - 1]).toBe(9);
+    }
+  });
+
   it('solves a 2D grid Laplacian with relative residual below 1e-12', () => {
     const sys = gridLaplacian(60);
     const ldl = SparseLDL.analyse(sys.pattern, { blockSize: 1, ...kernelOptions });
