@@ -4,6 +4,7 @@
  * stores; no three.js here.
  */
 import { ref, shallowRef } from 'vue';
+import type { CaseFields, SolveReport } from '../../solver/index.ts';
 import type { HostResult, OpenedProject, RecentEntry, RecoveryEntry, StaysetHost } from '../../main/common/host-contract.ts';
 import { getHost } from '../host/client.ts';
 import { useProjectStore } from '../stores/project.ts';
@@ -43,6 +44,20 @@ export function createAppActions(hostOverride?: StaysetHost) {
   let host: StaysetHost | null = hostOverride ?? null;
   let autosaveTimer: ReturnType<typeof setInterval> | null = null;
   const unsubscribers: (() => void)[] = [];
+
+  /**
+   * The solver's deformed positions (cable interior nodes included), tensions and slack flags of
+   * every case of a finished run, fetched after the report so the view draws the real cable
+   * shapes. A host that no longer has the run answers null; drawing then falls back to the report.
+   */
+  async function fetchCaseFields(runId: string, report: SolveReport): Promise<void> {
+    try {
+      const all = await Promise.all(report.cases.map((_, i) => h().caseFields(runId, i)));
+      if (all.every((f) => f !== null)) results.attachFields(report, all as CaseFields[]);
+    } catch {
+      // keep the report-only drawing
+    }
+  }
 
   function h(): StaysetHost {
     if (!host) host = getHost();
@@ -86,6 +101,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
       h().onDidFinishAnalysis((d) => {
         results.onFinished(d);
         if (d.status === 'failed') say('error', `Analysis failed: ${d.error ?? 'no message'}`);
+        if (d.status === 'done' && d.report) void fetchCaseFields(d.runId, d.report);
       }),
       h().onDidMenuCommand((c) => void menuCommand(c)),
       h().onDidRequestOpen((p) => void openPath(p)),
@@ -301,3 +317,4 @@ export function createAppActions(hostOverride?: StaysetHost) {
 }
 
 export type AppActions = ReturnType<typeof createAppActions>;
+

@@ -96,6 +96,12 @@ export const useResultsStore = defineStore('results', () => {
     if (state.value === 'running' && (runId.value === null || p.runId === runId.value)) progress.value = markRaw(p);
   }
 
+  /** Attach raw fields fetched after `forReport` arrived; ignored when newer results replaced it. */
+  function attachFields(forReport: SolveReport, caseFields: CaseFields[]): void {
+    if (report.value !== forReport || caseFields.length !== forReport.cases.length) return;
+    fields.value = markRaw(caseFields);
+  }
+
   function onFinished(done: AnalysisDone, doneFields: CaseFields[] | null = null): void {
     if (runId.value !== null && done.runId !== runId.value) return;
     state.value = done.status;
@@ -148,7 +154,7 @@ export const useResultsStore = defineStore('results', () => {
   }
 
   return {
-    state, runId, progress, report, fields, live, effectiveReport, setLive, clearLive, error, caseId, resultRevision, caseIds, currentCase, currentFields,
+    state, runId, progress, report, fields, attachFields, live, effectiveReport, setLive, clearLive, error, caseId, resultRevision, caseIds, currentCase, currentFields,
     currentIndex, progressText, isStale, started, assignRunId, onProgress, onFinished, failedToStart, selectCase, clear,
   };
 });

@@ -6,7 +6,7 @@
  * Results are for review by a qualified engineer; local codes and licensed practice govern.
  */
 import { defineStore, storeToRefs } from 'pinia';
-import { computed, markRaw, ref, shallowRef } from 'vue';
+import { computed, markRaw, ref, shallowRef, watch } from 'vue';
 import type { ProjectFile, TargetOutcome, TuningResult } from '../../solver/index.ts';
 import { membersOfGroup, referenceCaseId } from '../../solver/index.ts';
 import { useProjectStore } from './project.ts';
@@ -55,6 +55,12 @@ export const useTuningStore = defineStore('tuning', () => {
   const message = ref<{ kind: 'info' | 'error'; text: string } | null>(null);
   let run: TuningRun | null = null;
   let channel: LiveChannel | null = null;
+  /** The live result stays shown after the commit that wrote its pretension; any other edit, undo or redo clears it. */
+  let keepLiveFor: ProjectFile | null = null;
+  watch(project, (p) => {
+    if (p !== keepLiveFor) results.clearLive();
+    keepLiveFor = null;
+  });
 
   const caseIds = computed(() => (project.value ? [...project.value.loadCases.map((c) => c.id), ...(project.value.combinations ?? []).map((c) => c.id)] : []));
   const caseId = computed(() => {
@@ -73,7 +79,23 @@ export const useTuningStore = defineStore('tuning', () => {
       return { groups: [], error: (e as Error).message };
     }
   });
-  const groups = computed<SliderGroup[]>(() => setup.value.groups.map((g) => (dragValue.value?.group === g.id ? { ...g, value: dragValue.value.value } : g)));
+  // Slider bounds stay as first resolved while the variables are unchanged: the default bounds
+  // follow the current pretension (resolveVariables), and the slider must not jump on release.
+  let boundsOf: unknown = null;
+  const bounds = new Map<string, { min: number; max: number }>();
+  const groups = computed<SliderGroup[]>(() => {
+    const vars = project.value?.tuning?.variables;
+    if (vars !== boundsOf) {
+      bounds.clear();
+      boundsOf = vars;
+    }
+    return setup.value.groups.map((g) => {
+      let b = bounds.get(g.id);
+      if (!b) bounds.set(g.id, (b = { min: g.min, max: g.max }));
+      const value = dragValue.value?.group === g.id ? dragValue.value.value : g.value;
+      return { ...g, min: b.min, max: b.max, value: Math.min(b.max, Math.max(b.min, value)) };
+    });
+  });
   const targets = computed<TargetOutcome[]>(() => lastResult.value?.targets ?? []);
   const diagnosis = computed<string[]>(() => {
     const r = lastResult.value;
@@ -107,7 +129,10 @@ export const useTuningStore = defineStore('tuning', () => {
   /** Slider released: one undoable edit writing the pretension into every member of the group. */
   function commit(group: string, pretension: number): void {
     dragValue.value = null;
-    if (edit(`Pretension of ${group}`, (p) => commitPretension(p, group, pretension))) {
+    let made: ProjectFile | null = null;
+    const ok = edit(`Pretension of ${group}`, (p) => (made = commitPretension(p, group, pretension)));
+    keepLiveFor = made;
+    if (ok) {
       message.value = { kind: 'info', text: `Pretension of ${group} set; run the analysis to update every case.` };
     }
   }
