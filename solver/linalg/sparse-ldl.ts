@@ -6,7 +6,6 @@ import { eliminationTree, eliminationTreeOfPermuted, postorderTree, columnCounts
 import type { FactorBackend } from './factor-backend.ts';
 import { SimplicialBackend } from './simplicial-backend.ts';
 import { SupernodalLDL } from './supernodal-ldl.ts';
-import { warmUpKernels } from './jit-warmup.ts';
 import { dropDecoupledEntries, gatherKeptValues } from './decoupled-dofs.ts';
 import { supernodalStructure, supernodalScatterMap } from './supernodal-symbolic.ts';
 
@@ -31,8 +30,6 @@ export interface SparseLDLOptions {
 /** Default pivot tolerance: a pivot smaller than 1e-12 of its original diagonal counts as zero. */
 export const DEFAULT_PIVOT_TOLERANCE = 1e-12;
 const TINY = 1e-300;
-/** Systems from this order on get the one-off kernel warm-up (jit-warmup.ts) before analysis. */
-const WARM_UP_FROM = 3000;
 
 /**
  * Sparse symmetric LDLᵀ factorisation without pivoting, for tangent stiffness matrices that are
@@ -85,9 +82,6 @@ export class SparseLDL {
     const n = original.n;
     const reduction = options.decoupledDofs ? dropDecoupledEntries(original, options.decoupledDofs) : null;
     const pattern = reduction ? reduction.reduced : original;
-    if (n >= WARM_UP_FROM && (options.kernel ?? 'supernodal') === 'supernodal') {
-      warmUpKernels((p) => SparseLDL.analyse(p, { blockSize: 3 }));
-    }
     const blockSize = options.blockSize ?? 3;
     if (!Number.isInteger(blockSize) || blockSize < 1) throw new Error(`SparseLDL: blockSize must be a positive integer, got ${blockSize}`);
     const method = options.ordering ?? 'amd';
