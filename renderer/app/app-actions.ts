@@ -222,7 +222,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
       say('error', 'Fix the problems listed above before running the analysis.');
       return;
     }
-    results.started(projectStore.revision);
+    results.started(projectStore.revision, p);
     try {
       const { runId } = await h().runAnalysis(p);
       results.assignRunId(runId);
@@ -261,16 +261,19 @@ export function createAppActions(hostOverride?: StaysetHost) {
     }
   }
 
-  /** Show the schedule of the current results (browser edition: print it with the browser). */
+  /**
+   * Show the schedule of the current results with the installation data (cut lengths,
+   * installation tensions, temperature table); browser edition: print it with the browser.
+   */
   function showSchedule(): void {
     const p = projectStore.project;
     if (!p) return;
-    if (!results.report || results.isStale(projectStore.revision)) {
+    if (!results.report || results.isStaleFor(p)) {
       say('error', 'Run the analysis first: the schedule is built from current results.');
       return;
     }
     try {
-      schedule.value = buildSchedulePage({ project: p, report: results.report, units: settings.units, paper: settings.units === 'US' ? 'letter' : 'a4', withInstallation: false, issueDate: isoDate(new Date()) });
+      schedule.value = buildSchedulePage({ project: p, report: results.report, units: settings.units, paper: settings.units === 'US' ? 'letter' : 'a4', withInstallation: true, issueDate: isoDate(new Date()) });
     } catch (e) {
       say('error', `The schedule could not be built: ${(e as Error).message}`);
     }

@@ -7,7 +7,7 @@
  */
 import { defineStore } from 'pinia';
 import { computed, markRaw, ref, shallowRef } from 'vue';
-import type { CaseFields, CaseResult, MemberResult, NodeResult, SolveReport } from '../../solver/index.ts';
+import type { CaseFields, CaseResult, MemberResult, NodeResult, ProjectFile, SolveReport } from '../../solver/index.ts';
 import type { AnalysisDone, AnalysisProgress } from '../../main/common/host-contract.ts';
 
 export type AnalysisState = 'idle' | 'running' | 'done' | 'failed' | 'cancelled';
@@ -37,6 +37,9 @@ export const useResultsStore = defineStore('results', () => {
   /** Project revision the shown results belong to. */
   const resultRevision = ref<number | null>(null);
   const runRevision = ref<number | null>(null);
+  /** The project the shown results were computed from (and the one of the running analysis). */
+  const resultProject = shallowRef<ProjectFile | null>(null);
+  let runProject: ProjectFile | null = null;
   /**
    * A live re-solve of one case (tuning slider) shown in place of that case of the report while
    * the slider moves; cleared by the next analysis. `pretension` N of `group`.
@@ -82,8 +85,21 @@ export const useResultsStore = defineStore('results', () => {
     return resultRevision.value !== null && resultRevision.value !== projectRevision;
   }
 
+  /**
+   * True when `project` differs from the analysed one in anything the analysis reads (nodes,
+   * members, sections, load cases, combinations, groups). Edits are immutable and share unchanged
+   * parts, so this compares references. Check settings, tuning set-up and display do not count.
+   */
+  function isStaleFor(project: ProjectFile | null): boolean {
+    const a = resultProject.value;
+    if (!a || !project || !report.value) return false;
+    return a.nodes !== project.nodes || a.members !== project.members || a.sections !== project.sections
+      || a.loadCases !== project.loadCases || a.combinations !== project.combinations || a.groups !== project.groups;
+  }
+
   /** The run was requested; its id follows in assignRunId (events may arrive before it). */
-  function started(projectRevision: number): void {
+  function started(projectRevision: number, project: ProjectFile | null = null): void {
+    runProject = project;
     state.value = 'running';
     runId.value = null;
     progress.value = null;
@@ -112,6 +128,7 @@ export const useResultsStore = defineStore('results', () => {
       report.value = markRaw(done.report);
       fields.value = doneFields ? markRaw(doneFields) : null;
       resultRevision.value = runRevision.value;
+      resultProject.value = runProject;
       if (!caseId.value || !done.report.cases.some((c) => c.id === caseId.value)) caseId.value = done.report.cases[0]?.id ?? null;
     } else if (done.status === 'failed') {
       error.value = done.error ?? 'the analysis failed without a message';
@@ -151,10 +168,11 @@ export const useResultsStore = defineStore('results', () => {
     error.value = null;
     caseId.value = null;
     resultRevision.value = null;
+    resultProject.value = null;
   }
 
   return {
     state, runId, progress, report, fields, attachFields, live, effectiveReport, setLive, clearLive, error, caseId, resultRevision, caseIds, currentCase, currentFields,
-    currentIndex, progressText, isStale, started, assignRunId, onProgress, onFinished, failedToStart, selectCase, clear,
+    currentIndex, progressText, isStale, isStaleFor, started, assignRunId, onProgress, onFinished, failedToStart, selectCase, clear,
   };
 });
