@@ -9,7 +9,7 @@
  * Run: node --import tsx tests/bench/cholmod-compare.ts [cells]
  */
 import { execFileSync } from 'node:child_process';
-import { existsSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
@@ -63,6 +63,16 @@ export function runCholmodComparison(cells = 100, reps = 15, rounds = 3): Cholmo
   const src = path.resolve(repoRoot, '..', 'shared', 'bench', 'cholmod_bench.c');
   if (!existsSync(src)) return { skipped: `CHOLMOD benchmark source not found at ${src}`, cells, cholmod: [] };
   const dir = mkdtempSync(path.join(os.tmpdir(), 'stayset-cholmod-'));
+  try {
+    return compareIn(dir, src, cells, reps, rounds);
+  } finally {
+    // The exported matrices are large; keep them only on request (STAYSET_KEEP_BENCH_FILES=1).
+    if (process.env.STAYSET_KEEP_BENCH_FILES === '1') console.log(`benchmark files kept in ${dir}`);
+    else rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+function compareIn(dir: string, src: string, cells: number, reps: number, rounds: number): CholmodComparison {
   const exe = path.join(dir, 'cholmod_bench');
   const problem = tryCompile(src, exe);
   if (problem) return { skipped: problem, cells, cholmod: [] };
