@@ -33,7 +33,7 @@ export interface Workspace {
 
 export function createWorkspace(model: AnalysisModel): Workspace {
   const pattern = buildBlockPattern(model.nodeCount, model.elemNodes);
-  const ldl = SparseLDL.analyse(pattern, { blockSize: 3 });
+  const ldl = SparseLDL.analyse(pattern, { blockSize: 3, decoupledDofs: model.fixed });
   const n = 3 * model.nodeCount;
   const elements: ElementState = {
     tension: new Float64Array(model.elementCount),
