@@ -164,7 +164,7 @@ describe('design, checks, tuning and generators in the browser edition', () => {
     expect(await page.getByTestId('check-summary').locator('table.failures tbody tr').count()).toBe(reference.failures.length);
     await page.getByTestId('check-summary').locator('table.failures tbody tr').first().click();
     await expect.poll(() => page.getByTestId('case-select').inputValue()).toBe(reference.failures[0].case);
-    await page.getByTestId('right-tab-inspector').click();
+    // The inspector comes to the front with the failing member.
     await expect.poll(() => page.getByTestId('inspector').textContent()).toContain(`Member ${reference.failures[0].id}`);
     expect(await page.getByTestId('colour-mode').inputValue()).toBe('checks');
     await page.waitForTimeout(300);
@@ -174,6 +174,30 @@ describe('design, checks, tuning and generators in the browser edition', () => {
     await shot('13-check-failure-selected.png');
     await page.getByTestId('undo').click();
     await expect.poll(() => page.getByTestId('check-verdict').textContent()).toBe('PASS');
+  });
+
+  it('edits wind of a load case and a combination factor; undo restores both', async () => {
+    await page.getByTestId('right-tab-loads').click();
+    await page.getByTestId('load-case-select').selectOption('wind 0');
+    const speed = page.getByTestId('wind-editor').locator('label', { hasText: 'Speed at 10 m' }).locator('input');
+    await speed.fill('35');
+    await speed.press('Enter');
+    await speed.blur();
+    await page.getByTestId('tab-loadCases').click();
+    await expect.poll(() => page.locator('[data-testid="table-loadCases"] tr[data-row-id="wind 0"]').textContent()).toContain('35 m/s');
+    await page.getByTestId('tab-combinations').click();
+    const cell = page.locator('[data-testid="combinations-table"] tr[data-combination="ULS wind 90"] input[data-case="wind 0"]');
+    await cell.fill('0.5');
+    await cell.press('Enter');
+    await cell.blur();
+    await expect.poll(async () => (await page.getByTestId('combinations-table').locator('input[data-case="wind 0"]').first().inputValue())).toBe('0.5');
+    await shot('16-loads-and-combinations.png');
+    await page.getByTestId('undo').click();
+    await page.getByTestId('undo').click();
+    expect(await cell.inputValue()).toBe('');
+    await page.getByTestId('tab-loadCases').click();
+    expect(await page.locator('[data-testid="table-loadCases"] tr[data-row-id="wind 0"]').textContent()).toContain('30 m/s');
+    expect(await page.getByTestId('dirty-mark').count()).toBe(0);
   });
 
   it('generates a small guyed mast beside the model in one undo step and undoes it', async () => {
