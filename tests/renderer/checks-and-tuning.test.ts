@@ -17,6 +17,8 @@ import { CHECK_FAIL_COLOUR, CHECK_UNCHECKED_COLOUR, type Rgb } from '../../rende
 import { failureTarget } from '../../renderer/design/select-failure.ts';
 import { commitPretension, sliderGroups } from '../../renderer/tuning/tuning-edits.ts';
 import { useResultsStore } from '../../renderer/stores/results.ts';
+import { useChecksStore } from '../../renderer/stores/checks.ts';
+import { useProjectStore } from '../../renderer/stores/project.ts';
 import { setResistanceFactor } from '../../renderer/model/check-settings-edits.ts';
 
 const demo = JSON.parse(readFileSync(fileURLToPath(new URL('../../assets/demo-mast.stayset', import.meta.url)), 'utf8')) as ProjectFile;
@@ -52,6 +54,18 @@ describe('checks in the 3D view', () => {
       const red = b.taut.colours[6 * s] === Math.fround(CHECK_FAIL_COLOUR[0]) && b.taut.colours[6 * s + 1] === Math.fround(CHECK_FAIL_COLOUR[1]);
       expect(red).toBe(failing.has(data.memberIds[b.taut.segmentMember[s]]));
     }
+  });
+
+  it('a failing tilt check marks both of its nodes as failed nodes of the scene', () => {
+    const strict: ProjectFile = { ...demo, checks: { ...demo.checks, tiltLimits: [{ base: 'mast/base', top: 'mast/P49a', limit: 1e-7 }] } };
+    const checks = runChecks(strict, report);
+    expect(checks.failures.some((f) => f.kind === 'tilt')).toBe(true);
+    const data = buildSceneData(strict, {
+      result: report.cases[1], deformationScale: 1, colour: 'checks',
+      checks: { members: new Map(checks.members.map((m) => [m.id, m.status])), nodes: new Map(checks.nodes.map((n) => [n.id, n.status])) },
+    });
+    const failed = [...data.failedNodes].map((i) => data.nodeIds[i]);
+    expect(failed).toEqual(expect.arrayContaining(['mast/base', 'mast/P49a']));
   });
 
   it('a tilt failure selects both nodes; a non-converged case only switches the case', () => {
@@ -108,6 +122,26 @@ describe('results store with a live case', () => {
     r.started(2, demo);
     r.onFinished({ runId: 'b', status: 'done', report });
     expect(r.currentCase).toBe(report.cases[0]);
+  });
+
+  it('checks follow the live case: the same verdict as checking the committed, re-solved project', () => {
+    const tuned: ProjectFile = { ...demo, checks: { ...demo.checks, resistanceFactor: 0.3 }, tuning: { variables: [{ group: LEVEL, by: 'pretension' }], targets: [] } };
+    const s = useProjectStore();
+    s.load({ path: '/p/demo.stayset', name: 'demo.stayset', project: tuned });
+    const r = useResultsStore();
+    r.started(s.revision, tuned);
+    r.onFinished({ runId: 'a', status: 'done', report });
+    const checks = useChecksStore();
+    const before = checks.report!.cases.find((c) => c.id === 'dead')!.maxUtilisation;
+    const p = 45_000;
+    r.setLive({ caseId: 'dead', group: LEVEL, pretension: p, result: createLiveResolver(tuned, 'dead', LEVEL).setPretension(p).result });
+    const live = checks.report!.cases.find((c) => c.id === 'dead')!;
+    const committed = commitPretension(tuned, LEVEL, p);
+    const reference = runChecks(committed, solveProject(committed).report).cases.find((c) => c.id === 'dead')!;
+    expect(live.maxUtilisation).toBeGreaterThan(before);
+    expect(live.maxUtilisation).toBeCloseTo(reference.maxUtilisation, 6);
+    expect(live.pass).toBe(reference.pass);
+    expect(live.maxUtilisationMember).toBe(reference.maxUtilisationMember);
   });
 
   it('check-setting edits keep results current; a member edit makes them stale', () => {
