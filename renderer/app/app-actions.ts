@@ -295,7 +295,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
   function onKeydown(e: KeyboardEvent): void {
     const mod = e.ctrlKey || e.metaKey;
     const key = e.key.toLowerCase();
-    const inField = e.target instanceof HTMLInputElement || e.target instanceof HTMLSelectElement;
+    const inField = e.target instanceof HTMLInputElement || e.target instanceof HTMLSelectElement || e.target instanceof HTMLTextAreaElement;
     if (mod && key === 's') {
       e.preventDefault();
       void (e.shiftKey ? saveAs() : save());

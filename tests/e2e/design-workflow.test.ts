@@ -219,6 +219,17 @@ describe('design, checks, tuning and generators in the browser edition', () => {
     await shot('15-generated-mast.png');
     await page.getByTestId('undo').click();
     await expect.poll(statusText).toContain(`${members} members`);
+    // A saddle net from our own compact form, beside the model; also one undo step.
+    await page.getByTestId('generate').click();
+    await page.getByTestId('generate-kind-saddleNet').click();
+    await page.getByTestId('canopy-form').locator('input[data-field="spacing"]').fill('4');
+    await dialog.getByRole('button', { name: 'Generate' }).click();
+    await expect.poll(() => page.getByTestId('generate-notes').count()).toBe(1);
+    await shot('18-generate-saddle-net.png');
+    await page.getByTestId('generate-close').click();
+    await expect.poll(async () => Number(/(\d+) members/.exec(await statusText())?.[1])).toBeGreaterThan(members);
+    await page.getByTestId('undo').click();
+    await expect.poll(statusText).toContain(`${members} members`);
     expect(pageErrors).toEqual([]);
   });
 
