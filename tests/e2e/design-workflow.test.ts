@@ -135,6 +135,12 @@ describe('design, checks, tuning and generators in the browser edition', () => {
     await expect.poll(() => page.getByTestId('tuning-message').textContent(), { timeout: 60_000 }).toMatch(/targets met/);
     expect(await page.getByTestId('tuning-panel').locator('table.targets').textContent()).toContain('guys level 1');
     await shot('12-tuning-result.png');
+    // Apply = one undoable edit of the group's pretension.
+    const before = Number(await (await membersCell(GUY, 'pretension')).textContent());
+    await page.getByTestId('apply-tuning').click();
+    await expect.poll(async () => Number(await (await membersCell(GUY, 'pretension')).textContent())).not.toBe(before);
+    await page.getByTestId('undo').click();
+    await expect.poll(async () => Number(await (await membersCell(GUY, 'pretension')).textContent())).toBe(before);
     // Back to the demo as opened: undo the target, the committed pretension and the variable.
     for (let k = 0; k < 3; k++) await page.getByTestId('undo').click();
     expect(await page.getByTestId('dirty-mark').count()).toBe(0);
