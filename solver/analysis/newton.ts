@@ -61,10 +61,15 @@ export interface NewtonOutcome {
   negativePivots: number;
   /** Time spent in numeric factorisations, s. */
   factorSeconds: number;
+  /** Number of numeric factorisations. */
+  factorizations: number;
 }
 
 interface Counters {
+  /** Newton steps (linear solves). */
   iterations: number;
+  /** Numeric factorisations (a chord step reuses the last one). */
+  factorizations: number;
   residual: number;
   negativePivots: number;
   singularDof: number;
@@ -93,7 +98,7 @@ export function solveEquilibrium(
 
   const u = new Float64Array(n); // displacement from the start positions, m
   const saved = new Float64Array(n);
-  const counters: Counters = { iterations: 0, residual: 0, negativePivots: 0, singularDof: -1, factorMs: 0 };
+  const counters: Counters = { iterations: 0, factorizations: 0, residual: 0, negativePivots: 0, singularDof: -1, factorMs: 0 };
 
   if (start) {
     for (let d = 0; d < n; d++) u[d] = start[d] - ws.model.coords[d];
@@ -157,7 +162,7 @@ function outcome(
 ): NewtonOutcome {
   return {
     status, u, iterations: c.iterations, loadSteps, residual: c.residual, loadFactor,
-    negativePivots: c.negativePivots, factorSeconds: c.factorMs / 1000,
+    negativePivots: c.negativePivots, factorSeconds: c.factorMs / 1000, factorizations: c.factorizations,
   };
 }
 
@@ -199,6 +204,7 @@ function newtonAtLoad(
   let previous = Infinity;
   let indefinite = false;
   let predictor = 0;
+  let reuseFactor = false;
   ws.stepStart.set(u);
   for (let it = 0; it < options.maxIterationsPerStep; it++) {
     const rel = ref > 0 ? norm / ref : 0;
@@ -211,13 +217,17 @@ function newtonAtLoad(
     if (control.isCancelled?.()) return 'cancelled';
     previous = norm;
 
-    const t0 = nowMs();
-    const pivot = ldl.factor(values, options.pivotTolerance);
-    counters.factorMs += nowMs() - t0;
+    const chordStep: boolean = reuseFactor;
+    if (!chordStep) {
+      const t0 = nowMs();
+      const pivot = ldl.factor(values, options.pivotTolerance);
+      counters.factorMs += nowMs() - t0;
+      counters.factorizations++;
+      if (pivot >= 0) { counters.singularDof = pivot; return 'singular'; }
+      counters.negativePivots = ldl.negativePivots;
+      if (ldl.negativePivots > 0) indefinite = true;
+    }
     counters.iterations++;
-    if (pivot >= 0) { counters.singularDof = pivot; return 'singular'; }
-    counters.negativePivots = ldl.negativePivots;
-    if (ldl.negativePivots > 0) indefinite = true;
     ldl.solve(residual, step);
     if (it === 0) predictor = maxNodal(step);
 
@@ -230,6 +240,9 @@ function newtonAtLoad(
     if (best === 0) return 'diverged';
     for (let d = 0; d < u.length; d++) u[d] += best * step[d];
     [norm, ref] = evaluateResidual(ws, loads, fixedLoad, u, lambda, true);
+    // Deep in the quadratic regime the last factor is as good as a new one for one more step
+    // (a chord step, as in the Shamanskii variant of Newton's method): reuse it once.
+    reuseFactor = !chordStep && ref > 0 && norm / ref < CHORD_STEP_BELOW && norm < 1e-3 * previous;
     control.onProgress?.({ ...tag, iteration: counters.iterations, loadFactor: lambda, residual: ref > 0 ? norm / ref : 0 });
   }
   counters.residual = ref > 0 ? norm / ref : 0;
@@ -237,6 +250,9 @@ function newtonAtLoad(
   [norm, ref] = evaluateResidual(ws, loads, fixedLoad, u, lambda, true);
   return indefinite && !acceptIndefinite(ws, u, predictor, options) ? 'unstable' : 'converged';
 }
+
+/** Relative residual below which, after a quadratic-rate step, the next step reuses the factor. */
+const CHORD_STEP_BELOW = 1e-6;
 
 /** Largest nodal length of a 3-per-node vector, m. */
 function maxNodal(v: Float64Array): number {

@@ -51,7 +51,7 @@ export function solveCase(ws: Workspace, id: string, loads: CaseLoads, options: 
     stats: {
       dofs: freeDofs, iterations: out.iterations, loadSteps: out.loadSteps,
       seconds: (nowMs() - t0) / 1000, residual: converged ? residual : out.residual,
-      factorSeconds: out.factorSeconds,
+      factorSeconds: out.factorSeconds, factorizations: out.factorizations,
     },
   };
   if (!converged) result.message = explain(ws, out.status, out.loadFactor, out.singularDofs);

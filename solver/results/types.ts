@@ -51,6 +51,8 @@ export interface CaseStats {
   residual: number;
   /** Time in numeric factorisations of the tangent, s (included in `seconds`; always set by the solver). */
   factorSeconds?: number;
+  /** Numeric factorisations (≤ iterations: a step deep in the quadratic regime reuses the last one). */
+  factorizations?: number;
 }
 
 export interface CaseResult {

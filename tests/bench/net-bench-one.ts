@@ -9,6 +9,7 @@ export interface NetBenchRow {
   cells: number;
   dofs: number;
   iterations: number;
+  factorizations: number;
   loadSteps: number;
   factorSeconds: number;
   totalSeconds: number;
@@ -25,7 +26,7 @@ function runOnce(cells: number): NetBenchRow {
   const totalSeconds = (performance.now() - t0) / 1000;
   const c = report.cases[0];
   return {
-    cells, dofs: c.stats.dofs, iterations: c.stats.iterations, loadSteps: c.stats.loadSteps,
+    cells, dofs: c.stats.dofs, iterations: c.stats.iterations, factorizations: c.stats.factorizations ?? 0, loadSteps: c.stats.loadSteps,
     factorSeconds: c.stats.factorSeconds ?? 0, totalSeconds, peakMiB: process.resourceUsage().maxRSS / 1024,
     converged: c.converged, residual: c.stats.residual,
     maxDeflection: Math.max(...c.nodes.map((n) => -n.displacement[2])),

@@ -22,10 +22,10 @@ function netRows(sizes: number[]): NetBenchRow[] {
 
 function printNets(rows: NetBenchRow[]): void {
   console.log('\nSquare pretensioned nets (self-weight + uniform nodal load, boundary fixed)');
-  console.log('cells      DOFs  Newton  factor s  total s  peak MiB  residual   max defl. m');
+  console.log('cells      DOFs  Newton  factorisations  factor s  total s  peak MiB  residual   max defl. m');
   for (const r of rows) {
     console.log(
-      `${String(r.cells).padStart(3)}×${String(r.cells).padEnd(3)} ${String(r.dofs).padStart(7)} ${String(r.iterations).padStart(6)}`
+      `${String(r.cells).padStart(3)}×${String(r.cells).padEnd(3)} ${String(r.dofs).padStart(7)} ${String(r.iterations).padStart(6)} ${String(r.factorizations).padStart(15)}`
       + ` ${r.factorSeconds.toFixed(3).padStart(9)} ${r.totalSeconds.toFixed(3).padStart(8)} ${r.peakMiB.toFixed(0).padStart(9)}`
       + `  ${r.residual.toExponential(1).padStart(8)} ${r.maxDeflection.toFixed(3).padStart(10)}${r.converged ? '' : '  NOT CONVERGED'}`,
     );
