@@ -12,10 +12,11 @@
  * - colour: the colour mode the arrays were built for.
  *
  * Deformed shape: displayed = modelled + scale × displacement at the user nodes. Between the ends,
- * cables follow the solver's interior node positions when available (CaseFields + topology),
- * else a parabola with the reported sag below the chord (sag × scale): a drawing aid only.
+ * members follow the solver's interior node positions when the host sent them (`shape`:
+ * CaseFields + the model's node chains), else a parabola with the reported sag below the chord
+ * (sag × scale): a drawing aid only.
  */
-import type { CaseResult, ItemStatus, ProjectFile } from '../../solver/index.ts';
+import type { CaseFields, CaseResult, ItemStatus, ProjectFile } from '../../solver/index.ts';
 import { CheckState, MemberState } from './colour-scale.ts';
 
 export interface SceneData {
@@ -55,6 +56,19 @@ export interface SceneOptions {
   sagPoints?: number;
   /** Check outcome per item (drawn in colour mode 'checks'). */
   checks?: CheckStatusInput | null;
+  /** The solver's shape of `result`'s case: every member follows its element nodes. */
+  shape?: SolvedShape | null;
+}
+
+/**
+ * The solved positions of every node (user and interior, CaseFields.positions) with the start
+ * positions they are measured from and each member's node chain (AnalysisModel.coords and
+ * members[j].nodeChain, in project member order). Displayed = start + scale × (solved − start).
+ */
+export interface SolvedShape {
+  fields: CaseFields;
+  start: Float64Array;
+  chains: readonly Int32Array[];
 }
 
 export function supportLevel(fixed: string | undefined): number {
@@ -89,6 +103,8 @@ export function buildSceneData(project: ProjectFile, options: SceneOptions): Sce
   let lo = Infinity;
   let hi = -Infinity;
 
+  const shape = options.shape && options.shape.chains.length === m && options.shape.fields.positions.length === options.shape.start.length
+    ? options.shape : null;
   // First pass: sizes.
   const sags = new Float64Array(m);
   const polyOffsets = new Int32Array(m + 1);
@@ -108,7 +124,7 @@ export function buildSceneData(project: ProjectFile, options: SceneOptions): Sce
       }
       sags[j] = mb.kind === 'cable' ? r.sag * scale : 0;
     }
-    polyOffsets[j + 1] = polyOffsets[j] + (sags[j] > 0 ? sagPoints : 2);
+    polyOffsets[j + 1] = polyOffsets[j] + (shape ? shape.chains[j].length : sags[j] > 0 ? sagPoints : 2);
   }
 
   const polyPoints = new Float64Array(3 * polyOffsets[m]);
@@ -118,6 +134,14 @@ export function buildSceneData(project: ProjectFile, options: SceneOptions): Sce
     const b = nodeIndex.get(mb.to);
     const start = polyOffsets[j];
     const count = polyOffsets[j + 1] - start;
+    if (shape) {
+      const chain = shape.chains[j], x = shape.fields.positions, x0 = shape.start;
+      for (let p = 0; p < count; p++) {
+        const q = 3 * chain[p];
+        for (let k = 0; k < 3; k++) polyPoints[3 * (start + p) + k] = x0[q + k] + scale * (x[q + k] - x0[q + k]);
+      }
+      continue;
+    }
     for (let p = 0; p < count; p++) {
       const t = count === 1 ? 0 : p / (count - 1);
       for (let k = 0; k < 3; k++) {

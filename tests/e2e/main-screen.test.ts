@@ -80,8 +80,13 @@ describe('main screen in the browser edition', () => {
   });
 
   it('runs the analysis and shows tensions in the table and tension colours in the 3D view', async () => {
+    // After the report, the page fetches each case's solved node positions (binary) to draw the real cable shapes.
+    const fieldsReply = page.waitForResponse((r) => r.url().includes('/api/caseFields'), { timeout: 60_000 });
     await page.getByTestId('run').click();
     await expect.poll(() => page.getByTestId('analysis-state').textContent(), { timeout: 60_000 }).toMatch(/cases converged/);
+    const reply = await fieldsReply;
+    expect(reply.status()).toBe(200);
+    expect(reply.headers()['content-type']).toContain('application/vnd.stayset.case-fields');
     const first = project.loadCases[0].id;
     expect(await page.getByTestId('case-select').inputValue()).toBe(first);
     const ref1 = reference().cases.find((c) => c.id === first)!.members.find((m) => m.id === guy.id)!;
