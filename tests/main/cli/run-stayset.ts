@@ -3,7 +3,7 @@ import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 
 export const REPO_ROOT = fileURLToPath(new URL('../../../', import.meta.url));
-export const BIN = fileURLToPath(new URL('../../../bin/stayset.mjs', import.meta.url));
+export const BIN = fileURLToPath(new URL('../../../main/cli/stayset.mjs', import.meta.url));
 export const FIXTURES = 'tests/fixtures/projects';
 
 export interface RunResult {

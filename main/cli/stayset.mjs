@@ -3,5 +3,5 @@
 import { register } from 'tsx/esm/api';
 
 register();
-const { runCli } = await import(new URL('../main/cli/main.ts', import.meta.url).href);
+const { runCli } = await import(new URL('./main.ts', import.meta.url).href);
 process.exitCode = await runCli(process.argv.slice(2));
