@@ -6,6 +6,7 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { parseProjectText } from '../common/project/index.ts';
 import type { ProjectFile } from '../../solver/index.ts';
+import type { CliIO } from './cli-io.ts';
 
 export type ReadProjectOutcome =
   | { ok: true; project: ProjectFile; migratedFrom?: number }
@@ -41,4 +42,12 @@ export function readProjectFile(name: string, cwd: string): ReadProjectOutcome {
   const parsed = parseProjectText(text);
   if (!parsed.ok) return { ok: false, errors: parsed.errors.map((m) => `${name}: ${m}`) };
   return parsed;
+}
+
+/** readProjectFile for a command: on failure every message goes to stderr and null comes back (exit 2). */
+export function readProjectOrReport(name: string, io: CliIO): Extract<ReadProjectOutcome, { ok: true }> | null {
+  const read = readProjectFile(name, io.cwd);
+  if (read.ok) return read;
+  for (const m of read.errors) io.err(`${m}\n`);
+  return null;
 }

@@ -9,7 +9,7 @@ import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
 import type { CliIO } from '../cli-io.ts';
 import { parseOptions } from '../options.ts';
-import { readProjectFile } from '../read-project-file.ts';
+import { readProjectOrReport } from '../read-project-file.ts';
 import { replaceNonFinite } from '../format/finite-guard.ts';
 import { fixed, kN } from '../format/number-text.ts';
 import { textTable } from '../format/text-table.ts';
@@ -94,11 +94,8 @@ async function run(args: string[], io: CliIO): Promise<number> {
     throw new UsageError(opts.positionals.length === 0 ? 'check needs a project FILE' : `check takes one FILE (got ${opts.positionals.length})`);
   }
   const file = opts.positionals[0];
-  const read = readProjectFile(file, io.cwd);
-  if (!read.ok) {
-    for (const m of read.errors) io.err(`${m}\n`);
-    return EXIT.badInput;
-  }
+  const read = readProjectOrReport(file, io);
+  if (!read) return EXIT.badInput;
   const project = read.project;
   let report: SolveReport;
   try {

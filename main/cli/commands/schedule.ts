@@ -14,7 +14,7 @@ import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
 import type { CliIO } from '../cli-io.ts';
 import { parseOptions } from '../options.ts';
-import { readProjectFile } from '../read-project-file.ts';
+import { readProjectOrReport } from '../read-project-file.ts';
 import { writeFileAtomic } from '../../store/atomic-write.ts';
 
 const HELP = `Writes the member tension schedule: project header and caution, per member the cut
@@ -74,11 +74,8 @@ async function run(args: string[], io: CliIO): Promise<number> {
   if (outputs.includes(inputPath)) throw new UsageError(`an output path is the project file itself (${file}); choose another name`);
   if (outputs.length === 2 && outputs[0] === outputs[1]) throw new UsageError('--html and --csv name the same file');
 
-  const read = readProjectFile(file, io.cwd);
-  if (!read.ok) {
-    for (const m of read.errors) io.err(`${m}\n`);
-    return EXIT.badInput;
-  }
+  const read = readProjectOrReport(file, io);
+  if (!read) return EXIT.badInput;
   const project = read.project;
   let report: SolveReport;
   let checks: CheckReport | null = null;

@@ -8,7 +8,7 @@ import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
 import type { CliIO } from '../cli-io.ts';
 import { parseOptions } from '../options.ts';
-import { readProjectFile } from '../read-project-file.ts';
+import { readProjectOrReport } from '../read-project-file.ts';
 import { checkCaseIds, filterReport } from '../case-selection.ts';
 import { replaceNonFinite } from '../format/finite-guard.ts';
 import { solveReportText } from '../format/solve-report-text.ts';
@@ -39,11 +39,8 @@ async function run(solver: ProjectSolver, args: string[], io: CliIO): Promise<nu
     throw new UsageError(opts.positionals.length === 0 ? 'solve needs a project FILE' : `solve takes one FILE (got ${opts.positionals.length})`);
   }
   const file = opts.positionals[0];
-  const read = readProjectFile(file, io.cwd);
-  if (!read.ok) {
-    for (const m of read.errors) io.err(`${m}\n`);
-    return EXIT.badInput;
-  }
+  const read = readProjectOrReport(file, io);
+  if (!read) return EXIT.badInput;
   const requested = opts.values.get('case') ?? [];
   const project = read.project;
   checkCaseIds(project, requested);

@@ -11,7 +11,7 @@ import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
 import type { CliIO } from '../cli-io.ts';
 import { parseOptions } from '../options.ts';
-import { readProjectFile } from '../read-project-file.ts';
+import { readProjectOrReport } from '../read-project-file.ts';
 import { fixed } from '../format/number-text.ts';
 import { forceIn, lengthIn, unitLabels, type ScheduleUnits } from '../../common/schedule/schedule-units.ts';
 import { textTable } from '../format/text-table.ts';
@@ -74,11 +74,8 @@ async function run(args: string[], io: CliIO): Promise<number> {
     throw new UsageError(opts.positionals.length === 0 ? 'tune needs a project FILE' : `tune takes one FILE (got ${opts.positionals.length})`);
   }
   const file = opts.positionals[0];
-  const read = readProjectFile(file, io.cwd);
-  if (!read.ok) {
-    for (const m of read.errors) io.err(`${m}\n`);
-    return EXIT.badInput;
-  }
+  const read = readProjectOrReport(file, io);
+  if (!read) return EXIT.badInput;
   const project: ProjectFile = read.project;
   let result: TuningResult;
   try {

@@ -17,17 +17,8 @@ export interface GeneratedParts {
   keyNodes: Record<string, string>;
 }
 
-/** Section properties a generator asks for (ids are made by the generator). SI units. */
-export interface SectionInput {
-  E: number;
-  area: number;
-  massPerLength?: number;
-  breakingLoad?: number;
-  thermalExpansion?: number;
-  diameter?: number;
-  dragCoefficient?: number;
-  label?: string;
-}
+/** Section properties a generator asks for (ids and lattice data are made by the generator). SI units. */
+export type SectionInput = Omit<SectionSpec, 'id' | 'lattice'>;
 
 /** Thrown with every problem of the parameters, each naming the parameter. */
 export class GeneratorInputError extends Error {
