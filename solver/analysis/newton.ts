@@ -9,11 +9,8 @@
  * equilibrium residual. Convergence: ‖R‖₂ ≤ tolerance · max(‖f_ext‖₂, ‖f_int‖₂) over all DOFs
  * (the latter includes the support reactions, so a self-balanced prestress sets the scale too).
  *
- * Line search: on the directional derivative g(s) = Δu · R(u + s Δu) (for a conservative load,
- * the slope of the total potential energy along the step; Crisfield, Non-linear Finite Element
- * Analysis of Solids and Structures, vol. 1 (1991), §9.3), bracketed by the Illinois variant of
- * regula falsi, after limiting the largest nodal step to a fraction of the model size; with a
- * backtracking fall-back on ‖R‖ when g gives no bracket.
+ * Line search: see line-search.ts, after limiting the largest nodal step to a fraction of the
+ * model size.
  * Step control: a failed increment is restored and halved; easy increments double the next one.
  */
 import type { CaseLoads } from '../loads/case-loads.ts';
@@ -23,6 +20,7 @@ import type { Workspace } from './workspace.ts';
 import { addGravity, assemble } from '../assembly/assemble.ts';
 import { STANDARD_GRAVITY } from '../model/constants.ts';
 import { nowMs } from './clock.ts';
+import { lineSearch } from './line-search.ts';
 
 export interface NewtonOptions {
   /** Relative residual for convergence (default 1e-10). */
@@ -236,7 +234,7 @@ function newtonAtLoad(
       const s = Math.hypot(step[i], step[i + 1], step[i + 2]);
       if (s * scale > maxNodalStep) scale = maxNodalStep / s;
     }
-    const best = lineSearch(ws, loads, fixedLoad, u, lambda, scale, norm);
+    const best = searchStep(ws, loads, fixedLoad, u, lambda, scale, norm);
     if (best === 0) return 'diverged';
     for (let d = 0; d < u.length; d++) u[d] += best * step[d];
     [norm, ref] = evaluateResidual(ws, loads, fixedLoad, u, lambda, true);
@@ -275,18 +273,17 @@ function acceptIndefinite(ws: Workspace, u: Float64Array, predictor: number, opt
   return ws.ldl.factor(ws.values, options.pivotTolerance) < 0 && ws.ldl.negativePivots === 0;
 }
 
-const LINE_SEARCH_TOLERANCE = 0.5;
-const LINE_SEARCH_TRIALS = 8;
-
 /**
- * Step length s ∈ (0, sMax] along ws.step from u; 0 when no finite, non-growing step is found.
- * Leaves ws.trial at the last trial point.
+ * Line search along ws.step from u (see line-search.ts): the slope g(s) = Δu · R(u + s Δu) and
+ * ‖R(u + s Δu)‖ at trial points in ws.trial; ws.residual holds R(u) on entry.
  */
-function lineSearch(
+function searchStep(
   ws: Workspace, loads: CaseLoads, fixedLoad: Float64Array, u: Float64Array, lambda: number,
   sMax: number, norm0: number,
 ): number {
   const { step, trial, residual } = ws;
+  let g0 = 0;
+  for (let d = 0; d < step.length; d++) g0 += step[d] * residual[d];
   const slope = (s: number): [number, number] => {
     for (let d = 0; d < u.length; d++) trial[d] = u[d] + s * step[d];
     const [tn] = evaluateResidual(ws, loads, fixedLoad, trial, lambda, false);
@@ -294,41 +291,7 @@ function lineSearch(
     for (let d = 0; d < step.length; d++) g += step[d] * residual[d];
     return [g, tn];
   };
-  // g(0) = Δu · R(u): ws.residual still holds R(u) here.
-  let g0 = 0;
-  for (let d = 0; d < step.length; d++) g0 += step[d] * residual[d];
-  let sHi = sMax;
-  let [gHi, nHi] = slope(sHi);
-  // Non-finite or wildly growing residual: halve until the trial point is sane.
-  for (let k = 0; k < 30 && !(Number.isFinite(nHi) && nHi < 1e6 * (norm0 + 1e-300)); k++) {
-    sHi *= 0.5;
-    [gHi, nHi] = slope(sHi);
-  }
-  if (!Number.isFinite(nHi)) return 0;
-  if (!(g0 > 0) || gHi >= 0 || Math.abs(gHi) <= LINE_SEARCH_TOLERANCE * Math.abs(g0)) {
-    return nHi < 10 * norm0 || gHi >= 0 ? sHi : backtrack(slope, sHi, norm0);
-  }
-  // Bracket [0, sHi] with g(0) > 0 > g(sHi): Illinois regula falsi on g.
-  let sLo = 0, gLo = g0, best = sHi, side = 0;
-  for (let k = 0; k < LINE_SEARCH_TRIALS; k++) {
-    const s = sHi - (gHi * (sHi - sLo)) / (gHi - gLo);
-    const [g] = slope(s);
-    best = s;
-    if (Math.abs(g) <= LINE_SEARCH_TOLERANCE * g0) break;
-    if (g < 0) { sHi = s; gHi = g; if (side === -1) gLo *= 0.5; side = -1; }
-    else { sLo = s; gLo = g; if (side === 1) gHi *= 0.5; side = 1; }
-  }
-  return best;
-}
-
-/** Halve s until ‖R‖ does not grow tenfold; 0 when none does. */
-function backtrack(slope: (s: number) => [number, number], s: number, norm0: number): number {
-  for (let k = 0; k < LINE_SEARCH_TRIALS; k++) {
-    s *= 0.5;
-    const [, n] = slope(s);
-    if (Number.isFinite(n) && n < 10 * norm0) return s;
-  }
-  return 0;
+  return lineSearch(slope, g0, sMax, norm0);
 }
 
 /** The failed pivot's DOF plus every free DOF whose tangent diagonal is (numerically) zero. */
