@@ -103,6 +103,9 @@ async function keepBackup(target: string): Promise<void> {
     await fs.rm(staging, { force: true });
     throw e;
   }
+  // When a killed save left the backup as a hard link to the target itself, staging and backup are
+  // the same file and POSIX rename() does nothing, leaving staging behind: remove that extra link.
+  await fs.rm(staging, { force: true });
 }
 
 const queues = new Map<string, Promise<void>>();

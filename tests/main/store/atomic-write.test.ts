@@ -1,5 +1,5 @@
 /** Atomic replacement with backup (write-temp, fsync, rename: POSIX rename(2) semantics). */
-import { existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, linkSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { isTempFileOf, removeStaleTemps, tempPathFor, writeFileAtomic } from '../../../main/store/atomic-write.ts';
@@ -24,6 +24,18 @@ describe('writeFileAtomic', () => {
     await writeFileAtomic(target, 'three', { backup: true });
     expect(readFileSync(target, 'utf8')).toBe('three');
     expect(readFileSync(target + '.bak', 'utf8')).toBe('two');
+    expect(readdirSync(tmp.dir).sort()).toEqual(['p.stayset', 'p.stayset.bak']);
+  });
+
+  it('leaves no staging link when a killed save left the backup hard-linked to the target', async () => {
+    // State after a kill between "link the backup" and "rename the new file": .bak and the target
+    // are one inode, and POSIX rename(2) between two links of one file does nothing.
+    const target = path.join(tmp.dir, 'p.stayset');
+    writeFileSync(target, 'one');
+    linkSync(target, target + '.bak');
+    await writeFileAtomic(target, 'two', { backup: true });
+    expect(readFileSync(target, 'utf8')).toBe('two');
+    expect(readFileSync(target + '.bak', 'utf8')).toBe('one');
     expect(readdirSync(tmp.dir).sort()).toEqual(['p.stayset', 'p.stayset.bak']);
   });
 
