@@ -14,3 +14,13 @@ export function rowWindow(scrollTop: number, viewHeight: number, rowHeight: numb
   const last = Math.min(rowCount, Math.ceil((scrollTop + viewHeight) / rowHeight) + margin);
   return { first, last: Math.max(first, last), padTop: first * rowHeight, padBottom: Math.max(0, (rowCount - last) * rowHeight) };
 }
+
+/**
+ * Scroll position (px) that brings row `index` into a windowed table's view, a third of the way
+ * down, or null when the row is already comfortably visible.
+ */
+export function scrollTopToShow(index: number, rowHeight: number, scrollTop: number, viewHeight: number): number | null {
+  const top = index * rowHeight;
+  if (top >= scrollTop && top <= scrollTop + viewHeight - 2 * rowHeight) return null;
+  return Math.max(0, top - viewHeight / 3);
+}

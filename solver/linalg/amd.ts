@@ -11,7 +11,7 @@
  *    in one pass over the variables of L_p (the paper's eq. (4) and Algorithm 2);
  *  - indistinguishable variables found by hashing (A_i, E_i) and merged into supervariables;
  *  - mass elimination of variables adjacent to the pivot element only.
- * Dense-row handling is not implemented (structural models do not have dense rows).
+ * Dense rows get no special treatment (structural models have none: a node couples to its few neighbours).
  *
  * Input: adjacency of the graph without self loops (ptr/idx, both directions), vertex weights
  * (e.g. DOFs per node; weight 1 = plain AMD). Output: perm, perm[k] = vertex eliminated k-th.
