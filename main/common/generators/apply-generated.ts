@@ -31,6 +31,8 @@ export interface ApplyOutcome {
   dangling: DanglingReference[];
 }
 
+/** x, y and z all restrained: a node that stands without any member. */
+const pinned = (fixed: string | undefined) => ['x', 'y', 'z'].every((d) => fixed?.includes(d));
 const ownedBy = (recordId: string, id: string) => id.startsWith(`${recordId}/`);
 
 /**
@@ -63,8 +65,12 @@ export function applyGenerated(project: ProjectFile, record: GeneratorRecord, pa
   const follower = new NodeFollower(parts.nodes, oldKeyNodes, parts.keyNodes);
   const ctx: FollowContext = { recordId: rid, oldNodes, newNodes: parts.nodes, follower, notes };
 
-  // The user's members on generated nodes.
+  // The user's members on generated nodes. A re-attached member does not take the same two nodes
+  // as another member (two members on one pair of nodes would leave the far node a mechanism).
   const droppedMembers = new Set<string>();
+  const pairs = new Set<string>();
+  const pairKey = (a: string, b: string) => (a < b ? `${a}\u0000${b}` : `${b}\u0000${a}`);
+  for (const m of [...parts.members, ...userMembers]) if (!oldNodes.has(m.from) && !oldNodes.has(m.to)) pairs.add(pairKey(m.from, m.to));
   userMembers = userMembers.flatMap((m) => {
     const ends = (['from', 'to'] as const).filter((k) => oldNodes.has(m[k]));
     if (!ends.length) return [m];
@@ -80,10 +86,13 @@ export function applyGenerated(project: ProjectFile, record: GeneratorRecord, pa
     }
     const next: MemberSpec = { ...m };
     for (const k of ends) {
-      const id = followNode(ctx, `member "${m.id}" ${k}`, m[k], 'any');
+      const other = k === 'from' ? next.to : next.from;
+      const avoid = new Set([other, ...parts.nodes.filter((n) => pairs.has(pairKey(n.id, other))).map((n) => n.id)]);
+      const id = followNode(ctx, `member "${m.id}" ${k}`, m[k], 'any', avoid);
       if (id === null) { droppedMembers.add(m.id); return []; }
       next[k] = id;
     }
+    pairs.add(pairKey(next.from, next.to));
     if (next.from === next.to) {
       droppedMembers.add(m.id);
       notes.push(`member "${m.id}": both ends would be node "${next.from}": dropped`);
@@ -95,7 +104,7 @@ export function applyGenerated(project: ProjectFile, record: GeneratorRecord, pa
   // User nodes left without any member (after dropping members) would be mechanisms: take them out.
   const used = new Set<string>();
   for (const m of [...userMembers, ...parts.members]) { used.add(m.from); used.add(m.to); }
-  const lonely = new Set(droppedMembers.size ? project.nodes.filter((n) => !ownedBy(rid, n.id) && !used.has(n.id) && !n.fixed
+  const lonely = new Set(droppedMembers.size ? project.nodes.filter((n) => !ownedBy(rid, n.id) && !used.has(n.id) && !pinned(n.fixed)
     && project.members.some((m) => droppedMembers.has(m.id) && (m.from === n.id || m.to === n.id))).map((n) => n.id) : []);
   lonely.forEach((id) => notes.push(`node "${id}": no member is left on it: removed (with its loads and checks)`));
 

@@ -22,6 +22,7 @@ export interface NodeFollow {
 /** Within this distance a node counts as being at the same place, m (common practice: 1 mm drawing tolerance). */
 export const SAME_PLACE = 1e-3;
 
+const NO_IDS: ReadonlySet<string> = new Set();
 const isSupport = (n: NodeSpec) => Boolean(n.fixed && /[xyz]/.test(n.fixed));
 
 export function distance(a: Vec3, b: Vec3): number {
@@ -42,7 +43,8 @@ export class NodeFollower {
   }
 
   /** Where the old node `old` (its id and its position in the project before the re-run) goes. */
-  follow(old: NodeSpec, want: NodeWant): NodeFollow | null {
+  /** `avoid`: new node ids not to choose by nearness (e.g. the other end of a member). */
+  follow(old: NodeSpec, want: NodeWant, avoid: ReadonlySet<string> = NO_IDS): NodeFollow | null {
     const role = this.roleOfOld.get(old.id);
     const byRole = role !== undefined ? this.byId.get(this.newKeyNodes[role] ?? '') : undefined;
     if (byRole && this.allowed(byRole, want)) return { id: byRole.id, how: roleName(role!), distance: distance(old.at, byRole.at) };
@@ -51,7 +53,7 @@ export class NodeFollower {
     let best: NodeSpec | null = null;
     let bestD = Infinity;
     for (const n of this.newNodes) {
-      if (!this.allowed(n, want)) continue;
+      if (!this.allowed(n, want) || avoid.has(n.id)) continue;
       const d = distance(n.at, old.at);
       if (d < bestD) { bestD = d; best = n; }
     }

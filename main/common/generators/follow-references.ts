@@ -23,10 +23,10 @@ const vec = (f: Vec3) => `(${f.map((v) => +v.toPrecision(6)).join(', ')}) N`;
 const isFree = (n: NodeSpec) => !(n.fixed && /[xyz]/.test(n.fixed));
 
 /** Follow one node reference; returns the new id, or null (reference dropped). Notes name `entry`. */
-export function followNode(ctx: FollowContext, entry: string, id: string, want: NodeWant): string | null {
+export function followNode(ctx: FollowContext, entry: string, id: string, want: NodeWant, avoid?: ReadonlySet<string>): string | null {
   const old = ctx.oldNodes.get(id);
   if (!old) return id; // not a node of this generator
-  const to = ctx.follower.follow(old, want);
+  const to = ctx.follower.follow(old, want, avoid);
   if (!to) {
     ctx.notes.push(`${entry}: node "${id}" is no longer made and no ${want === 'support' ? 'support' : 'node'} of the new run can take its place: reference dropped`);
     return null;

@@ -92,7 +92,7 @@ describe('demo canopy re-run on a finer grid', () => {
 describe('the user’s parts on removed generated parts', () => {
   const first = runGenerator(emptyProject(), mastRecord()).project;
   first.sections.push({ id: 'aerial', E: 2e11, area: 1e-4 });
-  first.nodes.push({ id: 'dish', at: [1, 0, 29] });
+  first.nodes.push({ id: 'dish', at: [1, 0, 29], fixed: 'y' });
   first.members.push({ id: 'bracket', kind: 'bar', from: 'mast/P30a', to: 'dish', section: 'aerial' });
   first.members.push({ id: 'stay', kind: 'bar', from: 'mast/P29a', to: 'dish', section: 'aerial' });
   first.groups!.push({ id: 'mine', members: ['bracket', 'mast/guy L2-1', 'mast/leg 30a'] });
@@ -111,6 +111,8 @@ describe('the user’s parts on removed generated parts', () => {
     expect(p.nodes.some((n) => n.id === 'mast/P30a' || n.id === 'mast/P29a')).toBe(false);
     expect(p.groups!.find((g) => g.id === 'mine')!.members).toEqual(['bracket', 'mast/guy L2-1', 'mast/leg 28a']);
     expect(notes.join('\n')).toMatch(/member "bracket" from: node "mast\/P30a" → "mast\/P28a" \(mast top, moved 2 m\)/);
+    // "stay" does not take the same two nodes as "bracket": the next nearest node
+    expect(p.members.find((m) => m.id === 'stay')!.from).toBe('mast/P28b'); // 1.12 m away, the next nearest
     valid(p);
     noOrphans(p);
     converges(p, ['dead']);
