@@ -121,7 +121,14 @@ export const useProjectStore = defineStore('project', () => {
     historyTick.value++;
   }
 
+  /** A new project that was never saved: dirty until Save As. */
+  function markUnsaved(): void {
+    savedProject.value = null;
+    historyTick.value++;
+  }
+
   return {
+    markUnsaved,
     project, path, name, migratedFrom, problems, revision, dirty, title,
     canUndo, canRedo, undoLabel, redoLabel,
     load, close, edit, updateRowsIn, addRow, removeRows, undo, redo, markSaved,
