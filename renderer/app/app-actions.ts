@@ -140,8 +140,9 @@ export function createAppActions(hostOverride?: StaysetHost) {
     adopt(r);
   }
 
-  async function openPath(path?: string): Promise<void> {
-    if (projectStore.dirty && !window.confirm(`Discard unsaved changes to ${projectStore.name}?`)) return;
+  /** Open a project file; `confirmed`: the user already agreed to discard unsaved changes (asked once). */
+  async function openPath(path?: string, confirmed = false): Promise<void> {
+    if (!confirmed && projectStore.dirty && !window.confirm(`Discard unsaved changes to ${projectStore.name}?`)) return;
     if (!path && hostKind.value === 'web') {
       pathPrompt.value = { purpose: 'open', suggestion: '' };
       return;
@@ -209,7 +210,8 @@ export function createAppActions(hostOverride?: StaysetHost) {
     const p = projectStore.project;
     if (!p) return false;
     if (!path && hostKind.value === 'web') {
-      pathPrompt.value = { purpose: 'saveAs', suggestion: projectStore.name.replace(/\.stayset(\.json)?$/, '') + '-copy.stayset' };
+      const stem = projectStore.name.replace(/\.stayset(\.json)?$/, '');
+      pathPrompt.value = { purpose: 'saveAs', suggestion: `${stem}${projectStore.path ? '-copy' : ''}.stayset` };
       return false;
     }
     const r = await h().saveAs(p, path).catch((e: Error) => ({ ok: false as const, error: e.message }));
@@ -230,7 +232,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
     const prompt = pathPrompt.value;
     pathPrompt.value = null;
     if (!prompt || !path) return;
-    if (prompt.purpose === 'open') await openPath(path);
+    if (prompt.purpose === 'open') await openPath(path, true);
     else await saveAs(path);
   }
 

@@ -6,8 +6,10 @@ export type RightTab = 'inspector' | 'loads' | 'checks' | 'tuning' | 'project';
 
 export const useLayoutStore = defineStore('layout', () => {
   const rightTab = ref<RightTab>('inspector');
+  /** The load case last chosen in a loads editor: its loads are drawn when no result case is shown. */
+  const loadCaseId = ref<string | null>(null);
   function showRight(tab: RightTab): void {
     rightTab.value = tab;
   }
-  return { rightTab, showRight };
+  return { rightTab, showRight, loadCaseId };
 });

@@ -16,6 +16,8 @@ import { fitGuyedMastLevels, runGenerator, type GuyedMastParams } from '../../ma
 import { startWebHost, type WebHost } from '../../main/web/web-server.ts';
 import { launchBrowser, type Browser } from './browser.ts';
 import { buildRenderer, REPO, SCREENSHOTS } from './serve-app.ts';
+import { pixelStats } from './pixels.ts';
+import { solveProject } from '../../solver/index.ts';
 import { blankProject } from '../../renderer/model/new-project.ts';
 import { defaultGuyedMast, newRecordId } from '../../renderer/generators/generator-defaults.ts';
 
@@ -214,6 +216,79 @@ describe('a new project, edited without a text editor', () => {
     await expect.poll(() => page.getByTestId('undo').getAttribute('title')).toContain('Fz of a load in dead');
     await shot('38-nodal-loads.png');
     expect(await runAnalysis()).toMatch(/^1 cases converged$/);
+    expect(pageErrors).toEqual([]);
+  }, 180_000);
+});
+
+describe('results that can be trusted', () => {
+  it('a case that did not converge shows no tensions or colours but the reason; reactions per case and as an envelope; loads drawn in 3D', async () => {
+    // The demo mast with a case that heats the guys until they go slack: the mast alone is a mechanism.
+    const melt = structuredClone(project);
+    melt.members = melt.members.filter((m) => m.id !== 'bracket' && m.id !== 'strut');
+    melt.nodes = melt.nodes.filter((n) => n.id !== 'aerial');
+    melt.sections = melt.sections.filter((s) => s.id !== 'bracket tube');
+    melt.loadCases = [melt.loadCases[0], { id: 'melt', label: 'guys heated until slack', temperatureChange: 900 }, melt.loadCases[1]];
+    melt.combinations = [];
+    await writeFile(path.join(root, 'melt.stayset'), JSON.stringify(melt, null, 2));
+    const reference = solveProject(melt).report;
+    expect(reference.cases.map((c) => c.status)).toEqual(['converged', 'limitPoint', 'converged']);
+    // Save the new project into a folder that does not exist yet: the prompt has the focus and adds the extension.
+    await page.getByRole('button', { name: 'Save As…' }).click();
+    await page.getByTestId('path-prompt').waitFor();
+    await page.keyboard.press('Control+A');
+    await page.keyboard.type('jobs/kestrel/test-mast');
+    await page.keyboard.press('Enter');
+    await expect.poll(() => page.getByTestId('dirty-mark').count()).toBe(0);
+    const saved = JSON.parse(await readFile(path.join(root, 'jobs', 'kestrel', 'test-mast.stayset'), 'utf8')) as ProjectFile;
+    expect(saved.meta?.site).toBe('Kestrel Hill (invented)');
+    await page.getByRole('button', { name: 'Open…' }).click();
+    await page.getByTestId('path-input').fill('melt.stayset');
+    await page.getByTestId('path-input').press('Enter');
+    await expect.poll(() => page.getByTestId('project-name').textContent(), { timeout: 20_000 }).toContain('melt');
+    expect(await runAnalysis()).toBe('1 of 3 cases not converged');
+    await page.getByTestId('case-select').selectOption('melt');
+    const state = page.getByTestId('not-converged');
+    await state.waitFor();
+    expect(await state.textContent()).toContain('Case "melt" did not converge: the load passes a limit point');
+    expect(await state.textContent()).toContain(reference.cases[1].message!);
+    expect(await state.textContent()).toContain('What to try');
+    expect(await page.getByTestId('results-table').count()).toBe(0);
+    await page.getByTestId('view-not-converged').waitFor();
+    expect(await page.getByTestId('legend').textContent()).not.toMatch(/kN/);
+    await page.waitForTimeout(300);
+    await shot('39-not-converged.png');
+
+    // Reactions of the dead case and their envelope: the numbers the solver gives, in kN.
+    await page.getByTestId('case-select').selectOption('dead');
+    await page.getByTestId('results-tab-reactions').click();
+    const dead = reference.cases[0];
+    const base = dead.reactions.find((r) => r.node === 'mast/base')!;
+    const row = page.locator('[data-testid="reactions-case"] tr[data-node="mast/base"] td');
+    expect(Number(await row.nth(3).textContent())).toBeCloseTo(base.force[2] / 1000, 1);
+    expect(await page.locator('[data-testid="reactions-case"] tbody tr').count()).toBe(dead.reactions.length);
+    expect(await page.getByTestId('reactions').textContent()).toContain('Envelope over 2 converged cases (1 not converged, left out)');
+    await shot('40-reactions.png');
+
+    // Loads in 3D: a 50 kN load on the mast top draws an orange arrow; the wind case shows its direction.
+    await page.getByTestId('tab-nodalLoads').click();
+    await page.getByTestId('nodal-loads').locator('input[data-field="node"]').fill('mast/P49a');
+    await page.getByTestId('nodal-loads').locator('input[data-field="fx"]').fill('50');
+    await page.getByTestId('nodal-loads').locator('input[data-field="fz"]').fill('0');
+    await page.getByTestId('add-nodal-load').click();
+    await page.getByTestId('fit').click();
+    await page.waitForTimeout(400);
+    const canvas = page.getByTestId('view3d-canvas');
+    const orange = async () => (await pixelStats(page, await canvas.screenshot(), [0x1b, 0x23, 0x30], [[0xff, 0x9f, 0x43]], 60)).matches[0];
+    const withLoad = await orange();
+    await page.getByTestId('show-loads').uncheck();
+    await page.waitForTimeout(300);
+    const without = await orange();
+    expect(withLoad).toBeGreaterThan(without + 20);
+    await page.getByTestId('show-loads').check();
+    await page.getByTestId('case-select').selectOption('wind 0');
+    await expect.poll(() => page.getByTestId('wind-note').textContent()).toContain('toward 0°');
+    await page.waitForTimeout(300);
+    await shot('41-loads-in-3d.png');
     expect(pageErrors).toEqual([]);
   }, 180_000);
 });
