@@ -5,8 +5,7 @@
  * - Cancel sets the shared Atomics flag (the solver stops between iterations and reports
  *   'cancelled'); a worker that has not finished `cancelGraceMs` later is terminated.
  * - One run at a time: starting a run cancels the previous one (reported as 'cancelled').
- * - The worker file is `analysis-worker.ts` beside this file when running from sources (started
- *   with tsx as loader) or `analysis-worker.mjs` beside the bundle (dist/main/electron/).
+ * - The worker file: see worker-location.ts (the bundled worker wherever one is available).
  */
 import { randomBytes } from 'node:crypto';
 import { createRequire } from 'node:module';
@@ -15,6 +14,7 @@ import { pathToFileURL } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { CaseFields, ProjectFile } from '../../solver/index.ts';
 import type { AnalysisDone, AnalysisProgress } from '../common/host-contract.ts';
+import { analysisWorkerUrl } from './worker-location.ts';
 import { CANCEL_REQUESTED, createCancelFlag, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
 
 export interface AnalysisRunnerOptions {
@@ -38,8 +38,7 @@ interface ActiveRun {
 }
 
 export function defaultWorkerUrl(moduleUrl: string = import.meta.url): URL {
-  const ext = new URL(moduleUrl).pathname.endsWith('.ts') ? '.ts' : '.mjs';
-  return new URL(`./analysis-worker${ext}`, moduleUrl);
+  return analysisWorkerUrl(moduleUrl);
 }
 
 /** File URL of tsx's ESM register API (the package's `./esm/api` import export). */
