@@ -12,6 +12,8 @@
  * runtime dependencies). Keep both in step.
  */
 
+import type { ReportSpec, SiteMeasurementSetSpec, TensioningSequenceSpec } from './site-types.ts';
+
 export type Vec3 = [number, number, number];
 
 export interface ProjectFile {
@@ -36,6 +38,12 @@ export interface ProjectFile {
   generators?: GeneratorRecord[];
   /** Display preferences; never affect results. */
   display?: DisplaySettings;
+  /** Tensioning sequences for the crew (solver/sequence). */
+  sequences?: TensioningSequenceSpec[];
+  /** Measurements taken on site, for the as-built back-analysis (solver/asbuilt). */
+  siteMeasurements?: SiteMeasurementSetSpec[];
+  /** Calculation report: document number and revision block. */
+  report?: ReportSpec;
 }
 
 export interface ProjectMeta {

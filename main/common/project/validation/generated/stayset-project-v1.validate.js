@@ -3,7 +3,8 @@
 "use strict";
 export const validate = validate10;
 export default validate10;
-const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 1","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":1,"x-message":"{field} must be 1"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z, each at most once"}}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}}}};
+const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 1","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":1,"x-message":"{field} must be 1"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"sequences":{"type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"$ref":"#/definitions/report"}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z, each at most once"}}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"sequenceStep":{"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}},"sequence":{"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}},"report":{"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}}}};
+const schema104 = {"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}};
 const func2 = Object.prototype.hasOwnProperty;
 const schema12 = {"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}};
 const schema13 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}};
@@ -4003,6 +4004,1168 @@ validate53.errors = vErrors;
 return errors === 0;
 }
 
+const schema81 = {"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}};
+const pattern32 = new RegExp("^[xyz]{1,3}$", "u");
+const schema84 = {"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}};
+
+function validate56(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.setBy === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema84.required,parentSchema:schema84,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((((key0 === "members") || (key0 === "group")) || (key0 === "setBy")) || (key0 === "label"))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema84,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+}
+if(data.members !== undefined){
+if(!(validate18(data.members, {instancePath:instancePath+"/members",parentData:data,parentDataProperty:"members",rootData}))){
+vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
+errors = vErrors.length;
+}
+}
+if(data.group !== undefined){
+let data1 = data.group;
+if(typeof data1 === "string"){
+if(!pattern0.test(data1)){
+const err2 = {instancePath:instancePath+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data1};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+else {
+const err3 = {instancePath:instancePath+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data1};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.setBy !== undefined){
+let data2 = data.setBy;
+if(!((data2 === "force") || (data2 === "length"))){
+const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema84.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema84.properties.setBy.enum,parentSchema:schema84.properties.setBy,data:data2};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data3 = data.label;
+if(typeof data3 !== "string"){
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema84.properties.label.type,parentSchema:schema84.properties.label,data:data3};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+}
+else {
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.type,parentSchema:schema84,data};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+validate56.errors = vErrors;
+return errors === 0;
+}
+
+
+function validate55(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema81.required,parentSchema:schema81,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.steps === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema81.required,parentSchema:schema81,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(func2.call(schema81.properties, key0))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema81,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err3 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+else {
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema81.properties.label.type,parentSchema:schema81.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.temperature !== undefined){
+let data2 = data.temperature;
+if((typeof data2 == "number") && (isFinite(data2))){
+if(data2 <= 0 || isNaN(data2)){
+const err6 = {instancePath:instancePath+"/temperature",schemaPath:"#/definitions/absoluteTemperature/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema13,data:data2};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+else {
+const err7 = {instancePath:instancePath+"/temperature",schemaPath:"#/definitions/absoluteTemperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema13.type,parentSchema:schema13,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+if(data.selfWeight !== undefined){
+let data3 = data.selfWeight;
+if(typeof data3 !== "boolean"){
+const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema81.properties.selfWeight.type,parentSchema:schema81.properties.selfWeight,data:data3};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.steps !== undefined){
+let data4 = data.steps;
+if(Array.isArray(data4)){
+if(data4.length < 1){
+const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema81.properties.steps,data:data4};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+const len0 = data4.length;
+for(let i0=0; i0<len0; i0++){
+if(!(validate56(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate56.errors : vErrors.concat(validate56.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.steps.type,parentSchema:schema81.properties.steps,data:data4};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+}
+if(data.temporaryRestraints !== undefined){
+let data6 = data.temporaryRestraints;
+if(Array.isArray(data6)){
+const len1 = data6.length;
+for(let i1=0; i1<len1; i1++){
+let data7 = data6[i1];
+if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
+if(data7.node === undefined){
+const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema81.properties.temporaryRestraints.items.required,parentSchema:schema81.properties.temporaryRestraints.items,data:data7};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+if(data7.fixed === undefined){
+const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema81.properties.temporaryRestraints.items.required,parentSchema:schema81.properties.temporaryRestraints.items,data:data7};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+for(const key1 in data7){
+if(!(((key1 === "node") || (key1 === "fixed")) || (key1 === "releaseAfterStep"))){
+const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.temporaryRestraints.items,data:data7};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+}
+if(data7.node !== undefined){
+let data8 = data7.node;
+if(typeof data8 === "string"){
+if(!pattern0.test(data8)){
+const err14 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/node",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data8};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+else {
+const err15 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/node",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data8};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+if(data7.fixed !== undefined){
+let data9 = data7.fixed;
+if(typeof data9 === "string"){
+if(!pattern32.test(data9)){
+const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema81.properties.temporaryRestraints.items.properties.fixed,data:data9};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+}
+else {
+const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema81.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema81.properties.temporaryRestraints.items.properties.fixed,data:data9};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+}
+if(data7.releaseAfterStep !== undefined){
+let data10 = data7.releaseAfterStep;
+if(!(((typeof data10 == "number") && (!(data10 % 1) && !isNaN(data10))) && (isFinite(data10)))){
+const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema81.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema81.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+if((typeof data10 == "number") && (isFinite(data10))){
+if(data10 < 1 || isNaN(data10)){
+const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema81.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+}
+}
+}
+else {
+const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.temporaryRestraints.items.type,parentSchema:schema81.properties.temporaryRestraints.items,data:data7};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
+}
+errors++;
+}
+}
+}
+else {
+const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.temporaryRestraints.type,parentSchema:schema81.properties.temporaryRestraints,data:data6};
+if(vErrors === null){
+vErrors = [err21];
+}
+else {
+vErrors.push(err21);
+}
+errors++;
+}
+}
+if(data.plumb !== undefined){
+let data11 = data.plumb;
+if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
+if(data11.base === undefined){
+const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema81.properties.plumb.required,parentSchema:schema81.properties.plumb,data:data11};
+if(vErrors === null){
+vErrors = [err22];
+}
+else {
+vErrors.push(err22);
+}
+errors++;
+}
+if(data11.top === undefined){
+const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema81.properties.plumb.required,parentSchema:schema81.properties.plumb,data:data11};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+if(data11.limit === undefined){
+const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema81.properties.plumb.required,parentSchema:schema81.properties.plumb,data:data11};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+for(const key2 in data11){
+if(!(((key2 === "base") || (key2 === "top")) || (key2 === "limit"))){
+const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.plumb,data:data11};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+}
+if(data11.base !== undefined){
+let data12 = data11.base;
+if(typeof data12 === "string"){
+if(!pattern0.test(data12)){
+const err26 = {instancePath:instancePath+"/plumb/base",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data12};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+}
+else {
+const err27 = {instancePath:instancePath+"/plumb/base",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data12};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+}
+if(data11.top !== undefined){
+let data13 = data11.top;
+if(typeof data13 === "string"){
+if(!pattern0.test(data13)){
+const err28 = {instancePath:instancePath+"/plumb/top",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data13};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
+}
+errors++;
+}
+}
+else {
+const err29 = {instancePath:instancePath+"/plumb/top",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data13};
+if(vErrors === null){
+vErrors = [err29];
+}
+else {
+vErrors.push(err29);
+}
+errors++;
+}
+}
+if(data11.limit !== undefined){
+let data14 = data11.limit;
+if((typeof data14 == "number") && (isFinite(data14))){
+if(data14 <= 0 || isNaN(data14)){
+const err30 = {instancePath:instancePath+"/plumb/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data14};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+}
+else {
+const err31 = {instancePath:instancePath+"/plumb/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data14};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+}
+}
+else {
+const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.plumb.type,parentSchema:schema81.properties.plumb,data:data11};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+if(data.forceTolerance !== undefined){
+let data15 = data.forceTolerance;
+if((typeof data15 == "number") && (isFinite(data15))){
+if(data15 <= 0 || isNaN(data15)){
+const err33 = {instancePath:instancePath+"/forceTolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data15};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+else {
+const err34 = {instancePath:instancePath+"/forceTolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data15};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+if(data.lengthTolerance !== undefined){
+let data16 = data.lengthTolerance;
+if((typeof data16 == "number") && (isFinite(data16))){
+if(data16 <= 0 || isNaN(data16)){
+const err35 = {instancePath:instancePath+"/lengthTolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data16};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+}
+else {
+const err36 = {instancePath:instancePath+"/lengthTolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data16};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+}
+else {
+const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.type,parentSchema:schema81,data};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+validate55.errors = vErrors;
+return errors === 0;
+}
+
+const schema92 = {"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}};
+
+function validate60(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema92.required,parentSchema:schema92,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.tensions === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema92.required,parentSchema:schema92,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "date")) || (key0 === "tensions")) || (key0 === "positions")) || (key0 === "tolerance")) || (key0 === "lengthUncertainty"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema92,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err3 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+else {
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema92.properties.label.type,parentSchema:schema92.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.date !== undefined){
+let data2 = data.date;
+if(typeof data2 !== "string"){
+const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema92.properties.date.type,parentSchema:schema92.properties.date,data:data2};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+if(data.tensions !== undefined){
+let data3 = data.tensions;
+if(Array.isArray(data3)){
+const len0 = data3.length;
+for(let i0=0; i0<len0; i0++){
+let data4 = data3[i0];
+if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
+if(data4.member === undefined){
+const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema92.properties.tensions.items.required,parentSchema:schema92.properties.tensions.items,data:data4};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+if(data4.method === undefined){
+const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema92.properties.tensions.items.required,parentSchema:schema92.properties.tensions.items,data:data4};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+if(data4.value === undefined){
+const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema92.properties.tensions.items.required,parentSchema:schema92.properties.tensions.items,data:data4};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+if(data4.accuracy === undefined){
+const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema92.properties.tensions.items.required,parentSchema:schema92.properties.tensions.items,data:data4};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+if(data4.temperature === undefined){
+const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema92.properties.tensions.items.required,parentSchema:schema92.properties.tensions.items,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+for(const key1 in data4){
+if(!((((((key1 === "member") || (key1 === "method")) || (key1 === "value")) || (key1 === "accuracy")) || (key1 === "temperature")) || (key1 === "mode"))){
+const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema92.properties.tensions.items,data:data4};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+if(data4.member !== undefined){
+let data5 = data4.member;
+if(typeof data5 === "string"){
+if(!pattern0.test(data5)){
+const err13 = {instancePath:instancePath+"/tensions/" + i0+"/member",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data5};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+}
+else {
+const err14 = {instancePath:instancePath+"/tensions/" + i0+"/member",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data5};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+if(data4.method !== undefined){
+let data6 = data4.method;
+if(!(((data6 === "dynamometer") || (data6 === "frequency")) || (data6 === "sag"))){
+const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema92.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema92.properties.tensions.items.properties.method.enum,parentSchema:schema92.properties.tensions.items.properties.method,data:data6};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+if(data4.value !== undefined){
+let data7 = data4.value;
+if((typeof data7 == "number") && (isFinite(data7))){
+if(data7 <= 0 || isNaN(data7)){
+const err16 = {instancePath:instancePath+"/tensions/" + i0+"/value",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data7};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+}
+else {
+const err17 = {instancePath:instancePath+"/tensions/" + i0+"/value",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data7};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+}
+if(data4.accuracy !== undefined){
+let data8 = data4.accuracy;
+if((typeof data8 == "number") && (isFinite(data8))){
+if(data8 <= 0 || isNaN(data8)){
+const err18 = {instancePath:instancePath+"/tensions/" + i0+"/accuracy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data8};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+}
+else {
+const err19 = {instancePath:instancePath+"/tensions/" + i0+"/accuracy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data8};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+}
+if(data4.temperature !== undefined){
+let data9 = data4.temperature;
+if((typeof data9 == "number") && (isFinite(data9))){
+if(data9 <= 0 || isNaN(data9)){
+const err20 = {instancePath:instancePath+"/tensions/" + i0+"/temperature",schemaPath:"#/definitions/absoluteTemperature/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema13,data:data9};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
+}
+errors++;
+}
+}
+else {
+const err21 = {instancePath:instancePath+"/tensions/" + i0+"/temperature",schemaPath:"#/definitions/absoluteTemperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema13.type,parentSchema:schema13,data:data9};
+if(vErrors === null){
+vErrors = [err21];
+}
+else {
+vErrors.push(err21);
+}
+errors++;
+}
+}
+if(data4.mode !== undefined){
+let data10 = data4.mode;
+if(!((((data10 === "tautString") || (data10 === "inPlaneSymmetric")) || (data10 === "inPlaneAntisymmetric")) || (data10 === "lowestInPlane"))){
+const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema92.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema92.properties.tensions.items.properties.mode.enum,parentSchema:schema92.properties.tensions.items.properties.mode,data:data10};
+if(vErrors === null){
+vErrors = [err22];
+}
+else {
+vErrors.push(err22);
+}
+errors++;
+}
+}
+}
+else {
+const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema92.properties.tensions.items.type,parentSchema:schema92.properties.tensions.items,data:data4};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+}
+}
+else {
+const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema92.properties.tensions.type,parentSchema:schema92.properties.tensions,data:data3};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+}
+if(data.positions !== undefined){
+let data11 = data.positions;
+if(Array.isArray(data11)){
+const len1 = data11.length;
+for(let i1=0; i1<len1; i1++){
+let data12 = data11[i1];
+if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
+if(data12.node === undefined){
+const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema92.properties.positions.items.required,parentSchema:schema92.properties.positions.items,data:data12};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+if(data12.at === undefined){
+const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema92.properties.positions.items.required,parentSchema:schema92.properties.positions.items,data:data12};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+if(data12.accuracy === undefined){
+const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema92.properties.positions.items.required,parentSchema:schema92.properties.positions.items,data:data12};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+if(data12.temperature === undefined){
+const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema92.properties.positions.items.required,parentSchema:schema92.properties.positions.items,data:data12};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
+}
+errors++;
+}
+for(const key2 in data12){
+if(!((((key2 === "node") || (key2 === "at")) || (key2 === "accuracy")) || (key2 === "temperature"))){
+const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema92.properties.positions.items,data:data12};
+if(vErrors === null){
+vErrors = [err29];
+}
+else {
+vErrors.push(err29);
+}
+errors++;
+}
+}
+if(data12.node !== undefined){
+let data13 = data12.node;
+if(typeof data13 === "string"){
+if(!pattern0.test(data13)){
+const err30 = {instancePath:instancePath+"/positions/" + i1+"/node",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data13};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+}
+else {
+const err31 = {instancePath:instancePath+"/positions/" + i1+"/node",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data13};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+}
+if(data12.at !== undefined){
+let data14 = data12.at;
+if(Array.isArray(data14)){
+if(data14.length > 3){
+const err32 = {instancePath:instancePath+"/positions/" + i1+"/at",schemaPath:"#/definitions/vec3/maxItems",keyword:"maxItems",params:{limit: 3},message:"must NOT have more than 3 items",schema:3,parentSchema:schema16,data:data14};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+if(data14.length < 3){
+const err33 = {instancePath:instancePath+"/positions/" + i1+"/at",schemaPath:"#/definitions/vec3/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema16,data:data14};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+const len2 = data14.length;
+for(let i2=0; i2<len2; i2++){
+let data15 = data14[i2];
+if(!((typeof data15 == "number") && (isFinite(data15)))){
+const err34 = {instancePath:instancePath+"/positions/" + i1+"/at/" + i2,schemaPath:"#/definitions/vec3/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema16.items.type,parentSchema:schema16.items,data:data15};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+}
+else {
+const err35 = {instancePath:instancePath+"/positions/" + i1+"/at",schemaPath:"#/definitions/vec3/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema16.type,parentSchema:schema16,data:data14};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+}
+if(data12.accuracy !== undefined){
+let data16 = data12.accuracy;
+if((typeof data16 == "number") && (isFinite(data16))){
+if(data16 <= 0 || isNaN(data16)){
+const err36 = {instancePath:instancePath+"/positions/" + i1+"/accuracy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data16};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+else {
+const err37 = {instancePath:instancePath+"/positions/" + i1+"/accuracy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data16};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+if(data12.temperature !== undefined){
+let data17 = data12.temperature;
+if((typeof data17 == "number") && (isFinite(data17))){
+if(data17 <= 0 || isNaN(data17)){
+const err38 = {instancePath:instancePath+"/positions/" + i1+"/temperature",schemaPath:"#/definitions/absoluteTemperature/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema13,data:data17};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
+}
+errors++;
+}
+}
+else {
+const err39 = {instancePath:instancePath+"/positions/" + i1+"/temperature",schemaPath:"#/definitions/absoluteTemperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema13.type,parentSchema:schema13,data:data17};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+}
+}
+else {
+const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema92.properties.positions.items.type,parentSchema:schema92.properties.positions.items,data:data12};
+if(vErrors === null){
+vErrors = [err40];
+}
+else {
+vErrors.push(err40);
+}
+errors++;
+}
+}
+}
+else {
+const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema92.properties.positions.type,parentSchema:schema92.properties.positions,data:data11};
+if(vErrors === null){
+vErrors = [err41];
+}
+else {
+vErrors.push(err41);
+}
+errors++;
+}
+}
+if(data.tolerance !== undefined){
+let data18 = data.tolerance;
+if((typeof data18 == "number") && (isFinite(data18))){
+if(data18 <= 0 || isNaN(data18)){
+const err42 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data18};
+if(vErrors === null){
+vErrors = [err42];
+}
+else {
+vErrors.push(err42);
+}
+errors++;
+}
+}
+else {
+const err43 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data18};
+if(vErrors === null){
+vErrors = [err43];
+}
+else {
+vErrors.push(err43);
+}
+errors++;
+}
+}
+if(data.lengthUncertainty !== undefined){
+let data19 = data.lengthUncertainty;
+if((typeof data19 == "number") && (isFinite(data19))){
+if(data19 <= 0 || isNaN(data19)){
+const err44 = {instancePath:instancePath+"/lengthUncertainty",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data19};
+if(vErrors === null){
+vErrors = [err44];
+}
+else {
+vErrors.push(err44);
+}
+errors++;
+}
+}
+else {
+const err45 = {instancePath:instancePath+"/lengthUncertainty",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data19};
+if(vErrors === null){
+vErrors = [err45];
+}
+else {
+vErrors.push(err45);
+}
+errors++;
+}
+}
+}
+else {
+const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema92.type,parentSchema:schema92,data};
+if(vErrors === null){
+vErrors = [err46];
+}
+else {
+vErrors.push(err46);
+}
+errors++;
+}
+validate60.errors = vErrors;
+return errors === 0;
+}
+
 
 function validate10(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 /*# sourceURL="https://stayset.invalid/schema/stayset-project.v1.schema.json" */;
@@ -4321,14 +5484,236 @@ vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.error
 errors = vErrors.length;
 }
 }
+if(data.sequences !== undefined){
+let data21 = data.sequences;
+if(Array.isArray(data21)){
+const len7 = data21.length;
+for(let i7=0; i7<len7; i7++){
+if(!(validate55(data21[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data21,parentDataProperty:i7,rootData}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+errors = vErrors.length;
+}
+}
 }
 else {
-const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema11.type,parentSchema:schema11,data};
+const err19 = {instancePath:instancePath+"/sequences",schemaPath:"#/properties/sequences/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.sequences.type,parentSchema:schema11.properties.sequences,data:data21};
 if(vErrors === null){
 vErrors = [err19];
 }
 else {
 vErrors.push(err19);
+}
+errors++;
+}
+}
+if(data.siteMeasurements !== undefined){
+let data23 = data.siteMeasurements;
+if(Array.isArray(data23)){
+const len8 = data23.length;
+for(let i8=0; i8<len8; i8++){
+if(!(validate60(data23[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data23,parentDataProperty:i8,rootData}))){
+vErrors = vErrors === null ? validate60.errors : vErrors.concat(validate60.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err20 = {instancePath:instancePath+"/siteMeasurements",schemaPath:"#/properties/siteMeasurements/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.siteMeasurements.type,parentSchema:schema11.properties.siteMeasurements,data:data23};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
+}
+errors++;
+}
+}
+if(data.report !== undefined){
+let data25 = data.report;
+if(data25 && typeof data25 == "object" && !Array.isArray(data25)){
+for(const key1 in data25){
+if(!((key1 === "documentNumber") || (key1 === "revisions"))){
+const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema104,data:data25};
+if(vErrors === null){
+vErrors = [err21];
+}
+else {
+vErrors.push(err21);
+}
+errors++;
+}
+}
+if(data25.documentNumber !== undefined){
+let data26 = data25.documentNumber;
+if(typeof data26 !== "string"){
+const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema104.properties.documentNumber.type,parentSchema:schema104.properties.documentNumber,data:data26};
+if(vErrors === null){
+vErrors = [err22];
+}
+else {
+vErrors.push(err22);
+}
+errors++;
+}
+}
+if(data25.revisions !== undefined){
+let data27 = data25.revisions;
+if(Array.isArray(data27)){
+const len9 = data27.length;
+for(let i9=0; i9<len9; i9++){
+let data28 = data27[i9];
+if(data28 && typeof data28 == "object" && !Array.isArray(data28)){
+if(data28.revision === undefined){
+const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema104.properties.revisions.items.required,parentSchema:schema104.properties.revisions.items,data:data28};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+if(data28.date === undefined){
+const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema104.properties.revisions.items.required,parentSchema:schema104.properties.revisions.items,data:data28};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+if(data28.description === undefined){
+const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema104.properties.revisions.items.required,parentSchema:schema104.properties.revisions.items,data:data28};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+for(const key2 in data28){
+if(!(((((key2 === "revision") || (key2 === "date")) || (key2 === "description")) || (key2 === "by")) || (key2 === "checkedBy"))){
+const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema104.properties.revisions.items,data:data28};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+}
+if(data28.revision !== undefined){
+let data29 = data28.revision;
+if(typeof data29 !== "string"){
+const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema104.properties.revisions.items.properties.revision.type,parentSchema:schema104.properties.revisions.items.properties.revision,data:data29};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+}
+if(data28.date !== undefined){
+let data30 = data28.date;
+if(typeof data30 !== "string"){
+const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema104.properties.revisions.items.properties.date.type,parentSchema:schema104.properties.revisions.items.properties.date,data:data30};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
+}
+errors++;
+}
+}
+if(data28.description !== undefined){
+let data31 = data28.description;
+if(typeof data31 !== "string"){
+const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema104.properties.revisions.items.properties.description.type,parentSchema:schema104.properties.revisions.items.properties.description,data:data31};
+if(vErrors === null){
+vErrors = [err29];
+}
+else {
+vErrors.push(err29);
+}
+errors++;
+}
+}
+if(data28.by !== undefined){
+let data32 = data28.by;
+if(typeof data32 !== "string"){
+const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema104.properties.revisions.items.properties.by.type,parentSchema:schema104.properties.revisions.items.properties.by,data:data32};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+}
+if(data28.checkedBy !== undefined){
+let data33 = data28.checkedBy;
+if(typeof data33 !== "string"){
+const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema104.properties.revisions.items.properties.checkedBy.type,parentSchema:schema104.properties.revisions.items.properties.checkedBy,data:data33};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+}
+}
+else {
+const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema104.properties.revisions.items.type,parentSchema:schema104.properties.revisions.items,data:data28};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+}
+else {
+const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema104.properties.revisions.type,parentSchema:schema104.properties.revisions,data:data27};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+}
+else {
+const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema104.type,parentSchema:schema104,data:data25};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+}
+else {
+const err35 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema11.type,parentSchema:schema11,data};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
 }
 errors++;
 }
