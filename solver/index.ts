@@ -26,3 +26,5 @@ export { memberSag, describeDof } from './results/extract.ts';
 export { SparseLDL, writeMatrixMarketSymmetric, writeMatrixMarketDenseVector } from './linalg/index.ts';
 export * from './tuning/index.ts';
 export * from './installation/index.ts';
+export { estimateModelSize, checkModelBudget, DEFAULT_MODEL_BUDGET } from './model/model-budget.ts';
+export type { ModelBudget, ModelSizeEstimate, BudgetVerdict, BudgetItem, SizeDriver } from './model/model-budget.ts';
