@@ -7,6 +7,7 @@ import { resolve } from 'node:path';
 import { parseProjectText } from '../common/project/index.ts';
 import type { ProjectFile } from '../../solver/index.ts';
 import type { CliIO } from './cli-io.ts';
+import { modelBudgetMessage } from './model-budget-guard.ts';
 
 export type ReadProjectOutcome =
   | { ok: true; project: ProjectFile; migratedFrom?: number }
@@ -44,10 +45,14 @@ export function readProjectFile(name: string, cwd: string): ReadProjectOutcome {
   return parsed;
 }
 
-/** readProjectFile for a command: on failure every message goes to stderr and null comes back (exit 2). */
+/**
+ * readProjectFile for a command that solves: on failure, or when the model would exceed the size
+ * budget, every message goes to stderr and null comes back (exit 2).
+ */
 export function readProjectOrReport(name: string, io: CliIO): Extract<ReadProjectOutcome, { ok: true }> | null {
   const read = readProjectFile(name, io.cwd);
-  if (read.ok) return read;
-  for (const m of read.errors) io.err(`${m}\n`);
+  const errors = read.ok ? [modelBudgetMessage(name, read.project)].filter((m): m is string => m !== null) : read.errors;
+  if (read.ok && errors.length === 0) return read;
+  for (const m of errors) io.err(`${m}\n`);
   return null;
 }

@@ -106,7 +106,7 @@ export interface MemberSpec {
   from: string;
   to: string;
   section: string;
-  /** Number of elements the solver splits the member into. Default 1. */
+  /** Number of elements the solver splits the member into, 1 to 10,000. Default 1. */
   segments?: number;
   /** Axial force at the modelled geometry, N (positive = tension). Exclusive with unstressedLength. */
   pretension?: number;
