@@ -9,12 +9,12 @@ import { dofOf } from './dof-map.ts';
 export const DIRECTION_NAMES = ['x', 'y', 'z', 'rx', 'ry', 'rz'] as const;
 
 /**
- * Directions named by a `fixed` string: tokens x, y, z, rx, ry, rz, each at most once, spaces
- * allowed ("xyz", "xyz rx ry rz", "xyzrz"). Throws on anything else, naming `where`.
+ * Directions named by a `fixed` string: tokens x, y, z, rx, ry, rz, each at most once, written
+ * together ("xyz" pinned, "xyzrxryrz" clamped, "xyzrz"). Throws on anything else, naming `where`.
  */
 export function parseFixed(text: string | undefined, where: string): number[] {
   const dirs: number[] = [];
-  const s = (text ?? '').replace(/\s+/g, '');
+  const s = text ?? '';
   for (let p = 0; p < s.length; p++) {
     const rot = s[p] === 'r';
     const axis = 'xyz'.indexOf(s[rot ? ++p : p] ?? '');

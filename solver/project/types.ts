@@ -57,7 +57,7 @@ export interface NodeSpec {
   at: Vec3;
   /**
    * Restrained directions: translations x, y, z and rotations rx, ry, rz (global axes), each at
-   * most once, spaces allowed: "xyz" = pinned, "xyz rx ry rz" = clamped. Absent = free.
+   * most once, written together: "xyz" = pinned, "xyzrxryrz" = clamped. Absent = free.
    */
   fixed?: string;
   /** Elastic supports (springs to ground), see NodeSprings. */
