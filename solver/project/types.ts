@@ -13,8 +13,10 @@
  */
 
 import type { ReportSpec, SiteMeasurementSetSpec, TensioningSequenceSpec } from './site-types.ts';
+import type { BeamReleases, NodeSprings, PrescribedDisplacement, NodalMoment } from './structure-types.ts';
 
 export type Vec3 = [number, number, number];
+export type * from './structure-types.ts';
 
 export interface ProjectFile {
   format: 'stayset-project';
@@ -60,8 +62,13 @@ export interface NodeSpec {
   id: string;
   /** Position [x, y, z], m. */
   at: Vec3;
-  /** Restrained translations: any of the letters x, y, z ("xyz" = pinned). Absent = free. */
+  /**
+   * Restrained directions: translations x, y, z and rotations rx, ry, rz (global axes), each at
+   * most once, written together: "xyz" = pinned, "xyzrxryrz" = clamped. Absent = free.
+   */
   fixed?: string;
+  /** Elastic supports (springs to ground), see NodeSprings. */
+  springs?: NodeSprings;
 }
 
 export interface SectionSpec {
@@ -95,13 +102,22 @@ export interface SectionSpec {
     share?: number;
   };
   label?: string;
+  /** Shear modulus, Pa (beams). */
+  G?: number;
+  /** Second moments of area about the local y and z axes, m⁴ (beams). */
+  Iy?: number;
+  Iz?: number;
+  /** Torsion constant, m⁴ (beams). */
+  J?: number;
+  /** Yield strength, Pa. */
+  yieldStrength?: number;
 }
 
-export type MemberKind = 'cable' | 'bar';
+/** cable: tension-only; bar: tension and compression; beam: beam-column (axial, bending, torsion). */
+export type MemberKind = 'cable' | 'bar' | 'beam';
 
 export interface MemberSpec {
   id: string;
-  /** cable: tension-only; bar: tension and compression. */
   kind: MemberKind;
   from: string;
   to: string;
@@ -116,12 +132,18 @@ export interface MemberSpec {
   groups?: string[];
   /** Set by a generator: which generator record made this member. */
   generatedBy?: string;
+  /** Beams: reference vector fixing the local y axis (its part normal to the member); see solver/elements/beam. */
+  orientation?: Vec3;
+  /** Beams: end releases (pins). */
+  releases?: BeamReleases;
 }
 
 export interface NodalLoadSpec {
   node: string;
   /** Force [Fx, Fy, Fz], N. */
   force: Vec3;
+  /** Moment, N·m (nodes with rotations only). */
+  moment?: NodalMoment;
 }
 
 export interface WindSpec {
@@ -164,6 +186,8 @@ export interface LoadCaseSpec {
   nodalLoads?: NodalLoadSpec[];
   wind?: WindSpec;
   ice?: IceSpec;
+  /** Prescribed support displacements in this case. */
+  displacements?: PrescribedDisplacement[];
 }
 
 export interface GroupSpec {
