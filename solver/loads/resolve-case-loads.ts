@@ -8,6 +8,7 @@ import type { AnalysisModel } from '../model/analysis-model.ts';
 import type { CaseLoads, FollowerLoad } from './case-loads.ts';
 import { createWindLoad } from './wind.ts';
 import { iceMassPerLength } from './ice.ts';
+import { withAreaLoads } from './panel-loads.ts';
 
 export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spec: LoadCaseSpec): CaseLoads {
   const nodal = new Float64Array(3 * model.nodeCount);
@@ -17,14 +18,14 @@ export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spe
     if (i === undefined) throw new Error(`load case "${spec.id}": node "${load.node}" does not exist`);
     for (let q = 0; q < 3; q++) nodal[3 * i + q] += load.force[q];
   }
-  return {
+  return withAreaLoads(model, project, spec, {
     nodal,
     selfWeight: spec.selfWeight ?? true,
     gravityFactor: 1,
     extraMassPerLength: spec.ice ? iceMassPerLength(model, project, spec.ice) : null,
     temperatureChange: spec.temperatureChange ?? 0,
     follower: spec.wind ? createWindLoad(model, project, spec) : null,
-  };
+  });
 }
 
 /**

@@ -12,6 +12,10 @@
  * runtime dependencies). Keep both in step.
  */
 
+import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec } from './actions-types.ts';
+
+export type * from './actions-types.ts';
+
 export type Vec3 = [number, number, number];
 
 export interface ProjectFile {
@@ -36,6 +40,12 @@ export interface ProjectFile {
   generators?: GeneratorRecord[];
   /** Display preferences; never affect results. */
   display?: DisplaySettings;
+  /** Panels carrying area loads (solver/project/actions-types.ts). */
+  panels?: PanelSpec[];
+  /** Patch wind on guyed masts: a combination of results (actions-types.ts). */
+  patchWind?: PatchWindSpec[];
+  /** Member loss (guy rupture) accidental cases (actions-types.ts). */
+  memberLoss?: MemberLossSpec[];
 }
 
 export interface ProjectMeta {
@@ -156,6 +166,8 @@ export interface LoadCaseSpec {
   nodalLoads?: NodalLoadSpec[];
   wind?: WindSpec;
   ice?: IceSpec;
+  /** Area loads on panels (actions-types.ts). */
+  areaLoads?: AreaLoadSpec[];
 }
 
 export interface GroupSpec {

@@ -36,6 +36,7 @@ export function applyGenerated(project: ProjectFile, record: GeneratorRecord, pa
   (ch?.displacementLimits ?? []).forEach((l) => usedNodes.set(l.node, 'checks.displacementLimits'));
   (ch?.tiltLimits ?? []).forEach((l) => { usedNodes.set(l.base, 'checks.tiltLimits'); usedNodes.set(l.top, 'checks.tiltLimits'); });
   (ch?.upliftNodes ?? []).forEach((n) => usedNodes.set(n, 'checks.upliftNodes'));
+  (project.panels ?? []).filter((pa) => !ownedBy(rid, pa.id)).forEach((pa) => pa.nodes.forEach((n) => usedNodes.set(n, `panel "${pa.id}"`)));
   const usedSections = new Map(userMembers.map((m) => [m.section, `member "${m.id}"`] as const));
 
   const keptNodes = project.nodes.filter((n) => {
@@ -71,5 +72,7 @@ export function applyGenerated(project: ProjectFile, record: GeneratorRecord, pa
     groups: [...keptGroups, ...parts.groups],
     generators,
   };
+  const panels = [...(project.panels ?? []).filter((pa) => !ownedBy(rid, pa.id)), ...(parts.panels ?? [])];
+  if (panels.length > 0 || project.panels) out.panels = panels;
   return { project: out, notes };
 }

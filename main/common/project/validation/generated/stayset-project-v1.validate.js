@@ -3,7 +3,7 @@
 "use strict";
 export const validate = validate10;
 export default validate10;
-const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 1","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":1,"x-message":"{field} must be 1"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z, each at most once"}}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}}}};
+const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 1","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":1,"x-message":"{field} must be 1"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"panels":{"type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"type":"array","items":{"$ref":"#/definitions/memberLoss"}}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z, each at most once"}}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}},"panel":{"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}},"pressureCoefficient":{"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}},"areaLoad":{"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}},"memberLoss":{"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}}}};
 const func2 = Object.prototype.hasOwnProperty;
 const schema12 = {"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}};
 const schema13 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}};
@@ -1032,7 +1032,7 @@ validate17.errors = vErrors;
 return errors === 0;
 }
 
-const schema31 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"}}};
+const schema31 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}};
 const schema33 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}};
 
 function validate22(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
@@ -1658,6 +1658,204 @@ validate29.errors = vErrors;
 return errors === 0;
 }
 
+const schema45 = {"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}};
+const schema46 = {"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}};
+
+function validate34(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.region === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "region"},message:"must have required property '"+"region"+"'",schema:schema46.required,parentSchema:schema46,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.cp === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "cp"},message:"must have required property '"+"cp"+"'",schema:schema46.required,parentSchema:schema46,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((key0 === "region") || (key0 === "cp"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema46,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.region !== undefined){
+let data0 = data.region;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err3 = {instancePath:instancePath+"/region",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+else {
+const err4 = {instancePath:instancePath+"/region",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.cp !== undefined){
+let data1 = data.cp;
+if(!((typeof data1 == "number") && (isFinite(data1)))){
+const err5 = {instancePath:instancePath+"/cp",schemaPath:"#/properties/cp/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema46.properties.cp.type,parentSchema:schema46.properties.cp,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+}
+else {
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema46.type,parentSchema:schema46,data};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+validate34.errors = vErrors;
+return errors === 0;
+}
+
+
+function validate32(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.kind === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema45.required,parentSchema:schema45,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.value === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema45.required,parentSchema:schema45,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((((key0 === "kind") || (key0 === "value")) || (key0 === "panels")) || (key0 === "coefficients"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema45,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.kind !== undefined){
+let data0 = data.kind;
+if(!(((data0 === "snow") || (data0 === "cladding")) || (data0 === "pressure"))){
+const err3 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema45.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema45.properties.kind.enum,parentSchema:schema45.properties.kind,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.value !== undefined){
+let data1 = data.value;
+if(!((typeof data1 == "number") && (isFinite(data1)))){
+const err4 = {instancePath:instancePath+"/value",schemaPath:"#/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema45.properties.value.type,parentSchema:schema45.properties.value,data:data1};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.panels !== undefined){
+if(!(validate18(data.panels, {instancePath:instancePath+"/panels",parentData:data,parentDataProperty:"panels",rootData}))){
+vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
+errors = vErrors.length;
+}
+}
+if(data.coefficients !== undefined){
+let data3 = data.coefficients;
+if(Array.isArray(data3)){
+const len0 = data3.length;
+for(let i0=0; i0<len0; i0++){
+if(!(validate34(data3[i0], {instancePath:instancePath+"/coefficients/" + i0,parentData:data3,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate34.errors : vErrors.concat(validate34.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err5 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema45.properties.coefficients.type,parentSchema:schema45.properties.coefficients,data:data3};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+}
+else {
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema45.type,parentSchema:schema45,data};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+validate32.errors = vErrors;
+return errors === 0;
+}
+
 
 function validate21(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -1674,7 +1872,7 @@ vErrors.push(err0);
 errors++;
 }
 for(const key0 in data){
-if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "selfWeight")) || (key0 === "temperatureChange")) || (key0 === "nodalLoads")) || (key0 === "wind")) || (key0 === "ice"))){
+if(!((((((((key0 === "id") || (key0 === "label")) || (key0 === "selfWeight")) || (key0 === "temperatureChange")) || (key0 === "nodalLoads")) || (key0 === "wind")) || (key0 === "ice")) || (key0 === "areaLoads"))){
 const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema31,data};
 if(vErrors === null){
 vErrors = [err1];
@@ -1783,9 +1981,19 @@ vErrors = vErrors === null ? validate29.errors : vErrors.concat(validate29.error
 errors = vErrors.length;
 }
 }
+if(data.areaLoads !== undefined){
+let data8 = data.areaLoads;
+if(Array.isArray(data8)){
+const len1 = data8.length;
+for(let i1=0; i1<len1; i1++){
+if(!(validate32(data8[i1], {instancePath:instancePath+"/areaLoads/" + i1,parentData:data8,parentDataProperty:i1,rootData}))){
+vErrors = vErrors === null ? validate32.errors : vErrors.concat(validate32.errors);
+errors = vErrors.length;
+}
+}
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema31.type,parentSchema:schema31,data};
+const err8 = {instancePath:instancePath+"/areaLoads",schemaPath:"#/properties/areaLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema31.properties.areaLoads.type,parentSchema:schema31.properties.areaLoads,data:data8};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1794,18 +2002,30 @@ vErrors.push(err8);
 }
 errors++;
 }
+}
+}
+else {
+const err9 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema31.type,parentSchema:schema31,data};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
 validate21.errors = vErrors;
 return errors === 0;
 }
 
-const schema45 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
+const schema48 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
 
-function validate33(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate38(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema45.required,parentSchema:schema45,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema48.required,parentSchema:schema48,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1815,7 +2035,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.members === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema45.required,parentSchema:schema45,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema48.required,parentSchema:schema48,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1826,7 +2046,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "label")) || (key0 === "members"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema45,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema48,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1864,7 +2084,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema45.properties.label.type,parentSchema:schema45.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema48.properties.label.type,parentSchema:schema48.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1882,7 +2102,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema45.type,parentSchema:schema45,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema48.type,parentSchema:schema48,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1891,18 +2111,18 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate33.errors = vErrors;
+validate38.errors = vErrors;
 return errors === 0;
 }
 
-const schema47 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}};
+const schema50 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}};
 
-function validate36(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate41(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema47.required,parentSchema:schema47,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema50.required,parentSchema:schema50,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1912,7 +2132,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.factors === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema47.required,parentSchema:schema47,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema50.required,parentSchema:schema50,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1923,7 +2143,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "label")) || (key0 === "factors"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema47,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema50,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1961,7 +2181,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema47.properties.label.type,parentSchema:schema47.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema50.properties.label.type,parentSchema:schema50.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1975,7 +2195,7 @@ if(data.factors !== undefined){
 let data2 = data.factors;
 if(Array.isArray(data2)){
 if(data2.length < 1){
-const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema47.properties.factors,data:data2};
+const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema50.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1989,7 +2209,7 @@ for(let i0=0; i0<len0; i0++){
 let data3 = data2[i0];
 if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
 if(data3.case === undefined){
-const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema47.properties.factors.items.required,parentSchema:schema47.properties.factors.items,data:data3};
+const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema50.properties.factors.items.required,parentSchema:schema50.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1999,7 +2219,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data3.factor === undefined){
-const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema47.properties.factors.items.required,parentSchema:schema47.properties.factors.items,data:data3};
+const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema50.properties.factors.items.required,parentSchema:schema50.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2010,7 +2230,7 @@ errors++;
 }
 for(const key1 in data3){
 if(!((key1 === "case") || (key1 === "factor"))){
-const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema47.properties.factors.items,data:data3};
+const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2048,7 +2268,7 @@ errors++;
 if(data3.factor !== undefined){
 let data5 = data3.factor;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema47.properties.factors.items.properties.factor.type,parentSchema:schema47.properties.factors.items.properties.factor,data:data5};
+const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema50.properties.factors.items.properties.factor.type,parentSchema:schema50.properties.factors.items.properties.factor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2060,7 +2280,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema47.properties.factors.items.type,parentSchema:schema47.properties.factors.items,data:data3};
+const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.factors.items.type,parentSchema:schema50.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2072,7 +2292,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema47.properties.factors.type,parentSchema:schema47.properties.factors,data:data2};
+const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.factors.type,parentSchema:schema50.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2084,7 +2304,7 @@ errors++;
 }
 }
 else {
-const err15 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema47.type,parentSchema:schema47,data};
+const err15 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.type,parentSchema:schema50,data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -2093,18 +2313,18 @@ vErrors.push(err15);
 }
 errors++;
 }
-validate36.errors = vErrors;
+validate41.errors = vErrors;
 return errors === 0;
 }
 
-const schema50 = {"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}};
-const schema52 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
+const schema53 = {"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}};
+const schema55 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
 
-function validate40(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate45(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(!(data && typeof data == "object" && !Array.isArray(data))){
-const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.type,parentSchema:schema52,data};
+const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.type,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2119,7 +2339,7 @@ let passing0 = null;
 const _errs2 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.fractionOfSpan === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema52.oneOf[0].required,parentSchema:schema52.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema55.oneOf[0].required,parentSchema:schema55.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2130,7 +2350,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(key0 === "fractionOfSpan")){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema52.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema55.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2167,7 +2387,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.oneOf[0].type,parentSchema:schema52.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.oneOf[0].type,parentSchema:schema55.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2184,7 +2404,7 @@ passing0 = 0;
 const _errs9 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.absolute === undefined){
-const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema52.oneOf[1].required,parentSchema:schema52.oneOf[1],data};
+const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema55.oneOf[1].required,parentSchema:schema55.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2195,7 +2415,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(key1 === "absolute")){
-const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema52.oneOf[1],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema55.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2232,7 +2452,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.oneOf[1].type,parentSchema:schema52.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.oneOf[1].type,parentSchema:schema55.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2253,7 +2473,7 @@ passing0 = 1;
 }
 }
 if(!valid0){
-const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema52.oneOf,parentSchema:schema52,data};
+const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema55.oneOf,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2273,18 +2493,18 @@ vErrors = null;
 }
 }
 }
-validate40.errors = vErrors;
+validate45.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate38(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate43(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((((((key0 === "resistanceFactor") || (key0 === "noSlackGroups")) || (key0 === "sagLimits")) || (key0 === "displacementLimits")) || (key0 === "tiltLimits")) || (key0 === "upliftNodes"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema50,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema53,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2298,7 +2518,7 @@ if(data.resistanceFactor !== undefined){
 let data0 = data.resistanceFactor;
 if((typeof data0 == "number") && (isFinite(data0))){
 if(data0 > 1 || isNaN(data0)){
-const err1 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema50.properties.resistanceFactor,data:data0};
+const err1 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema53.properties.resistanceFactor,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2308,7 +2528,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data0 <= 0 || isNaN(data0)){
-const err2 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema50.properties.resistanceFactor,data:data0};
+const err2 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema53.properties.resistanceFactor,data:data0};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2319,7 +2539,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema50.properties.resistanceFactor.type,parentSchema:schema50.properties.resistanceFactor,data:data0};
+const err3 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema53.properties.resistanceFactor.type,parentSchema:schema53.properties.resistanceFactor,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2343,7 +2563,7 @@ for(let i0=0; i0<len0; i0++){
 let data3 = data2[i0];
 if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
 if(data3.group === undefined){
-const err4 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema50.properties.sagLimits.items.required,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err4 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema53.properties.sagLimits.items.required,parentSchema:schema53.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2353,7 +2573,7 @@ vErrors.push(err4);
 errors++;
 }
 if(data3.limit === undefined){
-const err5 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema50.properties.sagLimits.items.required,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err5 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema53.properties.sagLimits.items.required,parentSchema:schema53.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2364,7 +2584,7 @@ errors++;
 }
 for(const key1 in data3){
 if(!((key1 === "group") || (key1 === "limit"))){
-const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema53.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2400,14 +2620,14 @@ errors++;
 }
 }
 if(data3.limit !== undefined){
-if(!(validate40(data3.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data3,parentDataProperty:"limit",rootData}))){
-vErrors = vErrors === null ? validate40.errors : vErrors.concat(validate40.errors);
+if(!(validate45(data3.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data3,parentDataProperty:"limit",rootData}))){
+vErrors = vErrors === null ? validate45.errors : vErrors.concat(validate45.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err9 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.sagLimits.items.type,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err9 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema53.properties.sagLimits.items.type,parentSchema:schema53.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2419,7 +2639,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.sagLimits.type,parentSchema:schema50.properties.sagLimits,data:data2};
+const err10 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema53.properties.sagLimits.type,parentSchema:schema53.properties.sagLimits,data:data2};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2437,7 +2657,7 @@ for(let i1=0; i1<len1; i1++){
 let data7 = data6[i1];
 if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 if(data7.node === undefined){
-const err11 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema50.properties.displacementLimits.items.required,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err11 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema53.properties.displacementLimits.items.required,parentSchema:schema53.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2447,7 +2667,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data7.limit === undefined){
-const err12 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema50.properties.displacementLimits.items.required,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err12 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema53.properties.displacementLimits.items.required,parentSchema:schema53.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2458,7 +2678,7 @@ errors++;
 }
 for(const key2 in data7){
 if(!((key2 === "node") || (key2 === "limit"))){
-const err13 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err13 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema53.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2520,7 +2740,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.displacementLimits.items.type,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err18 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema53.properties.displacementLimits.items.type,parentSchema:schema53.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -2532,7 +2752,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.displacementLimits.type,parentSchema:schema50.properties.displacementLimits,data:data6};
+const err19 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema53.properties.displacementLimits.type,parentSchema:schema53.properties.displacementLimits,data:data6};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -2550,7 +2770,7 @@ for(let i2=0; i2<len2; i2++){
 let data11 = data10[i2];
 if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
 if(data11.base === undefined){
-const err20 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema50.properties.tiltLimits.items.required,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err20 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema53.properties.tiltLimits.items.required,parentSchema:schema53.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -2560,7 +2780,7 @@ vErrors.push(err20);
 errors++;
 }
 if(data11.top === undefined){
-const err21 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema50.properties.tiltLimits.items.required,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err21 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema53.properties.tiltLimits.items.required,parentSchema:schema53.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -2570,7 +2790,7 @@ vErrors.push(err21);
 errors++;
 }
 if(data11.limit === undefined){
-const err22 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema50.properties.tiltLimits.items.required,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err22 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema53.properties.tiltLimits.items.required,parentSchema:schema53.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -2581,7 +2801,7 @@ errors++;
 }
 for(const key3 in data11){
 if(!(((key3 === "base") || (key3 === "top")) || (key3 === "limit"))){
-const err23 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err23 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema53.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -2668,7 +2888,7 @@ errors++;
 }
 }
 else {
-const err30 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.tiltLimits.items.type,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err30 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema53.properties.tiltLimits.items.type,parentSchema:schema53.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -2680,7 +2900,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.tiltLimits.type,parentSchema:schema50.properties.tiltLimits,data:data10};
+const err31 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema53.properties.tiltLimits.type,parentSchema:schema53.properties.tiltLimits,data:data10};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -2698,7 +2918,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err32 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.type,parentSchema:schema50,data};
+const err32 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema53.type,parentSchema:schema53,data};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -2707,19 +2927,19 @@ vErrors.push(err32);
 }
 errors++;
 }
-validate38.errors = vErrors;
+validate43.errors = vErrors;
 return errors === 0;
 }
 
-const schema60 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
-const schema62 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
+const schema63 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
+const schema65 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
 
-function validate45(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate50(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.required,parentSchema:schema62,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema65.required,parentSchema:schema65,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2733,7 +2953,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "sag"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema65.oneOf[0].required,parentSchema:schema65.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2743,7 +2963,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.group === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema65.oneOf[0].required,parentSchema:schema65.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2753,7 +2973,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.case === undefined){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema65.oneOf[0].required,parentSchema:schema65.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2763,7 +2983,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.limit === undefined){
-const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema65.oneOf[0].required,parentSchema:schema65.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2774,7 +2994,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "kind") || (key0 === "group")) || (key0 === "case")) || (key0 === "limit"))){
-const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema65.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2787,7 +3007,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("sag" !== data0){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema62.oneOf[0].properties.kind,data:data0};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema65.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2848,14 +3068,14 @@ errors++;
 }
 }
 if(data.limit !== undefined){
-if(!(validate40(data.limit, {instancePath:instancePath+"/limit",parentData:data,parentDataProperty:"limit",rootData}))){
-vErrors = vErrors === null ? validate40.errors : vErrors.concat(validate40.errors);
+if(!(validate45(data.limit, {instancePath:instancePath+"/limit",parentData:data,parentDataProperty:"limit",rootData}))){
+vErrors = vErrors === null ? validate45.errors : vErrors.concat(validate45.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[0].type,parentSchema:schema62.oneOf[0],data};
+const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema65.oneOf[0].type,parentSchema:schema65.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2868,7 +3088,7 @@ errors++;
 else if(tag0 === "tensionShare"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[1].required,parentSchema:schema62.oneOf[1],data};
+const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema65.oneOf[1].required,parentSchema:schema65.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2878,7 +3098,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data.group === undefined){
-const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema62.oneOf[1].required,parentSchema:schema62.oneOf[1],data};
+const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema65.oneOf[1].required,parentSchema:schema65.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2888,7 +3108,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data.share === undefined){
-const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema62.oneOf[1].required,parentSchema:schema62.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema65.oneOf[1].required,parentSchema:schema65.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2899,7 +3119,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(((key1 === "kind") || (key1 === "group")) || (key1 === "share"))){
-const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[1],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema65.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -2912,7 +3132,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("tensionShare" !== data4){
-const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema62.oneOf[1].properties.kind,data:data4};
+const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema65.oneOf[1].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -2974,7 +3194,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[1].type,parentSchema:schema62.oneOf[1],data};
+const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema65.oneOf[1].type,parentSchema:schema65.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -2987,7 +3207,7 @@ errors++;
 else if(tag0 === "noSlack"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[2].required,parentSchema:schema62.oneOf[2],data};
+const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema65.oneOf[2].required,parentSchema:schema65.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -2997,7 +3217,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data.group === undefined){
-const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema62.oneOf[2].required,parentSchema:schema62.oneOf[2],data};
+const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema65.oneOf[2].required,parentSchema:schema65.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -3007,7 +3227,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data.case === undefined){
-const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[2].required,parentSchema:schema62.oneOf[2],data};
+const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema65.oneOf[2].required,parentSchema:schema65.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -3018,7 +3238,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(((key2 === "kind") || (key2 === "group")) || (key2 === "case"))){
-const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[2],data};
+const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema65.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -3031,7 +3251,7 @@ errors++;
 if(data.kind !== undefined){
 let data7 = data.kind;
 if("noSlack" !== data7){
-const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema62.oneOf[2].properties.kind,data:data7};
+const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema65.oneOf[2].properties.kind,data:data7};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -3093,7 +3313,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[2].type,parentSchema:schema62.oneOf[2],data};
+const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema65.oneOf[2].type,parentSchema:schema65.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -3106,7 +3326,7 @@ errors++;
 else if(tag0 === "plumb"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema65.oneOf[3].required,parentSchema:schema65.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -3116,7 +3336,7 @@ vErrors.push(err32);
 errors++;
 }
 if(data.base === undefined){
-const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema65.oneOf[3].required,parentSchema:schema65.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -3126,7 +3346,7 @@ vErrors.push(err33);
 errors++;
 }
 if(data.top === undefined){
-const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema65.oneOf[3].required,parentSchema:schema65.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -3136,7 +3356,7 @@ vErrors.push(err34);
 errors++;
 }
 if(data.case === undefined){
-const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema65.oneOf[3].required,parentSchema:schema65.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -3146,7 +3366,7 @@ vErrors.push(err35);
 errors++;
 }
 if(data.tolerance === undefined){
-const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema65.oneOf[3].required,parentSchema:schema65.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -3157,7 +3377,7 @@ errors++;
 }
 for(const key3 in data){
 if(!(((((key3 === "kind") || (key3 === "base")) || (key3 === "top")) || (key3 === "case")) || (key3 === "tolerance"))){
-const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[3],data};
+const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema65.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -3170,7 +3390,7 @@ errors++;
 if(data.kind !== undefined){
 let data10 = data.kind;
 if("plumb" !== data10){
-const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema62.oneOf[3].properties.kind,data:data10};
+const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema65.oneOf[3].properties.kind,data:data10};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -3282,7 +3502,7 @@ errors++;
 }
 }
 else {
-const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[3].type,parentSchema:schema62.oneOf[3],data};
+const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema65.oneOf[3].type,parentSchema:schema65.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -3295,7 +3515,7 @@ errors++;
 else if(tag0 === "reaction"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema65.oneOf[4].required,parentSchema:schema65.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -3305,7 +3525,7 @@ vErrors.push(err48);
 errors++;
 }
 if(data.node === undefined){
-const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema65.oneOf[4].required,parentSchema:schema65.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -3315,7 +3535,7 @@ vErrors.push(err49);
 errors++;
 }
 if(data.case === undefined){
-const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema65.oneOf[4].required,parentSchema:schema65.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -3325,7 +3545,7 @@ vErrors.push(err50);
 errors++;
 }
 if(data.limit === undefined){
-const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema65.oneOf[4].required,parentSchema:schema65.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -3336,7 +3556,7 @@ errors++;
 }
 for(const key4 in data){
 if(!((((key4 === "kind") || (key4 === "node")) || (key4 === "case")) || (key4 === "limit"))){
-const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[4],data};
+const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema65.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -3349,7 +3569,7 @@ errors++;
 if(data.kind !== undefined){
 let data15 = data.kind;
 if("reaction" !== data15){
-const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema62.oneOf[4].properties.kind,data:data15};
+const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema65.oneOf[4].properties.kind,data:data15};
 if(vErrors === null){
 vErrors = [err53];
 }
@@ -3412,7 +3632,7 @@ errors++;
 if(data.limit !== undefined){
 let data18 = data.limit;
 if(!((typeof data18 == "number") && (isFinite(data18)))){
-const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.oneOf[4].properties.limit.type,parentSchema:schema62.oneOf[4].properties.limit,data:data18};
+const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.oneOf[4].properties.limit.type,parentSchema:schema65.oneOf[4].properties.limit,data:data18};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -3424,7 +3644,7 @@ errors++;
 }
 }
 else {
-const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[4].type,parentSchema:schema62.oneOf[4],data};
+const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema65.oneOf[4].type,parentSchema:schema65.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -3435,7 +3655,7 @@ errors++;
 }
 }
 else {
-const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema62.discriminator,parentSchema:schema62,data};
+const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema65.discriminator,parentSchema:schema65,data};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -3446,7 +3666,7 @@ errors++;
 }
 }
 else {
-const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema62.discriminator,parentSchema:schema62,data};
+const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema65.discriminator,parentSchema:schema65,data};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -3457,7 +3677,7 @@ errors++;
 }
 }
 else {
-const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.type,parentSchema:schema62,data};
+const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema65.type,parentSchema:schema65,data};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -3466,17 +3686,17 @@ vErrors.push(err62);
 }
 errors++;
 }
-validate45.errors = vErrors;
+validate50.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate44(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate49(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.variables === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema60.required,parentSchema:schema60,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema63.required,parentSchema:schema63,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3486,7 +3706,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.targets === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema60.required,parentSchema:schema60,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema63.required,parentSchema:schema63,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3497,7 +3717,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "variables") || (key0 === "targets")) || (key0 === "lastRun"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema60,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema63,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3515,7 +3735,7 @@ for(let i0=0; i0<len0; i0++){
 let data1 = data0[i0];
 if(data1 && typeof data1 == "object" && !Array.isArray(data1)){
 if(data1.group === undefined){
-const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema60.properties.variables.items.required,parentSchema:schema60.properties.variables.items,data:data1};
+const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema63.properties.variables.items.required,parentSchema:schema63.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3525,7 +3745,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data1.by === undefined){
-const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema60.properties.variables.items.required,parentSchema:schema60.properties.variables.items,data:data1};
+const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema63.properties.variables.items.required,parentSchema:schema63.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3536,7 +3756,7 @@ errors++;
 }
 for(const key1 in data1){
 if(!((((key1 === "group") || (key1 === "by")) || (key1 === "min")) || (key1 === "max"))){
-const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema60.properties.variables.items,data:data1};
+const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema63.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3574,7 +3794,7 @@ errors++;
 if(data1.by !== undefined){
 let data3 = data1.by;
 if(!((data3 === "pretension") || (data3 === "unstressedLength"))){
-const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema60.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema60.properties.variables.items.properties.by.enum,parentSchema:schema60.properties.variables.items.properties.by,data:data3};
+const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema63.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema63.properties.variables.items.properties.by.enum,parentSchema:schema63.properties.variables.items.properties.by,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3587,7 +3807,7 @@ errors++;
 if(data1.min !== undefined){
 let data4 = data1.min;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema60.properties.variables.items.properties.min.type,parentSchema:schema60.properties.variables.items.properties.min,data:data4};
+const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema63.properties.variables.items.properties.min.type,parentSchema:schema63.properties.variables.items.properties.min,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3600,7 +3820,7 @@ errors++;
 if(data1.max !== undefined){
 let data5 = data1.max;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema60.properties.variables.items.properties.max.type,parentSchema:schema60.properties.variables.items.properties.max,data:data5};
+const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema63.properties.variables.items.properties.max.type,parentSchema:schema63.properties.variables.items.properties.max,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3612,7 +3832,7 @@ errors++;
 }
 }
 else {
-const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema60.properties.variables.items.type,parentSchema:schema60.properties.variables.items,data:data1};
+const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema63.properties.variables.items.type,parentSchema:schema63.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3624,7 +3844,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema60.properties.variables.type,parentSchema:schema60.properties.variables,data:data0};
+const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema63.properties.variables.type,parentSchema:schema63.properties.variables,data:data0};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -3639,14 +3859,14 @@ let data6 = data.targets;
 if(Array.isArray(data6)){
 const len1 = data6.length;
 for(let i1=0; i1<len1; i1++){
-if(!(validate45(data6[i1], {instancePath:instancePath+"/targets/" + i1,parentData:data6,parentDataProperty:i1,rootData}))){
-vErrors = vErrors === null ? validate45.errors : vErrors.concat(validate45.errors);
+if(!(validate50(data6[i1], {instancePath:instancePath+"/targets/" + i1,parentData:data6,parentDataProperty:i1,rootData}))){
+vErrors = vErrors === null ? validate50.errors : vErrors.concat(validate50.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema60.properties.targets.type,parentSchema:schema60.properties.targets,data:data6};
+const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema63.properties.targets.type,parentSchema:schema63.properties.targets,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -3660,7 +3880,7 @@ if(data.lastRun !== undefined){
 let data8 = data.lastRun;
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 if(data8.date === undefined){
-const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema60.properties.lastRun.required,parentSchema:schema60.properties.lastRun,data:data8};
+const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema63.properties.lastRun.required,parentSchema:schema63.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -3670,7 +3890,7 @@ vErrors.push(err14);
 errors++;
 }
 if(data8.summary === undefined){
-const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema60.properties.lastRun.required,parentSchema:schema60.properties.lastRun,data:data8};
+const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema63.properties.lastRun.required,parentSchema:schema63.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3681,7 +3901,7 @@ errors++;
 }
 for(const key2 in data8){
 if(!((key2 === "date") || (key2 === "summary"))){
-const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema60.properties.lastRun,data:data8};
+const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema63.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -3694,7 +3914,7 @@ errors++;
 if(data8.date !== undefined){
 let data9 = data8.date;
 if(typeof data9 !== "string"){
-const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema60.properties.lastRun.properties.date.type,parentSchema:schema60.properties.lastRun.properties.date,data:data9};
+const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema63.properties.lastRun.properties.date.type,parentSchema:schema63.properties.lastRun.properties.date,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -3707,7 +3927,7 @@ errors++;
 if(data8.summary !== undefined){
 let data10 = data8.summary;
 if(typeof data10 !== "string"){
-const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema60.properties.lastRun.properties.summary.type,parentSchema:schema60.properties.lastRun.properties.summary,data:data10};
+const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema63.properties.lastRun.properties.summary.type,parentSchema:schema63.properties.lastRun.properties.summary,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -3719,7 +3939,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema60.properties.lastRun.type,parentSchema:schema60.properties.lastRun,data:data8};
+const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema63.properties.lastRun.type,parentSchema:schema63.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -3731,7 +3951,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema60.type,parentSchema:schema60,data};
+const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema63.type,parentSchema:schema63,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -3740,19 +3960,19 @@ vErrors.push(err20);
 }
 errors++;
 }
-validate44.errors = vErrors;
+validate49.errors = vErrors;
 return errors === 0;
 }
 
-const schema75 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
+const schema78 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
 
-function validate49(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate54(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!(key0 === "temperatures")){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema75,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema78,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3793,7 +4013,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema75.properties.temperatures.type,parentSchema:schema75.properties.temperatures,data:data0};
+const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema78.properties.temperatures.type,parentSchema:schema78.properties.temperatures,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3805,7 +4025,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema75.type,parentSchema:schema75,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema78.type,parentSchema:schema78,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3814,18 +4034,18 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate49.errors = vErrors;
+validate54.errors = vErrors;
 return errors === 0;
 }
 
-const schema77 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
+const schema80 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
 
-function validate51(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate56(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema77.required,parentSchema:schema77,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema80.required,parentSchema:schema80,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3835,7 +4055,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema77.required,parentSchema:schema77,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema80.required,parentSchema:schema80,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3845,7 +4065,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.params === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema77.required,parentSchema:schema77,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema80.required,parentSchema:schema80,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3856,7 +4076,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "kind")) || (key0 === "params"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema77,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema80,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3894,7 +4114,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "guyedMast") || (data1 === "saddleNet")) || (data1 === "radialNet"))){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema77.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema77.properties.kind.enum,parentSchema:schema77.properties.kind,data:data1};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema80.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema80.properties.kind.enum,parentSchema:schema80.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3907,7 +4127,7 @@ errors++;
 if(data.params !== undefined){
 let data2 = data.params;
 if(!(data2 && typeof data2 == "object" && !Array.isArray(data2))){
-const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema77.properties.params.type,parentSchema:schema77.properties.params,data:data2};
+const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.params.type,parentSchema:schema80.properties.params,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3919,7 +4139,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema77.type,parentSchema:schema77,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.type,parentSchema:schema80,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3928,19 +4148,19 @@ vErrors.push(err8);
 }
 errors++;
 }
-validate51.errors = vErrors;
+validate56.errors = vErrors;
 return errors === 0;
 }
 
-const schema79 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
+const schema82 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
 
-function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate58(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((key0 === "units") || (key0 === "deformationScale"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema79,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema82,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3953,7 +4173,7 @@ errors++;
 if(data.units !== undefined){
 let data0 = data.units;
 if(!((data0 === "SI") || (data0 === "US"))){
-const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema79.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema79.properties.units.enum,parentSchema:schema79.properties.units,data:data0};
+const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema82.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema82.properties.units.enum,parentSchema:schema82.properties.units,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3990,7 +4210,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema79.type,parentSchema:schema79,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.type,parentSchema:schema82,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3999,7 +4219,641 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate53.errors = vErrors;
+validate58.errors = vErrors;
+return errors === 0;
+}
+
+const schema84 = {"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}};
+
+function validate60(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema84.required,parentSchema:schema84,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.nodes === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema84.required,parentSchema:schema84,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((((key0 === "id") || (key0 === "nodes")) || (key0 === "region")) || (key0 === "label"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema84,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err3 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+else {
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.nodes !== undefined){
+let data1 = data.nodes;
+if(Array.isArray(data1)){
+if(data1.length < 3){
+const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema84.properties.nodes,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+const len0 = data1.length;
+for(let i0=0; i0<len0; i0++){
+let data2 = data1[i0];
+if(typeof data2 === "string"){
+if(!pattern0.test(data2)){
+const err6 = {instancePath:instancePath+"/nodes/" + i0,schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+else {
+const err7 = {instancePath:instancePath+"/nodes/" + i0,schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+}
+else {
+const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema84.properties.nodes.type,parentSchema:schema84.properties.nodes,data:data1};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.region !== undefined){
+let data3 = data.region;
+if(typeof data3 === "string"){
+if(!pattern0.test(data3)){
+const err9 = {instancePath:instancePath+"/region",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data3};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+else {
+const err10 = {instancePath:instancePath+"/region",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data3};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data4 = data.label;
+if(typeof data4 !== "string"){
+const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema84.properties.label.type,parentSchema:schema84.properties.label,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+}
+}
+else {
+const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.type,parentSchema:schema84,data};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+validate60.errors = vErrors;
+return errors === 0;
+}
+
+const schema88 = {"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}};
+
+function validate62(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema88.required,parentSchema:schema88,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.meanCase === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema88.required,parentSchema:schema88,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+if(data.patchFactor === undefined){
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema88.required,parentSchema:schema88,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(((((key0 === "id") || (key0 === "label")) || (key0 === "meanCase")) || (key0 === "patchFactor")) || (key0 === "patches"))){
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema88,data};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+else {
+const err5 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema88.properties.label.type,parentSchema:schema88.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+if(data.meanCase !== undefined){
+let data2 = data.meanCase;
+if(typeof data2 === "string"){
+if(!pattern0.test(data2)){
+const err7 = {instancePath:instancePath+"/meanCase",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+else {
+const err8 = {instancePath:instancePath+"/meanCase",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.patchFactor !== undefined){
+let data3 = data.patchFactor;
+if((typeof data3 == "number") && (isFinite(data3))){
+if(data3 <= 1 || isNaN(data3)){
+const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema88.properties.patchFactor,data:data3};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+else {
+const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema88.properties.patchFactor.type,parentSchema:schema88.properties.patchFactor,data:data3};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+}
+if(data.patches !== undefined){
+let data4 = data.patches;
+if(Array.isArray(data4)){
+if(data4.length < 1){
+const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema88.properties.patches,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+const len0 = data4.length;
+for(let i0=0; i0<len0; i0++){
+let data5 = data4[i0];
+if(data5 && typeof data5 == "object" && !Array.isArray(data5)){
+if(data5.from === undefined){
+const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema88.properties.patches.items.required,parentSchema:schema88.properties.patches.items,data:data5};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+if(data5.to === undefined){
+const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema88.properties.patches.items.required,parentSchema:schema88.properties.patches.items,data:data5};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+for(const key1 in data5){
+if(!((key1 === "from") || (key1 === "to"))){
+const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema88.properties.patches.items,data:data5};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+if(data5.from !== undefined){
+let data6 = data5.from;
+if(!((typeof data6 == "number") && (isFinite(data6)))){
+const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema88.properties.patches.items.properties.from.type,parentSchema:schema88.properties.patches.items.properties.from,data:data6};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+if(data5.to !== undefined){
+let data7 = data5.to;
+if(!((typeof data7 == "number") && (isFinite(data7)))){
+const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema88.properties.patches.items.properties.to.type,parentSchema:schema88.properties.patches.items.properties.to,data:data7};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+}
+}
+else {
+const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema88.properties.patches.items.type,parentSchema:schema88.properties.patches.items,data:data5};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+}
+}
+else {
+const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema88.properties.patches.type,parentSchema:schema88.properties.patches,data:data4};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+}
+}
+else {
+const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema88.type,parentSchema:schema88,data};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+validate62.errors = vErrors;
+return errors === 0;
+}
+
+const schema91 = {"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
+
+function validate64(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema91.required,parentSchema:schema91,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.fromCase === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema91.required,parentSchema:schema91,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "fromCase")) || (key0 === "members")) || (key0 === "group")) || (key0 === "dynamicFactor")) || (key0 === "dampingRatio"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema91,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err3 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+else {
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema91.properties.label.type,parentSchema:schema91.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.fromCase !== undefined){
+let data2 = data.fromCase;
+if(typeof data2 === "string"){
+if(!pattern0.test(data2)){
+const err6 = {instancePath:instancePath+"/fromCase",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+else {
+const err7 = {instancePath:instancePath+"/fromCase",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+if(data.members !== undefined){
+if(!(validate18(data.members, {instancePath:instancePath+"/members",parentData:data,parentDataProperty:"members",rootData}))){
+vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
+errors = vErrors.length;
+}
+}
+if(data.group !== undefined){
+let data4 = data.group;
+if(typeof data4 === "string"){
+if(!pattern0.test(data4)){
+const err8 = {instancePath:instancePath+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data4};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+else {
+const err9 = {instancePath:instancePath+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data4};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+if(data.dynamicFactor !== undefined){
+let data5 = data.dynamicFactor;
+if((typeof data5 == "number") && (isFinite(data5))){
+if(data5 > 2 || isNaN(data5)){
+const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema91.properties.dynamicFactor,data:data5};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+if(data5 < 1 || isNaN(data5)){
+const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema91.properties.dynamicFactor,data:data5};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+}
+else {
+const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema91.properties.dynamicFactor.type,parentSchema:schema91.properties.dynamicFactor,data:data5};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+if(data.dampingRatio !== undefined){
+let data6 = data.dampingRatio;
+if((typeof data6 == "number") && (isFinite(data6))){
+if(data6 < 0 || isNaN(data6)){
+const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema91.properties.dampingRatio,data:data6};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+if(data6 >= 1 || isNaN(data6)){
+const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema91.properties.dampingRatio,data:data6};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+else {
+const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema91.properties.dampingRatio.type,parentSchema:schema91.properties.dampingRatio,data:data6};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+}
+else {
+const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema91.type,parentSchema:schema91,data};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+validate64.errors = vErrors;
 return errors === 0;
 }
 
@@ -4236,8 +5090,8 @@ let data11 = data.groups;
 if(Array.isArray(data11)){
 const len4 = data11.length;
 for(let i4=0; i4<len4; i4++){
-if(!(validate33(data11[i4], {instancePath:instancePath+"/groups/" + i4,parentData:data11,parentDataProperty:i4,rootData}))){
-vErrors = vErrors === null ? validate33.errors : vErrors.concat(validate33.errors);
+if(!(validate38(data11[i4], {instancePath:instancePath+"/groups/" + i4,parentData:data11,parentDataProperty:i4,rootData}))){
+vErrors = vErrors === null ? validate38.errors : vErrors.concat(validate38.errors);
 errors = vErrors.length;
 }
 }
@@ -4258,8 +5112,8 @@ let data13 = data.combinations;
 if(Array.isArray(data13)){
 const len5 = data13.length;
 for(let i5=0; i5<len5; i5++){
-if(!(validate36(data13[i5], {instancePath:instancePath+"/combinations/" + i5,parentData:data13,parentDataProperty:i5,rootData}))){
-vErrors = vErrors === null ? validate36.errors : vErrors.concat(validate36.errors);
+if(!(validate41(data13[i5], {instancePath:instancePath+"/combinations/" + i5,parentData:data13,parentDataProperty:i5,rootData}))){
+vErrors = vErrors === null ? validate41.errors : vErrors.concat(validate41.errors);
 errors = vErrors.length;
 }
 }
@@ -4276,20 +5130,20 @@ errors++;
 }
 }
 if(data.checks !== undefined){
-if(!(validate38(data.checks, {instancePath:instancePath+"/checks",parentData:data,parentDataProperty:"checks",rootData}))){
-vErrors = vErrors === null ? validate38.errors : vErrors.concat(validate38.errors);
+if(!(validate43(data.checks, {instancePath:instancePath+"/checks",parentData:data,parentDataProperty:"checks",rootData}))){
+vErrors = vErrors === null ? validate43.errors : vErrors.concat(validate43.errors);
 errors = vErrors.length;
 }
 }
 if(data.tuning !== undefined){
-if(!(validate44(data.tuning, {instancePath:instancePath+"/tuning",parentData:data,parentDataProperty:"tuning",rootData}))){
-vErrors = vErrors === null ? validate44.errors : vErrors.concat(validate44.errors);
+if(!(validate49(data.tuning, {instancePath:instancePath+"/tuning",parentData:data,parentDataProperty:"tuning",rootData}))){
+vErrors = vErrors === null ? validate49.errors : vErrors.concat(validate49.errors);
 errors = vErrors.length;
 }
 }
 if(data.installation !== undefined){
-if(!(validate49(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
-vErrors = vErrors === null ? validate49.errors : vErrors.concat(validate49.errors);
+if(!(validate54(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
+vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
 errors = vErrors.length;
 }
 }
@@ -4298,8 +5152,8 @@ let data18 = data.generators;
 if(Array.isArray(data18)){
 const len6 = data18.length;
 for(let i6=0; i6<len6; i6++){
-if(!(validate51(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
-vErrors = vErrors === null ? validate51.errors : vErrors.concat(validate51.errors);
+if(!(validate56(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
+vErrors = vErrors === null ? validate56.errors : vErrors.concat(validate56.errors);
 errors = vErrors.length;
 }
 }
@@ -4316,19 +5170,85 @@ errors++;
 }
 }
 if(data.display !== undefined){
-if(!(validate53(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
-vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+if(!(validate58(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
+vErrors = vErrors === null ? validate58.errors : vErrors.concat(validate58.errors);
+errors = vErrors.length;
+}
+}
+if(data.panels !== undefined){
+let data21 = data.panels;
+if(Array.isArray(data21)){
+const len7 = data21.length;
+for(let i7=0; i7<len7; i7++){
+if(!(validate60(data21[i7], {instancePath:instancePath+"/panels/" + i7,parentData:data21,parentDataProperty:i7,rootData}))){
+vErrors = vErrors === null ? validate60.errors : vErrors.concat(validate60.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema11.type,parentSchema:schema11,data};
+const err19 = {instancePath:instancePath+"/panels",schemaPath:"#/properties/panels/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.panels.type,parentSchema:schema11.properties.panels,data:data21};
 if(vErrors === null){
 vErrors = [err19];
 }
 else {
 vErrors.push(err19);
+}
+errors++;
+}
+}
+if(data.patchWind !== undefined){
+let data23 = data.patchWind;
+if(Array.isArray(data23)){
+const len8 = data23.length;
+for(let i8=0; i8<len8; i8++){
+if(!(validate62(data23[i8], {instancePath:instancePath+"/patchWind/" + i8,parentData:data23,parentDataProperty:i8,rootData}))){
+vErrors = vErrors === null ? validate62.errors : vErrors.concat(validate62.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err20 = {instancePath:instancePath+"/patchWind",schemaPath:"#/properties/patchWind/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.patchWind.type,parentSchema:schema11.properties.patchWind,data:data23};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
+}
+errors++;
+}
+}
+if(data.memberLoss !== undefined){
+let data25 = data.memberLoss;
+if(Array.isArray(data25)){
+const len9 = data25.length;
+for(let i9=0; i9<len9; i9++){
+if(!(validate64(data25[i9], {instancePath:instancePath+"/memberLoss/" + i9,parentData:data25,parentDataProperty:i9,rootData}))){
+vErrors = vErrors === null ? validate64.errors : vErrors.concat(validate64.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err21 = {instancePath:instancePath+"/memberLoss",schemaPath:"#/properties/memberLoss/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.memberLoss.type,parentSchema:schema11.properties.memberLoss,data:data25};
+if(vErrors === null){
+vErrors = [err21];
+}
+else {
+vErrors.push(err21);
+}
+errors++;
+}
+}
+}
+else {
+const err22 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema11.type,parentSchema:schema11,data};
+if(vErrors === null){
+vErrors = [err22];
+}
+else {
+vErrors.push(err22);
 }
 errors++;
 }
