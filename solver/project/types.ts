@@ -14,6 +14,9 @@
 
 import type { ReportSpec, SiteMeasurementSetSpec, TensioningSequenceSpec } from './site-types.ts';
 import type { BeamReleases, NodeSprings, PrescribedDisplacement, NodalMoment } from './structure-types.ts';
+import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec } from './actions-types.ts';
+
+export type * from './actions-types.ts';
 
 export type Vec3 = [number, number, number];
 export type * from './structure-types.ts';
@@ -46,6 +49,12 @@ export interface ProjectFile {
   siteMeasurements?: SiteMeasurementSetSpec[];
   /** Calculation report: document number and revision block. */
   report?: ReportSpec;
+  /** Panels carrying area loads (solver/project/actions-types.ts). */
+  panels?: PanelSpec[];
+  /** Patch wind on guyed masts: a combination of results (actions-types.ts). */
+  patchWind?: PatchWindSpec[];
+  /** Member loss (guy rupture) accidental cases (actions-types.ts). */
+  memberLoss?: MemberLossSpec[];
 }
 
 export interface ProjectMeta {
@@ -188,6 +197,8 @@ export interface LoadCaseSpec {
   ice?: IceSpec;
   /** Prescribed support displacements in this case. */
   displacements?: PrescribedDisplacement[];
+  /** Area loads on panels (actions-types.ts). */
+  areaLoads?: AreaLoadSpec[];
 }
 
 export interface GroupSpec {

@@ -170,5 +170,7 @@ export function applyGenerated(project: ProjectFile, record: GeneratorRecord, pa
   if (tuning) out.tuning = tuning;
   out = dropGroupReferences(out, gone, notes);
   if (!out.groups?.length) delete out.groups;
+  const panels = [...(project.panels ?? []).filter((pa) => !ownedBy(rid, pa.id)), ...(parts.panels ?? [])];
+  if (panels.length > 0 || project.panels) out.panels = panels;
   return { project: out, notes, dangling };
 }
