@@ -28,3 +28,4 @@ export { SparseLDL, writeMatrixMarketSymmetric, writeMatrixMarketDenseVector } f
 export * from './tuning/index.ts';
 export * from './installation/index.ts';
 export * from './sequence/index.ts';
+export * from './asbuilt/index.ts';
