@@ -30,3 +30,4 @@ export * from './installation/index.ts';
 export * from './sequence/index.ts';
 export { estimateModelSize, checkModelBudget, DEFAULT_MODEL_BUDGET } from './model/model-budget.ts';
 export type { ModelBudget, ModelSizeEstimate, BudgetVerdict, BudgetItem, SizeDriver } from './model/model-budget.ts';
+export * from './asbuilt/index.ts';
