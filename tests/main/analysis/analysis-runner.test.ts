@@ -12,13 +12,13 @@ import { transferablesOf } from '../../../main/analysis/worker-messages.ts';
 import { largeGrid, sampleMast } from '../store/sample-project.ts';
 import type { CaseFields } from '../../../solver/index.ts';
 
-function runOnce(project: Parameters<AnalysisRunner['start']>[0], cancelAfterFirstProgress = false) {
+function runOnce(project: Parameters<AnalysisRunner['start']>[0], cancelAfterFirstProgress = false, cancelGraceMs = 3000) {
   const progress: AnalysisProgress[] = [];
   return new Promise<{ done: AnalysisDone; progress: AnalysisProgress[]; fields?: CaseFields[]; runId: string }>((resolve) => {
     let runId = '';
     const runner = new AnalysisRunner({
       progressIntervalMs: 0,
-      cancelGraceMs: 3000,
+      cancelGraceMs,
       onProgress: (p) => {
         progress.push(p);
         if (cancelAfterFirstProgress && progress.length === 1) runner.cancel(p.runId);
@@ -54,11 +54,13 @@ describe('AnalysisRunner', () => {
     const net = largeGrid(30, 'C');
     net.sections[0].massPerLength = 2;
     net.loadCases = Array.from({ length: 10 }, (_, i) => ({ id: `L${i}`, nodalLoads: [{ node: 'N15_15', force: [0, 0, -1000 * (i + 1)] as [number, number, number] }] }));
-    const t0 = Date.now();
-    const { done, progress } = await runOnce(net, true);
+    // The grace before terminate is far longer than the run: a 'cancelled' run that still
+    // carries a report was stopped by the flag (a terminated worker sends no report).
+    const { done, progress } = await runOnce(net, true, 600_000);
     expect(progress.length).toBeGreaterThanOrEqual(1);
     expect(done.status).toBe('cancelled');
-    expect(Date.now() - t0).toBeLessThan(2500); // below the 3 s terminate grace: the flag stopped it
+    expect(done.report).toBeDefined();
+    expect(done.report!.cases.some((c) => c.status === 'cancelled') || done.report!.cases.length < 10).toBe(true);
   });
 
   it('reports a failed analysis as failed with the message', async () => {
