@@ -99,6 +99,8 @@ export function solveEquilibrium(
   const saved = new Float64Array(n);
   const counters: Counters = { iterations: 0, factorizations: 0, residual: 0, negativePivots: 0, singularDof: -1, factorMs: 0 };
 
+  // Models with rotations try full Newton steps first and fall back on the line search.
+  const rotational = ws.model.dofs.count > ws.model.dofs.translationCount;
   if (start) {
     for (let d = 0; d < ws.model.dofs.translationCount; d++) u[d] = start[d] - ws.model.coords[d];
     const r = newtonAtLoad(ws, loads, fixedLoad, u, 1, options, control, tag, counters);
@@ -115,7 +117,11 @@ export function solveEquilibrium(
     const target = Math.min(1, lambda + increment);
     saved.set(u);
     const before = counters.iterations;
-    const r = newtonAtLoad(ws, loads, fixedLoad, u, target, options, control, tag, counters);
+    let r = newtonAtLoad(ws, loads, fixedLoad, u, target, options, control, tag, counters, !rotational);
+    if (rotational && (r === 'maxIterations' || r === 'diverged')) {
+      u.set(saved);
+      r = newtonAtLoad(ws, loads, fixedLoad, u, target, options, control, tag, counters, true);
+    }
     if (r === 'cancelled') return outcome('cancelled', u, counters, lambda, steps);
     if (r === 'converged') {
       lambda = target;
@@ -194,10 +200,15 @@ function evaluateResidual(
   return [Math.sqrt(r2), Math.sqrt(Math.max(e2, i2))];
 }
 
+/**
+ * Newton iterations at load factor λ. `search` = false takes full (step-limited) Newton steps:
+ * with beams, the energy along a Newton direction that rotates axially stiff members rises
+ * steeply (chord stretch), so a line search creeps where plain Newton converges quadratically.
+ */
 function newtonAtLoad(
   ws: Workspace, loads: CaseLoads, fixedLoad: Float64Array, u: Float64Array, lambda: number,
   options: NewtonOptions, control: SolveControl, tag: CaseTag,
-  counters: Counters,
+  counters: Counters, search = true,
 ): StepResult {
   const { step, residual, ldl, values } = ws;
   const maxNodalStep = options.maxStepFraction * ws.size;
@@ -240,7 +251,7 @@ function newtonAtLoad(
       const limit = i < nt ? maxNodalStep : MAX_ROTATION_STEP;
       if (s * scale > limit) scale = limit / s;
     }
-    const best = searchStep(ws, loads, fixedLoad, u, lambda, scale, norm);
+    const best = search ? searchStep(ws, loads, fixedLoad, u, lambda, scale, norm) : scale;
     if (best === 0) return 'diverged';
     for (let d = 0; d < u.length; d++) u[d] += best * step[d];
     [norm, ref] = evaluateResidual(ws, loads, fixedLoad, u, lambda, true);
