@@ -26,3 +26,4 @@ export { memberSag, describeDof } from './results/extract.ts';
 export { SparseLDL, writeMatrixMarketSymmetric, writeMatrixMarketDenseVector } from './linalg/index.ts';
 export * from './tuning/index.ts';
 export * from './installation/index.ts';
+export * from './modes/index.ts';

@@ -1,13 +1,14 @@
 /**
  * Load case / combination → CaseLoads on an AnalysisModel.
- * Nodal loads go to user nodes; self-weight, ice mass and temperature are carried as data and
- * applied by the analysis; wind becomes a follower load (solver/loads/wind.ts).
+ * Nodal loads go to user nodes, with the weight of added node masses when self-weight is on;
+ * member self-weight, ice mass and temperature are carried as data and applied by the analysis; wind becomes a follower load (solver/loads/wind.ts).
  */
 import type { CombinationSpec, LoadCaseSpec, ProjectFile } from '../project/types.ts';
 import type { AnalysisModel } from '../model/analysis-model.ts';
 import type { CaseLoads, FollowerLoad } from './case-loads.ts';
 import { createWindLoad } from './wind.ts';
 import { iceMassPerLength } from './ice.ts';
+import { addNodeMassWeight } from './node-mass.ts';
 
 export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spec: LoadCaseSpec): CaseLoads {
   const nodal = new Float64Array(3 * model.nodeCount);
@@ -17,6 +18,7 @@ export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spe
     if (i === undefined) throw new Error(`load case "${spec.id}": node "${load.node}" does not exist`);
     for (let q = 0; q < 3; q++) nodal[3 * i + q] += load.force[q];
   }
+  if (spec.selfWeight ?? true) addNodeMassWeight(model, project, 1, nodal);
   return {
     nodal,
     selfWeight: spec.selfWeight ?? true,

@@ -54,6 +54,8 @@ export interface NodeSpec {
   at: Vec3;
   /** Restrained translations: any of the letters x, y, z ("xyz" = pinned). Absent = free. */
   fixed?: string;
+  /** Added lumped mass at the node (equipment, antennas, fittings), kg: weighs with self-weight, vibrates in modes. */
+  mass?: number;
 }
 
 export interface SectionSpec {

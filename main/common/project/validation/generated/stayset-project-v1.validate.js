@@ -3,7 +3,7 @@
 "use strict";
 export const validate = validate10;
 export default validate10;
-const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 1","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":1,"x-message":"{field} must be 1"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z, each at most once"}}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}}}};
+const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 1","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":1,"x-message":"{field} must be 1"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z, each at most once"}},"mass":{"$ref":"#/definitions/nonNegative"}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}}}};
 const func2 = Object.prototype.hasOwnProperty;
 const schema12 = {"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}};
 const schema13 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}};
@@ -129,9 +129,10 @@ validate11.errors = vErrors;
 return errors === 0;
 }
 
-const schema14 = {"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z, each at most once"}}}};
+const schema14 = {"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z, each at most once"}},"mass":{"$ref":"#/definitions/nonNegative"}}};
 const schema15 = {"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}};
 const schema16 = {"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"};
+const schema17 = {"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}};
 const pattern0 = new RegExp("^\\S(.*\\S)?$", "u");
 const pattern1 = new RegExp("^(?!.*(.).*\\1)[xyz]{0,3}$", "u");
 
@@ -160,7 +161,7 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!(((key0 === "id") || (key0 === "at")) || (key0 === "fixed"))){
+if(!((((key0 === "id") || (key0 === "at")) || (key0 === "fixed")) || (key0 === "mass"))){
 const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema14,data};
 if(vErrors === null){
 vErrors = [err2];
@@ -270,9 +271,11 @@ vErrors.push(err10);
 errors++;
 }
 }
-}
-else {
-const err11 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema14.type,parentSchema:schema14,data};
+if(data.mass !== undefined){
+let data4 = data.mass;
+if((typeof data4 == "number") && (isFinite(data4))){
+if(data4 < 0 || isNaN(data4)){
+const err11 = {instancePath:instancePath+"/mass",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema17,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -281,20 +284,42 @@ vErrors.push(err11);
 }
 errors++;
 }
+}
+else {
+const err12 = {instancePath:instancePath+"/mass",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.type,parentSchema:schema17,data:data4};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+}
+else {
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema14.type,parentSchema:schema14,data};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
 validate13.errors = vErrors;
 return errors === 0;
 }
 
-const schema17 = {"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"}}};
-const schema19 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}};
-const schema21 = {"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}};
+const schema18 = {"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"}}};
+const schema20 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}};
 
 function validate15(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema17.required,parentSchema:schema17,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema18.required,parentSchema:schema18,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -304,7 +329,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.E === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "E"},message:"must have required property '"+"E"+"'",schema:schema17.required,parentSchema:schema17,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "E"},message:"must have required property '"+"E"+"'",schema:schema18.required,parentSchema:schema18,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -314,7 +339,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.area === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "area"},message:"must have required property '"+"area"+"'",schema:schema17.required,parentSchema:schema17,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "area"},message:"must have required property '"+"area"+"'",schema:schema18.required,parentSchema:schema18,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -324,8 +349,8 @@ vErrors.push(err2);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema17.properties, key0))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema17,data};
+if(!(func2.call(schema18.properties, key0))){
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema18,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -363,7 +388,7 @@ errors++;
 if(data.E !== undefined){
 let data1 = data.E;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err6 = {instancePath:instancePath+"/E",schemaPath:"#/properties/E/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.E.type,parentSchema:schema17.properties.E,data:data1};
+const err6 = {instancePath:instancePath+"/E",schemaPath:"#/properties/E/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.properties.E.type,parentSchema:schema18.properties.E,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -376,7 +401,7 @@ errors++;
 if(data.area !== undefined){
 let data2 = data.area;
 if(!((typeof data2 == "number") && (isFinite(data2)))){
-const err7 = {instancePath:instancePath+"/area",schemaPath:"#/properties/area/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.area.type,parentSchema:schema17.properties.area,data:data2};
+const err7 = {instancePath:instancePath+"/area",schemaPath:"#/properties/area/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.properties.area.type,parentSchema:schema18.properties.area,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -389,7 +414,7 @@ errors++;
 if(data.massPerLength !== undefined){
 let data3 = data.massPerLength;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err8 = {instancePath:instancePath+"/massPerLength",schemaPath:"#/properties/massPerLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.massPerLength.type,parentSchema:schema17.properties.massPerLength,data:data3};
+const err8 = {instancePath:instancePath+"/massPerLength",schemaPath:"#/properties/massPerLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.properties.massPerLength.type,parentSchema:schema18.properties.massPerLength,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -403,7 +428,7 @@ if(data.breakingLoad !== undefined){
 let data4 = data.breakingLoad;
 if((typeof data4 == "number") && (isFinite(data4))){
 if(data4 <= 0 || isNaN(data4)){
-const err9 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data4};
+const err9 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema20,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -414,7 +439,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data4};
+const err10 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema20.type,parentSchema:schema20,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -427,7 +452,7 @@ errors++;
 if(data.thermalExpansion !== undefined){
 let data5 = data.thermalExpansion;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err11 = {instancePath:instancePath+"/thermalExpansion",schemaPath:"#/properties/thermalExpansion/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.thermalExpansion.type,parentSchema:schema17.properties.thermalExpansion,data:data5};
+const err11 = {instancePath:instancePath+"/thermalExpansion",schemaPath:"#/properties/thermalExpansion/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.properties.thermalExpansion.type,parentSchema:schema18.properties.thermalExpansion,data:data5};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -441,7 +466,7 @@ if(data.diameter !== undefined){
 let data6 = data.diameter;
 if((typeof data6 == "number") && (isFinite(data6))){
 if(data6 <= 0 || isNaN(data6)){
-const err12 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data6};
+const err12 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema20,data:data6};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -452,7 +477,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data6};
+const err13 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema20.type,parentSchema:schema20,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -466,7 +491,7 @@ if(data.dragCoefficient !== undefined){
 let data7 = data.dragCoefficient;
 if((typeof data7 == "number") && (isFinite(data7))){
 if(data7 < 0 || isNaN(data7)){
-const err14 = {instancePath:instancePath+"/dragCoefficient",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data7};
+const err14 = {instancePath:instancePath+"/dragCoefficient",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema17,data:data7};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -477,7 +502,7 @@ errors++;
 }
 }
 else {
-const err15 = {instancePath:instancePath+"/dragCoefficient",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data7};
+const err15 = {instancePath:instancePath+"/dragCoefficient",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.type,parentSchema:schema17,data:data7};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -491,7 +516,7 @@ if(data.lattice !== undefined){
 let data8 = data.lattice;
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 if(data8.faceWidth === undefined){
-const err16 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "faceWidth"},message:"must have required property '"+"faceWidth"+"'",schema:schema17.properties.lattice.required,parentSchema:schema17.properties.lattice,data:data8};
+const err16 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "faceWidth"},message:"must have required property '"+"faceWidth"+"'",schema:schema18.properties.lattice.required,parentSchema:schema18.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -501,7 +526,7 @@ vErrors.push(err16);
 errors++;
 }
 if(data8.solidity === undefined){
-const err17 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "solidity"},message:"must have required property '"+"solidity"+"'",schema:schema17.properties.lattice.required,parentSchema:schema17.properties.lattice,data:data8};
+const err17 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "solidity"},message:"must have required property '"+"solidity"+"'",schema:schema18.properties.lattice.required,parentSchema:schema18.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -512,7 +537,7 @@ errors++;
 }
 for(const key1 in data8){
 if(!((((key1 === "faceWidth") || (key1 === "solidity")) || (key1 === "dragFactor")) || (key1 === "share"))){
-const err18 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema17.properties.lattice,data:data8};
+const err18 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema18.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -526,7 +551,7 @@ if(data8.faceWidth !== undefined){
 let data9 = data8.faceWidth;
 if((typeof data9 == "number") && (isFinite(data9))){
 if(data9 <= 0 || isNaN(data9)){
-const err19 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data9};
+const err19 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema20,data:data9};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -537,7 +562,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data9};
+const err20 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema20.type,parentSchema:schema20,data:data9};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -551,7 +576,7 @@ if(data8.solidity !== undefined){
 let data10 = data8.solidity;
 if((typeof data10 == "number") && (isFinite(data10))){
 if(data10 > 1 || isNaN(data10)){
-const err21 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema17.properties.lattice.properties.solidity,data:data10};
+const err21 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema18.properties.lattice.properties.solidity,data:data10};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -561,7 +586,7 @@ vErrors.push(err21);
 errors++;
 }
 if(data10 < 0 || isNaN(data10)){
-const err22 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema17.properties.lattice.properties.solidity,data:data10};
+const err22 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18.properties.lattice.properties.solidity,data:data10};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -572,7 +597,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.lattice.properties.solidity.type,parentSchema:schema17.properties.lattice.properties.solidity,data:data10};
+const err23 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.properties.lattice.properties.solidity.type,parentSchema:schema18.properties.lattice.properties.solidity,data:data10};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -586,7 +611,7 @@ if(data8.dragFactor !== undefined){
 let data11 = data8.dragFactor;
 if((typeof data11 == "number") && (isFinite(data11))){
 if(data11 < 0 || isNaN(data11)){
-const err24 = {instancePath:instancePath+"/lattice/dragFactor",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data11};
+const err24 = {instancePath:instancePath+"/lattice/dragFactor",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema17,data:data11};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -597,7 +622,7 @@ errors++;
 }
 }
 else {
-const err25 = {instancePath:instancePath+"/lattice/dragFactor",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data11};
+const err25 = {instancePath:instancePath+"/lattice/dragFactor",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.type,parentSchema:schema17,data:data11};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -611,7 +636,7 @@ if(data8.share !== undefined){
 let data12 = data8.share;
 if((typeof data12 == "number") && (isFinite(data12))){
 if(data12 > 1 || isNaN(data12)){
-const err26 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema17.properties.lattice.properties.share,data:data12};
+const err26 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema18.properties.lattice.properties.share,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -621,7 +646,7 @@ vErrors.push(err26);
 errors++;
 }
 if(data12 <= 0 || isNaN(data12)){
-const err27 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema17.properties.lattice.properties.share,data:data12};
+const err27 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema18.properties.lattice.properties.share,data:data12};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -632,7 +657,7 @@ errors++;
 }
 }
 else {
-const err28 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.lattice.properties.share.type,parentSchema:schema17.properties.lattice.properties.share,data:data12};
+const err28 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.properties.lattice.properties.share.type,parentSchema:schema18.properties.lattice.properties.share,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -644,7 +669,7 @@ errors++;
 }
 }
 else {
-const err29 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema17.properties.lattice.type,parentSchema:schema17.properties.lattice,data:data8};
+const err29 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema18.properties.lattice.type,parentSchema:schema18.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -657,7 +682,7 @@ errors++;
 if(data.label !== undefined){
 let data13 = data.label;
 if(typeof data13 !== "string"){
-const err30 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema17.properties.label.type,parentSchema:schema17.properties.label,data:data13};
+const err30 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema18.properties.label.type,parentSchema:schema18.properties.label,data:data13};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -669,7 +694,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema17.type,parentSchema:schema17,data};
+const err31 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema18.type,parentSchema:schema18,data};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -682,8 +707,8 @@ validate15.errors = vErrors;
 return errors === 0;
 }
 
-const schema24 = {"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
-const schema29 = {"type":"array","items":{"$ref":"#/definitions/id"}};
+const schema25 = {"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
+const schema30 = {"type":"array","items":{"$ref":"#/definitions/id"}};
 
 function validate18(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -717,7 +742,7 @@ errors++;
 }
 }
 else {
-const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema29.type,parentSchema:schema29,data};
+const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema30.type,parentSchema:schema30,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -751,7 +776,7 @@ errors++;
 }
 var valid0 = _errs2 === errors;
 if(valid0){
-const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema24.not,parentSchema:schema24,data};
+const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema25.not,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -773,7 +798,7 @@ vErrors = null;
 }
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema25.required,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -783,7 +808,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.kind === undefined){
-const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema25.required,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -793,7 +818,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.from === undefined){
-const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema25.required,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -803,7 +828,7 @@ vErrors.push(err4);
 errors++;
 }
 if(data.to === undefined){
-const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema25.required,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -813,7 +838,7 @@ vErrors.push(err5);
 errors++;
 }
 if(data.section === undefined){
-const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema25.required,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -823,8 +848,8 @@ vErrors.push(err6);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema24.properties, key0))){
-const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema24,data};
+if(!(func2.call(schema25.properties, key0))){
+const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -862,7 +887,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!((data1 === "cable") || (data1 === "bar"))){
-const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema24.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema24.properties.kind.enum,parentSchema:schema24.properties.kind,data:data1};
+const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema25.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.kind.enum,parentSchema:schema25.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -950,7 +975,7 @@ errors++;
 if(data.segments !== undefined){
 let data5 = data.segments;
 if(!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))){
-const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema24.properties.segments.type,parentSchema:schema24.properties.segments,data:data5};
+const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema25.properties.segments.type,parentSchema:schema25.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -961,7 +986,7 @@ errors++;
 }
 if((typeof data5 == "number") && (isFinite(data5))){
 if(data5 < 1 || isNaN(data5)){
-const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema24.properties.segments,data:data5};
+const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema25.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -975,7 +1000,7 @@ errors++;
 if(data.pretension !== undefined){
 let data6 = data.pretension;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err19 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.pretension.type,parentSchema:schema24.properties.pretension,data:data6};
+const err19 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.pretension.type,parentSchema:schema25.properties.pretension,data:data6};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -988,7 +1013,7 @@ errors++;
 if(data.unstressedLength !== undefined){
 let data7 = data.unstressedLength;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err20 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.unstressedLength.type,parentSchema:schema24.properties.unstressedLength,data:data7};
+const err20 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.unstressedLength.type,parentSchema:schema25.properties.unstressedLength,data:data7};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -1007,7 +1032,7 @@ errors = vErrors.length;
 if(data.generatedBy !== undefined){
 let data9 = data.generatedBy;
 if(typeof data9 !== "string"){
-const err21 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema24.properties.generatedBy.type,parentSchema:schema24.properties.generatedBy,data:data9};
+const err21 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema25.properties.generatedBy.type,parentSchema:schema25.properties.generatedBy,data:data9};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1019,7 +1044,7 @@ errors++;
 }
 }
 else {
-const err22 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema24.type,parentSchema:schema24,data};
+const err22 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema25.type,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -1032,15 +1057,15 @@ validate17.errors = vErrors;
 return errors === 0;
 }
 
-const schema31 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"}}};
-const schema33 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}};
+const schema32 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"}}};
+const schema34 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}};
 
 function validate22(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.node === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema33.required,parentSchema:schema33,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema34.required,parentSchema:schema34,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1050,7 +1075,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.force === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema33.required,parentSchema:schema33,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema34.required,parentSchema:schema34,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1061,7 +1086,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((key0 === "node") || (key0 === "force"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema33,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema34,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1147,7 +1172,7 @@ errors++;
 }
 }
 else {
-const err9 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema33.type,parentSchema:schema33,data};
+const err9 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema34.type,parentSchema:schema34,data};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -1160,15 +1185,15 @@ validate22.errors = vErrors;
 return errors === 0;
 }
 
-const schema36 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
-const schema38 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
+const schema37 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema39 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
 
 function validate25(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.required,parentSchema:schema38,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema39.required,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1182,7 +1207,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "power"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.oneOf[0].required,parentSchema:schema38.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema39.oneOf[0].required,parentSchema:schema39.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1192,7 +1217,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.exponent === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema38.oneOf[0].required,parentSchema:schema38.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema39.oneOf[0].required,parentSchema:schema39.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1203,7 +1228,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((key0 === "kind") || (key0 === "exponent"))){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema38.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema39.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1216,7 +1241,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("power" !== data0){
-const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema38.oneOf[0].properties.kind,data:data0};
+const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema39.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1230,7 +1255,7 @@ if(data.exponent !== undefined){
 let data1 = data.exponent;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 < 0 || isNaN(data1)){
-const err5 = {instancePath:instancePath+"/exponent",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data1};
+const err5 = {instancePath:instancePath+"/exponent",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema17,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1241,7 +1266,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath:instancePath+"/exponent",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data1};
+const err6 = {instancePath:instancePath+"/exponent",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.type,parentSchema:schema17,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1253,7 +1278,7 @@ errors++;
 }
 }
 else {
-const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.oneOf[0].type,parentSchema:schema38.oneOf[0],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema39.oneOf[0].type,parentSchema:schema39.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1266,7 +1291,7 @@ errors++;
 else if(tag0 === "log"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.oneOf[1].required,parentSchema:schema38.oneOf[1],data};
+const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema39.oneOf[1].required,parentSchema:schema39.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1276,7 +1301,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data.roughnessLength === undefined){
-const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema38.oneOf[1].required,parentSchema:schema38.oneOf[1],data};
+const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema39.oneOf[1].required,parentSchema:schema39.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -1287,7 +1312,7 @@ errors++;
 }
 for(const key1 in data){
 if(!((key1 === "kind") || (key1 === "roughnessLength"))){
-const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema38.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema39.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -1300,7 +1325,7 @@ errors++;
 if(data.kind !== undefined){
 let data2 = data.kind;
 if("log" !== data2){
-const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema38.oneOf[1].properties.kind,data:data2};
+const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema39.oneOf[1].properties.kind,data:data2};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -1314,7 +1339,7 @@ if(data.roughnessLength !== undefined){
 let data3 = data.roughnessLength;
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 <= 0 || isNaN(data3)){
-const err12 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data3};
+const err12 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema20,data:data3};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -1325,7 +1350,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data3};
+const err13 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema20.type,parentSchema:schema20,data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -1337,7 +1362,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.oneOf[1].type,parentSchema:schema38.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema39.oneOf[1].type,parentSchema:schema39.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -1350,7 +1375,7 @@ errors++;
 else if(tag0 === "uniform"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.oneOf[2].required,parentSchema:schema38.oneOf[2],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema39.oneOf[2].required,parentSchema:schema39.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -1361,7 +1386,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(key2 === "kind")){
-const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema38.oneOf[2],data};
+const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema39.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -1374,7 +1399,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("uniform" !== data4){
-const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema38.oneOf[2].properties.kind,data:data4};
+const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema39.oneOf[2].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -1386,7 +1411,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.oneOf[2].type,parentSchema:schema38.oneOf[2],data};
+const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema39.oneOf[2].type,parentSchema:schema39.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -1397,7 +1422,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema38.discriminator,parentSchema:schema38,data};
+const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema39.discriminator,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -1408,7 +1433,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema38.discriminator,parentSchema:schema38,data};
+const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema39.discriminator,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -1419,7 +1444,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.type,parentSchema:schema38,data};
+const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema39.type,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1438,7 +1463,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.direction === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema36.required,parentSchema:schema36,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema37.required,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1448,7 +1473,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.speed === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema36.required,parentSchema:schema36,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema37.required,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1459,7 +1484,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "direction") || (key0 === "speed")) || (key0 === "profile")) || (key0 === "airDensity")) || (key0 === "groups"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema36,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1472,7 +1497,7 @@ errors++;
 if(data.direction !== undefined){
 let data0 = data.direction;
 if(!((typeof data0 == "number") && (isFinite(data0)))){
-const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema36.properties.direction.type,parentSchema:schema36.properties.direction,data:data0};
+const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema37.properties.direction.type,parentSchema:schema37.properties.direction,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1486,7 +1511,7 @@ if(data.speed !== undefined){
 let data1 = data.speed;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 < 0 || isNaN(data1)){
-const err4 = {instancePath:instancePath+"/speed",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data1};
+const err4 = {instancePath:instancePath+"/speed",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema17,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1497,7 +1522,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath:instancePath+"/speed",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data1};
+const err5 = {instancePath:instancePath+"/speed",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.type,parentSchema:schema17,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1517,7 +1542,7 @@ if(data.airDensity !== undefined){
 let data3 = data.airDensity;
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 <= 0 || isNaN(data3)){
-const err6 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data3};
+const err6 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema20,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1528,7 +1553,7 @@ errors++;
 }
 }
 else {
-const err7 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data3};
+const err7 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema20.type,parentSchema:schema20,data:data3};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1546,7 +1571,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema36.type,parentSchema:schema36,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema37.type,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1559,14 +1584,14 @@ validate24.errors = vErrors;
 return errors === 0;
 }
 
-const schema42 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema43 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
 
 function validate29(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.thickness === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema42.required,parentSchema:schema42,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema43.required,parentSchema:schema43,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1577,7 +1602,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "thickness") || (key0 === "density")) || (key0 === "groups"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema42,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema43,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1591,7 +1616,7 @@ if(data.thickness !== undefined){
 let data0 = data.thickness;
 if((typeof data0 == "number") && (isFinite(data0))){
 if(data0 < 0 || isNaN(data0)){
-const err2 = {instancePath:instancePath+"/thickness",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data0};
+const err2 = {instancePath:instancePath+"/thickness",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema17,data:data0};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1602,7 +1627,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/thickness",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data0};
+const err3 = {instancePath:instancePath+"/thickness",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.type,parentSchema:schema17,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1616,7 +1641,7 @@ if(data.density !== undefined){
 let data1 = data.density;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 <= 0 || isNaN(data1)){
-const err4 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data1};
+const err4 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema20,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1627,7 +1652,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data1};
+const err5 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema20.type,parentSchema:schema20,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1645,7 +1670,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema42.type,parentSchema:schema42,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema43.type,parentSchema:schema43,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1664,7 +1689,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema31.required,parentSchema:schema31,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema32.required,parentSchema:schema32,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1675,7 +1700,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "selfWeight")) || (key0 === "temperatureChange")) || (key0 === "nodalLoads")) || (key0 === "wind")) || (key0 === "ice"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema31,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema32,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1713,7 +1738,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema31.properties.label.type,parentSchema:schema31.properties.label,data:data1};
+const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema32.properties.label.type,parentSchema:schema32.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1726,7 +1751,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data2 = data.selfWeight;
 if(typeof data2 !== "boolean"){
-const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema31.properties.selfWeight.type,parentSchema:schema31.properties.selfWeight,data:data2};
+const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema32.properties.selfWeight.type,parentSchema:schema32.properties.selfWeight,data:data2};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1739,7 +1764,7 @@ errors++;
 if(data.temperatureChange !== undefined){
 let data3 = data.temperatureChange;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema31.properties.temperatureChange.type,parentSchema:schema31.properties.temperatureChange,data:data3};
+const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema32.properties.temperatureChange.type,parentSchema:schema32.properties.temperatureChange,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1761,7 +1786,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema31.properties.nodalLoads.type,parentSchema:schema31.properties.nodalLoads,data:data4};
+const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema32.properties.nodalLoads.type,parentSchema:schema32.properties.nodalLoads,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1785,7 +1810,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema31.type,parentSchema:schema31,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema32.type,parentSchema:schema32,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1798,14 +1823,14 @@ validate21.errors = vErrors;
 return errors === 0;
 }
 
-const schema45 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
+const schema46 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
 
 function validate33(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema45.required,parentSchema:schema45,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema46.required,parentSchema:schema46,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1815,7 +1840,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.members === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema45.required,parentSchema:schema45,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema46.required,parentSchema:schema46,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1826,7 +1851,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "label")) || (key0 === "members"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema45,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema46,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1864,7 +1889,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema45.properties.label.type,parentSchema:schema45.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema46.properties.label.type,parentSchema:schema46.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1882,7 +1907,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema45.type,parentSchema:schema45,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema46.type,parentSchema:schema46,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1895,14 +1920,14 @@ validate33.errors = vErrors;
 return errors === 0;
 }
 
-const schema47 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}};
+const schema48 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}};
 
 function validate36(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema47.required,parentSchema:schema47,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema48.required,parentSchema:schema48,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1912,7 +1937,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.factors === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema47.required,parentSchema:schema47,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema48.required,parentSchema:schema48,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1923,7 +1948,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "label")) || (key0 === "factors"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema47,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema48,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1961,7 +1986,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema47.properties.label.type,parentSchema:schema47.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema48.properties.label.type,parentSchema:schema48.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1975,7 +2000,7 @@ if(data.factors !== undefined){
 let data2 = data.factors;
 if(Array.isArray(data2)){
 if(data2.length < 1){
-const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema47.properties.factors,data:data2};
+const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema48.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1989,7 +2014,7 @@ for(let i0=0; i0<len0; i0++){
 let data3 = data2[i0];
 if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
 if(data3.case === undefined){
-const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema47.properties.factors.items.required,parentSchema:schema47.properties.factors.items,data:data3};
+const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema48.properties.factors.items.required,parentSchema:schema48.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1999,7 +2024,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data3.factor === undefined){
-const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema47.properties.factors.items.required,parentSchema:schema47.properties.factors.items,data:data3};
+const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema48.properties.factors.items.required,parentSchema:schema48.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2010,7 +2035,7 @@ errors++;
 }
 for(const key1 in data3){
 if(!((key1 === "case") || (key1 === "factor"))){
-const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema47.properties.factors.items,data:data3};
+const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema48.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2048,7 +2073,7 @@ errors++;
 if(data3.factor !== undefined){
 let data5 = data3.factor;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema47.properties.factors.items.properties.factor.type,parentSchema:schema47.properties.factors.items.properties.factor,data:data5};
+const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema48.properties.factors.items.properties.factor.type,parentSchema:schema48.properties.factors.items.properties.factor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2060,7 +2085,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema47.properties.factors.items.type,parentSchema:schema47.properties.factors.items,data:data3};
+const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema48.properties.factors.items.type,parentSchema:schema48.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2072,7 +2097,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema47.properties.factors.type,parentSchema:schema47.properties.factors,data:data2};
+const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema48.properties.factors.type,parentSchema:schema48.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2084,7 +2109,7 @@ errors++;
 }
 }
 else {
-const err15 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema47.type,parentSchema:schema47,data};
+const err15 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema48.type,parentSchema:schema48,data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -2097,14 +2122,14 @@ validate36.errors = vErrors;
 return errors === 0;
 }
 
-const schema50 = {"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}};
-const schema52 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
+const schema51 = {"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}};
+const schema53 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
 
 function validate40(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(!(data && typeof data == "object" && !Array.isArray(data))){
-const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.type,parentSchema:schema52,data};
+const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema53.type,parentSchema:schema53,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2119,7 +2144,7 @@ let passing0 = null;
 const _errs2 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.fractionOfSpan === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema52.oneOf[0].required,parentSchema:schema52.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema53.oneOf[0].required,parentSchema:schema53.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2130,7 +2155,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(key0 === "fractionOfSpan")){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema52.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema53.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2144,7 +2169,7 @@ if(data.fractionOfSpan !== undefined){
 let data0 = data.fractionOfSpan;
 if((typeof data0 == "number") && (isFinite(data0))){
 if(data0 <= 0 || isNaN(data0)){
-const err3 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data0};
+const err3 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema20,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2155,7 +2180,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data0};
+const err4 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema20.type,parentSchema:schema20,data:data0};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2167,7 +2192,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.oneOf[0].type,parentSchema:schema52.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema53.oneOf[0].type,parentSchema:schema53.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2184,7 +2209,7 @@ passing0 = 0;
 const _errs9 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.absolute === undefined){
-const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema52.oneOf[1].required,parentSchema:schema52.oneOf[1],data};
+const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema53.oneOf[1].required,parentSchema:schema53.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2195,7 +2220,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(key1 === "absolute")){
-const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema52.oneOf[1],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema53.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2209,7 +2234,7 @@ if(data.absolute !== undefined){
 let data1 = data.absolute;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 <= 0 || isNaN(data1)){
-const err8 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data1};
+const err8 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema20,data:data1};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2220,7 +2245,7 @@ errors++;
 }
 }
 else {
-const err9 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data1};
+const err9 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema20.type,parentSchema:schema20,data:data1};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2232,7 +2257,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.oneOf[1].type,parentSchema:schema52.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema53.oneOf[1].type,parentSchema:schema53.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2253,7 +2278,7 @@ passing0 = 1;
 }
 }
 if(!valid0){
-const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema52.oneOf,parentSchema:schema52,data};
+const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema53.oneOf,parentSchema:schema53,data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2284,7 +2309,7 @@ let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((((((key0 === "resistanceFactor") || (key0 === "noSlackGroups")) || (key0 === "sagLimits")) || (key0 === "displacementLimits")) || (key0 === "tiltLimits")) || (key0 === "upliftNodes"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema50,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema51,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2298,7 +2323,7 @@ if(data.resistanceFactor !== undefined){
 let data0 = data.resistanceFactor;
 if((typeof data0 == "number") && (isFinite(data0))){
 if(data0 > 1 || isNaN(data0)){
-const err1 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema50.properties.resistanceFactor,data:data0};
+const err1 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema51.properties.resistanceFactor,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2308,7 +2333,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data0 <= 0 || isNaN(data0)){
-const err2 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema50.properties.resistanceFactor,data:data0};
+const err2 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema51.properties.resistanceFactor,data:data0};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2319,7 +2344,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema50.properties.resistanceFactor.type,parentSchema:schema50.properties.resistanceFactor,data:data0};
+const err3 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema51.properties.resistanceFactor.type,parentSchema:schema51.properties.resistanceFactor,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2343,7 +2368,7 @@ for(let i0=0; i0<len0; i0++){
 let data3 = data2[i0];
 if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
 if(data3.group === undefined){
-const err4 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema50.properties.sagLimits.items.required,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err4 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema51.properties.sagLimits.items.required,parentSchema:schema51.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2353,7 +2378,7 @@ vErrors.push(err4);
 errors++;
 }
 if(data3.limit === undefined){
-const err5 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema50.properties.sagLimits.items.required,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err5 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema51.properties.sagLimits.items.required,parentSchema:schema51.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2364,7 +2389,7 @@ errors++;
 }
 for(const key1 in data3){
 if(!((key1 === "group") || (key1 === "limit"))){
-const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema51.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2407,7 +2432,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err9 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.sagLimits.items.type,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err9 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema51.properties.sagLimits.items.type,parentSchema:schema51.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2419,7 +2444,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.sagLimits.type,parentSchema:schema50.properties.sagLimits,data:data2};
+const err10 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema51.properties.sagLimits.type,parentSchema:schema51.properties.sagLimits,data:data2};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2437,7 +2462,7 @@ for(let i1=0; i1<len1; i1++){
 let data7 = data6[i1];
 if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 if(data7.node === undefined){
-const err11 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema50.properties.displacementLimits.items.required,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err11 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema51.properties.displacementLimits.items.required,parentSchema:schema51.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2447,7 +2472,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data7.limit === undefined){
-const err12 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema50.properties.displacementLimits.items.required,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err12 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema51.properties.displacementLimits.items.required,parentSchema:schema51.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2458,7 +2483,7 @@ errors++;
 }
 for(const key2 in data7){
 if(!((key2 === "node") || (key2 === "limit"))){
-const err13 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err13 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema51.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2497,7 +2522,7 @@ if(data7.limit !== undefined){
 let data9 = data7.limit;
 if((typeof data9 == "number") && (isFinite(data9))){
 if(data9 <= 0 || isNaN(data9)){
-const err16 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data9};
+const err16 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema20,data:data9};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -2508,7 +2533,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data9};
+const err17 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema20.type,parentSchema:schema20,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -2520,7 +2545,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.displacementLimits.items.type,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err18 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema51.properties.displacementLimits.items.type,parentSchema:schema51.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -2532,7 +2557,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.displacementLimits.type,parentSchema:schema50.properties.displacementLimits,data:data6};
+const err19 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema51.properties.displacementLimits.type,parentSchema:schema51.properties.displacementLimits,data:data6};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -2550,7 +2575,7 @@ for(let i2=0; i2<len2; i2++){
 let data11 = data10[i2];
 if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
 if(data11.base === undefined){
-const err20 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema50.properties.tiltLimits.items.required,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err20 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema51.properties.tiltLimits.items.required,parentSchema:schema51.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -2560,7 +2585,7 @@ vErrors.push(err20);
 errors++;
 }
 if(data11.top === undefined){
-const err21 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema50.properties.tiltLimits.items.required,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err21 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema51.properties.tiltLimits.items.required,parentSchema:schema51.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -2570,7 +2595,7 @@ vErrors.push(err21);
 errors++;
 }
 if(data11.limit === undefined){
-const err22 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema50.properties.tiltLimits.items.required,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err22 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema51.properties.tiltLimits.items.required,parentSchema:schema51.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -2581,7 +2606,7 @@ errors++;
 }
 for(const key3 in data11){
 if(!(((key3 === "base") || (key3 === "top")) || (key3 === "limit"))){
-const err23 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err23 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema51.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -2645,7 +2670,7 @@ if(data11.limit !== undefined){
 let data14 = data11.limit;
 if((typeof data14 == "number") && (isFinite(data14))){
 if(data14 <= 0 || isNaN(data14)){
-const err28 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data14};
+const err28 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema20,data:data14};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -2656,7 +2681,7 @@ errors++;
 }
 }
 else {
-const err29 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data14};
+const err29 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema20.type,parentSchema:schema20,data:data14};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -2668,7 +2693,7 @@ errors++;
 }
 }
 else {
-const err30 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.tiltLimits.items.type,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err30 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema51.properties.tiltLimits.items.type,parentSchema:schema51.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -2680,7 +2705,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.tiltLimits.type,parentSchema:schema50.properties.tiltLimits,data:data10};
+const err31 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema51.properties.tiltLimits.type,parentSchema:schema51.properties.tiltLimits,data:data10};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -2698,7 +2723,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err32 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.type,parentSchema:schema50,data};
+const err32 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema51.type,parentSchema:schema51,data};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -2711,15 +2736,15 @@ validate38.errors = vErrors;
 return errors === 0;
 }
 
-const schema60 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
-const schema62 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
+const schema61 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
+const schema63 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
 
 function validate45(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.required,parentSchema:schema62,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema63.required,parentSchema:schema63,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2733,7 +2758,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "sag"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema63.oneOf[0].required,parentSchema:schema63.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2743,7 +2768,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.group === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema63.oneOf[0].required,parentSchema:schema63.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2753,7 +2778,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.case === undefined){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema63.oneOf[0].required,parentSchema:schema63.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2763,7 +2788,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.limit === undefined){
-const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema63.oneOf[0].required,parentSchema:schema63.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2774,7 +2799,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "kind") || (key0 === "group")) || (key0 === "case")) || (key0 === "limit"))){
-const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema63.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2787,7 +2812,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("sag" !== data0){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema62.oneOf[0].properties.kind,data:data0};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema63.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2855,7 +2880,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[0].type,parentSchema:schema62.oneOf[0],data};
+const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema63.oneOf[0].type,parentSchema:schema63.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2868,7 +2893,7 @@ errors++;
 else if(tag0 === "tensionShare"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[1].required,parentSchema:schema62.oneOf[1],data};
+const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema63.oneOf[1].required,parentSchema:schema63.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2878,7 +2903,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data.group === undefined){
-const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema62.oneOf[1].required,parentSchema:schema62.oneOf[1],data};
+const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema63.oneOf[1].required,parentSchema:schema63.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2888,7 +2913,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data.share === undefined){
-const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema62.oneOf[1].required,parentSchema:schema62.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema63.oneOf[1].required,parentSchema:schema63.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2899,7 +2924,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(((key1 === "kind") || (key1 === "group")) || (key1 === "share"))){
-const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[1],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema63.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -2912,7 +2937,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("tensionShare" !== data4){
-const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema62.oneOf[1].properties.kind,data:data4};
+const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema63.oneOf[1].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -2951,7 +2976,7 @@ if(data.share !== undefined){
 let data6 = data.share;
 if((typeof data6 == "number") && (isFinite(data6))){
 if(data6 <= 0 || isNaN(data6)){
-const err19 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data6};
+const err19 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema20,data:data6};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -2962,7 +2987,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data6};
+const err20 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema20.type,parentSchema:schema20,data:data6};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -2974,7 +2999,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[1].type,parentSchema:schema62.oneOf[1],data};
+const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema63.oneOf[1].type,parentSchema:schema63.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -2987,7 +3012,7 @@ errors++;
 else if(tag0 === "noSlack"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[2].required,parentSchema:schema62.oneOf[2],data};
+const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema63.oneOf[2].required,parentSchema:schema63.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -2997,7 +3022,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data.group === undefined){
-const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema62.oneOf[2].required,parentSchema:schema62.oneOf[2],data};
+const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema63.oneOf[2].required,parentSchema:schema63.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -3007,7 +3032,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data.case === undefined){
-const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[2].required,parentSchema:schema62.oneOf[2],data};
+const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema63.oneOf[2].required,parentSchema:schema63.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -3018,7 +3043,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(((key2 === "kind") || (key2 === "group")) || (key2 === "case"))){
-const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[2],data};
+const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema63.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -3031,7 +3056,7 @@ errors++;
 if(data.kind !== undefined){
 let data7 = data.kind;
 if("noSlack" !== data7){
-const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema62.oneOf[2].properties.kind,data:data7};
+const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema63.oneOf[2].properties.kind,data:data7};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -3093,7 +3118,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[2].type,parentSchema:schema62.oneOf[2],data};
+const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema63.oneOf[2].type,parentSchema:schema63.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -3106,7 +3131,7 @@ errors++;
 else if(tag0 === "plumb"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema63.oneOf[3].required,parentSchema:schema63.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -3116,7 +3141,7 @@ vErrors.push(err32);
 errors++;
 }
 if(data.base === undefined){
-const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema63.oneOf[3].required,parentSchema:schema63.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -3126,7 +3151,7 @@ vErrors.push(err33);
 errors++;
 }
 if(data.top === undefined){
-const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema63.oneOf[3].required,parentSchema:schema63.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -3136,7 +3161,7 @@ vErrors.push(err34);
 errors++;
 }
 if(data.case === undefined){
-const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema63.oneOf[3].required,parentSchema:schema63.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -3146,7 +3171,7 @@ vErrors.push(err35);
 errors++;
 }
 if(data.tolerance === undefined){
-const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema63.oneOf[3].required,parentSchema:schema63.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -3157,7 +3182,7 @@ errors++;
 }
 for(const key3 in data){
 if(!(((((key3 === "kind") || (key3 === "base")) || (key3 === "top")) || (key3 === "case")) || (key3 === "tolerance"))){
-const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[3],data};
+const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema63.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -3170,7 +3195,7 @@ errors++;
 if(data.kind !== undefined){
 let data10 = data.kind;
 if("plumb" !== data10){
-const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema62.oneOf[3].properties.kind,data:data10};
+const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema63.oneOf[3].properties.kind,data:data10};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -3259,7 +3284,7 @@ if(data.tolerance !== undefined){
 let data14 = data.tolerance;
 if((typeof data14 == "number") && (isFinite(data14))){
 if(data14 < 0 || isNaN(data14)){
-const err45 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data14};
+const err45 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema17,data:data14};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -3270,7 +3295,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data14};
+const err46 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.type,parentSchema:schema17,data:data14};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -3282,7 +3307,7 @@ errors++;
 }
 }
 else {
-const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[3].type,parentSchema:schema62.oneOf[3],data};
+const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema63.oneOf[3].type,parentSchema:schema63.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -3295,7 +3320,7 @@ errors++;
 else if(tag0 === "reaction"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema63.oneOf[4].required,parentSchema:schema63.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -3305,7 +3330,7 @@ vErrors.push(err48);
 errors++;
 }
 if(data.node === undefined){
-const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema63.oneOf[4].required,parentSchema:schema63.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -3315,7 +3340,7 @@ vErrors.push(err49);
 errors++;
 }
 if(data.case === undefined){
-const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema63.oneOf[4].required,parentSchema:schema63.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -3325,7 +3350,7 @@ vErrors.push(err50);
 errors++;
 }
 if(data.limit === undefined){
-const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema63.oneOf[4].required,parentSchema:schema63.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -3336,7 +3361,7 @@ errors++;
 }
 for(const key4 in data){
 if(!((((key4 === "kind") || (key4 === "node")) || (key4 === "case")) || (key4 === "limit"))){
-const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[4],data};
+const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema63.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -3349,7 +3374,7 @@ errors++;
 if(data.kind !== undefined){
 let data15 = data.kind;
 if("reaction" !== data15){
-const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema62.oneOf[4].properties.kind,data:data15};
+const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema63.oneOf[4].properties.kind,data:data15};
 if(vErrors === null){
 vErrors = [err53];
 }
@@ -3412,7 +3437,7 @@ errors++;
 if(data.limit !== undefined){
 let data18 = data.limit;
 if(!((typeof data18 == "number") && (isFinite(data18)))){
-const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.oneOf[4].properties.limit.type,parentSchema:schema62.oneOf[4].properties.limit,data:data18};
+const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema63.oneOf[4].properties.limit.type,parentSchema:schema63.oneOf[4].properties.limit,data:data18};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -3424,7 +3449,7 @@ errors++;
 }
 }
 else {
-const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[4].type,parentSchema:schema62.oneOf[4],data};
+const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema63.oneOf[4].type,parentSchema:schema63.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -3435,7 +3460,7 @@ errors++;
 }
 }
 else {
-const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema62.discriminator,parentSchema:schema62,data};
+const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema63.discriminator,parentSchema:schema63,data};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -3446,7 +3471,7 @@ errors++;
 }
 }
 else {
-const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema62.discriminator,parentSchema:schema62,data};
+const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema63.discriminator,parentSchema:schema63,data};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -3457,7 +3482,7 @@ errors++;
 }
 }
 else {
-const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.type,parentSchema:schema62,data};
+const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema63.type,parentSchema:schema63,data};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -3476,7 +3501,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.variables === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema60.required,parentSchema:schema60,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema61.required,parentSchema:schema61,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3486,7 +3511,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.targets === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema60.required,parentSchema:schema60,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema61.required,parentSchema:schema61,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3497,7 +3522,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "variables") || (key0 === "targets")) || (key0 === "lastRun"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema60,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema61,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3515,7 +3540,7 @@ for(let i0=0; i0<len0; i0++){
 let data1 = data0[i0];
 if(data1 && typeof data1 == "object" && !Array.isArray(data1)){
 if(data1.group === undefined){
-const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema60.properties.variables.items.required,parentSchema:schema60.properties.variables.items,data:data1};
+const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema61.properties.variables.items.required,parentSchema:schema61.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3525,7 +3550,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data1.by === undefined){
-const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema60.properties.variables.items.required,parentSchema:schema60.properties.variables.items,data:data1};
+const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema61.properties.variables.items.required,parentSchema:schema61.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3536,7 +3561,7 @@ errors++;
 }
 for(const key1 in data1){
 if(!((((key1 === "group") || (key1 === "by")) || (key1 === "min")) || (key1 === "max"))){
-const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema60.properties.variables.items,data:data1};
+const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema61.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3574,7 +3599,7 @@ errors++;
 if(data1.by !== undefined){
 let data3 = data1.by;
 if(!((data3 === "pretension") || (data3 === "unstressedLength"))){
-const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema60.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema60.properties.variables.items.properties.by.enum,parentSchema:schema60.properties.variables.items.properties.by,data:data3};
+const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema61.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema61.properties.variables.items.properties.by.enum,parentSchema:schema61.properties.variables.items.properties.by,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3587,7 +3612,7 @@ errors++;
 if(data1.min !== undefined){
 let data4 = data1.min;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema60.properties.variables.items.properties.min.type,parentSchema:schema60.properties.variables.items.properties.min,data:data4};
+const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema61.properties.variables.items.properties.min.type,parentSchema:schema61.properties.variables.items.properties.min,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3600,7 +3625,7 @@ errors++;
 if(data1.max !== undefined){
 let data5 = data1.max;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema60.properties.variables.items.properties.max.type,parentSchema:schema60.properties.variables.items.properties.max,data:data5};
+const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema61.properties.variables.items.properties.max.type,parentSchema:schema61.properties.variables.items.properties.max,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3612,7 +3637,7 @@ errors++;
 }
 }
 else {
-const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema60.properties.variables.items.type,parentSchema:schema60.properties.variables.items,data:data1};
+const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema61.properties.variables.items.type,parentSchema:schema61.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3624,7 +3649,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema60.properties.variables.type,parentSchema:schema60.properties.variables,data:data0};
+const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema61.properties.variables.type,parentSchema:schema61.properties.variables,data:data0};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -3646,7 +3671,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema60.properties.targets.type,parentSchema:schema60.properties.targets,data:data6};
+const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema61.properties.targets.type,parentSchema:schema61.properties.targets,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -3660,7 +3685,7 @@ if(data.lastRun !== undefined){
 let data8 = data.lastRun;
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 if(data8.date === undefined){
-const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema60.properties.lastRun.required,parentSchema:schema60.properties.lastRun,data:data8};
+const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema61.properties.lastRun.required,parentSchema:schema61.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -3670,7 +3695,7 @@ vErrors.push(err14);
 errors++;
 }
 if(data8.summary === undefined){
-const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema60.properties.lastRun.required,parentSchema:schema60.properties.lastRun,data:data8};
+const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema61.properties.lastRun.required,parentSchema:schema61.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3681,7 +3706,7 @@ errors++;
 }
 for(const key2 in data8){
 if(!((key2 === "date") || (key2 === "summary"))){
-const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema60.properties.lastRun,data:data8};
+const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema61.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -3694,7 +3719,7 @@ errors++;
 if(data8.date !== undefined){
 let data9 = data8.date;
 if(typeof data9 !== "string"){
-const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema60.properties.lastRun.properties.date.type,parentSchema:schema60.properties.lastRun.properties.date,data:data9};
+const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema61.properties.lastRun.properties.date.type,parentSchema:schema61.properties.lastRun.properties.date,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -3707,7 +3732,7 @@ errors++;
 if(data8.summary !== undefined){
 let data10 = data8.summary;
 if(typeof data10 !== "string"){
-const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema60.properties.lastRun.properties.summary.type,parentSchema:schema60.properties.lastRun.properties.summary,data:data10};
+const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema61.properties.lastRun.properties.summary.type,parentSchema:schema61.properties.lastRun.properties.summary,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -3719,7 +3744,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema60.properties.lastRun.type,parentSchema:schema60.properties.lastRun,data:data8};
+const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema61.properties.lastRun.type,parentSchema:schema61.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -3731,7 +3756,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema60.type,parentSchema:schema60,data};
+const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema61.type,parentSchema:schema61,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -3744,7 +3769,7 @@ validate44.errors = vErrors;
 return errors === 0;
 }
 
-const schema75 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
+const schema76 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
 
 function validate49(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -3752,7 +3777,7 @@ let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!(key0 === "temperatures")){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema75,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema76,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3793,7 +3818,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema75.properties.temperatures.type,parentSchema:schema75.properties.temperatures,data:data0};
+const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.temperatures.type,parentSchema:schema76.properties.temperatures,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3805,7 +3830,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema75.type,parentSchema:schema75,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.type,parentSchema:schema76,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3818,14 +3843,14 @@ validate49.errors = vErrors;
 return errors === 0;
 }
 
-const schema77 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
+const schema78 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
 
 function validate51(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema77.required,parentSchema:schema77,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema78.required,parentSchema:schema78,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3835,7 +3860,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema77.required,parentSchema:schema77,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema78.required,parentSchema:schema78,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3845,7 +3870,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.params === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema77.required,parentSchema:schema77,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema78.required,parentSchema:schema78,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3856,7 +3881,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "kind")) || (key0 === "params"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema77,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema78,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3894,7 +3919,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "guyedMast") || (data1 === "saddleNet")) || (data1 === "radialNet"))){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema77.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema77.properties.kind.enum,parentSchema:schema77.properties.kind,data:data1};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema78.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema78.properties.kind.enum,parentSchema:schema78.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3907,7 +3932,7 @@ errors++;
 if(data.params !== undefined){
 let data2 = data.params;
 if(!(data2 && typeof data2 == "object" && !Array.isArray(data2))){
-const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema77.properties.params.type,parentSchema:schema77.properties.params,data:data2};
+const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema78.properties.params.type,parentSchema:schema78.properties.params,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3919,7 +3944,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema77.type,parentSchema:schema77,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema78.type,parentSchema:schema78,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3932,7 +3957,7 @@ validate51.errors = vErrors;
 return errors === 0;
 }
 
-const schema79 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
+const schema80 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
 
 function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -3940,7 +3965,7 @@ let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((key0 === "units") || (key0 === "deformationScale"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema79,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema80,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3953,7 +3978,7 @@ errors++;
 if(data.units !== undefined){
 let data0 = data.units;
 if(!((data0 === "SI") || (data0 === "US"))){
-const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema79.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema79.properties.units.enum,parentSchema:schema79.properties.units,data:data0};
+const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema80.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema80.properties.units.enum,parentSchema:schema80.properties.units,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3967,7 +3992,7 @@ if(data.deformationScale !== undefined){
 let data1 = data.deformationScale;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 <= 0 || isNaN(data1)){
-const err2 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data1};
+const err2 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema20,data:data1};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3978,7 +4003,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data1};
+const err3 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema20.type,parentSchema:schema20,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3990,7 +4015,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema79.type,parentSchema:schema79,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.type,parentSchema:schema80,data};
 if(vErrors === null){
 vErrors = [err4];
 }
