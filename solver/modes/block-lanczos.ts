@@ -128,10 +128,15 @@ class KrylovSpace {
     }
   }
 
-  /** Two passes of Gram–Schmidt in the M inner product; records coefficients in column j (≥ 0). */
+  /**
+   * Gram–Schmidt in the M inner product, repeated once when the first pass cancelled more than
+   * 1 − 1/√2 of the norm (the DGKS criterion); records coefficients in column j (≥ 0).
+   */
   private orthogonalise(w: Float64Array, j: number): number {
     const n = this.n;
+    let norm = this.mNorm(w);
     for (let pass = 0; pass < 2; pass++) {
+      const before = norm;
       for (let i = 0; i < this.basis.length; i++) {
         const mv = this.massBasis[i], v = this.basis[i];
         let c = 0;
@@ -139,8 +144,10 @@ class KrylovSpace {
         if (j >= 0) this.h[i * this.capacity + j] += c;
         for (let d = 0; d < n; d++) w[d] -= c * v[d];
       }
+      norm = this.mNorm(w);
+      if (norm > Math.SQRT1_2 * before) break;
     }
-    return this.mNorm(w);
+    return norm;
   }
 
   private push(w: Float64Array, norm: number): void {
