@@ -21,6 +21,8 @@ export interface SolveCaseOptions {
 export interface CaseSolution {
   result: CaseResult;
   fields: CaseFields;
+  /** Displacements and rotations from the start state at the end (dofs.count), m and rad. */
+  displacements?: Float64Array;
 }
 
 export function solveCase(ws: Workspace, id: string, loads: CaseLoads, options: SolveCaseOptions = {}): CaseSolution {
@@ -28,19 +30,20 @@ export function solveCase(ws: Workspace, id: string, loads: CaseLoads, options: 
   const newton = { ...DEFAULT_NEWTON_OPTIONS, ...options.newton };
   const tag = options.tag ?? { caseIndex: 0, caseCount: 1, caseId: id };
   const out = solveEquilibrium(ws, loads, newton, options.control ?? {}, tag, options.start);
-  const untensioned = out.status === 'converged' ? untensionedMechanismDof(ws, out.u, loads.temperatureChange, newton.pivotTolerance) : -1;
+  const untensioned = out.status === 'converged' ? untensionedMechanismDof(ws, loads, out.u, newton.pivotTolerance) : -1;
   if (untensioned >= 0) Object.assign(out, { status: 'singular', singularDofs: [untensioned] });
   const model = ws.model;
   const converged = out.status === 'converged';
   const residual = evaluateState(ws, loads, out.u);
-  const positions = new Float64Array(out.u);
-  for (let d = 0; d < positions.length; d++) positions[d] += model.coords[d];
+  const positions = new Float64Array(model.coords);
+  for (let d = 0; d < positions.length; d++) positions[d] += out.u[d];
   const fields: CaseFields = {
     positions,
     elementTension: new Float64Array(ws.elements.tension),
     elementSlack: new Uint8Array(ws.elements.slack),
   };
-  const members = memberResults(model, positions, fields.elementTension, fields.elementSlack);
+  if (ws.elements.endForces.length > 0) fields.elementEndForces = new Float64Array(ws.elements.endForces);
+  const members = memberResults(model, positions, fields.elementTension, fields.elementSlack, fields.elementEndForces);
   let freeDofs = 0;
   for (let d = 0; d < model.fixed.length; d++) if (!model.fixed[d]) freeDofs++;
   const result: CaseResult = {
@@ -50,7 +53,7 @@ export function solveCase(ws: Workspace, id: string, loads: CaseLoads, options: 
     slackMembers: members.filter((m) => m.slack).map((m) => m.id),
     nodes: nodeResults(model, positions),
     members,
-    reactions: reactionResults(model, ws.fInt, ws.fExt),
+    reactions: reactionResults(model, ws.fInt, ws.fExt, out.u),
     stats: {
       dofs: freeDofs, iterations: out.iterations, loadSteps: out.loadSteps,
       seconds: (nowMs() - t0) / 1000, residual: converged ? residual : out.residual,
@@ -58,7 +61,7 @@ export function solveCase(ws: Workspace, id: string, loads: CaseLoads, options: 
     },
   };
   if (!converged) result.message = explain(ws, out.status, out.loadFactor, out.singularDofs, untensioned >= 0);
-  return { result, fields };
+  return { result, fields, displacements: out.u };
 }
 
 function explain(ws: Workspace, status: CaseResult['status'], loadFactor: number, dofs?: number[], untensioned = false): string {

@@ -1,10 +1,8 @@
 /**
- * Modes about a solved case of the truss/cable model: the tangent stiffness of the pretensioned,
- * loaded structure at its converged state and the lumped mass (member self-mass — present whether or
- * not the case applies self-weight —, the case's ice mass, added node masses).
- * Slack members (any element slack at the solved state) add mass, lumped to their end nodes, and
- * no stiffness; their interior nodes leave the eigenproblem. The eigen-solver itself
- * (block-lanczos.ts) sees only a sparse tangent, a mass per DOF and the free DOFs.
+ * Modes about a solved case: the tangent stiffness of the pretensioned, loaded structure at its
+ * converged state and the lumped mass (modal-model.ts), the lowest modes by block Lanczos
+ * (block-lanczos.ts, which sees only a sparse tangent, a mass per DOF and the free DOFs), and the
+ * effective modal masses. Slack members add mass and no stiffness, and the result says so.
  */
 import type { Workspace } from '../analysis/workspace.ts';
 import type { CaseSolution } from '../analysis/solve-case.ts';
@@ -13,9 +11,7 @@ import type { ProjectFile, Vec3 } from '../project/types.ts';
 import type { AnalysisModel } from '../model/analysis-model.ts';
 import type { DofName, ModalNote, ModalOutcome, ModeResult } from './modes-types.ts';
 import { nowMs } from '../analysis/clock.ts';
-import { nodeMassPerDof } from '../loads/node-mass.ts';
-import { trussTangent } from './truss-tangent.ts';
-import { trussLumpedMass } from './lumped-mass.ts';
+import { modalModel } from './modal-model.ts';
 import { lowestModes } from './block-lanczos.ts';
 import { effectiveModalMasses } from './modal-mass.ts';
 
@@ -32,37 +28,20 @@ export function modesOfSolvedCase(
   ws: Workspace, project: ProjectFile, loads: CaseLoads, solved: CaseSolution, options: ModeOptions = {},
 ): ModalOutcome {
   const t0 = nowMs();
-  const { model, pattern } = ws;
+  const { model } = ws;
   const { result, fields } = solved;
   if (!result.converged) return { ok: false, refusal: { code: 'caseNotConverged', case: result.id, status: result.status } };
+  const u = solved.displacements ?? translationsOnly(model, fields.positions);
+  const { problem, direction, massOnly } = modalModel(ws, project, loads, u, fields.elementSlack);
+  const { mass, free } = problem;
 
-  const massOnly = new Set<number>();
-  const skip = new Uint8Array(model.elementCount);
-  const free = new Uint8Array(3 * model.nodeCount);
-  for (let d = 0; d < free.length; d++) free[d] = model.fixed[d] ? 0 : 1;
-  for (const member of model.members) {
-    let slack = false;
-    for (let k = 0; k < member.elementCount; k++) if (fields.elementSlack[member.firstElement + k]) slack = true;
-    if (!slack) continue;
-    massOnly.add(member.index);
-    for (let k = 0; k < member.elementCount; k++) skip[member.firstElement + k] = 1;
-    for (let k = 1; k < member.nodeChain.length - 1; k++) free.fill(0, 3 * member.nodeChain[k], 3 * member.nodeChain[k] + 3);
-  }
-
-  const stiffness = trussTangent(model, pattern, fields.positions, loads.temperatureChange, skip);
-  const mass = trussLumpedMass(model, loads.extraMassPerLength, nodeMassPerDof(model, project), massOnly);
   const requested = Math.max(1, Math.floor(options.count ?? DEFAULT_MODE_COUNT));
-  const out = lowestModes(
-    { n: pattern.n, colPtr: pattern.colPtr, rowIdx: pattern.rowIdx, stiffness, mass, free, blockSize: 3 },
-    { count: requested, tolerance: options.tolerance },
-  );
+  const out = lowestModes(problem, { count: requested, tolerance: options.tolerance });
   if (!out.ok) {
     const f = out.failure;
     return { ok: false, refusal: f.code === 'mechanism' ? { code: 'mechanism', dof: nameDof(model, f.dof) } : f };
   }
   const s = out.solution;
-  const direction = new Int8Array(mass.length);
-  for (let d = 0; d < direction.length; d++) direction[d] = d % 3;
   const { effective, movable } = effectiveModalMasses(s.vectors, mass, free, direction);
   const cumulative: Vec3 = [0, 0, 0];
   const modes: ModeResult[] = Array.from(s.eigenvalues, (lambda, k) => {
@@ -77,7 +56,7 @@ export function modesOfSolvedCase(
   });
 
   const notes: ModalNote[] = [];
-  if (massOnly.size > 0) notes.push({ code: 'slackMembersMassOnly', members: model.members.filter((m) => massOnly.has(m.index)).map((m) => m.id) });
+  if (massOnly.length > 0) notes.push({ code: 'slackMembersMassOnly', members: massOnly.map((k) => model.members[k].id) });
   if (s.eigenvalues.length < requested) notes.push({ code: 'fewerModesThanRequested', requested, available: s.eigenvalues.length });
   if (!s.converged) notes.push({ code: 'modesNotConverged', worstResidual: Math.max(...s.residuals) });
   if (loads.follower) notes.push({ code: 'followerLoadStiffnessOmitted' });
@@ -93,10 +72,18 @@ export function modesOfSolvedCase(
   };
 }
 
-/** A DOF by its node: user node id, or member and interior node number. */
+/** u from positions for a model without rotations. */
+function translationsOnly(model: AnalysisModel, positions: Float64Array): Float64Array {
+  if (model.dofs.count !== model.dofs.translationCount) throw new Error('modes: the solved state lacks its rotations (CaseSolution.displacements)');
+  const u = new Float64Array(model.dofs.count);
+  for (let d = 0; d < u.length; d++) u[d] = positions[d] - model.coords[d];
+  return u;
+}
+
+/** A DOF by its node: user node id, or member and interior node number; rotations as rx, ry, rz. */
 export function nameDof(model: AnalysisModel, dof: number): DofName {
-  const node = Math.floor(dof / 3);
-  const direction = (['x', 'y', 'z'] as const)[dof % 3];
+  const node = model.dofs.dofNode[dof];
+  const direction = (['x', 'y', 'z', 'rx', 'ry', 'rz'] as const)[model.dofs.dofDirection[dof]];
   if (node < model.userNodeCount) return { node: model.nodeIds[node], direction };
   for (const m of model.members) {
     const k = m.nodeChain.indexOf(node);

@@ -29,7 +29,7 @@ export interface DofName {
   node?: string;
   member?: string;
   interior?: number;
-  direction: 'x' | 'y' | 'z';
+  direction: 'x' | 'y' | 'z' | 'rx' | 'ry' | 'rz';
 }
 
 /** Facts about the modal model the reader must know. */
@@ -61,7 +61,10 @@ export interface ModalAnalysis {
   stats: { dofs: number; solves: number; basisSize: number; seconds: number };
 }
 
-/** Mode shapes, 3 × nodeCount each, mass-normalised (φᵀ M φ = 1; entries in 1/√kg), 0 at DOFs that do not move. */
+/**
+ * Mode shapes over the model's DOF map (dofs.count each: translations of node i at 3i..3i+2, then
+ * rotations), mass-normalised (φᵀ M φ = 1), 0 at DOFs that do not take part.
+ */
 export interface ModalFields {
   shapes: Float64Array[];
 }

@@ -1,8 +1,8 @@
 /**
  * Legal models that once stalled or could stall the solver: low or zero pretension, cables much
  * longer than their chord, single and multi-segment, built from the demos and by hand. Invented
- * test structures, not designs. Each names the load cases to run (no wind: the balance check
- * needs the applied loads known independently of the solver).
+ * test structures, not designs. Each names the load cases to run (no wind or area loads: the
+ * balance check needs the applied loads known independently of the solver).
  */
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
@@ -88,7 +88,7 @@ function loadedJoint(factor: number, massPerLength: number, segments: number): P
 
 export function legalModels(): LegalModel[] {
   const models: LegalModel[] = [];
-  const add = (name: string, project: ProjectFile, cases = project.loadCases.filter((c) => !c.wind).map((c) => c.id)) => models.push({ name, project, cases });
+  const add = (name: string, project: ProjectFile, cases = project.loadCases.filter((c) => !c.wind && !c.areaLoads).map((c) => c.id)) => models.push({ name, project, cases });
 
   // README sample cable (inclined, 20 segments) by pretension, from zero to well above its weight.
   for (const P of [0, 0.01, 1, 100, 1e3, 1e4]) add(`inclined cable, pretension ${P} N`, cable([40, 0, 30], { segments: 20, pretension: P }));
