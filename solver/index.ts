@@ -38,3 +38,4 @@ export * from './sequence/index.ts';
 export { estimateModelSize, checkModelBudget, DEFAULT_MODEL_BUDGET } from './model/model-budget.ts';
 export type { ModelBudget, ModelSizeEstimate, BudgetVerdict, BudgetItem, SizeDriver } from './model/model-budget.ts';
 export * from './asbuilt/index.ts';
+export * from './modes/index.ts';

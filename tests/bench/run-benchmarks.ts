@@ -54,6 +54,7 @@ async function main(): Promise<void> {
   cholmod.printCholmodComparison(cholmod.runCholmodComparison(100));
   await optionalSuite('design/design-bench.ts', 'runDesignBenchmark');
   await optionalSuite('tuning/live-resolve-bench.ts', 'runLiveResolveBenchmark');
+  await optionalSuite('modes/modes-bench.ts', 'runModesBenchmark');
 }
 
 await main();

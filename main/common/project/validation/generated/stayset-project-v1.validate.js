@@ -3,8 +3,8 @@
 "use strict";
 export const validate = validate10;
 export default validate10;
-const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 1","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":1,"x-message":"{field} must be 1"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"sequences":{"type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"$ref":"#/definitions/report"},"panels":{"type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"type":"array","items":{"$ref":"#/definitions/memberLoss"}}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"}}},"springs":{"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"sequenceStep":{"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}},"sequence":{"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}},"report":{"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}},"panel":{"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}},"pressureCoefficient":{"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}},"areaLoad":{"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}},"memberLoss":{"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}}}};
-const schema125 = {"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}};
+const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 1","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":1,"x-message":"{field} must be 1"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"sequences":{"type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"$ref":"#/definitions/report"},"panels":{"type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"type":"array","items":{"$ref":"#/definitions/memberLoss"}}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"},"mass":{"$ref":"#/definitions/nonNegative"}}},"springs":{"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"sequenceStep":{"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}},"sequence":{"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}},"report":{"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}},"panel":{"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}},"pressureCoefficient":{"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}},"areaLoad":{"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}},"memberLoss":{"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}}}};
+const schema126 = {"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}};
 const func2 = Object.prototype.hasOwnProperty;
 const schema12 = {"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}};
 const schema13 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}};
@@ -130,13 +130,13 @@ validate11.errors = vErrors;
 return errors === 0;
 }
 
-const schema14 = {"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"}}};
+const schema14 = {"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"},"mass":{"$ref":"#/definitions/nonNegative"}}};
 const schema15 = {"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}};
 const schema16 = {"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"};
+const schema18 = {"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}};
 const pattern0 = new RegExp("^\\S(.*\\S)?$", "u");
 const pattern1 = new RegExp("^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$", "u");
 const schema17 = {"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}};
-const schema18 = {"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}};
 
 function validate14(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -345,7 +345,7 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!((((key0 === "id") || (key0 === "at")) || (key0 === "fixed")) || (key0 === "springs"))){
+if(!(((((key0 === "id") || (key0 === "at")) || (key0 === "fixed")) || (key0 === "springs")) || (key0 === "mass"))){
 const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema14,data};
 if(vErrors === null){
 vErrors = [err2];
@@ -461,9 +461,11 @@ vErrors = vErrors === null ? validate14.errors : vErrors.concat(validate14.error
 errors = vErrors.length;
 }
 }
-}
-else {
-const err11 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema14.type,parentSchema:schema14,data};
+if(data.mass !== undefined){
+let data5 = data.mass;
+if((typeof data5 == "number") && (isFinite(data5))){
+if(data5 < 0 || isNaN(data5)){
+const err11 = {instancePath:instancePath+"/mass",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data5};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -472,19 +474,42 @@ vErrors.push(err11);
 }
 errors++;
 }
+}
+else {
+const err12 = {instancePath:instancePath+"/mass",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data5};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+}
+else {
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema14.type,parentSchema:schema14,data};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
 validate13.errors = vErrors;
 return errors === 0;
 }
 
-const schema24 = {"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}};
-const schema26 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}};
+const schema25 = {"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}};
+const schema27 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}};
 
 function validate17(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema25.required,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -494,7 +519,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.E === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "E"},message:"must have required property '"+"E"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "E"},message:"must have required property '"+"E"+"'",schema:schema25.required,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -504,7 +529,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.area === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "area"},message:"must have required property '"+"area"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "area"},message:"must have required property '"+"area"+"'",schema:schema25.required,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -514,8 +539,8 @@ vErrors.push(err2);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema24.properties, key0))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema24,data};
+if(!(func2.call(schema25.properties, key0))){
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -553,7 +578,7 @@ errors++;
 if(data.E !== undefined){
 let data1 = data.E;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err6 = {instancePath:instancePath+"/E",schemaPath:"#/properties/E/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.E.type,parentSchema:schema24.properties.E,data:data1};
+const err6 = {instancePath:instancePath+"/E",schemaPath:"#/properties/E/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.E.type,parentSchema:schema25.properties.E,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -566,7 +591,7 @@ errors++;
 if(data.area !== undefined){
 let data2 = data.area;
 if(!((typeof data2 == "number") && (isFinite(data2)))){
-const err7 = {instancePath:instancePath+"/area",schemaPath:"#/properties/area/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.area.type,parentSchema:schema24.properties.area,data:data2};
+const err7 = {instancePath:instancePath+"/area",schemaPath:"#/properties/area/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.area.type,parentSchema:schema25.properties.area,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -579,7 +604,7 @@ errors++;
 if(data.massPerLength !== undefined){
 let data3 = data.massPerLength;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err8 = {instancePath:instancePath+"/massPerLength",schemaPath:"#/properties/massPerLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.massPerLength.type,parentSchema:schema24.properties.massPerLength,data:data3};
+const err8 = {instancePath:instancePath+"/massPerLength",schemaPath:"#/properties/massPerLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.massPerLength.type,parentSchema:schema25.properties.massPerLength,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -593,7 +618,7 @@ if(data.breakingLoad !== undefined){
 let data4 = data.breakingLoad;
 if((typeof data4 == "number") && (isFinite(data4))){
 if(data4 <= 0 || isNaN(data4)){
-const err9 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data4};
+const err9 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -604,7 +629,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data4};
+const err10 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -617,7 +642,7 @@ errors++;
 if(data.thermalExpansion !== undefined){
 let data5 = data.thermalExpansion;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err11 = {instancePath:instancePath+"/thermalExpansion",schemaPath:"#/properties/thermalExpansion/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.thermalExpansion.type,parentSchema:schema24.properties.thermalExpansion,data:data5};
+const err11 = {instancePath:instancePath+"/thermalExpansion",schemaPath:"#/properties/thermalExpansion/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.thermalExpansion.type,parentSchema:schema25.properties.thermalExpansion,data:data5};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -631,7 +656,7 @@ if(data.diameter !== undefined){
 let data6 = data.diameter;
 if((typeof data6 == "number") && (isFinite(data6))){
 if(data6 <= 0 || isNaN(data6)){
-const err12 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data6};
+const err12 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data6};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -642,7 +667,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data6};
+const err13 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -681,7 +706,7 @@ if(data.lattice !== undefined){
 let data8 = data.lattice;
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 if(data8.faceWidth === undefined){
-const err16 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "faceWidth"},message:"must have required property '"+"faceWidth"+"'",schema:schema24.properties.lattice.required,parentSchema:schema24.properties.lattice,data:data8};
+const err16 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "faceWidth"},message:"must have required property '"+"faceWidth"+"'",schema:schema25.properties.lattice.required,parentSchema:schema25.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -691,7 +716,7 @@ vErrors.push(err16);
 errors++;
 }
 if(data8.solidity === undefined){
-const err17 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "solidity"},message:"must have required property '"+"solidity"+"'",schema:schema24.properties.lattice.required,parentSchema:schema24.properties.lattice,data:data8};
+const err17 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "solidity"},message:"must have required property '"+"solidity"+"'",schema:schema25.properties.lattice.required,parentSchema:schema25.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -702,7 +727,7 @@ errors++;
 }
 for(const key1 in data8){
 if(!((((key1 === "faceWidth") || (key1 === "solidity")) || (key1 === "dragFactor")) || (key1 === "share"))){
-const err18 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema24.properties.lattice,data:data8};
+const err18 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema25.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -716,7 +741,7 @@ if(data8.faceWidth !== undefined){
 let data9 = data8.faceWidth;
 if((typeof data9 == "number") && (isFinite(data9))){
 if(data9 <= 0 || isNaN(data9)){
-const err19 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data9};
+const err19 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data9};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -727,7 +752,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data9};
+const err20 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data9};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -741,7 +766,7 @@ if(data8.solidity !== undefined){
 let data10 = data8.solidity;
 if((typeof data10 == "number") && (isFinite(data10))){
 if(data10 > 1 || isNaN(data10)){
-const err21 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema24.properties.lattice.properties.solidity,data:data10};
+const err21 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema25.properties.lattice.properties.solidity,data:data10};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -751,7 +776,7 @@ vErrors.push(err21);
 errors++;
 }
 if(data10 < 0 || isNaN(data10)){
-const err22 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema24.properties.lattice.properties.solidity,data:data10};
+const err22 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema25.properties.lattice.properties.solidity,data:data10};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -762,7 +787,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.lattice.properties.solidity.type,parentSchema:schema24.properties.lattice.properties.solidity,data:data10};
+const err23 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.lattice.properties.solidity.type,parentSchema:schema25.properties.lattice.properties.solidity,data:data10};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -801,7 +826,7 @@ if(data8.share !== undefined){
 let data12 = data8.share;
 if((typeof data12 == "number") && (isFinite(data12))){
 if(data12 > 1 || isNaN(data12)){
-const err26 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema24.properties.lattice.properties.share,data:data12};
+const err26 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema25.properties.lattice.properties.share,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -811,7 +836,7 @@ vErrors.push(err26);
 errors++;
 }
 if(data12 <= 0 || isNaN(data12)){
-const err27 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema24.properties.lattice.properties.share,data:data12};
+const err27 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema25.properties.lattice.properties.share,data:data12};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -822,7 +847,7 @@ errors++;
 }
 }
 else {
-const err28 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.lattice.properties.share.type,parentSchema:schema24.properties.lattice.properties.share,data:data12};
+const err28 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.lattice.properties.share.type,parentSchema:schema25.properties.lattice.properties.share,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -834,7 +859,7 @@ errors++;
 }
 }
 else {
-const err29 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema24.properties.lattice.type,parentSchema:schema24.properties.lattice,data:data8};
+const err29 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema25.properties.lattice.type,parentSchema:schema25.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -847,7 +872,7 @@ errors++;
 if(data.label !== undefined){
 let data13 = data.label;
 if(typeof data13 !== "string"){
-const err30 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema24.properties.label.type,parentSchema:schema24.properties.label,data:data13};
+const err30 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema25.properties.label.type,parentSchema:schema25.properties.label,data:data13};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -861,7 +886,7 @@ if(data.G !== undefined){
 let data14 = data.G;
 if((typeof data14 == "number") && (isFinite(data14))){
 if(data14 <= 0 || isNaN(data14)){
-const err31 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data14};
+const err31 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data14};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -872,7 +897,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data14};
+const err32 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data14};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -886,7 +911,7 @@ if(data.Iy !== undefined){
 let data15 = data.Iy;
 if((typeof data15 == "number") && (isFinite(data15))){
 if(data15 <= 0 || isNaN(data15)){
-const err33 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data15};
+const err33 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data15};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -897,7 +922,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data15};
+const err34 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data15};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -911,7 +936,7 @@ if(data.Iz !== undefined){
 let data16 = data.Iz;
 if((typeof data16 == "number") && (isFinite(data16))){
 if(data16 <= 0 || isNaN(data16)){
-const err35 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data16};
+const err35 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data16};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -922,7 +947,7 @@ errors++;
 }
 }
 else {
-const err36 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data16};
+const err36 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data16};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -936,7 +961,7 @@ if(data.J !== undefined){
 let data17 = data.J;
 if((typeof data17 == "number") && (isFinite(data17))){
 if(data17 <= 0 || isNaN(data17)){
-const err37 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data17};
+const err37 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data17};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -947,7 +972,7 @@ errors++;
 }
 }
 else {
-const err38 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data17};
+const err38 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data17};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -961,7 +986,7 @@ if(data.yieldStrength !== undefined){
 let data18 = data.yieldStrength;
 if((typeof data18 == "number") && (isFinite(data18))){
 if(data18 <= 0 || isNaN(data18)){
-const err39 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data18};
+const err39 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data18};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -972,7 +997,7 @@ errors++;
 }
 }
 else {
-const err40 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data18};
+const err40 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data18};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -984,7 +1009,7 @@ errors++;
 }
 }
 else {
-const err41 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema24.type,parentSchema:schema24,data};
+const err41 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema25.type,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -997,10 +1022,10 @@ validate17.errors = vErrors;
 return errors === 0;
 }
 
-const schema36 = {"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
-const schema44 = {"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}};
+const schema37 = {"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
+const schema45 = {"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}};
 const pattern8 = new RegExp("^(?!.*(.).*\\1)[xyz]{0,3}$", "u");
-const schema41 = {"type":"array","items":{"$ref":"#/definitions/id"}};
+const schema42 = {"type":"array","items":{"$ref":"#/definitions/id"}};
 
 function validate20(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -1034,7 +1059,7 @@ errors++;
 }
 }
 else {
-const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema41.type,parentSchema:schema41,data};
+const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema42.type,parentSchema:schema42,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1068,7 +1093,7 @@ errors++;
 }
 var valid0 = _errs2 === errors;
 if(valid0){
-const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema36.not,parentSchema:schema36,data};
+const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema37.not,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1090,7 +1115,7 @@ vErrors = null;
 }
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema36.required,parentSchema:schema36,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema37.required,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1100,7 +1125,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.kind === undefined){
-const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema36.required,parentSchema:schema36,data};
+const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema37.required,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1110,7 +1135,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.from === undefined){
-const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema36.required,parentSchema:schema36,data};
+const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema37.required,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1120,7 +1145,7 @@ vErrors.push(err4);
 errors++;
 }
 if(data.to === undefined){
-const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema36.required,parentSchema:schema36,data};
+const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema37.required,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1130,7 +1155,7 @@ vErrors.push(err5);
 errors++;
 }
 if(data.section === undefined){
-const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema36.required,parentSchema:schema36,data};
+const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema37.required,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1140,8 +1165,8 @@ vErrors.push(err6);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema36.properties, key0))){
-const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema36,data};
+if(!(func2.call(schema37.properties, key0))){
+const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1179,7 +1204,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "cable") || (data1 === "bar")) || (data1 === "beam"))){
-const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema36.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema36.properties.kind.enum,parentSchema:schema36.properties.kind,data:data1};
+const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema37.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema37.properties.kind.enum,parentSchema:schema37.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -1267,7 +1292,7 @@ errors++;
 if(data.segments !== undefined){
 let data5 = data.segments;
 if(!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))){
-const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema36.properties.segments.type,parentSchema:schema36.properties.segments,data:data5};
+const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema37.properties.segments.type,parentSchema:schema37.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -1278,7 +1303,7 @@ errors++;
 }
 if((typeof data5 == "number") && (isFinite(data5))){
 if(data5 > 10000 || isNaN(data5)){
-const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/maximum",keyword:"maximum",params:{comparison: "<=", limit: 10000},message:"must be <= 10000",schema:10000,parentSchema:schema36.properties.segments,data:data5};
+const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/maximum",keyword:"maximum",params:{comparison: "<=", limit: 10000},message:"must be <= 10000",schema:10000,parentSchema:schema37.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -1288,7 +1313,7 @@ vErrors.push(err18);
 errors++;
 }
 if(data5 < 1 || isNaN(data5)){
-const err19 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema36.properties.segments,data:data5};
+const err19 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema37.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -1302,7 +1327,7 @@ errors++;
 if(data.pretension !== undefined){
 let data6 = data.pretension;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err20 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema36.properties.pretension.type,parentSchema:schema36.properties.pretension,data:data6};
+const err20 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema37.properties.pretension.type,parentSchema:schema37.properties.pretension,data:data6};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -1315,7 +1340,7 @@ errors++;
 if(data.unstressedLength !== undefined){
 let data7 = data.unstressedLength;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err21 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema36.properties.unstressedLength.type,parentSchema:schema36.properties.unstressedLength,data:data7};
+const err21 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema37.properties.unstressedLength.type,parentSchema:schema37.properties.unstressedLength,data:data7};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1334,7 +1359,7 @@ errors = vErrors.length;
 if(data.generatedBy !== undefined){
 let data9 = data.generatedBy;
 if(typeof data9 !== "string"){
-const err22 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema36.properties.generatedBy.type,parentSchema:schema36.properties.generatedBy,data:data9};
+const err22 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema37.properties.generatedBy.type,parentSchema:schema37.properties.generatedBy,data:data9};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -1398,7 +1423,7 @@ let data12 = data.releases;
 if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
 for(const key1 in data12){
 if(!((key1 === "start") || (key1 === "end"))){
-const err27 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema36.properties.releases,data:data12};
+const err27 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema37.properties.releases,data:data12};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -1412,7 +1437,7 @@ if(data12.start !== undefined){
 let data13 = data12.start;
 if(typeof data13 === "string"){
 if(!pattern8.test(data13)){
-const err28 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema44,data:data13};
+const err28 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema45,data:data13};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -1423,7 +1448,7 @@ errors++;
 }
 }
 else {
-const err29 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema44.type,parentSchema:schema44,data:data13};
+const err29 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema45.type,parentSchema:schema45,data:data13};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -1437,7 +1462,7 @@ if(data12.end !== undefined){
 let data14 = data12.end;
 if(typeof data14 === "string"){
 if(!pattern8.test(data14)){
-const err30 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema44,data:data14};
+const err30 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema45,data:data14};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -1448,7 +1473,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema44.type,parentSchema:schema44,data:data14};
+const err31 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema45.type,parentSchema:schema45,data:data14};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -1460,7 +1485,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema36.properties.releases.type,parentSchema:schema36.properties.releases,data:data12};
+const err32 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema37.properties.releases.type,parentSchema:schema37.properties.releases,data:data12};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -1472,7 +1497,7 @@ errors++;
 }
 }
 else {
-const err33 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema36.type,parentSchema:schema36,data};
+const err33 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema37.type,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -1485,15 +1510,15 @@ validate19.errors = vErrors;
 return errors === 0;
 }
 
-const schema46 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}};
-const schema48 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}};
+const schema47 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}};
+const schema49 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}};
 
 function validate24(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.node === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema48.required,parentSchema:schema48,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema49.required,parentSchema:schema49,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1503,7 +1528,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.force === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema48.required,parentSchema:schema48,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema49.required,parentSchema:schema49,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1514,7 +1539,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "node") || (key0 === "force")) || (key0 === "moment"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema48,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema49,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1649,7 +1674,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema48.type,parentSchema:schema48,data};
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema49.type,parentSchema:schema49,data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -1662,15 +1687,15 @@ validate24.errors = vErrors;
 return errors === 0;
 }
 
-const schema52 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
-const schema54 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
+const schema53 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema55 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
 
 function validate27(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema54.required,parentSchema:schema54,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema55.required,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1684,7 +1709,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "power"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema54.oneOf[0].required,parentSchema:schema54.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema55.oneOf[0].required,parentSchema:schema55.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1694,7 +1719,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.exponent === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema54.oneOf[0].required,parentSchema:schema54.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema55.oneOf[0].required,parentSchema:schema55.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1705,7 +1730,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((key0 === "kind") || (key0 === "exponent"))){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema54.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema55.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1718,7 +1743,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("power" !== data0){
-const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema54.oneOf[0].properties.kind,data:data0};
+const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema55.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1755,7 +1780,7 @@ errors++;
 }
 }
 else {
-const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema54.oneOf[0].type,parentSchema:schema54.oneOf[0],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.oneOf[0].type,parentSchema:schema55.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1768,7 +1793,7 @@ errors++;
 else if(tag0 === "log"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema54.oneOf[1].required,parentSchema:schema54.oneOf[1],data};
+const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema55.oneOf[1].required,parentSchema:schema55.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1778,7 +1803,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data.roughnessLength === undefined){
-const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema54.oneOf[1].required,parentSchema:schema54.oneOf[1],data};
+const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema55.oneOf[1].required,parentSchema:schema55.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -1789,7 +1814,7 @@ errors++;
 }
 for(const key1 in data){
 if(!((key1 === "kind") || (key1 === "roughnessLength"))){
-const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema54.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema55.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -1802,7 +1827,7 @@ errors++;
 if(data.kind !== undefined){
 let data2 = data.kind;
 if("log" !== data2){
-const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema54.oneOf[1].properties.kind,data:data2};
+const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema55.oneOf[1].properties.kind,data:data2};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -1816,7 +1841,7 @@ if(data.roughnessLength !== undefined){
 let data3 = data.roughnessLength;
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 <= 0 || isNaN(data3)){
-const err12 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data3};
+const err12 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data3};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -1827,7 +1852,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data3};
+const err13 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -1839,7 +1864,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema54.oneOf[1].type,parentSchema:schema54.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.oneOf[1].type,parentSchema:schema55.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -1852,7 +1877,7 @@ errors++;
 else if(tag0 === "uniform"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema54.oneOf[2].required,parentSchema:schema54.oneOf[2],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema55.oneOf[2].required,parentSchema:schema55.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -1863,7 +1888,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(key2 === "kind")){
-const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema54.oneOf[2],data};
+const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema55.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -1876,7 +1901,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("uniform" !== data4){
-const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema54.oneOf[2].properties.kind,data:data4};
+const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema55.oneOf[2].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -1888,7 +1913,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema54.oneOf[2].type,parentSchema:schema54.oneOf[2],data};
+const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.oneOf[2].type,parentSchema:schema55.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -1899,7 +1924,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema54.discriminator,parentSchema:schema54,data};
+const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema55.discriminator,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -1910,7 +1935,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema54.discriminator,parentSchema:schema54,data};
+const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema55.discriminator,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -1921,7 +1946,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema54.type,parentSchema:schema54,data};
+const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.type,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1940,7 +1965,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.direction === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema52.required,parentSchema:schema52,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema53.required,parentSchema:schema53,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1950,7 +1975,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.speed === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema52.required,parentSchema:schema52,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema53.required,parentSchema:schema53,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1961,7 +1986,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "direction") || (key0 === "speed")) || (key0 === "profile")) || (key0 === "airDensity")) || (key0 === "groups"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema52,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema53,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1974,7 +1999,7 @@ errors++;
 if(data.direction !== undefined){
 let data0 = data.direction;
 if(!((typeof data0 == "number") && (isFinite(data0)))){
-const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema52.properties.direction.type,parentSchema:schema52.properties.direction,data:data0};
+const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema53.properties.direction.type,parentSchema:schema53.properties.direction,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2019,7 +2044,7 @@ if(data.airDensity !== undefined){
 let data3 = data.airDensity;
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 <= 0 || isNaN(data3)){
-const err6 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data3};
+const err6 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2030,7 +2055,7 @@ errors++;
 }
 }
 else {
-const err7 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data3};
+const err7 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data3};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2048,7 +2073,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.type,parentSchema:schema52,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema53.type,parentSchema:schema53,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2061,14 +2086,14 @@ validate26.errors = vErrors;
 return errors === 0;
 }
 
-const schema58 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema59 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
 
 function validate31(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.thickness === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema58.required,parentSchema:schema58,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema59.required,parentSchema:schema59,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2079,7 +2104,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "thickness") || (key0 === "density")) || (key0 === "groups"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema58,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema59,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2118,7 +2143,7 @@ if(data.density !== undefined){
 let data1 = data.density;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 <= 0 || isNaN(data1)){
-const err4 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data1};
+const err4 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2129,7 +2154,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data1};
+const err5 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2147,7 +2172,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema58.type,parentSchema:schema58,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema59.type,parentSchema:schema59,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2160,14 +2185,14 @@ validate31.errors = vErrors;
 return errors === 0;
 }
 
-const schema61 = {"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}};
+const schema62 = {"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}};
 
 function validate34(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.node === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema61.required,parentSchema:schema61,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema62.required,parentSchema:schema62,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2178,7 +2203,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "node") || (key0 === "x")) || (key0 === "y")) || (key0 === "z")) || (key0 === "rx")) || (key0 === "ry")) || (key0 === "rz"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema61,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema62,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2216,7 +2241,7 @@ errors++;
 if(data.x !== undefined){
 let data1 = data.x;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err4 = {instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema61.properties.x.type,parentSchema:schema61.properties.x,data:data1};
+const err4 = {instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.x.type,parentSchema:schema62.properties.x,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2229,7 +2254,7 @@ errors++;
 if(data.y !== undefined){
 let data2 = data.y;
 if(!((typeof data2 == "number") && (isFinite(data2)))){
-const err5 = {instancePath:instancePath+"/y",schemaPath:"#/properties/y/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema61.properties.y.type,parentSchema:schema61.properties.y,data:data2};
+const err5 = {instancePath:instancePath+"/y",schemaPath:"#/properties/y/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.y.type,parentSchema:schema62.properties.y,data:data2};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2242,7 +2267,7 @@ errors++;
 if(data.z !== undefined){
 let data3 = data.z;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err6 = {instancePath:instancePath+"/z",schemaPath:"#/properties/z/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema61.properties.z.type,parentSchema:schema61.properties.z,data:data3};
+const err6 = {instancePath:instancePath+"/z",schemaPath:"#/properties/z/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.z.type,parentSchema:schema62.properties.z,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2255,7 +2280,7 @@ errors++;
 if(data.rx !== undefined){
 let data4 = data.rx;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err7 = {instancePath:instancePath+"/rx",schemaPath:"#/properties/rx/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema61.properties.rx.type,parentSchema:schema61.properties.rx,data:data4};
+const err7 = {instancePath:instancePath+"/rx",schemaPath:"#/properties/rx/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.rx.type,parentSchema:schema62.properties.rx,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2268,7 +2293,7 @@ errors++;
 if(data.ry !== undefined){
 let data5 = data.ry;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err8 = {instancePath:instancePath+"/ry",schemaPath:"#/properties/ry/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema61.properties.ry.type,parentSchema:schema61.properties.ry,data:data5};
+const err8 = {instancePath:instancePath+"/ry",schemaPath:"#/properties/ry/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.ry.type,parentSchema:schema62.properties.ry,data:data5};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2281,7 +2306,7 @@ errors++;
 if(data.rz !== undefined){
 let data6 = data.rz;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err9 = {instancePath:instancePath+"/rz",schemaPath:"#/properties/rz/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema61.properties.rz.type,parentSchema:schema61.properties.rz,data:data6};
+const err9 = {instancePath:instancePath+"/rz",schemaPath:"#/properties/rz/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.rz.type,parentSchema:schema62.properties.rz,data:data6};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2293,7 +2318,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema61.type,parentSchema:schema61,data};
+const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.type,parentSchema:schema62,data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2306,15 +2331,15 @@ validate34.errors = vErrors;
 return errors === 0;
 }
 
-const schema63 = {"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}};
-const schema64 = {"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}};
+const schema64 = {"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}};
+const schema65 = {"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}};
 
 function validate38(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.region === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "region"},message:"must have required property '"+"region"+"'",schema:schema64.required,parentSchema:schema64,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "region"},message:"must have required property '"+"region"+"'",schema:schema65.required,parentSchema:schema65,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2324,7 +2349,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.cp === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "cp"},message:"must have required property '"+"cp"+"'",schema:schema64.required,parentSchema:schema64,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "cp"},message:"must have required property '"+"cp"+"'",schema:schema65.required,parentSchema:schema65,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2335,7 +2360,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((key0 === "region") || (key0 === "cp"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema64,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema65,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2373,7 +2398,7 @@ errors++;
 if(data.cp !== undefined){
 let data1 = data.cp;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err5 = {instancePath:instancePath+"/cp",schemaPath:"#/properties/cp/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema64.properties.cp.type,parentSchema:schema64.properties.cp,data:data1};
+const err5 = {instancePath:instancePath+"/cp",schemaPath:"#/properties/cp/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.properties.cp.type,parentSchema:schema65.properties.cp,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2385,7 +2410,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema64.type,parentSchema:schema64,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema65.type,parentSchema:schema65,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2404,7 +2429,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema63.required,parentSchema:schema63,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema64.required,parentSchema:schema64,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2414,7 +2439,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.value === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema63.required,parentSchema:schema63,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema64.required,parentSchema:schema64,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2425,7 +2450,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "kind") || (key0 === "value")) || (key0 === "panels")) || (key0 === "coefficients"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema63,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema64,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2438,7 +2463,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if(!(((data0 === "snow") || (data0 === "cladding")) || (data0 === "pressure"))){
-const err3 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema63.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema63.properties.kind.enum,parentSchema:schema63.properties.kind,data:data0};
+const err3 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema64.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema64.properties.kind.enum,parentSchema:schema64.properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2451,7 +2476,7 @@ errors++;
 if(data.value !== undefined){
 let data1 = data.value;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err4 = {instancePath:instancePath+"/value",schemaPath:"#/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema63.properties.value.type,parentSchema:schema63.properties.value,data:data1};
+const err4 = {instancePath:instancePath+"/value",schemaPath:"#/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema64.properties.value.type,parentSchema:schema64.properties.value,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2479,7 +2504,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err5 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema63.properties.coefficients.type,parentSchema:schema63.properties.coefficients,data:data3};
+const err5 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema64.properties.coefficients.type,parentSchema:schema64.properties.coefficients,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2491,7 +2516,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema63.type,parentSchema:schema63,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema64.type,parentSchema:schema64,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2510,7 +2535,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema46.required,parentSchema:schema46,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema47.required,parentSchema:schema47,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2520,8 +2545,8 @@ vErrors.push(err0);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema46.properties, key0))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema46,data};
+if(!(func2.call(schema47.properties, key0))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema47,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2559,7 +2584,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema46.properties.label.type,parentSchema:schema46.properties.label,data:data1};
+const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema47.properties.label.type,parentSchema:schema47.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2572,7 +2597,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data2 = data.selfWeight;
 if(typeof data2 !== "boolean"){
-const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema46.properties.selfWeight.type,parentSchema:schema46.properties.selfWeight,data:data2};
+const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema47.properties.selfWeight.type,parentSchema:schema47.properties.selfWeight,data:data2};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2585,7 +2610,7 @@ errors++;
 if(data.temperatureChange !== undefined){
 let data3 = data.temperatureChange;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema46.properties.temperatureChange.type,parentSchema:schema46.properties.temperatureChange,data:data3};
+const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema47.properties.temperatureChange.type,parentSchema:schema47.properties.temperatureChange,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2607,7 +2632,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema46.properties.nodalLoads.type,parentSchema:schema46.properties.nodalLoads,data:data4};
+const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema47.properties.nodalLoads.type,parentSchema:schema47.properties.nodalLoads,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2641,7 +2666,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err8 = {instancePath:instancePath+"/displacements",schemaPath:"#/properties/displacements/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema46.properties.displacements.type,parentSchema:schema46.properties.displacements,data:data8};
+const err8 = {instancePath:instancePath+"/displacements",schemaPath:"#/properties/displacements/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema47.properties.displacements.type,parentSchema:schema47.properties.displacements,data:data8};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2663,7 +2688,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err9 = {instancePath:instancePath+"/areaLoads",schemaPath:"#/properties/areaLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema46.properties.areaLoads.type,parentSchema:schema46.properties.areaLoads,data:data10};
+const err9 = {instancePath:instancePath+"/areaLoads",schemaPath:"#/properties/areaLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema47.properties.areaLoads.type,parentSchema:schema47.properties.areaLoads,data:data10};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2675,7 +2700,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema46.type,parentSchema:schema46,data};
+const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema47.type,parentSchema:schema47,data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2688,14 +2713,14 @@ validate23.errors = vErrors;
 return errors === 0;
 }
 
-const schema66 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
+const schema67 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
 
 function validate42(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema66.required,parentSchema:schema66,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema67.required,parentSchema:schema67,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2705,7 +2730,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.members === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema66.required,parentSchema:schema66,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema67.required,parentSchema:schema67,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2716,7 +2741,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "label")) || (key0 === "members"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema66,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema67,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2754,7 +2779,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema66.properties.label.type,parentSchema:schema66.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema67.properties.label.type,parentSchema:schema67.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2772,7 +2797,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema66.type,parentSchema:schema66,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema67.type,parentSchema:schema67,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2785,14 +2810,14 @@ validate42.errors = vErrors;
 return errors === 0;
 }
 
-const schema68 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}};
+const schema69 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}};
 
 function validate45(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema68.required,parentSchema:schema68,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema69.required,parentSchema:schema69,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2802,7 +2827,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.factors === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema68.required,parentSchema:schema68,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema69.required,parentSchema:schema69,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2813,7 +2838,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "label")) || (key0 === "factors"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema68,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema69,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2851,7 +2876,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema68.properties.label.type,parentSchema:schema68.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema69.properties.label.type,parentSchema:schema69.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2865,7 +2890,7 @@ if(data.factors !== undefined){
 let data2 = data.factors;
 if(Array.isArray(data2)){
 if(data2.length < 1){
-const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema68.properties.factors,data:data2};
+const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema69.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2879,7 +2904,7 @@ for(let i0=0; i0<len0; i0++){
 let data3 = data2[i0];
 if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
 if(data3.case === undefined){
-const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema68.properties.factors.items.required,parentSchema:schema68.properties.factors.items,data:data3};
+const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema69.properties.factors.items.required,parentSchema:schema69.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2889,7 +2914,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data3.factor === undefined){
-const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema68.properties.factors.items.required,parentSchema:schema68.properties.factors.items,data:data3};
+const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema69.properties.factors.items.required,parentSchema:schema69.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2900,7 +2925,7 @@ errors++;
 }
 for(const key1 in data3){
 if(!((key1 === "case") || (key1 === "factor"))){
-const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema68.properties.factors.items,data:data3};
+const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema69.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2938,7 +2963,7 @@ errors++;
 if(data3.factor !== undefined){
 let data5 = data3.factor;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema68.properties.factors.items.properties.factor.type,parentSchema:schema68.properties.factors.items.properties.factor,data:data5};
+const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.factors.items.properties.factor.type,parentSchema:schema69.properties.factors.items.properties.factor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2950,7 +2975,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema68.properties.factors.items.type,parentSchema:schema68.properties.factors.items,data:data3};
+const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema69.properties.factors.items.type,parentSchema:schema69.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2962,7 +2987,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema68.properties.factors.type,parentSchema:schema68.properties.factors,data:data2};
+const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema69.properties.factors.type,parentSchema:schema69.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2974,7 +2999,7 @@ errors++;
 }
 }
 else {
-const err15 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema68.type,parentSchema:schema68,data};
+const err15 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema69.type,parentSchema:schema69,data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -2987,14 +3012,14 @@ validate45.errors = vErrors;
 return errors === 0;
 }
 
-const schema71 = {"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}};
-const schema73 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
+const schema72 = {"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}};
+const schema74 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
 
 function validate49(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(!(data && typeof data == "object" && !Array.isArray(data))){
-const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema73.type,parentSchema:schema73,data};
+const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema74.type,parentSchema:schema74,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3009,7 +3034,7 @@ let passing0 = null;
 const _errs2 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.fractionOfSpan === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema73.oneOf[0].required,parentSchema:schema73.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema74.oneOf[0].required,parentSchema:schema74.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3020,7 +3045,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(key0 === "fractionOfSpan")){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema73.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema74.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3034,7 +3059,7 @@ if(data.fractionOfSpan !== undefined){
 let data0 = data.fractionOfSpan;
 if((typeof data0 == "number") && (isFinite(data0))){
 if(data0 <= 0 || isNaN(data0)){
-const err3 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data0};
+const err3 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3045,7 +3070,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data0};
+const err4 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data0};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3057,7 +3082,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema73.oneOf[0].type,parentSchema:schema73.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema74.oneOf[0].type,parentSchema:schema74.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3074,7 +3099,7 @@ passing0 = 0;
 const _errs9 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.absolute === undefined){
-const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema73.oneOf[1].required,parentSchema:schema73.oneOf[1],data};
+const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema74.oneOf[1].required,parentSchema:schema74.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3085,7 +3110,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(key1 === "absolute")){
-const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema73.oneOf[1],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema74.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3099,7 +3124,7 @@ if(data.absolute !== undefined){
 let data1 = data.absolute;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 <= 0 || isNaN(data1)){
-const err8 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data1};
+const err8 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data1};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3110,7 +3135,7 @@ errors++;
 }
 }
 else {
-const err9 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data1};
+const err9 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data1};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3122,7 +3147,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema73.oneOf[1].type,parentSchema:schema73.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema74.oneOf[1].type,parentSchema:schema74.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3143,7 +3168,7 @@ passing0 = 1;
 }
 }
 if(!valid0){
-const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema73.oneOf,parentSchema:schema73,data};
+const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema74.oneOf,parentSchema:schema74,data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3174,7 +3199,7 @@ let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((((((key0 === "resistanceFactor") || (key0 === "noSlackGroups")) || (key0 === "sagLimits")) || (key0 === "displacementLimits")) || (key0 === "tiltLimits")) || (key0 === "upliftNodes"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema71,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3188,7 +3213,7 @@ if(data.resistanceFactor !== undefined){
 let data0 = data.resistanceFactor;
 if((typeof data0 == "number") && (isFinite(data0))){
 if(data0 > 1 || isNaN(data0)){
-const err1 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema71.properties.resistanceFactor,data:data0};
+const err1 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema72.properties.resistanceFactor,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3198,7 +3223,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data0 <= 0 || isNaN(data0)){
-const err2 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema71.properties.resistanceFactor,data:data0};
+const err2 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema72.properties.resistanceFactor,data:data0};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3209,7 +3234,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema71.properties.resistanceFactor.type,parentSchema:schema71.properties.resistanceFactor,data:data0};
+const err3 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema72.properties.resistanceFactor.type,parentSchema:schema72.properties.resistanceFactor,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3233,7 +3258,7 @@ for(let i0=0; i0<len0; i0++){
 let data3 = data2[i0];
 if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
 if(data3.group === undefined){
-const err4 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema71.properties.sagLimits.items.required,parentSchema:schema71.properties.sagLimits.items,data:data3};
+const err4 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema72.properties.sagLimits.items.required,parentSchema:schema72.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3243,7 +3268,7 @@ vErrors.push(err4);
 errors++;
 }
 if(data3.limit === undefined){
-const err5 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema71.properties.sagLimits.items.required,parentSchema:schema71.properties.sagLimits.items,data:data3};
+const err5 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema72.properties.sagLimits.items.required,parentSchema:schema72.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3254,7 +3279,7 @@ errors++;
 }
 for(const key1 in data3){
 if(!((key1 === "group") || (key1 === "limit"))){
-const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema71.properties.sagLimits.items,data:data3};
+const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema72.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3297,7 +3322,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err9 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema71.properties.sagLimits.items.type,parentSchema:schema71.properties.sagLimits.items,data:data3};
+const err9 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.properties.sagLimits.items.type,parentSchema:schema72.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3309,7 +3334,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema71.properties.sagLimits.type,parentSchema:schema71.properties.sagLimits,data:data2};
+const err10 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema72.properties.sagLimits.type,parentSchema:schema72.properties.sagLimits,data:data2};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3327,7 +3352,7 @@ for(let i1=0; i1<len1; i1++){
 let data7 = data6[i1];
 if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 if(data7.node === undefined){
-const err11 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema71.properties.displacementLimits.items.required,parentSchema:schema71.properties.displacementLimits.items,data:data7};
+const err11 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema72.properties.displacementLimits.items.required,parentSchema:schema72.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3337,7 +3362,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data7.limit === undefined){
-const err12 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema71.properties.displacementLimits.items.required,parentSchema:schema71.properties.displacementLimits.items,data:data7};
+const err12 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema72.properties.displacementLimits.items.required,parentSchema:schema72.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -3348,7 +3373,7 @@ errors++;
 }
 for(const key2 in data7){
 if(!((key2 === "node") || (key2 === "limit"))){
-const err13 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema71.properties.displacementLimits.items,data:data7};
+const err13 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema72.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -3387,7 +3412,7 @@ if(data7.limit !== undefined){
 let data9 = data7.limit;
 if((typeof data9 == "number") && (isFinite(data9))){
 if(data9 <= 0 || isNaN(data9)){
-const err16 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data9};
+const err16 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data9};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -3398,7 +3423,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data9};
+const err17 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -3410,7 +3435,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema71.properties.displacementLimits.items.type,parentSchema:schema71.properties.displacementLimits.items,data:data7};
+const err18 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.properties.displacementLimits.items.type,parentSchema:schema72.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -3422,7 +3447,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema71.properties.displacementLimits.type,parentSchema:schema71.properties.displacementLimits,data:data6};
+const err19 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema72.properties.displacementLimits.type,parentSchema:schema72.properties.displacementLimits,data:data6};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -3440,7 +3465,7 @@ for(let i2=0; i2<len2; i2++){
 let data11 = data10[i2];
 if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
 if(data11.base === undefined){
-const err20 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema71.properties.tiltLimits.items.required,parentSchema:schema71.properties.tiltLimits.items,data:data11};
+const err20 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema72.properties.tiltLimits.items.required,parentSchema:schema72.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -3450,7 +3475,7 @@ vErrors.push(err20);
 errors++;
 }
 if(data11.top === undefined){
-const err21 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema71.properties.tiltLimits.items.required,parentSchema:schema71.properties.tiltLimits.items,data:data11};
+const err21 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema72.properties.tiltLimits.items.required,parentSchema:schema72.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -3460,7 +3485,7 @@ vErrors.push(err21);
 errors++;
 }
 if(data11.limit === undefined){
-const err22 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema71.properties.tiltLimits.items.required,parentSchema:schema71.properties.tiltLimits.items,data:data11};
+const err22 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema72.properties.tiltLimits.items.required,parentSchema:schema72.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -3471,7 +3496,7 @@ errors++;
 }
 for(const key3 in data11){
 if(!(((key3 === "base") || (key3 === "top")) || (key3 === "limit"))){
-const err23 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema71.properties.tiltLimits.items,data:data11};
+const err23 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema72.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -3535,7 +3560,7 @@ if(data11.limit !== undefined){
 let data14 = data11.limit;
 if((typeof data14 == "number") && (isFinite(data14))){
 if(data14 <= 0 || isNaN(data14)){
-const err28 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data14};
+const err28 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data14};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -3546,7 +3571,7 @@ errors++;
 }
 }
 else {
-const err29 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data14};
+const err29 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data14};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -3558,7 +3583,7 @@ errors++;
 }
 }
 else {
-const err30 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema71.properties.tiltLimits.items.type,parentSchema:schema71.properties.tiltLimits.items,data:data11};
+const err30 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.properties.tiltLimits.items.type,parentSchema:schema72.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -3570,7 +3595,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema71.properties.tiltLimits.type,parentSchema:schema71.properties.tiltLimits,data:data10};
+const err31 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema72.properties.tiltLimits.type,parentSchema:schema72.properties.tiltLimits,data:data10};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -3588,7 +3613,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err32 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema71.type,parentSchema:schema71,data};
+const err32 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.type,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -3601,15 +3626,15 @@ validate47.errors = vErrors;
 return errors === 0;
 }
 
-const schema81 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
-const schema83 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
+const schema82 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
+const schema84 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
 
 function validate54(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema83.required,parentSchema:schema83,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.required,parentSchema:schema84,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3623,7 +3648,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "sag"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema83.oneOf[0].required,parentSchema:schema83.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.oneOf[0].required,parentSchema:schema84.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3633,7 +3658,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.group === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema83.oneOf[0].required,parentSchema:schema83.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema84.oneOf[0].required,parentSchema:schema84.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3643,7 +3668,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.case === undefined){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema83.oneOf[0].required,parentSchema:schema83.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema84.oneOf[0].required,parentSchema:schema84.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3653,7 +3678,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.limit === undefined){
-const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema83.oneOf[0].required,parentSchema:schema83.oneOf[0],data};
+const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema84.oneOf[0].required,parentSchema:schema84.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3664,7 +3689,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "kind") || (key0 === "group")) || (key0 === "case")) || (key0 === "limit"))){
-const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema83.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema84.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3677,7 +3702,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("sag" !== data0){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema83.oneOf[0].properties.kind,data:data0};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema84.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3745,7 +3770,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.oneOf[0].type,parentSchema:schema83.oneOf[0],data};
+const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.oneOf[0].type,parentSchema:schema84.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3758,7 +3783,7 @@ errors++;
 else if(tag0 === "tensionShare"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema83.oneOf[1].required,parentSchema:schema83.oneOf[1],data};
+const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.oneOf[1].required,parentSchema:schema84.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -3768,7 +3793,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data.group === undefined){
-const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema83.oneOf[1].required,parentSchema:schema83.oneOf[1],data};
+const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema84.oneOf[1].required,parentSchema:schema84.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -3778,7 +3803,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data.share === undefined){
-const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema83.oneOf[1].required,parentSchema:schema83.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema84.oneOf[1].required,parentSchema:schema84.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -3789,7 +3814,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(((key1 === "kind") || (key1 === "group")) || (key1 === "share"))){
-const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema83.oneOf[1],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema84.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3802,7 +3827,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("tensionShare" !== data4){
-const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema83.oneOf[1].properties.kind,data:data4};
+const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema84.oneOf[1].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -3841,7 +3866,7 @@ if(data.share !== undefined){
 let data6 = data.share;
 if((typeof data6 == "number") && (isFinite(data6))){
 if(data6 <= 0 || isNaN(data6)){
-const err19 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data6};
+const err19 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data6};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -3852,7 +3877,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data6};
+const err20 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data6};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -3864,7 +3889,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.oneOf[1].type,parentSchema:schema83.oneOf[1],data};
+const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.oneOf[1].type,parentSchema:schema84.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -3877,7 +3902,7 @@ errors++;
 else if(tag0 === "noSlack"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema83.oneOf[2].required,parentSchema:schema83.oneOf[2],data};
+const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.oneOf[2].required,parentSchema:schema84.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -3887,7 +3912,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data.group === undefined){
-const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema83.oneOf[2].required,parentSchema:schema83.oneOf[2],data};
+const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema84.oneOf[2].required,parentSchema:schema84.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -3897,7 +3922,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data.case === undefined){
-const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema83.oneOf[2].required,parentSchema:schema83.oneOf[2],data};
+const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema84.oneOf[2].required,parentSchema:schema84.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -3908,7 +3933,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(((key2 === "kind") || (key2 === "group")) || (key2 === "case"))){
-const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema83.oneOf[2],data};
+const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema84.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -3921,7 +3946,7 @@ errors++;
 if(data.kind !== undefined){
 let data7 = data.kind;
 if("noSlack" !== data7){
-const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema83.oneOf[2].properties.kind,data:data7};
+const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema84.oneOf[2].properties.kind,data:data7};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -3983,7 +4008,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.oneOf[2].type,parentSchema:schema83.oneOf[2],data};
+const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.oneOf[2].type,parentSchema:schema84.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -3996,7 +4021,7 @@ errors++;
 else if(tag0 === "plumb"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema83.oneOf[3].required,parentSchema:schema83.oneOf[3],data};
+const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.oneOf[3].required,parentSchema:schema84.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -4006,7 +4031,7 @@ vErrors.push(err32);
 errors++;
 }
 if(data.base === undefined){
-const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema83.oneOf[3].required,parentSchema:schema83.oneOf[3],data};
+const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema84.oneOf[3].required,parentSchema:schema84.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -4016,7 +4041,7 @@ vErrors.push(err33);
 errors++;
 }
 if(data.top === undefined){
-const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema83.oneOf[3].required,parentSchema:schema83.oneOf[3],data};
+const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema84.oneOf[3].required,parentSchema:schema84.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -4026,7 +4051,7 @@ vErrors.push(err34);
 errors++;
 }
 if(data.case === undefined){
-const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema83.oneOf[3].required,parentSchema:schema83.oneOf[3],data};
+const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema84.oneOf[3].required,parentSchema:schema84.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -4036,7 +4061,7 @@ vErrors.push(err35);
 errors++;
 }
 if(data.tolerance === undefined){
-const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema83.oneOf[3].required,parentSchema:schema83.oneOf[3],data};
+const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema84.oneOf[3].required,parentSchema:schema84.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -4047,7 +4072,7 @@ errors++;
 }
 for(const key3 in data){
 if(!(((((key3 === "kind") || (key3 === "base")) || (key3 === "top")) || (key3 === "case")) || (key3 === "tolerance"))){
-const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema83.oneOf[3],data};
+const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema84.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -4060,7 +4085,7 @@ errors++;
 if(data.kind !== undefined){
 let data10 = data.kind;
 if("plumb" !== data10){
-const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema83.oneOf[3].properties.kind,data:data10};
+const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema84.oneOf[3].properties.kind,data:data10};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -4172,7 +4197,7 @@ errors++;
 }
 }
 else {
-const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.oneOf[3].type,parentSchema:schema83.oneOf[3],data};
+const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.oneOf[3].type,parentSchema:schema84.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -4185,7 +4210,7 @@ errors++;
 else if(tag0 === "reaction"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema83.oneOf[4].required,parentSchema:schema83.oneOf[4],data};
+const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.oneOf[4].required,parentSchema:schema84.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -4195,7 +4220,7 @@ vErrors.push(err48);
 errors++;
 }
 if(data.node === undefined){
-const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema83.oneOf[4].required,parentSchema:schema83.oneOf[4],data};
+const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema84.oneOf[4].required,parentSchema:schema84.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -4205,7 +4230,7 @@ vErrors.push(err49);
 errors++;
 }
 if(data.case === undefined){
-const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema83.oneOf[4].required,parentSchema:schema83.oneOf[4],data};
+const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema84.oneOf[4].required,parentSchema:schema84.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -4215,7 +4240,7 @@ vErrors.push(err50);
 errors++;
 }
 if(data.limit === undefined){
-const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema83.oneOf[4].required,parentSchema:schema83.oneOf[4],data};
+const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema84.oneOf[4].required,parentSchema:schema84.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -4226,7 +4251,7 @@ errors++;
 }
 for(const key4 in data){
 if(!((((key4 === "kind") || (key4 === "node")) || (key4 === "case")) || (key4 === "limit"))){
-const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema83.oneOf[4],data};
+const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema84.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -4239,7 +4264,7 @@ errors++;
 if(data.kind !== undefined){
 let data15 = data.kind;
 if("reaction" !== data15){
-const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema83.oneOf[4].properties.kind,data:data15};
+const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema84.oneOf[4].properties.kind,data:data15};
 if(vErrors === null){
 vErrors = [err53];
 }
@@ -4302,7 +4327,7 @@ errors++;
 if(data.limit !== undefined){
 let data18 = data.limit;
 if(!((typeof data18 == "number") && (isFinite(data18)))){
-const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema83.oneOf[4].properties.limit.type,parentSchema:schema83.oneOf[4].properties.limit,data:data18};
+const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema84.oneOf[4].properties.limit.type,parentSchema:schema84.oneOf[4].properties.limit,data:data18};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -4314,7 +4339,7 @@ errors++;
 }
 }
 else {
-const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.oneOf[4].type,parentSchema:schema83.oneOf[4],data};
+const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.oneOf[4].type,parentSchema:schema84.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -4325,7 +4350,7 @@ errors++;
 }
 }
 else {
-const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema83.discriminator,parentSchema:schema83,data};
+const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema84.discriminator,parentSchema:schema84,data};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -4336,7 +4361,7 @@ errors++;
 }
 }
 else {
-const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema83.discriminator,parentSchema:schema83,data};
+const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema84.discriminator,parentSchema:schema84,data};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -4347,7 +4372,7 @@ errors++;
 }
 }
 else {
-const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.type,parentSchema:schema83,data};
+const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.type,parentSchema:schema84,data};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -4366,7 +4391,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.variables === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema81.required,parentSchema:schema81,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema82.required,parentSchema:schema82,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4376,7 +4401,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.targets === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema81.required,parentSchema:schema81,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema82.required,parentSchema:schema82,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -4387,7 +4412,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "variables") || (key0 === "targets")) || (key0 === "lastRun"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema81,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema82,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -4405,7 +4430,7 @@ for(let i0=0; i0<len0; i0++){
 let data1 = data0[i0];
 if(data1 && typeof data1 == "object" && !Array.isArray(data1)){
 if(data1.group === undefined){
-const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema81.properties.variables.items.required,parentSchema:schema81.properties.variables.items,data:data1};
+const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema82.properties.variables.items.required,parentSchema:schema82.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -4415,7 +4440,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data1.by === undefined){
-const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema81.properties.variables.items.required,parentSchema:schema81.properties.variables.items,data:data1};
+const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema82.properties.variables.items.required,parentSchema:schema82.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -4426,7 +4451,7 @@ errors++;
 }
 for(const key1 in data1){
 if(!((((key1 === "group") || (key1 === "by")) || (key1 === "min")) || (key1 === "max"))){
-const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.variables.items,data:data1};
+const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema82.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -4464,7 +4489,7 @@ errors++;
 if(data1.by !== undefined){
 let data3 = data1.by;
 if(!((data3 === "pretension") || (data3 === "unstressedLength"))){
-const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema81.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema81.properties.variables.items.properties.by.enum,parentSchema:schema81.properties.variables.items.properties.by,data:data3};
+const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema82.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema82.properties.variables.items.properties.by.enum,parentSchema:schema82.properties.variables.items.properties.by,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -4477,7 +4502,7 @@ errors++;
 if(data1.min !== undefined){
 let data4 = data1.min;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema81.properties.variables.items.properties.min.type,parentSchema:schema81.properties.variables.items.properties.min,data:data4};
+const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema82.properties.variables.items.properties.min.type,parentSchema:schema82.properties.variables.items.properties.min,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -4490,7 +4515,7 @@ errors++;
 if(data1.max !== undefined){
 let data5 = data1.max;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema81.properties.variables.items.properties.max.type,parentSchema:schema81.properties.variables.items.properties.max,data:data5};
+const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema82.properties.variables.items.properties.max.type,parentSchema:schema82.properties.variables.items.properties.max,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -4502,7 +4527,7 @@ errors++;
 }
 }
 else {
-const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.variables.items.type,parentSchema:schema81.properties.variables.items,data:data1};
+const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.properties.variables.items.type,parentSchema:schema82.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -4514,7 +4539,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.variables.type,parentSchema:schema81.properties.variables,data:data0};
+const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema82.properties.variables.type,parentSchema:schema82.properties.variables,data:data0};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -4536,7 +4561,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.targets.type,parentSchema:schema81.properties.targets,data:data6};
+const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema82.properties.targets.type,parentSchema:schema82.properties.targets,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -4550,7 +4575,7 @@ if(data.lastRun !== undefined){
 let data8 = data.lastRun;
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 if(data8.date === undefined){
-const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema81.properties.lastRun.required,parentSchema:schema81.properties.lastRun,data:data8};
+const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema82.properties.lastRun.required,parentSchema:schema82.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -4560,7 +4585,7 @@ vErrors.push(err14);
 errors++;
 }
 if(data8.summary === undefined){
-const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema81.properties.lastRun.required,parentSchema:schema81.properties.lastRun,data:data8};
+const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema82.properties.lastRun.required,parentSchema:schema82.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -4571,7 +4596,7 @@ errors++;
 }
 for(const key2 in data8){
 if(!((key2 === "date") || (key2 === "summary"))){
-const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.lastRun,data:data8};
+const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema82.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -4584,7 +4609,7 @@ errors++;
 if(data8.date !== undefined){
 let data9 = data8.date;
 if(typeof data9 !== "string"){
-const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema81.properties.lastRun.properties.date.type,parentSchema:schema81.properties.lastRun.properties.date,data:data9};
+const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema82.properties.lastRun.properties.date.type,parentSchema:schema82.properties.lastRun.properties.date,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -4597,7 +4622,7 @@ errors++;
 if(data8.summary !== undefined){
 let data10 = data8.summary;
 if(typeof data10 !== "string"){
-const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema81.properties.lastRun.properties.summary.type,parentSchema:schema81.properties.lastRun.properties.summary,data:data10};
+const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema82.properties.lastRun.properties.summary.type,parentSchema:schema82.properties.lastRun.properties.summary,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -4609,7 +4634,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.lastRun.type,parentSchema:schema81.properties.lastRun,data:data8};
+const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.properties.lastRun.type,parentSchema:schema82.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -4621,7 +4646,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.type,parentSchema:schema81,data};
+const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.type,parentSchema:schema82,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -4634,7 +4659,7 @@ validate53.errors = vErrors;
 return errors === 0;
 }
 
-const schema96 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
+const schema97 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
 
 function validate58(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -4642,7 +4667,7 @@ let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!(key0 === "temperatures")){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema96,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema97,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4683,7 +4708,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema96.properties.temperatures.type,parentSchema:schema96.properties.temperatures,data:data0};
+const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema97.properties.temperatures.type,parentSchema:schema97.properties.temperatures,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -4695,7 +4720,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema96.type,parentSchema:schema96,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema97.type,parentSchema:schema97,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -4708,14 +4733,14 @@ validate58.errors = vErrors;
 return errors === 0;
 }
 
-const schema98 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
+const schema99 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
 
 function validate60(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema98.required,parentSchema:schema98,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema99.required,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4725,7 +4750,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema98.required,parentSchema:schema98,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema99.required,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -4735,7 +4760,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.params === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema98.required,parentSchema:schema98,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema99.required,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -4746,7 +4771,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "kind")) || (key0 === "params"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema98,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -4784,7 +4809,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "guyedMast") || (data1 === "saddleNet")) || (data1 === "radialNet"))){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema98.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema98.properties.kind.enum,parentSchema:schema98.properties.kind,data:data1};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema99.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema99.properties.kind.enum,parentSchema:schema99.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -4797,7 +4822,7 @@ errors++;
 if(data.params !== undefined){
 let data2 = data.params;
 if(!(data2 && typeof data2 == "object" && !Array.isArray(data2))){
-const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.properties.params.type,parentSchema:schema98.properties.params,data:data2};
+const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema99.properties.params.type,parentSchema:schema99.properties.params,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -4809,7 +4834,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.type,parentSchema:schema98,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema99.type,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -4822,7 +4847,7 @@ validate60.errors = vErrors;
 return errors === 0;
 }
 
-const schema100 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
+const schema101 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
 
 function validate62(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -4830,7 +4855,7 @@ let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((key0 === "units") || (key0 === "deformationScale"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema100,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema101,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4843,7 +4868,7 @@ errors++;
 if(data.units !== undefined){
 let data0 = data.units;
 if(!((data0 === "SI") || (data0 === "US"))){
-const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema100.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema100.properties.units.enum,parentSchema:schema100.properties.units,data:data0};
+const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema101.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema101.properties.units.enum,parentSchema:schema101.properties.units,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -4857,7 +4882,7 @@ if(data.deformationScale !== undefined){
 let data1 = data.deformationScale;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 <= 0 || isNaN(data1)){
-const err2 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data1};
+const err2 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data1};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -4868,7 +4893,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data1};
+const err3 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -4880,7 +4905,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.type,parentSchema:schema100,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema101.type,parentSchema:schema101,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -4893,16 +4918,16 @@ validate62.errors = vErrors;
 return errors === 0;
 }
 
-const schema102 = {"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}};
+const schema103 = {"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}};
 const pattern36 = new RegExp("^[xyz]{1,3}$", "u");
-const schema105 = {"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}};
+const schema106 = {"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}};
 
 function validate65(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.setBy === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema105.required,parentSchema:schema105,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema106.required,parentSchema:schema106,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4913,7 +4938,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "members") || (key0 === "group")) || (key0 === "setBy")) || (key0 === "label"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema105,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema106,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -4957,7 +4982,7 @@ errors++;
 if(data.setBy !== undefined){
 let data2 = data.setBy;
 if(!((data2 === "force") || (data2 === "length"))){
-const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema105.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema105.properties.setBy.enum,parentSchema:schema105.properties.setBy,data:data2};
+const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema106.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema106.properties.setBy.enum,parentSchema:schema106.properties.setBy,data:data2};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -4970,7 +4995,7 @@ errors++;
 if(data.label !== undefined){
 let data3 = data.label;
 if(typeof data3 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema105.properties.label.type,parentSchema:schema105.properties.label,data:data3};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema106.properties.label.type,parentSchema:schema106.properties.label,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -4982,7 +5007,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema105.type,parentSchema:schema105,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema106.type,parentSchema:schema106,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -5001,7 +5026,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema102.required,parentSchema:schema102,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema103.required,parentSchema:schema103,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5011,7 +5036,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.steps === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema102.required,parentSchema:schema102,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema103.required,parentSchema:schema103,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5021,8 +5046,8 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema102.properties, key0))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema102,data};
+if(!(func2.call(schema103.properties, key0))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema103,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5060,7 +5085,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema102.properties.label.type,parentSchema:schema102.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema103.properties.label.type,parentSchema:schema103.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -5098,7 +5123,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data3 = data.selfWeight;
 if(typeof data3 !== "boolean"){
-const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema102.properties.selfWeight.type,parentSchema:schema102.properties.selfWeight,data:data3};
+const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema103.properties.selfWeight.type,parentSchema:schema103.properties.selfWeight,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -5112,7 +5137,7 @@ if(data.steps !== undefined){
 let data4 = data.steps;
 if(Array.isArray(data4)){
 if(data4.length < 1){
-const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema102.properties.steps,data:data4};
+const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema103.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -5130,7 +5155,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema102.properties.steps.type,parentSchema:schema102.properties.steps,data:data4};
+const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema103.properties.steps.type,parentSchema:schema103.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -5148,7 +5173,7 @@ for(let i1=0; i1<len1; i1++){
 let data7 = data6[i1];
 if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 if(data7.node === undefined){
-const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema102.properties.temporaryRestraints.items.required,parentSchema:schema102.properties.temporaryRestraints.items,data:data7};
+const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema103.properties.temporaryRestraints.items.required,parentSchema:schema103.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -5158,7 +5183,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data7.fixed === undefined){
-const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema102.properties.temporaryRestraints.items.required,parentSchema:schema102.properties.temporaryRestraints.items,data:data7};
+const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema103.properties.temporaryRestraints.items.required,parentSchema:schema103.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -5169,7 +5194,7 @@ errors++;
 }
 for(const key1 in data7){
 if(!(((key1 === "node") || (key1 === "fixed")) || (key1 === "releaseAfterStep"))){
-const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema102.properties.temporaryRestraints.items,data:data7};
+const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema103.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -5208,7 +5233,7 @@ if(data7.fixed !== undefined){
 let data9 = data7.fixed;
 if(typeof data9 === "string"){
 if(!pattern36.test(data9)){
-const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema102.properties.temporaryRestraints.items.properties.fixed,data:data9};
+const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema103.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -5219,7 +5244,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema102.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema102.properties.temporaryRestraints.items.properties.fixed,data:data9};
+const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema103.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema103.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -5232,7 +5257,7 @@ errors++;
 if(data7.releaseAfterStep !== undefined){
 let data10 = data7.releaseAfterStep;
 if(!(((typeof data10 == "number") && (!(data10 % 1) && !isNaN(data10))) && (isFinite(data10)))){
-const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema102.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema102.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema103.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema103.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -5243,7 +5268,7 @@ errors++;
 }
 if((typeof data10 == "number") && (isFinite(data10))){
 if(data10 < 1 || isNaN(data10)){
-const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema102.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema103.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -5256,7 +5281,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema102.properties.temporaryRestraints.items.type,parentSchema:schema102.properties.temporaryRestraints.items,data:data7};
+const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema103.properties.temporaryRestraints.items.type,parentSchema:schema103.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -5268,7 +5293,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema102.properties.temporaryRestraints.type,parentSchema:schema102.properties.temporaryRestraints,data:data6};
+const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema103.properties.temporaryRestraints.type,parentSchema:schema103.properties.temporaryRestraints,data:data6};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -5282,7 +5307,7 @@ if(data.plumb !== undefined){
 let data11 = data.plumb;
 if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
 if(data11.base === undefined){
-const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema102.properties.plumb.required,parentSchema:schema102.properties.plumb,data:data11};
+const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema103.properties.plumb.required,parentSchema:schema103.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -5292,7 +5317,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data11.top === undefined){
-const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema102.properties.plumb.required,parentSchema:schema102.properties.plumb,data:data11};
+const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema103.properties.plumb.required,parentSchema:schema103.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -5302,7 +5327,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data11.limit === undefined){
-const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema102.properties.plumb.required,parentSchema:schema102.properties.plumb,data:data11};
+const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema103.properties.plumb.required,parentSchema:schema103.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -5313,7 +5338,7 @@ errors++;
 }
 for(const key2 in data11){
 if(!(((key2 === "base") || (key2 === "top")) || (key2 === "limit"))){
-const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema102.properties.plumb,data:data11};
+const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema103.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -5377,7 +5402,7 @@ if(data11.limit !== undefined){
 let data14 = data11.limit;
 if((typeof data14 == "number") && (isFinite(data14))){
 if(data14 <= 0 || isNaN(data14)){
-const err30 = {instancePath:instancePath+"/plumb/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data14};
+const err30 = {instancePath:instancePath+"/plumb/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data14};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -5388,7 +5413,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath:instancePath+"/plumb/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data14};
+const err31 = {instancePath:instancePath+"/plumb/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data14};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -5400,7 +5425,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema102.properties.plumb.type,parentSchema:schema102.properties.plumb,data:data11};
+const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema103.properties.plumb.type,parentSchema:schema103.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -5414,7 +5439,7 @@ if(data.forceTolerance !== undefined){
 let data15 = data.forceTolerance;
 if((typeof data15 == "number") && (isFinite(data15))){
 if(data15 <= 0 || isNaN(data15)){
-const err33 = {instancePath:instancePath+"/forceTolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data15};
+const err33 = {instancePath:instancePath+"/forceTolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data15};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -5425,7 +5450,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/forceTolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data15};
+const err34 = {instancePath:instancePath+"/forceTolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data15};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -5439,7 +5464,7 @@ if(data.lengthTolerance !== undefined){
 let data16 = data.lengthTolerance;
 if((typeof data16 == "number") && (isFinite(data16))){
 if(data16 <= 0 || isNaN(data16)){
-const err35 = {instancePath:instancePath+"/lengthTolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data16};
+const err35 = {instancePath:instancePath+"/lengthTolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data16};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -5450,7 +5475,7 @@ errors++;
 }
 }
 else {
-const err36 = {instancePath:instancePath+"/lengthTolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data16};
+const err36 = {instancePath:instancePath+"/lengthTolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data16};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -5462,7 +5487,7 @@ errors++;
 }
 }
 else {
-const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema102.type,parentSchema:schema102,data};
+const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema103.type,parentSchema:schema103,data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -5475,14 +5500,14 @@ validate64.errors = vErrors;
 return errors === 0;
 }
 
-const schema113 = {"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}};
+const schema114 = {"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}};
 
 function validate69(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema113.required,parentSchema:schema113,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema114.required,parentSchema:schema114,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5492,7 +5517,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.tensions === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema113.required,parentSchema:schema113,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema114.required,parentSchema:schema114,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5503,7 +5528,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "date")) || (key0 === "tensions")) || (key0 === "positions")) || (key0 === "tolerance")) || (key0 === "lengthUncertainty"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema113,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema114,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5541,7 +5566,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.label.type,parentSchema:schema113.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema114.properties.label.type,parentSchema:schema114.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -5554,7 +5579,7 @@ errors++;
 if(data.date !== undefined){
 let data2 = data.date;
 if(typeof data2 !== "string"){
-const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.date.type,parentSchema:schema113.properties.date,data:data2};
+const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema114.properties.date.type,parentSchema:schema114.properties.date,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -5572,7 +5597,7 @@ for(let i0=0; i0<len0; i0++){
 let data4 = data3[i0];
 if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
 if(data4.member === undefined){
-const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema113.properties.tensions.items.required,parentSchema:schema113.properties.tensions.items,data:data4};
+const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema114.properties.tensions.items.required,parentSchema:schema114.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -5582,7 +5607,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data4.method === undefined){
-const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema113.properties.tensions.items.required,parentSchema:schema113.properties.tensions.items,data:data4};
+const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema114.properties.tensions.items.required,parentSchema:schema114.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -5592,7 +5617,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data4.value === undefined){
-const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema113.properties.tensions.items.required,parentSchema:schema113.properties.tensions.items,data:data4};
+const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema114.properties.tensions.items.required,parentSchema:schema114.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -5602,7 +5627,7 @@ vErrors.push(err9);
 errors++;
 }
 if(data4.accuracy === undefined){
-const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema113.properties.tensions.items.required,parentSchema:schema113.properties.tensions.items,data:data4};
+const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema114.properties.tensions.items.required,parentSchema:schema114.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -5612,7 +5637,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data4.temperature === undefined){
-const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema113.properties.tensions.items.required,parentSchema:schema113.properties.tensions.items,data:data4};
+const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema114.properties.tensions.items.required,parentSchema:schema114.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -5623,7 +5648,7 @@ errors++;
 }
 for(const key1 in data4){
 if(!((((((key1 === "member") || (key1 === "method")) || (key1 === "value")) || (key1 === "accuracy")) || (key1 === "temperature")) || (key1 === "mode"))){
-const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema113.properties.tensions.items,data:data4};
+const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema114.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -5661,7 +5686,7 @@ errors++;
 if(data4.method !== undefined){
 let data6 = data4.method;
 if(!(((data6 === "dynamometer") || (data6 === "frequency")) || (data6 === "sag"))){
-const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema113.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.tensions.items.properties.method.enum,parentSchema:schema113.properties.tensions.items.properties.method,data:data6};
+const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema114.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema114.properties.tensions.items.properties.method.enum,parentSchema:schema114.properties.tensions.items.properties.method,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -5675,7 +5700,7 @@ if(data4.value !== undefined){
 let data7 = data4.value;
 if((typeof data7 == "number") && (isFinite(data7))){
 if(data7 <= 0 || isNaN(data7)){
-const err16 = {instancePath:instancePath+"/tensions/" + i0+"/value",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data7};
+const err16 = {instancePath:instancePath+"/tensions/" + i0+"/value",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data7};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -5686,7 +5711,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/tensions/" + i0+"/value",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data7};
+const err17 = {instancePath:instancePath+"/tensions/" + i0+"/value",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data7};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -5700,7 +5725,7 @@ if(data4.accuracy !== undefined){
 let data8 = data4.accuracy;
 if((typeof data8 == "number") && (isFinite(data8))){
 if(data8 <= 0 || isNaN(data8)){
-const err18 = {instancePath:instancePath+"/tensions/" + i0+"/accuracy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data8};
+const err18 = {instancePath:instancePath+"/tensions/" + i0+"/accuracy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data8};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -5711,7 +5736,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/tensions/" + i0+"/accuracy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data8};
+const err19 = {instancePath:instancePath+"/tensions/" + i0+"/accuracy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data8};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -5749,7 +5774,7 @@ errors++;
 if(data4.mode !== undefined){
 let data10 = data4.mode;
 if(!((((data10 === "tautString") || (data10 === "inPlaneSymmetric")) || (data10 === "inPlaneAntisymmetric")) || (data10 === "lowestInPlane"))){
-const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema113.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.tensions.items.properties.mode.enum,parentSchema:schema113.properties.tensions.items.properties.mode,data:data10};
+const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema114.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema114.properties.tensions.items.properties.mode.enum,parentSchema:schema114.properties.tensions.items.properties.mode,data:data10};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -5761,7 +5786,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.properties.tensions.items.type,parentSchema:schema113.properties.tensions.items,data:data4};
+const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema114.properties.tensions.items.type,parentSchema:schema114.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -5773,7 +5798,7 @@ errors++;
 }
 }
 else {
-const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema113.properties.tensions.type,parentSchema:schema113.properties.tensions,data:data3};
+const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema114.properties.tensions.type,parentSchema:schema114.properties.tensions,data:data3};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -5791,7 +5816,7 @@ for(let i1=0; i1<len1; i1++){
 let data12 = data11[i1];
 if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
 if(data12.node === undefined){
-const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema113.properties.positions.items.required,parentSchema:schema113.properties.positions.items,data:data12};
+const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema114.properties.positions.items.required,parentSchema:schema114.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -5801,7 +5826,7 @@ vErrors.push(err25);
 errors++;
 }
 if(data12.at === undefined){
-const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema113.properties.positions.items.required,parentSchema:schema113.properties.positions.items,data:data12};
+const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema114.properties.positions.items.required,parentSchema:schema114.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -5811,7 +5836,7 @@ vErrors.push(err26);
 errors++;
 }
 if(data12.accuracy === undefined){
-const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema113.properties.positions.items.required,parentSchema:schema113.properties.positions.items,data:data12};
+const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema114.properties.positions.items.required,parentSchema:schema114.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -5821,7 +5846,7 @@ vErrors.push(err27);
 errors++;
 }
 if(data12.temperature === undefined){
-const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema113.properties.positions.items.required,parentSchema:schema113.properties.positions.items,data:data12};
+const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema114.properties.positions.items.required,parentSchema:schema114.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -5832,7 +5857,7 @@ errors++;
 }
 for(const key2 in data12){
 if(!((((key2 === "node") || (key2 === "at")) || (key2 === "accuracy")) || (key2 === "temperature"))){
-const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema113.properties.positions.items,data:data12};
+const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema114.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -5920,7 +5945,7 @@ if(data12.accuracy !== undefined){
 let data16 = data12.accuracy;
 if((typeof data16 == "number") && (isFinite(data16))){
 if(data16 <= 0 || isNaN(data16)){
-const err36 = {instancePath:instancePath+"/positions/" + i1+"/accuracy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data16};
+const err36 = {instancePath:instancePath+"/positions/" + i1+"/accuracy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data16};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -5931,7 +5956,7 @@ errors++;
 }
 }
 else {
-const err37 = {instancePath:instancePath+"/positions/" + i1+"/accuracy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data16};
+const err37 = {instancePath:instancePath+"/positions/" + i1+"/accuracy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data16};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -5968,7 +5993,7 @@ errors++;
 }
 }
 else {
-const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.properties.positions.items.type,parentSchema:schema113.properties.positions.items,data:data12};
+const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema114.properties.positions.items.type,parentSchema:schema114.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -5980,7 +6005,7 @@ errors++;
 }
 }
 else {
-const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema113.properties.positions.type,parentSchema:schema113.properties.positions,data:data11};
+const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema114.properties.positions.type,parentSchema:schema114.properties.positions,data:data11};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -5994,7 +6019,7 @@ if(data.tolerance !== undefined){
 let data18 = data.tolerance;
 if((typeof data18 == "number") && (isFinite(data18))){
 if(data18 <= 0 || isNaN(data18)){
-const err42 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data18};
+const err42 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data18};
 if(vErrors === null){
 vErrors = [err42];
 }
@@ -6005,7 +6030,7 @@ errors++;
 }
 }
 else {
-const err43 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data18};
+const err43 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data18};
 if(vErrors === null){
 vErrors = [err43];
 }
@@ -6019,7 +6044,7 @@ if(data.lengthUncertainty !== undefined){
 let data19 = data.lengthUncertainty;
 if((typeof data19 == "number") && (isFinite(data19))){
 if(data19 <= 0 || isNaN(data19)){
-const err44 = {instancePath:instancePath+"/lengthUncertainty",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data19};
+const err44 = {instancePath:instancePath+"/lengthUncertainty",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data19};
 if(vErrors === null){
 vErrors = [err44];
 }
@@ -6030,7 +6055,7 @@ errors++;
 }
 }
 else {
-const err45 = {instancePath:instancePath+"/lengthUncertainty",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data19};
+const err45 = {instancePath:instancePath+"/lengthUncertainty",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data19};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -6042,7 +6067,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.type,parentSchema:schema113,data};
+const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema114.type,parentSchema:schema114,data};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -6055,14 +6080,14 @@ validate69.errors = vErrors;
 return errors === 0;
 }
 
-const schema126 = {"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}};
+const schema127 = {"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}};
 
 function validate71(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema126.required,parentSchema:schema126,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema127.required,parentSchema:schema127,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6072,7 +6097,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.nodes === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema126.required,parentSchema:schema126,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema127.required,parentSchema:schema127,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6083,7 +6108,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "id") || (key0 === "nodes")) || (key0 === "region")) || (key0 === "label"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema126,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema127,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -6122,7 +6147,7 @@ if(data.nodes !== undefined){
 let data1 = data.nodes;
 if(Array.isArray(data1)){
 if(data1.length < 3){
-const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema126.properties.nodes,data:data1};
+const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema127.properties.nodes,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -6159,7 +6184,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema126.properties.nodes.type,parentSchema:schema126.properties.nodes,data:data1};
+const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema127.properties.nodes.type,parentSchema:schema127.properties.nodes,data:data1};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -6197,7 +6222,7 @@ errors++;
 if(data.label !== undefined){
 let data4 = data.label;
 if(typeof data4 !== "string"){
-const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.label.type,parentSchema:schema126.properties.label,data:data4};
+const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema127.properties.label.type,parentSchema:schema127.properties.label,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -6209,7 +6234,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema126.type,parentSchema:schema126,data};
+const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema127.type,parentSchema:schema127,data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -6222,14 +6247,14 @@ validate71.errors = vErrors;
 return errors === 0;
 }
 
-const schema130 = {"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}};
+const schema131 = {"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}};
 
 function validate73(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema130.required,parentSchema:schema130,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema131.required,parentSchema:schema131,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6239,7 +6264,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.meanCase === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema130.required,parentSchema:schema130,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema131.required,parentSchema:schema131,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6249,7 +6274,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.patchFactor === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema130.required,parentSchema:schema130,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema131.required,parentSchema:schema131,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -6260,7 +6285,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "id") || (key0 === "label")) || (key0 === "meanCase")) || (key0 === "patchFactor")) || (key0 === "patches"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema130,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema131,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -6298,7 +6323,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema130.properties.label.type,parentSchema:schema130.properties.label,data:data1};
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema131.properties.label.type,parentSchema:schema131.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -6337,7 +6362,7 @@ if(data.patchFactor !== undefined){
 let data3 = data.patchFactor;
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 <= 1 || isNaN(data3)){
-const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema130.properties.patchFactor,data:data3};
+const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema131.properties.patchFactor,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -6348,7 +6373,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema130.properties.patchFactor.type,parentSchema:schema130.properties.patchFactor,data:data3};
+const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema131.properties.patchFactor.type,parentSchema:schema131.properties.patchFactor,data:data3};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -6362,7 +6387,7 @@ if(data.patches !== undefined){
 let data4 = data.patches;
 if(Array.isArray(data4)){
 if(data4.length < 1){
-const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema130.properties.patches,data:data4};
+const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema131.properties.patches,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -6376,7 +6401,7 @@ for(let i0=0; i0<len0; i0++){
 let data5 = data4[i0];
 if(data5 && typeof data5 == "object" && !Array.isArray(data5)){
 if(data5.from === undefined){
-const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema130.properties.patches.items.required,parentSchema:schema130.properties.patches.items,data:data5};
+const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema131.properties.patches.items.required,parentSchema:schema131.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -6386,7 +6411,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data5.to === undefined){
-const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema130.properties.patches.items.required,parentSchema:schema130.properties.patches.items,data:data5};
+const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema131.properties.patches.items.required,parentSchema:schema131.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -6397,7 +6422,7 @@ errors++;
 }
 for(const key1 in data5){
 if(!((key1 === "from") || (key1 === "to"))){
-const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema130.properties.patches.items,data:data5};
+const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema131.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -6410,7 +6435,7 @@ errors++;
 if(data5.from !== undefined){
 let data6 = data5.from;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema130.properties.patches.items.properties.from.type,parentSchema:schema130.properties.patches.items.properties.from,data:data6};
+const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema131.properties.patches.items.properties.from.type,parentSchema:schema131.properties.patches.items.properties.from,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -6423,7 +6448,7 @@ errors++;
 if(data5.to !== undefined){
 let data7 = data5.to;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema130.properties.patches.items.properties.to.type,parentSchema:schema130.properties.patches.items.properties.to,data:data7};
+const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema131.properties.patches.items.properties.to.type,parentSchema:schema131.properties.patches.items.properties.to,data:data7};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -6435,7 +6460,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema130.properties.patches.items.type,parentSchema:schema130.properties.patches.items,data:data5};
+const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.properties.patches.items.type,parentSchema:schema131.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -6447,7 +6472,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema130.properties.patches.type,parentSchema:schema130.properties.patches,data:data4};
+const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema131.properties.patches.type,parentSchema:schema131.properties.patches,data:data4};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -6459,7 +6484,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema130.type,parentSchema:schema130,data};
+const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.type,parentSchema:schema131,data};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -6472,14 +6497,14 @@ validate73.errors = vErrors;
 return errors === 0;
 }
 
-const schema133 = {"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
+const schema134 = {"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
 
 function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema133.required,parentSchema:schema133,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema134.required,parentSchema:schema134,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6489,7 +6514,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.fromCase === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema133.required,parentSchema:schema133,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema134.required,parentSchema:schema134,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6500,7 +6525,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "fromCase")) || (key0 === "members")) || (key0 === "group")) || (key0 === "dynamicFactor")) || (key0 === "dampingRatio"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema133,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema134,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -6538,7 +6563,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema133.properties.label.type,parentSchema:schema133.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema134.properties.label.type,parentSchema:schema134.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -6608,7 +6633,7 @@ if(data.dynamicFactor !== undefined){
 let data5 = data.dynamicFactor;
 if((typeof data5 == "number") && (isFinite(data5))){
 if(data5 > 2 || isNaN(data5)){
-const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema133.properties.dynamicFactor,data:data5};
+const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema134.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -6618,7 +6643,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data5 < 1 || isNaN(data5)){
-const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema133.properties.dynamicFactor,data:data5};
+const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema134.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -6629,7 +6654,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema133.properties.dynamicFactor.type,parentSchema:schema133.properties.dynamicFactor,data:data5};
+const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema134.properties.dynamicFactor.type,parentSchema:schema134.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -6643,7 +6668,7 @@ if(data.dampingRatio !== undefined){
 let data6 = data.dampingRatio;
 if((typeof data6 == "number") && (isFinite(data6))){
 if(data6 < 0 || isNaN(data6)){
-const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema133.properties.dampingRatio,data:data6};
+const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema134.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -6653,7 +6678,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data6 >= 1 || isNaN(data6)){
-const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema133.properties.dampingRatio,data:data6};
+const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema134.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -6664,7 +6689,7 @@ errors++;
 }
 }
 else {
-const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema133.properties.dampingRatio.type,parentSchema:schema133.properties.dampingRatio,data:data6};
+const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema134.properties.dampingRatio.type,parentSchema:schema134.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -6676,7 +6701,7 @@ errors++;
 }
 }
 else {
-const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema133.type,parentSchema:schema133,data};
+const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema134.type,parentSchema:schema134,data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -7056,7 +7081,7 @@ let data25 = data.report;
 if(data25 && typeof data25 == "object" && !Array.isArray(data25)){
 for(const key1 in data25){
 if(!((key1 === "documentNumber") || (key1 === "revisions"))){
-const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema125,data:data25};
+const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema126,data:data25};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -7069,7 +7094,7 @@ errors++;
 if(data25.documentNumber !== undefined){
 let data26 = data25.documentNumber;
 if(typeof data26 !== "string"){
-const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema125.properties.documentNumber.type,parentSchema:schema125.properties.documentNumber,data:data26};
+const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.documentNumber.type,parentSchema:schema126.properties.documentNumber,data:data26};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -7087,7 +7112,7 @@ for(let i9=0; i9<len9; i9++){
 let data28 = data27[i9];
 if(data28 && typeof data28 == "object" && !Array.isArray(data28)){
 if(data28.revision === undefined){
-const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema125.properties.revisions.items.required,parentSchema:schema125.properties.revisions.items,data:data28};
+const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema126.properties.revisions.items.required,parentSchema:schema126.properties.revisions.items,data:data28};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -7097,7 +7122,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data28.date === undefined){
-const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema125.properties.revisions.items.required,parentSchema:schema125.properties.revisions.items,data:data28};
+const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema126.properties.revisions.items.required,parentSchema:schema126.properties.revisions.items,data:data28};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -7107,7 +7132,7 @@ vErrors.push(err24);
 errors++;
 }
 if(data28.description === undefined){
-const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema125.properties.revisions.items.required,parentSchema:schema125.properties.revisions.items,data:data28};
+const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema126.properties.revisions.items.required,parentSchema:schema126.properties.revisions.items,data:data28};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -7118,7 +7143,7 @@ errors++;
 }
 for(const key2 in data28){
 if(!(((((key2 === "revision") || (key2 === "date")) || (key2 === "description")) || (key2 === "by")) || (key2 === "checkedBy"))){
-const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema125.properties.revisions.items,data:data28};
+const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema126.properties.revisions.items,data:data28};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -7131,7 +7156,7 @@ errors++;
 if(data28.revision !== undefined){
 let data29 = data28.revision;
 if(typeof data29 !== "string"){
-const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema125.properties.revisions.items.properties.revision.type,parentSchema:schema125.properties.revisions.items.properties.revision,data:data29};
+const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.revisions.items.properties.revision.type,parentSchema:schema126.properties.revisions.items.properties.revision,data:data29};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -7144,7 +7169,7 @@ errors++;
 if(data28.date !== undefined){
 let data30 = data28.date;
 if(typeof data30 !== "string"){
-const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema125.properties.revisions.items.properties.date.type,parentSchema:schema125.properties.revisions.items.properties.date,data:data30};
+const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.revisions.items.properties.date.type,parentSchema:schema126.properties.revisions.items.properties.date,data:data30};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -7157,7 +7182,7 @@ errors++;
 if(data28.description !== undefined){
 let data31 = data28.description;
 if(typeof data31 !== "string"){
-const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema125.properties.revisions.items.properties.description.type,parentSchema:schema125.properties.revisions.items.properties.description,data:data31};
+const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.revisions.items.properties.description.type,parentSchema:schema126.properties.revisions.items.properties.description,data:data31};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -7170,7 +7195,7 @@ errors++;
 if(data28.by !== undefined){
 let data32 = data28.by;
 if(typeof data32 !== "string"){
-const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema125.properties.revisions.items.properties.by.type,parentSchema:schema125.properties.revisions.items.properties.by,data:data32};
+const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.revisions.items.properties.by.type,parentSchema:schema126.properties.revisions.items.properties.by,data:data32};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -7183,7 +7208,7 @@ errors++;
 if(data28.checkedBy !== undefined){
 let data33 = data28.checkedBy;
 if(typeof data33 !== "string"){
-const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema125.properties.revisions.items.properties.checkedBy.type,parentSchema:schema125.properties.revisions.items.properties.checkedBy,data:data33};
+const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.revisions.items.properties.checkedBy.type,parentSchema:schema126.properties.revisions.items.properties.checkedBy,data:data33};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -7195,7 +7220,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema125.properties.revisions.items.type,parentSchema:schema125.properties.revisions.items,data:data28};
+const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema126.properties.revisions.items.type,parentSchema:schema126.properties.revisions.items,data:data28};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -7207,7 +7232,7 @@ errors++;
 }
 }
 else {
-const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema125.properties.revisions.type,parentSchema:schema125.properties.revisions,data:data27};
+const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema126.properties.revisions.type,parentSchema:schema126.properties.revisions,data:data27};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -7219,7 +7244,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema125.type,parentSchema:schema125,data:data25};
+const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema126.type,parentSchema:schema126,data:data25};
 if(vErrors === null){
 vErrors = [err34];
 }
