@@ -7,5 +7,6 @@ import { scheduleCommand } from './schedule.ts';
 import { validateCommand } from './validate.ts';
 import { sequenceCommand } from './sequence.ts';
 import { asBuiltCommand } from './asbuilt.ts';
+import { reportCommand } from './report.ts';
 
-export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, sequenceCommand, asBuiltCommand];
+export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, sequenceCommand, asBuiltCommand, reportCommand];
