@@ -28,4 +28,6 @@ export { SparseLDL, writeMatrixMarketSymmetric, writeMatrixMarketDenseVector } f
 export * from './tuning/index.ts';
 export * from './installation/index.ts';
 export * from './sequence/index.ts';
+export { estimateModelSize, checkModelBudget, DEFAULT_MODEL_BUDGET } from './model/model-budget.ts';
+export type { ModelBudget, ModelSizeEstimate, BudgetVerdict, BudgetItem, SizeDriver } from './model/model-budget.ts';
 export * from './asbuilt/index.ts';

@@ -3,8 +3,8 @@
 "use strict";
 export const validate = validate10;
 export default validate10;
-const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 1","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":1,"x-message":"{field} must be 1"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"sequences":{"type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"$ref":"#/definitions/report"}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z, each at most once"}}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"sequenceStep":{"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}},"sequence":{"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}},"report":{"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}}}};
-const schema104 = {"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}};
+const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 1","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":1,"x-message":"{field} must be 1"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"sequences":{"type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"$ref":"#/definitions/report"},"panels":{"type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"type":"array","items":{"$ref":"#/definitions/memberLoss"}}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"}}},"springs":{"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"sequenceStep":{"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}},"sequence":{"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}},"report":{"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}},"panel":{"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}},"pressureCoefficient":{"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}},"areaLoad":{"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}},"memberLoss":{"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}}}};
+const schema125 = {"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}};
 const func2 = Object.prototype.hasOwnProperty;
 const schema12 = {"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}};
 const schema13 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}};
@@ -130,11 +130,195 @@ validate11.errors = vErrors;
 return errors === 0;
 }
 
-const schema14 = {"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z, each at most once"}}}};
+const schema14 = {"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"}}};
 const schema15 = {"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}};
 const schema16 = {"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"};
 const pattern0 = new RegExp("^\\S(.*\\S)?$", "u");
-const pattern1 = new RegExp("^(?!.*(.).*\\1)[xyz]{0,3}$", "u");
+const pattern1 = new RegExp("^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$", "u");
+const schema17 = {"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}};
+const schema18 = {"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}};
+
+function validate14(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+for(const key0 in data){
+if(!((((((key0 === "x") || (key0 === "y")) || (key0 === "z")) || (key0 === "rx")) || (key0 === "ry")) || (key0 === "rz"))){
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema17,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+}
+if(data.x !== undefined){
+let data0 = data.x;
+if((typeof data0 == "number") && (isFinite(data0))){
+if(data0 < 0 || isNaN(data0)){
+const err1 = {instancePath:instancePath+"/x",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data0};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+}
+else {
+const err2 = {instancePath:instancePath+"/x",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data0};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.y !== undefined){
+let data1 = data.y;
+if((typeof data1 == "number") && (isFinite(data1))){
+if(data1 < 0 || isNaN(data1)){
+const err3 = {instancePath:instancePath+"/y",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data1};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+else {
+const err4 = {instancePath:instancePath+"/y",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data1};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.z !== undefined){
+let data2 = data.z;
+if((typeof data2 == "number") && (isFinite(data2))){
+if(data2 < 0 || isNaN(data2)){
+const err5 = {instancePath:instancePath+"/z",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data2};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+else {
+const err6 = {instancePath:instancePath+"/z",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data2};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+if(data.rx !== undefined){
+let data3 = data.rx;
+if((typeof data3 == "number") && (isFinite(data3))){
+if(data3 < 0 || isNaN(data3)){
+const err7 = {instancePath:instancePath+"/rx",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data3};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+else {
+const err8 = {instancePath:instancePath+"/rx",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data3};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.ry !== undefined){
+let data4 = data.ry;
+if((typeof data4 == "number") && (isFinite(data4))){
+if(data4 < 0 || isNaN(data4)){
+const err9 = {instancePath:instancePath+"/ry",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data4};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+else {
+const err10 = {instancePath:instancePath+"/ry",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data4};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+}
+if(data.rz !== undefined){
+let data5 = data.rz;
+if((typeof data5 == "number") && (isFinite(data5))){
+if(data5 < 0 || isNaN(data5)){
+const err11 = {instancePath:instancePath+"/rz",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data5};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+}
+else {
+const err12 = {instancePath:instancePath+"/rz",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data5};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+}
+else {
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema17.type,parentSchema:schema17,data};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+validate14.errors = vErrors;
+return errors === 0;
+}
+
 
 function validate13(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -161,7 +345,7 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!(((key0 === "id") || (key0 === "at")) || (key0 === "fixed"))){
+if(!((((key0 === "id") || (key0 === "at")) || (key0 === "fixed")) || (key0 === "springs"))){
 const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema14,data};
 if(vErrors === null){
 vErrors = [err2];
@@ -250,7 +434,7 @@ if(data.fixed !== undefined){
 let data3 = data.fixed;
 if(typeof data3 === "string"){
 if(!pattern1.test(data3)){
-const err9 = {instancePath:instancePath+"/fixed",schemaPath:"#/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema14.properties.fixed,data:data3};
+const err9 = {instancePath:instancePath+"/fixed",schemaPath:"#/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$"},message:"must match pattern \""+"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$"+"\"",schema:"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$",parentSchema:schema14.properties.fixed,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -271,6 +455,12 @@ vErrors.push(err10);
 errors++;
 }
 }
+if(data.springs !== undefined){
+if(!(validate14(data.springs, {instancePath:instancePath+"/springs",parentData:data,parentDataProperty:"springs",rootData}))){
+vErrors = vErrors === null ? validate14.errors : vErrors.concat(validate14.errors);
+errors = vErrors.length;
+}
+}
 }
 else {
 const err11 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema14.type,parentSchema:schema14,data};
@@ -286,16 +476,15 @@ validate13.errors = vErrors;
 return errors === 0;
 }
 
-const schema17 = {"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"}}};
-const schema19 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}};
-const schema21 = {"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}};
+const schema24 = {"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}};
+const schema26 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}};
 
-function validate15(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate17(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema17.required,parentSchema:schema17,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema24.required,parentSchema:schema24,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -305,7 +494,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.E === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "E"},message:"must have required property '"+"E"+"'",schema:schema17.required,parentSchema:schema17,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "E"},message:"must have required property '"+"E"+"'",schema:schema24.required,parentSchema:schema24,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -315,7 +504,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.area === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "area"},message:"must have required property '"+"area"+"'",schema:schema17.required,parentSchema:schema17,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "area"},message:"must have required property '"+"area"+"'",schema:schema24.required,parentSchema:schema24,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -325,8 +514,8 @@ vErrors.push(err2);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema17.properties, key0))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema17,data};
+if(!(func2.call(schema24.properties, key0))){
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema24,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -364,7 +553,7 @@ errors++;
 if(data.E !== undefined){
 let data1 = data.E;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err6 = {instancePath:instancePath+"/E",schemaPath:"#/properties/E/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.E.type,parentSchema:schema17.properties.E,data:data1};
+const err6 = {instancePath:instancePath+"/E",schemaPath:"#/properties/E/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.E.type,parentSchema:schema24.properties.E,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -377,7 +566,7 @@ errors++;
 if(data.area !== undefined){
 let data2 = data.area;
 if(!((typeof data2 == "number") && (isFinite(data2)))){
-const err7 = {instancePath:instancePath+"/area",schemaPath:"#/properties/area/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.area.type,parentSchema:schema17.properties.area,data:data2};
+const err7 = {instancePath:instancePath+"/area",schemaPath:"#/properties/area/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.area.type,parentSchema:schema24.properties.area,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -390,7 +579,7 @@ errors++;
 if(data.massPerLength !== undefined){
 let data3 = data.massPerLength;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err8 = {instancePath:instancePath+"/massPerLength",schemaPath:"#/properties/massPerLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.massPerLength.type,parentSchema:schema17.properties.massPerLength,data:data3};
+const err8 = {instancePath:instancePath+"/massPerLength",schemaPath:"#/properties/massPerLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.massPerLength.type,parentSchema:schema24.properties.massPerLength,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -404,7 +593,7 @@ if(data.breakingLoad !== undefined){
 let data4 = data.breakingLoad;
 if((typeof data4 == "number") && (isFinite(data4))){
 if(data4 <= 0 || isNaN(data4)){
-const err9 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data4};
+const err9 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -415,7 +604,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data4};
+const err10 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -428,7 +617,7 @@ errors++;
 if(data.thermalExpansion !== undefined){
 let data5 = data.thermalExpansion;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err11 = {instancePath:instancePath+"/thermalExpansion",schemaPath:"#/properties/thermalExpansion/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.thermalExpansion.type,parentSchema:schema17.properties.thermalExpansion,data:data5};
+const err11 = {instancePath:instancePath+"/thermalExpansion",schemaPath:"#/properties/thermalExpansion/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.thermalExpansion.type,parentSchema:schema24.properties.thermalExpansion,data:data5};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -442,7 +631,7 @@ if(data.diameter !== undefined){
 let data6 = data.diameter;
 if((typeof data6 == "number") && (isFinite(data6))){
 if(data6 <= 0 || isNaN(data6)){
-const err12 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data6};
+const err12 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data6};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -453,7 +642,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data6};
+const err13 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -467,7 +656,7 @@ if(data.dragCoefficient !== undefined){
 let data7 = data.dragCoefficient;
 if((typeof data7 == "number") && (isFinite(data7))){
 if(data7 < 0 || isNaN(data7)){
-const err14 = {instancePath:instancePath+"/dragCoefficient",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data7};
+const err14 = {instancePath:instancePath+"/dragCoefficient",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data7};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -478,7 +667,7 @@ errors++;
 }
 }
 else {
-const err15 = {instancePath:instancePath+"/dragCoefficient",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data7};
+const err15 = {instancePath:instancePath+"/dragCoefficient",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data7};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -492,7 +681,7 @@ if(data.lattice !== undefined){
 let data8 = data.lattice;
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 if(data8.faceWidth === undefined){
-const err16 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "faceWidth"},message:"must have required property '"+"faceWidth"+"'",schema:schema17.properties.lattice.required,parentSchema:schema17.properties.lattice,data:data8};
+const err16 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "faceWidth"},message:"must have required property '"+"faceWidth"+"'",schema:schema24.properties.lattice.required,parentSchema:schema24.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -502,7 +691,7 @@ vErrors.push(err16);
 errors++;
 }
 if(data8.solidity === undefined){
-const err17 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "solidity"},message:"must have required property '"+"solidity"+"'",schema:schema17.properties.lattice.required,parentSchema:schema17.properties.lattice,data:data8};
+const err17 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "solidity"},message:"must have required property '"+"solidity"+"'",schema:schema24.properties.lattice.required,parentSchema:schema24.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -513,7 +702,7 @@ errors++;
 }
 for(const key1 in data8){
 if(!((((key1 === "faceWidth") || (key1 === "solidity")) || (key1 === "dragFactor")) || (key1 === "share"))){
-const err18 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema17.properties.lattice,data:data8};
+const err18 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema24.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -527,7 +716,7 @@ if(data8.faceWidth !== undefined){
 let data9 = data8.faceWidth;
 if((typeof data9 == "number") && (isFinite(data9))){
 if(data9 <= 0 || isNaN(data9)){
-const err19 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data9};
+const err19 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data9};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -538,7 +727,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data9};
+const err20 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data9};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -552,7 +741,7 @@ if(data8.solidity !== undefined){
 let data10 = data8.solidity;
 if((typeof data10 == "number") && (isFinite(data10))){
 if(data10 > 1 || isNaN(data10)){
-const err21 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema17.properties.lattice.properties.solidity,data:data10};
+const err21 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema24.properties.lattice.properties.solidity,data:data10};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -562,7 +751,7 @@ vErrors.push(err21);
 errors++;
 }
 if(data10 < 0 || isNaN(data10)){
-const err22 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema17.properties.lattice.properties.solidity,data:data10};
+const err22 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema24.properties.lattice.properties.solidity,data:data10};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -573,7 +762,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.lattice.properties.solidity.type,parentSchema:schema17.properties.lattice.properties.solidity,data:data10};
+const err23 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.lattice.properties.solidity.type,parentSchema:schema24.properties.lattice.properties.solidity,data:data10};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -587,7 +776,7 @@ if(data8.dragFactor !== undefined){
 let data11 = data8.dragFactor;
 if((typeof data11 == "number") && (isFinite(data11))){
 if(data11 < 0 || isNaN(data11)){
-const err24 = {instancePath:instancePath+"/lattice/dragFactor",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data11};
+const err24 = {instancePath:instancePath+"/lattice/dragFactor",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data11};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -598,7 +787,7 @@ errors++;
 }
 }
 else {
-const err25 = {instancePath:instancePath+"/lattice/dragFactor",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data11};
+const err25 = {instancePath:instancePath+"/lattice/dragFactor",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data11};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -612,7 +801,7 @@ if(data8.share !== undefined){
 let data12 = data8.share;
 if((typeof data12 == "number") && (isFinite(data12))){
 if(data12 > 1 || isNaN(data12)){
-const err26 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema17.properties.lattice.properties.share,data:data12};
+const err26 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema24.properties.lattice.properties.share,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -622,7 +811,7 @@ vErrors.push(err26);
 errors++;
 }
 if(data12 <= 0 || isNaN(data12)){
-const err27 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema17.properties.lattice.properties.share,data:data12};
+const err27 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema24.properties.lattice.properties.share,data:data12};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -633,7 +822,7 @@ errors++;
 }
 }
 else {
-const err28 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.lattice.properties.share.type,parentSchema:schema17.properties.lattice.properties.share,data:data12};
+const err28 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.lattice.properties.share.type,parentSchema:schema24.properties.lattice.properties.share,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -645,7 +834,7 @@ errors++;
 }
 }
 else {
-const err29 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema17.properties.lattice.type,parentSchema:schema17.properties.lattice,data:data8};
+const err29 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema24.properties.lattice.type,parentSchema:schema24.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -658,7 +847,7 @@ errors++;
 if(data.label !== undefined){
 let data13 = data.label;
 if(typeof data13 !== "string"){
-const err30 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema17.properties.label.type,parentSchema:schema17.properties.label,data:data13};
+const err30 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema24.properties.label.type,parentSchema:schema24.properties.label,data:data13};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -668,9 +857,11 @@ vErrors.push(err30);
 errors++;
 }
 }
-}
-else {
-const err31 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema17.type,parentSchema:schema17,data};
+if(data.G !== undefined){
+let data14 = data.G;
+if((typeof data14 == "number") && (isFinite(data14))){
+if(data14 <= 0 || isNaN(data14)){
+const err31 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data14};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -679,14 +870,139 @@ vErrors.push(err31);
 }
 errors++;
 }
-validate15.errors = vErrors;
+}
+else {
+const err32 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data14};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+if(data.Iy !== undefined){
+let data15 = data.Iy;
+if((typeof data15 == "number") && (isFinite(data15))){
+if(data15 <= 0 || isNaN(data15)){
+const err33 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data15};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+else {
+const err34 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data15};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+if(data.Iz !== undefined){
+let data16 = data.Iz;
+if((typeof data16 == "number") && (isFinite(data16))){
+if(data16 <= 0 || isNaN(data16)){
+const err35 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data16};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+}
+else {
+const err36 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data16};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+if(data.J !== undefined){
+let data17 = data.J;
+if((typeof data17 == "number") && (isFinite(data17))){
+if(data17 <= 0 || isNaN(data17)){
+const err37 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data17};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+else {
+const err38 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data17};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
+}
+errors++;
+}
+}
+if(data.yieldStrength !== undefined){
+let data18 = data.yieldStrength;
+if((typeof data18 == "number") && (isFinite(data18))){
+if(data18 <= 0 || isNaN(data18)){
+const err39 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data18};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+}
+else {
+const err40 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data18};
+if(vErrors === null){
+vErrors = [err40];
+}
+else {
+vErrors.push(err40);
+}
+errors++;
+}
+}
+}
+else {
+const err41 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema24.type,parentSchema:schema24,data};
+if(vErrors === null){
+vErrors = [err41];
+}
+else {
+vErrors.push(err41);
+}
+errors++;
+}
+validate17.errors = vErrors;
 return errors === 0;
 }
 
-const schema24 = {"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
-const schema29 = {"type":"array","items":{"$ref":"#/definitions/id"}};
+const schema36 = {"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
+const schema44 = {"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}};
+const pattern8 = new RegExp("^(?!.*(.).*\\1)[xyz]{0,3}$", "u");
+const schema41 = {"type":"array","items":{"$ref":"#/definitions/id"}};
 
-function validate18(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate20(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(Array.isArray(data)){
@@ -718,7 +1034,7 @@ errors++;
 }
 }
 else {
-const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema29.type,parentSchema:schema29,data};
+const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema41.type,parentSchema:schema41,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -727,12 +1043,12 @@ vErrors.push(err2);
 }
 errors++;
 }
-validate18.errors = vErrors;
+validate20.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate17(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate19(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 const _errs1 = errors;
@@ -752,7 +1068,7 @@ errors++;
 }
 var valid0 = _errs2 === errors;
 if(valid0){
-const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema24.not,parentSchema:schema24,data};
+const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema36.not,parentSchema:schema36,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -774,7 +1090,7 @@ vErrors = null;
 }
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema36.required,parentSchema:schema36,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -784,7 +1100,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.kind === undefined){
-const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema36.required,parentSchema:schema36,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -794,7 +1110,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.from === undefined){
-const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema36.required,parentSchema:schema36,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -804,7 +1120,7 @@ vErrors.push(err4);
 errors++;
 }
 if(data.to === undefined){
-const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema36.required,parentSchema:schema36,data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -814,7 +1130,7 @@ vErrors.push(err5);
 errors++;
 }
 if(data.section === undefined){
-const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema36.required,parentSchema:schema36,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -824,8 +1140,8 @@ vErrors.push(err6);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema24.properties, key0))){
-const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema24,data};
+if(!(func2.call(schema36.properties, key0))){
+const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema36,data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -862,8 +1178,8 @@ errors++;
 }
 if(data.kind !== undefined){
 let data1 = data.kind;
-if(!((data1 === "cable") || (data1 === "bar"))){
-const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema24.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema24.properties.kind.enum,parentSchema:schema24.properties.kind,data:data1};
+if(!(((data1 === "cable") || (data1 === "bar")) || (data1 === "beam"))){
+const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema36.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema36.properties.kind.enum,parentSchema:schema36.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -951,7 +1267,7 @@ errors++;
 if(data.segments !== undefined){
 let data5 = data.segments;
 if(!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))){
-const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema24.properties.segments.type,parentSchema:schema24.properties.segments,data:data5};
+const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema36.properties.segments.type,parentSchema:schema36.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -961,8 +1277,8 @@ vErrors.push(err17);
 errors++;
 }
 if((typeof data5 == "number") && (isFinite(data5))){
-if(data5 < 1 || isNaN(data5)){
-const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema24.properties.segments,data:data5};
+if(data5 > 10000 || isNaN(data5)){
+const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/maximum",keyword:"maximum",params:{comparison: "<=", limit: 10000},message:"must be <= 10000",schema:10000,parentSchema:schema36.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -971,12 +1287,8 @@ vErrors.push(err18);
 }
 errors++;
 }
-}
-}
-if(data.pretension !== undefined){
-let data6 = data.pretension;
-if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err19 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.pretension.type,parentSchema:schema24.properties.pretension,data:data6};
+if(data5 < 1 || isNaN(data5)){
+const err19 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema36.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -986,10 +1298,11 @@ vErrors.push(err19);
 errors++;
 }
 }
-if(data.unstressedLength !== undefined){
-let data7 = data.unstressedLength;
-if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err20 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.unstressedLength.type,parentSchema:schema24.properties.unstressedLength,data:data7};
+}
+if(data.pretension !== undefined){
+let data6 = data.pretension;
+if(!((typeof data6 == "number") && (isFinite(data6)))){
+const err20 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema36.properties.pretension.type,parentSchema:schema36.properties.pretension,data:data6};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -999,16 +1312,10 @@ vErrors.push(err20);
 errors++;
 }
 }
-if(data.groups !== undefined){
-if(!(validate18(data.groups, {instancePath:instancePath+"/groups",parentData:data,parentDataProperty:"groups",rootData}))){
-vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
-errors = vErrors.length;
-}
-}
-if(data.generatedBy !== undefined){
-let data9 = data.generatedBy;
-if(typeof data9 !== "string"){
-const err21 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema24.properties.generatedBy.type,parentSchema:schema24.properties.generatedBy,data:data9};
+if(data.unstressedLength !== undefined){
+let data7 = data.unstressedLength;
+if(!((typeof data7 == "number") && (isFinite(data7)))){
+const err21 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema36.properties.unstressedLength.type,parentSchema:schema36.properties.unstressedLength,data:data7};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1018,9 +1325,16 @@ vErrors.push(err21);
 errors++;
 }
 }
+if(data.groups !== undefined){
+if(!(validate20(data.groups, {instancePath:instancePath+"/groups",parentData:data,parentDataProperty:"groups",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
+errors = vErrors.length;
 }
-else {
-const err22 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema24.type,parentSchema:schema24,data};
+}
+if(data.generatedBy !== undefined){
+let data9 = data.generatedBy;
+if(typeof data9 !== "string"){
+const err22 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema36.properties.generatedBy.type,parentSchema:schema36.properties.generatedBy,data:data9};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -1029,19 +1343,157 @@ vErrors.push(err22);
 }
 errors++;
 }
-validate17.errors = vErrors;
+}
+if(data.orientation !== undefined){
+let data10 = data.orientation;
+if(Array.isArray(data10)){
+if(data10.length > 3){
+const err23 = {instancePath:instancePath+"/orientation",schemaPath:"#/definitions/vec3/maxItems",keyword:"maxItems",params:{limit: 3},message:"must NOT have more than 3 items",schema:3,parentSchema:schema16,data:data10};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+if(data10.length < 3){
+const err24 = {instancePath:instancePath+"/orientation",schemaPath:"#/definitions/vec3/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema16,data:data10};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+const len0 = data10.length;
+for(let i0=0; i0<len0; i0++){
+let data11 = data10[i0];
+if(!((typeof data11 == "number") && (isFinite(data11)))){
+const err25 = {instancePath:instancePath+"/orientation/" + i0,schemaPath:"#/definitions/vec3/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema16.items.type,parentSchema:schema16.items,data:data11};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+}
+}
+else {
+const err26 = {instancePath:instancePath+"/orientation",schemaPath:"#/definitions/vec3/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema16.type,parentSchema:schema16,data:data10};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+}
+if(data.releases !== undefined){
+let data12 = data.releases;
+if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
+for(const key1 in data12){
+if(!((key1 === "start") || (key1 === "end"))){
+const err27 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema36.properties.releases,data:data12};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+}
+if(data12.start !== undefined){
+let data13 = data12.start;
+if(typeof data13 === "string"){
+if(!pattern8.test(data13)){
+const err28 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema44,data:data13};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
+}
+errors++;
+}
+}
+else {
+const err29 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema44.type,parentSchema:schema44,data:data13};
+if(vErrors === null){
+vErrors = [err29];
+}
+else {
+vErrors.push(err29);
+}
+errors++;
+}
+}
+if(data12.end !== undefined){
+let data14 = data12.end;
+if(typeof data14 === "string"){
+if(!pattern8.test(data14)){
+const err30 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema44,data:data14};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+}
+else {
+const err31 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema44.type,parentSchema:schema44,data:data14};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+}
+}
+else {
+const err32 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema36.properties.releases.type,parentSchema:schema36.properties.releases,data:data12};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+}
+else {
+const err33 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema36.type,parentSchema:schema36,data};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+validate19.errors = vErrors;
 return errors === 0;
 }
 
-const schema31 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"}}};
-const schema33 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}};
+const schema46 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}};
+const schema48 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}};
 
-function validate22(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate24(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.node === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema33.required,parentSchema:schema33,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema48.required,parentSchema:schema48,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1051,7 +1503,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.force === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema33.required,parentSchema:schema33,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema48.required,parentSchema:schema48,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1061,8 +1513,8 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!((key0 === "node") || (key0 === "force"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema33,data};
+if(!(((key0 === "node") || (key0 === "force")) || (key0 === "moment"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema48,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1146,9 +1598,11 @@ vErrors.push(err8);
 errors++;
 }
 }
-}
-else {
-const err9 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema33.type,parentSchema:schema33,data};
+if(data.moment !== undefined){
+let data3 = data.moment;
+if(Array.isArray(data3)){
+if(data3.length > 3){
+const err9 = {instancePath:instancePath+"/moment",schemaPath:"#/definitions/vec3/maxItems",keyword:"maxItems",params:{limit: 3},message:"must NOT have more than 3 items",schema:3,parentSchema:schema16,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -1157,19 +1611,66 @@ vErrors.push(err9);
 }
 errors++;
 }
-validate22.errors = vErrors;
+if(data3.length < 3){
+const err10 = {instancePath:instancePath+"/moment",schemaPath:"#/definitions/vec3/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema16,data:data3};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+const len1 = data3.length;
+for(let i1=0; i1<len1; i1++){
+let data4 = data3[i1];
+if(!((typeof data4 == "number") && (isFinite(data4)))){
+const err11 = {instancePath:instancePath+"/moment/" + i1,schemaPath:"#/definitions/vec3/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema16.items.type,parentSchema:schema16.items,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+}
+}
+else {
+const err12 = {instancePath:instancePath+"/moment",schemaPath:"#/definitions/vec3/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema16.type,parentSchema:schema16,data:data3};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+}
+else {
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema48.type,parentSchema:schema48,data};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+validate24.errors = vErrors;
 return errors === 0;
 }
 
-const schema36 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
-const schema38 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
+const schema52 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema54 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
 
-function validate25(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate27(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.required,parentSchema:schema38,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema54.required,parentSchema:schema54,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1183,7 +1684,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "power"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.oneOf[0].required,parentSchema:schema38.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema54.oneOf[0].required,parentSchema:schema54.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1193,7 +1694,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.exponent === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema38.oneOf[0].required,parentSchema:schema38.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema54.oneOf[0].required,parentSchema:schema54.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1204,7 +1705,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((key0 === "kind") || (key0 === "exponent"))){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema38.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema54.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1217,7 +1718,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("power" !== data0){
-const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema38.oneOf[0].properties.kind,data:data0};
+const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema54.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1231,7 +1732,7 @@ if(data.exponent !== undefined){
 let data1 = data.exponent;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 < 0 || isNaN(data1)){
-const err5 = {instancePath:instancePath+"/exponent",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data1};
+const err5 = {instancePath:instancePath+"/exponent",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1242,7 +1743,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath:instancePath+"/exponent",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data1};
+const err6 = {instancePath:instancePath+"/exponent",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1254,7 +1755,7 @@ errors++;
 }
 }
 else {
-const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.oneOf[0].type,parentSchema:schema38.oneOf[0],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema54.oneOf[0].type,parentSchema:schema54.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1267,7 +1768,7 @@ errors++;
 else if(tag0 === "log"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.oneOf[1].required,parentSchema:schema38.oneOf[1],data};
+const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema54.oneOf[1].required,parentSchema:schema54.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1277,7 +1778,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data.roughnessLength === undefined){
-const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema38.oneOf[1].required,parentSchema:schema38.oneOf[1],data};
+const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema54.oneOf[1].required,parentSchema:schema54.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -1288,7 +1789,7 @@ errors++;
 }
 for(const key1 in data){
 if(!((key1 === "kind") || (key1 === "roughnessLength"))){
-const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema38.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema54.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -1301,7 +1802,7 @@ errors++;
 if(data.kind !== undefined){
 let data2 = data.kind;
 if("log" !== data2){
-const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema38.oneOf[1].properties.kind,data:data2};
+const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema54.oneOf[1].properties.kind,data:data2};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -1315,7 +1816,7 @@ if(data.roughnessLength !== undefined){
 let data3 = data.roughnessLength;
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 <= 0 || isNaN(data3)){
-const err12 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data3};
+const err12 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data3};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -1326,7 +1827,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data3};
+const err13 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -1338,7 +1839,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.oneOf[1].type,parentSchema:schema38.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema54.oneOf[1].type,parentSchema:schema54.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -1351,7 +1852,7 @@ errors++;
 else if(tag0 === "uniform"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.oneOf[2].required,parentSchema:schema38.oneOf[2],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema54.oneOf[2].required,parentSchema:schema54.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -1362,7 +1863,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(key2 === "kind")){
-const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema38.oneOf[2],data};
+const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema54.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -1375,7 +1876,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("uniform" !== data4){
-const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema38.oneOf[2].properties.kind,data:data4};
+const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema54.oneOf[2].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -1387,7 +1888,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.oneOf[2].type,parentSchema:schema38.oneOf[2],data};
+const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema54.oneOf[2].type,parentSchema:schema54.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -1398,7 +1899,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema38.discriminator,parentSchema:schema38,data};
+const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema54.discriminator,parentSchema:schema54,data};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -1409,7 +1910,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema38.discriminator,parentSchema:schema38,data};
+const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema54.discriminator,parentSchema:schema54,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -1420,7 +1921,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.type,parentSchema:schema38,data};
+const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema54.type,parentSchema:schema54,data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1429,17 +1930,17 @@ vErrors.push(err21);
 }
 errors++;
 }
-validate25.errors = vErrors;
+validate27.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate24(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate26(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.direction === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema36.required,parentSchema:schema36,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema52.required,parentSchema:schema52,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1449,7 +1950,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.speed === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema36.required,parentSchema:schema36,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema52.required,parentSchema:schema52,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1460,7 +1961,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "direction") || (key0 === "speed")) || (key0 === "profile")) || (key0 === "airDensity")) || (key0 === "groups"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema36,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema52,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1473,7 +1974,7 @@ errors++;
 if(data.direction !== undefined){
 let data0 = data.direction;
 if(!((typeof data0 == "number") && (isFinite(data0)))){
-const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema36.properties.direction.type,parentSchema:schema36.properties.direction,data:data0};
+const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema52.properties.direction.type,parentSchema:schema52.properties.direction,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1487,7 +1988,7 @@ if(data.speed !== undefined){
 let data1 = data.speed;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 < 0 || isNaN(data1)){
-const err4 = {instancePath:instancePath+"/speed",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data1};
+const err4 = {instancePath:instancePath+"/speed",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1498,7 +1999,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath:instancePath+"/speed",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data1};
+const err5 = {instancePath:instancePath+"/speed",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1509,8 +2010,8 @@ errors++;
 }
 }
 if(data.profile !== undefined){
-if(!(validate25(data.profile, {instancePath:instancePath+"/profile",parentData:data,parentDataProperty:"profile",rootData}))){
-vErrors = vErrors === null ? validate25.errors : vErrors.concat(validate25.errors);
+if(!(validate27(data.profile, {instancePath:instancePath+"/profile",parentData:data,parentDataProperty:"profile",rootData}))){
+vErrors = vErrors === null ? validate27.errors : vErrors.concat(validate27.errors);
 errors = vErrors.length;
 }
 }
@@ -1518,7 +2019,7 @@ if(data.airDensity !== undefined){
 let data3 = data.airDensity;
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 <= 0 || isNaN(data3)){
-const err6 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data3};
+const err6 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1529,7 +2030,7 @@ errors++;
 }
 }
 else {
-const err7 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data3};
+const err7 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data3};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1540,14 +2041,14 @@ errors++;
 }
 }
 if(data.groups !== undefined){
-if(!(validate18(data.groups, {instancePath:instancePath+"/groups",parentData:data,parentDataProperty:"groups",rootData}))){
-vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
+if(!(validate20(data.groups, {instancePath:instancePath+"/groups",parentData:data,parentDataProperty:"groups",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema36.type,parentSchema:schema36,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.type,parentSchema:schema52,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1556,18 +2057,18 @@ vErrors.push(err8);
 }
 errors++;
 }
-validate24.errors = vErrors;
+validate26.errors = vErrors;
 return errors === 0;
 }
 
-const schema42 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema58 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
 
-function validate29(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate31(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.thickness === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema42.required,parentSchema:schema42,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema58.required,parentSchema:schema58,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1578,7 +2079,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "thickness") || (key0 === "density")) || (key0 === "groups"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema42,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema58,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1592,7 +2093,7 @@ if(data.thickness !== undefined){
 let data0 = data.thickness;
 if((typeof data0 == "number") && (isFinite(data0))){
 if(data0 < 0 || isNaN(data0)){
-const err2 = {instancePath:instancePath+"/thickness",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data0};
+const err2 = {instancePath:instancePath+"/thickness",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data0};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1603,7 +2104,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/thickness",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data0};
+const err3 = {instancePath:instancePath+"/thickness",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1617,7 +2118,7 @@ if(data.density !== undefined){
 let data1 = data.density;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 <= 0 || isNaN(data1)){
-const err4 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data1};
+const err4 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1628,7 +2129,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data1};
+const err5 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1639,14 +2140,14 @@ errors++;
 }
 }
 if(data.groups !== undefined){
-if(!(validate18(data.groups, {instancePath:instancePath+"/groups",parentData:data,parentDataProperty:"groups",rootData}))){
-vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
+if(!(validate20(data.groups, {instancePath:instancePath+"/groups",parentData:data,parentDataProperty:"groups",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema42.type,parentSchema:schema42,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema58.type,parentSchema:schema58,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1655,17 +2156,18 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate29.errors = vErrors;
+validate31.errors = vErrors;
 return errors === 0;
 }
 
+const schema61 = {"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}};
 
-function validate21(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate34(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
-if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema31.required,parentSchema:schema31,data};
+if(data.node === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema61.required,parentSchema:schema61,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1675,8 +2177,351 @@ vErrors.push(err0);
 errors++;
 }
 for(const key0 in data){
-if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "selfWeight")) || (key0 === "temperatureChange")) || (key0 === "nodalLoads")) || (key0 === "wind")) || (key0 === "ice"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema31,data};
+if(!(((((((key0 === "node") || (key0 === "x")) || (key0 === "y")) || (key0 === "z")) || (key0 === "rx")) || (key0 === "ry")) || (key0 === "rz"))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema61,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+}
+if(data.node !== undefined){
+let data0 = data.node;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err2 = {instancePath:instancePath+"/node",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+else {
+const err3 = {instancePath:instancePath+"/node",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.x !== undefined){
+let data1 = data.x;
+if(!((typeof data1 == "number") && (isFinite(data1)))){
+const err4 = {instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema61.properties.x.type,parentSchema:schema61.properties.x,data:data1};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.y !== undefined){
+let data2 = data.y;
+if(!((typeof data2 == "number") && (isFinite(data2)))){
+const err5 = {instancePath:instancePath+"/y",schemaPath:"#/properties/y/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema61.properties.y.type,parentSchema:schema61.properties.y,data:data2};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.z !== undefined){
+let data3 = data.z;
+if(!((typeof data3 == "number") && (isFinite(data3)))){
+const err6 = {instancePath:instancePath+"/z",schemaPath:"#/properties/z/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema61.properties.z.type,parentSchema:schema61.properties.z,data:data3};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+if(data.rx !== undefined){
+let data4 = data.rx;
+if(!((typeof data4 == "number") && (isFinite(data4)))){
+const err7 = {instancePath:instancePath+"/rx",schemaPath:"#/properties/rx/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema61.properties.rx.type,parentSchema:schema61.properties.rx,data:data4};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+if(data.ry !== undefined){
+let data5 = data.ry;
+if(!((typeof data5 == "number") && (isFinite(data5)))){
+const err8 = {instancePath:instancePath+"/ry",schemaPath:"#/properties/ry/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema61.properties.ry.type,parentSchema:schema61.properties.ry,data:data5};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.rz !== undefined){
+let data6 = data.rz;
+if(!((typeof data6 == "number") && (isFinite(data6)))){
+const err9 = {instancePath:instancePath+"/rz",schemaPath:"#/properties/rz/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema61.properties.rz.type,parentSchema:schema61.properties.rz,data:data6};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+}
+else {
+const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema61.type,parentSchema:schema61,data};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+validate34.errors = vErrors;
+return errors === 0;
+}
+
+const schema63 = {"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}};
+const schema64 = {"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}};
+
+function validate38(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.region === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "region"},message:"must have required property '"+"region"+"'",schema:schema64.required,parentSchema:schema64,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.cp === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "cp"},message:"must have required property '"+"cp"+"'",schema:schema64.required,parentSchema:schema64,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((key0 === "region") || (key0 === "cp"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema64,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.region !== undefined){
+let data0 = data.region;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err3 = {instancePath:instancePath+"/region",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+else {
+const err4 = {instancePath:instancePath+"/region",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.cp !== undefined){
+let data1 = data.cp;
+if(!((typeof data1 == "number") && (isFinite(data1)))){
+const err5 = {instancePath:instancePath+"/cp",schemaPath:"#/properties/cp/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema64.properties.cp.type,parentSchema:schema64.properties.cp,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+}
+else {
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema64.type,parentSchema:schema64,data};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+validate38.errors = vErrors;
+return errors === 0;
+}
+
+
+function validate36(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.kind === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema63.required,parentSchema:schema63,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.value === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema63.required,parentSchema:schema63,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((((key0 === "kind") || (key0 === "value")) || (key0 === "panels")) || (key0 === "coefficients"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema63,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.kind !== undefined){
+let data0 = data.kind;
+if(!(((data0 === "snow") || (data0 === "cladding")) || (data0 === "pressure"))){
+const err3 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema63.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema63.properties.kind.enum,parentSchema:schema63.properties.kind,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.value !== undefined){
+let data1 = data.value;
+if(!((typeof data1 == "number") && (isFinite(data1)))){
+const err4 = {instancePath:instancePath+"/value",schemaPath:"#/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema63.properties.value.type,parentSchema:schema63.properties.value,data:data1};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.panels !== undefined){
+if(!(validate20(data.panels, {instancePath:instancePath+"/panels",parentData:data,parentDataProperty:"panels",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
+errors = vErrors.length;
+}
+}
+if(data.coefficients !== undefined){
+let data3 = data.coefficients;
+if(Array.isArray(data3)){
+const len0 = data3.length;
+for(let i0=0; i0<len0; i0++){
+if(!(validate38(data3[i0], {instancePath:instancePath+"/coefficients/" + i0,parentData:data3,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate38.errors : vErrors.concat(validate38.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err5 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema63.properties.coefficients.type,parentSchema:schema63.properties.coefficients,data:data3};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+}
+else {
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema63.type,parentSchema:schema63,data};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+validate36.errors = vErrors;
+return errors === 0;
+}
+
+
+function validate23(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema46.required,parentSchema:schema46,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(func2.call(schema46.properties, key0))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema46,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1714,7 +2559,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema31.properties.label.type,parentSchema:schema31.properties.label,data:data1};
+const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema46.properties.label.type,parentSchema:schema46.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1727,7 +2572,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data2 = data.selfWeight;
 if(typeof data2 !== "boolean"){
-const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema31.properties.selfWeight.type,parentSchema:schema31.properties.selfWeight,data:data2};
+const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema46.properties.selfWeight.type,parentSchema:schema46.properties.selfWeight,data:data2};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1740,7 +2585,7 @@ errors++;
 if(data.temperatureChange !== undefined){
 let data3 = data.temperatureChange;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema31.properties.temperatureChange.type,parentSchema:schema31.properties.temperatureChange,data:data3};
+const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema46.properties.temperatureChange.type,parentSchema:schema46.properties.temperatureChange,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1755,14 +2600,14 @@ let data4 = data.nodalLoads;
 if(Array.isArray(data4)){
 const len0 = data4.length;
 for(let i0=0; i0<len0; i0++){
-if(!(validate22(data4[i0], {instancePath:instancePath+"/nodalLoads/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
-vErrors = vErrors === null ? validate22.errors : vErrors.concat(validate22.errors);
+if(!(validate24(data4[i0], {instancePath:instancePath+"/nodalLoads/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate24.errors : vErrors.concat(validate24.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema31.properties.nodalLoads.type,parentSchema:schema31.properties.nodalLoads,data:data4};
+const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema46.properties.nodalLoads.type,parentSchema:schema46.properties.nodalLoads,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1773,20 +2618,30 @@ errors++;
 }
 }
 if(data.wind !== undefined){
-if(!(validate24(data.wind, {instancePath:instancePath+"/wind",parentData:data,parentDataProperty:"wind",rootData}))){
-vErrors = vErrors === null ? validate24.errors : vErrors.concat(validate24.errors);
+if(!(validate26(data.wind, {instancePath:instancePath+"/wind",parentData:data,parentDataProperty:"wind",rootData}))){
+vErrors = vErrors === null ? validate26.errors : vErrors.concat(validate26.errors);
 errors = vErrors.length;
 }
 }
 if(data.ice !== undefined){
-if(!(validate29(data.ice, {instancePath:instancePath+"/ice",parentData:data,parentDataProperty:"ice",rootData}))){
-vErrors = vErrors === null ? validate29.errors : vErrors.concat(validate29.errors);
+if(!(validate31(data.ice, {instancePath:instancePath+"/ice",parentData:data,parentDataProperty:"ice",rootData}))){
+vErrors = vErrors === null ? validate31.errors : vErrors.concat(validate31.errors);
+errors = vErrors.length;
+}
+}
+if(data.displacements !== undefined){
+let data8 = data.displacements;
+if(Array.isArray(data8)){
+const len1 = data8.length;
+for(let i1=0; i1<len1; i1++){
+if(!(validate34(data8[i1], {instancePath:instancePath+"/displacements/" + i1,parentData:data8,parentDataProperty:i1,rootData}))){
+vErrors = vErrors === null ? validate34.errors : vErrors.concat(validate34.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema31.type,parentSchema:schema31,data};
+const err8 = {instancePath:instancePath+"/displacements",schemaPath:"#/properties/displacements/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema46.properties.displacements.type,parentSchema:schema46.properties.displacements,data:data8};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1795,18 +2650,52 @@ vErrors.push(err8);
 }
 errors++;
 }
-validate21.errors = vErrors;
+}
+if(data.areaLoads !== undefined){
+let data10 = data.areaLoads;
+if(Array.isArray(data10)){
+const len2 = data10.length;
+for(let i2=0; i2<len2; i2++){
+if(!(validate36(data10[i2], {instancePath:instancePath+"/areaLoads/" + i2,parentData:data10,parentDataProperty:i2,rootData}))){
+vErrors = vErrors === null ? validate36.errors : vErrors.concat(validate36.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err9 = {instancePath:instancePath+"/areaLoads",schemaPath:"#/properties/areaLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema46.properties.areaLoads.type,parentSchema:schema46.properties.areaLoads,data:data10};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+}
+else {
+const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema46.type,parentSchema:schema46,data};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+validate23.errors = vErrors;
 return errors === 0;
 }
 
-const schema45 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
+const schema66 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
 
-function validate33(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate42(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema45.required,parentSchema:schema45,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema66.required,parentSchema:schema66,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1816,7 +2705,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.members === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema45.required,parentSchema:schema45,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema66.required,parentSchema:schema66,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1827,7 +2716,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "label")) || (key0 === "members"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema45,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema66,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1865,7 +2754,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema45.properties.label.type,parentSchema:schema45.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema66.properties.label.type,parentSchema:schema66.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1876,14 +2765,14 @@ errors++;
 }
 }
 if(data.members !== undefined){
-if(!(validate18(data.members, {instancePath:instancePath+"/members",parentData:data,parentDataProperty:"members",rootData}))){
-vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
+if(!(validate20(data.members, {instancePath:instancePath+"/members",parentData:data,parentDataProperty:"members",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema45.type,parentSchema:schema45,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema66.type,parentSchema:schema66,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1892,18 +2781,18 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate33.errors = vErrors;
+validate42.errors = vErrors;
 return errors === 0;
 }
 
-const schema47 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}};
+const schema68 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}};
 
-function validate36(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate45(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema47.required,parentSchema:schema47,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema68.required,parentSchema:schema68,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1913,7 +2802,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.factors === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema47.required,parentSchema:schema47,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema68.required,parentSchema:schema68,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1924,7 +2813,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "label")) || (key0 === "factors"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema47,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema68,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1962,7 +2851,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema47.properties.label.type,parentSchema:schema47.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema68.properties.label.type,parentSchema:schema68.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1976,7 +2865,7 @@ if(data.factors !== undefined){
 let data2 = data.factors;
 if(Array.isArray(data2)){
 if(data2.length < 1){
-const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema47.properties.factors,data:data2};
+const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema68.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1990,7 +2879,7 @@ for(let i0=0; i0<len0; i0++){
 let data3 = data2[i0];
 if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
 if(data3.case === undefined){
-const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema47.properties.factors.items.required,parentSchema:schema47.properties.factors.items,data:data3};
+const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema68.properties.factors.items.required,parentSchema:schema68.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2000,7 +2889,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data3.factor === undefined){
-const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema47.properties.factors.items.required,parentSchema:schema47.properties.factors.items,data:data3};
+const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema68.properties.factors.items.required,parentSchema:schema68.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2011,7 +2900,7 @@ errors++;
 }
 for(const key1 in data3){
 if(!((key1 === "case") || (key1 === "factor"))){
-const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema47.properties.factors.items,data:data3};
+const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema68.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2049,7 +2938,7 @@ errors++;
 if(data3.factor !== undefined){
 let data5 = data3.factor;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema47.properties.factors.items.properties.factor.type,parentSchema:schema47.properties.factors.items.properties.factor,data:data5};
+const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema68.properties.factors.items.properties.factor.type,parentSchema:schema68.properties.factors.items.properties.factor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2061,7 +2950,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema47.properties.factors.items.type,parentSchema:schema47.properties.factors.items,data:data3};
+const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema68.properties.factors.items.type,parentSchema:schema68.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2073,7 +2962,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema47.properties.factors.type,parentSchema:schema47.properties.factors,data:data2};
+const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema68.properties.factors.type,parentSchema:schema68.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2085,7 +2974,7 @@ errors++;
 }
 }
 else {
-const err15 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema47.type,parentSchema:schema47,data};
+const err15 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema68.type,parentSchema:schema68,data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -2094,18 +2983,18 @@ vErrors.push(err15);
 }
 errors++;
 }
-validate36.errors = vErrors;
+validate45.errors = vErrors;
 return errors === 0;
 }
 
-const schema50 = {"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}};
-const schema52 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
+const schema71 = {"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}};
+const schema73 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
 
-function validate40(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate49(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(!(data && typeof data == "object" && !Array.isArray(data))){
-const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.type,parentSchema:schema52,data};
+const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema73.type,parentSchema:schema73,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2120,7 +3009,7 @@ let passing0 = null;
 const _errs2 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.fractionOfSpan === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema52.oneOf[0].required,parentSchema:schema52.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema73.oneOf[0].required,parentSchema:schema73.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2131,7 +3020,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(key0 === "fractionOfSpan")){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema52.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema73.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2145,7 +3034,7 @@ if(data.fractionOfSpan !== undefined){
 let data0 = data.fractionOfSpan;
 if((typeof data0 == "number") && (isFinite(data0))){
 if(data0 <= 0 || isNaN(data0)){
-const err3 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data0};
+const err3 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2156,7 +3045,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data0};
+const err4 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data0};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2168,7 +3057,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.oneOf[0].type,parentSchema:schema52.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema73.oneOf[0].type,parentSchema:schema73.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2185,7 +3074,7 @@ passing0 = 0;
 const _errs9 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.absolute === undefined){
-const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema52.oneOf[1].required,parentSchema:schema52.oneOf[1],data};
+const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema73.oneOf[1].required,parentSchema:schema73.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2196,7 +3085,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(key1 === "absolute")){
-const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema52.oneOf[1],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema73.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2210,7 +3099,7 @@ if(data.absolute !== undefined){
 let data1 = data.absolute;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 <= 0 || isNaN(data1)){
-const err8 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data1};
+const err8 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data1};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2221,7 +3110,7 @@ errors++;
 }
 }
 else {
-const err9 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data1};
+const err9 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data1};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2233,7 +3122,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.oneOf[1].type,parentSchema:schema52.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema73.oneOf[1].type,parentSchema:schema73.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2254,7 +3143,7 @@ passing0 = 1;
 }
 }
 if(!valid0){
-const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema52.oneOf,parentSchema:schema52,data};
+const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema73.oneOf,parentSchema:schema73,data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2274,18 +3163,18 @@ vErrors = null;
 }
 }
 }
-validate40.errors = vErrors;
+validate49.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate38(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate47(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((((((key0 === "resistanceFactor") || (key0 === "noSlackGroups")) || (key0 === "sagLimits")) || (key0 === "displacementLimits")) || (key0 === "tiltLimits")) || (key0 === "upliftNodes"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema50,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema71,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2299,7 +3188,7 @@ if(data.resistanceFactor !== undefined){
 let data0 = data.resistanceFactor;
 if((typeof data0 == "number") && (isFinite(data0))){
 if(data0 > 1 || isNaN(data0)){
-const err1 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema50.properties.resistanceFactor,data:data0};
+const err1 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema71.properties.resistanceFactor,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2309,7 +3198,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data0 <= 0 || isNaN(data0)){
-const err2 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema50.properties.resistanceFactor,data:data0};
+const err2 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema71.properties.resistanceFactor,data:data0};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2320,7 +3209,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema50.properties.resistanceFactor.type,parentSchema:schema50.properties.resistanceFactor,data:data0};
+const err3 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema71.properties.resistanceFactor.type,parentSchema:schema71.properties.resistanceFactor,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2331,8 +3220,8 @@ errors++;
 }
 }
 if(data.noSlackGroups !== undefined){
-if(!(validate18(data.noSlackGroups, {instancePath:instancePath+"/noSlackGroups",parentData:data,parentDataProperty:"noSlackGroups",rootData}))){
-vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
+if(!(validate20(data.noSlackGroups, {instancePath:instancePath+"/noSlackGroups",parentData:data,parentDataProperty:"noSlackGroups",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
 errors = vErrors.length;
 }
 }
@@ -2344,7 +3233,7 @@ for(let i0=0; i0<len0; i0++){
 let data3 = data2[i0];
 if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
 if(data3.group === undefined){
-const err4 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema50.properties.sagLimits.items.required,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err4 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema71.properties.sagLimits.items.required,parentSchema:schema71.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2354,7 +3243,7 @@ vErrors.push(err4);
 errors++;
 }
 if(data3.limit === undefined){
-const err5 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema50.properties.sagLimits.items.required,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err5 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema71.properties.sagLimits.items.required,parentSchema:schema71.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2365,7 +3254,7 @@ errors++;
 }
 for(const key1 in data3){
 if(!((key1 === "group") || (key1 === "limit"))){
-const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema71.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2401,14 +3290,14 @@ errors++;
 }
 }
 if(data3.limit !== undefined){
-if(!(validate40(data3.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data3,parentDataProperty:"limit",rootData}))){
-vErrors = vErrors === null ? validate40.errors : vErrors.concat(validate40.errors);
+if(!(validate49(data3.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data3,parentDataProperty:"limit",rootData}))){
+vErrors = vErrors === null ? validate49.errors : vErrors.concat(validate49.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err9 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.sagLimits.items.type,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err9 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema71.properties.sagLimits.items.type,parentSchema:schema71.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2420,7 +3309,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.sagLimits.type,parentSchema:schema50.properties.sagLimits,data:data2};
+const err10 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema71.properties.sagLimits.type,parentSchema:schema71.properties.sagLimits,data:data2};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2438,7 +3327,7 @@ for(let i1=0; i1<len1; i1++){
 let data7 = data6[i1];
 if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 if(data7.node === undefined){
-const err11 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema50.properties.displacementLimits.items.required,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err11 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema71.properties.displacementLimits.items.required,parentSchema:schema71.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2448,7 +3337,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data7.limit === undefined){
-const err12 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema50.properties.displacementLimits.items.required,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err12 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema71.properties.displacementLimits.items.required,parentSchema:schema71.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2459,7 +3348,7 @@ errors++;
 }
 for(const key2 in data7){
 if(!((key2 === "node") || (key2 === "limit"))){
-const err13 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err13 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema71.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2498,7 +3387,7 @@ if(data7.limit !== undefined){
 let data9 = data7.limit;
 if((typeof data9 == "number") && (isFinite(data9))){
 if(data9 <= 0 || isNaN(data9)){
-const err16 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data9};
+const err16 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data9};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -2509,7 +3398,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data9};
+const err17 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -2521,7 +3410,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.displacementLimits.items.type,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err18 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema71.properties.displacementLimits.items.type,parentSchema:schema71.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -2533,7 +3422,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.displacementLimits.type,parentSchema:schema50.properties.displacementLimits,data:data6};
+const err19 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema71.properties.displacementLimits.type,parentSchema:schema71.properties.displacementLimits,data:data6};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -2551,7 +3440,7 @@ for(let i2=0; i2<len2; i2++){
 let data11 = data10[i2];
 if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
 if(data11.base === undefined){
-const err20 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema50.properties.tiltLimits.items.required,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err20 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema71.properties.tiltLimits.items.required,parentSchema:schema71.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -2561,7 +3450,7 @@ vErrors.push(err20);
 errors++;
 }
 if(data11.top === undefined){
-const err21 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema50.properties.tiltLimits.items.required,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err21 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema71.properties.tiltLimits.items.required,parentSchema:schema71.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -2571,7 +3460,7 @@ vErrors.push(err21);
 errors++;
 }
 if(data11.limit === undefined){
-const err22 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema50.properties.tiltLimits.items.required,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err22 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema71.properties.tiltLimits.items.required,parentSchema:schema71.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -2582,7 +3471,7 @@ errors++;
 }
 for(const key3 in data11){
 if(!(((key3 === "base") || (key3 === "top")) || (key3 === "limit"))){
-const err23 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err23 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema71.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -2646,7 +3535,7 @@ if(data11.limit !== undefined){
 let data14 = data11.limit;
 if((typeof data14 == "number") && (isFinite(data14))){
 if(data14 <= 0 || isNaN(data14)){
-const err28 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data14};
+const err28 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data14};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -2657,7 +3546,7 @@ errors++;
 }
 }
 else {
-const err29 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data14};
+const err29 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data14};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -2669,7 +3558,7 @@ errors++;
 }
 }
 else {
-const err30 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.tiltLimits.items.type,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err30 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema71.properties.tiltLimits.items.type,parentSchema:schema71.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -2681,7 +3570,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.tiltLimits.type,parentSchema:schema50.properties.tiltLimits,data:data10};
+const err31 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema71.properties.tiltLimits.type,parentSchema:schema71.properties.tiltLimits,data:data10};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -2692,14 +3581,14 @@ errors++;
 }
 }
 if(data.upliftNodes !== undefined){
-if(!(validate18(data.upliftNodes, {instancePath:instancePath+"/upliftNodes",parentData:data,parentDataProperty:"upliftNodes",rootData}))){
-vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
+if(!(validate20(data.upliftNodes, {instancePath:instancePath+"/upliftNodes",parentData:data,parentDataProperty:"upliftNodes",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err32 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.type,parentSchema:schema50,data};
+const err32 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema71.type,parentSchema:schema71,data};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -2708,19 +3597,19 @@ vErrors.push(err32);
 }
 errors++;
 }
-validate38.errors = vErrors;
+validate47.errors = vErrors;
 return errors === 0;
 }
 
-const schema60 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
-const schema62 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
+const schema81 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
+const schema83 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
 
-function validate45(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate54(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.required,parentSchema:schema62,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema83.required,parentSchema:schema83,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2734,7 +3623,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "sag"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema83.oneOf[0].required,parentSchema:schema83.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2744,7 +3633,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.group === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema83.oneOf[0].required,parentSchema:schema83.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2754,7 +3643,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.case === undefined){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema83.oneOf[0].required,parentSchema:schema83.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2764,7 +3653,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.limit === undefined){
-const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema83.oneOf[0].required,parentSchema:schema83.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2775,7 +3664,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "kind") || (key0 === "group")) || (key0 === "case")) || (key0 === "limit"))){
-const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema83.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2788,7 +3677,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("sag" !== data0){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema62.oneOf[0].properties.kind,data:data0};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema83.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2849,14 +3738,14 @@ errors++;
 }
 }
 if(data.limit !== undefined){
-if(!(validate40(data.limit, {instancePath:instancePath+"/limit",parentData:data,parentDataProperty:"limit",rootData}))){
-vErrors = vErrors === null ? validate40.errors : vErrors.concat(validate40.errors);
+if(!(validate49(data.limit, {instancePath:instancePath+"/limit",parentData:data,parentDataProperty:"limit",rootData}))){
+vErrors = vErrors === null ? validate49.errors : vErrors.concat(validate49.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[0].type,parentSchema:schema62.oneOf[0],data};
+const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.oneOf[0].type,parentSchema:schema83.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2869,7 +3758,7 @@ errors++;
 else if(tag0 === "tensionShare"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[1].required,parentSchema:schema62.oneOf[1],data};
+const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema83.oneOf[1].required,parentSchema:schema83.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2879,7 +3768,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data.group === undefined){
-const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema62.oneOf[1].required,parentSchema:schema62.oneOf[1],data};
+const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema83.oneOf[1].required,parentSchema:schema83.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2889,7 +3778,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data.share === undefined){
-const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema62.oneOf[1].required,parentSchema:schema62.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema83.oneOf[1].required,parentSchema:schema83.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2900,7 +3789,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(((key1 === "kind") || (key1 === "group")) || (key1 === "share"))){
-const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[1],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema83.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -2913,7 +3802,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("tensionShare" !== data4){
-const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema62.oneOf[1].properties.kind,data:data4};
+const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema83.oneOf[1].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -2952,7 +3841,7 @@ if(data.share !== undefined){
 let data6 = data.share;
 if((typeof data6 == "number") && (isFinite(data6))){
 if(data6 <= 0 || isNaN(data6)){
-const err19 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data6};
+const err19 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data6};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -2963,7 +3852,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data6};
+const err20 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data6};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -2975,7 +3864,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[1].type,parentSchema:schema62.oneOf[1],data};
+const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.oneOf[1].type,parentSchema:schema83.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -2988,7 +3877,7 @@ errors++;
 else if(tag0 === "noSlack"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[2].required,parentSchema:schema62.oneOf[2],data};
+const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema83.oneOf[2].required,parentSchema:schema83.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -2998,7 +3887,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data.group === undefined){
-const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema62.oneOf[2].required,parentSchema:schema62.oneOf[2],data};
+const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema83.oneOf[2].required,parentSchema:schema83.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -3008,7 +3897,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data.case === undefined){
-const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[2].required,parentSchema:schema62.oneOf[2],data};
+const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema83.oneOf[2].required,parentSchema:schema83.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -3019,7 +3908,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(((key2 === "kind") || (key2 === "group")) || (key2 === "case"))){
-const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[2],data};
+const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema83.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -3032,7 +3921,7 @@ errors++;
 if(data.kind !== undefined){
 let data7 = data.kind;
 if("noSlack" !== data7){
-const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema62.oneOf[2].properties.kind,data:data7};
+const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema83.oneOf[2].properties.kind,data:data7};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -3094,7 +3983,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[2].type,parentSchema:schema62.oneOf[2],data};
+const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.oneOf[2].type,parentSchema:schema83.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -3107,7 +3996,7 @@ errors++;
 else if(tag0 === "plumb"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema83.oneOf[3].required,parentSchema:schema83.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -3117,7 +4006,7 @@ vErrors.push(err32);
 errors++;
 }
 if(data.base === undefined){
-const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema83.oneOf[3].required,parentSchema:schema83.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -3127,7 +4016,7 @@ vErrors.push(err33);
 errors++;
 }
 if(data.top === undefined){
-const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema83.oneOf[3].required,parentSchema:schema83.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -3137,7 +4026,7 @@ vErrors.push(err34);
 errors++;
 }
 if(data.case === undefined){
-const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema83.oneOf[3].required,parentSchema:schema83.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -3147,7 +4036,7 @@ vErrors.push(err35);
 errors++;
 }
 if(data.tolerance === undefined){
-const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema83.oneOf[3].required,parentSchema:schema83.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -3158,7 +4047,7 @@ errors++;
 }
 for(const key3 in data){
 if(!(((((key3 === "kind") || (key3 === "base")) || (key3 === "top")) || (key3 === "case")) || (key3 === "tolerance"))){
-const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[3],data};
+const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema83.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -3171,7 +4060,7 @@ errors++;
 if(data.kind !== undefined){
 let data10 = data.kind;
 if("plumb" !== data10){
-const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema62.oneOf[3].properties.kind,data:data10};
+const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema83.oneOf[3].properties.kind,data:data10};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -3260,7 +4149,7 @@ if(data.tolerance !== undefined){
 let data14 = data.tolerance;
 if((typeof data14 == "number") && (isFinite(data14))){
 if(data14 < 0 || isNaN(data14)){
-const err45 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data14};
+const err45 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data14};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -3271,7 +4160,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data14};
+const err46 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data14};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -3283,7 +4172,7 @@ errors++;
 }
 }
 else {
-const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[3].type,parentSchema:schema62.oneOf[3],data};
+const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.oneOf[3].type,parentSchema:schema83.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -3296,7 +4185,7 @@ errors++;
 else if(tag0 === "reaction"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema83.oneOf[4].required,parentSchema:schema83.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -3306,7 +4195,7 @@ vErrors.push(err48);
 errors++;
 }
 if(data.node === undefined){
-const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema83.oneOf[4].required,parentSchema:schema83.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -3316,7 +4205,7 @@ vErrors.push(err49);
 errors++;
 }
 if(data.case === undefined){
-const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema83.oneOf[4].required,parentSchema:schema83.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -3326,7 +4215,7 @@ vErrors.push(err50);
 errors++;
 }
 if(data.limit === undefined){
-const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema83.oneOf[4].required,parentSchema:schema83.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -3337,7 +4226,7 @@ errors++;
 }
 for(const key4 in data){
 if(!((((key4 === "kind") || (key4 === "node")) || (key4 === "case")) || (key4 === "limit"))){
-const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[4],data};
+const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema83.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -3350,7 +4239,7 @@ errors++;
 if(data.kind !== undefined){
 let data15 = data.kind;
 if("reaction" !== data15){
-const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema62.oneOf[4].properties.kind,data:data15};
+const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema83.oneOf[4].properties.kind,data:data15};
 if(vErrors === null){
 vErrors = [err53];
 }
@@ -3413,7 +4302,7 @@ errors++;
 if(data.limit !== undefined){
 let data18 = data.limit;
 if(!((typeof data18 == "number") && (isFinite(data18)))){
-const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.oneOf[4].properties.limit.type,parentSchema:schema62.oneOf[4].properties.limit,data:data18};
+const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema83.oneOf[4].properties.limit.type,parentSchema:schema83.oneOf[4].properties.limit,data:data18};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -3425,7 +4314,7 @@ errors++;
 }
 }
 else {
-const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[4].type,parentSchema:schema62.oneOf[4],data};
+const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.oneOf[4].type,parentSchema:schema83.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -3436,7 +4325,7 @@ errors++;
 }
 }
 else {
-const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema62.discriminator,parentSchema:schema62,data};
+const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema83.discriminator,parentSchema:schema83,data};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -3447,7 +4336,7 @@ errors++;
 }
 }
 else {
-const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema62.discriminator,parentSchema:schema62,data};
+const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema83.discriminator,parentSchema:schema83,data};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -3458,7 +4347,7 @@ errors++;
 }
 }
 else {
-const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.type,parentSchema:schema62,data};
+const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.type,parentSchema:schema83,data};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -3467,17 +4356,17 @@ vErrors.push(err62);
 }
 errors++;
 }
-validate45.errors = vErrors;
+validate54.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate44(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.variables === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema60.required,parentSchema:schema60,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema81.required,parentSchema:schema81,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3487,7 +4376,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.targets === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema60.required,parentSchema:schema60,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema81.required,parentSchema:schema81,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3498,7 +4387,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "variables") || (key0 === "targets")) || (key0 === "lastRun"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema60,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema81,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3516,7 +4405,7 @@ for(let i0=0; i0<len0; i0++){
 let data1 = data0[i0];
 if(data1 && typeof data1 == "object" && !Array.isArray(data1)){
 if(data1.group === undefined){
-const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema60.properties.variables.items.required,parentSchema:schema60.properties.variables.items,data:data1};
+const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema81.properties.variables.items.required,parentSchema:schema81.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3526,7 +4415,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data1.by === undefined){
-const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema60.properties.variables.items.required,parentSchema:schema60.properties.variables.items,data:data1};
+const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema81.properties.variables.items.required,parentSchema:schema81.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3537,7 +4426,7 @@ errors++;
 }
 for(const key1 in data1){
 if(!((((key1 === "group") || (key1 === "by")) || (key1 === "min")) || (key1 === "max"))){
-const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema60.properties.variables.items,data:data1};
+const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3575,7 +4464,7 @@ errors++;
 if(data1.by !== undefined){
 let data3 = data1.by;
 if(!((data3 === "pretension") || (data3 === "unstressedLength"))){
-const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema60.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema60.properties.variables.items.properties.by.enum,parentSchema:schema60.properties.variables.items.properties.by,data:data3};
+const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema81.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema81.properties.variables.items.properties.by.enum,parentSchema:schema81.properties.variables.items.properties.by,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3588,7 +4477,7 @@ errors++;
 if(data1.min !== undefined){
 let data4 = data1.min;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema60.properties.variables.items.properties.min.type,parentSchema:schema60.properties.variables.items.properties.min,data:data4};
+const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema81.properties.variables.items.properties.min.type,parentSchema:schema81.properties.variables.items.properties.min,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3601,7 +4490,7 @@ errors++;
 if(data1.max !== undefined){
 let data5 = data1.max;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema60.properties.variables.items.properties.max.type,parentSchema:schema60.properties.variables.items.properties.max,data:data5};
+const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema81.properties.variables.items.properties.max.type,parentSchema:schema81.properties.variables.items.properties.max,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3613,7 +4502,7 @@ errors++;
 }
 }
 else {
-const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema60.properties.variables.items.type,parentSchema:schema60.properties.variables.items,data:data1};
+const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.variables.items.type,parentSchema:schema81.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3625,7 +4514,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema60.properties.variables.type,parentSchema:schema60.properties.variables,data:data0};
+const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.variables.type,parentSchema:schema81.properties.variables,data:data0};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -3640,14 +4529,14 @@ let data6 = data.targets;
 if(Array.isArray(data6)){
 const len1 = data6.length;
 for(let i1=0; i1<len1; i1++){
-if(!(validate45(data6[i1], {instancePath:instancePath+"/targets/" + i1,parentData:data6,parentDataProperty:i1,rootData}))){
-vErrors = vErrors === null ? validate45.errors : vErrors.concat(validate45.errors);
+if(!(validate54(data6[i1], {instancePath:instancePath+"/targets/" + i1,parentData:data6,parentDataProperty:i1,rootData}))){
+vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema60.properties.targets.type,parentSchema:schema60.properties.targets,data:data6};
+const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.targets.type,parentSchema:schema81.properties.targets,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -3661,7 +4550,7 @@ if(data.lastRun !== undefined){
 let data8 = data.lastRun;
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 if(data8.date === undefined){
-const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema60.properties.lastRun.required,parentSchema:schema60.properties.lastRun,data:data8};
+const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema81.properties.lastRun.required,parentSchema:schema81.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -3671,7 +4560,7 @@ vErrors.push(err14);
 errors++;
 }
 if(data8.summary === undefined){
-const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema60.properties.lastRun.required,parentSchema:schema60.properties.lastRun,data:data8};
+const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema81.properties.lastRun.required,parentSchema:schema81.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3682,7 +4571,7 @@ errors++;
 }
 for(const key2 in data8){
 if(!((key2 === "date") || (key2 === "summary"))){
-const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema60.properties.lastRun,data:data8};
+const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -3695,7 +4584,7 @@ errors++;
 if(data8.date !== undefined){
 let data9 = data8.date;
 if(typeof data9 !== "string"){
-const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema60.properties.lastRun.properties.date.type,parentSchema:schema60.properties.lastRun.properties.date,data:data9};
+const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema81.properties.lastRun.properties.date.type,parentSchema:schema81.properties.lastRun.properties.date,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -3708,7 +4597,7 @@ errors++;
 if(data8.summary !== undefined){
 let data10 = data8.summary;
 if(typeof data10 !== "string"){
-const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema60.properties.lastRun.properties.summary.type,parentSchema:schema60.properties.lastRun.properties.summary,data:data10};
+const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema81.properties.lastRun.properties.summary.type,parentSchema:schema81.properties.lastRun.properties.summary,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -3720,7 +4609,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema60.properties.lastRun.type,parentSchema:schema60.properties.lastRun,data:data8};
+const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.lastRun.type,parentSchema:schema81.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -3732,7 +4621,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema60.type,parentSchema:schema60,data};
+const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.type,parentSchema:schema81,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -3741,19 +4630,19 @@ vErrors.push(err20);
 }
 errors++;
 }
-validate44.errors = vErrors;
+validate53.errors = vErrors;
 return errors === 0;
 }
 
-const schema75 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
+const schema96 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
 
-function validate49(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate58(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!(key0 === "temperatures")){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema75,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema96,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3794,7 +4683,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema75.properties.temperatures.type,parentSchema:schema75.properties.temperatures,data:data0};
+const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema96.properties.temperatures.type,parentSchema:schema96.properties.temperatures,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3806,7 +4695,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema75.type,parentSchema:schema75,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema96.type,parentSchema:schema96,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3815,18 +4704,18 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate49.errors = vErrors;
+validate58.errors = vErrors;
 return errors === 0;
 }
 
-const schema77 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
+const schema98 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
 
-function validate51(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate60(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema77.required,parentSchema:schema77,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema98.required,parentSchema:schema98,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3836,7 +4725,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema77.required,parentSchema:schema77,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema98.required,parentSchema:schema98,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3846,7 +4735,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.params === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema77.required,parentSchema:schema77,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema98.required,parentSchema:schema98,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3857,7 +4746,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "kind")) || (key0 === "params"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema77,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema98,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3895,7 +4784,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "guyedMast") || (data1 === "saddleNet")) || (data1 === "radialNet"))){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema77.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema77.properties.kind.enum,parentSchema:schema77.properties.kind,data:data1};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema98.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema98.properties.kind.enum,parentSchema:schema98.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3908,7 +4797,7 @@ errors++;
 if(data.params !== undefined){
 let data2 = data.params;
 if(!(data2 && typeof data2 == "object" && !Array.isArray(data2))){
-const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema77.properties.params.type,parentSchema:schema77.properties.params,data:data2};
+const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.properties.params.type,parentSchema:schema98.properties.params,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3920,7 +4809,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema77.type,parentSchema:schema77,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.type,parentSchema:schema98,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3929,19 +4818,19 @@ vErrors.push(err8);
 }
 errors++;
 }
-validate51.errors = vErrors;
+validate60.errors = vErrors;
 return errors === 0;
 }
 
-const schema79 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
+const schema100 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
 
-function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate62(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((key0 === "units") || (key0 === "deformationScale"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema79,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema100,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3954,7 +4843,7 @@ errors++;
 if(data.units !== undefined){
 let data0 = data.units;
 if(!((data0 === "SI") || (data0 === "US"))){
-const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema79.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema79.properties.units.enum,parentSchema:schema79.properties.units,data:data0};
+const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema100.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema100.properties.units.enum,parentSchema:schema100.properties.units,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3968,7 +4857,7 @@ if(data.deformationScale !== undefined){
 let data1 = data.deformationScale;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 <= 0 || isNaN(data1)){
-const err2 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data1};
+const err2 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data1};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3979,7 +4868,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data1};
+const err3 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3991,7 +4880,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema79.type,parentSchema:schema79,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.type,parentSchema:schema100,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -4000,20 +4889,20 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate53.errors = vErrors;
+validate62.errors = vErrors;
 return errors === 0;
 }
 
-const schema81 = {"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}};
-const pattern32 = new RegExp("^[xyz]{1,3}$", "u");
-const schema84 = {"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}};
+const schema102 = {"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}};
+const pattern36 = new RegExp("^[xyz]{1,3}$", "u");
+const schema105 = {"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}};
 
-function validate56(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate65(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.setBy === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema84.required,parentSchema:schema84,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema105.required,parentSchema:schema105,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4024,7 +4913,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "members") || (key0 === "group")) || (key0 === "setBy")) || (key0 === "label"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema84,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema105,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -4035,8 +4924,8 @@ errors++;
 }
 }
 if(data.members !== undefined){
-if(!(validate18(data.members, {instancePath:instancePath+"/members",parentData:data,parentDataProperty:"members",rootData}))){
-vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
+if(!(validate20(data.members, {instancePath:instancePath+"/members",parentData:data,parentDataProperty:"members",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
 errors = vErrors.length;
 }
 }
@@ -4068,7 +4957,7 @@ errors++;
 if(data.setBy !== undefined){
 let data2 = data.setBy;
 if(!((data2 === "force") || (data2 === "length"))){
-const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema84.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema84.properties.setBy.enum,parentSchema:schema84.properties.setBy,data:data2};
+const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema105.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema105.properties.setBy.enum,parentSchema:schema105.properties.setBy,data:data2};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -4081,7 +4970,7 @@ errors++;
 if(data.label !== undefined){
 let data3 = data.label;
 if(typeof data3 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema84.properties.label.type,parentSchema:schema84.properties.label,data:data3};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema105.properties.label.type,parentSchema:schema105.properties.label,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -4093,7 +4982,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.type,parentSchema:schema84,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema105.type,parentSchema:schema105,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -4102,17 +4991,17 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate56.errors = vErrors;
+validate65.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate55(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate64(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema81.required,parentSchema:schema81,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema102.required,parentSchema:schema102,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4122,7 +5011,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.steps === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema81.required,parentSchema:schema81,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema102.required,parentSchema:schema102,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -4132,8 +5021,8 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema81.properties, key0))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema81,data};
+if(!(func2.call(schema102.properties, key0))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema102,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -4171,7 +5060,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema81.properties.label.type,parentSchema:schema81.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema102.properties.label.type,parentSchema:schema102.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -4209,7 +5098,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data3 = data.selfWeight;
 if(typeof data3 !== "boolean"){
-const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema81.properties.selfWeight.type,parentSchema:schema81.properties.selfWeight,data:data3};
+const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema102.properties.selfWeight.type,parentSchema:schema102.properties.selfWeight,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -4223,7 +5112,7 @@ if(data.steps !== undefined){
 let data4 = data.steps;
 if(Array.isArray(data4)){
 if(data4.length < 1){
-const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema81.properties.steps,data:data4};
+const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema102.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -4234,14 +5123,14 @@ errors++;
 }
 const len0 = data4.length;
 for(let i0=0; i0<len0; i0++){
-if(!(validate56(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
-vErrors = vErrors === null ? validate56.errors : vErrors.concat(validate56.errors);
+if(!(validate65(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate65.errors : vErrors.concat(validate65.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.steps.type,parentSchema:schema81.properties.steps,data:data4};
+const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema102.properties.steps.type,parentSchema:schema102.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -4259,7 +5148,7 @@ for(let i1=0; i1<len1; i1++){
 let data7 = data6[i1];
 if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 if(data7.node === undefined){
-const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema81.properties.temporaryRestraints.items.required,parentSchema:schema81.properties.temporaryRestraints.items,data:data7};
+const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema102.properties.temporaryRestraints.items.required,parentSchema:schema102.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -4269,7 +5158,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data7.fixed === undefined){
-const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema81.properties.temporaryRestraints.items.required,parentSchema:schema81.properties.temporaryRestraints.items,data:data7};
+const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema102.properties.temporaryRestraints.items.required,parentSchema:schema102.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -4280,7 +5169,7 @@ errors++;
 }
 for(const key1 in data7){
 if(!(((key1 === "node") || (key1 === "fixed")) || (key1 === "releaseAfterStep"))){
-const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.temporaryRestraints.items,data:data7};
+const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema102.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -4318,8 +5207,8 @@ errors++;
 if(data7.fixed !== undefined){
 let data9 = data7.fixed;
 if(typeof data9 === "string"){
-if(!pattern32.test(data9)){
-const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema81.properties.temporaryRestraints.items.properties.fixed,data:data9};
+if(!pattern36.test(data9)){
+const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema102.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -4330,7 +5219,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema81.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema81.properties.temporaryRestraints.items.properties.fixed,data:data9};
+const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema102.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema102.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -4343,7 +5232,7 @@ errors++;
 if(data7.releaseAfterStep !== undefined){
 let data10 = data7.releaseAfterStep;
 if(!(((typeof data10 == "number") && (!(data10 % 1) && !isNaN(data10))) && (isFinite(data10)))){
-const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema81.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema81.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema102.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema102.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -4354,7 +5243,7 @@ errors++;
 }
 if((typeof data10 == "number") && (isFinite(data10))){
 if(data10 < 1 || isNaN(data10)){
-const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema81.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema102.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -4367,7 +5256,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.temporaryRestraints.items.type,parentSchema:schema81.properties.temporaryRestraints.items,data:data7};
+const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema102.properties.temporaryRestraints.items.type,parentSchema:schema102.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -4379,7 +5268,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.temporaryRestraints.type,parentSchema:schema81.properties.temporaryRestraints,data:data6};
+const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema102.properties.temporaryRestraints.type,parentSchema:schema102.properties.temporaryRestraints,data:data6};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -4393,7 +5282,7 @@ if(data.plumb !== undefined){
 let data11 = data.plumb;
 if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
 if(data11.base === undefined){
-const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema81.properties.plumb.required,parentSchema:schema81.properties.plumb,data:data11};
+const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema102.properties.plumb.required,parentSchema:schema102.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -4403,7 +5292,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data11.top === undefined){
-const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema81.properties.plumb.required,parentSchema:schema81.properties.plumb,data:data11};
+const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema102.properties.plumb.required,parentSchema:schema102.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -4413,7 +5302,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data11.limit === undefined){
-const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema81.properties.plumb.required,parentSchema:schema81.properties.plumb,data:data11};
+const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema102.properties.plumb.required,parentSchema:schema102.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -4424,7 +5313,7 @@ errors++;
 }
 for(const key2 in data11){
 if(!(((key2 === "base") || (key2 === "top")) || (key2 === "limit"))){
-const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.plumb,data:data11};
+const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema102.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -4488,7 +5377,7 @@ if(data11.limit !== undefined){
 let data14 = data11.limit;
 if((typeof data14 == "number") && (isFinite(data14))){
 if(data14 <= 0 || isNaN(data14)){
-const err30 = {instancePath:instancePath+"/plumb/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data14};
+const err30 = {instancePath:instancePath+"/plumb/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data14};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -4499,7 +5388,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath:instancePath+"/plumb/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data14};
+const err31 = {instancePath:instancePath+"/plumb/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data14};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -4511,7 +5400,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.plumb.type,parentSchema:schema81.properties.plumb,data:data11};
+const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema102.properties.plumb.type,parentSchema:schema102.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -4525,7 +5414,7 @@ if(data.forceTolerance !== undefined){
 let data15 = data.forceTolerance;
 if((typeof data15 == "number") && (isFinite(data15))){
 if(data15 <= 0 || isNaN(data15)){
-const err33 = {instancePath:instancePath+"/forceTolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data15};
+const err33 = {instancePath:instancePath+"/forceTolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data15};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -4536,7 +5425,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/forceTolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data15};
+const err34 = {instancePath:instancePath+"/forceTolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data15};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -4550,7 +5439,7 @@ if(data.lengthTolerance !== undefined){
 let data16 = data.lengthTolerance;
 if((typeof data16 == "number") && (isFinite(data16))){
 if(data16 <= 0 || isNaN(data16)){
-const err35 = {instancePath:instancePath+"/lengthTolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data16};
+const err35 = {instancePath:instancePath+"/lengthTolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data16};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -4561,7 +5450,7 @@ errors++;
 }
 }
 else {
-const err36 = {instancePath:instancePath+"/lengthTolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data16};
+const err36 = {instancePath:instancePath+"/lengthTolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data16};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -4573,7 +5462,7 @@ errors++;
 }
 }
 else {
-const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.type,parentSchema:schema81,data};
+const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema102.type,parentSchema:schema102,data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -4582,18 +5471,18 @@ vErrors.push(err37);
 }
 errors++;
 }
-validate55.errors = vErrors;
+validate64.errors = vErrors;
 return errors === 0;
 }
 
-const schema92 = {"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}};
+const schema113 = {"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}};
 
-function validate60(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate69(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema92.required,parentSchema:schema92,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema113.required,parentSchema:schema113,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4603,7 +5492,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.tensions === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema92.required,parentSchema:schema92,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema113.required,parentSchema:schema113,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -4614,7 +5503,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "date")) || (key0 === "tensions")) || (key0 === "positions")) || (key0 === "tolerance")) || (key0 === "lengthUncertainty"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema92,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema113,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -4652,7 +5541,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema92.properties.label.type,parentSchema:schema92.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.label.type,parentSchema:schema113.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -4665,7 +5554,7 @@ errors++;
 if(data.date !== undefined){
 let data2 = data.date;
 if(typeof data2 !== "string"){
-const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema92.properties.date.type,parentSchema:schema92.properties.date,data:data2};
+const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.date.type,parentSchema:schema113.properties.date,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -4683,7 +5572,7 @@ for(let i0=0; i0<len0; i0++){
 let data4 = data3[i0];
 if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
 if(data4.member === undefined){
-const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema92.properties.tensions.items.required,parentSchema:schema92.properties.tensions.items,data:data4};
+const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema113.properties.tensions.items.required,parentSchema:schema113.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -4693,7 +5582,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data4.method === undefined){
-const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema92.properties.tensions.items.required,parentSchema:schema92.properties.tensions.items,data:data4};
+const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema113.properties.tensions.items.required,parentSchema:schema113.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -4703,7 +5592,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data4.value === undefined){
-const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema92.properties.tensions.items.required,parentSchema:schema92.properties.tensions.items,data:data4};
+const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema113.properties.tensions.items.required,parentSchema:schema113.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -4713,7 +5602,7 @@ vErrors.push(err9);
 errors++;
 }
 if(data4.accuracy === undefined){
-const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema92.properties.tensions.items.required,parentSchema:schema92.properties.tensions.items,data:data4};
+const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema113.properties.tensions.items.required,parentSchema:schema113.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -4723,7 +5612,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data4.temperature === undefined){
-const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema92.properties.tensions.items.required,parentSchema:schema92.properties.tensions.items,data:data4};
+const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema113.properties.tensions.items.required,parentSchema:schema113.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -4734,7 +5623,7 @@ errors++;
 }
 for(const key1 in data4){
 if(!((((((key1 === "member") || (key1 === "method")) || (key1 === "value")) || (key1 === "accuracy")) || (key1 === "temperature")) || (key1 === "mode"))){
-const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema92.properties.tensions.items,data:data4};
+const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema113.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -4772,7 +5661,7 @@ errors++;
 if(data4.method !== undefined){
 let data6 = data4.method;
 if(!(((data6 === "dynamometer") || (data6 === "frequency")) || (data6 === "sag"))){
-const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema92.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema92.properties.tensions.items.properties.method.enum,parentSchema:schema92.properties.tensions.items.properties.method,data:data6};
+const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema113.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.tensions.items.properties.method.enum,parentSchema:schema113.properties.tensions.items.properties.method,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -4786,7 +5675,7 @@ if(data4.value !== undefined){
 let data7 = data4.value;
 if((typeof data7 == "number") && (isFinite(data7))){
 if(data7 <= 0 || isNaN(data7)){
-const err16 = {instancePath:instancePath+"/tensions/" + i0+"/value",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data7};
+const err16 = {instancePath:instancePath+"/tensions/" + i0+"/value",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data7};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -4797,7 +5686,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/tensions/" + i0+"/value",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data7};
+const err17 = {instancePath:instancePath+"/tensions/" + i0+"/value",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data7};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -4811,7 +5700,7 @@ if(data4.accuracy !== undefined){
 let data8 = data4.accuracy;
 if((typeof data8 == "number") && (isFinite(data8))){
 if(data8 <= 0 || isNaN(data8)){
-const err18 = {instancePath:instancePath+"/tensions/" + i0+"/accuracy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data8};
+const err18 = {instancePath:instancePath+"/tensions/" + i0+"/accuracy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data8};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -4822,7 +5711,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/tensions/" + i0+"/accuracy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data8};
+const err19 = {instancePath:instancePath+"/tensions/" + i0+"/accuracy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data8};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -4860,7 +5749,7 @@ errors++;
 if(data4.mode !== undefined){
 let data10 = data4.mode;
 if(!((((data10 === "tautString") || (data10 === "inPlaneSymmetric")) || (data10 === "inPlaneAntisymmetric")) || (data10 === "lowestInPlane"))){
-const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema92.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema92.properties.tensions.items.properties.mode.enum,parentSchema:schema92.properties.tensions.items.properties.mode,data:data10};
+const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema113.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.tensions.items.properties.mode.enum,parentSchema:schema113.properties.tensions.items.properties.mode,data:data10};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -4872,7 +5761,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema92.properties.tensions.items.type,parentSchema:schema92.properties.tensions.items,data:data4};
+const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.properties.tensions.items.type,parentSchema:schema113.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -4884,7 +5773,7 @@ errors++;
 }
 }
 else {
-const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema92.properties.tensions.type,parentSchema:schema92.properties.tensions,data:data3};
+const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema113.properties.tensions.type,parentSchema:schema113.properties.tensions,data:data3};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -4902,7 +5791,7 @@ for(let i1=0; i1<len1; i1++){
 let data12 = data11[i1];
 if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
 if(data12.node === undefined){
-const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema92.properties.positions.items.required,parentSchema:schema92.properties.positions.items,data:data12};
+const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema113.properties.positions.items.required,parentSchema:schema113.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -4912,7 +5801,7 @@ vErrors.push(err25);
 errors++;
 }
 if(data12.at === undefined){
-const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema92.properties.positions.items.required,parentSchema:schema92.properties.positions.items,data:data12};
+const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema113.properties.positions.items.required,parentSchema:schema113.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -4922,7 +5811,7 @@ vErrors.push(err26);
 errors++;
 }
 if(data12.accuracy === undefined){
-const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema92.properties.positions.items.required,parentSchema:schema92.properties.positions.items,data:data12};
+const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema113.properties.positions.items.required,parentSchema:schema113.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -4932,7 +5821,7 @@ vErrors.push(err27);
 errors++;
 }
 if(data12.temperature === undefined){
-const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema92.properties.positions.items.required,parentSchema:schema92.properties.positions.items,data:data12};
+const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema113.properties.positions.items.required,parentSchema:schema113.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -4943,7 +5832,7 @@ errors++;
 }
 for(const key2 in data12){
 if(!((((key2 === "node") || (key2 === "at")) || (key2 === "accuracy")) || (key2 === "temperature"))){
-const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema92.properties.positions.items,data:data12};
+const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema113.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -5031,7 +5920,7 @@ if(data12.accuracy !== undefined){
 let data16 = data12.accuracy;
 if((typeof data16 == "number") && (isFinite(data16))){
 if(data16 <= 0 || isNaN(data16)){
-const err36 = {instancePath:instancePath+"/positions/" + i1+"/accuracy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data16};
+const err36 = {instancePath:instancePath+"/positions/" + i1+"/accuracy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data16};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -5042,7 +5931,7 @@ errors++;
 }
 }
 else {
-const err37 = {instancePath:instancePath+"/positions/" + i1+"/accuracy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data16};
+const err37 = {instancePath:instancePath+"/positions/" + i1+"/accuracy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data16};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -5079,7 +5968,7 @@ errors++;
 }
 }
 else {
-const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema92.properties.positions.items.type,parentSchema:schema92.properties.positions.items,data:data12};
+const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.properties.positions.items.type,parentSchema:schema113.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -5091,7 +5980,7 @@ errors++;
 }
 }
 else {
-const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema92.properties.positions.type,parentSchema:schema92.properties.positions,data:data11};
+const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema113.properties.positions.type,parentSchema:schema113.properties.positions,data:data11};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -5105,7 +5994,7 @@ if(data.tolerance !== undefined){
 let data18 = data.tolerance;
 if((typeof data18 == "number") && (isFinite(data18))){
 if(data18 <= 0 || isNaN(data18)){
-const err42 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data18};
+const err42 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data18};
 if(vErrors === null){
 vErrors = [err42];
 }
@@ -5116,7 +6005,7 @@ errors++;
 }
 }
 else {
-const err43 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data18};
+const err43 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data18};
 if(vErrors === null){
 vErrors = [err43];
 }
@@ -5130,7 +6019,7 @@ if(data.lengthUncertainty !== undefined){
 let data19 = data.lengthUncertainty;
 if((typeof data19 == "number") && (isFinite(data19))){
 if(data19 <= 0 || isNaN(data19)){
-const err44 = {instancePath:instancePath+"/lengthUncertainty",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data19};
+const err44 = {instancePath:instancePath+"/lengthUncertainty",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26,data:data19};
 if(vErrors === null){
 vErrors = [err44];
 }
@@ -5141,7 +6030,7 @@ errors++;
 }
 }
 else {
-const err45 = {instancePath:instancePath+"/lengthUncertainty",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data19};
+const err45 = {instancePath:instancePath+"/lengthUncertainty",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.type,parentSchema:schema26,data:data19};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -5153,7 +6042,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema92.type,parentSchema:schema92,data};
+const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.type,parentSchema:schema113,data};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -5162,7 +6051,641 @@ vErrors.push(err46);
 }
 errors++;
 }
-validate60.errors = vErrors;
+validate69.errors = vErrors;
+return errors === 0;
+}
+
+const schema126 = {"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}};
+
+function validate71(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema126.required,parentSchema:schema126,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.nodes === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema126.required,parentSchema:schema126,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((((key0 === "id") || (key0 === "nodes")) || (key0 === "region")) || (key0 === "label"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema126,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err3 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+else {
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.nodes !== undefined){
+let data1 = data.nodes;
+if(Array.isArray(data1)){
+if(data1.length < 3){
+const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema126.properties.nodes,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+const len0 = data1.length;
+for(let i0=0; i0<len0; i0++){
+let data2 = data1[i0];
+if(typeof data2 === "string"){
+if(!pattern0.test(data2)){
+const err6 = {instancePath:instancePath+"/nodes/" + i0,schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+else {
+const err7 = {instancePath:instancePath+"/nodes/" + i0,schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+}
+else {
+const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema126.properties.nodes.type,parentSchema:schema126.properties.nodes,data:data1};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.region !== undefined){
+let data3 = data.region;
+if(typeof data3 === "string"){
+if(!pattern0.test(data3)){
+const err9 = {instancePath:instancePath+"/region",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data3};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+else {
+const err10 = {instancePath:instancePath+"/region",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data3};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data4 = data.label;
+if(typeof data4 !== "string"){
+const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.label.type,parentSchema:schema126.properties.label,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+}
+}
+else {
+const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema126.type,parentSchema:schema126,data};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+validate71.errors = vErrors;
+return errors === 0;
+}
+
+const schema130 = {"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}};
+
+function validate73(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema130.required,parentSchema:schema130,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.meanCase === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema130.required,parentSchema:schema130,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+if(data.patchFactor === undefined){
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema130.required,parentSchema:schema130,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(((((key0 === "id") || (key0 === "label")) || (key0 === "meanCase")) || (key0 === "patchFactor")) || (key0 === "patches"))){
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema130,data};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+else {
+const err5 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema130.properties.label.type,parentSchema:schema130.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+if(data.meanCase !== undefined){
+let data2 = data.meanCase;
+if(typeof data2 === "string"){
+if(!pattern0.test(data2)){
+const err7 = {instancePath:instancePath+"/meanCase",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+else {
+const err8 = {instancePath:instancePath+"/meanCase",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.patchFactor !== undefined){
+let data3 = data.patchFactor;
+if((typeof data3 == "number") && (isFinite(data3))){
+if(data3 <= 1 || isNaN(data3)){
+const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema130.properties.patchFactor,data:data3};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+else {
+const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema130.properties.patchFactor.type,parentSchema:schema130.properties.patchFactor,data:data3};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+}
+if(data.patches !== undefined){
+let data4 = data.patches;
+if(Array.isArray(data4)){
+if(data4.length < 1){
+const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema130.properties.patches,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+const len0 = data4.length;
+for(let i0=0; i0<len0; i0++){
+let data5 = data4[i0];
+if(data5 && typeof data5 == "object" && !Array.isArray(data5)){
+if(data5.from === undefined){
+const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema130.properties.patches.items.required,parentSchema:schema130.properties.patches.items,data:data5};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+if(data5.to === undefined){
+const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema130.properties.patches.items.required,parentSchema:schema130.properties.patches.items,data:data5};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+for(const key1 in data5){
+if(!((key1 === "from") || (key1 === "to"))){
+const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema130.properties.patches.items,data:data5};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+if(data5.from !== undefined){
+let data6 = data5.from;
+if(!((typeof data6 == "number") && (isFinite(data6)))){
+const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema130.properties.patches.items.properties.from.type,parentSchema:schema130.properties.patches.items.properties.from,data:data6};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+if(data5.to !== undefined){
+let data7 = data5.to;
+if(!((typeof data7 == "number") && (isFinite(data7)))){
+const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema130.properties.patches.items.properties.to.type,parentSchema:schema130.properties.patches.items.properties.to,data:data7};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+}
+}
+else {
+const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema130.properties.patches.items.type,parentSchema:schema130.properties.patches.items,data:data5};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+}
+}
+else {
+const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema130.properties.patches.type,parentSchema:schema130.properties.patches,data:data4};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+}
+}
+else {
+const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema130.type,parentSchema:schema130,data};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+validate73.errors = vErrors;
+return errors === 0;
+}
+
+const schema133 = {"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
+
+function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema133.required,parentSchema:schema133,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.fromCase === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema133.required,parentSchema:schema133,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "fromCase")) || (key0 === "members")) || (key0 === "group")) || (key0 === "dynamicFactor")) || (key0 === "dampingRatio"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema133,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err3 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+else {
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema133.properties.label.type,parentSchema:schema133.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.fromCase !== undefined){
+let data2 = data.fromCase;
+if(typeof data2 === "string"){
+if(!pattern0.test(data2)){
+const err6 = {instancePath:instancePath+"/fromCase",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+else {
+const err7 = {instancePath:instancePath+"/fromCase",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+if(data.members !== undefined){
+if(!(validate20(data.members, {instancePath:instancePath+"/members",parentData:data,parentDataProperty:"members",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
+errors = vErrors.length;
+}
+}
+if(data.group !== undefined){
+let data4 = data.group;
+if(typeof data4 === "string"){
+if(!pattern0.test(data4)){
+const err8 = {instancePath:instancePath+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data4};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+else {
+const err9 = {instancePath:instancePath+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data4};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+if(data.dynamicFactor !== undefined){
+let data5 = data.dynamicFactor;
+if((typeof data5 == "number") && (isFinite(data5))){
+if(data5 > 2 || isNaN(data5)){
+const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema133.properties.dynamicFactor,data:data5};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+if(data5 < 1 || isNaN(data5)){
+const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema133.properties.dynamicFactor,data:data5};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+}
+else {
+const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema133.properties.dynamicFactor.type,parentSchema:schema133.properties.dynamicFactor,data:data5};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+if(data.dampingRatio !== undefined){
+let data6 = data.dampingRatio;
+if((typeof data6 == "number") && (isFinite(data6))){
+if(data6 < 0 || isNaN(data6)){
+const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema133.properties.dampingRatio,data:data6};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+if(data6 >= 1 || isNaN(data6)){
+const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema133.properties.dampingRatio,data:data6};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+else {
+const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema133.properties.dampingRatio.type,parentSchema:schema133.properties.dampingRatio,data:data6};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+}
+else {
+const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema133.type,parentSchema:schema133,data};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+validate75.errors = vErrors;
 return errors === 0;
 }
 
@@ -5313,8 +6836,8 @@ let data5 = data.sections;
 if(Array.isArray(data5)){
 const len1 = data5.length;
 for(let i1=0; i1<len1; i1++){
-if(!(validate15(data5[i1], {instancePath:instancePath+"/sections/" + i1,parentData:data5,parentDataProperty:i1,rootData}))){
-vErrors = vErrors === null ? validate15.errors : vErrors.concat(validate15.errors);
+if(!(validate17(data5[i1], {instancePath:instancePath+"/sections/" + i1,parentData:data5,parentDataProperty:i1,rootData}))){
+vErrors = vErrors === null ? validate17.errors : vErrors.concat(validate17.errors);
 errors = vErrors.length;
 }
 }
@@ -5345,8 +6868,8 @@ errors++;
 }
 const len2 = data7.length;
 for(let i2=0; i2<len2; i2++){
-if(!(validate17(data7[i2], {instancePath:instancePath+"/members/" + i2,parentData:data7,parentDataProperty:i2,rootData}))){
-vErrors = vErrors === null ? validate17.errors : vErrors.concat(validate17.errors);
+if(!(validate19(data7[i2], {instancePath:instancePath+"/members/" + i2,parentData:data7,parentDataProperty:i2,rootData}))){
+vErrors = vErrors === null ? validate19.errors : vErrors.concat(validate19.errors);
 errors = vErrors.length;
 }
 }
@@ -5377,8 +6900,8 @@ errors++;
 }
 const len3 = data9.length;
 for(let i3=0; i3<len3; i3++){
-if(!(validate21(data9[i3], {instancePath:instancePath+"/loadCases/" + i3,parentData:data9,parentDataProperty:i3,rootData}))){
-vErrors = vErrors === null ? validate21.errors : vErrors.concat(validate21.errors);
+if(!(validate23(data9[i3], {instancePath:instancePath+"/loadCases/" + i3,parentData:data9,parentDataProperty:i3,rootData}))){
+vErrors = vErrors === null ? validate23.errors : vErrors.concat(validate23.errors);
 errors = vErrors.length;
 }
 }
@@ -5399,8 +6922,8 @@ let data11 = data.groups;
 if(Array.isArray(data11)){
 const len4 = data11.length;
 for(let i4=0; i4<len4; i4++){
-if(!(validate33(data11[i4], {instancePath:instancePath+"/groups/" + i4,parentData:data11,parentDataProperty:i4,rootData}))){
-vErrors = vErrors === null ? validate33.errors : vErrors.concat(validate33.errors);
+if(!(validate42(data11[i4], {instancePath:instancePath+"/groups/" + i4,parentData:data11,parentDataProperty:i4,rootData}))){
+vErrors = vErrors === null ? validate42.errors : vErrors.concat(validate42.errors);
 errors = vErrors.length;
 }
 }
@@ -5421,8 +6944,8 @@ let data13 = data.combinations;
 if(Array.isArray(data13)){
 const len5 = data13.length;
 for(let i5=0; i5<len5; i5++){
-if(!(validate36(data13[i5], {instancePath:instancePath+"/combinations/" + i5,parentData:data13,parentDataProperty:i5,rootData}))){
-vErrors = vErrors === null ? validate36.errors : vErrors.concat(validate36.errors);
+if(!(validate45(data13[i5], {instancePath:instancePath+"/combinations/" + i5,parentData:data13,parentDataProperty:i5,rootData}))){
+vErrors = vErrors === null ? validate45.errors : vErrors.concat(validate45.errors);
 errors = vErrors.length;
 }
 }
@@ -5439,20 +6962,20 @@ errors++;
 }
 }
 if(data.checks !== undefined){
-if(!(validate38(data.checks, {instancePath:instancePath+"/checks",parentData:data,parentDataProperty:"checks",rootData}))){
-vErrors = vErrors === null ? validate38.errors : vErrors.concat(validate38.errors);
+if(!(validate47(data.checks, {instancePath:instancePath+"/checks",parentData:data,parentDataProperty:"checks",rootData}))){
+vErrors = vErrors === null ? validate47.errors : vErrors.concat(validate47.errors);
 errors = vErrors.length;
 }
 }
 if(data.tuning !== undefined){
-if(!(validate44(data.tuning, {instancePath:instancePath+"/tuning",parentData:data,parentDataProperty:"tuning",rootData}))){
-vErrors = vErrors === null ? validate44.errors : vErrors.concat(validate44.errors);
+if(!(validate53(data.tuning, {instancePath:instancePath+"/tuning",parentData:data,parentDataProperty:"tuning",rootData}))){
+vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
 errors = vErrors.length;
 }
 }
 if(data.installation !== undefined){
-if(!(validate49(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
-vErrors = vErrors === null ? validate49.errors : vErrors.concat(validate49.errors);
+if(!(validate58(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
+vErrors = vErrors === null ? validate58.errors : vErrors.concat(validate58.errors);
 errors = vErrors.length;
 }
 }
@@ -5461,8 +6984,8 @@ let data18 = data.generators;
 if(Array.isArray(data18)){
 const len6 = data18.length;
 for(let i6=0; i6<len6; i6++){
-if(!(validate51(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
-vErrors = vErrors === null ? validate51.errors : vErrors.concat(validate51.errors);
+if(!(validate60(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
+vErrors = vErrors === null ? validate60.errors : vErrors.concat(validate60.errors);
 errors = vErrors.length;
 }
 }
@@ -5479,8 +7002,8 @@ errors++;
 }
 }
 if(data.display !== undefined){
-if(!(validate53(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
-vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+if(!(validate62(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
+vErrors = vErrors === null ? validate62.errors : vErrors.concat(validate62.errors);
 errors = vErrors.length;
 }
 }
@@ -5489,8 +7012,8 @@ let data21 = data.sequences;
 if(Array.isArray(data21)){
 const len7 = data21.length;
 for(let i7=0; i7<len7; i7++){
-if(!(validate55(data21[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data21,parentDataProperty:i7,rootData}))){
-vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+if(!(validate64(data21[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data21,parentDataProperty:i7,rootData}))){
+vErrors = vErrors === null ? validate64.errors : vErrors.concat(validate64.errors);
 errors = vErrors.length;
 }
 }
@@ -5511,8 +7034,8 @@ let data23 = data.siteMeasurements;
 if(Array.isArray(data23)){
 const len8 = data23.length;
 for(let i8=0; i8<len8; i8++){
-if(!(validate60(data23[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data23,parentDataProperty:i8,rootData}))){
-vErrors = vErrors === null ? validate60.errors : vErrors.concat(validate60.errors);
+if(!(validate69(data23[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data23,parentDataProperty:i8,rootData}))){
+vErrors = vErrors === null ? validate69.errors : vErrors.concat(validate69.errors);
 errors = vErrors.length;
 }
 }
@@ -5533,7 +7056,7 @@ let data25 = data.report;
 if(data25 && typeof data25 == "object" && !Array.isArray(data25)){
 for(const key1 in data25){
 if(!((key1 === "documentNumber") || (key1 === "revisions"))){
-const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema104,data:data25};
+const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema125,data:data25};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -5546,7 +7069,7 @@ errors++;
 if(data25.documentNumber !== undefined){
 let data26 = data25.documentNumber;
 if(typeof data26 !== "string"){
-const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema104.properties.documentNumber.type,parentSchema:schema104.properties.documentNumber,data:data26};
+const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema125.properties.documentNumber.type,parentSchema:schema125.properties.documentNumber,data:data26};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -5564,7 +7087,7 @@ for(let i9=0; i9<len9; i9++){
 let data28 = data27[i9];
 if(data28 && typeof data28 == "object" && !Array.isArray(data28)){
 if(data28.revision === undefined){
-const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema104.properties.revisions.items.required,parentSchema:schema104.properties.revisions.items,data:data28};
+const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema125.properties.revisions.items.required,parentSchema:schema125.properties.revisions.items,data:data28};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -5574,7 +7097,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data28.date === undefined){
-const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema104.properties.revisions.items.required,parentSchema:schema104.properties.revisions.items,data:data28};
+const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema125.properties.revisions.items.required,parentSchema:schema125.properties.revisions.items,data:data28};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -5584,7 +7107,7 @@ vErrors.push(err24);
 errors++;
 }
 if(data28.description === undefined){
-const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema104.properties.revisions.items.required,parentSchema:schema104.properties.revisions.items,data:data28};
+const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema125.properties.revisions.items.required,parentSchema:schema125.properties.revisions.items,data:data28};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -5595,7 +7118,7 @@ errors++;
 }
 for(const key2 in data28){
 if(!(((((key2 === "revision") || (key2 === "date")) || (key2 === "description")) || (key2 === "by")) || (key2 === "checkedBy"))){
-const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema104.properties.revisions.items,data:data28};
+const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema125.properties.revisions.items,data:data28};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -5608,7 +7131,7 @@ errors++;
 if(data28.revision !== undefined){
 let data29 = data28.revision;
 if(typeof data29 !== "string"){
-const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema104.properties.revisions.items.properties.revision.type,parentSchema:schema104.properties.revisions.items.properties.revision,data:data29};
+const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema125.properties.revisions.items.properties.revision.type,parentSchema:schema125.properties.revisions.items.properties.revision,data:data29};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -5621,7 +7144,7 @@ errors++;
 if(data28.date !== undefined){
 let data30 = data28.date;
 if(typeof data30 !== "string"){
-const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema104.properties.revisions.items.properties.date.type,parentSchema:schema104.properties.revisions.items.properties.date,data:data30};
+const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema125.properties.revisions.items.properties.date.type,parentSchema:schema125.properties.revisions.items.properties.date,data:data30};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -5634,7 +7157,7 @@ errors++;
 if(data28.description !== undefined){
 let data31 = data28.description;
 if(typeof data31 !== "string"){
-const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema104.properties.revisions.items.properties.description.type,parentSchema:schema104.properties.revisions.items.properties.description,data:data31};
+const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema125.properties.revisions.items.properties.description.type,parentSchema:schema125.properties.revisions.items.properties.description,data:data31};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -5647,7 +7170,7 @@ errors++;
 if(data28.by !== undefined){
 let data32 = data28.by;
 if(typeof data32 !== "string"){
-const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema104.properties.revisions.items.properties.by.type,parentSchema:schema104.properties.revisions.items.properties.by,data:data32};
+const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema125.properties.revisions.items.properties.by.type,parentSchema:schema125.properties.revisions.items.properties.by,data:data32};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -5660,7 +7183,7 @@ errors++;
 if(data28.checkedBy !== undefined){
 let data33 = data28.checkedBy;
 if(typeof data33 !== "string"){
-const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema104.properties.revisions.items.properties.checkedBy.type,parentSchema:schema104.properties.revisions.items.properties.checkedBy,data:data33};
+const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema125.properties.revisions.items.properties.checkedBy.type,parentSchema:schema125.properties.revisions.items.properties.checkedBy,data:data33};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -5672,7 +7195,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema104.properties.revisions.items.type,parentSchema:schema104.properties.revisions.items,data:data28};
+const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema125.properties.revisions.items.type,parentSchema:schema125.properties.revisions.items,data:data28};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -5684,7 +7207,7 @@ errors++;
 }
 }
 else {
-const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema104.properties.revisions.type,parentSchema:schema104.properties.revisions,data:data27};
+const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema125.properties.revisions.type,parentSchema:schema125.properties.revisions,data:data27};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -5696,7 +7219,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema104.type,parentSchema:schema104,data:data25};
+const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema125.type,parentSchema:schema125,data:data25};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -5706,14 +7229,80 @@ vErrors.push(err34);
 errors++;
 }
 }
+if(data.panels !== undefined){
+let data34 = data.panels;
+if(Array.isArray(data34)){
+const len10 = data34.length;
+for(let i10=0; i10<len10; i10++){
+if(!(validate71(data34[i10], {instancePath:instancePath+"/panels/" + i10,parentData:data34,parentDataProperty:i10,rootData}))){
+vErrors = vErrors === null ? validate71.errors : vErrors.concat(validate71.errors);
+errors = vErrors.length;
+}
+}
 }
 else {
-const err35 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema11.type,parentSchema:schema11,data};
+const err35 = {instancePath:instancePath+"/panels",schemaPath:"#/properties/panels/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.panels.type,parentSchema:schema11.properties.panels,data:data34};
 if(vErrors === null){
 vErrors = [err35];
 }
 else {
 vErrors.push(err35);
+}
+errors++;
+}
+}
+if(data.patchWind !== undefined){
+let data36 = data.patchWind;
+if(Array.isArray(data36)){
+const len11 = data36.length;
+for(let i11=0; i11<len11; i11++){
+if(!(validate73(data36[i11], {instancePath:instancePath+"/patchWind/" + i11,parentData:data36,parentDataProperty:i11,rootData}))){
+vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err36 = {instancePath:instancePath+"/patchWind",schemaPath:"#/properties/patchWind/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.patchWind.type,parentSchema:schema11.properties.patchWind,data:data36};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+if(data.memberLoss !== undefined){
+let data38 = data.memberLoss;
+if(Array.isArray(data38)){
+const len12 = data38.length;
+for(let i12=0; i12<len12; i12++){
+if(!(validate75(data38[i12], {instancePath:instancePath+"/memberLoss/" + i12,parentData:data38,parentDataProperty:i12,rootData}))){
+vErrors = vErrors === null ? validate75.errors : vErrors.concat(validate75.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err37 = {instancePath:instancePath+"/memberLoss",schemaPath:"#/properties/memberLoss/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.memberLoss.type,parentSchema:schema11.properties.memberLoss,data:data38};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+}
+else {
+const err38 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema11.type,parentSchema:schema11,data};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
 }
 errors++;
 }
