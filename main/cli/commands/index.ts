@@ -8,5 +8,6 @@ import { validateCommand } from './validate.ts';
 import { modesCommand } from './modes.ts';
 import { sequenceCommand } from './sequence.ts';
 import { asBuiltCommand } from './asbuilt.ts';
+import { reportCommand } from './report.ts';
 
-export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, sequenceCommand, asBuiltCommand, modesCommand];
+export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, modesCommand, sequenceCommand, asBuiltCommand, reportCommand];
