@@ -43,6 +43,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
   const generating = ref(false);
   let host: StaysetHost | null = hostOverride ?? null;
   let autosaveTimer: ReturnType<typeof setInterval> | null = null;
+  let lastAutosaveError: string | null = null;
   const unsubscribers: (() => void)[] = [];
 
   /**
@@ -84,6 +85,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
     if (d?.deformationScale !== undefined) settings.setDeformationScale(d.deformationScale);
     phase.value = 'ready';
     if (result.value.migratedFrom) say('info', `Converted from format version ${result.value.migratedFrom}; Save As to keep the original file untouched.`);
+    if (result.value.warnings?.length) say('error', result.value.warnings.join(' '));
     void syncDirty();
     return true;
   }
@@ -212,7 +214,10 @@ export function createAppActions(hostOverride?: StaysetHost) {
 
   async function autosave(): Promise<void> {
     if (!projectStore.project || !projectStore.dirty) return;
-    await h().autosave(projectStore.path, projectStore.project).catch(() => undefined);
+    // A failed autosave is said once per distinct reason (recovery is then not available).
+    const r = await h().autosave(projectStore.path, projectStore.project).catch((e: Error) => ({ ok: false as const, error: e.message }));
+    if (r && !r.ok && r.error !== lastAutosaveError) say('error', r.error);
+    lastAutosaveError = r && !r.ok ? r.error : null;
   }
 
   async function run(): Promise<void> {
