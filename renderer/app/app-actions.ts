@@ -49,6 +49,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
   const creating = ref(false);
   let host: StaysetHost | null = hostOverride ?? null;
   let autosaveTimer: ReturnType<typeof setInterval> | null = null;
+  let lastAutosaveError: string | null = null;
   const unsubscribers: (() => void)[] = [];
 
   /**
@@ -90,6 +91,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
     if (d?.deformationScale !== undefined) settings.setDeformationScale(d.deformationScale);
     phase.value = 'ready';
     if (result.value.migratedFrom) say('info', `Converted from format version ${result.value.migratedFrom}; Save As to keep the original file untouched.`);
+    if (result.value.warnings?.length) say('error', result.value.warnings.join(' '));
     void syncDirty();
     return true;
   }
@@ -242,13 +244,19 @@ export function createAppActions(hostOverride?: StaysetHost) {
   /**
    * Write a recovery copy when there are unsaved changes that differ from the last autosave. A
    * document that does not validate (a new project before its first member) is not sent: the
-   * host refuses it.
+   * host refuses it. A failed autosave is said once per distinct reason (recovery is then not
+   * available) and retried at the next tick.
    */
   async function autosave(): Promise<boolean> {
     const p = projectStore.project;
     if (!p || !projectStore.dirty || p === autosaved || projectStore.problems.length) return false;
     autosaved = p;
-    await h().autosave(projectStore.path, p).catch(() => { autosaved = null; });
+    const r = await h().autosave(projectStore.path, p).catch((e: Error) => ({ ok: false as const, error: e.message }));
+    if (r && !r.ok) {
+      autosaved = null;
+      if (r.error !== lastAutosaveError) say('error', r.error);
+    }
+    lastAutosaveError = r && !r.ok ? r.error : null;
     return true;
   }
 
