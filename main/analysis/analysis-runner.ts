@@ -15,6 +15,7 @@ import { Worker } from 'node:worker_threads';
 import type { CaseFields, ProjectFile } from '../../solver/index.ts';
 import type { AnalysisDone, AnalysisProgress } from '../common/host-contract.ts';
 import { analysisWorkerUrl } from './worker-location.ts';
+import { caseIds, defaultWorkerCount } from './case-shares.ts';
 import { CANCEL_REQUESTED, createCancelFlag, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
 
 export interface AnalysisRunnerOptions {
@@ -27,6 +28,8 @@ export interface AnalysisRunnerOptions {
   execArgv?: string[];
   cancelGraceMs?: number;
   progressIntervalMs?: number;
+  /** Threads per run (the cases are dealt out; parallel-solve.ts). Default: defaultWorkerCount. */
+  workers?: number;
 }
 
 interface ActiveRun {
@@ -94,6 +97,7 @@ export class AnalysisRunner {
       project,
       cancelFlag: cancel.buffer,
       progressIntervalMs: this.options.progressIntervalMs ?? 50,
+      workers: this.options.workers ?? defaultWorkerCount(caseIds(project).length),
     };
     const worker = spawnWorker(this.workerUrl, data, this.execArgv);
     const run: ActiveRun = { worker, flag: cancel.view, cancelRequested: false, finished: false };
