@@ -4,7 +4,7 @@
  * cases in `only` (default all); with `workers` > 1 it deals the cases out to that many workers
  * of its own (parallel-solve.ts) and passes their progress and merged result on.
  */
-import { parentPort, workerData } from 'node:worker_threads';
+import { parentPort, resourceLimits, workerData } from 'node:worker_threads';
 import { solveProject } from '../../solver/index.ts';
 import type { SolveProgress } from '../../solver/index.ts';
 import { solveProjectInWorkers } from './parallel-solve.ts';
@@ -24,7 +24,7 @@ async function run(): Promise<void> {
     const solution = (data.workers ?? 1) > 1
       ? await solveProjectInWorkers(data.project, {
         workers: data.workers, workerUrl: new URL(import.meta.url), cancelFlag: data.cancelFlag,
-        progressIntervalMs: data.progressIntervalMs, onProgress, ...(data.only ? { only: data.only } : {}),
+        progressIntervalMs: data.progressIntervalMs, onProgress, resourceLimits, ...(data.only ? { only: data.only } : {}),
       })
       : solveProject(data.project, { isCancelled: () => Atomics.load(flag, 0) === CANCEL_REQUESTED, onProgress }, data.only ? { only: data.only } : {});
     post({ type: 'done', report: solution.report, fields: solution.fields }, transferablesOf(solution.fields));

@@ -8,6 +8,7 @@
  * Used by the CLI (`stayset solve`) and, inside the analysis worker, by the app's analysis runner.
  * STAYSET_WORKERS=N sets the number of threads (1 = the serial in-process solve).
  */
+import type { ResourceLimits } from 'node:worker_threads';
 import type { CaseFields, CaseResult, ProjectFile, ProjectSolution, SolveProgress } from '../../solver/index.ts';
 import { spawnWorker } from './analysis-runner.ts';
 import { analysisWorkerUrl } from './worker-location.ts';
@@ -20,6 +21,8 @@ export interface ParallelSolveOptions {
   /** Worker script; default the analysis worker (worker-location.ts). */
   workerUrl?: URL;
   execArgv?: string[];
+  /** Heap limits of every worker (default none). */
+  resourceLimits?: ResourceLimits;
   /** Shared cancel flag (worker-messages.ts), passed on to every worker. */
   cancelFlag?: SharedArrayBuffer;
   progressIntervalMs?: number;
@@ -40,7 +43,7 @@ export async function solveProjectInWorkers(project: ProjectFile, options: Paral
   const cancelFlag = options.cancelFlag ?? new SharedArrayBuffer(4);
   const shares = await Promise.all(parts.map((only) => new Promise<Share>((resolve, reject) => {
     const data: AnalysisWorkerData = { project, cancelFlag, progressIntervalMs: options.progressIntervalMs ?? 50, only };
-    const worker = spawnWorker(url, data, options.execArgv ?? []);
+    const worker = spawnWorker(url, data, options.execArgv ?? [], options.resourceLimits);
     let settled = false;
     const settle = (f: () => void): void => { if (!settled) { settled = true; f(); void worker.terminate(); } };
     worker.on('message', (m: WorkerMessage) => {

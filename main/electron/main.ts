@@ -62,6 +62,7 @@ const runner = new AnalysisRunner({
 });
 
 function requestOpen(file: string): void {
+  granted.offer(file);
   if (win) send('requestOpen', path.resolve(file));
   else pendingOpens.push(file);
 }

@@ -55,6 +55,7 @@ async function main(): Promise<void> {
   cholmod.printCholmodComparison(cholmod.runCholmodComparison(200, 3, 1));
   await optionalSuite('design/design-bench.ts', 'runDesignBenchmark');
   await optionalSuite('tuning/live-resolve-bench.ts', 'runLiveResolveBenchmark');
+  await optionalSuite('modes/modes-bench.ts', 'runModesBenchmark');
 }
 
 await main();

@@ -17,13 +17,14 @@ import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
 import { runTimes, runTimesLine, withStatsProperty } from '../format/run-times.ts';
 
 const HELP = `Solves every load case and combination of a project file (geometrically nonlinear,
-tension-only cables) and prints, per case: status, member forces, node displacements and
-support reactions.
+tension-only cables, beam-columns) and prints, per case: status, member forces, beam end actions,
+node displacements and support reactions (with moments where rotations are restrained).
 
 Options:
   --json        Print {"cases": [...], "disclaimer": "...", "stats": {...}} instead of tables.
-                Numbers are SI (N, m); tension is positive; reactions are forces the supports
-                exert. stats: inputSeconds, analysisSeconds (model and symbolic analysis),
+                Numbers are SI (N, m, N·m); tension is positive; reactions are forces and moments
+                the supports exert; members[].beam holds beam end actions (node on member end,
+                local axes). stats: inputSeconds, analysisSeconds (model and symbolic analysis),
                 newtonSeconds, outputSeconds, seconds (all of the solve).
   --case ID     Solve only this load case or combination (repeat for several).
   --help        Show this help.
