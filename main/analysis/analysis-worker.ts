@@ -5,6 +5,7 @@
 import { parentPort, workerData } from 'node:worker_threads';
 import { solveProject } from '../../solver/index.ts';
 import { createProgressThrottle } from './progress-throttle.ts';
+import { failureHint } from '../common/project/plausibility/failure-hint.ts';
 import { CANCEL_REQUESTED, transferablesOf, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
 
 function post(message: WorkerMessage, transfer: ArrayBuffer[] = []): void {
@@ -24,7 +25,7 @@ function run(): void {
     });
     post({ type: 'done', report: solution.report, fields: solution.fields }, transferablesOf(solution.fields));
   } catch (e) {
-    post({ type: 'failed', error: e instanceof Error ? `${e.message}` : String(e) });
+    post({ type: 'failed', error: (e instanceof Error ? e.message : String(e)) + failureHint(data.project) });
   }
 }
 
