@@ -6,8 +6,7 @@
  *   'cancelled'); a worker that has not finished `cancelGraceMs` later is reported cancelled
  *   and terminated (run-limits.ts: budget checked before a worker starts, heap limit, grace).
  * - One run at a time: starting a run cancels the previous one (reported as 'cancelled').
- * - The worker file is `analysis-worker.ts` beside this file when running from sources (started
- *   with tsx as loader) or `analysis-worker.mjs` beside the bundle (dist/main/electron/).
+ * - The worker file: see worker-location.ts (the bundled worker wherever one is available).
  */
 import { randomBytes } from 'node:crypto';
 import { createRequire } from 'node:module';
@@ -16,6 +15,7 @@ import { pathToFileURL } from 'node:url';
 import { Worker, type ResourceLimits } from 'node:worker_threads';
 import type { CaseFields, ModelBudget, ProjectFile } from '../../solver/index.ts';
 import type { AnalysisDone, AnalysisProgress } from '../common/host-contract.ts';
+import { analysisWorkerUrl } from './worker-location.ts';
 import { CANCEL_GRACE_MS, defaultResourceLimits, runRefusal, workerDeathMessage } from './run-limits.ts';
 import { CANCEL_REQUESTED, createCancelFlag, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
 
@@ -45,8 +45,7 @@ interface ActiveRun {
 }
 
 export function defaultWorkerUrl(moduleUrl: string = import.meta.url): URL {
-  const ext = new URL(moduleUrl).pathname.endsWith('.ts') ? '.ts' : '.mjs';
-  return new URL(`./analysis-worker${ext}`, moduleUrl);
+  return analysisWorkerUrl(moduleUrl);
 }
 
 /** File URL of tsx's ESM register API (the package's `./esm/api` import export). */

@@ -4,7 +4,7 @@
  * stores; no three.js here.
  */
 import { ref, shallowRef } from 'vue';
-import type { CaseFields, SolveReport } from '../../solver/index.ts';
+import type { CaseFields, ProjectFile, SolveReport } from '../../solver/index.ts';
 import type { HostResult, OpenedProject, RecentEntry, RecoveryEntry, StaysetHost } from '../../main/common/host-contract.ts';
 import { getHost } from '../host/client.ts';
 import { useProjectStore } from '../stores/project.ts';
@@ -12,8 +12,10 @@ import { useResultsStore } from '../stores/results.ts';
 import { useSelectionStore } from '../stores/selection.ts';
 import { useSettingsStore } from '../stores/settings.ts';
 import { buildSchedulePage, isoDate, type SchedulePage } from '../schedule/schedule-document.ts';
+import { blankProject } from '../model/new-project.ts';
+import type { GeneratorKind } from '../generators/generator-defaults.ts';
 
-/** Interval of the autosave while there are unsaved changes, ms. */
+/** Interval of the autosave check, ms (it writes only when the unsaved content changed). */
 export const AUTOSAVE_MS = 10_000;
 
 export type Phase = 'starting' | 'empty' | 'loading' | 'ready' | 'noHost';
@@ -41,6 +43,10 @@ export function createAppActions(hostOverride?: StaysetHost) {
   const schedule = shallowRef<SchedulePage | null>(null);
   /** The Generate dialog is open. */
   const generating = ref(false);
+  /** Generator kind the Generate dialog opens with (null: the project's first record's kind). */
+  const generateKind = ref<GeneratorKind | null>(null);
+  /** The New project dialog is open. */
+  const creating = ref(false);
   let host: StaysetHost | null = hostOverride ?? null;
   let autosaveTimer: ReturnType<typeof setInterval> | null = null;
   let lastAutosaveError: string | null = null;
@@ -136,8 +142,9 @@ export function createAppActions(hostOverride?: StaysetHost) {
     adopt(r);
   }
 
-  async function openPath(path?: string): Promise<void> {
-    if (projectStore.dirty && !window.confirm(`Discard unsaved changes to ${projectStore.name}?`)) return;
+  /** Open a project file; `confirmed`: the user already agreed to discard unsaved changes (asked once). */
+  async function openPath(path?: string, confirmed = false): Promise<void> {
+    if (!confirmed && projectStore.dirty && !window.confirm(`Discard unsaved changes to ${projectStore.name}?`)) return;
     if (!path && hostKind.value === 'web') {
       pathPrompt.value = { purpose: 'open', suggestion: '' };
       return;
@@ -151,6 +158,24 @@ export function createAppActions(hostOverride?: StaysetHost) {
     } catch (e) {
       phase.value = projectStore.project ? 'ready' : 'empty';
       openErrors.value = [(e as Error).message];
+    }
+  }
+
+  /** Open the New project dialog (after confirming that unsaved changes may be discarded). */
+  function askNew(): void {
+    if (projectStore.dirty && !window.confirm(`Discard unsaved changes to ${projectStore.name}?`)) return;
+    creating.value = true;
+  }
+
+  /** A new, never-saved project: blank, or blank with the Generate dialog open on `start`. */
+  function createProject(name: string, start: 'blank' | GeneratorKind): void {
+    creating.value = false;
+    const project = blankProject(name);
+    adopt({ ok: true, value: { path: null, name: `${project.meta!.name}.stayset`, project } });
+    projectStore.markUnsaved();
+    if (start !== 'blank') {
+      generateKind.value = start;
+      generating.value = true;
     }
   }
 
@@ -187,7 +212,8 @@ export function createAppActions(hostOverride?: StaysetHost) {
     const p = projectStore.project;
     if (!p) return false;
     if (!path && hostKind.value === 'web') {
-      pathPrompt.value = { purpose: 'saveAs', suggestion: projectStore.name.replace(/\.stayset(\.json)?$/, '') + '-copy.stayset' };
+      const stem = projectStore.name.replace(/\.stayset(\.json)?$/, '');
+      pathPrompt.value = { purpose: 'saveAs', suggestion: `${stem}${projectStore.path ? '-copy' : ''}.stayset` };
       return false;
     }
     const r = await h().saveAs(p, path).catch((e: Error) => ({ ok: false as const, error: e.message }));
@@ -208,16 +234,30 @@ export function createAppActions(hostOverride?: StaysetHost) {
     const prompt = pathPrompt.value;
     pathPrompt.value = null;
     if (!prompt || !path) return;
-    if (prompt.purpose === 'open') await openPath(path);
+    if (prompt.purpose === 'open') await openPath(path, true);
     else await saveAs(path);
   }
 
-  async function autosave(): Promise<void> {
-    if (!projectStore.project || !projectStore.dirty) return;
-    // A failed autosave is said once per distinct reason (recovery is then not available).
-    const r = await h().autosave(projectStore.path, projectStore.project).catch((e: Error) => ({ ok: false as const, error: e.message }));
-    if (r && !r.ok && r.error !== lastAutosaveError) say('error', r.error);
+  /** The document the last autosave wrote (autosave posts only when the content changed since). */
+  let autosaved: ProjectFile | null = null;
+
+  /**
+   * Write a recovery copy when there are unsaved changes that differ from the last autosave. A
+   * document that does not validate (a new project before its first member) is not sent: the
+   * host refuses it. A failed autosave is said once per distinct reason (recovery is then not
+   * available) and retried at the next tick.
+   */
+  async function autosave(): Promise<boolean> {
+    const p = projectStore.project;
+    if (!p || !projectStore.dirty || p === autosaved || projectStore.problems.length) return false;
+    autosaved = p;
+    const r = await h().autosave(projectStore.path, p).catch((e: Error) => ({ ok: false as const, error: e.message }));
+    if (r && !r.ok) {
+      autosaved = null;
+      if (r.error !== lastAutosaveError) say('error', r.error);
+    }
     lastAutosaveError = r && !r.ok ? r.error : null;
+    return true;
   }
 
   async function run(): Promise<void> {
@@ -266,7 +306,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
       case 'fit': fitRequests.value++; break;
       case 'generate': generating.value = Boolean(projectStore.project); break;
       case 'print': await print(); break;
-      case 'new': say('info', 'New projects start from a generator or a copy of the demo (Save As).'); break;
+      case 'new': askNew(); break;
     }
   }
 
@@ -322,7 +362,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
   }
 
   return {
-    phase, hostKind, notice, openErrors, recents, recovery, pathPrompt, fitRequests, schedule, generating,
+    phase, hostKind, notice, openErrors, recents, recovery, pathPrompt, fitRequests, schedule, generating, generateKind, creating, askNew, createProject,
     start, showSchedule, stop, openDemo, openPath, recover, save, saveAs, answerPathPrompt, autosave, run, cancel, undo, redo,
     menuCommand, print, onKeydown, syncDirty, say,
   };

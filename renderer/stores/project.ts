@@ -43,9 +43,23 @@ export const useProjectStore = defineStore('project', () => {
   const redoLabel = computed(() => (historyTick.value, history.redoLabel));
   const title = computed(() => (project.value ? `${name.value || 'Untitled'}${dirty.value ? ' •' : ''}` : ''));
 
+  /** Validation messages by document: each document is validated once (edits, undo and redo reuse them). */
+  const problemsOf = new WeakMap<ProjectFile, string[]>();
+  /** Number of full validations run (the responsiveness benchmark and tests read it). */
+  let validations = 0;
+  function validated(p: ProjectFile): string[] {
+    let list = problemsOf.get(p);
+    if (!list) {
+      validations++;
+      list = validationErrors(p);
+      problemsOf.set(p, list);
+    }
+    return list;
+  }
+
   function setCurrent(next: ProjectFile | null): void {
     project.value = next;
-    problems.value = next ? validationErrors(next) : [];
+    problems.value = next ? validated(next) : [];
     revision.value++;
     historyTick.value++;
   }
@@ -83,6 +97,8 @@ export const useProjectStore = defineStore('project', () => {
     }
     if (next === current) return { ok: true };
     const check = checkEdit(current, next, table ?? 'nodes', rows, problems.value);
+    validations++;
+    problemsOf.set(next, check.after);
     if (!check.ok) return { ok: false, errors: check.errors };
     history.record(current, label);
     setCurrent(next);
@@ -127,7 +143,14 @@ export const useProjectStore = defineStore('project', () => {
     historyTick.value++;
   }
 
+  /** A new project that was never saved: dirty until Save As. */
+  function markUnsaved(): void {
+    savedProject.value = null;
+    historyTick.value++;
+  }
+
   return {
+    markUnsaved, validationCount: () => validations,
     project, path, name, migratedFrom, problems, warnings, revision, dirty, title,
     canUndo, canRedo, undoLabel, redoLabel,
     load, close, edit, updateRowsIn, addRow, removeRows, undo, redo, markSaved,

@@ -3,7 +3,8 @@
 "use strict";
 export const validate = validate10;
 export default validate10;
-const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 1","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":1,"x-message":"{field} must be 1"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z, each at most once"}}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}}}};
+const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 1","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":1,"x-message":"{field} must be 1"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"sequences":{"type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"$ref":"#/definitions/report"},"panels":{"type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"type":"array","items":{"$ref":"#/definitions/memberLoss"}}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"},"mass":{"$ref":"#/definitions/nonNegative"}}},"springs":{"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"sequenceStep":{"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}},"sequence":{"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}},"report":{"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}},"panel":{"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}},"pressureCoefficient":{"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}},"areaLoad":{"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}},"memberLoss":{"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}}}};
+const schema126 = {"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}};
 const func2 = Object.prototype.hasOwnProperty;
 const schema12 = {"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}};
 const schema13 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}};
@@ -129,11 +130,195 @@ validate11.errors = vErrors;
 return errors === 0;
 }
 
-const schema14 = {"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z, each at most once"}}}};
+const schema14 = {"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"},"mass":{"$ref":"#/definitions/nonNegative"}}};
 const schema15 = {"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}};
 const schema16 = {"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"};
+const schema18 = {"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}};
 const pattern0 = new RegExp("^\\S(.*\\S)?$", "u");
-const pattern1 = new RegExp("^(?!.*(.).*\\1)[xyz]{0,3}$", "u");
+const pattern1 = new RegExp("^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$", "u");
+const schema17 = {"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}};
+
+function validate14(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+for(const key0 in data){
+if(!((((((key0 === "x") || (key0 === "y")) || (key0 === "z")) || (key0 === "rx")) || (key0 === "ry")) || (key0 === "rz"))){
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema17,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+}
+if(data.x !== undefined){
+let data0 = data.x;
+if((typeof data0 == "number") && (isFinite(data0))){
+if(data0 < 0 || isNaN(data0)){
+const err1 = {instancePath:instancePath+"/x",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data0};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+}
+else {
+const err2 = {instancePath:instancePath+"/x",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data0};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.y !== undefined){
+let data1 = data.y;
+if((typeof data1 == "number") && (isFinite(data1))){
+if(data1 < 0 || isNaN(data1)){
+const err3 = {instancePath:instancePath+"/y",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data1};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+else {
+const err4 = {instancePath:instancePath+"/y",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data1};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.z !== undefined){
+let data2 = data.z;
+if((typeof data2 == "number") && (isFinite(data2))){
+if(data2 < 0 || isNaN(data2)){
+const err5 = {instancePath:instancePath+"/z",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data2};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+else {
+const err6 = {instancePath:instancePath+"/z",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data2};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+if(data.rx !== undefined){
+let data3 = data.rx;
+if((typeof data3 == "number") && (isFinite(data3))){
+if(data3 < 0 || isNaN(data3)){
+const err7 = {instancePath:instancePath+"/rx",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data3};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+else {
+const err8 = {instancePath:instancePath+"/rx",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data3};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.ry !== undefined){
+let data4 = data.ry;
+if((typeof data4 == "number") && (isFinite(data4))){
+if(data4 < 0 || isNaN(data4)){
+const err9 = {instancePath:instancePath+"/ry",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data4};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+else {
+const err10 = {instancePath:instancePath+"/ry",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data4};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+}
+if(data.rz !== undefined){
+let data5 = data.rz;
+if((typeof data5 == "number") && (isFinite(data5))){
+if(data5 < 0 || isNaN(data5)){
+const err11 = {instancePath:instancePath+"/rz",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data5};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+}
+else {
+const err12 = {instancePath:instancePath+"/rz",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data5};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+}
+else {
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema17.type,parentSchema:schema17,data};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+validate14.errors = vErrors;
+return errors === 0;
+}
+
 
 function validate13(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -160,7 +345,7 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!(((key0 === "id") || (key0 === "at")) || (key0 === "fixed"))){
+if(!(((((key0 === "id") || (key0 === "at")) || (key0 === "fixed")) || (key0 === "springs")) || (key0 === "mass"))){
 const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema14,data};
 if(vErrors === null){
 vErrors = [err2];
@@ -249,7 +434,7 @@ if(data.fixed !== undefined){
 let data3 = data.fixed;
 if(typeof data3 === "string"){
 if(!pattern1.test(data3)){
-const err9 = {instancePath:instancePath+"/fixed",schemaPath:"#/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema14.properties.fixed,data:data3};
+const err9 = {instancePath:instancePath+"/fixed",schemaPath:"#/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$"},message:"must match pattern \""+"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$"+"\"",schema:"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$",parentSchema:schema14.properties.fixed,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -270,9 +455,17 @@ vErrors.push(err10);
 errors++;
 }
 }
+if(data.springs !== undefined){
+if(!(validate14(data.springs, {instancePath:instancePath+"/springs",parentData:data,parentDataProperty:"springs",rootData}))){
+vErrors = vErrors === null ? validate14.errors : vErrors.concat(validate14.errors);
+errors = vErrors.length;
 }
-else {
-const err11 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema14.type,parentSchema:schema14,data};
+}
+if(data.mass !== undefined){
+let data5 = data.mass;
+if((typeof data5 == "number") && (isFinite(data5))){
+if(data5 < 0 || isNaN(data5)){
+const err11 = {instancePath:instancePath+"/mass",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data5};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -281,20 +474,42 @@ vErrors.push(err11);
 }
 errors++;
 }
+}
+else {
+const err12 = {instancePath:instancePath+"/mass",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data5};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+}
+else {
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema14.type,parentSchema:schema14,data};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
 validate13.errors = vErrors;
 return errors === 0;
 }
 
-const schema17 = {"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"}}};
-const schema19 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}};
-const schema21 = {"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}};
+const schema25 = {"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}};
+const schema27 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}};
 
-function validate15(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate17(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema17.required,parentSchema:schema17,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema25.required,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -304,7 +519,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.E === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "E"},message:"must have required property '"+"E"+"'",schema:schema17.required,parentSchema:schema17,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "E"},message:"must have required property '"+"E"+"'",schema:schema25.required,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -314,7 +529,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.area === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "area"},message:"must have required property '"+"area"+"'",schema:schema17.required,parentSchema:schema17,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "area"},message:"must have required property '"+"area"+"'",schema:schema25.required,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -324,8 +539,8 @@ vErrors.push(err2);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema17.properties, key0))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema17,data};
+if(!(func2.call(schema25.properties, key0))){
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema25,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -363,7 +578,7 @@ errors++;
 if(data.E !== undefined){
 let data1 = data.E;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err6 = {instancePath:instancePath+"/E",schemaPath:"#/properties/E/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.E.type,parentSchema:schema17.properties.E,data:data1};
+const err6 = {instancePath:instancePath+"/E",schemaPath:"#/properties/E/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.E.type,parentSchema:schema25.properties.E,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -376,7 +591,7 @@ errors++;
 if(data.area !== undefined){
 let data2 = data.area;
 if(!((typeof data2 == "number") && (isFinite(data2)))){
-const err7 = {instancePath:instancePath+"/area",schemaPath:"#/properties/area/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.area.type,parentSchema:schema17.properties.area,data:data2};
+const err7 = {instancePath:instancePath+"/area",schemaPath:"#/properties/area/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.area.type,parentSchema:schema25.properties.area,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -389,7 +604,7 @@ errors++;
 if(data.massPerLength !== undefined){
 let data3 = data.massPerLength;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err8 = {instancePath:instancePath+"/massPerLength",schemaPath:"#/properties/massPerLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.massPerLength.type,parentSchema:schema17.properties.massPerLength,data:data3};
+const err8 = {instancePath:instancePath+"/massPerLength",schemaPath:"#/properties/massPerLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.massPerLength.type,parentSchema:schema25.properties.massPerLength,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -403,7 +618,7 @@ if(data.breakingLoad !== undefined){
 let data4 = data.breakingLoad;
 if((typeof data4 == "number") && (isFinite(data4))){
 if(data4 <= 0 || isNaN(data4)){
-const err9 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data4};
+const err9 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -414,7 +629,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data4};
+const err10 = {instancePath:instancePath+"/breakingLoad",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -427,7 +642,7 @@ errors++;
 if(data.thermalExpansion !== undefined){
 let data5 = data.thermalExpansion;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err11 = {instancePath:instancePath+"/thermalExpansion",schemaPath:"#/properties/thermalExpansion/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.thermalExpansion.type,parentSchema:schema17.properties.thermalExpansion,data:data5};
+const err11 = {instancePath:instancePath+"/thermalExpansion",schemaPath:"#/properties/thermalExpansion/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.thermalExpansion.type,parentSchema:schema25.properties.thermalExpansion,data:data5};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -441,7 +656,7 @@ if(data.diameter !== undefined){
 let data6 = data.diameter;
 if((typeof data6 == "number") && (isFinite(data6))){
 if(data6 <= 0 || isNaN(data6)){
-const err12 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data6};
+const err12 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data6};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -452,7 +667,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data6};
+const err13 = {instancePath:instancePath+"/diameter",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -466,7 +681,7 @@ if(data.dragCoefficient !== undefined){
 let data7 = data.dragCoefficient;
 if((typeof data7 == "number") && (isFinite(data7))){
 if(data7 < 0 || isNaN(data7)){
-const err14 = {instancePath:instancePath+"/dragCoefficient",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data7};
+const err14 = {instancePath:instancePath+"/dragCoefficient",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data7};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -477,7 +692,7 @@ errors++;
 }
 }
 else {
-const err15 = {instancePath:instancePath+"/dragCoefficient",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data7};
+const err15 = {instancePath:instancePath+"/dragCoefficient",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data7};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -491,7 +706,7 @@ if(data.lattice !== undefined){
 let data8 = data.lattice;
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 if(data8.faceWidth === undefined){
-const err16 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "faceWidth"},message:"must have required property '"+"faceWidth"+"'",schema:schema17.properties.lattice.required,parentSchema:schema17.properties.lattice,data:data8};
+const err16 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "faceWidth"},message:"must have required property '"+"faceWidth"+"'",schema:schema25.properties.lattice.required,parentSchema:schema25.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -501,7 +716,7 @@ vErrors.push(err16);
 errors++;
 }
 if(data8.solidity === undefined){
-const err17 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "solidity"},message:"must have required property '"+"solidity"+"'",schema:schema17.properties.lattice.required,parentSchema:schema17.properties.lattice,data:data8};
+const err17 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/required",keyword:"required",params:{missingProperty: "solidity"},message:"must have required property '"+"solidity"+"'",schema:schema25.properties.lattice.required,parentSchema:schema25.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -512,7 +727,7 @@ errors++;
 }
 for(const key1 in data8){
 if(!((((key1 === "faceWidth") || (key1 === "solidity")) || (key1 === "dragFactor")) || (key1 === "share"))){
-const err18 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema17.properties.lattice,data:data8};
+const err18 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema25.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -526,7 +741,7 @@ if(data8.faceWidth !== undefined){
 let data9 = data8.faceWidth;
 if((typeof data9 == "number") && (isFinite(data9))){
 if(data9 <= 0 || isNaN(data9)){
-const err19 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data9};
+const err19 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data9};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -537,7 +752,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data9};
+const err20 = {instancePath:instancePath+"/lattice/faceWidth",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data9};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -551,7 +766,7 @@ if(data8.solidity !== undefined){
 let data10 = data8.solidity;
 if((typeof data10 == "number") && (isFinite(data10))){
 if(data10 > 1 || isNaN(data10)){
-const err21 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema17.properties.lattice.properties.solidity,data:data10};
+const err21 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema25.properties.lattice.properties.solidity,data:data10};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -561,7 +776,7 @@ vErrors.push(err21);
 errors++;
 }
 if(data10 < 0 || isNaN(data10)){
-const err22 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema17.properties.lattice.properties.solidity,data:data10};
+const err22 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema25.properties.lattice.properties.solidity,data:data10};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -572,7 +787,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.lattice.properties.solidity.type,parentSchema:schema17.properties.lattice.properties.solidity,data:data10};
+const err23 = {instancePath:instancePath+"/lattice/solidity",schemaPath:"#/properties/lattice/properties/solidity/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.lattice.properties.solidity.type,parentSchema:schema25.properties.lattice.properties.solidity,data:data10};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -586,7 +801,7 @@ if(data8.dragFactor !== undefined){
 let data11 = data8.dragFactor;
 if((typeof data11 == "number") && (isFinite(data11))){
 if(data11 < 0 || isNaN(data11)){
-const err24 = {instancePath:instancePath+"/lattice/dragFactor",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data11};
+const err24 = {instancePath:instancePath+"/lattice/dragFactor",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data11};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -597,7 +812,7 @@ errors++;
 }
 }
 else {
-const err25 = {instancePath:instancePath+"/lattice/dragFactor",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data11};
+const err25 = {instancePath:instancePath+"/lattice/dragFactor",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data11};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -611,7 +826,7 @@ if(data8.share !== undefined){
 let data12 = data8.share;
 if((typeof data12 == "number") && (isFinite(data12))){
 if(data12 > 1 || isNaN(data12)){
-const err26 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema17.properties.lattice.properties.share,data:data12};
+const err26 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema25.properties.lattice.properties.share,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -621,7 +836,7 @@ vErrors.push(err26);
 errors++;
 }
 if(data12 <= 0 || isNaN(data12)){
-const err27 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema17.properties.lattice.properties.share,data:data12};
+const err27 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema25.properties.lattice.properties.share,data:data12};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -632,7 +847,7 @@ errors++;
 }
 }
 else {
-const err28 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.lattice.properties.share.type,parentSchema:schema17.properties.lattice.properties.share,data:data12};
+const err28 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.lattice.properties.share.type,parentSchema:schema25.properties.lattice.properties.share,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -644,7 +859,7 @@ errors++;
 }
 }
 else {
-const err29 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema17.properties.lattice.type,parentSchema:schema17.properties.lattice,data:data8};
+const err29 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema25.properties.lattice.type,parentSchema:schema25.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -657,7 +872,7 @@ errors++;
 if(data.label !== undefined){
 let data13 = data.label;
 if(typeof data13 !== "string"){
-const err30 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema17.properties.label.type,parentSchema:schema17.properties.label,data:data13};
+const err30 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema25.properties.label.type,parentSchema:schema25.properties.label,data:data13};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -667,9 +882,11 @@ vErrors.push(err30);
 errors++;
 }
 }
-}
-else {
-const err31 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema17.type,parentSchema:schema17,data};
+if(data.G !== undefined){
+let data14 = data.G;
+if((typeof data14 == "number") && (isFinite(data14))){
+if(data14 <= 0 || isNaN(data14)){
+const err31 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data14};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -678,14 +895,139 @@ vErrors.push(err31);
 }
 errors++;
 }
-validate15.errors = vErrors;
+}
+else {
+const err32 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data14};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+if(data.Iy !== undefined){
+let data15 = data.Iy;
+if((typeof data15 == "number") && (isFinite(data15))){
+if(data15 <= 0 || isNaN(data15)){
+const err33 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data15};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+else {
+const err34 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data15};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+if(data.Iz !== undefined){
+let data16 = data.Iz;
+if((typeof data16 == "number") && (isFinite(data16))){
+if(data16 <= 0 || isNaN(data16)){
+const err35 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data16};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+}
+else {
+const err36 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data16};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+if(data.J !== undefined){
+let data17 = data.J;
+if((typeof data17 == "number") && (isFinite(data17))){
+if(data17 <= 0 || isNaN(data17)){
+const err37 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data17};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+else {
+const err38 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data17};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
+}
+errors++;
+}
+}
+if(data.yieldStrength !== undefined){
+let data18 = data.yieldStrength;
+if((typeof data18 == "number") && (isFinite(data18))){
+if(data18 <= 0 || isNaN(data18)){
+const err39 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data18};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+}
+else {
+const err40 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data18};
+if(vErrors === null){
+vErrors = [err40];
+}
+else {
+vErrors.push(err40);
+}
+errors++;
+}
+}
+}
+else {
+const err41 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema25.type,parentSchema:schema25,data};
+if(vErrors === null){
+vErrors = [err41];
+}
+else {
+vErrors.push(err41);
+}
+errors++;
+}
+validate17.errors = vErrors;
 return errors === 0;
 }
 
-const schema24 = {"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
-const schema29 = {"type":"array","items":{"$ref":"#/definitions/id"}};
+const schema37 = {"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
+const schema45 = {"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}};
+const pattern8 = new RegExp("^(?!.*(.).*\\1)[xyz]{0,3}$", "u");
+const schema42 = {"type":"array","items":{"$ref":"#/definitions/id"}};
 
-function validate18(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate20(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(Array.isArray(data)){
@@ -717,7 +1059,7 @@ errors++;
 }
 }
 else {
-const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema29.type,parentSchema:schema29,data};
+const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema42.type,parentSchema:schema42,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -726,12 +1068,12 @@ vErrors.push(err2);
 }
 errors++;
 }
-validate18.errors = vErrors;
+validate20.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate17(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate19(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 const _errs1 = errors;
@@ -751,7 +1093,7 @@ errors++;
 }
 var valid0 = _errs2 === errors;
 if(valid0){
-const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema24.not,parentSchema:schema24,data};
+const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema37.not,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -773,7 +1115,7 @@ vErrors = null;
 }
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema37.required,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -783,7 +1125,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.kind === undefined){
-const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema37.required,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -793,7 +1135,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.from === undefined){
-const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema37.required,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -803,7 +1145,7 @@ vErrors.push(err4);
 errors++;
 }
 if(data.to === undefined){
-const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema37.required,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -813,7 +1155,7 @@ vErrors.push(err5);
 errors++;
 }
 if(data.section === undefined){
-const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema37.required,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -823,8 +1165,8 @@ vErrors.push(err6);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema24.properties, key0))){
-const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema24,data};
+if(!(func2.call(schema37.properties, key0))){
+const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema37,data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -861,8 +1203,8 @@ errors++;
 }
 if(data.kind !== undefined){
 let data1 = data.kind;
-if(!((data1 === "cable") || (data1 === "bar"))){
-const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema24.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema24.properties.kind.enum,parentSchema:schema24.properties.kind,data:data1};
+if(!(((data1 === "cable") || (data1 === "bar")) || (data1 === "beam"))){
+const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema37.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema37.properties.kind.enum,parentSchema:schema37.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -950,7 +1292,7 @@ errors++;
 if(data.segments !== undefined){
 let data5 = data.segments;
 if(!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))){
-const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema24.properties.segments.type,parentSchema:schema24.properties.segments,data:data5};
+const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema37.properties.segments.type,parentSchema:schema37.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -961,7 +1303,7 @@ errors++;
 }
 if((typeof data5 == "number") && (isFinite(data5))){
 if(data5 > 10000 || isNaN(data5)){
-const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/maximum",keyword:"maximum",params:{comparison: "<=", limit: 10000},message:"must be <= 10000",schema:10000,parentSchema:schema24.properties.segments,data:data5};
+const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/maximum",keyword:"maximum",params:{comparison: "<=", limit: 10000},message:"must be <= 10000",schema:10000,parentSchema:schema37.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -971,7 +1313,7 @@ vErrors.push(err18);
 errors++;
 }
 if(data5 < 1 || isNaN(data5)){
-const err19 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema24.properties.segments,data:data5};
+const err19 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema37.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -985,7 +1327,7 @@ errors++;
 if(data.pretension !== undefined){
 let data6 = data.pretension;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err20 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.pretension.type,parentSchema:schema24.properties.pretension,data:data6};
+const err20 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema37.properties.pretension.type,parentSchema:schema37.properties.pretension,data:data6};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -998,7 +1340,7 @@ errors++;
 if(data.unstressedLength !== undefined){
 let data7 = data.unstressedLength;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err21 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.unstressedLength.type,parentSchema:schema24.properties.unstressedLength,data:data7};
+const err21 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema37.properties.unstressedLength.type,parentSchema:schema37.properties.unstressedLength,data:data7};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1009,15 +1351,15 @@ errors++;
 }
 }
 if(data.groups !== undefined){
-if(!(validate18(data.groups, {instancePath:instancePath+"/groups",parentData:data,parentDataProperty:"groups",rootData}))){
-vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
+if(!(validate20(data.groups, {instancePath:instancePath+"/groups",parentData:data,parentDataProperty:"groups",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
 errors = vErrors.length;
 }
 }
 if(data.generatedBy !== undefined){
 let data9 = data.generatedBy;
 if(typeof data9 !== "string"){
-const err22 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema24.properties.generatedBy.type,parentSchema:schema24.properties.generatedBy,data:data9};
+const err22 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema37.properties.generatedBy.type,parentSchema:schema37.properties.generatedBy,data:data9};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -1027,9 +1369,11 @@ vErrors.push(err22);
 errors++;
 }
 }
-}
-else {
-const err23 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema24.type,parentSchema:schema24,data};
+if(data.orientation !== undefined){
+let data10 = data.orientation;
+if(Array.isArray(data10)){
+if(data10.length > 3){
+const err23 = {instancePath:instancePath+"/orientation",schemaPath:"#/definitions/vec3/maxItems",keyword:"maxItems",params:{limit: 3},message:"must NOT have more than 3 items",schema:3,parentSchema:schema16,data:data10};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -1038,19 +1382,143 @@ vErrors.push(err23);
 }
 errors++;
 }
-validate17.errors = vErrors;
+if(data10.length < 3){
+const err24 = {instancePath:instancePath+"/orientation",schemaPath:"#/definitions/vec3/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema16,data:data10};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+const len0 = data10.length;
+for(let i0=0; i0<len0; i0++){
+let data11 = data10[i0];
+if(!((typeof data11 == "number") && (isFinite(data11)))){
+const err25 = {instancePath:instancePath+"/orientation/" + i0,schemaPath:"#/definitions/vec3/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema16.items.type,parentSchema:schema16.items,data:data11};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+}
+}
+else {
+const err26 = {instancePath:instancePath+"/orientation",schemaPath:"#/definitions/vec3/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema16.type,parentSchema:schema16,data:data10};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+}
+if(data.releases !== undefined){
+let data12 = data.releases;
+if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
+for(const key1 in data12){
+if(!((key1 === "start") || (key1 === "end"))){
+const err27 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema37.properties.releases,data:data12};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+}
+if(data12.start !== undefined){
+let data13 = data12.start;
+if(typeof data13 === "string"){
+if(!pattern8.test(data13)){
+const err28 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema45,data:data13};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
+}
+errors++;
+}
+}
+else {
+const err29 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema45.type,parentSchema:schema45,data:data13};
+if(vErrors === null){
+vErrors = [err29];
+}
+else {
+vErrors.push(err29);
+}
+errors++;
+}
+}
+if(data12.end !== undefined){
+let data14 = data12.end;
+if(typeof data14 === "string"){
+if(!pattern8.test(data14)){
+const err30 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema45,data:data14};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+}
+else {
+const err31 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema45.type,parentSchema:schema45,data:data14};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+}
+}
+else {
+const err32 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema37.properties.releases.type,parentSchema:schema37.properties.releases,data:data12};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+}
+else {
+const err33 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema37.type,parentSchema:schema37,data};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+validate19.errors = vErrors;
 return errors === 0;
 }
 
-const schema31 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"}}};
-const schema33 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}};
+const schema47 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}};
+const schema49 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}};
 
-function validate22(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate24(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.node === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema33.required,parentSchema:schema33,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema49.required,parentSchema:schema49,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1060,7 +1528,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.force === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema33.required,parentSchema:schema33,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema49.required,parentSchema:schema49,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1070,8 +1538,8 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!((key0 === "node") || (key0 === "force"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema33,data};
+if(!(((key0 === "node") || (key0 === "force")) || (key0 === "moment"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema49,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1155,9 +1623,11 @@ vErrors.push(err8);
 errors++;
 }
 }
-}
-else {
-const err9 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema33.type,parentSchema:schema33,data};
+if(data.moment !== undefined){
+let data3 = data.moment;
+if(Array.isArray(data3)){
+if(data3.length > 3){
+const err9 = {instancePath:instancePath+"/moment",schemaPath:"#/definitions/vec3/maxItems",keyword:"maxItems",params:{limit: 3},message:"must NOT have more than 3 items",schema:3,parentSchema:schema16,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -1166,19 +1636,66 @@ vErrors.push(err9);
 }
 errors++;
 }
-validate22.errors = vErrors;
+if(data3.length < 3){
+const err10 = {instancePath:instancePath+"/moment",schemaPath:"#/definitions/vec3/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema16,data:data3};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+const len1 = data3.length;
+for(let i1=0; i1<len1; i1++){
+let data4 = data3[i1];
+if(!((typeof data4 == "number") && (isFinite(data4)))){
+const err11 = {instancePath:instancePath+"/moment/" + i1,schemaPath:"#/definitions/vec3/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema16.items.type,parentSchema:schema16.items,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+}
+}
+else {
+const err12 = {instancePath:instancePath+"/moment",schemaPath:"#/definitions/vec3/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema16.type,parentSchema:schema16,data:data3};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+}
+else {
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema49.type,parentSchema:schema49,data};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+validate24.errors = vErrors;
 return errors === 0;
 }
 
-const schema36 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
-const schema38 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
+const schema53 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema55 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
 
-function validate25(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate27(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.required,parentSchema:schema38,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema55.required,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1192,7 +1709,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "power"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.oneOf[0].required,parentSchema:schema38.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema55.oneOf[0].required,parentSchema:schema55.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1202,7 +1719,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.exponent === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema38.oneOf[0].required,parentSchema:schema38.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema55.oneOf[0].required,parentSchema:schema55.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1213,7 +1730,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((key0 === "kind") || (key0 === "exponent"))){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema38.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema55.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1226,7 +1743,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("power" !== data0){
-const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema38.oneOf[0].properties.kind,data:data0};
+const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema55.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1240,7 +1757,7 @@ if(data.exponent !== undefined){
 let data1 = data.exponent;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 < 0 || isNaN(data1)){
-const err5 = {instancePath:instancePath+"/exponent",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data1};
+const err5 = {instancePath:instancePath+"/exponent",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1251,7 +1768,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath:instancePath+"/exponent",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data1};
+const err6 = {instancePath:instancePath+"/exponent",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1263,7 +1780,7 @@ errors++;
 }
 }
 else {
-const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.oneOf[0].type,parentSchema:schema38.oneOf[0],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.oneOf[0].type,parentSchema:schema55.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1276,7 +1793,7 @@ errors++;
 else if(tag0 === "log"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.oneOf[1].required,parentSchema:schema38.oneOf[1],data};
+const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema55.oneOf[1].required,parentSchema:schema55.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1286,7 +1803,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data.roughnessLength === undefined){
-const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema38.oneOf[1].required,parentSchema:schema38.oneOf[1],data};
+const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema55.oneOf[1].required,parentSchema:schema55.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -1297,7 +1814,7 @@ errors++;
 }
 for(const key1 in data){
 if(!((key1 === "kind") || (key1 === "roughnessLength"))){
-const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema38.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema55.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -1310,7 +1827,7 @@ errors++;
 if(data.kind !== undefined){
 let data2 = data.kind;
 if("log" !== data2){
-const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema38.oneOf[1].properties.kind,data:data2};
+const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema55.oneOf[1].properties.kind,data:data2};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -1324,7 +1841,7 @@ if(data.roughnessLength !== undefined){
 let data3 = data.roughnessLength;
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 <= 0 || isNaN(data3)){
-const err12 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data3};
+const err12 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data3};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -1335,7 +1852,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data3};
+const err13 = {instancePath:instancePath+"/roughnessLength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -1347,7 +1864,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.oneOf[1].type,parentSchema:schema38.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.oneOf[1].type,parentSchema:schema55.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -1360,7 +1877,7 @@ errors++;
 else if(tag0 === "uniform"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.oneOf[2].required,parentSchema:schema38.oneOf[2],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema55.oneOf[2].required,parentSchema:schema55.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -1371,7 +1888,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(key2 === "kind")){
-const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema38.oneOf[2],data};
+const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema55.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -1384,7 +1901,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("uniform" !== data4){
-const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema38.oneOf[2].properties.kind,data:data4};
+const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema55.oneOf[2].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -1396,7 +1913,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.oneOf[2].type,parentSchema:schema38.oneOf[2],data};
+const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.oneOf[2].type,parentSchema:schema55.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -1407,7 +1924,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema38.discriminator,parentSchema:schema38,data};
+const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema55.discriminator,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -1418,7 +1935,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema38.discriminator,parentSchema:schema38,data};
+const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema55.discriminator,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -1429,7 +1946,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.type,parentSchema:schema38,data};
+const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.type,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1438,17 +1955,17 @@ vErrors.push(err21);
 }
 errors++;
 }
-validate25.errors = vErrors;
+validate27.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate24(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate26(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.direction === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema36.required,parentSchema:schema36,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema53.required,parentSchema:schema53,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1458,7 +1975,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.speed === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema36.required,parentSchema:schema36,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema53.required,parentSchema:schema53,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1469,7 +1986,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "direction") || (key0 === "speed")) || (key0 === "profile")) || (key0 === "airDensity")) || (key0 === "groups"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema36,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema53,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1482,7 +1999,7 @@ errors++;
 if(data.direction !== undefined){
 let data0 = data.direction;
 if(!((typeof data0 == "number") && (isFinite(data0)))){
-const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema36.properties.direction.type,parentSchema:schema36.properties.direction,data:data0};
+const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema53.properties.direction.type,parentSchema:schema53.properties.direction,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1496,7 +2013,7 @@ if(data.speed !== undefined){
 let data1 = data.speed;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 < 0 || isNaN(data1)){
-const err4 = {instancePath:instancePath+"/speed",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data1};
+const err4 = {instancePath:instancePath+"/speed",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1507,7 +2024,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath:instancePath+"/speed",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data1};
+const err5 = {instancePath:instancePath+"/speed",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1518,8 +2035,8 @@ errors++;
 }
 }
 if(data.profile !== undefined){
-if(!(validate25(data.profile, {instancePath:instancePath+"/profile",parentData:data,parentDataProperty:"profile",rootData}))){
-vErrors = vErrors === null ? validate25.errors : vErrors.concat(validate25.errors);
+if(!(validate27(data.profile, {instancePath:instancePath+"/profile",parentData:data,parentDataProperty:"profile",rootData}))){
+vErrors = vErrors === null ? validate27.errors : vErrors.concat(validate27.errors);
 errors = vErrors.length;
 }
 }
@@ -1527,7 +2044,7 @@ if(data.airDensity !== undefined){
 let data3 = data.airDensity;
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 <= 0 || isNaN(data3)){
-const err6 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data3};
+const err6 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1538,7 +2055,7 @@ errors++;
 }
 }
 else {
-const err7 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data3};
+const err7 = {instancePath:instancePath+"/airDensity",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data3};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1549,14 +2066,14 @@ errors++;
 }
 }
 if(data.groups !== undefined){
-if(!(validate18(data.groups, {instancePath:instancePath+"/groups",parentData:data,parentDataProperty:"groups",rootData}))){
-vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
+if(!(validate20(data.groups, {instancePath:instancePath+"/groups",parentData:data,parentDataProperty:"groups",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema36.type,parentSchema:schema36,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema53.type,parentSchema:schema53,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1565,18 +2082,18 @@ vErrors.push(err8);
 }
 errors++;
 }
-validate24.errors = vErrors;
+validate26.errors = vErrors;
 return errors === 0;
 }
 
-const schema42 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema59 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
 
-function validate29(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate31(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.thickness === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema42.required,parentSchema:schema42,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema59.required,parentSchema:schema59,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1587,7 +2104,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "thickness") || (key0 === "density")) || (key0 === "groups"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema42,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema59,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1601,7 +2118,7 @@ if(data.thickness !== undefined){
 let data0 = data.thickness;
 if((typeof data0 == "number") && (isFinite(data0))){
 if(data0 < 0 || isNaN(data0)){
-const err2 = {instancePath:instancePath+"/thickness",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data0};
+const err2 = {instancePath:instancePath+"/thickness",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data0};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1612,7 +2129,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/thickness",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data0};
+const err3 = {instancePath:instancePath+"/thickness",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1626,7 +2143,7 @@ if(data.density !== undefined){
 let data1 = data.density;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 <= 0 || isNaN(data1)){
-const err4 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data1};
+const err4 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1637,7 +2154,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data1};
+const err5 = {instancePath:instancePath+"/density",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1648,14 +2165,14 @@ errors++;
 }
 }
 if(data.groups !== undefined){
-if(!(validate18(data.groups, {instancePath:instancePath+"/groups",parentData:data,parentDataProperty:"groups",rootData}))){
-vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
+if(!(validate20(data.groups, {instancePath:instancePath+"/groups",parentData:data,parentDataProperty:"groups",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema42.type,parentSchema:schema42,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema59.type,parentSchema:schema59,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1664,17 +2181,18 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate29.errors = vErrors;
+validate31.errors = vErrors;
 return errors === 0;
 }
 
+const schema62 = {"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}};
 
-function validate21(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate34(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
-if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema31.required,parentSchema:schema31,data};
+if(data.node === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema62.required,parentSchema:schema62,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1684,8 +2202,351 @@ vErrors.push(err0);
 errors++;
 }
 for(const key0 in data){
-if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "selfWeight")) || (key0 === "temperatureChange")) || (key0 === "nodalLoads")) || (key0 === "wind")) || (key0 === "ice"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema31,data};
+if(!(((((((key0 === "node") || (key0 === "x")) || (key0 === "y")) || (key0 === "z")) || (key0 === "rx")) || (key0 === "ry")) || (key0 === "rz"))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema62,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+}
+if(data.node !== undefined){
+let data0 = data.node;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err2 = {instancePath:instancePath+"/node",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+else {
+const err3 = {instancePath:instancePath+"/node",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.x !== undefined){
+let data1 = data.x;
+if(!((typeof data1 == "number") && (isFinite(data1)))){
+const err4 = {instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.x.type,parentSchema:schema62.properties.x,data:data1};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.y !== undefined){
+let data2 = data.y;
+if(!((typeof data2 == "number") && (isFinite(data2)))){
+const err5 = {instancePath:instancePath+"/y",schemaPath:"#/properties/y/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.y.type,parentSchema:schema62.properties.y,data:data2};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.z !== undefined){
+let data3 = data.z;
+if(!((typeof data3 == "number") && (isFinite(data3)))){
+const err6 = {instancePath:instancePath+"/z",schemaPath:"#/properties/z/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.z.type,parentSchema:schema62.properties.z,data:data3};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+if(data.rx !== undefined){
+let data4 = data.rx;
+if(!((typeof data4 == "number") && (isFinite(data4)))){
+const err7 = {instancePath:instancePath+"/rx",schemaPath:"#/properties/rx/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.rx.type,parentSchema:schema62.properties.rx,data:data4};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+if(data.ry !== undefined){
+let data5 = data.ry;
+if(!((typeof data5 == "number") && (isFinite(data5)))){
+const err8 = {instancePath:instancePath+"/ry",schemaPath:"#/properties/ry/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.ry.type,parentSchema:schema62.properties.ry,data:data5};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.rz !== undefined){
+let data6 = data.rz;
+if(!((typeof data6 == "number") && (isFinite(data6)))){
+const err9 = {instancePath:instancePath+"/rz",schemaPath:"#/properties/rz/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.rz.type,parentSchema:schema62.properties.rz,data:data6};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+}
+else {
+const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.type,parentSchema:schema62,data};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+validate34.errors = vErrors;
+return errors === 0;
+}
+
+const schema64 = {"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}};
+const schema65 = {"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}};
+
+function validate38(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.region === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "region"},message:"must have required property '"+"region"+"'",schema:schema65.required,parentSchema:schema65,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.cp === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "cp"},message:"must have required property '"+"cp"+"'",schema:schema65.required,parentSchema:schema65,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((key0 === "region") || (key0 === "cp"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema65,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.region !== undefined){
+let data0 = data.region;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err3 = {instancePath:instancePath+"/region",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+else {
+const err4 = {instancePath:instancePath+"/region",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.cp !== undefined){
+let data1 = data.cp;
+if(!((typeof data1 == "number") && (isFinite(data1)))){
+const err5 = {instancePath:instancePath+"/cp",schemaPath:"#/properties/cp/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.properties.cp.type,parentSchema:schema65.properties.cp,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+}
+else {
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema65.type,parentSchema:schema65,data};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+validate38.errors = vErrors;
+return errors === 0;
+}
+
+
+function validate36(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.kind === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema64.required,parentSchema:schema64,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.value === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema64.required,parentSchema:schema64,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((((key0 === "kind") || (key0 === "value")) || (key0 === "panels")) || (key0 === "coefficients"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema64,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.kind !== undefined){
+let data0 = data.kind;
+if(!(((data0 === "snow") || (data0 === "cladding")) || (data0 === "pressure"))){
+const err3 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema64.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema64.properties.kind.enum,parentSchema:schema64.properties.kind,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.value !== undefined){
+let data1 = data.value;
+if(!((typeof data1 == "number") && (isFinite(data1)))){
+const err4 = {instancePath:instancePath+"/value",schemaPath:"#/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema64.properties.value.type,parentSchema:schema64.properties.value,data:data1};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.panels !== undefined){
+if(!(validate20(data.panels, {instancePath:instancePath+"/panels",parentData:data,parentDataProperty:"panels",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
+errors = vErrors.length;
+}
+}
+if(data.coefficients !== undefined){
+let data3 = data.coefficients;
+if(Array.isArray(data3)){
+const len0 = data3.length;
+for(let i0=0; i0<len0; i0++){
+if(!(validate38(data3[i0], {instancePath:instancePath+"/coefficients/" + i0,parentData:data3,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate38.errors : vErrors.concat(validate38.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err5 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema64.properties.coefficients.type,parentSchema:schema64.properties.coefficients,data:data3};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+}
+else {
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema64.type,parentSchema:schema64,data};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+validate36.errors = vErrors;
+return errors === 0;
+}
+
+
+function validate23(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema47.required,parentSchema:schema47,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(func2.call(schema47.properties, key0))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema47,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1723,7 +2584,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema31.properties.label.type,parentSchema:schema31.properties.label,data:data1};
+const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema47.properties.label.type,parentSchema:schema47.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1736,7 +2597,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data2 = data.selfWeight;
 if(typeof data2 !== "boolean"){
-const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema31.properties.selfWeight.type,parentSchema:schema31.properties.selfWeight,data:data2};
+const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema47.properties.selfWeight.type,parentSchema:schema47.properties.selfWeight,data:data2};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1749,7 +2610,7 @@ errors++;
 if(data.temperatureChange !== undefined){
 let data3 = data.temperatureChange;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema31.properties.temperatureChange.type,parentSchema:schema31.properties.temperatureChange,data:data3};
+const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema47.properties.temperatureChange.type,parentSchema:schema47.properties.temperatureChange,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1764,14 +2625,14 @@ let data4 = data.nodalLoads;
 if(Array.isArray(data4)){
 const len0 = data4.length;
 for(let i0=0; i0<len0; i0++){
-if(!(validate22(data4[i0], {instancePath:instancePath+"/nodalLoads/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
-vErrors = vErrors === null ? validate22.errors : vErrors.concat(validate22.errors);
+if(!(validate24(data4[i0], {instancePath:instancePath+"/nodalLoads/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate24.errors : vErrors.concat(validate24.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema31.properties.nodalLoads.type,parentSchema:schema31.properties.nodalLoads,data:data4};
+const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema47.properties.nodalLoads.type,parentSchema:schema47.properties.nodalLoads,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1782,20 +2643,30 @@ errors++;
 }
 }
 if(data.wind !== undefined){
-if(!(validate24(data.wind, {instancePath:instancePath+"/wind",parentData:data,parentDataProperty:"wind",rootData}))){
-vErrors = vErrors === null ? validate24.errors : vErrors.concat(validate24.errors);
+if(!(validate26(data.wind, {instancePath:instancePath+"/wind",parentData:data,parentDataProperty:"wind",rootData}))){
+vErrors = vErrors === null ? validate26.errors : vErrors.concat(validate26.errors);
 errors = vErrors.length;
 }
 }
 if(data.ice !== undefined){
-if(!(validate29(data.ice, {instancePath:instancePath+"/ice",parentData:data,parentDataProperty:"ice",rootData}))){
-vErrors = vErrors === null ? validate29.errors : vErrors.concat(validate29.errors);
+if(!(validate31(data.ice, {instancePath:instancePath+"/ice",parentData:data,parentDataProperty:"ice",rootData}))){
+vErrors = vErrors === null ? validate31.errors : vErrors.concat(validate31.errors);
+errors = vErrors.length;
+}
+}
+if(data.displacements !== undefined){
+let data8 = data.displacements;
+if(Array.isArray(data8)){
+const len1 = data8.length;
+for(let i1=0; i1<len1; i1++){
+if(!(validate34(data8[i1], {instancePath:instancePath+"/displacements/" + i1,parentData:data8,parentDataProperty:i1,rootData}))){
+vErrors = vErrors === null ? validate34.errors : vErrors.concat(validate34.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema31.type,parentSchema:schema31,data};
+const err8 = {instancePath:instancePath+"/displacements",schemaPath:"#/properties/displacements/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema47.properties.displacements.type,parentSchema:schema47.properties.displacements,data:data8};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1804,18 +2675,52 @@ vErrors.push(err8);
 }
 errors++;
 }
-validate21.errors = vErrors;
+}
+if(data.areaLoads !== undefined){
+let data10 = data.areaLoads;
+if(Array.isArray(data10)){
+const len2 = data10.length;
+for(let i2=0; i2<len2; i2++){
+if(!(validate36(data10[i2], {instancePath:instancePath+"/areaLoads/" + i2,parentData:data10,parentDataProperty:i2,rootData}))){
+vErrors = vErrors === null ? validate36.errors : vErrors.concat(validate36.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err9 = {instancePath:instancePath+"/areaLoads",schemaPath:"#/properties/areaLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema47.properties.areaLoads.type,parentSchema:schema47.properties.areaLoads,data:data10};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+}
+else {
+const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema47.type,parentSchema:schema47,data};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+validate23.errors = vErrors;
 return errors === 0;
 }
 
-const schema45 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
+const schema67 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
 
-function validate33(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate42(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema45.required,parentSchema:schema45,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema67.required,parentSchema:schema67,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1825,7 +2730,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.members === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema45.required,parentSchema:schema45,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema67.required,parentSchema:schema67,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1836,7 +2741,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "label")) || (key0 === "members"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema45,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema67,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1874,7 +2779,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema45.properties.label.type,parentSchema:schema45.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema67.properties.label.type,parentSchema:schema67.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1885,14 +2790,14 @@ errors++;
 }
 }
 if(data.members !== undefined){
-if(!(validate18(data.members, {instancePath:instancePath+"/members",parentData:data,parentDataProperty:"members",rootData}))){
-vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
+if(!(validate20(data.members, {instancePath:instancePath+"/members",parentData:data,parentDataProperty:"members",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema45.type,parentSchema:schema45,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema67.type,parentSchema:schema67,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1901,18 +2806,18 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate33.errors = vErrors;
+validate42.errors = vErrors;
 return errors === 0;
 }
 
-const schema47 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}};
+const schema69 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}};
 
-function validate36(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate45(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema47.required,parentSchema:schema47,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema69.required,parentSchema:schema69,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1922,7 +2827,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.factors === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema47.required,parentSchema:schema47,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema69.required,parentSchema:schema69,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1933,7 +2838,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "label")) || (key0 === "factors"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema47,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema69,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1971,7 +2876,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema47.properties.label.type,parentSchema:schema47.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema69.properties.label.type,parentSchema:schema69.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1985,7 +2890,7 @@ if(data.factors !== undefined){
 let data2 = data.factors;
 if(Array.isArray(data2)){
 if(data2.length < 1){
-const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema47.properties.factors,data:data2};
+const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema69.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1999,7 +2904,7 @@ for(let i0=0; i0<len0; i0++){
 let data3 = data2[i0];
 if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
 if(data3.case === undefined){
-const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema47.properties.factors.items.required,parentSchema:schema47.properties.factors.items,data:data3};
+const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema69.properties.factors.items.required,parentSchema:schema69.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2009,7 +2914,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data3.factor === undefined){
-const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema47.properties.factors.items.required,parentSchema:schema47.properties.factors.items,data:data3};
+const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema69.properties.factors.items.required,parentSchema:schema69.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2020,7 +2925,7 @@ errors++;
 }
 for(const key1 in data3){
 if(!((key1 === "case") || (key1 === "factor"))){
-const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema47.properties.factors.items,data:data3};
+const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema69.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2058,7 +2963,7 @@ errors++;
 if(data3.factor !== undefined){
 let data5 = data3.factor;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema47.properties.factors.items.properties.factor.type,parentSchema:schema47.properties.factors.items.properties.factor,data:data5};
+const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.factors.items.properties.factor.type,parentSchema:schema69.properties.factors.items.properties.factor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2070,7 +2975,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema47.properties.factors.items.type,parentSchema:schema47.properties.factors.items,data:data3};
+const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema69.properties.factors.items.type,parentSchema:schema69.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2082,7 +2987,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema47.properties.factors.type,parentSchema:schema47.properties.factors,data:data2};
+const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema69.properties.factors.type,parentSchema:schema69.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2094,7 +2999,7 @@ errors++;
 }
 }
 else {
-const err15 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema47.type,parentSchema:schema47,data};
+const err15 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema69.type,parentSchema:schema69,data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -2103,18 +3008,18 @@ vErrors.push(err15);
 }
 errors++;
 }
-validate36.errors = vErrors;
+validate45.errors = vErrors;
 return errors === 0;
 }
 
-const schema50 = {"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}};
-const schema52 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
+const schema72 = {"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}};
+const schema74 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
 
-function validate40(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate49(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(!(data && typeof data == "object" && !Array.isArray(data))){
-const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.type,parentSchema:schema52,data};
+const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema74.type,parentSchema:schema74,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2129,7 +3034,7 @@ let passing0 = null;
 const _errs2 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.fractionOfSpan === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema52.oneOf[0].required,parentSchema:schema52.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema74.oneOf[0].required,parentSchema:schema74.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2140,7 +3045,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(key0 === "fractionOfSpan")){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema52.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema74.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2154,7 +3059,7 @@ if(data.fractionOfSpan !== undefined){
 let data0 = data.fractionOfSpan;
 if((typeof data0 == "number") && (isFinite(data0))){
 if(data0 <= 0 || isNaN(data0)){
-const err3 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data0};
+const err3 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2165,7 +3070,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data0};
+const err4 = {instancePath:instancePath+"/fractionOfSpan",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data0};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2177,7 +3082,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.oneOf[0].type,parentSchema:schema52.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema74.oneOf[0].type,parentSchema:schema74.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2194,7 +3099,7 @@ passing0 = 0;
 const _errs9 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.absolute === undefined){
-const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema52.oneOf[1].required,parentSchema:schema52.oneOf[1],data};
+const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema74.oneOf[1].required,parentSchema:schema74.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2205,7 +3110,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(key1 === "absolute")){
-const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema52.oneOf[1],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema74.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2219,7 +3124,7 @@ if(data.absolute !== undefined){
 let data1 = data.absolute;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 <= 0 || isNaN(data1)){
-const err8 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data1};
+const err8 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data1};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2230,7 +3135,7 @@ errors++;
 }
 }
 else {
-const err9 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data1};
+const err9 = {instancePath:instancePath+"/absolute",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data1};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2242,7 +3147,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.oneOf[1].type,parentSchema:schema52.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema74.oneOf[1].type,parentSchema:schema74.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2263,7 +3168,7 @@ passing0 = 1;
 }
 }
 if(!valid0){
-const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema52.oneOf,parentSchema:schema52,data};
+const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema74.oneOf,parentSchema:schema74,data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2283,18 +3188,18 @@ vErrors = null;
 }
 }
 }
-validate40.errors = vErrors;
+validate49.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate38(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate47(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((((((key0 === "resistanceFactor") || (key0 === "noSlackGroups")) || (key0 === "sagLimits")) || (key0 === "displacementLimits")) || (key0 === "tiltLimits")) || (key0 === "upliftNodes"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema50,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2308,7 +3213,7 @@ if(data.resistanceFactor !== undefined){
 let data0 = data.resistanceFactor;
 if((typeof data0 == "number") && (isFinite(data0))){
 if(data0 > 1 || isNaN(data0)){
-const err1 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema50.properties.resistanceFactor,data:data0};
+const err1 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema72.properties.resistanceFactor,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2318,7 +3223,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data0 <= 0 || isNaN(data0)){
-const err2 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema50.properties.resistanceFactor,data:data0};
+const err2 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema72.properties.resistanceFactor,data:data0};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2329,7 +3234,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema50.properties.resistanceFactor.type,parentSchema:schema50.properties.resistanceFactor,data:data0};
+const err3 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema72.properties.resistanceFactor.type,parentSchema:schema72.properties.resistanceFactor,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2340,8 +3245,8 @@ errors++;
 }
 }
 if(data.noSlackGroups !== undefined){
-if(!(validate18(data.noSlackGroups, {instancePath:instancePath+"/noSlackGroups",parentData:data,parentDataProperty:"noSlackGroups",rootData}))){
-vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
+if(!(validate20(data.noSlackGroups, {instancePath:instancePath+"/noSlackGroups",parentData:data,parentDataProperty:"noSlackGroups",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
 errors = vErrors.length;
 }
 }
@@ -2353,7 +3258,7 @@ for(let i0=0; i0<len0; i0++){
 let data3 = data2[i0];
 if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
 if(data3.group === undefined){
-const err4 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema50.properties.sagLimits.items.required,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err4 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema72.properties.sagLimits.items.required,parentSchema:schema72.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2363,7 +3268,7 @@ vErrors.push(err4);
 errors++;
 }
 if(data3.limit === undefined){
-const err5 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema50.properties.sagLimits.items.required,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err5 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema72.properties.sagLimits.items.required,parentSchema:schema72.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2374,7 +3279,7 @@ errors++;
 }
 for(const key1 in data3){
 if(!((key1 === "group") || (key1 === "limit"))){
-const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema72.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2410,14 +3315,14 @@ errors++;
 }
 }
 if(data3.limit !== undefined){
-if(!(validate40(data3.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data3,parentDataProperty:"limit",rootData}))){
-vErrors = vErrors === null ? validate40.errors : vErrors.concat(validate40.errors);
+if(!(validate49(data3.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data3,parentDataProperty:"limit",rootData}))){
+vErrors = vErrors === null ? validate49.errors : vErrors.concat(validate49.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err9 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.sagLimits.items.type,parentSchema:schema50.properties.sagLimits.items,data:data3};
+const err9 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.properties.sagLimits.items.type,parentSchema:schema72.properties.sagLimits.items,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2429,7 +3334,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.sagLimits.type,parentSchema:schema50.properties.sagLimits,data:data2};
+const err10 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema72.properties.sagLimits.type,parentSchema:schema72.properties.sagLimits,data:data2};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2447,7 +3352,7 @@ for(let i1=0; i1<len1; i1++){
 let data7 = data6[i1];
 if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 if(data7.node === undefined){
-const err11 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema50.properties.displacementLimits.items.required,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err11 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema72.properties.displacementLimits.items.required,parentSchema:schema72.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2457,7 +3362,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data7.limit === undefined){
-const err12 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema50.properties.displacementLimits.items.required,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err12 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema72.properties.displacementLimits.items.required,parentSchema:schema72.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2468,7 +3373,7 @@ errors++;
 }
 for(const key2 in data7){
 if(!((key2 === "node") || (key2 === "limit"))){
-const err13 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err13 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema72.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2507,7 +3412,7 @@ if(data7.limit !== undefined){
 let data9 = data7.limit;
 if((typeof data9 == "number") && (isFinite(data9))){
 if(data9 <= 0 || isNaN(data9)){
-const err16 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data9};
+const err16 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data9};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -2518,7 +3423,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data9};
+const err17 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -2530,7 +3435,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.displacementLimits.items.type,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const err18 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.properties.displacementLimits.items.type,parentSchema:schema72.properties.displacementLimits.items,data:data7};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -2542,7 +3447,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.displacementLimits.type,parentSchema:schema50.properties.displacementLimits,data:data6};
+const err19 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema72.properties.displacementLimits.type,parentSchema:schema72.properties.displacementLimits,data:data6};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -2560,7 +3465,7 @@ for(let i2=0; i2<len2; i2++){
 let data11 = data10[i2];
 if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
 if(data11.base === undefined){
-const err20 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema50.properties.tiltLimits.items.required,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err20 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema72.properties.tiltLimits.items.required,parentSchema:schema72.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -2570,7 +3475,7 @@ vErrors.push(err20);
 errors++;
 }
 if(data11.top === undefined){
-const err21 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema50.properties.tiltLimits.items.required,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err21 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema72.properties.tiltLimits.items.required,parentSchema:schema72.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -2580,7 +3485,7 @@ vErrors.push(err21);
 errors++;
 }
 if(data11.limit === undefined){
-const err22 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema50.properties.tiltLimits.items.required,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err22 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema72.properties.tiltLimits.items.required,parentSchema:schema72.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -2591,7 +3496,7 @@ errors++;
 }
 for(const key3 in data11){
 if(!(((key3 === "base") || (key3 === "top")) || (key3 === "limit"))){
-const err23 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err23 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema72.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -2655,7 +3560,7 @@ if(data11.limit !== undefined){
 let data14 = data11.limit;
 if((typeof data14 == "number") && (isFinite(data14))){
 if(data14 <= 0 || isNaN(data14)){
-const err28 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data14};
+const err28 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data14};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -2666,7 +3571,7 @@ errors++;
 }
 }
 else {
-const err29 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data14};
+const err29 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data14};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -2678,7 +3583,7 @@ errors++;
 }
 }
 else {
-const err30 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.tiltLimits.items.type,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err30 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.properties.tiltLimits.items.type,parentSchema:schema72.properties.tiltLimits.items,data:data11};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -2690,7 +3595,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.tiltLimits.type,parentSchema:schema50.properties.tiltLimits,data:data10};
+const err31 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema72.properties.tiltLimits.type,parentSchema:schema72.properties.tiltLimits,data:data10};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -2701,14 +3606,14 @@ errors++;
 }
 }
 if(data.upliftNodes !== undefined){
-if(!(validate18(data.upliftNodes, {instancePath:instancePath+"/upliftNodes",parentData:data,parentDataProperty:"upliftNodes",rootData}))){
-vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.errors);
+if(!(validate20(data.upliftNodes, {instancePath:instancePath+"/upliftNodes",parentData:data,parentDataProperty:"upliftNodes",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err32 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.type,parentSchema:schema50,data};
+const err32 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.type,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -2717,19 +3622,19 @@ vErrors.push(err32);
 }
 errors++;
 }
-validate38.errors = vErrors;
+validate47.errors = vErrors;
 return errors === 0;
 }
 
-const schema60 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
-const schema62 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
+const schema82 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
+const schema84 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
 
-function validate45(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate54(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.required,parentSchema:schema62,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.required,parentSchema:schema84,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2743,7 +3648,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "sag"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.oneOf[0].required,parentSchema:schema84.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2753,7 +3658,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.group === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema84.oneOf[0].required,parentSchema:schema84.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2763,7 +3668,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.case === undefined){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema84.oneOf[0].required,parentSchema:schema84.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2773,7 +3678,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.limit === undefined){
-const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema84.oneOf[0].required,parentSchema:schema84.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2784,7 +3689,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "kind") || (key0 === "group")) || (key0 === "case")) || (key0 === "limit"))){
-const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema84.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2797,7 +3702,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("sag" !== data0){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema62.oneOf[0].properties.kind,data:data0};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema84.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2858,14 +3763,14 @@ errors++;
 }
 }
 if(data.limit !== undefined){
-if(!(validate40(data.limit, {instancePath:instancePath+"/limit",parentData:data,parentDataProperty:"limit",rootData}))){
-vErrors = vErrors === null ? validate40.errors : vErrors.concat(validate40.errors);
+if(!(validate49(data.limit, {instancePath:instancePath+"/limit",parentData:data,parentDataProperty:"limit",rootData}))){
+vErrors = vErrors === null ? validate49.errors : vErrors.concat(validate49.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[0].type,parentSchema:schema62.oneOf[0],data};
+const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.oneOf[0].type,parentSchema:schema84.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2878,7 +3783,7 @@ errors++;
 else if(tag0 === "tensionShare"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[1].required,parentSchema:schema62.oneOf[1],data};
+const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.oneOf[1].required,parentSchema:schema84.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2888,7 +3793,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data.group === undefined){
-const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema62.oneOf[1].required,parentSchema:schema62.oneOf[1],data};
+const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema84.oneOf[1].required,parentSchema:schema84.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2898,7 +3803,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data.share === undefined){
-const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema62.oneOf[1].required,parentSchema:schema62.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema84.oneOf[1].required,parentSchema:schema84.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2909,7 +3814,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(((key1 === "kind") || (key1 === "group")) || (key1 === "share"))){
-const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[1],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema84.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -2922,7 +3827,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("tensionShare" !== data4){
-const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema62.oneOf[1].properties.kind,data:data4};
+const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema84.oneOf[1].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -2961,7 +3866,7 @@ if(data.share !== undefined){
 let data6 = data.share;
 if((typeof data6 == "number") && (isFinite(data6))){
 if(data6 <= 0 || isNaN(data6)){
-const err19 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data6};
+const err19 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data6};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -2972,7 +3877,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data6};
+const err20 = {instancePath:instancePath+"/share",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data6};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -2984,7 +3889,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[1].type,parentSchema:schema62.oneOf[1],data};
+const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.oneOf[1].type,parentSchema:schema84.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -2997,7 +3902,7 @@ errors++;
 else if(tag0 === "noSlack"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[2].required,parentSchema:schema62.oneOf[2],data};
+const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.oneOf[2].required,parentSchema:schema84.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -3007,7 +3912,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data.group === undefined){
-const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema62.oneOf[2].required,parentSchema:schema62.oneOf[2],data};
+const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema84.oneOf[2].required,parentSchema:schema84.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -3017,7 +3922,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data.case === undefined){
-const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[2].required,parentSchema:schema62.oneOf[2],data};
+const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema84.oneOf[2].required,parentSchema:schema84.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -3028,7 +3933,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(((key2 === "kind") || (key2 === "group")) || (key2 === "case"))){
-const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[2],data};
+const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema84.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -3041,7 +3946,7 @@ errors++;
 if(data.kind !== undefined){
 let data7 = data.kind;
 if("noSlack" !== data7){
-const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema62.oneOf[2].properties.kind,data:data7};
+const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema84.oneOf[2].properties.kind,data:data7};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -3103,7 +4008,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[2].type,parentSchema:schema62.oneOf[2],data};
+const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.oneOf[2].type,parentSchema:schema84.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -3116,7 +4021,7 @@ errors++;
 else if(tag0 === "plumb"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.oneOf[3].required,parentSchema:schema84.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -3126,7 +4031,7 @@ vErrors.push(err32);
 errors++;
 }
 if(data.base === undefined){
-const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema84.oneOf[3].required,parentSchema:schema84.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -3136,7 +4041,7 @@ vErrors.push(err33);
 errors++;
 }
 if(data.top === undefined){
-const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema84.oneOf[3].required,parentSchema:schema84.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -3146,7 +4051,7 @@ vErrors.push(err34);
 errors++;
 }
 if(data.case === undefined){
-const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema84.oneOf[3].required,parentSchema:schema84.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -3156,7 +4061,7 @@ vErrors.push(err35);
 errors++;
 }
 if(data.tolerance === undefined){
-const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema84.oneOf[3].required,parentSchema:schema84.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -3167,7 +4072,7 @@ errors++;
 }
 for(const key3 in data){
 if(!(((((key3 === "kind") || (key3 === "base")) || (key3 === "top")) || (key3 === "case")) || (key3 === "tolerance"))){
-const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[3],data};
+const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema84.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -3180,7 +4085,7 @@ errors++;
 if(data.kind !== undefined){
 let data10 = data.kind;
 if("plumb" !== data10){
-const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema62.oneOf[3].properties.kind,data:data10};
+const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema84.oneOf[3].properties.kind,data:data10};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -3269,7 +4174,7 @@ if(data.tolerance !== undefined){
 let data14 = data.tolerance;
 if((typeof data14 == "number") && (isFinite(data14))){
 if(data14 < 0 || isNaN(data14)){
-const err45 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema21,data:data14};
+const err45 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data14};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -3280,7 +4185,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema21.type,parentSchema:schema21,data:data14};
+const err46 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data14};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -3292,7 +4197,7 @@ errors++;
 }
 }
 else {
-const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[3].type,parentSchema:schema62.oneOf[3],data};
+const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.oneOf[3].type,parentSchema:schema84.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -3305,7 +4210,7 @@ errors++;
 else if(tag0 === "reaction"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.oneOf[4].required,parentSchema:schema84.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -3315,7 +4220,7 @@ vErrors.push(err48);
 errors++;
 }
 if(data.node === undefined){
-const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema84.oneOf[4].required,parentSchema:schema84.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -3325,7 +4230,7 @@ vErrors.push(err49);
 errors++;
 }
 if(data.case === undefined){
-const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema84.oneOf[4].required,parentSchema:schema84.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -3335,7 +4240,7 @@ vErrors.push(err50);
 errors++;
 }
 if(data.limit === undefined){
-const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema84.oneOf[4].required,parentSchema:schema84.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -3346,7 +4251,7 @@ errors++;
 }
 for(const key4 in data){
 if(!((((key4 === "kind") || (key4 === "node")) || (key4 === "case")) || (key4 === "limit"))){
-const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[4],data};
+const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema84.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -3359,7 +4264,7 @@ errors++;
 if(data.kind !== undefined){
 let data15 = data.kind;
 if("reaction" !== data15){
-const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema62.oneOf[4].properties.kind,data:data15};
+const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema84.oneOf[4].properties.kind,data:data15};
 if(vErrors === null){
 vErrors = [err53];
 }
@@ -3422,7 +4327,7 @@ errors++;
 if(data.limit !== undefined){
 let data18 = data.limit;
 if(!((typeof data18 == "number") && (isFinite(data18)))){
-const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.oneOf[4].properties.limit.type,parentSchema:schema62.oneOf[4].properties.limit,data:data18};
+const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema84.oneOf[4].properties.limit.type,parentSchema:schema84.oneOf[4].properties.limit,data:data18};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -3434,7 +4339,7 @@ errors++;
 }
 }
 else {
-const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[4].type,parentSchema:schema62.oneOf[4],data};
+const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.oneOf[4].type,parentSchema:schema84.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -3445,7 +4350,7 @@ errors++;
 }
 }
 else {
-const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema62.discriminator,parentSchema:schema62,data};
+const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema84.discriminator,parentSchema:schema84,data};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -3456,7 +4361,7 @@ errors++;
 }
 }
 else {
-const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema62.discriminator,parentSchema:schema62,data};
+const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema84.discriminator,parentSchema:schema84,data};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -3467,7 +4372,7 @@ errors++;
 }
 }
 else {
-const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.type,parentSchema:schema62,data};
+const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.type,parentSchema:schema84,data};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -3476,17 +4381,17 @@ vErrors.push(err62);
 }
 errors++;
 }
-validate45.errors = vErrors;
+validate54.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate44(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.variables === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema60.required,parentSchema:schema60,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema82.required,parentSchema:schema82,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3496,7 +4401,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.targets === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema60.required,parentSchema:schema60,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema82.required,parentSchema:schema82,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3507,7 +4412,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "variables") || (key0 === "targets")) || (key0 === "lastRun"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema60,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema82,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3525,7 +4430,7 @@ for(let i0=0; i0<len0; i0++){
 let data1 = data0[i0];
 if(data1 && typeof data1 == "object" && !Array.isArray(data1)){
 if(data1.group === undefined){
-const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema60.properties.variables.items.required,parentSchema:schema60.properties.variables.items,data:data1};
+const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema82.properties.variables.items.required,parentSchema:schema82.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3535,7 +4440,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data1.by === undefined){
-const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema60.properties.variables.items.required,parentSchema:schema60.properties.variables.items,data:data1};
+const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema82.properties.variables.items.required,parentSchema:schema82.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3546,7 +4451,7 @@ errors++;
 }
 for(const key1 in data1){
 if(!((((key1 === "group") || (key1 === "by")) || (key1 === "min")) || (key1 === "max"))){
-const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema60.properties.variables.items,data:data1};
+const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema82.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3584,7 +4489,7 @@ errors++;
 if(data1.by !== undefined){
 let data3 = data1.by;
 if(!((data3 === "pretension") || (data3 === "unstressedLength"))){
-const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema60.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema60.properties.variables.items.properties.by.enum,parentSchema:schema60.properties.variables.items.properties.by,data:data3};
+const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema82.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema82.properties.variables.items.properties.by.enum,parentSchema:schema82.properties.variables.items.properties.by,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3597,7 +4502,7 @@ errors++;
 if(data1.min !== undefined){
 let data4 = data1.min;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema60.properties.variables.items.properties.min.type,parentSchema:schema60.properties.variables.items.properties.min,data:data4};
+const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema82.properties.variables.items.properties.min.type,parentSchema:schema82.properties.variables.items.properties.min,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3610,7 +4515,7 @@ errors++;
 if(data1.max !== undefined){
 let data5 = data1.max;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema60.properties.variables.items.properties.max.type,parentSchema:schema60.properties.variables.items.properties.max,data:data5};
+const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema82.properties.variables.items.properties.max.type,parentSchema:schema82.properties.variables.items.properties.max,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3622,7 +4527,7 @@ errors++;
 }
 }
 else {
-const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema60.properties.variables.items.type,parentSchema:schema60.properties.variables.items,data:data1};
+const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.properties.variables.items.type,parentSchema:schema82.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3634,7 +4539,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema60.properties.variables.type,parentSchema:schema60.properties.variables,data:data0};
+const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema82.properties.variables.type,parentSchema:schema82.properties.variables,data:data0};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -3649,14 +4554,14 @@ let data6 = data.targets;
 if(Array.isArray(data6)){
 const len1 = data6.length;
 for(let i1=0; i1<len1; i1++){
-if(!(validate45(data6[i1], {instancePath:instancePath+"/targets/" + i1,parentData:data6,parentDataProperty:i1,rootData}))){
-vErrors = vErrors === null ? validate45.errors : vErrors.concat(validate45.errors);
+if(!(validate54(data6[i1], {instancePath:instancePath+"/targets/" + i1,parentData:data6,parentDataProperty:i1,rootData}))){
+vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema60.properties.targets.type,parentSchema:schema60.properties.targets,data:data6};
+const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema82.properties.targets.type,parentSchema:schema82.properties.targets,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -3670,7 +4575,7 @@ if(data.lastRun !== undefined){
 let data8 = data.lastRun;
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 if(data8.date === undefined){
-const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema60.properties.lastRun.required,parentSchema:schema60.properties.lastRun,data:data8};
+const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema82.properties.lastRun.required,parentSchema:schema82.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -3680,7 +4585,7 @@ vErrors.push(err14);
 errors++;
 }
 if(data8.summary === undefined){
-const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema60.properties.lastRun.required,parentSchema:schema60.properties.lastRun,data:data8};
+const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema82.properties.lastRun.required,parentSchema:schema82.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3691,7 +4596,7 @@ errors++;
 }
 for(const key2 in data8){
 if(!((key2 === "date") || (key2 === "summary"))){
-const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema60.properties.lastRun,data:data8};
+const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema82.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -3704,7 +4609,7 @@ errors++;
 if(data8.date !== undefined){
 let data9 = data8.date;
 if(typeof data9 !== "string"){
-const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema60.properties.lastRun.properties.date.type,parentSchema:schema60.properties.lastRun.properties.date,data:data9};
+const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema82.properties.lastRun.properties.date.type,parentSchema:schema82.properties.lastRun.properties.date,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -3717,7 +4622,7 @@ errors++;
 if(data8.summary !== undefined){
 let data10 = data8.summary;
 if(typeof data10 !== "string"){
-const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema60.properties.lastRun.properties.summary.type,parentSchema:schema60.properties.lastRun.properties.summary,data:data10};
+const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema82.properties.lastRun.properties.summary.type,parentSchema:schema82.properties.lastRun.properties.summary,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -3729,7 +4634,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema60.properties.lastRun.type,parentSchema:schema60.properties.lastRun,data:data8};
+const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.properties.lastRun.type,parentSchema:schema82.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -3741,7 +4646,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema60.type,parentSchema:schema60,data};
+const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.type,parentSchema:schema82,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -3750,19 +4655,19 @@ vErrors.push(err20);
 }
 errors++;
 }
-validate44.errors = vErrors;
+validate53.errors = vErrors;
 return errors === 0;
 }
 
-const schema75 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
+const schema97 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
 
-function validate49(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate58(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!(key0 === "temperatures")){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema75,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema97,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3803,7 +4708,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema75.properties.temperatures.type,parentSchema:schema75.properties.temperatures,data:data0};
+const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema97.properties.temperatures.type,parentSchema:schema97.properties.temperatures,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3815,7 +4720,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema75.type,parentSchema:schema75,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema97.type,parentSchema:schema97,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3824,18 +4729,18 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate49.errors = vErrors;
+validate58.errors = vErrors;
 return errors === 0;
 }
 
-const schema77 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
+const schema99 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
 
-function validate51(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate60(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema77.required,parentSchema:schema77,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema99.required,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3845,7 +4750,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema77.required,parentSchema:schema77,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema99.required,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3855,7 +4760,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.params === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema77.required,parentSchema:schema77,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema99.required,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3866,7 +4771,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "kind")) || (key0 === "params"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema77,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3904,7 +4809,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "guyedMast") || (data1 === "saddleNet")) || (data1 === "radialNet"))){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema77.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema77.properties.kind.enum,parentSchema:schema77.properties.kind,data:data1};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema99.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema99.properties.kind.enum,parentSchema:schema99.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3917,7 +4822,7 @@ errors++;
 if(data.params !== undefined){
 let data2 = data.params;
 if(!(data2 && typeof data2 == "object" && !Array.isArray(data2))){
-const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema77.properties.params.type,parentSchema:schema77.properties.params,data:data2};
+const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema99.properties.params.type,parentSchema:schema99.properties.params,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3929,7 +4834,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema77.type,parentSchema:schema77,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema99.type,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3938,19 +4843,19 @@ vErrors.push(err8);
 }
 errors++;
 }
-validate51.errors = vErrors;
+validate60.errors = vErrors;
 return errors === 0;
 }
 
-const schema79 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
+const schema101 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
 
-function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate62(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((key0 === "units") || (key0 === "deformationScale"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema79,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema101,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3963,7 +4868,7 @@ errors++;
 if(data.units !== undefined){
 let data0 = data.units;
 if(!((data0 === "SI") || (data0 === "US"))){
-const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema79.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema79.properties.units.enum,parentSchema:schema79.properties.units,data:data0};
+const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema101.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema101.properties.units.enum,parentSchema:schema101.properties.units,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3977,7 +4882,7 @@ if(data.deformationScale !== undefined){
 let data1 = data.deformationScale;
 if((typeof data1 == "number") && (isFinite(data1))){
 if(data1 <= 0 || isNaN(data1)){
-const err2 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data1};
+const err2 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data1};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3988,7 +4893,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data1};
+const err3 = {instancePath:instancePath+"/deformationScale",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -4000,7 +4905,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema79.type,parentSchema:schema79,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema101.type,parentSchema:schema101,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -4009,7 +4914,1803 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate53.errors = vErrors;
+validate62.errors = vErrors;
+return errors === 0;
+}
+
+const schema103 = {"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}};
+const pattern36 = new RegExp("^[xyz]{1,3}$", "u");
+const schema106 = {"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}};
+
+function validate65(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.setBy === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema106.required,parentSchema:schema106,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((((key0 === "members") || (key0 === "group")) || (key0 === "setBy")) || (key0 === "label"))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema106,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+}
+if(data.members !== undefined){
+if(!(validate20(data.members, {instancePath:instancePath+"/members",parentData:data,parentDataProperty:"members",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
+errors = vErrors.length;
+}
+}
+if(data.group !== undefined){
+let data1 = data.group;
+if(typeof data1 === "string"){
+if(!pattern0.test(data1)){
+const err2 = {instancePath:instancePath+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data1};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+else {
+const err3 = {instancePath:instancePath+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data1};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.setBy !== undefined){
+let data2 = data.setBy;
+if(!((data2 === "force") || (data2 === "length"))){
+const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema106.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema106.properties.setBy.enum,parentSchema:schema106.properties.setBy,data:data2};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data3 = data.label;
+if(typeof data3 !== "string"){
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema106.properties.label.type,parentSchema:schema106.properties.label,data:data3};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+}
+else {
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema106.type,parentSchema:schema106,data};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+validate65.errors = vErrors;
+return errors === 0;
+}
+
+
+function validate64(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema103.required,parentSchema:schema103,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.steps === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema103.required,parentSchema:schema103,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(func2.call(schema103.properties, key0))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema103,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err3 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+else {
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema103.properties.label.type,parentSchema:schema103.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.temperature !== undefined){
+let data2 = data.temperature;
+if((typeof data2 == "number") && (isFinite(data2))){
+if(data2 <= 0 || isNaN(data2)){
+const err6 = {instancePath:instancePath+"/temperature",schemaPath:"#/definitions/absoluteTemperature/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema13,data:data2};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+else {
+const err7 = {instancePath:instancePath+"/temperature",schemaPath:"#/definitions/absoluteTemperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema13.type,parentSchema:schema13,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+if(data.selfWeight !== undefined){
+let data3 = data.selfWeight;
+if(typeof data3 !== "boolean"){
+const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema103.properties.selfWeight.type,parentSchema:schema103.properties.selfWeight,data:data3};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.steps !== undefined){
+let data4 = data.steps;
+if(Array.isArray(data4)){
+if(data4.length < 1){
+const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema103.properties.steps,data:data4};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+const len0 = data4.length;
+for(let i0=0; i0<len0; i0++){
+if(!(validate65(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate65.errors : vErrors.concat(validate65.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema103.properties.steps.type,parentSchema:schema103.properties.steps,data:data4};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+}
+if(data.temporaryRestraints !== undefined){
+let data6 = data.temporaryRestraints;
+if(Array.isArray(data6)){
+const len1 = data6.length;
+for(let i1=0; i1<len1; i1++){
+let data7 = data6[i1];
+if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
+if(data7.node === undefined){
+const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema103.properties.temporaryRestraints.items.required,parentSchema:schema103.properties.temporaryRestraints.items,data:data7};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+if(data7.fixed === undefined){
+const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema103.properties.temporaryRestraints.items.required,parentSchema:schema103.properties.temporaryRestraints.items,data:data7};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+for(const key1 in data7){
+if(!(((key1 === "node") || (key1 === "fixed")) || (key1 === "releaseAfterStep"))){
+const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema103.properties.temporaryRestraints.items,data:data7};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+}
+if(data7.node !== undefined){
+let data8 = data7.node;
+if(typeof data8 === "string"){
+if(!pattern0.test(data8)){
+const err14 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/node",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data8};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+else {
+const err15 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/node",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data8};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+if(data7.fixed !== undefined){
+let data9 = data7.fixed;
+if(typeof data9 === "string"){
+if(!pattern36.test(data9)){
+const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema103.properties.temporaryRestraints.items.properties.fixed,data:data9};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+}
+else {
+const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema103.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema103.properties.temporaryRestraints.items.properties.fixed,data:data9};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+}
+if(data7.releaseAfterStep !== undefined){
+let data10 = data7.releaseAfterStep;
+if(!(((typeof data10 == "number") && (!(data10 % 1) && !isNaN(data10))) && (isFinite(data10)))){
+const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema103.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema103.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+if((typeof data10 == "number") && (isFinite(data10))){
+if(data10 < 1 || isNaN(data10)){
+const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema103.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+}
+}
+}
+else {
+const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema103.properties.temporaryRestraints.items.type,parentSchema:schema103.properties.temporaryRestraints.items,data:data7};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
+}
+errors++;
+}
+}
+}
+else {
+const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema103.properties.temporaryRestraints.type,parentSchema:schema103.properties.temporaryRestraints,data:data6};
+if(vErrors === null){
+vErrors = [err21];
+}
+else {
+vErrors.push(err21);
+}
+errors++;
+}
+}
+if(data.plumb !== undefined){
+let data11 = data.plumb;
+if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
+if(data11.base === undefined){
+const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema103.properties.plumb.required,parentSchema:schema103.properties.plumb,data:data11};
+if(vErrors === null){
+vErrors = [err22];
+}
+else {
+vErrors.push(err22);
+}
+errors++;
+}
+if(data11.top === undefined){
+const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema103.properties.plumb.required,parentSchema:schema103.properties.plumb,data:data11};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+if(data11.limit === undefined){
+const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema103.properties.plumb.required,parentSchema:schema103.properties.plumb,data:data11};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+for(const key2 in data11){
+if(!(((key2 === "base") || (key2 === "top")) || (key2 === "limit"))){
+const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema103.properties.plumb,data:data11};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+}
+if(data11.base !== undefined){
+let data12 = data11.base;
+if(typeof data12 === "string"){
+if(!pattern0.test(data12)){
+const err26 = {instancePath:instancePath+"/plumb/base",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data12};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+}
+else {
+const err27 = {instancePath:instancePath+"/plumb/base",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data12};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+}
+if(data11.top !== undefined){
+let data13 = data11.top;
+if(typeof data13 === "string"){
+if(!pattern0.test(data13)){
+const err28 = {instancePath:instancePath+"/plumb/top",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data13};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
+}
+errors++;
+}
+}
+else {
+const err29 = {instancePath:instancePath+"/plumb/top",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data13};
+if(vErrors === null){
+vErrors = [err29];
+}
+else {
+vErrors.push(err29);
+}
+errors++;
+}
+}
+if(data11.limit !== undefined){
+let data14 = data11.limit;
+if((typeof data14 == "number") && (isFinite(data14))){
+if(data14 <= 0 || isNaN(data14)){
+const err30 = {instancePath:instancePath+"/plumb/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data14};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+}
+else {
+const err31 = {instancePath:instancePath+"/plumb/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data14};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+}
+}
+else {
+const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema103.properties.plumb.type,parentSchema:schema103.properties.plumb,data:data11};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+if(data.forceTolerance !== undefined){
+let data15 = data.forceTolerance;
+if((typeof data15 == "number") && (isFinite(data15))){
+if(data15 <= 0 || isNaN(data15)){
+const err33 = {instancePath:instancePath+"/forceTolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data15};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+else {
+const err34 = {instancePath:instancePath+"/forceTolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data15};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+if(data.lengthTolerance !== undefined){
+let data16 = data.lengthTolerance;
+if((typeof data16 == "number") && (isFinite(data16))){
+if(data16 <= 0 || isNaN(data16)){
+const err35 = {instancePath:instancePath+"/lengthTolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data16};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+}
+else {
+const err36 = {instancePath:instancePath+"/lengthTolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data16};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+}
+else {
+const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema103.type,parentSchema:schema103,data};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+validate64.errors = vErrors;
+return errors === 0;
+}
+
+const schema114 = {"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}};
+
+function validate69(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema114.required,parentSchema:schema114,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.tensions === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema114.required,parentSchema:schema114,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "date")) || (key0 === "tensions")) || (key0 === "positions")) || (key0 === "tolerance")) || (key0 === "lengthUncertainty"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema114,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err3 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+else {
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema114.properties.label.type,parentSchema:schema114.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.date !== undefined){
+let data2 = data.date;
+if(typeof data2 !== "string"){
+const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema114.properties.date.type,parentSchema:schema114.properties.date,data:data2};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+if(data.tensions !== undefined){
+let data3 = data.tensions;
+if(Array.isArray(data3)){
+const len0 = data3.length;
+for(let i0=0; i0<len0; i0++){
+let data4 = data3[i0];
+if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
+if(data4.member === undefined){
+const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema114.properties.tensions.items.required,parentSchema:schema114.properties.tensions.items,data:data4};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+if(data4.method === undefined){
+const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema114.properties.tensions.items.required,parentSchema:schema114.properties.tensions.items,data:data4};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+if(data4.value === undefined){
+const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema114.properties.tensions.items.required,parentSchema:schema114.properties.tensions.items,data:data4};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+if(data4.accuracy === undefined){
+const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema114.properties.tensions.items.required,parentSchema:schema114.properties.tensions.items,data:data4};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+if(data4.temperature === undefined){
+const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema114.properties.tensions.items.required,parentSchema:schema114.properties.tensions.items,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+for(const key1 in data4){
+if(!((((((key1 === "member") || (key1 === "method")) || (key1 === "value")) || (key1 === "accuracy")) || (key1 === "temperature")) || (key1 === "mode"))){
+const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema114.properties.tensions.items,data:data4};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+if(data4.member !== undefined){
+let data5 = data4.member;
+if(typeof data5 === "string"){
+if(!pattern0.test(data5)){
+const err13 = {instancePath:instancePath+"/tensions/" + i0+"/member",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data5};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+}
+else {
+const err14 = {instancePath:instancePath+"/tensions/" + i0+"/member",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data5};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+if(data4.method !== undefined){
+let data6 = data4.method;
+if(!(((data6 === "dynamometer") || (data6 === "frequency")) || (data6 === "sag"))){
+const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema114.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema114.properties.tensions.items.properties.method.enum,parentSchema:schema114.properties.tensions.items.properties.method,data:data6};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+if(data4.value !== undefined){
+let data7 = data4.value;
+if((typeof data7 == "number") && (isFinite(data7))){
+if(data7 <= 0 || isNaN(data7)){
+const err16 = {instancePath:instancePath+"/tensions/" + i0+"/value",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data7};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+}
+else {
+const err17 = {instancePath:instancePath+"/tensions/" + i0+"/value",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data7};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+}
+if(data4.accuracy !== undefined){
+let data8 = data4.accuracy;
+if((typeof data8 == "number") && (isFinite(data8))){
+if(data8 <= 0 || isNaN(data8)){
+const err18 = {instancePath:instancePath+"/tensions/" + i0+"/accuracy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data8};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+}
+else {
+const err19 = {instancePath:instancePath+"/tensions/" + i0+"/accuracy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data8};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+}
+if(data4.temperature !== undefined){
+let data9 = data4.temperature;
+if((typeof data9 == "number") && (isFinite(data9))){
+if(data9 <= 0 || isNaN(data9)){
+const err20 = {instancePath:instancePath+"/tensions/" + i0+"/temperature",schemaPath:"#/definitions/absoluteTemperature/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema13,data:data9};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
+}
+errors++;
+}
+}
+else {
+const err21 = {instancePath:instancePath+"/tensions/" + i0+"/temperature",schemaPath:"#/definitions/absoluteTemperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema13.type,parentSchema:schema13,data:data9};
+if(vErrors === null){
+vErrors = [err21];
+}
+else {
+vErrors.push(err21);
+}
+errors++;
+}
+}
+if(data4.mode !== undefined){
+let data10 = data4.mode;
+if(!((((data10 === "tautString") || (data10 === "inPlaneSymmetric")) || (data10 === "inPlaneAntisymmetric")) || (data10 === "lowestInPlane"))){
+const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema114.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema114.properties.tensions.items.properties.mode.enum,parentSchema:schema114.properties.tensions.items.properties.mode,data:data10};
+if(vErrors === null){
+vErrors = [err22];
+}
+else {
+vErrors.push(err22);
+}
+errors++;
+}
+}
+}
+else {
+const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema114.properties.tensions.items.type,parentSchema:schema114.properties.tensions.items,data:data4};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+}
+}
+else {
+const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema114.properties.tensions.type,parentSchema:schema114.properties.tensions,data:data3};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+}
+if(data.positions !== undefined){
+let data11 = data.positions;
+if(Array.isArray(data11)){
+const len1 = data11.length;
+for(let i1=0; i1<len1; i1++){
+let data12 = data11[i1];
+if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
+if(data12.node === undefined){
+const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema114.properties.positions.items.required,parentSchema:schema114.properties.positions.items,data:data12};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+if(data12.at === undefined){
+const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema114.properties.positions.items.required,parentSchema:schema114.properties.positions.items,data:data12};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+if(data12.accuracy === undefined){
+const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema114.properties.positions.items.required,parentSchema:schema114.properties.positions.items,data:data12};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+if(data12.temperature === undefined){
+const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema114.properties.positions.items.required,parentSchema:schema114.properties.positions.items,data:data12};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
+}
+errors++;
+}
+for(const key2 in data12){
+if(!((((key2 === "node") || (key2 === "at")) || (key2 === "accuracy")) || (key2 === "temperature"))){
+const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema114.properties.positions.items,data:data12};
+if(vErrors === null){
+vErrors = [err29];
+}
+else {
+vErrors.push(err29);
+}
+errors++;
+}
+}
+if(data12.node !== undefined){
+let data13 = data12.node;
+if(typeof data13 === "string"){
+if(!pattern0.test(data13)){
+const err30 = {instancePath:instancePath+"/positions/" + i1+"/node",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data13};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+}
+else {
+const err31 = {instancePath:instancePath+"/positions/" + i1+"/node",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data13};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+}
+if(data12.at !== undefined){
+let data14 = data12.at;
+if(Array.isArray(data14)){
+if(data14.length > 3){
+const err32 = {instancePath:instancePath+"/positions/" + i1+"/at",schemaPath:"#/definitions/vec3/maxItems",keyword:"maxItems",params:{limit: 3},message:"must NOT have more than 3 items",schema:3,parentSchema:schema16,data:data14};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+if(data14.length < 3){
+const err33 = {instancePath:instancePath+"/positions/" + i1+"/at",schemaPath:"#/definitions/vec3/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema16,data:data14};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+const len2 = data14.length;
+for(let i2=0; i2<len2; i2++){
+let data15 = data14[i2];
+if(!((typeof data15 == "number") && (isFinite(data15)))){
+const err34 = {instancePath:instancePath+"/positions/" + i1+"/at/" + i2,schemaPath:"#/definitions/vec3/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema16.items.type,parentSchema:schema16.items,data:data15};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+}
+else {
+const err35 = {instancePath:instancePath+"/positions/" + i1+"/at",schemaPath:"#/definitions/vec3/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema16.type,parentSchema:schema16,data:data14};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+}
+if(data12.accuracy !== undefined){
+let data16 = data12.accuracy;
+if((typeof data16 == "number") && (isFinite(data16))){
+if(data16 <= 0 || isNaN(data16)){
+const err36 = {instancePath:instancePath+"/positions/" + i1+"/accuracy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data16};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+else {
+const err37 = {instancePath:instancePath+"/positions/" + i1+"/accuracy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data16};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+if(data12.temperature !== undefined){
+let data17 = data12.temperature;
+if((typeof data17 == "number") && (isFinite(data17))){
+if(data17 <= 0 || isNaN(data17)){
+const err38 = {instancePath:instancePath+"/positions/" + i1+"/temperature",schemaPath:"#/definitions/absoluteTemperature/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema13,data:data17};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
+}
+errors++;
+}
+}
+else {
+const err39 = {instancePath:instancePath+"/positions/" + i1+"/temperature",schemaPath:"#/definitions/absoluteTemperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema13.type,parentSchema:schema13,data:data17};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+}
+}
+else {
+const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema114.properties.positions.items.type,parentSchema:schema114.properties.positions.items,data:data12};
+if(vErrors === null){
+vErrors = [err40];
+}
+else {
+vErrors.push(err40);
+}
+errors++;
+}
+}
+}
+else {
+const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema114.properties.positions.type,parentSchema:schema114.properties.positions,data:data11};
+if(vErrors === null){
+vErrors = [err41];
+}
+else {
+vErrors.push(err41);
+}
+errors++;
+}
+}
+if(data.tolerance !== undefined){
+let data18 = data.tolerance;
+if((typeof data18 == "number") && (isFinite(data18))){
+if(data18 <= 0 || isNaN(data18)){
+const err42 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data18};
+if(vErrors === null){
+vErrors = [err42];
+}
+else {
+vErrors.push(err42);
+}
+errors++;
+}
+}
+else {
+const err43 = {instancePath:instancePath+"/tolerance",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data18};
+if(vErrors === null){
+vErrors = [err43];
+}
+else {
+vErrors.push(err43);
+}
+errors++;
+}
+}
+if(data.lengthUncertainty !== undefined){
+let data19 = data.lengthUncertainty;
+if((typeof data19 == "number") && (isFinite(data19))){
+if(data19 <= 0 || isNaN(data19)){
+const err44 = {instancePath:instancePath+"/lengthUncertainty",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data19};
+if(vErrors === null){
+vErrors = [err44];
+}
+else {
+vErrors.push(err44);
+}
+errors++;
+}
+}
+else {
+const err45 = {instancePath:instancePath+"/lengthUncertainty",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data19};
+if(vErrors === null){
+vErrors = [err45];
+}
+else {
+vErrors.push(err45);
+}
+errors++;
+}
+}
+}
+else {
+const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema114.type,parentSchema:schema114,data};
+if(vErrors === null){
+vErrors = [err46];
+}
+else {
+vErrors.push(err46);
+}
+errors++;
+}
+validate69.errors = vErrors;
+return errors === 0;
+}
+
+const schema127 = {"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}};
+
+function validate71(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema127.required,parentSchema:schema127,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.nodes === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema127.required,parentSchema:schema127,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((((key0 === "id") || (key0 === "nodes")) || (key0 === "region")) || (key0 === "label"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema127,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err3 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+else {
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.nodes !== undefined){
+let data1 = data.nodes;
+if(Array.isArray(data1)){
+if(data1.length < 3){
+const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema127.properties.nodes,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+const len0 = data1.length;
+for(let i0=0; i0<len0; i0++){
+let data2 = data1[i0];
+if(typeof data2 === "string"){
+if(!pattern0.test(data2)){
+const err6 = {instancePath:instancePath+"/nodes/" + i0,schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+else {
+const err7 = {instancePath:instancePath+"/nodes/" + i0,schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+}
+else {
+const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema127.properties.nodes.type,parentSchema:schema127.properties.nodes,data:data1};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.region !== undefined){
+let data3 = data.region;
+if(typeof data3 === "string"){
+if(!pattern0.test(data3)){
+const err9 = {instancePath:instancePath+"/region",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data3};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+else {
+const err10 = {instancePath:instancePath+"/region",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data3};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data4 = data.label;
+if(typeof data4 !== "string"){
+const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema127.properties.label.type,parentSchema:schema127.properties.label,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+}
+}
+else {
+const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema127.type,parentSchema:schema127,data};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+validate71.errors = vErrors;
+return errors === 0;
+}
+
+const schema131 = {"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}};
+
+function validate73(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema131.required,parentSchema:schema131,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.meanCase === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema131.required,parentSchema:schema131,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+if(data.patchFactor === undefined){
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema131.required,parentSchema:schema131,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(((((key0 === "id") || (key0 === "label")) || (key0 === "meanCase")) || (key0 === "patchFactor")) || (key0 === "patches"))){
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema131,data};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+else {
+const err5 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema131.properties.label.type,parentSchema:schema131.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+if(data.meanCase !== undefined){
+let data2 = data.meanCase;
+if(typeof data2 === "string"){
+if(!pattern0.test(data2)){
+const err7 = {instancePath:instancePath+"/meanCase",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+else {
+const err8 = {instancePath:instancePath+"/meanCase",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.patchFactor !== undefined){
+let data3 = data.patchFactor;
+if((typeof data3 == "number") && (isFinite(data3))){
+if(data3 <= 1 || isNaN(data3)){
+const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema131.properties.patchFactor,data:data3};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+else {
+const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema131.properties.patchFactor.type,parentSchema:schema131.properties.patchFactor,data:data3};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+}
+if(data.patches !== undefined){
+let data4 = data.patches;
+if(Array.isArray(data4)){
+if(data4.length < 1){
+const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema131.properties.patches,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+const len0 = data4.length;
+for(let i0=0; i0<len0; i0++){
+let data5 = data4[i0];
+if(data5 && typeof data5 == "object" && !Array.isArray(data5)){
+if(data5.from === undefined){
+const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema131.properties.patches.items.required,parentSchema:schema131.properties.patches.items,data:data5};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+if(data5.to === undefined){
+const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema131.properties.patches.items.required,parentSchema:schema131.properties.patches.items,data:data5};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+for(const key1 in data5){
+if(!((key1 === "from") || (key1 === "to"))){
+const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema131.properties.patches.items,data:data5};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+if(data5.from !== undefined){
+let data6 = data5.from;
+if(!((typeof data6 == "number") && (isFinite(data6)))){
+const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema131.properties.patches.items.properties.from.type,parentSchema:schema131.properties.patches.items.properties.from,data:data6};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+if(data5.to !== undefined){
+let data7 = data5.to;
+if(!((typeof data7 == "number") && (isFinite(data7)))){
+const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema131.properties.patches.items.properties.to.type,parentSchema:schema131.properties.patches.items.properties.to,data:data7};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+}
+}
+else {
+const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.properties.patches.items.type,parentSchema:schema131.properties.patches.items,data:data5};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+}
+}
+else {
+const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema131.properties.patches.type,parentSchema:schema131.properties.patches,data:data4};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+}
+}
+else {
+const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.type,parentSchema:schema131,data};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+validate73.errors = vErrors;
+return errors === 0;
+}
+
+const schema134 = {"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
+
+function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema134.required,parentSchema:schema134,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.fromCase === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema134.required,parentSchema:schema134,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "fromCase")) || (key0 === "members")) || (key0 === "group")) || (key0 === "dynamicFactor")) || (key0 === "dampingRatio"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema134,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err3 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+else {
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema134.properties.label.type,parentSchema:schema134.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.fromCase !== undefined){
+let data2 = data.fromCase;
+if(typeof data2 === "string"){
+if(!pattern0.test(data2)){
+const err6 = {instancePath:instancePath+"/fromCase",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+else {
+const err7 = {instancePath:instancePath+"/fromCase",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+if(data.members !== undefined){
+if(!(validate20(data.members, {instancePath:instancePath+"/members",parentData:data,parentDataProperty:"members",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
+errors = vErrors.length;
+}
+}
+if(data.group !== undefined){
+let data4 = data.group;
+if(typeof data4 === "string"){
+if(!pattern0.test(data4)){
+const err8 = {instancePath:instancePath+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data4};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+else {
+const err9 = {instancePath:instancePath+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data4};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+if(data.dynamicFactor !== undefined){
+let data5 = data.dynamicFactor;
+if((typeof data5 == "number") && (isFinite(data5))){
+if(data5 > 2 || isNaN(data5)){
+const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema134.properties.dynamicFactor,data:data5};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+if(data5 < 1 || isNaN(data5)){
+const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema134.properties.dynamicFactor,data:data5};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+}
+else {
+const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema134.properties.dynamicFactor.type,parentSchema:schema134.properties.dynamicFactor,data:data5};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+if(data.dampingRatio !== undefined){
+let data6 = data.dampingRatio;
+if((typeof data6 == "number") && (isFinite(data6))){
+if(data6 < 0 || isNaN(data6)){
+const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema134.properties.dampingRatio,data:data6};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+if(data6 >= 1 || isNaN(data6)){
+const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema134.properties.dampingRatio,data:data6};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+else {
+const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema134.properties.dampingRatio.type,parentSchema:schema134.properties.dampingRatio,data:data6};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+}
+else {
+const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema134.type,parentSchema:schema134,data};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+validate75.errors = vErrors;
 return errors === 0;
 }
 
@@ -4160,8 +6861,8 @@ let data5 = data.sections;
 if(Array.isArray(data5)){
 const len1 = data5.length;
 for(let i1=0; i1<len1; i1++){
-if(!(validate15(data5[i1], {instancePath:instancePath+"/sections/" + i1,parentData:data5,parentDataProperty:i1,rootData}))){
-vErrors = vErrors === null ? validate15.errors : vErrors.concat(validate15.errors);
+if(!(validate17(data5[i1], {instancePath:instancePath+"/sections/" + i1,parentData:data5,parentDataProperty:i1,rootData}))){
+vErrors = vErrors === null ? validate17.errors : vErrors.concat(validate17.errors);
 errors = vErrors.length;
 }
 }
@@ -4192,8 +6893,8 @@ errors++;
 }
 const len2 = data7.length;
 for(let i2=0; i2<len2; i2++){
-if(!(validate17(data7[i2], {instancePath:instancePath+"/members/" + i2,parentData:data7,parentDataProperty:i2,rootData}))){
-vErrors = vErrors === null ? validate17.errors : vErrors.concat(validate17.errors);
+if(!(validate19(data7[i2], {instancePath:instancePath+"/members/" + i2,parentData:data7,parentDataProperty:i2,rootData}))){
+vErrors = vErrors === null ? validate19.errors : vErrors.concat(validate19.errors);
 errors = vErrors.length;
 }
 }
@@ -4224,8 +6925,8 @@ errors++;
 }
 const len3 = data9.length;
 for(let i3=0; i3<len3; i3++){
-if(!(validate21(data9[i3], {instancePath:instancePath+"/loadCases/" + i3,parentData:data9,parentDataProperty:i3,rootData}))){
-vErrors = vErrors === null ? validate21.errors : vErrors.concat(validate21.errors);
+if(!(validate23(data9[i3], {instancePath:instancePath+"/loadCases/" + i3,parentData:data9,parentDataProperty:i3,rootData}))){
+vErrors = vErrors === null ? validate23.errors : vErrors.concat(validate23.errors);
 errors = vErrors.length;
 }
 }
@@ -4246,8 +6947,8 @@ let data11 = data.groups;
 if(Array.isArray(data11)){
 const len4 = data11.length;
 for(let i4=0; i4<len4; i4++){
-if(!(validate33(data11[i4], {instancePath:instancePath+"/groups/" + i4,parentData:data11,parentDataProperty:i4,rootData}))){
-vErrors = vErrors === null ? validate33.errors : vErrors.concat(validate33.errors);
+if(!(validate42(data11[i4], {instancePath:instancePath+"/groups/" + i4,parentData:data11,parentDataProperty:i4,rootData}))){
+vErrors = vErrors === null ? validate42.errors : vErrors.concat(validate42.errors);
 errors = vErrors.length;
 }
 }
@@ -4268,8 +6969,8 @@ let data13 = data.combinations;
 if(Array.isArray(data13)){
 const len5 = data13.length;
 for(let i5=0; i5<len5; i5++){
-if(!(validate36(data13[i5], {instancePath:instancePath+"/combinations/" + i5,parentData:data13,parentDataProperty:i5,rootData}))){
-vErrors = vErrors === null ? validate36.errors : vErrors.concat(validate36.errors);
+if(!(validate45(data13[i5], {instancePath:instancePath+"/combinations/" + i5,parentData:data13,parentDataProperty:i5,rootData}))){
+vErrors = vErrors === null ? validate45.errors : vErrors.concat(validate45.errors);
 errors = vErrors.length;
 }
 }
@@ -4286,20 +6987,20 @@ errors++;
 }
 }
 if(data.checks !== undefined){
-if(!(validate38(data.checks, {instancePath:instancePath+"/checks",parentData:data,parentDataProperty:"checks",rootData}))){
-vErrors = vErrors === null ? validate38.errors : vErrors.concat(validate38.errors);
+if(!(validate47(data.checks, {instancePath:instancePath+"/checks",parentData:data,parentDataProperty:"checks",rootData}))){
+vErrors = vErrors === null ? validate47.errors : vErrors.concat(validate47.errors);
 errors = vErrors.length;
 }
 }
 if(data.tuning !== undefined){
-if(!(validate44(data.tuning, {instancePath:instancePath+"/tuning",parentData:data,parentDataProperty:"tuning",rootData}))){
-vErrors = vErrors === null ? validate44.errors : vErrors.concat(validate44.errors);
+if(!(validate53(data.tuning, {instancePath:instancePath+"/tuning",parentData:data,parentDataProperty:"tuning",rootData}))){
+vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
 errors = vErrors.length;
 }
 }
 if(data.installation !== undefined){
-if(!(validate49(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
-vErrors = vErrors === null ? validate49.errors : vErrors.concat(validate49.errors);
+if(!(validate58(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
+vErrors = vErrors === null ? validate58.errors : vErrors.concat(validate58.errors);
 errors = vErrors.length;
 }
 }
@@ -4308,8 +7009,8 @@ let data18 = data.generators;
 if(Array.isArray(data18)){
 const len6 = data18.length;
 for(let i6=0; i6<len6; i6++){
-if(!(validate51(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
-vErrors = vErrors === null ? validate51.errors : vErrors.concat(validate51.errors);
+if(!(validate60(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
+vErrors = vErrors === null ? validate60.errors : vErrors.concat(validate60.errors);
 errors = vErrors.length;
 }
 }
@@ -4326,19 +7027,307 @@ errors++;
 }
 }
 if(data.display !== undefined){
-if(!(validate53(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
-vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+if(!(validate62(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
+vErrors = vErrors === null ? validate62.errors : vErrors.concat(validate62.errors);
+errors = vErrors.length;
+}
+}
+if(data.sequences !== undefined){
+let data21 = data.sequences;
+if(Array.isArray(data21)){
+const len7 = data21.length;
+for(let i7=0; i7<len7; i7++){
+if(!(validate64(data21[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data21,parentDataProperty:i7,rootData}))){
+vErrors = vErrors === null ? validate64.errors : vErrors.concat(validate64.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema11.type,parentSchema:schema11,data};
+const err19 = {instancePath:instancePath+"/sequences",schemaPath:"#/properties/sequences/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.sequences.type,parentSchema:schema11.properties.sequences,data:data21};
 if(vErrors === null){
 vErrors = [err19];
 }
 else {
 vErrors.push(err19);
+}
+errors++;
+}
+}
+if(data.siteMeasurements !== undefined){
+let data23 = data.siteMeasurements;
+if(Array.isArray(data23)){
+const len8 = data23.length;
+for(let i8=0; i8<len8; i8++){
+if(!(validate69(data23[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data23,parentDataProperty:i8,rootData}))){
+vErrors = vErrors === null ? validate69.errors : vErrors.concat(validate69.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err20 = {instancePath:instancePath+"/siteMeasurements",schemaPath:"#/properties/siteMeasurements/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.siteMeasurements.type,parentSchema:schema11.properties.siteMeasurements,data:data23};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
+}
+errors++;
+}
+}
+if(data.report !== undefined){
+let data25 = data.report;
+if(data25 && typeof data25 == "object" && !Array.isArray(data25)){
+for(const key1 in data25){
+if(!((key1 === "documentNumber") || (key1 === "revisions"))){
+const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema126,data:data25};
+if(vErrors === null){
+vErrors = [err21];
+}
+else {
+vErrors.push(err21);
+}
+errors++;
+}
+}
+if(data25.documentNumber !== undefined){
+let data26 = data25.documentNumber;
+if(typeof data26 !== "string"){
+const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.documentNumber.type,parentSchema:schema126.properties.documentNumber,data:data26};
+if(vErrors === null){
+vErrors = [err22];
+}
+else {
+vErrors.push(err22);
+}
+errors++;
+}
+}
+if(data25.revisions !== undefined){
+let data27 = data25.revisions;
+if(Array.isArray(data27)){
+const len9 = data27.length;
+for(let i9=0; i9<len9; i9++){
+let data28 = data27[i9];
+if(data28 && typeof data28 == "object" && !Array.isArray(data28)){
+if(data28.revision === undefined){
+const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema126.properties.revisions.items.required,parentSchema:schema126.properties.revisions.items,data:data28};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+if(data28.date === undefined){
+const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema126.properties.revisions.items.required,parentSchema:schema126.properties.revisions.items,data:data28};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+if(data28.description === undefined){
+const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema126.properties.revisions.items.required,parentSchema:schema126.properties.revisions.items,data:data28};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+for(const key2 in data28){
+if(!(((((key2 === "revision") || (key2 === "date")) || (key2 === "description")) || (key2 === "by")) || (key2 === "checkedBy"))){
+const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema126.properties.revisions.items,data:data28};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+}
+if(data28.revision !== undefined){
+let data29 = data28.revision;
+if(typeof data29 !== "string"){
+const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.revisions.items.properties.revision.type,parentSchema:schema126.properties.revisions.items.properties.revision,data:data29};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+}
+if(data28.date !== undefined){
+let data30 = data28.date;
+if(typeof data30 !== "string"){
+const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.revisions.items.properties.date.type,parentSchema:schema126.properties.revisions.items.properties.date,data:data30};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
+}
+errors++;
+}
+}
+if(data28.description !== undefined){
+let data31 = data28.description;
+if(typeof data31 !== "string"){
+const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.revisions.items.properties.description.type,parentSchema:schema126.properties.revisions.items.properties.description,data:data31};
+if(vErrors === null){
+vErrors = [err29];
+}
+else {
+vErrors.push(err29);
+}
+errors++;
+}
+}
+if(data28.by !== undefined){
+let data32 = data28.by;
+if(typeof data32 !== "string"){
+const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.revisions.items.properties.by.type,parentSchema:schema126.properties.revisions.items.properties.by,data:data32};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+}
+if(data28.checkedBy !== undefined){
+let data33 = data28.checkedBy;
+if(typeof data33 !== "string"){
+const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.revisions.items.properties.checkedBy.type,parentSchema:schema126.properties.revisions.items.properties.checkedBy,data:data33};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+}
+}
+else {
+const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema126.properties.revisions.items.type,parentSchema:schema126.properties.revisions.items,data:data28};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+}
+else {
+const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema126.properties.revisions.type,parentSchema:schema126.properties.revisions,data:data27};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+}
+else {
+const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema126.type,parentSchema:schema126,data:data25};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+if(data.panels !== undefined){
+let data34 = data.panels;
+if(Array.isArray(data34)){
+const len10 = data34.length;
+for(let i10=0; i10<len10; i10++){
+if(!(validate71(data34[i10], {instancePath:instancePath+"/panels/" + i10,parentData:data34,parentDataProperty:i10,rootData}))){
+vErrors = vErrors === null ? validate71.errors : vErrors.concat(validate71.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err35 = {instancePath:instancePath+"/panels",schemaPath:"#/properties/panels/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.panels.type,parentSchema:schema11.properties.panels,data:data34};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+}
+if(data.patchWind !== undefined){
+let data36 = data.patchWind;
+if(Array.isArray(data36)){
+const len11 = data36.length;
+for(let i11=0; i11<len11; i11++){
+if(!(validate73(data36[i11], {instancePath:instancePath+"/patchWind/" + i11,parentData:data36,parentDataProperty:i11,rootData}))){
+vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err36 = {instancePath:instancePath+"/patchWind",schemaPath:"#/properties/patchWind/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.patchWind.type,parentSchema:schema11.properties.patchWind,data:data36};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+if(data.memberLoss !== undefined){
+let data38 = data.memberLoss;
+if(Array.isArray(data38)){
+const len12 = data38.length;
+for(let i12=0; i12<len12; i12++){
+if(!(validate75(data38[i12], {instancePath:instancePath+"/memberLoss/" + i12,parentData:data38,parentDataProperty:i12,rootData}))){
+vErrors = vErrors === null ? validate75.errors : vErrors.concat(validate75.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err37 = {instancePath:instancePath+"/memberLoss",schemaPath:"#/properties/memberLoss/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.memberLoss.type,parentSchema:schema11.properties.memberLoss,data:data38};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+}
+else {
+const err38 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema11.type,parentSchema:schema11,data};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
 }
 errors++;
 }
