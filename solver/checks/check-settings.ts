@@ -1,6 +1,6 @@
-import type { CheckSettings, ProjectFile } from '../project/types.ts';
-import { DEFAULT_RESISTANCE_FACTOR } from '../loads/defaults.ts';
+import type { ProjectFile } from '../project/types.ts';
 import { groupExists } from './groups.ts';
+import { cableResistanceDivisor, resolveDesignBasis } from './design-basis.ts';
 
 /** Thrown by runChecks when the check settings refer to things that do not exist or are invalid. */
 export class CheckInputError extends Error {
@@ -10,9 +10,9 @@ export class CheckInputError extends Error {
   }
 }
 
-/** Resistance factor φ in use (CheckSettings.resistanceFactor or DEFAULT_RESISTANCE_FACTOR). */
-export function resistanceFactorOf(settings: CheckSettings | undefined): number {
-  return settings?.resistanceFactor ?? DEFAULT_RESISTANCE_FACTOR;
+/** Share of the breaking load a cable may carry under the design basis: 1 / (resistance divisor). */
+export function resistanceFactorOf(project: ProjectFile): number {
+  return 1 / cableResistanceDivisor(resolveDesignBasis(project));
 }
 
 /** Problems with `project.checks`, each naming the entry: unknown groups/nodes, non-positive limits. */
@@ -22,9 +22,6 @@ export function checkSettingsProblems(project: ProjectFile): string[] {
   const out: string[] = [];
   const nodes = new Set(project.nodes.map((n) => n.id));
   const pos = (v: unknown) => typeof v === 'number' && Number.isFinite(v) && v > 0;
-  if (s.resistanceFactor !== undefined && !(pos(s.resistanceFactor) && s.resistanceFactor <= 1)) {
-    out.push(`checks.resistanceFactor: ${s.resistanceFactor} must be a number in (0, 1]`);
-  }
   (s.noSlackGroups ?? []).forEach((g, i) => {
     if (!groupExists(project, g)) out.push(`checks.noSlackGroups[${i}]: group "${g}" does not exist`);
   });

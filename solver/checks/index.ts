@@ -5,3 +5,6 @@ export type { Envelope, MemberEnvelope, NodeEnvelope, ReactionEnvelope } from '.
 export { runChecks } from './run-checks.ts';
 export { CheckInputError, checkSettingsProblems, resistanceFactorOf } from './check-settings.ts';
 export type * from './check-types.ts';
+export { resolveDesignBasis, cableResistanceDivisor, purposeOf, purposeOfCase, purposeOfCombination, checksFor, FROM_PROJECT } from './design-basis.ts';
+export type { ResolvedBasis } from './design-basis.ts';
+export type { Sourced } from './basis-defaults.ts';

@@ -16,7 +16,7 @@ export function runChecks(project: ProjectFile, report: SolveReport): CheckRepor
   const problems = checkSettingsProblems(project);
   if (problems.length) throw new CheckInputError(problems);
   const s = project.checks ?? {};
-  const phi = resistanceFactorOf(s);
+  const phi = resistanceFactorOf(project);
   const warnings: string[] = [];
   const sectionOf = new Map(project.sections.map((x) => [x.id, x] as const));
   const mbl = new Map<string, number>();

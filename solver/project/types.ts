@@ -1,5 +1,5 @@
 /**
- * The Stayset project file, format "stayset-project", version 1, as TypeScript types.
+ * The Stayset project file, format "stayset-project", version 2, as TypeScript types.
  *
  * Conventions (hold for every field below):
  * - SI base units inside the file: m, N, kg, Pa, 1/K, K, s. Temperatures that are absolute
@@ -12,11 +12,15 @@
  * runtime dependencies). Keep both in step.
  */
 
+import type { ActionKind, BucklingCurve, CasePurpose, DesignBasis, MemberDesignRule, MinimumTensionRule, SectionShape, TerminationKind, TwistLimit } from './design-basis-types.ts';
+
+export type * from './design-basis-types.ts';
+
 export type Vec3 = [number, number, number];
 
 export interface ProjectFile {
   format: 'stayset-project';
-  version: 1;
+  version: 2;
   meta?: ProjectMeta;
   nodes: NodeSpec[];
   sections: SectionSpec[];
@@ -36,6 +40,8 @@ export interface ProjectFile {
   generators?: GeneratorRecord[];
   /** Display preferences; never affect results. */
   display?: DisplaySettings;
+  /** Check format and factors (design-basis-types.ts); absent = the limit-state defaults. */
+  designBasis?: DesignBasis;
 }
 
 export interface ProjectMeta {
@@ -87,6 +93,18 @@ export interface SectionSpec {
     share?: number;
   };
   label?: string;
+  /** Yield strength f_y, Pa (bars: tension yield and buckling checks). */
+  yieldStrength?: number;
+  /** Shape, for the buckling-curve and radius-of-gyration defaults. */
+  shape?: SectionShape;
+  /** Buckling curve (EN 1993-1-1 Table 6.2); default from `shape`. */
+  bucklingCurve?: BucklingCurve;
+  /** Least radius of gyration, m (default for solid rounds: diameter / 4). */
+  radiusOfGyration?: number;
+  /** Cable end termination, for its efficiency factor k_e. */
+  termination?: TerminationKind;
+  /** End-termination efficiency k_e (0..1], overrides `termination`. */
+  terminationEfficiency?: number;
 }
 
 export type MemberKind = 'cable' | 'bar';
@@ -108,6 +126,10 @@ export interface MemberSpec {
   groups?: string[];
   /** Set by a generator: which generator record made this member. */
   generatedBy?: string;
+  /** End-termination efficiency k_e (0..1], overrides the section's. */
+  terminationEfficiency?: number;
+  /** Buckling length, m, overrides the member design rules. */
+  bucklingLength?: number;
 }
 
 export interface NodalLoadSpec {
@@ -156,6 +178,10 @@ export interface LoadCaseSpec {
   nodalLoads?: NodalLoadSpec[];
   wind?: WindSpec;
   ice?: IceSpec;
+  /** What the case is checked for (absent = serviceability). */
+  purpose?: CasePurpose;
+  /** Which action the case represents, for the combination builder. */
+  action?: ActionKind;
 }
 
 export interface GroupSpec {
@@ -169,23 +195,29 @@ export interface CombinationSpec {
   label?: string;
   /** Sum of factor × load case; self-weight, nodal loads, wind pressure and ΔT are all scaled. */
   factors: { case: string; factor: number }[];
+  /** What the combination is checked for (absent = ultimate). */
+  purpose?: CasePurpose;
 }
 
 /** Limit on sag: a fraction of the chord length, or an absolute length in m. */
 export type SagLimit = { fractionOfSpan: number } | { absolute: number };
 
 export interface CheckSettings {
-  /** Resistance factor φ applied to breaking load: utilisation = T / (φ · breakingLoad). */
-  resistanceFactor?: number;
   /** Member groups (or "*" for all cables) that must not go slack in any case. */
   noSlackGroups?: string[];
   sagLimits?: { group: string; limit: SagLimit }[];
-  /** Limit on the displacement magnitude of named nodes, m. */
-  displacementLimits?: { node: string; limit: number }[];
+  /** Limit on the displacement of named nodes, m: horizontal (default), total or along a direction. */
+  displacementLimits?: { node: string; limit: number; direction?: 'horizontal' | 'total' | Vec3 }[];
   /** Mast tilt: horizontal offset of `top` relative to `base` over their height, as a ratio. */
   tiltLimits?: { base: string; top: string; limit: number }[];
   /** Supports at which uplift (reaction along −z pulling the support up, Fz < 0) is flagged. */
   upliftNodes?: string[];
+  /** Minimum tension of cables per group (serviceability cases). */
+  minimumTension?: MinimumTensionRule[];
+  /** Buckling lengths, roles and slenderness limits of bars per group. */
+  memberDesign?: MemberDesignRule[];
+  /** Twist (rotation about the vertical) of node sets, degrees. */
+  twistLimits?: TwistLimit[];
 }
 
 /**

@@ -19,7 +19,7 @@ import { commitPretension, sliderGroups } from '../../renderer/tuning/tuning-edi
 import { useResultsStore } from '../../renderer/stores/results.ts';
 import { useChecksStore } from '../../renderer/stores/checks.ts';
 import { useProjectStore } from '../../renderer/stores/project.ts';
-import { setResistanceFactor } from '../../renderer/model/check-settings-edits.ts';
+import { setCableFactor } from '../../renderer/model/check-settings-edits.ts';
 
 const demo = JSON.parse(readFileSync(fileURLToPath(new URL('../../assets/demo-mast.stayset', import.meta.url)), 'utf8')) as ProjectFile;
 const LEVEL = 'mast/guys level 1';
@@ -31,8 +31,8 @@ beforeAll(() => {
 
 describe('checks in the 3D view', () => {
   it('colours exactly the members runChecks fails in the check-fail colour, unchecked in grey', () => {
-    // φ = 0.12 only forces failures (the demo's worst T / MBL is about 0.14).
-    const strict = setResistanceFactor(demo, 0.12);
+    // a cable factor of 8 only forces failures (the demo's worst T / MBL is about 0.14).
+    const strict = setCableFactor(demo, 8);
     const checks = runChecks(strict, report);
     const failing = new Set(checks.members.filter((m) => m.status === 'fail').map((m) => m.id));
     expect(failing.size).toBeGreaterThan(0);
@@ -125,7 +125,7 @@ describe('results store with a live case', () => {
   });
 
   it('checks follow the live case: the same verdict as checking the committed, re-solved project', () => {
-    const tuned: ProjectFile = { ...demo, checks: { ...demo.checks, resistanceFactor: 0.3 }, tuning: { variables: [{ group: LEVEL, by: 'pretension' }], targets: [] } };
+    const tuned: ProjectFile = { ...demo, designBasis: { format: 'allowable', allowable: { cableSafetyFactor: 1 / 0.3 } }, tuning: { variables: [{ group: LEVEL, by: 'pretension' }], targets: [] } };
     const s = useProjectStore();
     s.load({ path: '/p/demo.stayset', name: 'demo.stayset', project: tuned });
     const r = useResultsStore();
@@ -148,7 +148,7 @@ describe('results store with a live case', () => {
     const r = useResultsStore();
     r.started(1, demo);
     r.onFinished({ runId: 'a', status: 'done', report });
-    expect(r.isStaleFor(setResistanceFactor(demo, 0.3))).toBe(false);
+    expect(r.isStaleFor(setCableFactor(demo, 1 / 0.3))).toBe(false);
     expect(r.isStaleFor(commitPretension({ ...demo, tuning: { variables: [{ group: LEVEL, by: 'pretension' }], targets: [] } }, LEVEL, 20_000))).toBe(true);
   });
 });

@@ -3,7 +3,7 @@ import type { CaseResult, ProjectFile } from '../../solver/index.ts';
 import { memberRows, sortRows } from '../../renderer/results/member-rows.ts';
 
 const project: ProjectFile = {
-  format: 'stayset-project', version: 1,
+  format: 'stayset-project', version: 2,
   nodes: [{ id: 'A', at: [0, 0, 0] }, { id: 'B', at: [1, 0, 0] }],
   sections: [{ id: 'S', E: 1, area: 1, breakingLoad: 200 }, { id: 'T', E: 1, area: 1 }],
   members: [

@@ -25,7 +25,7 @@ describe('stayset check', () => {
 
   it('a failed check gives exit 3 and names the member, case and ratio', () => {
     const p = canopy();
-    p.checks = { ...p.checks, resistanceFactor: 0.1 };
+    p.designBasis = { format: 'allowable', allowable: { cableSafetyFactor: 10 } };
     const r = runStayset(['check', writeProject('tight.stayset', p)]);
     expect(r.code).toBe(3);
     expect(r.stdout).toMatch(/CHECK FAILED: \d+ failure/);

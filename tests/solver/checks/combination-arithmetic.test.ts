@@ -8,7 +8,7 @@ const E = 2e11, A = 1e-4, L = 5;
 /** Bar A→B along x; A pinned, B free along x only. Statically determinate: N = applied force. */
 function bar(): ProjectFile {
   return {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     nodes: [{ id: 'A', at: [0, 0, 0], fixed: 'xyz' }, { id: 'B', at: [L, 0, 0], fixed: 'yz' }],
     sections: [{ id: 's', E, area: A, breakingLoad: 20e3, thermalExpansion: 1.2e-5 }],
     members: [{ id: 'AB', kind: 'bar', from: 'A', to: 'B', section: 's' }],
@@ -16,6 +16,7 @@ function bar(): ProjectFile {
       { id: 'a', selfWeight: false, nodalLoads: [{ node: 'B', force: [1000, 0, 0] }] },
       { id: 'b', selfWeight: false, nodalLoads: [{ node: 'B', force: [2000, 0, 0] }] },
     ],
+    designBasis: { format: 'allowable', allowable: { cableSafetyFactor: 2 } },
     combinations: [{ id: 'c', factors: [{ case: 'a', factor: 1.5 }, { case: 'b', factor: 0.5 }] }],
   };
 }
@@ -58,7 +59,7 @@ describe('combination and envelope arithmetic on a single bar', () => {
 
   it('wind in a combination: reactions balance the drag on the deformed cable, scaled by the factor', () => {
     const p: ProjectFile = {
-      format: 'stayset-project', version: 1,
+      format: 'stayset-project', version: 2,
       nodes: [{ id: 'P', at: [0, 0, 10], fixed: 'xyz' }, { id: 'Q', at: [0, 12, 10], fixed: 'xyz' }],
       sections: [{ id: 'rope', E: 1.6e11, area: 1e-4, diameter: 0.015 }],
       members: [{ id: 'R', kind: 'cable', from: 'P', to: 'Q', section: 'rope', segments: 6, pretension: 30e3 }],

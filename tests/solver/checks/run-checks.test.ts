@@ -5,7 +5,7 @@ import { caseResult } from './synthetic-report.ts';
 
 function project(): ProjectFile {
   return {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     nodes: [{ id: 'BASE', at: [0, 0, 0], fixed: 'xyz' }, { id: 'TOP', at: [0, 0, 50] }, { id: 'A1', at: [30, 0, 0], fixed: 'xyz' }],
     sections: [{ id: 'strand', E: 1.6e11, area: 1e-4, breakingLoad: 100e3 }, { id: 'bar', E: 2e11, area: 1e-3 }],
     members: [
@@ -15,6 +15,7 @@ function project(): ProjectFile {
     ],
     groups: [{ id: 'guys', members: ['G2'] }, { id: 'empty', members: [] }],
     loadCases: [{ id: 'dead' }, { id: 'wind' }],
+    designBasis: { format: 'allowable', allowable: { cableSafetyFactor: 2 } },
     checks: {
       noSlackGroups: ['guys'], sagLimits: [{ group: 'guys', limit: { fractionOfSpan: 0.02 } }],
       displacementLimits: [{ node: 'TOP', limit: 0.25 }], tiltLimits: [{ base: 'BASE', top: 'TOP', limit: 1 / 500 }],
@@ -51,7 +52,7 @@ describe('runChecks', () => {
       { id: 'G1', tensionMax: 60e3, slack: true }, { id: 'G2', tensionMax: 45e3, sag: 1.5, chordLength: 58 }, { id: 'M', tensionMax: 0 },
     ], [{ id: 'TOP', at: [0, 0, 50], u: [0.3, 0, 0] }, { id: 'BASE', at: [0, 0, 0], u: [0, 0, 0] }], [{ node: 'BASE', force: [0, 0, -1e3] }]);
     const p = project();
-    p.checks!.resistanceFactor = 0.8;
+    p.designBasis = { format: 'allowable', allowable: { cableSafetyFactor: 1 / 0.8 } };
     const r = runChecks(p, { cases: [ok, bad] });
     expect(r.pass).toBe(false);
     const by = (k: string, id: string) => r.failures.find((f) => f.kind === k && f.id === id)!;
@@ -80,13 +81,12 @@ describe('runChecks', () => {
 
   it('names missing groups and nodes in the settings', () => {
     const p = project();
-    p.checks = { noSlackGroups: ['nope'], displacementLimits: [{ node: 'Q', limit: 1 }], resistanceFactor: 1.5 };
+    p.checks = { noSlackGroups: ['nope'], displacementLimits: [{ node: 'Q', limit: 1 }] };
     expect(() => runChecks(p, { cases: [] })).toThrow(CheckInputError);
     try { runChecks(p, { cases: [] }); } catch (e) {
       const msg = (e as CheckInputError).problems.join('\n');
       expect(msg).toMatch(/noSlackGroups\[0\]: group "nope"/);
       expect(msg).toMatch(/displacementLimits\[0\]: node "Q"/);
-      expect(msg).toMatch(/resistanceFactor/);
     }
   });
 });

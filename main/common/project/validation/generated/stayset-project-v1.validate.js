@@ -3,7 +3,7 @@
 "use strict";
 export const validate = validate10;
 export default validate10;
-const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 1","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":1,"x-message":"{field} must be 1"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z, each at most once"}}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}}}};
+const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 2","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":2,"x-message":"{field} must be 2"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"designBasis":{"$ref":"#/definitions/designBasis"}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z, each at most once"}}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"yieldStrength":{"$ref":"#/definitions/positive"},"shape":{"enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"$ref":"#/definitions/positive"},"termination":{"enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"$ref":"#/definitions/positive"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"purpose":{"$ref":"#/definitions/casePurpose"},"action":{"enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}},"casePurpose":{"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"},"designBasis":{"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}}}};
 const func2 = Object.prototype.hasOwnProperty;
 const schema12 = {"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}};
 const schema13 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}};
@@ -285,7 +285,7 @@ validate13.errors = vErrors;
 return errors === 0;
 }
 
-const schema17 = {"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"}}};
+const schema17 = {"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"yieldStrength":{"$ref":"#/definitions/positive"},"shape":{"enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"$ref":"#/definitions/positive"},"termination":{"enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}};
 const schema19 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}};
 const schema21 = {"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}};
 
@@ -667,9 +667,11 @@ vErrors.push(err30);
 errors++;
 }
 }
-}
-else {
-const err31 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema17.type,parentSchema:schema17,data};
+if(data.yieldStrength !== undefined){
+let data14 = data.yieldStrength;
+if((typeof data14 == "number") && (isFinite(data14))){
+if(data14 <= 0 || isNaN(data14)){
+const err31 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data14};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -678,12 +680,134 @@ vErrors.push(err31);
 }
 errors++;
 }
+}
+else {
+const err32 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data14};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+if(data.shape !== undefined){
+let data15 = data.shape;
+if(!((((((data15 === "solidRound") || (data15 === "tubeHotFinished")) || (data15 === "tubeColdFormed")) || (data15 === "angle")) || (data15 === "rolledI")) || (data15 === "other"))){
+const err33 = {instancePath:instancePath+"/shape",schemaPath:"#/properties/shape/enum",keyword:"enum",params:{allowedValues: schema17.properties.shape.enum},message:"must be equal to one of the allowed values",schema:schema17.properties.shape.enum,parentSchema:schema17.properties.shape,data:data15};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+if(data.bucklingCurve !== undefined){
+let data16 = data.bucklingCurve;
+if(!(((((data16 === "a0") || (data16 === "a")) || (data16 === "b")) || (data16 === "c")) || (data16 === "d"))){
+const err34 = {instancePath:instancePath+"/bucklingCurve",schemaPath:"#/properties/bucklingCurve/enum",keyword:"enum",params:{allowedValues: schema17.properties.bucklingCurve.enum},message:"must be equal to one of the allowed values",schema:schema17.properties.bucklingCurve.enum,parentSchema:schema17.properties.bucklingCurve,data:data16};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+if(data.radiusOfGyration !== undefined){
+let data17 = data.radiusOfGyration;
+if((typeof data17 == "number") && (isFinite(data17))){
+if(data17 <= 0 || isNaN(data17)){
+const err35 = {instancePath:instancePath+"/radiusOfGyration",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data17};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+}
+else {
+const err36 = {instancePath:instancePath+"/radiusOfGyration",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data17};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+if(data.termination !== undefined){
+let data18 = data.termination;
+if(!((((((data18 === "socketMetal") || (data18 === "socketResin")) || (data18 === "swaged")) || (data18 === "wedgeSocket")) || (data18 === "clips")) || (data18 === "preformedGrip"))){
+const err37 = {instancePath:instancePath+"/termination",schemaPath:"#/properties/termination/enum",keyword:"enum",params:{allowedValues: schema17.properties.termination.enum},message:"must be equal to one of the allowed values",schema:schema17.properties.termination.enum,parentSchema:schema17.properties.termination,data:data18};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+if(data.terminationEfficiency !== undefined){
+let data19 = data.terminationEfficiency;
+if((typeof data19 == "number") && (isFinite(data19))){
+if(data19 > 1 || isNaN(data19)){
+const err38 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema17.properties.terminationEfficiency,data:data19};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
+}
+errors++;
+}
+if(data19 <= 0 || isNaN(data19)){
+const err39 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema17.properties.terminationEfficiency,data:data19};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+}
+else {
+const err40 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema17.properties.terminationEfficiency.type,parentSchema:schema17.properties.terminationEfficiency,data:data19};
+if(vErrors === null){
+vErrors = [err40];
+}
+else {
+vErrors.push(err40);
+}
+errors++;
+}
+}
+}
+else {
+const err41 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema17.type,parentSchema:schema17,data};
+if(vErrors === null){
+vErrors = [err41];
+}
+else {
+vErrors.push(err41);
+}
+errors++;
+}
 validate15.errors = vErrors;
 return errors === 0;
 }
 
-const schema24 = {"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
-const schema29 = {"type":"array","items":{"$ref":"#/definitions/id"}};
+const schema26 = {"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"$ref":"#/definitions/positive"}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
+const schema31 = {"type":"array","items":{"$ref":"#/definitions/id"}};
 
 function validate18(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -717,7 +841,7 @@ errors++;
 }
 }
 else {
-const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema29.type,parentSchema:schema29,data};
+const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema31.type,parentSchema:schema31,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -751,7 +875,7 @@ errors++;
 }
 var valid0 = _errs2 === errors;
 if(valid0){
-const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema24.not,parentSchema:schema24,data};
+const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema26.not,parentSchema:schema26,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -773,7 +897,7 @@ vErrors = null;
 }
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema26.required,parentSchema:schema26,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -783,7 +907,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.kind === undefined){
-const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema26.required,parentSchema:schema26,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -793,7 +917,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.from === undefined){
-const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema26.required,parentSchema:schema26,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -803,7 +927,7 @@ vErrors.push(err4);
 errors++;
 }
 if(data.to === undefined){
-const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema26.required,parentSchema:schema26,data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -813,7 +937,7 @@ vErrors.push(err5);
 errors++;
 }
 if(data.section === undefined){
-const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema24.required,parentSchema:schema24,data};
+const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema26.required,parentSchema:schema26,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -823,8 +947,8 @@ vErrors.push(err6);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema24.properties, key0))){
-const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema24,data};
+if(!(func2.call(schema26.properties, key0))){
+const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema26,data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -862,7 +986,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!((data1 === "cable") || (data1 === "bar"))){
-const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema24.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema24.properties.kind.enum,parentSchema:schema24.properties.kind,data:data1};
+const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema26.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema26.properties.kind.enum,parentSchema:schema26.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -950,7 +1074,7 @@ errors++;
 if(data.segments !== undefined){
 let data5 = data.segments;
 if(!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))){
-const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema24.properties.segments.type,parentSchema:schema24.properties.segments,data:data5};
+const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema26.properties.segments.type,parentSchema:schema26.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -961,7 +1085,7 @@ errors++;
 }
 if((typeof data5 == "number") && (isFinite(data5))){
 if(data5 < 1 || isNaN(data5)){
-const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema24.properties.segments,data:data5};
+const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema26.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -975,7 +1099,7 @@ errors++;
 if(data.pretension !== undefined){
 let data6 = data.pretension;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err19 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.pretension.type,parentSchema:schema24.properties.pretension,data:data6};
+const err19 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.properties.pretension.type,parentSchema:schema26.properties.pretension,data:data6};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -988,7 +1112,7 @@ errors++;
 if(data.unstressedLength !== undefined){
 let data7 = data.unstressedLength;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err20 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema24.properties.unstressedLength.type,parentSchema:schema24.properties.unstressedLength,data:data7};
+const err20 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.properties.unstressedLength.type,parentSchema:schema26.properties.unstressedLength,data:data7};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -1007,7 +1131,7 @@ errors = vErrors.length;
 if(data.generatedBy !== undefined){
 let data9 = data.generatedBy;
 if(typeof data9 !== "string"){
-const err21 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema24.properties.generatedBy.type,parentSchema:schema24.properties.generatedBy,data:data9};
+const err21 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema26.properties.generatedBy.type,parentSchema:schema26.properties.generatedBy,data:data9};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1017,9 +1141,11 @@ vErrors.push(err21);
 errors++;
 }
 }
-}
-else {
-const err22 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema24.type,parentSchema:schema24,data};
+if(data.terminationEfficiency !== undefined){
+let data10 = data.terminationEfficiency;
+if((typeof data10 == "number") && (isFinite(data10))){
+if(data10 > 1 || isNaN(data10)){
+const err22 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema26.properties.terminationEfficiency,data:data10};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -1028,19 +1154,78 @@ vErrors.push(err22);
 }
 errors++;
 }
+if(data10 <= 0 || isNaN(data10)){
+const err23 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema26.properties.terminationEfficiency,data:data10};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+}
+else {
+const err24 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema26.properties.terminationEfficiency.type,parentSchema:schema26.properties.terminationEfficiency,data:data10};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+}
+if(data.bucklingLength !== undefined){
+let data11 = data.bucklingLength;
+if((typeof data11 == "number") && (isFinite(data11))){
+if(data11 <= 0 || isNaN(data11)){
+const err25 = {instancePath:instancePath+"/bucklingLength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data11};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+}
+else {
+const err26 = {instancePath:instancePath+"/bucklingLength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data11};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+}
+}
+else {
+const err27 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema26.type,parentSchema:schema26,data};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
 validate17.errors = vErrors;
 return errors === 0;
 }
 
-const schema31 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"}}};
-const schema33 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}};
+const schema34 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"purpose":{"$ref":"#/definitions/casePurpose"},"action":{"enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"}}};
+const schema48 = {"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"};
+const schema36 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"}}};
 
 function validate22(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.node === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema33.required,parentSchema:schema33,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema36.required,parentSchema:schema36,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1050,7 +1235,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.force === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema33.required,parentSchema:schema33,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema36.required,parentSchema:schema36,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1061,7 +1246,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((key0 === "node") || (key0 === "force"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema33,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema36,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1147,7 +1332,7 @@ errors++;
 }
 }
 else {
-const err9 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema33.type,parentSchema:schema33,data};
+const err9 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema36.type,parentSchema:schema36,data};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -1160,15 +1345,15 @@ validate22.errors = vErrors;
 return errors === 0;
 }
 
-const schema36 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
-const schema38 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
+const schema39 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema41 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
 
 function validate25(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.required,parentSchema:schema38,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema41.required,parentSchema:schema41,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1182,7 +1367,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "power"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.oneOf[0].required,parentSchema:schema38.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema41.oneOf[0].required,parentSchema:schema41.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1192,7 +1377,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.exponent === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema38.oneOf[0].required,parentSchema:schema38.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema41.oneOf[0].required,parentSchema:schema41.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1203,7 +1388,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((key0 === "kind") || (key0 === "exponent"))){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema38.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema41.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1216,7 +1401,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("power" !== data0){
-const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema38.oneOf[0].properties.kind,data:data0};
+const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema41.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1253,7 +1438,7 @@ errors++;
 }
 }
 else {
-const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.oneOf[0].type,parentSchema:schema38.oneOf[0],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema41.oneOf[0].type,parentSchema:schema41.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1266,7 +1451,7 @@ errors++;
 else if(tag0 === "log"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.oneOf[1].required,parentSchema:schema38.oneOf[1],data};
+const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema41.oneOf[1].required,parentSchema:schema41.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1276,7 +1461,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data.roughnessLength === undefined){
-const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema38.oneOf[1].required,parentSchema:schema38.oneOf[1],data};
+const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema41.oneOf[1].required,parentSchema:schema41.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -1287,7 +1472,7 @@ errors++;
 }
 for(const key1 in data){
 if(!((key1 === "kind") || (key1 === "roughnessLength"))){
-const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema38.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema41.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -1300,7 +1485,7 @@ errors++;
 if(data.kind !== undefined){
 let data2 = data.kind;
 if("log" !== data2){
-const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema38.oneOf[1].properties.kind,data:data2};
+const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema41.oneOf[1].properties.kind,data:data2};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -1337,7 +1522,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.oneOf[1].type,parentSchema:schema38.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema41.oneOf[1].type,parentSchema:schema41.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -1350,7 +1535,7 @@ errors++;
 else if(tag0 === "uniform"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.oneOf[2].required,parentSchema:schema38.oneOf[2],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema41.oneOf[2].required,parentSchema:schema41.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -1361,7 +1546,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(key2 === "kind")){
-const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema38.oneOf[2],data};
+const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema41.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -1374,7 +1559,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("uniform" !== data4){
-const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema38.oneOf[2].properties.kind,data:data4};
+const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema41.oneOf[2].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -1386,7 +1571,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.oneOf[2].type,parentSchema:schema38.oneOf[2],data};
+const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema41.oneOf[2].type,parentSchema:schema41.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -1397,7 +1582,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema38.discriminator,parentSchema:schema38,data};
+const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema41.discriminator,parentSchema:schema41,data};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -1408,7 +1593,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema38.discriminator,parentSchema:schema38,data};
+const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema41.discriminator,parentSchema:schema41,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -1419,7 +1604,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.type,parentSchema:schema38,data};
+const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema41.type,parentSchema:schema41,data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1438,7 +1623,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.direction === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema36.required,parentSchema:schema36,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema39.required,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1448,7 +1633,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.speed === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema36.required,parentSchema:schema36,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema39.required,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1459,7 +1644,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "direction") || (key0 === "speed")) || (key0 === "profile")) || (key0 === "airDensity")) || (key0 === "groups"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema36,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1472,7 +1657,7 @@ errors++;
 if(data.direction !== undefined){
 let data0 = data.direction;
 if(!((typeof data0 == "number") && (isFinite(data0)))){
-const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema36.properties.direction.type,parentSchema:schema36.properties.direction,data:data0};
+const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema39.properties.direction.type,parentSchema:schema39.properties.direction,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1546,7 +1731,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema36.type,parentSchema:schema36,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema39.type,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1559,14 +1744,14 @@ validate24.errors = vErrors;
 return errors === 0;
 }
 
-const schema42 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema45 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
 
 function validate29(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.thickness === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema42.required,parentSchema:schema42,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema45.required,parentSchema:schema45,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1577,7 +1762,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "thickness") || (key0 === "density")) || (key0 === "groups"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema42,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema45,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1645,7 +1830,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema42.type,parentSchema:schema42,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema45.type,parentSchema:schema45,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1664,7 +1849,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema31.required,parentSchema:schema31,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema34.required,parentSchema:schema34,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1674,8 +1859,8 @@ vErrors.push(err0);
 errors++;
 }
 for(const key0 in data){
-if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "selfWeight")) || (key0 === "temperatureChange")) || (key0 === "nodalLoads")) || (key0 === "wind")) || (key0 === "ice"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema31,data};
+if(!(func2.call(schema34.properties, key0))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema34,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1713,7 +1898,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema31.properties.label.type,parentSchema:schema31.properties.label,data:data1};
+const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema34.properties.label.type,parentSchema:schema34.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1726,7 +1911,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data2 = data.selfWeight;
 if(typeof data2 !== "boolean"){
-const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema31.properties.selfWeight.type,parentSchema:schema31.properties.selfWeight,data:data2};
+const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema34.properties.selfWeight.type,parentSchema:schema34.properties.selfWeight,data:data2};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1739,7 +1924,7 @@ errors++;
 if(data.temperatureChange !== undefined){
 let data3 = data.temperatureChange;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema31.properties.temperatureChange.type,parentSchema:schema31.properties.temperatureChange,data:data3};
+const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema34.properties.temperatureChange.type,parentSchema:schema34.properties.temperatureChange,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1761,7 +1946,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema31.properties.nodalLoads.type,parentSchema:schema31.properties.nodalLoads,data:data4};
+const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema34.properties.nodalLoads.type,parentSchema:schema34.properties.nodalLoads,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1783,9 +1968,10 @@ vErrors = vErrors === null ? validate29.errors : vErrors.concat(validate29.error
 errors = vErrors.length;
 }
 }
-}
-else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema31.type,parentSchema:schema31,data};
+if(data.purpose !== undefined){
+let data8 = data.purpose;
+if(!((((data8 === "ultimate") || (data8 === "serviceability")) || (data8 === "accidental")) || (data8 === "componentOnly"))){
+const err8 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema48.enum},message:"must be equal to one of the allowed values",schema:schema48.enum,parentSchema:schema48,data:data8};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1794,18 +1980,43 @@ vErrors.push(err8);
 }
 errors++;
 }
+}
+if(data.action !== undefined){
+let data9 = data.action;
+if(!((((((data9 === "permanent") || (data9 === "wind")) || (data9 === "ice")) || (data9 === "iceWithWind")) || (data9 === "temperature")) || (data9 === "accidental"))){
+const err9 = {instancePath:instancePath+"/action",schemaPath:"#/properties/action/enum",keyword:"enum",params:{allowedValues: schema34.properties.action.enum},message:"must be equal to one of the allowed values",schema:schema34.properties.action.enum,parentSchema:schema34.properties.action,data:data9};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+}
+else {
+const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema34.type,parentSchema:schema34,data};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
 validate21.errors = vErrors;
 return errors === 0;
 }
 
-const schema45 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
+const schema49 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
 
 function validate33(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema45.required,parentSchema:schema45,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema49.required,parentSchema:schema49,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1815,7 +2026,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.members === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema45.required,parentSchema:schema45,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema49.required,parentSchema:schema49,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1826,7 +2037,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "label")) || (key0 === "members"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema45,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema49,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1864,7 +2075,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema45.properties.label.type,parentSchema:schema45.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema49.properties.label.type,parentSchema:schema49.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1882,7 +2093,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema45.type,parentSchema:schema45,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema49.type,parentSchema:schema49,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1895,14 +2106,14 @@ validate33.errors = vErrors;
 return errors === 0;
 }
 
-const schema47 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}};
+const schema51 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}};
 
 function validate36(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema47.required,parentSchema:schema47,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema51.required,parentSchema:schema51,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1912,7 +2123,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.factors === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema47.required,parentSchema:schema47,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema51.required,parentSchema:schema51,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1922,8 +2133,8 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!(((key0 === "id") || (key0 === "label")) || (key0 === "factors"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema47,data};
+if(!((((key0 === "id") || (key0 === "label")) || (key0 === "factors")) || (key0 === "purpose"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema51,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1961,7 +2172,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema47.properties.label.type,parentSchema:schema47.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema51.properties.label.type,parentSchema:schema51.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1975,7 +2186,7 @@ if(data.factors !== undefined){
 let data2 = data.factors;
 if(Array.isArray(data2)){
 if(data2.length < 1){
-const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema47.properties.factors,data:data2};
+const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema51.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1989,7 +2200,7 @@ for(let i0=0; i0<len0; i0++){
 let data3 = data2[i0];
 if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
 if(data3.case === undefined){
-const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema47.properties.factors.items.required,parentSchema:schema47.properties.factors.items,data:data3};
+const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema51.properties.factors.items.required,parentSchema:schema51.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1999,7 +2210,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data3.factor === undefined){
-const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema47.properties.factors.items.required,parentSchema:schema47.properties.factors.items,data:data3};
+const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema51.properties.factors.items.required,parentSchema:schema51.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2010,7 +2221,7 @@ errors++;
 }
 for(const key1 in data3){
 if(!((key1 === "case") || (key1 === "factor"))){
-const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema47.properties.factors.items,data:data3};
+const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema51.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2048,7 +2259,7 @@ errors++;
 if(data3.factor !== undefined){
 let data5 = data3.factor;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema47.properties.factors.items.properties.factor.type,parentSchema:schema47.properties.factors.items.properties.factor,data:data5};
+const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema51.properties.factors.items.properties.factor.type,parentSchema:schema51.properties.factors.items.properties.factor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2060,7 +2271,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema47.properties.factors.items.type,parentSchema:schema47.properties.factors.items,data:data3};
+const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema51.properties.factors.items.type,parentSchema:schema51.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2072,7 +2283,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema47.properties.factors.type,parentSchema:schema47.properties.factors,data:data2};
+const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema51.properties.factors.type,parentSchema:schema51.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2082,9 +2293,10 @@ vErrors.push(err14);
 errors++;
 }
 }
-}
-else {
-const err15 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema47.type,parentSchema:schema47,data};
+if(data.purpose !== undefined){
+let data6 = data.purpose;
+if(!((((data6 === "ultimate") || (data6 === "serviceability")) || (data6 === "accidental")) || (data6 === "componentOnly"))){
+const err15 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema48.enum},message:"must be equal to one of the allowed values",schema:schema48.enum,parentSchema:schema48,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -2093,18 +2305,30 @@ vErrors.push(err15);
 }
 errors++;
 }
+}
+}
+else {
+const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema51.type,parentSchema:schema51,data};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
 validate36.errors = vErrors;
 return errors === 0;
 }
 
-const schema50 = {"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}};
-const schema52 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
+const schema55 = {"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}};
+const schema57 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
 
 function validate40(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(!(data && typeof data == "object" && !Array.isArray(data))){
-const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.type,parentSchema:schema52,data};
+const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema57.type,parentSchema:schema57,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2119,7 +2343,7 @@ let passing0 = null;
 const _errs2 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.fractionOfSpan === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema52.oneOf[0].required,parentSchema:schema52.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema57.oneOf[0].required,parentSchema:schema57.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2130,7 +2354,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(key0 === "fractionOfSpan")){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema52.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema57.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2167,7 +2391,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.oneOf[0].type,parentSchema:schema52.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema57.oneOf[0].type,parentSchema:schema57.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2184,7 +2408,7 @@ passing0 = 0;
 const _errs9 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.absolute === undefined){
-const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema52.oneOf[1].required,parentSchema:schema52.oneOf[1],data};
+const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema57.oneOf[1].required,parentSchema:schema57.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2195,7 +2419,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(key1 === "absolute")){
-const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema52.oneOf[1],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema57.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2232,7 +2456,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.oneOf[1].type,parentSchema:schema52.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema57.oneOf[1].type,parentSchema:schema57.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2253,7 +2477,7 @@ passing0 = 1;
 }
 }
 if(!valid0){
-const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema52.oneOf,parentSchema:schema52,data};
+const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema57.oneOf,parentSchema:schema57,data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2283,48 +2507,13 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
-if(!((((((key0 === "resistanceFactor") || (key0 === "noSlackGroups")) || (key0 === "sagLimits")) || (key0 === "displacementLimits")) || (key0 === "tiltLimits")) || (key0 === "upliftNodes"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema50,data};
+if(!((((((((key0 === "noSlackGroups") || (key0 === "sagLimits")) || (key0 === "displacementLimits")) || (key0 === "tiltLimits")) || (key0 === "upliftNodes")) || (key0 === "minimumTension")) || (key0 === "memberDesign")) || (key0 === "twistLimits"))){
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err0];
 }
 else {
 vErrors.push(err0);
-}
-errors++;
-}
-}
-if(data.resistanceFactor !== undefined){
-let data0 = data.resistanceFactor;
-if((typeof data0 == "number") && (isFinite(data0))){
-if(data0 > 1 || isNaN(data0)){
-const err1 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema50.properties.resistanceFactor,data:data0};
-if(vErrors === null){
-vErrors = [err1];
-}
-else {
-vErrors.push(err1);
-}
-errors++;
-}
-if(data0 <= 0 || isNaN(data0)){
-const err2 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema50.properties.resistanceFactor,data:data0};
-if(vErrors === null){
-vErrors = [err2];
-}
-else {
-vErrors.push(err2);
-}
-errors++;
-}
-}
-else {
-const err3 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema50.properties.resistanceFactor.type,parentSchema:schema50.properties.resistanceFactor,data:data0};
-if(vErrors === null){
-vErrors = [err3];
-}
-else {
-vErrors.push(err3);
 }
 errors++;
 }
@@ -2336,14 +2525,49 @@ errors = vErrors.length;
 }
 }
 if(data.sagLimits !== undefined){
-let data2 = data.sagLimits;
-if(Array.isArray(data2)){
-const len0 = data2.length;
+let data1 = data.sagLimits;
+if(Array.isArray(data1)){
+const len0 = data1.length;
 for(let i0=0; i0<len0; i0++){
-let data3 = data2[i0];
-if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
-if(data3.group === undefined){
-const err4 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema50.properties.sagLimits.items.required,parentSchema:schema50.properties.sagLimits.items,data:data3};
+let data2 = data1[i0];
+if(data2 && typeof data2 == "object" && !Array.isArray(data2)){
+if(data2.group === undefined){
+const err1 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema55.properties.sagLimits.items.required,parentSchema:schema55.properties.sagLimits.items,data:data2};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+if(data2.limit === undefined){
+const err2 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema55.properties.sagLimits.items.required,parentSchema:schema55.properties.sagLimits.items,data:data2};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+for(const key1 in data2){
+if(!((key1 === "group") || (key1 === "limit"))){
+const err3 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema55.properties.sagLimits.items,data:data2};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data2.group !== undefined){
+let data3 = data2.group;
+if(typeof data3 === "string"){
+if(!pattern0.test(data3)){
+const err4 = {instancePath:instancePath+"/sagLimits/" + i0+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data3};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2352,8 +2576,9 @@ vErrors.push(err4);
 }
 errors++;
 }
-if(data3.limit === undefined){
-const err5 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema50.properties.sagLimits.items.required,parentSchema:schema50.properties.sagLimits.items,data:data3};
+}
+else {
+const err5 = {instancePath:instancePath+"/sagLimits/" + i0+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2362,9 +2587,16 @@ vErrors.push(err5);
 }
 errors++;
 }
-for(const key1 in data3){
-if(!((key1 === "group") || (key1 === "limit"))){
-const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.sagLimits.items,data:data3};
+}
+if(data2.limit !== undefined){
+if(!(validate40(data2.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data2,parentDataProperty:"limit",rootData}))){
+vErrors = vErrors === null ? validate40.errors : vErrors.concat(validate40.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.properties.sagLimits.items.type,parentSchema:schema55.properties.sagLimits.items,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2374,11 +2606,9 @@ vErrors.push(err6);
 errors++;
 }
 }
-if(data3.group !== undefined){
-let data4 = data3.group;
-if(typeof data4 === "string"){
-if(!pattern0.test(data4)){
-const err7 = {instancePath:instancePath+"/sagLimits/" + i0+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data4};
+}
+else {
+const err7 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema55.properties.sagLimits.type,parentSchema:schema55.properties.sagLimits,data:data1};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2388,8 +2618,15 @@ vErrors.push(err7);
 errors++;
 }
 }
-else {
-const err8 = {instancePath:instancePath+"/sagLimits/" + i0+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data4};
+if(data.displacementLimits !== undefined){
+let data5 = data.displacementLimits;
+if(Array.isArray(data5)){
+const len1 = data5.length;
+for(let i1=0; i1<len1; i1++){
+let data6 = data5[i1];
+if(data6 && typeof data6 == "object" && !Array.isArray(data6)){
+if(data6.node === undefined){
+const err8 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema55.properties.displacementLimits.items.required,parentSchema:schema55.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2398,16 +2635,8 @@ vErrors.push(err8);
 }
 errors++;
 }
-}
-if(data3.limit !== undefined){
-if(!(validate40(data3.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data3,parentDataProperty:"limit",rootData}))){
-vErrors = vErrors === null ? validate40.errors : vErrors.concat(validate40.errors);
-errors = vErrors.length;
-}
-}
-}
-else {
-const err9 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.sagLimits.items.type,parentSchema:schema50.properties.sagLimits.items,data:data3};
+if(data6.limit === undefined){
+const err9 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema55.properties.displacementLimits.items.required,parentSchema:schema55.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2416,10 +2645,9 @@ vErrors.push(err9);
 }
 errors++;
 }
-}
-}
-else {
-const err10 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.sagLimits.type,parentSchema:schema50.properties.sagLimits,data:data2};
+for(const key2 in data6){
+if(!(((key2 === "node") || (key2 === "limit")) || (key2 === "direction"))){
+const err10 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema55.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2429,15 +2657,11 @@ vErrors.push(err10);
 errors++;
 }
 }
-if(data.displacementLimits !== undefined){
-let data6 = data.displacementLimits;
-if(Array.isArray(data6)){
-const len1 = data6.length;
-for(let i1=0; i1<len1; i1++){
-let data7 = data6[i1];
-if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
-if(data7.node === undefined){
-const err11 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema50.properties.displacementLimits.items.required,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+if(data6.node !== undefined){
+let data7 = data6.node;
+if(typeof data7 === "string"){
+if(!pattern0.test(data7)){
+const err11 = {instancePath:instancePath+"/displacementLimits/" + i1+"/node",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data7};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2446,8 +2670,9 @@ vErrors.push(err11);
 }
 errors++;
 }
-if(data7.limit === undefined){
-const err12 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema50.properties.displacementLimits.items.required,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+}
+else {
+const err12 = {instancePath:instancePath+"/displacementLimits/" + i1+"/node",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2456,9 +2681,12 @@ vErrors.push(err12);
 }
 errors++;
 }
-for(const key2 in data7){
-if(!((key2 === "node") || (key2 === "limit"))){
-const err13 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+}
+if(data6.limit !== undefined){
+let data8 = data6.limit;
+if((typeof data8 == "number") && (isFinite(data8))){
+if(data8 <= 0 || isNaN(data8)){
+const err13 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data8};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2468,11 +2696,8 @@ vErrors.push(err13);
 errors++;
 }
 }
-if(data7.node !== undefined){
-let data8 = data7.node;
-if(typeof data8 === "string"){
-if(!pattern0.test(data8)){
-const err14 = {instancePath:instancePath+"/displacementLimits/" + i1+"/node",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data8};
+else {
+const err14 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data8};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2482,8 +2707,14 @@ vErrors.push(err14);
 errors++;
 }
 }
-else {
-const err15 = {instancePath:instancePath+"/displacementLimits/" + i1+"/node",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data8};
+if(data6.direction !== undefined){
+let data9 = data6.direction;
+const _errs27 = errors;
+let valid10 = false;
+let passing0 = null;
+const _errs28 = errors;
+if(!((data9 === "horizontal") || (data9 === "total"))){
+const err15 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf/0/enum",keyword:"enum",params:{allowedValues: schema55.properties.displacementLimits.items.properties.direction.oneOf[0].enum},message:"must be equal to one of the allowed values",schema:schema55.properties.displacementLimits.items.properties.direction.oneOf[0].enum,parentSchema:schema55.properties.displacementLimits.items.properties.direction.oneOf[0],data:data9};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -2492,12 +2723,15 @@ vErrors.push(err15);
 }
 errors++;
 }
+var _valid0 = _errs28 === errors;
+if(_valid0){
+valid10 = true;
+passing0 = 0;
 }
-if(data7.limit !== undefined){
-let data9 = data7.limit;
-if((typeof data9 == "number") && (isFinite(data9))){
-if(data9 <= 0 || isNaN(data9)){
-const err16 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data9};
+const _errs30 = errors;
+if(Array.isArray(data9)){
+if(data9.length > 3){
+const err16 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/definitions/vec3/maxItems",keyword:"maxItems",params:{limit: 3},message:"must NOT have more than 3 items",schema:3,parentSchema:schema16,data:data9};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -2506,9 +2740,8 @@ vErrors.push(err16);
 }
 errors++;
 }
-}
-else {
-const err17 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data9};
+if(data9.length < 3){
+const err17 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/definitions/vec3/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema16,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -2517,10 +2750,11 @@ vErrors.push(err17);
 }
 errors++;
 }
-}
-}
-else {
-const err18 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.displacementLimits.items.type,parentSchema:schema50.properties.displacementLimits.items,data:data7};
+const len2 = data9.length;
+for(let i2=0; i2<len2; i2++){
+let data10 = data9[i2];
+if(!((typeof data10 == "number") && (isFinite(data10)))){
+const err18 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction/" + i2,schemaPath:"#/definitions/vec3/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema16.items.type,parentSchema:schema16.items,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -2532,7 +2766,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.displacementLimits.type,parentSchema:schema50.properties.displacementLimits,data:data6};
+const err19 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/definitions/vec3/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema16.type,parentSchema:schema16,data:data9};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -2541,16 +2775,19 @@ vErrors.push(err19);
 }
 errors++;
 }
+var _valid0 = _errs30 === errors;
+if(_valid0 && valid10){
+valid10 = false;
+passing0 = [passing0, 1];
 }
-if(data.tiltLimits !== undefined){
-let data10 = data.tiltLimits;
-if(Array.isArray(data10)){
-const len2 = data10.length;
-for(let i2=0; i2<len2; i2++){
-let data11 = data10[i2];
-if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
-if(data11.base === undefined){
-const err20 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema50.properties.tiltLimits.items.required,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+else {
+if(_valid0){
+valid10 = true;
+passing0 = 1;
+}
+}
+if(!valid10){
+const err20 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema55.properties.displacementLimits.items.properties.direction.oneOf,parentSchema:schema55.properties.displacementLimits.items.properties.direction,data:data9};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -2559,8 +2796,21 @@ vErrors.push(err20);
 }
 errors++;
 }
-if(data11.top === undefined){
-const err21 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema50.properties.tiltLimits.items.required,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+else {
+errors = _errs27;
+if(vErrors !== null){
+if(_errs27){
+vErrors.length = _errs27;
+}
+else {
+vErrors = null;
+}
+}
+}
+}
+}
+else {
+const err21 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.properties.displacementLimits.items.type,parentSchema:schema55.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -2569,8 +2819,10 @@ vErrors.push(err21);
 }
 errors++;
 }
-if(data11.limit === undefined){
-const err22 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema50.properties.tiltLimits.items.required,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+}
+}
+else {
+const err22 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema55.properties.displacementLimits.type,parentSchema:schema55.properties.displacementLimits,data:data5};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -2579,9 +2831,16 @@ vErrors.push(err22);
 }
 errors++;
 }
-for(const key3 in data11){
-if(!(((key3 === "base") || (key3 === "top")) || (key3 === "limit"))){
-const err23 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+}
+if(data.tiltLimits !== undefined){
+let data11 = data.tiltLimits;
+if(Array.isArray(data11)){
+const len3 = data11.length;
+for(let i3=0; i3<len3; i3++){
+let data12 = data11[i3];
+if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
+if(data12.base === undefined){
+const err23 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema55.properties.tiltLimits.items.required,parentSchema:schema55.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -2590,12 +2849,8 @@ vErrors.push(err23);
 }
 errors++;
 }
-}
-if(data11.base !== undefined){
-let data12 = data11.base;
-if(typeof data12 === "string"){
-if(!pattern0.test(data12)){
-const err24 = {instancePath:instancePath+"/tiltLimits/" + i2+"/base",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data12};
+if(data12.top === undefined){
+const err24 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema55.properties.tiltLimits.items.required,parentSchema:schema55.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -2604,9 +2859,8 @@ vErrors.push(err24);
 }
 errors++;
 }
-}
-else {
-const err25 = {instancePath:instancePath+"/tiltLimits/" + i2+"/base",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data12};
+if(data12.limit === undefined){
+const err25 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema55.properties.tiltLimits.items.required,parentSchema:schema55.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -2615,12 +2869,9 @@ vErrors.push(err25);
 }
 errors++;
 }
-}
-if(data11.top !== undefined){
-let data13 = data11.top;
-if(typeof data13 === "string"){
-if(!pattern0.test(data13)){
-const err26 = {instancePath:instancePath+"/tiltLimits/" + i2+"/top",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data13};
+for(const key3 in data12){
+if(!(((key3 === "base") || (key3 === "top")) || (key3 === "limit"))){
+const err26 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema55.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -2630,8 +2881,11 @@ vErrors.push(err26);
 errors++;
 }
 }
-else {
-const err27 = {instancePath:instancePath+"/tiltLimits/" + i2+"/top",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data13};
+if(data12.base !== undefined){
+let data13 = data12.base;
+if(typeof data13 === "string"){
+if(!pattern0.test(data13)){
+const err27 = {instancePath:instancePath+"/tiltLimits/" + i3+"/base",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data13};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -2641,11 +2895,8 @@ vErrors.push(err27);
 errors++;
 }
 }
-if(data11.limit !== undefined){
-let data14 = data11.limit;
-if((typeof data14 == "number") && (isFinite(data14))){
-if(data14 <= 0 || isNaN(data14)){
-const err28 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data14};
+else {
+const err28 = {instancePath:instancePath+"/tiltLimits/" + i3+"/base",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data13};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -2655,8 +2906,11 @@ vErrors.push(err28);
 errors++;
 }
 }
-else {
-const err29 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data14};
+if(data12.top !== undefined){
+let data14 = data12.top;
+if(typeof data14 === "string"){
+if(!pattern0.test(data14)){
+const err29 = {instancePath:instancePath+"/tiltLimits/" + i3+"/top",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data14};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -2666,9 +2920,8 @@ vErrors.push(err29);
 errors++;
 }
 }
-}
 else {
-const err30 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.properties.tiltLimits.items.type,parentSchema:schema50.properties.tiltLimits.items,data:data11};
+const err30 = {instancePath:instancePath+"/tiltLimits/" + i3+"/top",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data14};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -2678,14 +2931,51 @@ vErrors.push(err30);
 errors++;
 }
 }
-}
-else {
-const err31 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.tiltLimits.type,parentSchema:schema50.properties.tiltLimits,data:data10};
+if(data12.limit !== undefined){
+let data15 = data12.limit;
+if((typeof data15 == "number") && (isFinite(data15))){
+if(data15 <= 0 || isNaN(data15)){
+const err31 = {instancePath:instancePath+"/tiltLimits/" + i3+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data15};
 if(vErrors === null){
 vErrors = [err31];
 }
 else {
 vErrors.push(err31);
+}
+errors++;
+}
+}
+else {
+const err32 = {instancePath:instancePath+"/tiltLimits/" + i3+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data15};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+}
+else {
+const err33 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.properties.tiltLimits.items.type,parentSchema:schema55.properties.tiltLimits.items,data:data12};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+}
+else {
+const err34 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema55.properties.tiltLimits.type,parentSchema:schema55.properties.tiltLimits,data:data11};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
 }
 errors++;
 }
@@ -2696,14 +2986,467 @@ vErrors = vErrors === null ? validate18.errors : vErrors.concat(validate18.error
 errors = vErrors.length;
 }
 }
-}
-else {
-const err32 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.type,parentSchema:schema50,data};
+if(data.minimumTension !== undefined){
+let data17 = data.minimumTension;
+if(Array.isArray(data17)){
+const len4 = data17.length;
+for(let i4=0; i4<len4; i4++){
+let data18 = data17[i4];
+if(data18 && typeof data18 == "object" && !Array.isArray(data18)){
+if(data18.group === undefined){
+const err35 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema55.properties.minimumTension.items.required,parentSchema:schema55.properties.minimumTension.items,data:data18};
 if(vErrors === null){
-vErrors = [err32];
+vErrors = [err35];
 }
 else {
-vErrors.push(err32);
+vErrors.push(err35);
+}
+errors++;
+}
+for(const key4 in data18){
+if(!(((key4 === "group") || (key4 === "shareOfInstallation")) || (key4 === "shareOfBreaking"))){
+const err36 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema55.properties.minimumTension.items,data:data18};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+if(data18.group !== undefined){
+let data19 = data18.group;
+if(typeof data19 === "string"){
+if(!pattern0.test(data19)){
+const err37 = {instancePath:instancePath+"/minimumTension/" + i4+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data19};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+else {
+const err38 = {instancePath:instancePath+"/minimumTension/" + i4+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data19};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
+}
+errors++;
+}
+}
+if(data18.shareOfInstallation !== undefined){
+let data20 = data18.shareOfInstallation;
+if((typeof data20 == "number") && (isFinite(data20))){
+if(data20 > 1 || isNaN(data20)){
+const err39 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema55.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+if(data20 <= 0 || isNaN(data20)){
+const err40 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema55.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
+if(vErrors === null){
+vErrors = [err40];
+}
+else {
+vErrors.push(err40);
+}
+errors++;
+}
+}
+else {
+const err41 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema55.properties.minimumTension.items.properties.shareOfInstallation.type,parentSchema:schema55.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
+if(vErrors === null){
+vErrors = [err41];
+}
+else {
+vErrors.push(err41);
+}
+errors++;
+}
+}
+if(data18.shareOfBreaking !== undefined){
+let data21 = data18.shareOfBreaking;
+if((typeof data21 == "number") && (isFinite(data21))){
+if(data21 > 1 || isNaN(data21)){
+const err42 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema55.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
+if(vErrors === null){
+vErrors = [err42];
+}
+else {
+vErrors.push(err42);
+}
+errors++;
+}
+if(data21 <= 0 || isNaN(data21)){
+const err43 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema55.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
+if(vErrors === null){
+vErrors = [err43];
+}
+else {
+vErrors.push(err43);
+}
+errors++;
+}
+}
+else {
+const err44 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema55.properties.minimumTension.items.properties.shareOfBreaking.type,parentSchema:schema55.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
+if(vErrors === null){
+vErrors = [err44];
+}
+else {
+vErrors.push(err44);
+}
+errors++;
+}
+}
+}
+else {
+const err45 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.properties.minimumTension.items.type,parentSchema:schema55.properties.minimumTension.items,data:data18};
+if(vErrors === null){
+vErrors = [err45];
+}
+else {
+vErrors.push(err45);
+}
+errors++;
+}
+}
+}
+else {
+const err46 = {instancePath:instancePath+"/minimumTension",schemaPath:"#/properties/minimumTension/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema55.properties.minimumTension.type,parentSchema:schema55.properties.minimumTension,data:data17};
+if(vErrors === null){
+vErrors = [err46];
+}
+else {
+vErrors.push(err46);
+}
+errors++;
+}
+}
+if(data.memberDesign !== undefined){
+let data22 = data.memberDesign;
+if(Array.isArray(data22)){
+const len5 = data22.length;
+for(let i5=0; i5<len5; i5++){
+let data23 = data22[i5];
+if(data23 && typeof data23 == "object" && !Array.isArray(data23)){
+if(data23.group === undefined){
+const err47 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema55.properties.memberDesign.items.required,parentSchema:schema55.properties.memberDesign.items,data:data23};
+if(vErrors === null){
+vErrors = [err47];
+}
+else {
+vErrors.push(err47);
+}
+errors++;
+}
+for(const key5 in data23){
+if(!(((((key5 === "group") || (key5 === "role")) || (key5 === "bucklingLengthFactor")) || (key5 === "bucklingLength")) || (key5 === "slendernessLimit"))){
+const err48 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema55.properties.memberDesign.items,data:data23};
+if(vErrors === null){
+vErrors = [err48];
+}
+else {
+vErrors.push(err48);
+}
+errors++;
+}
+}
+if(data23.group !== undefined){
+let data24 = data23.group;
+if(typeof data24 === "string"){
+if(!pattern0.test(data24)){
+const err49 = {instancePath:instancePath+"/memberDesign/" + i5+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data24};
+if(vErrors === null){
+vErrors = [err49];
+}
+else {
+vErrors.push(err49);
+}
+errors++;
+}
+}
+else {
+const err50 = {instancePath:instancePath+"/memberDesign/" + i5+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data24};
+if(vErrors === null){
+vErrors = [err50];
+}
+else {
+vErrors.push(err50);
+}
+errors++;
+}
+}
+if(data23.role !== undefined){
+let data25 = data23.role;
+if(!((((data25 === "leg") || (data25 === "bracing")) || (data25 === "redundant")) || (data25 === "other"))){
+const err51 = {instancePath:instancePath+"/memberDesign/" + i5+"/role",schemaPath:"#/properties/memberDesign/items/properties/role/enum",keyword:"enum",params:{allowedValues: schema55.properties.memberDesign.items.properties.role.enum},message:"must be equal to one of the allowed values",schema:schema55.properties.memberDesign.items.properties.role.enum,parentSchema:schema55.properties.memberDesign.items.properties.role,data:data25};
+if(vErrors === null){
+vErrors = [err51];
+}
+else {
+vErrors.push(err51);
+}
+errors++;
+}
+}
+if(data23.bucklingLengthFactor !== undefined){
+let data26 = data23.bucklingLengthFactor;
+if((typeof data26 == "number") && (isFinite(data26))){
+if(data26 <= 0 || isNaN(data26)){
+const err52 = {instancePath:instancePath+"/memberDesign/" + i5+"/bucklingLengthFactor",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data26};
+if(vErrors === null){
+vErrors = [err52];
+}
+else {
+vErrors.push(err52);
+}
+errors++;
+}
+}
+else {
+const err53 = {instancePath:instancePath+"/memberDesign/" + i5+"/bucklingLengthFactor",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data26};
+if(vErrors === null){
+vErrors = [err53];
+}
+else {
+vErrors.push(err53);
+}
+errors++;
+}
+}
+if(data23.bucklingLength !== undefined){
+let data27 = data23.bucklingLength;
+if((typeof data27 == "number") && (isFinite(data27))){
+if(data27 <= 0 || isNaN(data27)){
+const err54 = {instancePath:instancePath+"/memberDesign/" + i5+"/bucklingLength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data27};
+if(vErrors === null){
+vErrors = [err54];
+}
+else {
+vErrors.push(err54);
+}
+errors++;
+}
+}
+else {
+const err55 = {instancePath:instancePath+"/memberDesign/" + i5+"/bucklingLength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data27};
+if(vErrors === null){
+vErrors = [err55];
+}
+else {
+vErrors.push(err55);
+}
+errors++;
+}
+}
+if(data23.slendernessLimit !== undefined){
+let data28 = data23.slendernessLimit;
+if((typeof data28 == "number") && (isFinite(data28))){
+if(data28 <= 0 || isNaN(data28)){
+const err56 = {instancePath:instancePath+"/memberDesign/" + i5+"/slendernessLimit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data28};
+if(vErrors === null){
+vErrors = [err56];
+}
+else {
+vErrors.push(err56);
+}
+errors++;
+}
+}
+else {
+const err57 = {instancePath:instancePath+"/memberDesign/" + i5+"/slendernessLimit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data28};
+if(vErrors === null){
+vErrors = [err57];
+}
+else {
+vErrors.push(err57);
+}
+errors++;
+}
+}
+}
+else {
+const err58 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.properties.memberDesign.items.type,parentSchema:schema55.properties.memberDesign.items,data:data23};
+if(vErrors === null){
+vErrors = [err58];
+}
+else {
+vErrors.push(err58);
+}
+errors++;
+}
+}
+}
+else {
+const err59 = {instancePath:instancePath+"/memberDesign",schemaPath:"#/properties/memberDesign/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema55.properties.memberDesign.type,parentSchema:schema55.properties.memberDesign,data:data22};
+if(vErrors === null){
+vErrors = [err59];
+}
+else {
+vErrors.push(err59);
+}
+errors++;
+}
+}
+if(data.twistLimits !== undefined){
+let data29 = data.twistLimits;
+if(Array.isArray(data29)){
+const len6 = data29.length;
+for(let i6=0; i6<len6; i6++){
+let data30 = data29[i6];
+if(data30 && typeof data30 == "object" && !Array.isArray(data30)){
+if(data30.nodes === undefined){
+const err60 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema55.properties.twistLimits.items.required,parentSchema:schema55.properties.twistLimits.items,data:data30};
+if(vErrors === null){
+vErrors = [err60];
+}
+else {
+vErrors.push(err60);
+}
+errors++;
+}
+if(data30.limit === undefined){
+const err61 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema55.properties.twistLimits.items.required,parentSchema:schema55.properties.twistLimits.items,data:data30};
+if(vErrors === null){
+vErrors = [err61];
+}
+else {
+vErrors.push(err61);
+}
+errors++;
+}
+for(const key6 in data30){
+if(!((key6 === "nodes") || (key6 === "limit"))){
+const err62 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key6},message:"must NOT have additional properties",schema:false,parentSchema:schema55.properties.twistLimits.items,data:data30};
+if(vErrors === null){
+vErrors = [err62];
+}
+else {
+vErrors.push(err62);
+}
+errors++;
+}
+}
+if(data30.nodes !== undefined){
+let data31 = data30.nodes;
+if(Array.isArray(data31)){
+if(data31.length < 2){
+const err63 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema55.properties.twistLimits.items.properties.nodes,data:data31};
+if(vErrors === null){
+vErrors = [err63];
+}
+else {
+vErrors.push(err63);
+}
+errors++;
+}
+const len7 = data31.length;
+for(let i7=0; i7<len7; i7++){
+let data32 = data31[i7];
+if(typeof data32 === "string"){
+if(!pattern0.test(data32)){
+const err64 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes/" + i7,schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data32};
+if(vErrors === null){
+vErrors = [err64];
+}
+else {
+vErrors.push(err64);
+}
+errors++;
+}
+}
+else {
+const err65 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes/" + i7,schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data32};
+if(vErrors === null){
+vErrors = [err65];
+}
+else {
+vErrors.push(err65);
+}
+errors++;
+}
+}
+}
+else {
+const err66 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema55.properties.twistLimits.items.properties.nodes.type,parentSchema:schema55.properties.twistLimits.items.properties.nodes,data:data31};
+if(vErrors === null){
+vErrors = [err66];
+}
+else {
+vErrors.push(err66);
+}
+errors++;
+}
+}
+if(data30.limit !== undefined){
+let data33 = data30.limit;
+if((typeof data33 == "number") && (isFinite(data33))){
+if(data33 <= 0 || isNaN(data33)){
+const err67 = {instancePath:instancePath+"/twistLimits/" + i6+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data33};
+if(vErrors === null){
+vErrors = [err67];
+}
+else {
+vErrors.push(err67);
+}
+errors++;
+}
+}
+else {
+const err68 = {instancePath:instancePath+"/twistLimits/" + i6+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data33};
+if(vErrors === null){
+vErrors = [err68];
+}
+else {
+vErrors.push(err68);
+}
+errors++;
+}
+}
+}
+else {
+const err69 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.properties.twistLimits.items.type,parentSchema:schema55.properties.twistLimits.items,data:data30};
+if(vErrors === null){
+vErrors = [err69];
+}
+else {
+vErrors.push(err69);
+}
+errors++;
+}
+}
+}
+else {
+const err70 = {instancePath:instancePath+"/twistLimits",schemaPath:"#/properties/twistLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema55.properties.twistLimits.type,parentSchema:schema55.properties.twistLimits,data:data29};
+if(vErrors === null){
+vErrors = [err70];
+}
+else {
+vErrors.push(err70);
+}
+errors++;
+}
+}
+}
+else {
+const err71 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.type,parentSchema:schema55,data};
+if(vErrors === null){
+vErrors = [err71];
+}
+else {
+vErrors.push(err71);
 }
 errors++;
 }
@@ -2711,15 +3454,15 @@ validate38.errors = vErrors;
 return errors === 0;
 }
 
-const schema60 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
-const schema62 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
+const schema73 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
+const schema75 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
 
 function validate45(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.required,parentSchema:schema62,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema75.required,parentSchema:schema75,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2733,7 +3476,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "sag"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema75.oneOf[0].required,parentSchema:schema75.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2743,7 +3486,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.group === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema75.oneOf[0].required,parentSchema:schema75.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2753,7 +3496,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.case === undefined){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema75.oneOf[0].required,parentSchema:schema75.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2763,7 +3506,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.limit === undefined){
-const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema62.oneOf[0].required,parentSchema:schema62.oneOf[0],data};
+const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema75.oneOf[0].required,parentSchema:schema75.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2774,7 +3517,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "kind") || (key0 === "group")) || (key0 === "case")) || (key0 === "limit"))){
-const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema75.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2787,7 +3530,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("sag" !== data0){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema62.oneOf[0].properties.kind,data:data0};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema75.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2855,7 +3598,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[0].type,parentSchema:schema62.oneOf[0],data};
+const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema75.oneOf[0].type,parentSchema:schema75.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2868,7 +3611,7 @@ errors++;
 else if(tag0 === "tensionShare"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[1].required,parentSchema:schema62.oneOf[1],data};
+const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema75.oneOf[1].required,parentSchema:schema75.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2878,7 +3621,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data.group === undefined){
-const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema62.oneOf[1].required,parentSchema:schema62.oneOf[1],data};
+const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema75.oneOf[1].required,parentSchema:schema75.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2888,7 +3631,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data.share === undefined){
-const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema62.oneOf[1].required,parentSchema:schema62.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema75.oneOf[1].required,parentSchema:schema75.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2899,7 +3642,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(((key1 === "kind") || (key1 === "group")) || (key1 === "share"))){
-const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[1],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema75.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -2912,7 +3655,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("tensionShare" !== data4){
-const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema62.oneOf[1].properties.kind,data:data4};
+const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema75.oneOf[1].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -2974,7 +3717,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[1].type,parentSchema:schema62.oneOf[1],data};
+const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema75.oneOf[1].type,parentSchema:schema75.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -2987,7 +3730,7 @@ errors++;
 else if(tag0 === "noSlack"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[2].required,parentSchema:schema62.oneOf[2],data};
+const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema75.oneOf[2].required,parentSchema:schema75.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -2997,7 +3740,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data.group === undefined){
-const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema62.oneOf[2].required,parentSchema:schema62.oneOf[2],data};
+const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema75.oneOf[2].required,parentSchema:schema75.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -3007,7 +3750,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data.case === undefined){
-const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[2].required,parentSchema:schema62.oneOf[2],data};
+const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema75.oneOf[2].required,parentSchema:schema75.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -3018,7 +3761,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(((key2 === "kind") || (key2 === "group")) || (key2 === "case"))){
-const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[2],data};
+const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema75.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -3031,7 +3774,7 @@ errors++;
 if(data.kind !== undefined){
 let data7 = data.kind;
 if("noSlack" !== data7){
-const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema62.oneOf[2].properties.kind,data:data7};
+const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema75.oneOf[2].properties.kind,data:data7};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -3093,7 +3836,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[2].type,parentSchema:schema62.oneOf[2],data};
+const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema75.oneOf[2].type,parentSchema:schema75.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -3106,7 +3849,7 @@ errors++;
 else if(tag0 === "plumb"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema75.oneOf[3].required,parentSchema:schema75.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -3116,7 +3859,7 @@ vErrors.push(err32);
 errors++;
 }
 if(data.base === undefined){
-const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema75.oneOf[3].required,parentSchema:schema75.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -3126,7 +3869,7 @@ vErrors.push(err33);
 errors++;
 }
 if(data.top === undefined){
-const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema75.oneOf[3].required,parentSchema:schema75.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -3136,7 +3879,7 @@ vErrors.push(err34);
 errors++;
 }
 if(data.case === undefined){
-const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema75.oneOf[3].required,parentSchema:schema75.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -3146,7 +3889,7 @@ vErrors.push(err35);
 errors++;
 }
 if(data.tolerance === undefined){
-const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema62.oneOf[3].required,parentSchema:schema62.oneOf[3],data};
+const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema75.oneOf[3].required,parentSchema:schema75.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -3157,7 +3900,7 @@ errors++;
 }
 for(const key3 in data){
 if(!(((((key3 === "kind") || (key3 === "base")) || (key3 === "top")) || (key3 === "case")) || (key3 === "tolerance"))){
-const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[3],data};
+const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema75.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -3170,7 +3913,7 @@ errors++;
 if(data.kind !== undefined){
 let data10 = data.kind;
 if("plumb" !== data10){
-const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema62.oneOf[3].properties.kind,data:data10};
+const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema75.oneOf[3].properties.kind,data:data10};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -3282,7 +4025,7 @@ errors++;
 }
 }
 else {
-const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[3].type,parentSchema:schema62.oneOf[3],data};
+const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema75.oneOf[3].type,parentSchema:schema75.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -3295,7 +4038,7 @@ errors++;
 else if(tag0 === "reaction"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema75.oneOf[4].required,parentSchema:schema75.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -3305,7 +4048,7 @@ vErrors.push(err48);
 errors++;
 }
 if(data.node === undefined){
-const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema75.oneOf[4].required,parentSchema:schema75.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -3315,7 +4058,7 @@ vErrors.push(err49);
 errors++;
 }
 if(data.case === undefined){
-const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema75.oneOf[4].required,parentSchema:schema75.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -3325,7 +4068,7 @@ vErrors.push(err50);
 errors++;
 }
 if(data.limit === undefined){
-const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema62.oneOf[4].required,parentSchema:schema62.oneOf[4],data};
+const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema75.oneOf[4].required,parentSchema:schema75.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -3336,7 +4079,7 @@ errors++;
 }
 for(const key4 in data){
 if(!((((key4 === "kind") || (key4 === "node")) || (key4 === "case")) || (key4 === "limit"))){
-const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema62.oneOf[4],data};
+const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema75.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -3349,7 +4092,7 @@ errors++;
 if(data.kind !== undefined){
 let data15 = data.kind;
 if("reaction" !== data15){
-const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema62.oneOf[4].properties.kind,data:data15};
+const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema75.oneOf[4].properties.kind,data:data15};
 if(vErrors === null){
 vErrors = [err53];
 }
@@ -3412,7 +4155,7 @@ errors++;
 if(data.limit !== undefined){
 let data18 = data.limit;
 if(!((typeof data18 == "number") && (isFinite(data18)))){
-const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.oneOf[4].properties.limit.type,parentSchema:schema62.oneOf[4].properties.limit,data:data18};
+const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema75.oneOf[4].properties.limit.type,parentSchema:schema75.oneOf[4].properties.limit,data:data18};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -3424,7 +4167,7 @@ errors++;
 }
 }
 else {
-const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.oneOf[4].type,parentSchema:schema62.oneOf[4],data};
+const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema75.oneOf[4].type,parentSchema:schema75.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -3435,7 +4178,7 @@ errors++;
 }
 }
 else {
-const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema62.discriminator,parentSchema:schema62,data};
+const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema75.discriminator,parentSchema:schema75,data};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -3446,7 +4189,7 @@ errors++;
 }
 }
 else {
-const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema62.discriminator,parentSchema:schema62,data};
+const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema75.discriminator,parentSchema:schema75,data};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -3457,7 +4200,7 @@ errors++;
 }
 }
 else {
-const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.type,parentSchema:schema62,data};
+const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema75.type,parentSchema:schema75,data};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -3476,7 +4219,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.variables === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema60.required,parentSchema:schema60,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema73.required,parentSchema:schema73,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3486,7 +4229,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.targets === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema60.required,parentSchema:schema60,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema73.required,parentSchema:schema73,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3497,7 +4240,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "variables") || (key0 === "targets")) || (key0 === "lastRun"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema60,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema73,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3515,7 +4258,7 @@ for(let i0=0; i0<len0; i0++){
 let data1 = data0[i0];
 if(data1 && typeof data1 == "object" && !Array.isArray(data1)){
 if(data1.group === undefined){
-const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema60.properties.variables.items.required,parentSchema:schema60.properties.variables.items,data:data1};
+const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema73.properties.variables.items.required,parentSchema:schema73.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3525,7 +4268,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data1.by === undefined){
-const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema60.properties.variables.items.required,parentSchema:schema60.properties.variables.items,data:data1};
+const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema73.properties.variables.items.required,parentSchema:schema73.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3536,7 +4279,7 @@ errors++;
 }
 for(const key1 in data1){
 if(!((((key1 === "group") || (key1 === "by")) || (key1 === "min")) || (key1 === "max"))){
-const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema60.properties.variables.items,data:data1};
+const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema73.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3574,7 +4317,7 @@ errors++;
 if(data1.by !== undefined){
 let data3 = data1.by;
 if(!((data3 === "pretension") || (data3 === "unstressedLength"))){
-const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema60.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema60.properties.variables.items.properties.by.enum,parentSchema:schema60.properties.variables.items.properties.by,data:data3};
+const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema73.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema73.properties.variables.items.properties.by.enum,parentSchema:schema73.properties.variables.items.properties.by,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3587,7 +4330,7 @@ errors++;
 if(data1.min !== undefined){
 let data4 = data1.min;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema60.properties.variables.items.properties.min.type,parentSchema:schema60.properties.variables.items.properties.min,data:data4};
+const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema73.properties.variables.items.properties.min.type,parentSchema:schema73.properties.variables.items.properties.min,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3600,7 +4343,7 @@ errors++;
 if(data1.max !== undefined){
 let data5 = data1.max;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema60.properties.variables.items.properties.max.type,parentSchema:schema60.properties.variables.items.properties.max,data:data5};
+const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema73.properties.variables.items.properties.max.type,parentSchema:schema73.properties.variables.items.properties.max,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3612,7 +4355,7 @@ errors++;
 }
 }
 else {
-const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema60.properties.variables.items.type,parentSchema:schema60.properties.variables.items,data:data1};
+const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema73.properties.variables.items.type,parentSchema:schema73.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3624,7 +4367,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema60.properties.variables.type,parentSchema:schema60.properties.variables,data:data0};
+const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema73.properties.variables.type,parentSchema:schema73.properties.variables,data:data0};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -3646,7 +4389,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema60.properties.targets.type,parentSchema:schema60.properties.targets,data:data6};
+const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema73.properties.targets.type,parentSchema:schema73.properties.targets,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -3660,7 +4403,7 @@ if(data.lastRun !== undefined){
 let data8 = data.lastRun;
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 if(data8.date === undefined){
-const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema60.properties.lastRun.required,parentSchema:schema60.properties.lastRun,data:data8};
+const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema73.properties.lastRun.required,parentSchema:schema73.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -3670,7 +4413,7 @@ vErrors.push(err14);
 errors++;
 }
 if(data8.summary === undefined){
-const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema60.properties.lastRun.required,parentSchema:schema60.properties.lastRun,data:data8};
+const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema73.properties.lastRun.required,parentSchema:schema73.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3681,7 +4424,7 @@ errors++;
 }
 for(const key2 in data8){
 if(!((key2 === "date") || (key2 === "summary"))){
-const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema60.properties.lastRun,data:data8};
+const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema73.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -3694,7 +4437,7 @@ errors++;
 if(data8.date !== undefined){
 let data9 = data8.date;
 if(typeof data9 !== "string"){
-const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema60.properties.lastRun.properties.date.type,parentSchema:schema60.properties.lastRun.properties.date,data:data9};
+const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema73.properties.lastRun.properties.date.type,parentSchema:schema73.properties.lastRun.properties.date,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -3707,7 +4450,7 @@ errors++;
 if(data8.summary !== undefined){
 let data10 = data8.summary;
 if(typeof data10 !== "string"){
-const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema60.properties.lastRun.properties.summary.type,parentSchema:schema60.properties.lastRun.properties.summary,data:data10};
+const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema73.properties.lastRun.properties.summary.type,parentSchema:schema73.properties.lastRun.properties.summary,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -3719,7 +4462,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema60.properties.lastRun.type,parentSchema:schema60.properties.lastRun,data:data8};
+const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema73.properties.lastRun.type,parentSchema:schema73.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -3731,7 +4474,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema60.type,parentSchema:schema60,data};
+const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema73.type,parentSchema:schema73,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -3744,7 +4487,7 @@ validate44.errors = vErrors;
 return errors === 0;
 }
 
-const schema75 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
+const schema88 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
 
 function validate49(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -3752,7 +4495,7 @@ let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!(key0 === "temperatures")){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema75,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema88,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3793,7 +4536,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema75.properties.temperatures.type,parentSchema:schema75.properties.temperatures,data:data0};
+const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema88.properties.temperatures.type,parentSchema:schema88.properties.temperatures,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3805,7 +4548,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema75.type,parentSchema:schema75,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema88.type,parentSchema:schema88,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3818,14 +4561,14 @@ validate49.errors = vErrors;
 return errors === 0;
 }
 
-const schema77 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
+const schema90 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
 
 function validate51(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema77.required,parentSchema:schema77,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema90.required,parentSchema:schema90,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3835,7 +4578,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema77.required,parentSchema:schema77,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema90.required,parentSchema:schema90,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3845,7 +4588,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.params === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema77.required,parentSchema:schema77,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema90.required,parentSchema:schema90,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3856,7 +4599,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "kind")) || (key0 === "params"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema77,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema90,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3894,7 +4637,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "guyedMast") || (data1 === "saddleNet")) || (data1 === "radialNet"))){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema77.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema77.properties.kind.enum,parentSchema:schema77.properties.kind,data:data1};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema90.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema90.properties.kind.enum,parentSchema:schema90.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3907,7 +4650,7 @@ errors++;
 if(data.params !== undefined){
 let data2 = data.params;
 if(!(data2 && typeof data2 == "object" && !Array.isArray(data2))){
-const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema77.properties.params.type,parentSchema:schema77.properties.params,data:data2};
+const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema90.properties.params.type,parentSchema:schema90.properties.params,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3919,7 +4662,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema77.type,parentSchema:schema77,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema90.type,parentSchema:schema90,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3932,7 +4675,7 @@ validate51.errors = vErrors;
 return errors === 0;
 }
 
-const schema79 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
+const schema92 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
 
 function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -3940,7 +4683,7 @@ let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((key0 === "units") || (key0 === "deformationScale"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema79,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema92,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3953,7 +4696,7 @@ errors++;
 if(data.units !== undefined){
 let data0 = data.units;
 if(!((data0 === "SI") || (data0 === "US"))){
-const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema79.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema79.properties.units.enum,parentSchema:schema79.properties.units,data:data0};
+const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema92.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema92.properties.units.enum,parentSchema:schema92.properties.units,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3990,7 +4733,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema79.type,parentSchema:schema79,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema92.type,parentSchema:schema92,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -4000,6 +4743,675 @@ vErrors.push(err4);
 errors++;
 }
 validate53.errors = vErrors;
+return errors === 0;
+}
+
+const schema94 = {"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}};
+
+function validate55(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.format === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "format"},message:"must have required property '"+"format"+"'",schema:schema94.required,parentSchema:schema94,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(((((((key0 === "format") || (key0 === "label")) || (key0 === "actionFactors")) || (key0 === "combinationFactors")) || (key0 === "cable")) || (key0 === "steel")) || (key0 === "allowable"))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema94,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+}
+if(data.format !== undefined){
+let data0 = data.format;
+if(!((data0 === "limitState") || (data0 === "allowable"))){
+const err2 = {instancePath:instancePath+"/format",schemaPath:"#/properties/format/enum",keyword:"enum",params:{allowedValues: schema94.properties.format.enum},message:"must be equal to one of the allowed values",schema:schema94.properties.format.enum,parentSchema:schema94.properties.format,data:data0};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err3 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema94.properties.label.type,parentSchema:schema94.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.actionFactors !== undefined){
+let data2 = data.actionFactors;
+if(data2 && typeof data2 == "object" && !Array.isArray(data2)){
+for(const key1 in data2){
+if(!(((((((key1 === "permanent") || (key1 === "permanentFavourable")) || (key1 === "prestress")) || (key1 === "wind")) || (key1 === "ice")) || (key1 === "temperature")) || (key1 === "accidental"))){
+const err4 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema94.properties.actionFactors,data:data2};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data2.permanent !== undefined){
+let data3 = data2.permanent;
+if((typeof data3 == "number") && (isFinite(data3))){
+if(data3 <= 0 || isNaN(data3)){
+const err5 = {instancePath:instancePath+"/actionFactors/permanent",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data3};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+else {
+const err6 = {instancePath:instancePath+"/actionFactors/permanent",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data3};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+if(data2.permanentFavourable !== undefined){
+let data4 = data2.permanentFavourable;
+if((typeof data4 == "number") && (isFinite(data4))){
+if(data4 <= 0 || isNaN(data4)){
+const err7 = {instancePath:instancePath+"/actionFactors/permanentFavourable",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data4};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+else {
+const err8 = {instancePath:instancePath+"/actionFactors/permanentFavourable",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data4};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data2.prestress !== undefined){
+let data5 = data2.prestress;
+if((typeof data5 == "number") && (isFinite(data5))){
+if(data5 <= 0 || isNaN(data5)){
+const err9 = {instancePath:instancePath+"/actionFactors/prestress",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data5};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+else {
+const err10 = {instancePath:instancePath+"/actionFactors/prestress",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data5};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+}
+if(data2.wind !== undefined){
+let data6 = data2.wind;
+if((typeof data6 == "number") && (isFinite(data6))){
+if(data6 <= 0 || isNaN(data6)){
+const err11 = {instancePath:instancePath+"/actionFactors/wind",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data6};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+}
+else {
+const err12 = {instancePath:instancePath+"/actionFactors/wind",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data6};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+if(data2.ice !== undefined){
+let data7 = data2.ice;
+if((typeof data7 == "number") && (isFinite(data7))){
+if(data7 <= 0 || isNaN(data7)){
+const err13 = {instancePath:instancePath+"/actionFactors/ice",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data7};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+}
+else {
+const err14 = {instancePath:instancePath+"/actionFactors/ice",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data7};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+if(data2.temperature !== undefined){
+let data8 = data2.temperature;
+if((typeof data8 == "number") && (isFinite(data8))){
+if(data8 <= 0 || isNaN(data8)){
+const err15 = {instancePath:instancePath+"/actionFactors/temperature",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data8};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+else {
+const err16 = {instancePath:instancePath+"/actionFactors/temperature",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data8};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+}
+if(data2.accidental !== undefined){
+let data9 = data2.accidental;
+if((typeof data9 == "number") && (isFinite(data9))){
+if(data9 <= 0 || isNaN(data9)){
+const err17 = {instancePath:instancePath+"/actionFactors/accidental",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data9};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+}
+else {
+const err18 = {instancePath:instancePath+"/actionFactors/accidental",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data9};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+}
+}
+else {
+const err19 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema94.properties.actionFactors.type,parentSchema:schema94.properties.actionFactors,data:data2};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+}
+if(data.combinationFactors !== undefined){
+let data10 = data.combinationFactors;
+if(data10 && typeof data10 == "object" && !Array.isArray(data10)){
+for(const key2 in data10){
+if(!(((key2 === "wind") || (key2 === "ice")) || (key2 === "temperature"))){
+const err20 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema94.properties.combinationFactors,data:data10};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
+}
+errors++;
+}
+}
+if(data10.wind !== undefined){
+let data11 = data10.wind;
+if((typeof data11 == "number") && (isFinite(data11))){
+if(data11 > 1 || isNaN(data11)){
+const err21 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema94.properties.combinationFactors.properties.wind,data:data11};
+if(vErrors === null){
+vErrors = [err21];
+}
+else {
+vErrors.push(err21);
+}
+errors++;
+}
+if(data11 < 0 || isNaN(data11)){
+const err22 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema94.properties.combinationFactors.properties.wind,data:data11};
+if(vErrors === null){
+vErrors = [err22];
+}
+else {
+vErrors.push(err22);
+}
+errors++;
+}
+}
+else {
+const err23 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema94.properties.combinationFactors.properties.wind.type,parentSchema:schema94.properties.combinationFactors.properties.wind,data:data11};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+}
+if(data10.ice !== undefined){
+let data12 = data10.ice;
+if((typeof data12 == "number") && (isFinite(data12))){
+if(data12 > 1 || isNaN(data12)){
+const err24 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema94.properties.combinationFactors.properties.ice,data:data12};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+if(data12 < 0 || isNaN(data12)){
+const err25 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema94.properties.combinationFactors.properties.ice,data:data12};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+}
+else {
+const err26 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema94.properties.combinationFactors.properties.ice.type,parentSchema:schema94.properties.combinationFactors.properties.ice,data:data12};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+}
+if(data10.temperature !== undefined){
+let data13 = data10.temperature;
+if((typeof data13 == "number") && (isFinite(data13))){
+if(data13 > 1 || isNaN(data13)){
+const err27 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema94.properties.combinationFactors.properties.temperature,data:data13};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+if(data13 < 0 || isNaN(data13)){
+const err28 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema94.properties.combinationFactors.properties.temperature,data:data13};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
+}
+errors++;
+}
+}
+else {
+const err29 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema94.properties.combinationFactors.properties.temperature.type,parentSchema:schema94.properties.combinationFactors.properties.temperature,data:data13};
+if(vErrors === null){
+vErrors = [err29];
+}
+else {
+vErrors.push(err29);
+}
+errors++;
+}
+}
+}
+else {
+const err30 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema94.properties.combinationFactors.type,parentSchema:schema94.properties.combinationFactors,data:data10};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+}
+if(data.cable !== undefined){
+let data14 = data.cable;
+if(data14 && typeof data14 == "object" && !Array.isArray(data14)){
+for(const key3 in data14){
+if(!(((key3 === "breakingFactor") || (key3 === "partialFactor")) || (key3 === "serviceabilityShare"))){
+const err31 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema94.properties.cable,data:data14};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+}
+if(data14.breakingFactor !== undefined){
+let data15 = data14.breakingFactor;
+if((typeof data15 == "number") && (isFinite(data15))){
+if(data15 <= 0 || isNaN(data15)){
+const err32 = {instancePath:instancePath+"/cable/breakingFactor",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data15};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+else {
+const err33 = {instancePath:instancePath+"/cable/breakingFactor",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data15};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+if(data14.partialFactor !== undefined){
+let data16 = data14.partialFactor;
+if((typeof data16 == "number") && (isFinite(data16))){
+if(data16 <= 0 || isNaN(data16)){
+const err34 = {instancePath:instancePath+"/cable/partialFactor",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data16};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+else {
+const err35 = {instancePath:instancePath+"/cable/partialFactor",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data16};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+}
+if(data14.serviceabilityShare !== undefined){
+let data17 = data14.serviceabilityShare;
+if((typeof data17 == "number") && (isFinite(data17))){
+if(data17 > 1 || isNaN(data17)){
+const err36 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema94.properties.cable.properties.serviceabilityShare,data:data17};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+if(data17 <= 0 || isNaN(data17)){
+const err37 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema94.properties.cable.properties.serviceabilityShare,data:data17};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+else {
+const err38 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema94.properties.cable.properties.serviceabilityShare.type,parentSchema:schema94.properties.cable.properties.serviceabilityShare,data:data17};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
+}
+errors++;
+}
+}
+}
+else {
+const err39 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema94.properties.cable.type,parentSchema:schema94.properties.cable,data:data14};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+}
+if(data.steel !== undefined){
+let data18 = data.steel;
+if(data18 && typeof data18 == "object" && !Array.isArray(data18)){
+for(const key4 in data18){
+if(!((key4 === "gammaM0") || (key4 === "gammaM1"))){
+const err40 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema94.properties.steel,data:data18};
+if(vErrors === null){
+vErrors = [err40];
+}
+else {
+vErrors.push(err40);
+}
+errors++;
+}
+}
+if(data18.gammaM0 !== undefined){
+let data19 = data18.gammaM0;
+if((typeof data19 == "number") && (isFinite(data19))){
+if(data19 <= 0 || isNaN(data19)){
+const err41 = {instancePath:instancePath+"/steel/gammaM0",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data19};
+if(vErrors === null){
+vErrors = [err41];
+}
+else {
+vErrors.push(err41);
+}
+errors++;
+}
+}
+else {
+const err42 = {instancePath:instancePath+"/steel/gammaM0",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data19};
+if(vErrors === null){
+vErrors = [err42];
+}
+else {
+vErrors.push(err42);
+}
+errors++;
+}
+}
+if(data18.gammaM1 !== undefined){
+let data20 = data18.gammaM1;
+if((typeof data20 == "number") && (isFinite(data20))){
+if(data20 <= 0 || isNaN(data20)){
+const err43 = {instancePath:instancePath+"/steel/gammaM1",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema19,data:data20};
+if(vErrors === null){
+vErrors = [err43];
+}
+else {
+vErrors.push(err43);
+}
+errors++;
+}
+}
+else {
+const err44 = {instancePath:instancePath+"/steel/gammaM1",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema19.type,parentSchema:schema19,data:data20};
+if(vErrors === null){
+vErrors = [err44];
+}
+else {
+vErrors.push(err44);
+}
+errors++;
+}
+}
+}
+else {
+const err45 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema94.properties.steel.type,parentSchema:schema94.properties.steel,data:data18};
+if(vErrors === null){
+vErrors = [err45];
+}
+else {
+vErrors.push(err45);
+}
+errors++;
+}
+}
+if(data.allowable !== undefined){
+let data21 = data.allowable;
+if(data21 && typeof data21 == "object" && !Array.isArray(data21)){
+for(const key5 in data21){
+if(!((key5 === "cableSafetyFactor") || (key5 === "memberSafetyFactor"))){
+const err46 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema94.properties.allowable,data:data21};
+if(vErrors === null){
+vErrors = [err46];
+}
+else {
+vErrors.push(err46);
+}
+errors++;
+}
+}
+if(data21.cableSafetyFactor !== undefined){
+let data22 = data21.cableSafetyFactor;
+if((typeof data22 == "number") && (isFinite(data22))){
+if(data22 < 1 || isNaN(data22)){
+const err47 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema94.properties.allowable.properties.cableSafetyFactor,data:data22};
+if(vErrors === null){
+vErrors = [err47];
+}
+else {
+vErrors.push(err47);
+}
+errors++;
+}
+}
+else {
+const err48 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema94.properties.allowable.properties.cableSafetyFactor.type,parentSchema:schema94.properties.allowable.properties.cableSafetyFactor,data:data22};
+if(vErrors === null){
+vErrors = [err48];
+}
+else {
+vErrors.push(err48);
+}
+errors++;
+}
+}
+if(data21.memberSafetyFactor !== undefined){
+let data23 = data21.memberSafetyFactor;
+if((typeof data23 == "number") && (isFinite(data23))){
+if(data23 < 1 || isNaN(data23)){
+const err49 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema94.properties.allowable.properties.memberSafetyFactor,data:data23};
+if(vErrors === null){
+vErrors = [err49];
+}
+else {
+vErrors.push(err49);
+}
+errors++;
+}
+}
+else {
+const err50 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema94.properties.allowable.properties.memberSafetyFactor.type,parentSchema:schema94.properties.allowable.properties.memberSafetyFactor,data:data23};
+if(vErrors === null){
+vErrors = [err50];
+}
+else {
+vErrors.push(err50);
+}
+errors++;
+}
+}
+}
+else {
+const err51 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema94.properties.allowable.type,parentSchema:schema94.properties.allowable,data:data21};
+if(vErrors === null){
+vErrors = [err51];
+}
+else {
+vErrors.push(err51);
+}
+errors++;
+}
+}
+}
+else {
+const err52 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema94.type,parentSchema:schema94,data};
+if(vErrors === null){
+vErrors = [err52];
+}
+else {
+vErrors.push(err52);
+}
+errors++;
+}
+validate55.errors = vErrors;
 return errors === 0;
 }
 
@@ -4096,8 +5508,8 @@ errors++;
 }
 if(data.version !== undefined){
 let data1 = data.version;
-if(1 !== data1){
-const err8 = {instancePath:instancePath+"/version",schemaPath:"#/properties/version/const",keyword:"const",params:{allowedValue: 1},message:"must be equal to constant",schema:1,parentSchema:schema11.properties.version,data:data1};
+if(2 !== data1){
+const err8 = {instancePath:instancePath+"/version",schemaPath:"#/properties/version/const",keyword:"const",params:{allowedValue: 2},message:"must be equal to constant",schema:2,parentSchema:schema11.properties.version,data:data1};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -4318,6 +5730,12 @@ errors++;
 if(data.display !== undefined){
 if(!(validate53(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
 vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+errors = vErrors.length;
+}
+}
+if(data.designBasis !== undefined){
+if(!(validate55(data.designBasis, {instancePath:instancePath+"/designBasis",parentData:data,parentDataProperty:"designBasis",rootData}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
 }
