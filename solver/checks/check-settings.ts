@@ -1,6 +1,5 @@
 import type { ProjectFile } from '../project/types.ts';
 import { groupExists } from './groups.ts';
-import { cableResistanceDivisor, resolveDesignBasis } from './design-basis.ts';
 
 /** Thrown by runChecks when the check settings refer to things that do not exist or are invalid. */
 export class CheckInputError extends Error {
@@ -8,11 +7,6 @@ export class CheckInputError extends Error {
     super(`Check settings are invalid:\n  ${problems.join('\n  ')}`);
     this.name = 'CheckInputError';
   }
-}
-
-/** Share of the breaking load a cable may carry under the design basis: 1 / (resistance divisor). */
-export function resistanceFactorOf(project: ProjectFile): number {
-  return 1 / cableResistanceDivisor(resolveDesignBasis(project));
 }
 
 /** Problems with `project.checks`, each naming the entry: unknown groups/nodes, non-positive limits. */
@@ -40,6 +34,17 @@ export function checkSettingsProblems(project: ProjectFile): string[] {
   });
   (s.upliftNodes ?? []).forEach((n, i) => {
     if (!nodes.has(n)) out.push(`checks.upliftNodes[${i}]: node "${n}" does not exist`);
+  });
+  (s.minimumTension ?? []).forEach((r, i) => {
+    if (!groupExists(project, r.group)) out.push(`checks.minimumTension[${i}]: group "${r.group}" does not exist`);
+    if (r.shareOfInstallation === undefined && r.shareOfBreaking === undefined) out.push(`checks.minimumTension[${i}]: give shareOfInstallation and/or shareOfBreaking`);
+  });
+  (s.memberDesign ?? []).forEach((r, i) => {
+    if (!groupExists(project, r.group)) out.push(`checks.memberDesign[${i}]: group "${r.group}" does not exist`);
+  });
+  (s.twistLimits ?? []).forEach((l, i) => {
+    for (const n of l.nodes) if (!nodes.has(n)) out.push(`checks.twistLimits[${i}]: node "${n}" does not exist`);
+    if (!pos(l.limit)) out.push(`checks.twistLimits[${i}]: limit ${l.limit}° must be positive`);
   });
   return out;
 }

@@ -158,12 +158,12 @@ describe('design, checks, tuning and generators in the browser edition', () => {
     const edited: ProjectFile = setCableFactor(project, 8);
     const solved = solveProject(edited).report;
     const reference = runChecks(edited, solved);
-    const fail = reference.failures.find((f) => f.kind === 'utilisation')!;
+    const fail = reference.failures.find((f) => f.code === 'cableResistance')!;
     expect(fail).toBeDefined();
     // Hand check of the rule: utilisation = T max / (MBL / 8) > 1 for the worst member and case.
-    const member = project.members.find((m) => m.id === fail.id)!;
+    const member = project.members.find((m) => m.id === fail.item)!;
     const mbl = project.sections.find((x) => x.id === member.section)!.breakingLoad!;
-    const t = solved.cases.find((c) => c.id === fail.case)!.members.find((m) => m.id === fail.id)!.tensionMax;
+    const t = solved.cases.find((c) => c.id === fail.case)!.members.find((m) => m.id === fail.item)!.tensionMax;
     expect(t / (mbl / 8)).toBeCloseTo(fail.ratio!, 9);
     expect(t / (mbl / 8)).toBeGreaterThan(1);
     await expect.poll(() => page.getByTestId('check-verdict').textContent()).toBe('FAIL');
@@ -172,7 +172,7 @@ describe('design, checks, tuning and generators in the browser edition', () => {
     await page.getByTestId('check-summary').locator('table.failures tbody tr').first().click();
     await expect.poll(() => page.getByTestId('case-select').inputValue()).toBe(reference.failures[0].case);
     // The inspector comes to the front with the failing member.
-    await expect.poll(() => page.getByTestId('inspector').textContent()).toContain(`Member ${reference.failures[0].id}`);
+    await expect.poll(() => page.getByTestId('inspector').textContent()).toContain(`Member ${reference.failures[0].item}`);
     expect(await page.getByTestId('colour-mode').inputValue()).toBe('checks');
     await page.waitForTimeout(300);
     const png = await page.getByTestId('view3d-canvas').screenshot();
