@@ -3,8 +3,12 @@
  * The solver is pure TypeScript: no Node, Electron or DOM; it runs in Node, workers and browsers.
  */
 export type * from './project/types.ts';
+export type * from './project/site-types.ts';
 export type * from './results/types.ts';
 export type { AnalysisModel, MemberTopology } from './model/analysis-model.ts';
+export type { DofMap } from './model/dof-map.ts';
+export type { ElementFamily, FamilyBlock } from './elements/family.ts';
+export type { ShapeProperties, LatticeMastInput } from './sections/section-shapes.ts';
 export type { CaseLoads, FollowerLoad } from './loads/case-loads.ts';
 export type { SolveProgress, SolveControl } from './analysis/progress.ts';
 export * from './checks/index.ts';
@@ -23,6 +27,15 @@ export { solveCase } from './analysis/solve-case.ts';
 export { solveProject } from './analysis/solve-project.ts';
 export { DEFAULT_NEWTON_OPTIONS } from './analysis/newton.ts';
 export { memberSag, describeDof } from './results/extract.ts';
+export { lumpedMass } from './assembly/lumped-mass.ts';
+export { ELEMENT_FAMILIES } from './elements/registry.ts';
+export { dofOf } from './model/dof-map.ts';
+export { circularTube, solidRound, equalAngle, latticeMastEquivalent } from './sections/section-shapes.ts';
 export { SparseLDL, writeMatrixMarketSymmetric, writeMatrixMarketDenseVector } from './linalg/index.ts';
 export * from './tuning/index.ts';
 export * from './installation/index.ts';
+export * from './sequence/index.ts';
+export { estimateModelSize, checkModelBudget, DEFAULT_MODEL_BUDGET } from './model/model-budget.ts';
+export type { ModelBudget, ModelSizeEstimate, BudgetVerdict, BudgetItem, SizeDriver } from './model/model-budget.ts';
+export * from './asbuilt/index.ts';
+export * from './modes/index.ts';

@@ -11,7 +11,7 @@ export interface FailureTarget {
   caseId: string;
 }
 
-const MEMBER_CODES: readonly CheckCode[] = ['cableResistance', 'cableServiceTension', 'minimumTension', 'slack', 'sag', 'barTension', 'barBuckling', 'slenderness'];
+const MEMBER_CODES: readonly CheckCode[] = ['cableResistance', 'cableServiceTension', 'minimumTension', 'slack', 'sag', 'barTension', 'barBuckling', 'beamColumn', 'slenderness'];
 
 /** Member checks name a member, node checks a node, tilt "base→top", twist "a+b+…", notConverged only a case. */
 export function failureTarget(project: ProjectFile, f: CheckResult): FailureTarget {

@@ -22,6 +22,8 @@ export type CheckCode =
   | 'barTension'
   /** Bar: compression / N_b,Rd (flexural buckling). */
   | 'barBuckling'
+  /** Beam-column: N/N_Rd + M/M_Rd (linear interaction, beam-column.ts). */
+  | 'beamColumn'
   /** Bar: slenderness L_cr / i above its limit (checked once, not per case). */
   | 'slenderness'
   /** Node displacement (horizontal, total or along a direction) above its limit. */
@@ -63,7 +65,7 @@ export interface CheckResult {
 export interface CheckWarning {
   code:
     | 'noBreakingLoad' | 'noYieldStrength' | 'noRadiusOfGyration' | 'terminationNotSet' | 'defaultBasis'
-    | 'chordTensionUnsolved' | 'prestressFactorIgnored' | 'noServiceabilityCase' | 'noStrengthCase';
+    | 'chordTensionUnsolved' | 'prestressFactorIgnored' | 'noServiceabilityCase' | 'noStrengthCase' | 'noSectionModulus';
   items: string[];
 }
 

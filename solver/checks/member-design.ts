@@ -28,6 +28,10 @@ export interface CableDesign {
 export interface BarDesign {
   kind: 'bar';
   id: string;
+  /** True for beam-columns (kind "beam"): also checked for axial force and bending. */
+  beam: boolean;
+  /** Beams: M_Rd = W_el,min f_y / γ_M0 (or / Ω), N·m, W = min(Iy, Iz) / (diameter / 2); null without them. */
+  momentResistance: number | null;
   yieldStrength: number | null;
   area: number;
   /** N_t,Rd, N (null without f_y). */
@@ -58,6 +62,7 @@ export function terminationEfficiency(member: MemberSpec, section: SectionSpec |
 
 function radiusOfGyration(s: SectionSpec): number | null {
   if (s.radiusOfGyration !== undefined) return s.radiusOfGyration;
+  if (s.Iy !== undefined && s.Iz !== undefined && s.area > 0) return Math.sqrt(Math.min(s.Iy, s.Iz) / s.area);
   if (s.shape === 'solidRound') {
     // i = d/4 for a solid circle (I = π d⁴/64, A = π d²/4); d from the diameter or the area.
     const d = s.diameter ?? Math.sqrt((4 * s.area) / Math.PI);
@@ -101,8 +106,9 @@ export function memberDesigns(project: ProjectFile, basis: ResolvedBasis): Membe
     const chi = lambdaBar === null ? null : bucklingReduction(lambdaBar, IMPERFECTION_FACTOR[curve]);
     const g0 = allowable ? omega : basis.steel.gammaM0.value;
     const g1 = allowable ? omega : basis.steel.gammaM1.value;
+    const W = s?.Iy !== undefined && s.Iz !== undefined && s.diameter ? Math.min(s.Iy, s.Iz) / (s.diameter / 2) : null;
     return {
-      kind: 'bar', id: m.id, yieldStrength: fy, area,
+      kind: 'bar', id: m.id, beam: m.kind === 'beam', momentResistance: m.kind === 'beam' && W && fy ? (W * fy) / g0 : null, yieldStrength: fy, area,
       tensionResistance: fy ? (area * fy) / g0 : null,
       compressionResistance: fy && chi !== null ? (chi * area * fy) / g1 : null,
       systemLength, bucklingLength, radiusOfGyration: i, slenderness, slendernessLimit, lambdaBar, chi, curve, curveSource,

@@ -11,8 +11,9 @@ import { membersOfGroup, membersOfGroups } from './groups.ts';
 import { CABLE_DEFAULTS } from './basis-defaults.ts';
 import { referenceCaseId } from '../tuning/reference-case.ts';
 import { minimumTensionRules } from './minimum-tension.ts';
+import { beamColumnInteraction } from './beam-column.ts';
 
-const STRENGTH_CODES: readonly CheckCode[] = ['cableResistance', 'barTension', 'barBuckling'];
+const STRENGTH_CODES: readonly CheckCode[] = ['cableResistance', 'barTension', 'barBuckling', 'beamColumn'];
 const MEMBER_CODES: readonly CheckCode[] = [...STRENGTH_CODES, 'cableServiceTension', 'minimumTension', 'slack', 'sag', 'slenderness'];
 
 /**
@@ -81,7 +82,7 @@ export function runChecks(project: ProjectFile, report: SolveReport): CheckRepor
         const d = designs.get(m.id);
         if (!d) continue;
         if (what.strength) {
-          for (const r of strengthResults(d, m.tensionMax, m.tensionMin)) {
+          for (const r of strengthResults(d, m.tensionMax, m.tensionMin, m.beam?.maxBendingMoment)) {
             put(r);
             if (r.ratio! > cc.maxUtilisation) { cc.maxUtilisation = r.ratio!; cc.maxUtilisationMember = m.id; }
             const prev = use.get(m.id);
@@ -131,13 +132,19 @@ export function runChecks(project: ProjectFile, report: SolveReport): CheckRepor
   return assemble(project, report, basis, worst, use, cases, warnings);
 }
 
-function strengthResults(d: MemberDesign, tMax: number, tMin: number): Omit<CheckResult, 'format' | 'case' | 'purpose' | 'pass'>[] {
+function strengthResults(d: MemberDesign, tMax: number, tMin: number, moment?: number): Omit<CheckResult, 'format' | 'case' | 'purpose' | 'pass'>[] {
   const out: Omit<CheckResult, 'format' | 'case' | 'purpose' | 'pass'>[] = [];
   if (d.kind === 'cable') {
     if (d.resistance) out.push({ code: 'cableResistance', item: d.id, quantity: 'force', value: Math.max(0, tMax), limit: d.resistance, ratio: Math.max(0, tMax) / d.resistance, source: `${CABLE_DEFAULTS.breakingFactor.source}; k_e: ${d.efficiency.source}`, detail: { breakingLoad: d.breakingLoad ?? 0, ke: d.efficiency.value } });
     return out;
   }
   if (d.tensionResistance && tMax > 0) out.push({ code: 'barTension', item: d.id, quantity: 'force', value: tMax, limit: d.tensionResistance, ratio: tMax / d.tensionResistance, source: 'EN 1993-1-1 §6.2.3, N_pl,Rd = A f_y / γ_M0 (recalled, check against the standard)', detail: { fy: d.yieldStrength ?? 0, area: d.area } });
+  if (d.beam && d.momentResistance && moment !== undefined && d.tensionResistance && d.compressionResistance) {
+    // Largest bending moment at any element end about the weaker axis' modulus: conservative for both axes at once.
+    const axial = tMin < 0 ? tMin : tMax;
+    const r = beamColumnInteraction({ axial, momentsY: [moment], momentsZ: [] }, { tension: d.tensionResistance, compression: d.compressionResistance, momentY: d.momentResistance, momentZ: Infinity });
+    out.push({ code: 'beamColumn', item: d.id, quantity: 'ratio', value: r.ratio, limit: 1, ratio: r.ratio, source: 'linear interaction N/N_Rd + M/M_Rd, a conservative simplification of EN 1993-1-1 §6.3.3 (common practice)', detail: { axialShare: r.axialShare, bendingShare: r.bendingShareY, moment } });
+  }
   if (d.compressionResistance && tMin < 0) out.push({ code: 'barBuckling', item: d.id, quantity: 'force', value: -tMin, limit: d.compressionResistance, ratio: -tMin / d.compressionResistance, source: `EN 1993-1-1 §6.3.1 (6.47)–(6.50); curve ${d.curve}: ${d.curveSource}`, detail: { chi: d.chi ?? 0, lambdaBar: d.lambdaBar ?? 0, bucklingLength: d.bucklingLength, fy: d.yieldStrength ?? 0 } });
   return out;
 }
@@ -158,6 +165,7 @@ function collectWarnings(project: ProjectFile, defaulted: boolean, designs: Memb
   add('terminationNotSet', cables.filter((d) => d.breakingLoad !== null && d.efficiency.source.startsWith('not set')).map((d) => d.id));
   add('noYieldStrength', bars.filter((d) => d.yieldStrength === null).map((d) => d.id));
   add('noRadiusOfGyration', bars.filter((d) => d.yieldStrength !== null && d.radiusOfGyration === null).map((d) => d.id));
+  add('noSectionModulus', bars.filter((d) => d.kind === 'bar' && d.beam && d.yieldStrength !== null && d.momentResistance === null).map((d) => d.id));
   return w;
 }
 

@@ -15,8 +15,14 @@
 import type { ActionKind, BucklingCurve, CasePurpose, DesignBasis, MemberDesignRule, MinimumTensionRule, SectionShape, TerminationKind, TwistLimit } from './design-basis-types.ts';
 
 export type * from './design-basis-types.ts';
+import type { ReportSpec, SiteMeasurementSetSpec, TensioningSequenceSpec } from './site-types.ts';
+import type { BeamReleases, NodeSprings, PrescribedDisplacement, NodalMoment } from './structure-types.ts';
+import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec } from './actions-types.ts';
+
+export type * from './actions-types.ts';
 
 export type Vec3 = [number, number, number];
+export type * from './structure-types.ts';
 
 export interface ProjectFile {
   format: 'stayset-project';
@@ -42,6 +48,18 @@ export interface ProjectFile {
   display?: DisplaySettings;
   /** Check format and factors (design-basis-types.ts); absent = the limit-state defaults. */
   designBasis?: DesignBasis;
+  /** Tensioning sequences for the crew (solver/sequence). */
+  sequences?: TensioningSequenceSpec[];
+  /** Measurements taken on site, for the as-built back-analysis (solver/asbuilt). */
+  siteMeasurements?: SiteMeasurementSetSpec[];
+  /** Calculation report: document number and revision block. */
+  report?: ReportSpec;
+  /** Panels carrying area loads (solver/project/actions-types.ts). */
+  panels?: PanelSpec[];
+  /** Patch wind on guyed masts: a combination of results (actions-types.ts). */
+  patchWind?: PatchWindSpec[];
+  /** Member loss (guy rupture) accidental cases (actions-types.ts). */
+  memberLoss?: MemberLossSpec[];
 }
 
 export interface ProjectMeta {
@@ -58,8 +76,15 @@ export interface NodeSpec {
   id: string;
   /** Position [x, y, z], m. */
   at: Vec3;
-  /** Restrained translations: any of the letters x, y, z ("xyz" = pinned). Absent = free. */
+  /**
+   * Restrained directions: translations x, y, z and rotations rx, ry, rz (global axes), each at
+   * most once, written together: "xyz" = pinned, "xyzrxryrz" = clamped. Absent = free.
+   */
   fixed?: string;
+  /** Elastic supports (springs to ground), see NodeSprings. */
+  springs?: NodeSprings;
+  /** Added lumped mass at the node (equipment, antennas, fittings), kg: weighs with self-weight, vibrates in modes. */
+  mass?: number;
 }
 
 export interface SectionSpec {
@@ -93,8 +118,6 @@ export interface SectionSpec {
     share?: number;
   };
   label?: string;
-  /** Yield strength f_y, Pa (bars: tension yield and buckling checks). */
-  yieldStrength?: number;
   /** Shape, for the buckling-curve and radius-of-gyration defaults. */
   shape?: SectionShape;
   /** Buckling curve (EN 1993-1-1 Table 6.2); default from `shape`. */
@@ -105,18 +128,27 @@ export interface SectionSpec {
   termination?: TerminationKind;
   /** End-termination efficiency k_e (0..1], overrides `termination`. */
   terminationEfficiency?: number;
+  /** Shear modulus, Pa (beams). */
+  G?: number;
+  /** Second moments of area about the local y and z axes, m⁴ (beams). */
+  Iy?: number;
+  Iz?: number;
+  /** Torsion constant, m⁴ (beams). */
+  J?: number;
+  /** Yield strength, Pa. */
+  yieldStrength?: number;
 }
 
-export type MemberKind = 'cable' | 'bar';
+/** cable: tension-only; bar: tension and compression; beam: beam-column (axial, bending, torsion). */
+export type MemberKind = 'cable' | 'bar' | 'beam';
 
 export interface MemberSpec {
   id: string;
-  /** cable: tension-only; bar: tension and compression. */
   kind: MemberKind;
   from: string;
   to: string;
   section: string;
-  /** Number of elements the solver splits the member into. Default 1. */
+  /** Number of elements the solver splits the member into, 1 to 10,000. Default 1. */
   segments?: number;
   /** Axial force at the modelled geometry, N (positive = tension). Exclusive with unstressedLength. */
   pretension?: number;
@@ -130,12 +162,18 @@ export interface MemberSpec {
   terminationEfficiency?: number;
   /** Buckling length, m, overrides the member design rules. */
   bucklingLength?: number;
+  /** Beams: reference vector fixing the local y axis (its part normal to the member); see solver/elements/beam. */
+  orientation?: Vec3;
+  /** Beams: end releases (pins). */
+  releases?: BeamReleases;
 }
 
 export interface NodalLoadSpec {
   node: string;
   /** Force [Fx, Fy, Fz], N. */
   force: Vec3;
+  /** Moment, N·m (nodes with rotations only). */
+  moment?: NodalMoment;
 }
 
 export interface WindSpec {
@@ -182,6 +220,10 @@ export interface LoadCaseSpec {
   purpose?: CasePurpose;
   /** Which action the case represents, for the combination builder. */
   action?: ActionKind;
+  /** Prescribed support displacements in this case. */
+  displacements?: PrescribedDisplacement[];
+  /** Area loads on panels (actions-types.ts). */
+  areaLoads?: AreaLoadSpec[];
 }
 
 export interface GroupSpec {

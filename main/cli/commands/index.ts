@@ -5,6 +5,9 @@ import { checkCommand } from './check.ts';
 import { tuneCommand } from './tune.ts';
 import { scheduleCommand } from './schedule.ts';
 import { validateCommand } from './validate.ts';
+import { modesCommand } from './modes.ts';
+import { sequenceCommand } from './sequence.ts';
+import { asBuiltCommand } from './asbuilt.ts';
 import { combineCommand } from './combine.ts';
 
-export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, combineCommand];
+export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, sequenceCommand, asBuiltCommand, modesCommand, combineCommand];

@@ -15,6 +15,7 @@ export const CHECK_NAMES: Record<CheckCode, string> = {
   sag: 'sag',
   barTension: 'bar tension',
   barBuckling: 'bar buckling',
+  beamColumn: 'beam-column N + M',
   slenderness: 'slenderness',
   displacement: 'displacement',
   tilt: 'tilt',
@@ -80,6 +81,7 @@ export function warningText(w: CheckWarning): string {
     case 'chordTensionUnsolved': return `minimum tension judged on element forces only for ${some()} (the member catenary could not be solved)`;
     case 'prestressFactorIgnored': return `designBasis.actionFactors.prestress = ${w.items[0]} is not applied: every case starts from the installed pretension (factor 1)`;
     case 'noServiceabilityCase': return 'no case or combination has purpose serviceability: deformation, sag and minimum-tension limits were not checked';
+    case 'noSectionModulus': return `${w.items.length} beam(s) lack Iy, Iz or diameter for the section modulus and are not checked for bending (${some()})`;
     case 'noStrengthCase': return 'no case or combination is checked for strength (ultimate or accidental; any non-component case in the allowable format)';
   }
 }

@@ -5,6 +5,7 @@
  */
 import type { ScheduleUnits } from './schedule-units.ts';
 import type { CheckRow } from '../checks/check-text.ts';
+import type { MemberKind } from '../../../solver/index.ts';
 
 export const SCHEDULE_CAUTION = 'Results are for review by a qualified engineer; local codes and licensed practice govern.';
 
@@ -35,7 +36,7 @@ export interface ScheduleMemberRow {
   /** Group ids the member belongs to, comma-joined for display. */
   groups: string[];
   section: string;
-  kind: 'cable' | 'bar';
+  kind: MemberKind;
   /** Unstressed (cut) length, m; null when installation data is missing. */
   cutLength: number | null;
   /** Tension at the lower end in the reference state at T_ref, N. */
@@ -65,6 +66,8 @@ export interface ScheduleReactionRow {
   /** Force the support exerts on the structure [Fx, Fy, Fz], N. */
   force: [number, number, number];
   magnitude: number;
+  /** Moment the support exerts [Mx, My, Mz], N·m, where it restrains or springs a rotation. */
+  moment?: [number, number, number];
 }
 
 export interface ScheduleTuning {
