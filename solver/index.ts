@@ -12,7 +12,7 @@ export type { ShapeProperties, LatticeMastInput } from './sections/section-shape
 export type { CaseLoads, FollowerLoad } from './loads/case-loads.ts';
 export type { SolveProgress, SolveControl } from './analysis/progress.ts';
 export * from './checks/index.ts';
-export { DEFAULT_RESISTANCE_FACTOR, DEFAULT_GUY_PRETENSION_SHARE, DEFAULT_ICE_DENSITY, DEFAULT_AIR_DENSITY, DEFAULT_LATTICE_DRAG_FACTOR } from './loads/defaults.ts';
+export { DEFAULT_GUY_PRETENSION_SHARE, DEFAULT_ICE_DENSITY, DEFAULT_AIR_DENSITY, DEFAULT_LATTICE_DRAG_FACTOR } from './loads/defaults.ts';
 export type { CaseSolution, SolveCaseOptions } from './analysis/solve-case.ts';
 export type { Workspace } from './analysis/workspace.ts';
 export type { NewtonOptions } from './analysis/newton.ts';

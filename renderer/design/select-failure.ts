@@ -1,8 +1,9 @@
 /**
- * What clicking a check failure does: select the failing member or node (both nodes of a tilt
- * check "base→top"), show its governing case, and colour the 3D view by check outcome.
+ * What clicking a check result does: select the failing member or node (both nodes of a tilt
+ * check "base→top", every node of a twist set), show its governing case, and colour the 3D view
+ * by check outcome.
  */
-import type { CheckFailure, ProjectFile } from '../../solver/index.ts';
+import type { CheckCode, CheckResult, ProjectFile } from '../../solver/index.ts';
 
 export interface FailureTarget {
   kind: 'member' | 'node' | null;
@@ -10,14 +11,16 @@ export interface FailureTarget {
   caseId: string;
 }
 
-/** Member checks name a member, node checks a node, tilt "base→top", notConverged only a case. */
-export function failureTarget(project: ProjectFile, f: CheckFailure): FailureTarget {
-  if (f.kind === 'notConverged') return { kind: null, ids: [], caseId: f.case };
-  if (f.kind === 'tilt') {
-    const ids = f.id.split('→').filter((id) => project.nodes.some((n) => n.id === id));
+const MEMBER_CODES: readonly CheckCode[] = ['cableResistance', 'cableServiceTension', 'minimumTension', 'slack', 'sag', 'barTension', 'barBuckling', 'beamColumn', 'slenderness'];
+
+/** Member checks name a member, node checks a node, tilt "base→top", twist "a+b+…", notConverged only a case. */
+export function failureTarget(project: ProjectFile, f: CheckResult): FailureTarget {
+  if (f.code === 'notConverged') return { kind: null, ids: [], caseId: f.case };
+  if (f.code === 'tilt' || f.code === 'twist') {
+    const ids = f.item.split(f.code === 'tilt' ? '→' : '+').filter((id) => project.nodes.some((n) => n.id === id));
     return { kind: 'node', ids, caseId: f.case };
   }
-  const isMember = f.kind === 'utilisation' || f.kind === 'slack' || f.kind === 'sag';
+  const isMember = MEMBER_CODES.includes(f.code);
   const table = isMember ? project.members : project.nodes;
-  return { kind: isMember ? 'member' : 'node', ids: table.some((r) => r.id === f.id) ? [f.id] : [], caseId: f.case };
+  return { kind: isMember ? 'member' : 'node', ids: table.some((r) => r.id === f.item) ? [f.item] : [], caseId: f.case };
 }

@@ -1,6 +1,7 @@
 /**
- * Pure, immutable edits of project.checks (CheckSettings) for the check-settings bar: the
- * resistance factor φ and the values of the listed displacement and tilt limits.
+ * Pure, immutable edits of the check settings bar: the cable resistance factor of the design
+ * basis (allowable: safety factor on MBL; limit state: γ_R) and the values of the listed
+ * displacement and tilt limits.
  */
 import type { CheckSettings, ProjectFile } from '../../solver/index.ts';
 
@@ -8,10 +9,18 @@ function withChecks(project: ProjectFile, checks: CheckSettings): ProjectFile {
   return { ...project, checks };
 }
 
-/** φ in (0, 1]; utilisation = T / (φ · breaking load). */
-export function setResistanceFactor(project: ProjectFile, phi: number): ProjectFile {
-  if (!(phi > 0 && phi <= 1)) throw new Error(`checks.resistanceFactor: ${phi} must be above 0 and at most 1`);
-  return withChecks(project, { ...(project.checks ?? {}), resistanceFactor: phi });
+/**
+ * The cable factor of the design basis in use: allowable → allowable.cableSafetyFactor (≥ 1),
+ * limit state → cable.partialFactor γ_R (> 0). Without a designBasis the limit-state one is made.
+ */
+export function setCableFactor(project: ProjectFile, value: number): ProjectFile {
+  const basis = project.designBasis ?? { format: 'limitState' as const };
+  if (basis.format === 'allowable') {
+    if (!(value >= 1) || !Number.isFinite(value)) throw new Error(`designBasis.allowable.cableSafetyFactor: ${value} must be at least 1`);
+    return { ...project, designBasis: { ...basis, allowable: { ...basis.allowable, cableSafetyFactor: value } } };
+  }
+  if (!(value > 0) || !Number.isFinite(value)) throw new Error(`designBasis.cable.partialFactor: ${value} must be positive`);
+  return { ...project, designBasis: { ...basis, cable: { ...basis.cable, partialFactor: value } } };
 }
 
 /** Limit (m) of checks.displacementLimits[index]. */

@@ -7,7 +7,7 @@ import type { ProjectFile } from '../../solver/index.ts';
 
 export function blankProject(name: string): ProjectFile {
   return {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     meta: { name: name.trim() || 'New project', referenceTemperature: 288.15 },
     nodes: [], sections: [], members: [],
     loadCases: [{ id: 'dead', label: 'self-weight and pretension' }],

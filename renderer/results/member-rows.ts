@@ -4,6 +4,7 @@
  * φ; this column is the plain ratio) and the groups the member belongs to.
  */
 import type { CaseResult, ProjectFile } from '../../solver/index.ts';
+import { designsByMember, memberUtilisation } from '../../solver/index.ts';
 
 export interface MemberRow {
   id: string;
@@ -36,16 +37,16 @@ export function groupsByMember(project: ProjectFile): Map<string, string[]> {
 
 export function memberRows(project: ProjectFile, result: CaseResult): MemberRow[] {
   const groups = groupsByMember(project);
-  const section = new Map(project.members.map((m) => [m.id, m.section]));
-  const breaking = new Map(project.sections.map((s) => [s.id, s.breakingLoad]));
+  const designs = designsByMember(project);
   return result.members.map((r) => {
-    const b = breaking.get(section.get(r.id) ?? '');
+    const d = designs.get(r.id);
+    const u = d ? memberUtilisation(d, r.tensionMax, r.tensionMin) : null;
     return {
       id: r.id,
       group: (groups.get(r.id) ?? []).join(', '),
       tensionMax: r.tensionMax,
       tensionMin: r.tensionMin,
-      utilisation: b && b > 0 ? r.tensionMax / b : Number.NaN,
+      utilisation: u ?? Number.NaN,
       slack: r.slack,
       sag: r.sag,
     };

@@ -4,7 +4,7 @@ import { ref } from 'vue';
 import type { UnitSystem } from '../units/quantity-kinds.ts';
 
 /**
- * tension: members coloured by axial force; utilisation: by T max / breaking load; kind: by member
+ * tension: members coloured by axial force; utilisation: by design force / design resistance (solver memberUtilisation); kind: by member
  * kind; checks: by design-check outcome (pass / fail / not checked, slack in its own colour).
  */
 export type ColourMode = 'tension' | 'utilisation' | 'kind' | 'checks';

@@ -17,6 +17,7 @@
  * (sag × scale): a drawing aid only.
  */
 import type { CaseFields, CaseResult, ItemStatus, ProjectFile } from '../../solver/index.ts';
+import { designsByMember, memberUtilisation } from '../../solver/index.ts';
 import { CheckState, MemberState } from './colour-scale.ts';
 
 export interface SceneData {
@@ -100,7 +101,7 @@ export function buildSceneData(project: ProjectFile, options: SceneOptions): Sce
   const memberState = new Uint8Array(m);
   const memberValue = new Float64Array(m);
   const memberResults = result ? new Map(result.members.map((r) => [r.id, r])) : null;
-  const breaking = new Map(project.sections.map((s) => [s.id, s.breakingLoad ?? 0]));
+  const designs = options.colour === 'utilisation' ? designsByMember(project) : null;
   let lo = Infinity;
   let hi = -Infinity;
 
@@ -117,8 +118,8 @@ export function buildSceneData(project: ProjectFile, options: SceneOptions): Sce
       if (r.slack) memberState[j] = MemberState.Slack;
       else if (mb.kind !== 'cable' && r.tensionMax < 0) memberState[j] = MemberState.Compression;
       else memberState[j] = MemberState.Tension;
-      const b = breaking.get(mb.section) ?? 0;
-      memberValue[j] = options.colour === 'utilisation' ? (b > 0 ? r.tensionMax / b : 0) : r.tensionMax;
+      const d = designs?.get(mb.id);
+      memberValue[j] = designs ? (d ? memberUtilisation(d, r.tensionMax, r.tensionMin) ?? 0 : 0) : r.tensionMax;
       if (memberState[j] === MemberState.Tension) {
         lo = Math.min(lo, memberValue[j]);
         hi = Math.max(hi, memberValue[j]);

@@ -1,5 +1,4 @@
-import type { CheckSettings, ProjectFile } from '../project/types.ts';
-import { DEFAULT_RESISTANCE_FACTOR } from '../loads/defaults.ts';
+import type { ProjectFile } from '../project/types.ts';
 import { groupExists } from './groups.ts';
 
 /** Thrown by runChecks when the check settings refer to things that do not exist or are invalid. */
@@ -10,11 +9,6 @@ export class CheckInputError extends Error {
   }
 }
 
-/** Resistance factor φ in use (CheckSettings.resistanceFactor or DEFAULT_RESISTANCE_FACTOR). */
-export function resistanceFactorOf(settings: CheckSettings | undefined): number {
-  return settings?.resistanceFactor ?? DEFAULT_RESISTANCE_FACTOR;
-}
-
 /** Problems with `project.checks`, each naming the entry: unknown groups/nodes, non-positive limits. */
 export function checkSettingsProblems(project: ProjectFile): string[] {
   const s = project.checks;
@@ -22,9 +16,6 @@ export function checkSettingsProblems(project: ProjectFile): string[] {
   const out: string[] = [];
   const nodes = new Set(project.nodes.map((n) => n.id));
   const pos = (v: unknown) => typeof v === 'number' && Number.isFinite(v) && v > 0;
-  if (s.resistanceFactor !== undefined && !(pos(s.resistanceFactor) && s.resistanceFactor <= 1)) {
-    out.push(`checks.resistanceFactor: ${s.resistanceFactor} must be a number in (0, 1]`);
-  }
   (s.noSlackGroups ?? []).forEach((g, i) => {
     if (!groupExists(project, g)) out.push(`checks.noSlackGroups[${i}]: group "${g}" does not exist`);
   });
@@ -43,6 +34,17 @@ export function checkSettingsProblems(project: ProjectFile): string[] {
   });
   (s.upliftNodes ?? []).forEach((n, i) => {
     if (!nodes.has(n)) out.push(`checks.upliftNodes[${i}]: node "${n}" does not exist`);
+  });
+  (s.minimumTension ?? []).forEach((r, i) => {
+    if (!groupExists(project, r.group)) out.push(`checks.minimumTension[${i}]: group "${r.group}" does not exist`);
+    if (r.shareOfInstallation === undefined && r.shareOfBreaking === undefined) out.push(`checks.minimumTension[${i}]: give shareOfInstallation and/or shareOfBreaking`);
+  });
+  (s.memberDesign ?? []).forEach((r, i) => {
+    if (!groupExists(project, r.group)) out.push(`checks.memberDesign[${i}]: group "${r.group}" does not exist`);
+  });
+  (s.twistLimits ?? []).forEach((l, i) => {
+    for (const n of l.nodes) if (!nodes.has(n)) out.push(`checks.twistLimits[${i}]: node "${n}" does not exist`);
+    if (!pos(l.limit)) out.push(`checks.twistLimits[${i}]: limit ${l.limit}° must be positive`);
   });
   return out;
 }

@@ -1,7 +1,21 @@
-/** Design checks, groups and envelopes (pure). Re-exported by the solver barrel. */
+/** Design checks, design basis, groups and envelopes (pure). Re-exported by the solver barrel. */
 export { membersOfGroup, membersOfGroups, groupExists } from './groups.ts';
 export { envelopeOf } from './envelope.ts';
 export type { Envelope, MemberEnvelope, NodeEnvelope, ReactionEnvelope } from './envelope.ts';
 export { runChecks } from './run-checks.ts';
-export { CheckInputError, checkSettingsProblems, resistanceFactorOf } from './check-settings.ts';
+export { CheckInputError, checkSettingsProblems } from './check-settings.ts';
 export type * from './check-types.ts';
+export { resolveDesignBasis, cableResistanceDivisor, purposeOf, purposeOfCase, purposeOfCombination, checksFor, FROM_PROJECT } from './design-basis.ts';
+export type { ResolvedBasis } from './design-basis.ts';
+export type { Sourced } from './basis-defaults.ts';
+export { TERMINATION_EFFICIENCY, IMPERFECTION_FACTOR, IMPERFECTION_SOURCE, CURVE_OF_SHAPE, SLENDERNESS_LIMIT } from './basis-defaults.ts';
+export { memberDesigns, memberUtilisation, terminationEfficiency, designsByMember } from './member-design.ts';
+export type { MemberDesign, CableDesign, BarDesign } from './member-design.ts';
+export { bucklingReduction, bucklingReductionOfCurve, relativeSlenderness, lambda1 } from './buckling.ts';
+export { chordTension } from './chord-tension.ts';
+export type { ChordTension, ChordTensionInput } from './chord-tension.ts';
+export { buildCombinations, applyBuiltCombinations, GENERATED_PREFIX } from './combination-builder.ts';
+export type { BuiltCombinations, BuildOptions } from './combination-builder.ts';
+export { displacementAlong, twistOf } from './node-checks.ts';
+export { beamColumnInteraction } from './beam-column.ts';
+export type { BeamColumnForces, BeamColumnResistance, BeamColumnResult } from './beam-column.ts';

@@ -58,12 +58,6 @@ export const DEFAULT_PROFILE_MIN_HEIGHT = 2;
 export const DEFAULT_ICE_DENSITY = 900;
 
 /**
- * Resistance factor on minimum breaking load, φ: utilisation = T / (φ · MBL). Common practice:
- * a factor of safety of 2.0 on breaking load for guys and structural strand, φ = 1 / 2.0 = 0.5.
- */
-export const DEFAULT_RESISTANCE_FACTOR = 0.5;
-
-/**
  * Initial (installation) tension of generated guys as a share of their breaking load.
  * Common practice: guy initial tension about 10 % of breaking strength.
  */

@@ -1,5 +1,5 @@
 /**
- * The Stayset project file, format "stayset-project", version 1, as TypeScript types.
+ * The Stayset project file, format "stayset-project", version 2, as TypeScript types.
  *
  * Conventions (hold for every field below):
  * - SI base units inside the file: m, N, kg, Pa, 1/K, K, s. Temperatures that are absolute
@@ -12,6 +12,9 @@
  * runtime dependencies). Keep both in step.
  */
 
+import type { ActionKind, BucklingCurve, CasePurpose, DesignBasis, MemberDesignRule, MinimumTensionRule, SectionShape, TerminationKind, TwistLimit } from './design-basis-types.ts';
+
+export type * from './design-basis-types.ts';
 import type { ReportSpec, SiteMeasurementSetSpec, TensioningSequenceSpec } from './site-types.ts';
 import type { BeamReleases, NodeSprings, PrescribedDisplacement, NodalMoment } from './structure-types.ts';
 import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec } from './actions-types.ts';
@@ -23,7 +26,7 @@ export type * from './structure-types.ts';
 
 export interface ProjectFile {
   format: 'stayset-project';
-  version: 1;
+  version: 2;
   meta?: ProjectMeta;
   nodes: NodeSpec[];
   sections: SectionSpec[];
@@ -43,6 +46,8 @@ export interface ProjectFile {
   generators?: GeneratorRecord[];
   /** Display preferences; never affect results. */
   display?: DisplaySettings;
+  /** Check format and factors (design-basis-types.ts); absent = the limit-state defaults. */
+  designBasis?: DesignBasis;
   /** Tensioning sequences for the crew (solver/sequence). */
   sequences?: TensioningSequenceSpec[];
   /** Measurements taken on site, for the as-built back-analysis (solver/asbuilt). */
@@ -113,6 +118,16 @@ export interface SectionSpec {
     share?: number;
   };
   label?: string;
+  /** Shape, for the buckling-curve and radius-of-gyration defaults. */
+  shape?: SectionShape;
+  /** Buckling curve (EN 1993-1-1 Table 6.2); default from `shape`. */
+  bucklingCurve?: BucklingCurve;
+  /** Least radius of gyration, m (default for solid rounds: diameter / 4). */
+  radiusOfGyration?: number;
+  /** Cable end termination, for its efficiency factor k_e. */
+  termination?: TerminationKind;
+  /** End-termination efficiency k_e (0..1], overrides `termination`. */
+  terminationEfficiency?: number;
   /** Shear modulus, Pa (beams). */
   G?: number;
   /** Second moments of area about the local y and z axes, m⁴ (beams). */
@@ -143,6 +158,10 @@ export interface MemberSpec {
   groups?: string[];
   /** Set by a generator: which generator record made this member. */
   generatedBy?: string;
+  /** End-termination efficiency k_e (0..1], overrides the section's. */
+  terminationEfficiency?: number;
+  /** Buckling length, m, overrides the member design rules. */
+  bucklingLength?: number;
   /** Beams: reference vector fixing the local y axis (its part normal to the member); see solver/elements/beam. */
   orientation?: Vec3;
   /** Beams: end releases (pins). */
@@ -197,6 +216,10 @@ export interface LoadCaseSpec {
   nodalLoads?: NodalLoadSpec[];
   wind?: WindSpec;
   ice?: IceSpec;
+  /** What the case is checked for (absent = serviceability). */
+  purpose?: CasePurpose;
+  /** Which action the case represents, for the combination builder. */
+  action?: ActionKind;
   /** Prescribed support displacements in this case. */
   displacements?: PrescribedDisplacement[];
   /** Area loads on panels (actions-types.ts). */
@@ -214,23 +237,29 @@ export interface CombinationSpec {
   label?: string;
   /** Sum of factor × load case; self-weight, nodal loads, wind pressure and ΔT are all scaled. */
   factors: { case: string; factor: number }[];
+  /** What the combination is checked for (absent = ultimate). */
+  purpose?: CasePurpose;
 }
 
 /** Limit on sag: a fraction of the chord length, or an absolute length in m. */
 export type SagLimit = { fractionOfSpan: number } | { absolute: number };
 
 export interface CheckSettings {
-  /** Resistance factor φ applied to breaking load: utilisation = T / (φ · breakingLoad). */
-  resistanceFactor?: number;
   /** Member groups (or "*" for all cables) that must not go slack in any case. */
   noSlackGroups?: string[];
   sagLimits?: { group: string; limit: SagLimit }[];
-  /** Limit on the displacement magnitude of named nodes, m. */
-  displacementLimits?: { node: string; limit: number }[];
+  /** Limit on the displacement of named nodes, m: horizontal (default), total or along a direction. */
+  displacementLimits?: { node: string; limit: number; direction?: 'horizontal' | 'total' | Vec3 }[];
   /** Mast tilt: horizontal offset of `top` relative to `base` over their height, as a ratio. */
   tiltLimits?: { base: string; top: string; limit: number }[];
   /** Supports at which uplift (reaction along −z pulling the support up, Fz < 0) is flagged. */
   upliftNodes?: string[];
+  /** Minimum tension of cables per group (serviceability cases). */
+  minimumTension?: MinimumTensionRule[];
+  /** Buckling lengths, roles and slenderness limits of bars per group. */
+  memberDesign?: MemberDesignRule[];
+  /** Twist (rotation about the vertical) of node sets, degrees. */
+  twistLimits?: TwistLimit[];
 }
 
 /**

@@ -6,7 +6,7 @@
 import type { ProjectFile } from '../project/types.ts';
 import type { SettingMethod, TensioningSequenceSpec } from '../project/site-types.ts';
 import { groupExists, membersOfGroup } from '../checks/groups.ts';
-import { resistanceFactorOf } from '../checks/check-settings.ts';
+import { cableResistanceDivisor, resolveDesignBasis } from '../checks/design-basis.ts';
 import { DEFAULT_REFERENCE_TEMPERATURE } from '../loads/defaults.ts';
 
 /** Force tolerance band, fraction of the value. Common practice (±5 % on a jack or dynamometer reading). */
@@ -89,6 +89,6 @@ export function resolveSequence(project: ProjectFile, spec: TensioningSequenceSp
     plumb: spec.plumb ?? (tilt ? { base: tilt.base, top: tilt.top, limit: tilt.limit } : null),
     forceTolerance: spec.forceTolerance ?? DEFAULT_FORCE_TOLERANCE,
     lengthTolerance: spec.lengthTolerance ?? DEFAULT_LENGTH_TOLERANCE,
-    resistanceFactor: resistanceFactorOf(project.checks),
+    resistanceFactor: 1 / cableResistanceDivisor(resolveDesignBasis(project)),
   };
 }

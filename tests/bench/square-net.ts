@@ -24,7 +24,7 @@ export function squareNetProject(cells: number, options: { cell?: number; preten
     }
   }
   return {
-    format: 'stayset-project', version: 1, nodes,
+    format: 'stayset-project', version: 2, nodes,
     sections: [{ id: 'strand', E: 160e9, area: 1.5e-4, massPerLength: 1.2, breakingLoad: 180e3, diameter: 0.016 }],
     members,
     loadCases: [{ id: 'dead+load', selfWeight: true, nodalLoads: loads }],

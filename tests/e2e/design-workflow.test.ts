@@ -24,6 +24,7 @@ import { buildRenderer, REPO, SCREENSHOTS } from './serve-app.ts';
 import { pixelStats } from './pixels.ts';
 import { CHECK_FAIL_COLOUR } from '../../renderer/view3d/colour-scale.ts';
 import { defaultGuyedMast } from '../../renderer/generators/generator-defaults.ts';
+import { setCableFactor } from '../../renderer/model/check-settings-edits.ts';
 
 let root: string;
 let host: WebHost;
@@ -147,32 +148,32 @@ describe.skipIf(SKIP_BROWSER_TESTS)('design, checks, tuning and generators in th
     expect(await page.getByTestId('dirty-mark').count()).toBe(0);
   });
 
-  it('makes a check fail by lowering the resistance factor, clicks the failure and sees it selected in its case', async () => {
+  it('makes a check fail by raising the cable factor, clicks the failure and sees it selected in its case', async () => {
     await page.getByTestId('results-tab-checks').click();
-    const phi = page.getByTestId('resistance-factor');
-    await phi.fill('0.12');
-    await phi.press('Enter');
-    await phi.blur();
-    // φ = 0.12 is far below any real resistance factor: it only forces a failure (the demo's worst
+    const factor = page.getByTestId('cable-factor');
+    await factor.fill('8');
+    await factor.press('Enter');
+    await factor.blur();
+    // A cable factor of 8 is far above any real one: it only forces a failure (the demo's worst
     // T / MBL is about 0.14). Checks read the last results: no new analysis is needed.
-    const edited: ProjectFile = { ...project, checks: { ...project.checks, resistanceFactor: 0.12 } };
+    const edited: ProjectFile = setCableFactor(project, 8);
     const solved = solveProject(edited).report;
     const reference = runChecks(edited, solved);
-    const fail = reference.failures.find((f) => f.kind === 'utilisation')!;
+    const fail = reference.failures.find((f) => f.code === 'cableResistance')!;
     expect(fail).toBeDefined();
-    // Hand check of the rule: utilisation = T max / (φ · MBL) > 1 for the worst member and case.
-    const member = project.members.find((m) => m.id === fail.id)!;
+    // Hand check of the rule: utilisation = T max / (MBL / 8) > 1 for the worst member and case.
+    const member = project.members.find((m) => m.id === fail.item)!;
     const mbl = project.sections.find((x) => x.id === member.section)!.breakingLoad!;
-    const t = solved.cases.find((c) => c.id === fail.case)!.members.find((m) => m.id === fail.id)!.tensionMax;
-    expect(t / (0.12 * mbl)).toBeCloseTo(fail.ratio!, 9);
-    expect(t / (0.12 * mbl)).toBeGreaterThan(1);
+    const t = solved.cases.find((c) => c.id === fail.case)!.members.find((m) => m.id === fail.item)!.tensionMax;
+    expect(t / (mbl / 8)).toBeCloseTo(fail.ratio!, 9);
+    expect(t / (mbl / 8)).toBeGreaterThan(1);
     await expect.poll(() => page.getByTestId('check-verdict').textContent()).toBe('FAIL');
     expect(await statusText()).toContain(`checks: FAIL (${reference.failures.length})`);
     expect(await page.getByTestId('check-summary').locator('table.failures tbody tr').count()).toBe(reference.failures.length);
     await page.getByTestId('check-summary').locator('table.failures tbody tr').first().click();
     await expect.poll(() => page.getByTestId('case-select').inputValue()).toBe(reference.failures[0].case);
     // The inspector comes to the front with the failing member.
-    await expect.poll(() => page.getByTestId('inspector').textContent()).toContain(`Member ${reference.failures[0].id}`);
+    await expect.poll(() => page.getByTestId('inspector').textContent()).toContain(`Member ${reference.failures[0].item}`);
     expect(await page.getByTestId('colour-mode').inputValue()).toBe('checks');
     await page.waitForTimeout(300);
     const png = await page.getByTestId('view3d-canvas').screenshot();

@@ -9,7 +9,7 @@ import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { createPinia, setActivePinia } from 'pinia';
-import type { ProjectFile, SolveReport } from '../../solver/index.ts';
+import type { CheckResult, ProjectFile, SolveReport } from '../../solver/index.ts';
 import { createLiveResolver, runChecks, solveProject } from '../../solver/index.ts';
 import { buildSceneData } from '../../renderer/view3d/scene-data.ts';
 import { buildLineBuffers, memberColour } from '../../renderer/view3d/line-buffers.ts';
@@ -19,7 +19,7 @@ import { commitPretension, sliderGroups } from '../../renderer/tuning/tuning-edi
 import { useResultsStore } from '../../renderer/stores/results.ts';
 import { useChecksStore } from '../../renderer/stores/checks.ts';
 import { useProjectStore } from '../../renderer/stores/project.ts';
-import { setResistanceFactor } from '../../renderer/model/check-settings-edits.ts';
+import { setCableFactor } from '../../renderer/model/check-settings-edits.ts';
 
 const demo = JSON.parse(readFileSync(fileURLToPath(new URL('../../assets/demo-mast.stayset', import.meta.url)), 'utf8')) as ProjectFile;
 const LEVEL = 'mast/guys level 1';
@@ -31,8 +31,8 @@ beforeAll(() => {
 
 describe('checks in the 3D view', () => {
   it('colours exactly the members runChecks fails in the check-fail colour, unchecked in grey', () => {
-    // φ = 0.12 only forces failures (the demo's worst T / MBL is about 0.14).
-    const strict = setResistanceFactor(demo, 0.12);
+    // a cable factor of 8 only forces failures (the demo's worst T / MBL is about 0.14).
+    const strict = setCableFactor(demo, 8);
     const checks = runChecks(strict, report);
     const failing = new Set(checks.members.filter((m) => m.status === 'fail').map((m) => m.id));
     expect(failing.size).toBeGreaterThan(0);
@@ -59,7 +59,7 @@ describe('checks in the 3D view', () => {
   it('a failing tilt check marks both of its nodes as failed nodes of the scene', () => {
     const strict: ProjectFile = { ...demo, checks: { ...demo.checks, tiltLimits: [{ base: 'mast/base', top: 'mast/P49a', limit: 1e-7 }] } };
     const checks = runChecks(strict, report);
-    expect(checks.failures.some((f) => f.kind === 'tilt')).toBe(true);
+    expect(checks.failures.some((f) => f.code === 'tilt')).toBe(true);
     const data = buildSceneData(strict, {
       result: report.cases[1], deformationScale: 1, colour: 'checks',
       checks: { members: new Map(checks.members.map((m) => [m.id, m.status])), nodes: new Map(checks.nodes.map((n) => [n.id, n.status])) },
@@ -69,10 +69,12 @@ describe('checks in the 3D view', () => {
   });
 
   it('a tilt failure selects both nodes; a non-converged case only switches the case', () => {
-    const tilt = failureTarget(demo, { kind: 'tilt', id: 'mast/base→mast/P49a', case: 'wind 0', value: 0.02, limit: 0.01, ratio: 2, message: '' });
+    const res = (code: CheckResult['code'], item: string, c: string): CheckResult => ({ code, item, case: c, format: 'limitState', purpose: 'serviceability', quantity: 'ratio', value: 2, limit: 1, ratio: 2, pass: false, source: '' });
+    const tilt = failureTarget(demo, res('tilt', 'mast/base→mast/P49a', 'wind 0'));
     expect(tilt).toEqual({ kind: 'node', ids: ['mast/base', 'mast/P49a'], caseId: 'wind 0' });
-    expect(failureTarget(demo, { kind: 'notConverged', id: 'hot', case: 'hot', value: 0, limit: 0, ratio: null, message: '' })).toEqual({ kind: null, ids: [], caseId: 'hot' });
-    expect(failureTarget(demo, { kind: 'utilisation', id: 'mast/guy L1-1', case: 'cold', value: 1, limit: 1, ratio: 1, message: '' }).kind).toBe('member');
+    expect(failureTarget(demo, res('notConverged', 'hot', 'hot'))).toEqual({ kind: null, ids: [], caseId: 'hot' });
+    expect(failureTarget(demo, res('minimumTension', 'mast/guy L1-1', 'cold')).kind).toBe('member');
+    expect(failureTarget(demo, res('twist', 'mast/base+mast/P49a', 'cold')).ids).toEqual(['mast/base', 'mast/P49a']);
   });
 });
 
@@ -125,7 +127,7 @@ describe('results store with a live case', () => {
   });
 
   it('checks follow the live case: the same verdict as checking the committed, re-solved project', () => {
-    const tuned: ProjectFile = { ...demo, checks: { ...demo.checks, resistanceFactor: 0.3 }, tuning: { variables: [{ group: LEVEL, by: 'pretension' }], targets: [] } };
+    const tuned: ProjectFile = { ...demo, designBasis: { format: 'allowable', allowable: { cableSafetyFactor: 1 / 0.3 } }, tuning: { variables: [{ group: LEVEL, by: 'pretension' }], targets: [] } };
     const s = useProjectStore();
     s.load({ path: '/p/demo.stayset', name: 'demo.stayset', project: tuned });
     const r = useResultsStore();
@@ -148,7 +150,7 @@ describe('results store with a live case', () => {
     const r = useResultsStore();
     r.started(1, demo);
     r.onFinished({ runId: 'a', status: 'done', report });
-    expect(r.isStaleFor(setResistanceFactor(demo, 0.3))).toBe(false);
+    expect(r.isStaleFor(setCableFactor(demo, 1 / 0.3))).toBe(false);
     expect(r.isStaleFor(commitPretension({ ...demo, tuning: { variables: [{ group: LEVEL, by: 'pretension' }], targets: [] } }, LEVEL, 20_000))).toBe(true);
   });
 });

@@ -11,7 +11,7 @@ import type { ProjectFile } from '../../solver/index.ts';
 import { useProjectStore } from '../../renderer/stores/project.ts';
 import { addCombination, deleteCombination, factorOf, setFactor } from '../../renderer/model/combination-edits.ts';
 import { addGroup, parseIdList, setGroupMembers } from '../../renderer/model/group-edits.ts';
-import { setResistanceFactor, setTiltLimit } from '../../renderer/model/check-settings-edits.ts';
+import { setCableFactor, setTiltLimit } from '../../renderer/model/check-settings-edits.ts';
 
 const demo = JSON.parse(readFileSync(fileURLToPath(new URL('../../assets/demo-mast.stayset', import.meta.url)), 'utf8')) as ProjectFile;
 
@@ -67,11 +67,14 @@ describe('combination, group and check-setting edits', () => {
     expect(s.project!.groups!.at(-1)).toEqual({ id: 'G1', members: ['mast/guy L1-1', 'mast/guy L2-1'] });
   });
 
-  it('check settings: φ in (0, 1], tilt limit stored as a ratio', () => {
-    expect(() => setResistanceFactor(demo, 0)).toThrow(/checks.resistanceFactor/);
-    expect(() => setResistanceFactor(demo, 1.2)).toThrow(/at most 1/);
-    expect(setResistanceFactor(demo, 0.6).checks!.resistanceFactor).toBe(0.6);
+  it('check settings: the cable factor of the basis, tilt limit stored as a ratio', () => {
+    const allowable = { ...demo, designBasis: { format: 'allowable' as const } };
+    expect(() => setCableFactor(allowable, 0.5)).toThrow(/designBasis.allowable.cableSafetyFactor: 0.5 must be at least 1/);
+    expect(setCableFactor(allowable, 2.5).designBasis).toEqual({ format: 'allowable', allowable: { cableSafetyFactor: 2.5 } });
+    const limit = { ...demo, designBasis: undefined };
+    expect(() => setCableFactor(limit, 0)).toThrow(/designBasis.cable.partialFactor/);
+    expect(setCableFactor(limit, 0.9).designBasis).toEqual({ format: 'limitState', cable: { partialFactor: 0.9 } });
     expect(setTiltLimit(demo, 0, 1 / 250).checks!.tiltLimits![0]).toEqual({ base: 'mast/base', top: 'mast/P49a', limit: 0.004 });
-    expect(demo.checks!.resistanceFactor).toBe(0.5); // input untouched
+    expect(allowable.designBasis).toEqual({ format: 'allowable' }); // input untouched
   });
 });

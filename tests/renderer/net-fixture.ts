@@ -16,7 +16,7 @@ export function net(n: number): { project: ProjectFile; result: CaseResult } {
     members.push({ id: `X${i}_${j}`, kind: 'cable', from: id(j, i), to: id(j + 1, i), section: 'S', pretension: 5000 });
     members.push({ id: `Y${i}_${j}`, kind: 'cable', from: id(i, j), to: id(i, j + 1), section: 'S', pretension: 5000 });
   }
-  const project: ProjectFile = { format: 'stayset-project', version: 1, nodes, members, sections: [{ id: 'S', E: 1.6e11, area: 1e-4, breakingLoad: 1e5 }], loadCases: [{ id: 'L' }] };
+  const project: ProjectFile = { format: 'stayset-project', version: 2, nodes, members, sections: [{ id: 'S', E: 1.6e11, area: 1e-4, breakingLoad: 1e5 }], loadCases: [{ id: 'L' }] };
   const result: CaseResult = {
     id: 'L', converged: true, status: 'converged', slackMembers: [],
     nodes: nodes.map((nd) => ({ id: nd.id, position: nd.at, displacement: [0, 0, -0.01] })),

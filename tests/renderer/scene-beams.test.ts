@@ -14,7 +14,7 @@ describe('scene data with beams', () => {
 
   it('a beam member is kind 2 and drawn among the bars', () => {
     const p: ProjectFile = {
-      format: 'stayset-project', version: 1,
+      format: 'stayset-project', version: 2,
       nodes: [{ id: 'A', at: [0, 0, 0], fixed: 'xyzrxryrz' }, { id: 'B', at: [0, 0, 5] }, { id: 'C', at: [4, 0, 0], fixed: 'xyz' }],
       sections: [{ id: 's', E: 2e11, G: 8e10, area: 1e-3, Iy: 1e-6, Iz: 1e-6, J: 2e-6 }, { id: 'g', E: 1.6e11, area: 1e-4 }],
       members: [{ id: 'M', kind: 'beam', from: 'A', to: 'B', section: 's' }, { id: 'G', kind: 'cable', from: 'B', to: 'C', section: 'g' }],

@@ -6,7 +6,7 @@ import { MemberState, SLACK_COLOUR, TENSION_STOPS, scaleColour } from '../../ren
 import { pickAt, pointSegmentDistance } from '../../renderer/view3d/pick.ts';
 
 const project: ProjectFile = {
-  format: 'stayset-project', version: 1,
+  format: 'stayset-project', version: 2,
   nodes: [{ id: 'A', at: [0, 0, 0], fixed: 'xyz' }, { id: 'B', at: [10, 0, 0], fixed: 'z' }, { id: 'C', at: [0, 10, 0] }],
   sections: [{ id: 'S', E: 1e11, area: 1e-4, breakingLoad: 1000 }],
   members: [

@@ -4,7 +4,7 @@ import { buildModel, solveProject, type ProjectFile } from '../../solver/index.t
 import { buildSceneData } from '../../renderer/view3d/scene-data.ts';
 
 const project: ProjectFile = {
-  format: 'stayset-project', version: 1,
+  format: 'stayset-project', version: 2,
   nodes: [{ id: 'A', at: [0, 0, 0], fixed: 'xyz' }, { id: 'B', at: [40, 0, 30], fixed: 'xyz' }],
   sections: [{ id: 'strand', E: 160e9, area: 1.5e-4, massPerLength: 1.2 }],
   members: [{ id: 'G1', kind: 'cable', from: 'A', to: 'B', section: 'strand', segments: 10, unstressedLength: 52 }],

@@ -6,7 +6,7 @@ export const STRAND = { id: 'strand', E: 160e9, area: 1.5e-4, massPerLength: 1.2
 /** One cable between two pinned supports A (origin) and B. */
 export function singleCable(b: [number, number, number], member: Partial<ProjectFile['members'][number]>, section = STRAND): ProjectFile {
   return {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     nodes: [{ id: 'A', at: [0, 0, 0], fixed: 'xyz' }, { id: 'B', at: b, fixed: 'xyz' }],
     sections: [section],
     members: [{ id: 'C', kind: 'cable', from: 'A', to: 'B', section: section.id, ...member }],

@@ -91,7 +91,7 @@ describe('what cannot converge says why', () => {
 
   it('a bar pendulum free to swing out of plane is a mechanism', () => {
     const p: ProjectFile = {
-      format: 'stayset-project', version: 1,
+      format: 'stayset-project', version: 2,
       nodes: [{ id: 'A', at: [0, 0, 0], fixed: 'xyz' }, { id: 'B', at: [0, 0, -2] }],
       sections: [{ id: 'rod', E: 200e9, area: 1e-4 }],
       members: [{ id: 'R', kind: 'bar', from: 'A', to: 'B', section: 'rod' }],

@@ -17,7 +17,7 @@ const Plim = ((EA / L0 ** 3) * 2 * h ** 3) / (3 * Math.sqrt(3));
 
 function truss(load: number): ProjectFile {
   return {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     nodes: [
       { id: 'L', at: [-a, 0, 0], fixed: 'xyz' }, { id: 'R', at: [a, 0, 0], fixed: 'xyz' },
       { id: 'TOP', at: [0, 0, h], fixed: 'y' },

@@ -59,7 +59,7 @@ export function asBuiltText(r: AsBuiltResult): string {
   }
   const unidentified = r.cables.filter((c) => !c.identified).map((c) => c.member);
   if (unidentified.length) out.push(`  not identified by these readings (held near their design lengths): ${unidentified.join(', ')}`);
-  out.push('', r.checks ? (r.checks.pass ? 'Design checks on the as-built state: PASS' : `Design checks on the as-built state: FAIL (${r.checks.failures.length} failure(s): ${r.checks.failures.slice(0, 5).map((f) => `${f.kind} ${f.id} in "${f.case}"`).join('; ')})`) : 'Design checks on the as-built state could not run.');
+  out.push('', r.checks ? (r.checks.pass ? 'Design checks on the as-built state: PASS' : `Design checks on the as-built state: FAIL (${r.checks.failures.length} failure(s): ${r.checks.failures.slice(0, 5).map((f) => `${f.code} ${f.item} in "${f.case}"`).join('; ')})`) : 'Design checks on the as-built state could not run.');
   for (const i of r.issues) out.push(`  ! ${asBuiltIssueText(i)}`);
   return out.join('\n');
 }

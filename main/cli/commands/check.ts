@@ -1,7 +1,7 @@
 /**
- * `stayset check FILE [--json]`: solve every load case and combination, run the design checks of
- * the project's `checks` settings over them (utilisation against φ · breaking load, slack, sag,
- * displacement, tilt, uplift) and print a pass/fail summary.
+ * `stayset check FILE [--json]`: solve every load case and combination, run the design checks
+ * under the project's design basis and `checks` settings, print the basis with its sources, the
+ * governing result of every check and a pass/fail line.
  */
 import { CheckInputError, envelopeOf, runChecks, solveProject } from '../../../solver/index.ts';
 import type { CheckReport, Envelope, ProjectFile, SolveReport } from '../../../solver/index.ts';
@@ -14,77 +14,70 @@ import { plausibilityWarnings, resultWarnings } from '../../common/project/plaus
 import { failureHint } from '../../common/project/plausibility/failure-hint.ts';
 import { replaceNonFinite } from '../format/finite-guard.ts';
 import { fixed, kN } from '../format/number-text.ts';
+import { basisLines, checkRow, PURPOSE_NAMES, warningText } from '../../common/checks/check-text.ts';
 import { textTable } from '../format/text-table.ts';
 import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
 
 /** Exit status when every case converged but a design check failed. */
 export const EXIT_CHECK_FAILED = 3;
 
-const HELP = `Solves every load case and combination, then checks them against the project's
-"checks" settings: utilisation T / (φ · breaking load) (φ default 0.5), members that must
-not go slack, sag limits, node displacement limits, mast tilt limits and uplift at listed
-supports. Prints the governing case of every failure and a pass/fail line.
-Not checked: compression, buckling or connection strength of bars (mast members); check
-those separately.
+const HELP = `Solves every load case and combination, then checks them under the project's design
+basis ("designBasis": limit-state or allowable format, its factors and their sources):
+strength (cable design tension / design resistance, bar tension and buckling to EN 1993-1-1
+§6.3.1, uplift) on ultimate and accidental cases — every non-component case in the allowable
+format — and serviceability (cable service tension, minimum tension, slack, sag, horizontal
+displacement, tilt, twist) on serviceability cases; bar slenderness once. Component-only cases
+are not checked. Prints the basis, the governing result of every check with its source, and
+a pass/fail line. Not checked: connections, local buckling, lateral-torsional buckling.
 
 Options:
-  --json        Print {"pass", "check": CheckReport, "envelope", "disclaimer"} instead of tables.
+  --json        Print {"pass", "check": CheckReport, "rows", "envelope", "disclaimer"} instead of tables.
   --help        Show this help.
 
 Exit status:
-  0  every case converged and every check passed
+  0  every checked case converged and every check passed
   1  some case did not converge (or the solver failed): do not use the results
   2  bad input: missing or invalid file, check settings naming unknown groups or nodes
   3  every case converged but some check failed`;
 
-const ratioText = (r: number | null) => (r === null ? '—' : fixed(r, 3));
-
-function valueText(kind: string, v: number): string {
-  if (kind === 'utilisation' || kind === 'uplift' || kind === 'slack') return `${kN(v)} kN`;
-  if (kind === 'tilt') return v > 0 ? `1/${fixed(1 / v, 0)}` : '0';
-  if (kind === 'notConverged') return '';
-  return `${fixed(v, 3)} m`;
-}
-
-/** The plain-text summary `stayset check` prints. */
+/** The plain-text summary `stayset check` prints (SI units). */
 export function checkReportText(project: ProjectFile, check: CheckReport, env: Envelope): string {
   const out: string[] = [];
-  out.push(`Design check — ${project.meta?.name ?? 'project'}   (φ = ${check.resistanceFactor} on breaking load)`);
-  out.push('');
+  out.push(`Design check — ${project.meta?.name ?? 'project'}`, '');
+  out.push(...basisLines(check.basis), '');
   out.push('Cases');
   out.push(textTable(
-    [{ title: 'case' }, { title: 'converged' }, { title: 'max util.', align: 'right' }, { title: 'member' }, { title: 'failures', align: 'right' }, { title: 'result' }],
-    check.cases.map((c) => [c.id, c.converged ? 'yes' : 'NO', c.converged ? fixed(c.maxUtilisation, 3) : '—', c.maxUtilisationMember, String(c.failures), c.pass ? 'pass' : 'FAIL']),
+    [{ title: 'case' }, { title: 'purpose' }, { title: 'converged' }, { title: 'max util.', align: 'right' }, { title: 'member' }, { title: 'failures', align: 'right' }, { title: 'result' }],
+    check.cases.map((c) => [c.id, PURPOSE_NAMES[c.purpose], c.converged ? 'yes' : 'NO', c.checked && c.converged ? fixed(c.maxUtilisation, 3) : '—', c.maxUtilisationMember, String(c.failures), !c.checked ? 'not checked' : c.pass ? 'pass' : 'FAIL']),
   ));
   const used = check.members.filter((m) => m.utilisation !== null).sort((a, b) => (b.utilisation ?? 0) - (a.utilisation ?? 0)).slice(0, 10);
   if (used.length) {
-    out.push('', 'Highest utilisation (envelope)');
+    out.push('', 'Highest utilisation (design force / design resistance, envelope)');
     out.push(textTable(
       [{ title: 'member' }, { title: 'T max kN', align: 'right' }, { title: 'util.', align: 'right' }, { title: 'case' }, { title: 'status' }],
       used.map((m) => [m.id, kN(m.tensionMax), fixed(m.utilisation ?? 0, 3), m.utilisationCase, m.status]),
     ));
   }
   if (env.reactions.length) {
-    out.push('', 'Support reactions (envelope; Fz < 0 = uplift: the support holds the structure down)');
+    out.push('', 'Support reactions (envelope of the checked cases; Fz < 0 = uplift: the support holds the structure down)');
     out.push(textTable(
       [{ title: 'support' }, { title: '|R| max kN', align: 'right' }, { title: 'case' }, { title: 'Fz min kN', align: 'right' }, { title: 'case' }, { title: '' }],
       env.reactions.map((r) => [r.node, kN(r.magnitudeMax), r.magnitudeMaxCase, kN(r.min[2]), r.minCase[2], r.min[2] < 0 ? 'uplift' : '']),
     ));
   }
+  out.push('', 'Governing result of each check (worst first)');
+  const rows = check.results.map((r) => checkRow(r, 'SI'));
+  const shown = [...rows.filter((r) => r.verdict === 'FAIL'), ...rows.filter((r) => r.verdict === 'pass').slice(0, 20)];
+  out.push(textTable(
+    [{ title: 'check' }, { title: 'item' }, { title: 'case' }, { title: 'purpose' }, { title: 'value', align: 'right' }, { title: 'limit', align: 'right' }, { title: 'ratio', align: 'right' }, { title: 'result' }, { title: 'source' }],
+    shown.map((r) => [r.check, r.item, r.case, r.purpose, r.value, r.limit, r.ratio, r.verdict, r.source]),
+  ));
+  if (rows.length > shown.length) out.push(`(${rows.length - shown.length} more passing results in --json)`);
   out.push('');
-  if (check.failures.length) {
-    out.push('Failures (worst case of each)');
-    out.push(textTable(
-      [{ title: 'check' }, { title: 'item' }, { title: 'case' }, { title: 'value', align: 'right' }, { title: 'limit', align: 'right' }, { title: 'ratio', align: 'right' }],
-      check.failures.map((f) => [f.kind, f.id, f.case, valueText(f.kind, f.value), f.kind === 'notConverged' ? '' : valueText(f.kind, f.limit), ratioText(f.ratio)]),
-    ));
-    out.push('');
-  }
-  for (const w of check.warnings) out.push(`note: ${w}`);
-  if (project.members.some((m) => m.kind === 'bar')) out.push('note: bars (mast members) are not checked for compression, buckling or connections here');
+  for (const w of check.warnings) out.push(`note: ${warningText(w)}`);
   const verdict = !check.allConverged
     ? 'CHECK INCOMPLETE: some case did not converge — do not use these results'
-    : check.pass ? `CHECK PASSED: ${check.cases.length} case(s), every check within its limit`
+    : check.pass ? `CHECK PASSED: ${check.cases.filter((c) => c.checked).length} checked case(s), every check within its limit`
       : `CHECK FAILED: ${check.failures.length} failure(s)`;
   out.push(verdict, '', RESULTS_DISCLAIMER, '');
   return out.join('\n');
@@ -121,10 +114,10 @@ async function run(args: string[], io: CliIO): Promise<number> {
     }
     throw e;
   }
-  const env = envelopeOf(report);
+  const env = envelopeOf(report, check.cases.filter((c) => c.checked).map((c) => c.id));
   // Plausibility warnings are part of the report: inputs outside real ranges, sags of a unit slip.
   const plausibility = [...plausibilityWarnings(project), ...resultWarnings(project, report)];
-  const guarded = replaceNonFinite({ pass: check.pass, check, envelope: env, plausibility });
+  const guarded = replaceNonFinite({ pass: check.pass, check, rows: check.results.map((r) => checkRow(r, 'SI')), envelope: env, plausibility });
   if (opts.flags.has('json')) io.out(`${JSON.stringify({ ...guarded.value, disclaimer: RESULTS_DISCLAIMER }, null, 2)}\n`);
   else io.out(plausibilityText(plausibility) + checkReportText(project, check, env));
   if (guarded.paths.length > 0) {

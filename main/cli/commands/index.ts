@@ -9,5 +9,6 @@ import { modesCommand } from './modes.ts';
 import { sequenceCommand } from './sequence.ts';
 import { asBuiltCommand } from './asbuilt.ts';
 import { reportCommand } from './report.ts';
+import { combineCommand } from './combine.ts';
 
-export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, modesCommand, sequenceCommand, asBuiltCommand, reportCommand];
+export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, modesCommand, sequenceCommand, asBuiltCommand, reportCommand, combineCommand];

@@ -8,6 +8,7 @@ import { SCHEDULE_CAUTION, type PaperSize } from '../schedule/schedule-types.ts'
 import type { ScheduleUnits } from '../schedule/schedule-units.ts';
 import type { ReportDocument, ReportSource } from './report-types.ts';
 import { governingRows } from './governing.ts';
+import { warningText } from '../checks/check-text.ts';
 
 export interface ReportOptions {
   issueDate: string;
@@ -23,7 +24,7 @@ export function buildReport(src: ReportSource, options: ReportOptions): ReportDo
   if (paper !== 'a4' && paper !== 'letter') throw new Error(`paper must be a4 or letter, got ${JSON.stringify(paper)}`);
   const env = envelopeOf(report);
   const cables = project.members.filter((m) => m.kind === 'cable').length;
-  const notes = [...(src.notes ?? []), ...checks.warnings, ...(src.installation?.warnings ?? [])];
+  const notes = [...(src.notes ?? []), ...checks.warnings.map(warningText), ...(src.installation?.warnings ?? [])];
   for (const c of report.cases) if (!c.converged) notes.push(`Case "${c.id}" did not converge (${c.status}); it is left out of the envelope. ${c.message ?? ''}`.trim());
   return {
     project, units, paper, issueDate: options.issueDate,

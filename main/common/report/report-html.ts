@@ -12,6 +12,7 @@ import type { ReportDocument } from './report-types.ts';
 import { printCss } from './print-css.ts';
 import { modelSvg } from './model-svg.ts';
 import { crewSheetBody } from './crew-sheet.ts';
+import { checkRow } from '../checks/check-text.ts';
 import { designBasisHtml, actionsHtml, sectionsHtml } from './report-input-sections.ts';
 
 const table = (caption: string, head: string[], rows: string[][]) =>
@@ -32,9 +33,9 @@ function governingHtml(d: ReportDocument): string {
   };
   const rows = d.governing.map((g) => [CHECK_NAMES[g.check], e(g.item), e(g.case), num(`gov-${g.check}|${g.item}`, v(g.check, g.value)),
     g.limit === null ? '—' : v(g.check, g.limit), g.ratio === null ? '—' : formatNumber(g.ratio, 3), g.pass ? 'PASS' : '<b class="fail">FAIL</b>']);
-  const failures = d.checks.failures.map((f) => [e(f.kind), e(f.id), e(f.case), e(f.message)]);
+  const failures = d.checks.failures.map((f) => checkRow(f, u)).map((r) => [e(r.check), e(r.item), e(r.case), e(`${r.value} against ${r.limit}${r.ratio === '—' ? '' : ` (ratio ${r.ratio})`} — ${r.source}`)]);
   return (rows.length ? table('Governing value of each check over every case and combination', ['Check', 'Item', 'Case', 'Value', 'Limit', 'Ratio', 'Result'], rows) : '<p>No check settings in the project.</p>')
-    + `<p><b>Overall: ${d.checks.pass ? 'every check passes in every case' : `${d.checks.failures.length} failure(s)`}</b> (φ = ${d.checks.resistanceFactor}).</p>`
+    + `<p><b>Overall: ${d.checks.pass ? 'every check passes in every case' : `${d.checks.failures.length} failure(s)`}</b> (design basis: ${e(d.checks.basis.label)}).</p>`
     + (failures.length ? table('Failures (worst case of each)', ['Check', 'Item', 'Case', 'Description'], failures) : '');
 }
 

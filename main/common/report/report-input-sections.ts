@@ -5,6 +5,7 @@
  */
 import { escapeHtml as e } from '../schedule/schedule-html.ts';
 import { formatForce, formatLength, formatNumber, formatTemperature, unitLabels } from '../schedule/schedule-units.ts';
+import { basisLines } from '../checks/check-text.ts';
 import type { ReportDocument } from './report-types.ts';
 
 const table = (caption: string, head: string[], rows: string[][]) =>
@@ -23,7 +24,7 @@ export function designBasisHtml(d: ReportDocument): string {
   const basis = (p as unknown as { designBasis?: unknown }).designBasis;
   const rows: [string, string][] = [
     ['Reference temperature', p.meta?.referenceTemperature ? `${formatTemperature(u, p.meta.referenceTemperature)} ${l.temperature}` : 'not set (15 °C assumed)'],
-    ['Resistance factor φ on breaking load', String(d.checks.resistanceFactor)],
+    ...basisLines(d.checks.basis).map((line, i): [string, string] => [i === 0 ? 'Design basis' : '', e(line.trim())]),
     ['Members that must not go slack', (s.noSlackGroups ?? []).join(', ') || '—'],
     ['Sag limits', (s.sagLimits ?? []).map((x) => `${x.group}: ${'fractionOfSpan' in x.limit ? `${formatNumber(x.limit.fractionOfSpan * 100, 2)} % of span` : `${formatLength(u, x.limit.absolute)} ${l.length}`}`).join('; ') || '—'],
     ['Displacement limits', (s.displacementLimits ?? []).map((x) => `${x.node}: ${formatLength(u, x.limit)} ${l.length}`).join('; ') || '—'],

@@ -3,7 +3,8 @@
  * Pure: no I/O; the CLI, the desktop print route and tests all build the schedule here.
  * Results are for review by a qualified engineer; local codes and licensed practice govern.
  */
-import { envelopeOf, expectedStringFrequency, membersOfGroup } from '../../../solver/index.ts';
+import { envelopeOf, expectedStringFrequency, membersOfGroup, purposeOf } from '../../../solver/index.ts';
+import { basisLines, checkRow, warningText } from '../checks/check-text.ts';
 import type { CheckReport, InstallationData, ProjectFile, SolveReport, TuningResult } from '../../../solver/index.ts';
 import { SCHEDULE_CAUTION, type PaperSize, type ScheduleDocument, type ScheduleMemberRow, type ScheduleTuning } from './schedule-types.ts';
 import { formatForce, formatLength, formatNumber, unitLabels, type ScheduleUnits } from './schedule-units.ts';
@@ -46,7 +47,8 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
   const groupLabel = (g: string) => project.groups?.find((x) => x.id === g)?.label ?? g;
   for (const g of groupIds) for (const id of membersOfGroup(project, g)) groupsOf.get(id)?.push(groupLabel(g));
 
-  const env = envelopeOf(report);
+  // Envelope over the cases that are checked by themselves (componentOnly cases are left out).
+  const env = envelopeOf(report, report.cases.filter((c) => purposeOf(project, c.id) !== 'componentOnly').map((c) => c.id));
   const envById = new Map(env.members.map((m) => [m.id, m]));
   const checkById = new Map((src.checks?.members ?? []).map((m) => [m.id, m]));
   const instById = new Map((src.installation?.members ?? []).map((m) => [m.id, m]));
@@ -104,7 +106,7 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
   if (inst) notes.push(...inst.warnings);
   else notes.push('Installation data (cut lengths, frequencies, temperature table) was not computed.');
   if (!src.checks) notes.push('Design checks were not run: utilisation and check columns are empty.');
-  else notes.push(...src.checks.warnings);
+  else notes.push(...src.checks.warnings.map(warningText));
   notes.push(...(src.notes ?? []));
   const temperatureTable = inst ? {
     temperatures: inst.table.map((r) => r.temperature),
@@ -137,6 +139,8 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
     tuning,
     temperatureTable,
     checksPass: src.checks ? src.checks.pass : null,
+    basis: src.checks ? basisLines(src.checks.basis) : null,
+    checkRows: src.checks ? src.checks.results.map((r) => checkRow(r, units)) : null,
     notes,
   };
 }

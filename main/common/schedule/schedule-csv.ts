@@ -53,6 +53,11 @@ export function scheduleCsv(doc: ScheduleDocument): string {
       ['member', ...doc.temperatureTable.temperatures.map((t) => num(temperatureIn(u, t), 1))],
       ...doc.temperatureTable.rows.map((r) => [r.member, ...r.frequencies.map((f) => num(f, 4))]));
   }
+  if (doc.basis) records.push([], ['Design basis'], ...doc.basis.map((b) => [b]));
+  if (doc.checkRows) {
+    records.push([], ['Checks (governing result of each)'], ['check', 'item', 'case', 'purpose', 'value', 'limit', 'ratio', 'result', 'source'],
+      ...doc.checkRows.map((r) => [r.check, r.item, r.case, r.purpose, r.value, r.limit, r.ratio, r.verdict, r.source]));
+  }
   if (doc.tuning) records.push([], ['Tuning'], ['summary', doc.tuning.summary], ...doc.tuning.targets.map((t) => [t.label, t.value, t.met ? 'met' : 'NOT MET']));
   return stringify(records, { record_delimiter: '\r\n' });
 }

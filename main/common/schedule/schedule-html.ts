@@ -95,6 +95,11 @@ function scheduleMarkup(doc: ScheduleDocument): { title: string; body: string } 
         tt.rows.map((r) => [`<b>${e(r.member)}</b>`, ...r.frequencies.map((x) => formatNumber(x, 3))]));
   }
 
+  const basisHtml = doc.basis ? `<ul class="basis">${doc.basis.map((b) => `<li>${e(b)}</li>`).join('')}</ul>` : '<p>Design checks were not run.</p>';
+  const checkRowsHtml = doc.checkRows && doc.checkRows.length
+    ? table('Governing result of each check (worst first)', ['Check', 'Item', 'Case', 'Purpose', 'Value', 'Limit', 'Ratio', 'Result', 'Source'],
+      doc.checkRows.map((r) => [e(r.check), `<b>${e(r.item)}</b>`, e(r.case), e(r.purpose), e(r.value), e(r.limit), e(r.ratio), r.verdict === 'FAIL' ? '<b class="fail">FAIL</b>' : 'pass', `<small>${e(r.source)}</small>`]), 4, 7)
+    : '';
   const notesHtml = doc.notes.length ? `<h2>Notes</h2><ul>${doc.notes.map((n) => `<li>${e(n)}</li>`).join('')}</ul>` : '';
 
   return { title: `${e(doc.title)} — ${e(h.projectName)}`, body: `<header>
@@ -103,8 +108,11 @@ ${headerHtml}
 <p class="caution" role="note">${e(doc.caution)}</p>
 </header>
 <main>
+<h2>Design basis</h2>
+${basisHtml}
 <h2>Members</h2>
 ${membersHtml}
+${checkRowsHtml}
 <h2>Tension per case</h2>
 ${caseTables.join('\n')}
 <h2>Reactions</h2>

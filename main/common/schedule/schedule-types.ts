@@ -4,6 +4,7 @@
  * Built by buildSchedule (build-schedule.ts) from project + solution + checks + installation data.
  */
 import type { ScheduleUnits } from './schedule-units.ts';
+import type { CheckRow } from '../checks/check-text.ts';
 import type { MemberKind } from '../../../solver/index.ts';
 
 export const SCHEDULE_CAUTION = 'Results are for review by a qualified engineer; local codes and licensed practice govern.';
@@ -50,12 +51,12 @@ export interface ScheduleMemberRow {
   envelopeMaxCase: string;
   envelopeMin: number | null;
   envelopeMinCase: string;
-  /** T_max / (φ·MBL), null without a breaking load or checks. */
+  /** Design force / design resistance under the design basis (highest over strength cases), null without resistance data or checks. */
   utilisation: number | null;
   utilisationCase: string;
   /** 'pass' | 'fail' | 'unchecked' (checks not run or member without limits). */
   checkStatus: 'pass' | 'fail' | 'unchecked';
-  /** Failed check kinds (e.g. "utilisation", "slack"). */
+  /** Failed check codes (e.g. "cableResistance", "minimumTension"). */
   failedChecks: string[];
 }
 
@@ -101,6 +102,10 @@ export interface ScheduleDocument {
   temperatureTable: ScheduleTemperatureTable | null;
   /** Overall result of the design checks, null when not run. */
   checksPass: boolean | null;
+  /** The design basis, one line per factor with its source (check-text.ts basisLines); null without checks. */
+  basis: string[] | null;
+  /** Governing result of every check (the same rows as `stayset check` and the app's Checks tab). */
+  checkRows: CheckRow[] | null;
   /** Notes for the reader: warnings, assumptions, cases that did not converge. */
   notes: string[];
 }

@@ -17,7 +17,7 @@ export function designCases(): LoadCaseSpec[] {
   return out;
 }
 
-const empty = (): ProjectFile => ({ format: 'stayset-project', version: 1, nodes: [], sections: [], members: [], loadCases: designCases() });
+const empty = (): ProjectFile => ({ format: 'stayset-project', version: 2, nodes: [], sections: [], members: [], loadCases: designCases() });
 
 export function benchMast(): ProjectFile {
   const record: GeneratorRecord = {

@@ -26,7 +26,7 @@ export interface LiveResolveBenchResult {
 
 export function mastForBench(height = 200): ProjectFile {
   const base: ProjectFile = {
-    format: 'stayset-project', version: 1, meta: { name: 'Bench mast (invented)', referenceTemperature: 283.15 },
+    format: 'stayset-project', version: 2, meta: { name: 'Bench mast (invented)', referenceTemperature: 283.15 },
     nodes: [], sections: [], members: [], loadCases: [{ id: 'dead', selfWeight: true }],
   };
   const params = {

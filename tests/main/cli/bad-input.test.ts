@@ -18,7 +18,7 @@ describe('stayset solve on bad files', () => {
     ['bad-fixed-letters.stayset.json', 'nodes[2] "AN1": "fixed" must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once (got "xxz")'],
     ['bad-both-lengths.stayset.json', 'members[1] "G1": give either "pretension" or "unstressedLength", not both'],
     ['bad-typo-property.stayset.json', 'members[1] "G1": unknown property "pretention" (did you mean "pretension"?)'],
-    ['bad-newer-version.stayset.json', 'this file was written by a newer Stayset (format version 3); this version reads up to 1'],
+    ['bad-newer-version.stayset.json', 'this file was written by a newer Stayset (format version 3); this version reads up to 2'],
     ['bad-other-format.stayset.json', 'this is not a Stayset project file'],
     ['bad-truncated.stayset.json', 'the file is truncated: it ends at line'],
     ['bad-empty.stayset.json', 'the file is empty'],

@@ -25,11 +25,11 @@ describe('stayset check', () => {
 
   it('a failed check gives exit 3 and names the member, case and ratio', () => {
     const p = canopy();
-    p.checks = { ...p.checks, resistanceFactor: 0.1 };
+    p.designBasis = { format: 'allowable', allowable: { cableSafetyFactor: 10 } };
     const r = runStayset(['check', writeProject('tight.stayset', p)]);
     expect(r.code).toBe(3);
     expect(r.stdout).toMatch(/CHECK FAILED: \d+ failure/);
-    expect(r.stdout).toMatch(/utilisation\s+canopy\/\S+/);
+    expect(r.stdout).toMatch(/cable resistance\s+canopy\/\S+/);
   });
 
   it('--json gives the check report with the worst failures and the disclaimer', () => {
@@ -38,8 +38,9 @@ describe('stayset check', () => {
     const r = runStayset(['check', writeProject('disp.stayset', p), '--json']);
     expect(r.code).toBe(3);
     const out = JSON.parse(r.stdout);
-    const f = out.check.failures.find((x: { kind: string }) => x.kind === 'displacement');
-    expect(f.id).toBe('canopy/N11-0');
+    const f = out.check.failures.find((x: { code: string }) => x.code === 'displacement');
+    expect(f.item).toBe('canopy/N11-0');
+    expect(f.source).toBe('project file (checks.displacementLimits)');
     expect(f.case).toBe('snow');
     expect(f.ratio).toBeCloseTo(f.value / 0.05, 9);
     expect(out.disclaimer).toMatch(/qualified engineer/);

@@ -12,7 +12,7 @@ const EA = 200e9 * 1e-4, L = 2, MASS = 50;
 /** A massless bar A–B along x, B carrying a node mass and held in y and z: one axial DOF. */
 function springMassFile(): string {
   const project: ProjectFile = {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     nodes: [{ id: 'A', at: [0, 0, 0], fixed: 'xyz' }, { id: 'B', at: [L, 0, 0], fixed: 'yz', mass: MASS }],
     sections: [{ id: 'rod', E: 200e9, area: 1e-4 }],
     members: [{ id: 'R', kind: 'bar', from: 'A', to: 'B', section: 'rod' }],

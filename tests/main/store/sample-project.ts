@@ -12,7 +12,7 @@ export function sampleMast(pretension = 20_000): ProjectFile {
   });
   return {
     format: 'stayset-project',
-    version: 1,
+    version: 2,
     meta: { name: 'Test mast Ridgeback Hill', referenceTemperature: 288.15 },
     nodes: [{ id: 'BASE', at: [0, 0, 0], fixed: 'xyz' }, { id: 'HEAD', at: [0, 0, 30] }, ...anchors],
     sections: [
@@ -48,7 +48,7 @@ export function largeGrid(n: number, tag: string): ProjectFile {
   }
   return {
     format: 'stayset-project',
-    version: 1,
+    version: 2,
     meta: { name: `Grid ${tag}`, notes: tag.repeat(50) },
     nodes,
     sections: [{ id: 'C', E: 150e9, area: 1e-4 }],

@@ -27,7 +27,7 @@ const EA = STRAND.E * STRAND.area;
 
 function cable(h: number, v: number, designL0: number, reading: number, lengthUncertainty: number): ProjectFile {
   return {
-    format: 'stayset-project', version: 1, meta: { referenceTemperature: 288.15 },
+    format: 'stayset-project', version: 2, meta: { referenceTemperature: 288.15 },
     nodes: [{ id: 'A', at: [0, 0, 0], fixed: 'xyz' }, { id: 'B', at: [h, 0, v], fixed: 'xyz' }],
     sections: [STRAND],
     members: [{ id: 'C', kind: 'cable', from: 'A', to: 'B', section: 'strand', segments: n, unstressedLength: designL0 }],

@@ -11,7 +11,7 @@ export function roundSection(id: string, I: number, A: number): SectionSpec {
 }
 
 export function beamProject(nodes: NodeSpec[], members: MemberSpec[], sections: SectionSpec[], loadCases: LoadCaseSpec[]): ProjectFile {
-  return { format: 'stayset-project', version: 1, nodes, sections, members, loadCases };
+  return { format: 'stayset-project', version: 2, nodes, sections, members, loadCases };
 }
 
 /** Nodes on a straight line a → b (n + 1 nodes "N0" … "Nn"), with per-node offsets. */

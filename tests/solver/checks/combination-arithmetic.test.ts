@@ -8,14 +8,15 @@ const E = 2e11, A = 1e-4, L = 5;
 /** Bar A→B along x; A pinned, B free along x only. Statically determinate: N = applied force. */
 function bar(): ProjectFile {
   return {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     nodes: [{ id: 'A', at: [0, 0, 0], fixed: 'xyz' }, { id: 'B', at: [L, 0, 0], fixed: 'yz' }],
-    sections: [{ id: 's', E, area: A, breakingLoad: 20e3, thermalExpansion: 1.2e-5 }],
+    sections: [{ id: 's', E, area: A, yieldStrength: 235e6, thermalExpansion: 1.2e-5 }],
     members: [{ id: 'AB', kind: 'bar', from: 'A', to: 'B', section: 's' }],
     loadCases: [
       { id: 'a', selfWeight: false, nodalLoads: [{ node: 'B', force: [1000, 0, 0] }] },
       { id: 'b', selfWeight: false, nodalLoads: [{ node: 'B', force: [2000, 0, 0] }] },
     ],
+    designBasis: { format: 'allowable', allowable: { cableSafetyFactor: 2 } },
     combinations: [{ id: 'c', factors: [{ case: 'a', factor: 1.5 }, { case: 'b', factor: 0.5 }] }],
   };
 }
@@ -38,8 +39,8 @@ describe('combination and envelope arithmetic on a single bar', () => {
     const env = envelopeOf(rep);
     expect([env.members[0].tensionMax, env.members[0].tensionMaxCase]).toEqual([expect.closeTo(2500, 6), 'c']);
     expect([env.members[0].tensionMin, env.members[0].tensionMinCase]).toEqual([expect.closeTo(1000, 6), 'a']);
-    // utilisation 2.5 kN / (0.5 · 20 kN) = 0.25
-    expect(runChecks(bar(), rep).members[0].utilisation).toBeCloseTo(0.25, 8);
+    // Bar tension in the allowable format: 2.5 kN / (A f_y / Ω) = 2500 / (1e-4 · 235e6 / 1.67) (hand arithmetic).
+    expect(runChecks(bar(), rep).members[0].utilisation).toBeCloseTo(2500 / ((1e-4 * 235e6) / 1.67), 8);
   });
 
   it('temperature change scales in a combination: fixed-fixed bar N = −EAα(f·ΔT)', () => {
@@ -58,7 +59,7 @@ describe('combination and envelope arithmetic on a single bar', () => {
 
   it('wind in a combination: reactions balance the drag on the deformed cable, scaled by the factor', () => {
     const p: ProjectFile = {
-      format: 'stayset-project', version: 1,
+      format: 'stayset-project', version: 2,
       nodes: [{ id: 'P', at: [0, 0, 10], fixed: 'xyz' }, { id: 'Q', at: [0, 12, 10], fixed: 'xyz' }],
       sections: [{ id: 'rope', E: 1.6e11, area: 1e-4, diameter: 0.015 }],
       members: [{ id: 'R', kind: 'cable', from: 'P', to: 'Q', section: 'rope', segments: 6, pretension: 30e3 }],

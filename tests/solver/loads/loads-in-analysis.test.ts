@@ -7,7 +7,7 @@ describe('wind and ice inside the analysis', () => {
   it('ice adds ρπt(D+t) per metre to the weight the supports carry (statics)', () => {
     const L = 20, D = 0.02, t = 0.012, m = 1.9;
     const p: ProjectFile = {
-      format: 'stayset-project', version: 1,
+      format: 'stayset-project', version: 2,
       nodes: [{ id: 'P', at: [0, 0, 10], fixed: 'xyz' }, { id: 'Q', at: [L, 0, 10], fixed: 'xyz' }],
       sections: [{ id: 'rope', E: 1.6e11, area: 2e-4, diameter: D, massPerLength: m }],
       members: [{ id: 'R', kind: 'cable', from: 'P', to: 'Q', section: 'rope', segments: 10, pretension: 40e3 }],
@@ -26,7 +26,7 @@ describe('wind and ice inside the analysis', () => {
   it('lattice mast drag is counted once: Σ Rx = ½ρV² · Cf · solidity · faceWidth · H', () => {
     const H = 30, w = 0.6, solidity = 0.25, Cf = 2.4, V = 30;
     const base: ProjectFile = {
-      format: 'stayset-project', version: 1, nodes: [], sections: [], members: [],
+      format: 'stayset-project', version: 2, nodes: [], sections: [], members: [],
       loadCases: [{ id: 'mast wind', selfWeight: false, wind: { direction: 0, speed: V, profile: { kind: 'uniform' }, groups: ['m/mast legs'] } }],
     };
     const p = runGenerator(base, {

@@ -113,7 +113,7 @@ function strip(n: number, L: number, b: number, H0: number, areaLoads: AreaLoadS
   }
   for (let k = 0; k < n; k++) panels.push({ id: `P${k}`, nodes: [`A${k}`, `A${k + 1}`, `B${k + 1}`, `B${k}`] });
   return {
-    format: 'stayset-project', version: 1, nodes, members, panels,
+    format: 'stayset-project', version: 2, nodes, members, panels,
     sections: [{ id: 's', E: 1.5e11, area: 1.5e-4 }],
     loadCases: [{ id: 'load', selfWeight: false, areaLoads }],
   };

@@ -25,7 +25,7 @@ describe('per-case wind', () => {
 
   it('the follower load is exactly the sum of elementDragForce, half to each end', () => {
     const p: ProjectFile = {
-      format: 'stayset-project', version: 1,
+      format: 'stayset-project', version: 2,
       nodes: [{ id: 'A', at: [0, 0, 20], fixed: 'xyz' }, { id: 'B', at: [3, 10, 24], fixed: 'xyz' }, { id: 'C', at: [0, 0, 0], fixed: 'xyz' }, { id: 'D', at: [10, -2, 10] }],
       sections: [{ id: 'rope', E: 1.6e11, area: 2e-4, diameter: 0.02 }],
       members: [

@@ -6,7 +6,7 @@ import { handModel } from './hand-model.ts';
 
 function project(): ProjectFile {
   return {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     nodes: [
       { id: 'A', at: [0, 0, 20], fixed: 'xyz' }, { id: 'B', at: [0, 10, 20], fixed: 'xyz' },
       { id: 'C', at: [0, 0, 0], fixed: 'xyz' }, { id: 'D', at: [10, 0, 10] },

@@ -21,7 +21,7 @@ function beam(support: (nodes: NodeSpec[]) => void, axial = 0): ProjectFile {
   const nodes: NodeSpec[] = Array.from({ length: N + 1 }, (_, k) => ({ id: `N${k}`, at: [(k * L) / N, 0, 0] }));
   support(nodes);
   return {
-    format: 'stayset-project', version: 1, nodes,
+    format: 'stayset-project', version: 2, nodes,
     sections: [{ id: 's', E, G, area: A, Iy: I, Iz: I, J: 2 * I, massPerLength: MU }],
     members: nodes.slice(1).map((nd, k) => ({ id: `B${k}`, kind: 'beam', from: nodes[k].id, to: nd.id, section: 's', orientation: [0, 0, 1] })),
     loadCases: [{ id: 'c', selfWeight: false, nodalLoads: axial ? [{ node: `N${N}`, force: [-axial, 0, 0] }] : [] }],

@@ -17,7 +17,7 @@ function cable(EA: number): ProjectFile {
   const H0 = (MASS * STANDARD_GRAVITY * L * L) / (8 * SAG);
   const arc = L * (1 + (8 / 3) * (SAG / L) ** 2);
   return {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     nodes: [{ id: 'A', at: [0, 0, 0], fixed: 'xyz' }, { id: 'B', at: [L, 0, 0], fixed: 'xyz' }],
     sections: [{ id: 'rope', E: EA, area: 1, massPerLength: MASS }],
     members: [{ id: 'C', kind: 'cable', from: 'A', to: 'B', section: 'rope', segments: SEGMENTS, unstressedLength: arc / (1 + H0 / EA) }],

@@ -12,7 +12,7 @@ const EA = 200e9 * 1e-4;
  */
 function oscillator(cable: Partial<ProjectFile['members'][number]>): ProjectFile {
   return {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     nodes: [
       { id: 'A', at: [0, 0, 0], fixed: 'xyz' }, { id: 'B', at: [2, 0, 0], fixed: 'yz', mass: 30 },
       { id: 'C', at: [6, 0, 0], fixed: 'xyz' },

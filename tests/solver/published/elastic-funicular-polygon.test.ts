@@ -42,7 +42,7 @@ function project(loads: [number, number][]): ProjectFile {
   }
   const ids = ['A', ...joints.map((j) => j.id), 'B'];
   return {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     nodes: [{ id: 'A', at: [0, 0, 0], fixed: 'xyz' }, ...joints, { id: 'B', at: [B[0], 0, B[1]], fixed: 'xyz' }],
     sections: [{ id: 'strand', E, area: AREA }],
     members: L0.map((len, i) => ({

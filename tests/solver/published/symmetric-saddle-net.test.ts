@@ -55,7 +55,7 @@ function project(outer: Spec, middle: Spec, force: Vec3): ProjectFile {
     cable(`H${s}o-`, J(s, -1), `HA${s}-`, outer);
   }
   return {
-    format: 'stayset-project', version: 1, nodes, members,
+    format: 'stayset-project', version: 2, nodes, members,
     sections: [{ id: 'strand', E, area: AREA }],
     loadCases: [{ id: 'joints', selfWeight: false, nodalLoads: loads }],
   };

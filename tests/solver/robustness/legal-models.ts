@@ -39,7 +39,7 @@ function mastWithGuys(group: string, by: { pretension: number } | { lengthFactor
 /** One cable between pins, A at the origin and B at `b`. */
 function cable(b: [number, number, number], member: Partial<MemberSpec>, section = STRAND, loads: ProjectFile['loadCases'] = [{ id: 'dead' }]): ProjectFile {
   return {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     nodes: [{ id: 'A', at: [0, 0, 0], fixed: 'xyz' }, { id: 'B', at: b, fixed: 'xyz' }],
     sections: [section],
     members: [{ id: 'C', kind: 'cable', from: 'A', to: 'B', section: section.id, ...member }],
@@ -52,7 +52,7 @@ function guyedPole(guy: Partial<MemberSpec>, segments: number, topLoad: [number,
   const h = 20, r = 15;
   const anchors = [0, 1, 2].map((k) => [r * Math.cos((2 * Math.PI * k) / 3), r * Math.sin((2 * Math.PI * k) / 3), 0] as [number, number, number]);
   const project: ProjectFile = {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     nodes: [
       { id: 'BASE', at: [0, 0, 0], fixed: 'xyz' }, { id: 'TOP', at: [0, 0, h], mass: 40 },
       ...anchors.map((at, k) => ({ id: `A${k + 1}`, at, fixed: 'xyz' })),
@@ -73,7 +73,7 @@ function guyedPole(guy: Partial<MemberSpec>, segments: number, topLoad: [number,
 /** Two cables A–M–B with a load at the joint M (free), weightless or not. */
 function loadedJoint(factor: number, massPerLength: number, segments: number): ProjectFile {
   const p: ProjectFile = {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     nodes: [{ id: 'A', at: [0, 0, 0], fixed: 'xyz' }, { id: 'M', at: [10, 0, -1] }, { id: 'B', at: [20, 0, 0], fixed: 'xyz' }],
     sections: [{ ...STRAND, massPerLength }],
     members: [

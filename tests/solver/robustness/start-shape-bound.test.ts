@@ -11,7 +11,7 @@ import type { ProjectFile } from '../../../solver/index.ts';
  */
 function project(member: Partial<ProjectFile['members'][number]>, massPerLength: number, E = 160e9): ProjectFile {
   return {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     nodes: [{ id: 'A', at: [0, 0, 0], fixed: 'xyz' }, { id: 'B', at: [40, 0, 30], fixed: 'xyz' }],
     sections: [{ id: 's', E, area: 1.5e-4, massPerLength }],
     members: [{ id: 'C', kind: 'cable', from: 'A', to: 'B', section: 's', segments: 20, ...member }],

@@ -10,7 +10,7 @@ import type { ProjectFile } from '../../../solver/index.ts';
  */
 function weightless(member: Partial<ProjectFile['members'][number]>, massPerLength = 0): ProjectFile {
   return {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     nodes: [{ id: 'A', at: [0, 0, 0], fixed: 'xyz' }, { id: 'B', at: [40, 0, 30], fixed: 'xyz' }],
     sections: [{ id: 's', E: 160e9, area: 1.5e-4, massPerLength, thermalExpansion: 1.2e-5 }],
     members: [{ id: 'G1', kind: 'cable', from: 'A', to: 'B', section: 's', segments: 4, ...member }],

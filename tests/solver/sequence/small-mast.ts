@@ -16,7 +16,7 @@ export function smallMast(): ProjectFile {
     },
   };
   const base: ProjectFile = {
-    format: 'stayset-project', version: 1, meta: { name: 'small test mast', referenceTemperature: 288.15 },
+    format: 'stayset-project', version: 2, meta: { name: 'small test mast', referenceTemperature: 288.15 },
     nodes: [], sections: [], members: [], loadCases: [{ id: 'dead' }],
   };
   return runGenerator(base, record).project;

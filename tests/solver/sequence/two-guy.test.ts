@@ -23,7 +23,7 @@ const E = 160e9, A = 1.5e-4, Es = 2.1e11, As = 2e-5;
 
 function twoGuys(): ProjectFile {
   return {
-    format: 'stayset-project', version: 1, meta: { referenceTemperature: 288.15 },
+    format: 'stayset-project', version: 2, meta: { referenceTemperature: 288.15 },
     nodes: [
       { id: 'H', at: [0, 0, h], fixed: 'yz' }, { id: 'K', at: [b, 0, h], fixed: 'xyz' },
       { id: 'A1', at: [-a, 0, 0], fixed: 'xyz' }, { id: 'A2', at: [a, 0, 0], fixed: 'xyz' },

@@ -8,7 +8,7 @@ import type { ProjectFile } from '../../../solver/project/types.ts';
 export function singleSpan(pretension: number, heightDifference = 0): ProjectFile {
   return {
     format: 'stayset-project',
-    version: 1,
+    version: 2,
     meta: { name: 'Test span', referenceTemperature: 283.15 },
     nodes: [
       { id: 'A', at: [0, 0, 0], fixed: 'xyz' },

@@ -1,7 +1,5 @@
-/**
- * The production migration chain. Format version 1 is the first, so there is nothing to
- * migrate yet; see migration.ts for how to add a step.
- */
+/** The production migration chain, one pure step per format version (see migration.ts). */
 import type { MigrationRegistry } from './migration.ts';
+import { v1ToV2 } from './v1-to-v2.ts';
 
-export const PROJECT_MIGRATIONS: MigrationRegistry = [];
+export const PROJECT_MIGRATIONS: MigrationRegistry = [v1ToV2];

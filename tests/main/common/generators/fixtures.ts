@@ -17,6 +17,6 @@ export const mastRecord = (over: Record<string, unknown> = {}): GeneratorRecord 
 });
 
 export const emptyProject = (): ProjectFile => ({
-  format: 'stayset-project', version: 1, nodes: [], sections: [], members: [],
+  format: 'stayset-project', version: 2, nodes: [], sections: [], members: [],
   loadCases: [{ id: 'dead' }, { id: 'wind', wind: { direction: 30, speed: 28 } }, { id: 'iced', ice: { thickness: 0.015 }, wind: { direction: 200, speed: 18 } }, { id: 'cold', temperatureChange: -35 }],
 });

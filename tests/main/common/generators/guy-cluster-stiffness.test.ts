@@ -29,7 +29,7 @@ function singleLevel(n: 3 | 4, azimuth0: number): { project: ProjectFile; expect
     guy: { E: 1.6e11, area: 1.5e-4, breakingLoad: 200e3 }, guySegments: 10, pretension: T,
   };
   const parts = generateGuyedMast('m', params);
-  const base: ProjectFile = { format: 'stayset-project', version: 1, nodes: [], sections: [], members: [], loadCases: [] };
+  const base: ProjectFile = { format: 'stayset-project', version: 2, nodes: [], sections: [], members: [], loadCases: [] };
   const project = applyGenerated(base, { id: 'm', kind: 'guyedMast', params }, parts).project;
   const L = Math.hypot(h, R), sinT = h / L, cosT = R / L;
   const N = -n * T * sinT; // mast compression that balances the guys at the modelled geometry

@@ -175,7 +175,7 @@ describe('semantic errors', () => {
   });
 
   it('never throws on arbitrary JSON values', () => {
-    for (const v of [null, 0, 'x', [], {}, { format: 'stayset-project', version: 1, nodes: 'x', members: [1, null], loadCases: {} }]) {
+    for (const v of [null, 0, 'x', [], {}, { format: 'stayset-project', version: 2, nodes: 'x', members: [1, null], loadCases: {} }]) {
       expect(validateProject(v).ok).toBe(false);
     }
   });

@@ -13,7 +13,7 @@ export function fixtureJson(name: string): Record<string, unknown> {
 }
 
 /** The reference example of format v1: the schema must accept it exactly as written. */
-export const SPEC_SUBSET = `{ "format": "stayset-project", "version": 1,
+export const SPEC_SUBSET = `{ "format": "stayset-project", "version": 2,
   "nodes":    [{ "id": "A", "at": [0, 0, 0], "fixed": "xyz" }, { "id": "B", "at": [40, 0, 30] }],
   "sections": [{ "id": "strand", "E": 160e9, "area": 1.5e-4, "massPerLength": 1.2,
                  "breakingLoad": 180e3, "thermalExpansion": 1.2e-5, "diameter": 0.016 }],

@@ -1,10 +1,10 @@
-// The migration framework, exercised with a test-only chain (the shipped registry is empty
-// because version 1 is the first format version).
+// The migration framework, exercised with a test-only chain, and the shipped step 1 → 2.
 import { describe, expect, it } from 'vitest';
 import { CURRENT_FORMAT_VERSION, migrateDocument, parseProjectText } from '../../../../main/common/project/index.ts';
 import type { Migration } from '../../../../main/common/project/index.ts';
 import { PROJECT_MIGRATIONS } from '../../../../main/common/project/migrations/registry.ts';
 import { fixtureText } from './fixtures.ts';
+import { runChecks, solveProject } from '../../../../solver/index.ts';
 
 // Test-only steps: v1 → v2 renames members[].segments to members[].divisions; v2 → v3 adds a list.
 const toV2: Migration = {
@@ -18,11 +18,11 @@ const toV2: Migration = {
 };
 const toV3: Migration = { fromVersion: 2, summary: 'add notes list', migrate: (doc) => ({ ...doc, version: 3, notes: [] }) };
 
-const v1 = { format: 'stayset-project', version: 1, members: [{ id: 'M', segments: 4 }] };
+const v1 = { format: 'stayset-project', version: 2, members: [{ id: 'M', segments: 4 }] };
 
 describe('migration framework', () => {
   it('the shipped chain reaches the current version with no gaps', () => {
-    expect(CURRENT_FORMAT_VERSION).toBe(1);
+    expect(CURRENT_FORMAT_VERSION).toBe(2);
     for (let v = 1; v < CURRENT_FORMAT_VERSION; v++) expect(PROJECT_MIGRATIONS.some((m) => m.fromVersion === v)).toBe(true);
   });
 
@@ -68,7 +68,7 @@ describe('migration framework', () => {
     const r = parseProjectText(fixtureText('bad-newer-version.stayset.json'));
     expect(r).toEqual({
       ok: false,
-      errors: ['project: this file was written by a newer Stayset (format version 3); this version reads up to 1'],
+      errors: ['project: this file was written by a newer Stayset (format version 3); this version reads up to 2'],
     });
   });
 
@@ -86,5 +86,49 @@ describe('migration framework', () => {
       errors: ['project: "version" must be a whole number of at least 1 (got "1")'],
     });
     expect(migrateDocument([1, 2]).ok).toBe(false);
+  });
+});
+
+describe('format 1 → 2: the resistance factor becomes the design basis', () => {
+  const base = { format: 'stayset-project', version: 2, meta: { name: 'x', notes: 'old note' }, checks: { resistanceFactor: 0.4, upliftNodes: ['A'] } };
+
+  it('φ becomes the allowable format with cable safety factor 1/φ and a note saying so', () => {
+    const r = migrateDocument(structuredClone(base));
+    if (!r.ok) throw new Error(r.errors.join('\n'));
+    expect(r.migratedFrom).toBe(1);
+    expect(r.doc.version).toBe(2);
+    expect(r.doc.checks).toEqual({ upliftNodes: ['A'] });
+    expect(r.doc.designBasis).toEqual({ format: 'allowable', allowable: { cableSafetyFactor: 2.5 } });
+    const notes = (r.doc.meta as { notes: string }).notes;
+    expect(notes.startsWith('old note\n')).toBe(true);
+    expect(notes).toContain('φ = 0.4 on breaking load became designBasis');
+    expect(notes).toContain('cableSafetyFactor: 2.5');
+  });
+
+  it('a file without φ gets the version-1 default 0.5, i.e. safety factor 2, and says it was the default', () => {
+    const r = migrateDocument({ format: 'stayset-project', version: 2 });
+    if (!r.ok) throw new Error(r.errors.join('\n'));
+    expect(r.doc.designBasis).toEqual({ format: 'allowable', allowable: { cableSafetyFactor: 2 } });
+    expect((r.doc.meta as { notes: string }).notes).toMatch(/φ = 0.5 \(the version-1 default\)/);
+  });
+
+  it('a version-1 fixture parses as version 2 and keeps the version-1 rule T / (φ·MBL) on its load cases', () => {
+    const text = fixtureText('v1-kestrel-moor-mast.stayset.json');
+    const phi = (JSON.parse(text) as { checks: { resistanceFactor: number } }).checks.resistanceFactor;
+    const r = parseProjectText(text);
+    if (!r.ok) throw new Error(r.errors.join('\n'));
+    expect(r.migratedFrom).toBe(1);
+    expect(r.project.version).toBe(2);
+    const p = r.project;
+    const report = solveProject(p).report;
+    const check = runChecks(p, report);
+    const first = report.cases[0];
+    let worst = 0;
+    for (const m of first.members) {
+      const mbl = p.sections.find((s) => s.id === p.members.find((x) => x.id === m.id)!.section)!.breakingLoad;
+      if (mbl) worst = Math.max(worst, m.tensionMax / (phi * mbl));
+    }
+    expect(worst).toBeGreaterThan(0);
+    expect(check.cases.find((c) => c.id === first.id)!.maxUtilisation).toBeCloseTo(worst, 9);
   });
 });

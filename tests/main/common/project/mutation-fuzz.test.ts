@@ -29,7 +29,7 @@ function parentOf(doc: unknown, path: Path): Record<string | number, unknown> {
   return v;
 }
 
-const LABEL = /^(project|meta|checks|tuning|installation|display|[a-zA-Z]+\[\d+\]( "[^"]*")?): \S/;
+const LABEL = /^(project|meta|checks|tuning|installation|display|designBasis|[a-zA-Z]+\[\d+\]( "[^"]*")?): \S/;
 const REPLACEMENTS: unknown[] = ['?', -1, 0, 1.5, true, null, [], {}, 'TOP9', 'xx', [1, 2]];
 
 describe('damaged projects', () => {

@@ -10,7 +10,7 @@ import { applyGenerated } from '../../../../main/common/generators/apply-generat
 export function mastProject(options: { mastModel?: 'lattice' | 'singleBar'; guySegments?: number; height?: number } = {}): ProjectFile {
   const height = options.height ?? 60;
   const base: ProjectFile = {
-    format: 'stayset-project', version: 1,
+    format: 'stayset-project', version: 2,
     meta: { name: 'Harrow Fell relay mast', site: 'Harrow Fell (fictional)', client: 'Example Telecom', engineer: 'A. N. Engineer', referenceTemperature: 283.15 },
     nodes: [], sections: [], members: [],
     loadCases: [

@@ -3,8 +3,8 @@
 "use strict";
 export const validate = validate10;
 export default validate10;
-const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 1","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":1,"x-message":"{field} must be 1"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"sequences":{"type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"$ref":"#/definitions/report"},"panels":{"type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"type":"array","items":{"$ref":"#/definitions/memberLoss"}}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"},"mass":{"$ref":"#/definitions/nonNegative"}}},"springs":{"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"sequenceStep":{"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}},"sequence":{"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}},"report":{"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}},"panel":{"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}},"pressureCoefficient":{"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}},"areaLoad":{"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}},"memberLoss":{"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}}}};
-const schema126 = {"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}};
+const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 2","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":2,"x-message":"{field} must be 2"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"designBasis":{"$ref":"#/definitions/designBasis"},"sequences":{"type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"$ref":"#/definitions/report"},"panels":{"type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"type":"array","items":{"$ref":"#/definitions/memberLoss"}}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"},"mass":{"$ref":"#/definitions/nonNegative"}}},"springs":{"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"shape":{"enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"$ref":"#/definitions/positive"},"termination":{"enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"$ref":"#/definitions/positive"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"purpose":{"$ref":"#/definitions/casePurpose"},"action":{"enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"sequenceStep":{"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}},"sequence":{"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}},"report":{"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}},"casePurpose":{"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"},"designBasis":{"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}},"panel":{"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}},"pressureCoefficient":{"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}},"areaLoad":{"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}},"memberLoss":{"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}}}};
+const schema150 = {"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}};
 const func2 = Object.prototype.hasOwnProperty;
 const schema12 = {"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}};
 const schema13 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}};
@@ -501,7 +501,7 @@ validate13.errors = vErrors;
 return errors === 0;
 }
 
-const schema25 = {"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}};
+const schema25 = {"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"shape":{"enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"$ref":"#/definitions/positive"},"termination":{"enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}};
 const schema27 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}};
 
 function validate17(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
@@ -882,11 +882,10 @@ vErrors.push(err30);
 errors++;
 }
 }
-if(data.G !== undefined){
-let data14 = data.G;
-if((typeof data14 == "number") && (isFinite(data14))){
-if(data14 <= 0 || isNaN(data14)){
-const err31 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data14};
+if(data.shape !== undefined){
+let data14 = data.shape;
+if(!((((((data14 === "solidRound") || (data14 === "tubeHotFinished")) || (data14 === "tubeColdFormed")) || (data14 === "angle")) || (data14 === "rolledI")) || (data14 === "other"))){
+const err31 = {instancePath:instancePath+"/shape",schemaPath:"#/properties/shape/enum",keyword:"enum",params:{allowedValues: schema25.properties.shape.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.shape.enum,parentSchema:schema25.properties.shape,data:data14};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -896,8 +895,10 @@ vErrors.push(err31);
 errors++;
 }
 }
-else {
-const err32 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data14};
+if(data.bucklingCurve !== undefined){
+let data15 = data.bucklingCurve;
+if(!(((((data15 === "a0") || (data15 === "a")) || (data15 === "b")) || (data15 === "c")) || (data15 === "d"))){
+const err32 = {instancePath:instancePath+"/bucklingCurve",schemaPath:"#/properties/bucklingCurve/enum",keyword:"enum",params:{allowedValues: schema25.properties.bucklingCurve.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.bucklingCurve.enum,parentSchema:schema25.properties.bucklingCurve,data:data15};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -907,11 +908,11 @@ vErrors.push(err32);
 errors++;
 }
 }
-if(data.Iy !== undefined){
-let data15 = data.Iy;
-if((typeof data15 == "number") && (isFinite(data15))){
-if(data15 <= 0 || isNaN(data15)){
-const err33 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data15};
+if(data.radiusOfGyration !== undefined){
+let data16 = data.radiusOfGyration;
+if((typeof data16 == "number") && (isFinite(data16))){
+if(data16 <= 0 || isNaN(data16)){
+const err33 = {instancePath:instancePath+"/radiusOfGyration",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data16};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -922,7 +923,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data15};
+const err34 = {instancePath:instancePath+"/radiusOfGyration",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data16};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -932,11 +933,10 @@ vErrors.push(err34);
 errors++;
 }
 }
-if(data.Iz !== undefined){
-let data16 = data.Iz;
-if((typeof data16 == "number") && (isFinite(data16))){
-if(data16 <= 0 || isNaN(data16)){
-const err35 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data16};
+if(data.termination !== undefined){
+let data17 = data.termination;
+if(!((((((data17 === "socketMetal") || (data17 === "socketResin")) || (data17 === "swaged")) || (data17 === "wedgeSocket")) || (data17 === "clips")) || (data17 === "preformedGrip"))){
+const err35 = {instancePath:instancePath+"/termination",schemaPath:"#/properties/termination/enum",keyword:"enum",params:{allowedValues: schema25.properties.termination.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.termination.enum,parentSchema:schema25.properties.termination,data:data17};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -946,8 +946,11 @@ vErrors.push(err35);
 errors++;
 }
 }
-else {
-const err36 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data16};
+if(data.terminationEfficiency !== undefined){
+let data18 = data.terminationEfficiency;
+if((typeof data18 == "number") && (isFinite(data18))){
+if(data18 > 1 || isNaN(data18)){
+const err36 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema25.properties.terminationEfficiency,data:data18};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -956,12 +959,8 @@ vErrors.push(err36);
 }
 errors++;
 }
-}
-if(data.J !== undefined){
-let data17 = data.J;
-if((typeof data17 == "number") && (isFinite(data17))){
-if(data17 <= 0 || isNaN(data17)){
-const err37 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data17};
+if(data18 <= 0 || isNaN(data18)){
+const err37 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema25.properties.terminationEfficiency,data:data18};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -972,7 +971,7 @@ errors++;
 }
 }
 else {
-const err38 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data17};
+const err38 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.terminationEfficiency.type,parentSchema:schema25.properties.terminationEfficiency,data:data18};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -982,11 +981,11 @@ vErrors.push(err38);
 errors++;
 }
 }
-if(data.yieldStrength !== undefined){
-let data18 = data.yieldStrength;
-if((typeof data18 == "number") && (isFinite(data18))){
-if(data18 <= 0 || isNaN(data18)){
-const err39 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data18};
+if(data.G !== undefined){
+let data19 = data.G;
+if((typeof data19 == "number") && (isFinite(data19))){
+if(data19 <= 0 || isNaN(data19)){
+const err39 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data19};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -997,7 +996,7 @@ errors++;
 }
 }
 else {
-const err40 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data18};
+const err40 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data19};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -1007,9 +1006,11 @@ vErrors.push(err40);
 errors++;
 }
 }
-}
-else {
-const err41 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema25.type,parentSchema:schema25,data};
+if(data.Iy !== undefined){
+let data20 = data.Iy;
+if((typeof data20 == "number") && (isFinite(data20))){
+if(data20 <= 0 || isNaN(data20)){
+const err41 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data20};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -1018,14 +1019,112 @@ vErrors.push(err41);
 }
 errors++;
 }
+}
+else {
+const err42 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data20};
+if(vErrors === null){
+vErrors = [err42];
+}
+else {
+vErrors.push(err42);
+}
+errors++;
+}
+}
+if(data.Iz !== undefined){
+let data21 = data.Iz;
+if((typeof data21 == "number") && (isFinite(data21))){
+if(data21 <= 0 || isNaN(data21)){
+const err43 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data21};
+if(vErrors === null){
+vErrors = [err43];
+}
+else {
+vErrors.push(err43);
+}
+errors++;
+}
+}
+else {
+const err44 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data21};
+if(vErrors === null){
+vErrors = [err44];
+}
+else {
+vErrors.push(err44);
+}
+errors++;
+}
+}
+if(data.J !== undefined){
+let data22 = data.J;
+if((typeof data22 == "number") && (isFinite(data22))){
+if(data22 <= 0 || isNaN(data22)){
+const err45 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data22};
+if(vErrors === null){
+vErrors = [err45];
+}
+else {
+vErrors.push(err45);
+}
+errors++;
+}
+}
+else {
+const err46 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data22};
+if(vErrors === null){
+vErrors = [err46];
+}
+else {
+vErrors.push(err46);
+}
+errors++;
+}
+}
+if(data.yieldStrength !== undefined){
+let data23 = data.yieldStrength;
+if((typeof data23 == "number") && (isFinite(data23))){
+if(data23 <= 0 || isNaN(data23)){
+const err47 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data23};
+if(vErrors === null){
+vErrors = [err47];
+}
+else {
+vErrors.push(err47);
+}
+errors++;
+}
+}
+else {
+const err48 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data23};
+if(vErrors === null){
+vErrors = [err48];
+}
+else {
+vErrors.push(err48);
+}
+errors++;
+}
+}
+}
+else {
+const err49 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema25.type,parentSchema:schema25,data};
+if(vErrors === null){
+vErrors = [err49];
+}
+else {
+vErrors.push(err49);
+}
+errors++;
+}
 validate17.errors = vErrors;
 return errors === 0;
 }
 
-const schema37 = {"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
-const schema45 = {"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}};
+const schema38 = {"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"$ref":"#/definitions/positive"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
+const schema47 = {"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}};
 const pattern8 = new RegExp("^(?!.*(.).*\\1)[xyz]{0,3}$", "u");
-const schema42 = {"type":"array","items":{"$ref":"#/definitions/id"}};
+const schema43 = {"type":"array","items":{"$ref":"#/definitions/id"}};
 
 function validate20(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -1059,7 +1158,7 @@ errors++;
 }
 }
 else {
-const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema42.type,parentSchema:schema42,data};
+const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema43.type,parentSchema:schema43,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1093,7 +1192,7 @@ errors++;
 }
 var valid0 = _errs2 === errors;
 if(valid0){
-const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema37.not,parentSchema:schema37,data};
+const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema38.not,parentSchema:schema38,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1115,7 +1214,7 @@ vErrors = null;
 }
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema37.required,parentSchema:schema37,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema38.required,parentSchema:schema38,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1125,7 +1224,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.kind === undefined){
-const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema37.required,parentSchema:schema37,data};
+const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.required,parentSchema:schema38,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1135,7 +1234,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.from === undefined){
-const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema37.required,parentSchema:schema37,data};
+const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema38.required,parentSchema:schema38,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1145,7 +1244,7 @@ vErrors.push(err4);
 errors++;
 }
 if(data.to === undefined){
-const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema37.required,parentSchema:schema37,data};
+const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema38.required,parentSchema:schema38,data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1155,7 +1254,7 @@ vErrors.push(err5);
 errors++;
 }
 if(data.section === undefined){
-const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema37.required,parentSchema:schema37,data};
+const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema38.required,parentSchema:schema38,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1165,8 +1264,8 @@ vErrors.push(err6);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema37.properties, key0))){
-const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema37,data};
+if(!(func2.call(schema38.properties, key0))){
+const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema38,data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1204,7 +1303,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "cable") || (data1 === "bar")) || (data1 === "beam"))){
-const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema37.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema37.properties.kind.enum,parentSchema:schema37.properties.kind,data:data1};
+const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema38.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema38.properties.kind.enum,parentSchema:schema38.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -1292,7 +1391,7 @@ errors++;
 if(data.segments !== undefined){
 let data5 = data.segments;
 if(!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))){
-const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema37.properties.segments.type,parentSchema:schema37.properties.segments,data:data5};
+const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema38.properties.segments.type,parentSchema:schema38.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -1303,7 +1402,7 @@ errors++;
 }
 if((typeof data5 == "number") && (isFinite(data5))){
 if(data5 > 10000 || isNaN(data5)){
-const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/maximum",keyword:"maximum",params:{comparison: "<=", limit: 10000},message:"must be <= 10000",schema:10000,parentSchema:schema37.properties.segments,data:data5};
+const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/maximum",keyword:"maximum",params:{comparison: "<=", limit: 10000},message:"must be <= 10000",schema:10000,parentSchema:schema38.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -1313,7 +1412,7 @@ vErrors.push(err18);
 errors++;
 }
 if(data5 < 1 || isNaN(data5)){
-const err19 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema37.properties.segments,data:data5};
+const err19 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema38.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -1327,7 +1426,7 @@ errors++;
 if(data.pretension !== undefined){
 let data6 = data.pretension;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err20 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema37.properties.pretension.type,parentSchema:schema37.properties.pretension,data:data6};
+const err20 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema38.properties.pretension.type,parentSchema:schema38.properties.pretension,data:data6};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -1340,7 +1439,7 @@ errors++;
 if(data.unstressedLength !== undefined){
 let data7 = data.unstressedLength;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err21 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema37.properties.unstressedLength.type,parentSchema:schema37.properties.unstressedLength,data:data7};
+const err21 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema38.properties.unstressedLength.type,parentSchema:schema38.properties.unstressedLength,data:data7};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1359,7 +1458,7 @@ errors = vErrors.length;
 if(data.generatedBy !== undefined){
 let data9 = data.generatedBy;
 if(typeof data9 !== "string"){
-const err22 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema37.properties.generatedBy.type,parentSchema:schema37.properties.generatedBy,data:data9};
+const err22 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema38.properties.generatedBy.type,parentSchema:schema38.properties.generatedBy,data:data9};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -1369,11 +1468,11 @@ vErrors.push(err22);
 errors++;
 }
 }
-if(data.orientation !== undefined){
-let data10 = data.orientation;
-if(Array.isArray(data10)){
-if(data10.length > 3){
-const err23 = {instancePath:instancePath+"/orientation",schemaPath:"#/definitions/vec3/maxItems",keyword:"maxItems",params:{limit: 3},message:"must NOT have more than 3 items",schema:3,parentSchema:schema16,data:data10};
+if(data.terminationEfficiency !== undefined){
+let data10 = data.terminationEfficiency;
+if((typeof data10 == "number") && (isFinite(data10))){
+if(data10 > 1 || isNaN(data10)){
+const err23 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema38.properties.terminationEfficiency,data:data10};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -1382,8 +1481,8 @@ vErrors.push(err23);
 }
 errors++;
 }
-if(data10.length < 3){
-const err24 = {instancePath:instancePath+"/orientation",schemaPath:"#/definitions/vec3/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema16,data:data10};
+if(data10 <= 0 || isNaN(data10)){
+const err24 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema38.properties.terminationEfficiency,data:data10};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -1392,11 +1491,9 @@ vErrors.push(err24);
 }
 errors++;
 }
-const len0 = data10.length;
-for(let i0=0; i0<len0; i0++){
-let data11 = data10[i0];
-if(!((typeof data11 == "number") && (isFinite(data11)))){
-const err25 = {instancePath:instancePath+"/orientation/" + i0,schemaPath:"#/definitions/vec3/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema16.items.type,parentSchema:schema16.items,data:data11};
+}
+else {
+const err25 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema38.properties.terminationEfficiency.type,parentSchema:schema38.properties.terminationEfficiency,data:data10};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -1406,9 +1503,11 @@ vErrors.push(err25);
 errors++;
 }
 }
-}
-else {
-const err26 = {instancePath:instancePath+"/orientation",schemaPath:"#/definitions/vec3/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema16.type,parentSchema:schema16,data:data10};
+if(data.bucklingLength !== undefined){
+let data11 = data.bucklingLength;
+if((typeof data11 == "number") && (isFinite(data11))){
+if(data11 <= 0 || isNaN(data11)){
+const err26 = {instancePath:instancePath+"/bucklingLength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data11};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -1418,12 +1517,8 @@ vErrors.push(err26);
 errors++;
 }
 }
-if(data.releases !== undefined){
-let data12 = data.releases;
-if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
-for(const key1 in data12){
-if(!((key1 === "start") || (key1 === "end"))){
-const err27 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema37.properties.releases,data:data12};
+else {
+const err27 = {instancePath:instancePath+"/bucklingLength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data11};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -1433,11 +1528,11 @@ vErrors.push(err27);
 errors++;
 }
 }
-if(data12.start !== undefined){
-let data13 = data12.start;
-if(typeof data13 === "string"){
-if(!pattern8.test(data13)){
-const err28 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema45,data:data13};
+if(data.orientation !== undefined){
+let data12 = data.orientation;
+if(Array.isArray(data12)){
+if(data12.length > 3){
+const err28 = {instancePath:instancePath+"/orientation",schemaPath:"#/definitions/vec3/maxItems",keyword:"maxItems",params:{limit: 3},message:"must NOT have more than 3 items",schema:3,parentSchema:schema16,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -1446,9 +1541,8 @@ vErrors.push(err28);
 }
 errors++;
 }
-}
-else {
-const err29 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema45.type,parentSchema:schema45,data:data13};
+if(data12.length < 3){
+const err29 = {instancePath:instancePath+"/orientation",schemaPath:"#/definitions/vec3/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema16,data:data12};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -1457,12 +1551,11 @@ vErrors.push(err29);
 }
 errors++;
 }
-}
-if(data12.end !== undefined){
-let data14 = data12.end;
-if(typeof data14 === "string"){
-if(!pattern8.test(data14)){
-const err30 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema45,data:data14};
+const len0 = data12.length;
+for(let i0=0; i0<len0; i0++){
+let data13 = data12[i0];
+if(!((typeof data13 == "number") && (isFinite(data13)))){
+const err30 = {instancePath:instancePath+"/orientation/" + i0,schemaPath:"#/definitions/vec3/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema16.items.type,parentSchema:schema16.items,data:data13};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -1472,8 +1565,9 @@ vErrors.push(err30);
 errors++;
 }
 }
+}
 else {
-const err31 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema45.type,parentSchema:schema45,data:data14};
+const err31 = {instancePath:instancePath+"/orientation",schemaPath:"#/definitions/vec3/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema16.type,parentSchema:schema16,data:data12};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -1483,9 +1577,12 @@ vErrors.push(err31);
 errors++;
 }
 }
-}
-else {
-const err32 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema37.properties.releases.type,parentSchema:schema37.properties.releases,data:data12};
+if(data.releases !== undefined){
+let data14 = data.releases;
+if(data14 && typeof data14 == "object" && !Array.isArray(data14)){
+for(const key1 in data14){
+if(!((key1 === "start") || (key1 === "end"))){
+const err32 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema38.properties.releases,data:data14};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -1495,9 +1592,11 @@ vErrors.push(err32);
 errors++;
 }
 }
-}
-else {
-const err33 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema37.type,parentSchema:schema37,data};
+if(data14.start !== undefined){
+let data15 = data14.start;
+if(typeof data15 === "string"){
+if(!pattern8.test(data15)){
+const err33 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema47,data:data15};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -1506,19 +1605,80 @@ vErrors.push(err33);
 }
 errors++;
 }
+}
+else {
+const err34 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema47.type,parentSchema:schema47,data:data15};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+if(data14.end !== undefined){
+let data16 = data14.end;
+if(typeof data16 === "string"){
+if(!pattern8.test(data16)){
+const err35 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema47,data:data16};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+}
+else {
+const err36 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema47.type,parentSchema:schema47,data:data16};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+}
+else {
+const err37 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.properties.releases.type,parentSchema:schema38.properties.releases,data:data14};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+}
+else {
+const err38 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.type,parentSchema:schema38,data};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
+}
+errors++;
+}
 validate19.errors = vErrors;
 return errors === 0;
 }
 
-const schema47 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}};
-const schema49 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}};
+const schema49 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"purpose":{"$ref":"#/definitions/casePurpose"},"action":{"enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}};
+const schema64 = {"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"};
+const schema51 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}};
 
 function validate24(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.node === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema49.required,parentSchema:schema49,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema51.required,parentSchema:schema51,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1528,7 +1688,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.force === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema49.required,parentSchema:schema49,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema51.required,parentSchema:schema51,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1539,7 +1699,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "node") || (key0 === "force")) || (key0 === "moment"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema49,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema51,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1674,7 +1834,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema49.type,parentSchema:schema49,data};
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema51.type,parentSchema:schema51,data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -1687,15 +1847,15 @@ validate24.errors = vErrors;
 return errors === 0;
 }
 
-const schema53 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
-const schema55 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
+const schema55 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema57 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
 
 function validate27(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema55.required,parentSchema:schema55,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema57.required,parentSchema:schema57,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1709,7 +1869,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "power"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema55.oneOf[0].required,parentSchema:schema55.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema57.oneOf[0].required,parentSchema:schema57.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1719,7 +1879,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.exponent === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema55.oneOf[0].required,parentSchema:schema55.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema57.oneOf[0].required,parentSchema:schema57.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1730,7 +1890,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((key0 === "kind") || (key0 === "exponent"))){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema55.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema57.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1743,7 +1903,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("power" !== data0){
-const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema55.oneOf[0].properties.kind,data:data0};
+const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema57.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1780,7 +1940,7 @@ errors++;
 }
 }
 else {
-const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.oneOf[0].type,parentSchema:schema55.oneOf[0],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema57.oneOf[0].type,parentSchema:schema57.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1793,7 +1953,7 @@ errors++;
 else if(tag0 === "log"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema55.oneOf[1].required,parentSchema:schema55.oneOf[1],data};
+const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema57.oneOf[1].required,parentSchema:schema57.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1803,7 +1963,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data.roughnessLength === undefined){
-const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema55.oneOf[1].required,parentSchema:schema55.oneOf[1],data};
+const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema57.oneOf[1].required,parentSchema:schema57.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -1814,7 +1974,7 @@ errors++;
 }
 for(const key1 in data){
 if(!((key1 === "kind") || (key1 === "roughnessLength"))){
-const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema55.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema57.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -1827,7 +1987,7 @@ errors++;
 if(data.kind !== undefined){
 let data2 = data.kind;
 if("log" !== data2){
-const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema55.oneOf[1].properties.kind,data:data2};
+const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema57.oneOf[1].properties.kind,data:data2};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -1864,7 +2024,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.oneOf[1].type,parentSchema:schema55.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema57.oneOf[1].type,parentSchema:schema57.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -1877,7 +2037,7 @@ errors++;
 else if(tag0 === "uniform"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema55.oneOf[2].required,parentSchema:schema55.oneOf[2],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema57.oneOf[2].required,parentSchema:schema57.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -1888,7 +2048,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(key2 === "kind")){
-const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema55.oneOf[2],data};
+const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema57.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -1901,7 +2061,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("uniform" !== data4){
-const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema55.oneOf[2].properties.kind,data:data4};
+const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema57.oneOf[2].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -1913,7 +2073,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.oneOf[2].type,parentSchema:schema55.oneOf[2],data};
+const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema57.oneOf[2].type,parentSchema:schema57.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -1924,7 +2084,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema55.discriminator,parentSchema:schema55,data};
+const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema57.discriminator,parentSchema:schema57,data};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -1935,7 +2095,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema55.discriminator,parentSchema:schema55,data};
+const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema57.discriminator,parentSchema:schema57,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -1946,7 +2106,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.type,parentSchema:schema55,data};
+const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema57.type,parentSchema:schema57,data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1965,7 +2125,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.direction === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema53.required,parentSchema:schema53,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema55.required,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1975,7 +2135,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.speed === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema53.required,parentSchema:schema53,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema55.required,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1986,7 +2146,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "direction") || (key0 === "speed")) || (key0 === "profile")) || (key0 === "airDensity")) || (key0 === "groups"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema53,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1999,7 +2159,7 @@ errors++;
 if(data.direction !== undefined){
 let data0 = data.direction;
 if(!((typeof data0 == "number") && (isFinite(data0)))){
-const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema53.properties.direction.type,parentSchema:schema53.properties.direction,data:data0};
+const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema55.properties.direction.type,parentSchema:schema55.properties.direction,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2073,7 +2233,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema53.type,parentSchema:schema53,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.type,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2086,14 +2246,14 @@ validate26.errors = vErrors;
 return errors === 0;
 }
 
-const schema59 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema61 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
 
 function validate31(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.thickness === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema59.required,parentSchema:schema59,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema61.required,parentSchema:schema61,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2104,7 +2264,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "thickness") || (key0 === "density")) || (key0 === "groups"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema59,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema61,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2172,7 +2332,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema59.type,parentSchema:schema59,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema61.type,parentSchema:schema61,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2185,14 +2345,14 @@ validate31.errors = vErrors;
 return errors === 0;
 }
 
-const schema62 = {"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}};
+const schema65 = {"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}};
 
 function validate34(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.node === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema62.required,parentSchema:schema62,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema65.required,parentSchema:schema65,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2203,7 +2363,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "node") || (key0 === "x")) || (key0 === "y")) || (key0 === "z")) || (key0 === "rx")) || (key0 === "ry")) || (key0 === "rz"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema62,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema65,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2241,7 +2401,7 @@ errors++;
 if(data.x !== undefined){
 let data1 = data.x;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err4 = {instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.x.type,parentSchema:schema62.properties.x,data:data1};
+const err4 = {instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.properties.x.type,parentSchema:schema65.properties.x,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2254,7 +2414,7 @@ errors++;
 if(data.y !== undefined){
 let data2 = data.y;
 if(!((typeof data2 == "number") && (isFinite(data2)))){
-const err5 = {instancePath:instancePath+"/y",schemaPath:"#/properties/y/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.y.type,parentSchema:schema62.properties.y,data:data2};
+const err5 = {instancePath:instancePath+"/y",schemaPath:"#/properties/y/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.properties.y.type,parentSchema:schema65.properties.y,data:data2};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2267,7 +2427,7 @@ errors++;
 if(data.z !== undefined){
 let data3 = data.z;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err6 = {instancePath:instancePath+"/z",schemaPath:"#/properties/z/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.z.type,parentSchema:schema62.properties.z,data:data3};
+const err6 = {instancePath:instancePath+"/z",schemaPath:"#/properties/z/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.properties.z.type,parentSchema:schema65.properties.z,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2280,7 +2440,7 @@ errors++;
 if(data.rx !== undefined){
 let data4 = data.rx;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err7 = {instancePath:instancePath+"/rx",schemaPath:"#/properties/rx/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.rx.type,parentSchema:schema62.properties.rx,data:data4};
+const err7 = {instancePath:instancePath+"/rx",schemaPath:"#/properties/rx/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.properties.rx.type,parentSchema:schema65.properties.rx,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2293,7 +2453,7 @@ errors++;
 if(data.ry !== undefined){
 let data5 = data.ry;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err8 = {instancePath:instancePath+"/ry",schemaPath:"#/properties/ry/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.ry.type,parentSchema:schema62.properties.ry,data:data5};
+const err8 = {instancePath:instancePath+"/ry",schemaPath:"#/properties/ry/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.properties.ry.type,parentSchema:schema65.properties.ry,data:data5};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2306,7 +2466,7 @@ errors++;
 if(data.rz !== undefined){
 let data6 = data.rz;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err9 = {instancePath:instancePath+"/rz",schemaPath:"#/properties/rz/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema62.properties.rz.type,parentSchema:schema62.properties.rz,data:data6};
+const err9 = {instancePath:instancePath+"/rz",schemaPath:"#/properties/rz/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.properties.rz.type,parentSchema:schema65.properties.rz,data:data6};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2318,7 +2478,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.type,parentSchema:schema62,data};
+const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema65.type,parentSchema:schema65,data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2331,15 +2491,15 @@ validate34.errors = vErrors;
 return errors === 0;
 }
 
-const schema64 = {"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}};
-const schema65 = {"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}};
+const schema67 = {"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}};
+const schema68 = {"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}};
 
 function validate38(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.region === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "region"},message:"must have required property '"+"region"+"'",schema:schema65.required,parentSchema:schema65,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "region"},message:"must have required property '"+"region"+"'",schema:schema68.required,parentSchema:schema68,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2349,7 +2509,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.cp === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "cp"},message:"must have required property '"+"cp"+"'",schema:schema65.required,parentSchema:schema65,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "cp"},message:"must have required property '"+"cp"+"'",schema:schema68.required,parentSchema:schema68,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2360,7 +2520,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((key0 === "region") || (key0 === "cp"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema65,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema68,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2398,7 +2558,7 @@ errors++;
 if(data.cp !== undefined){
 let data1 = data.cp;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err5 = {instancePath:instancePath+"/cp",schemaPath:"#/properties/cp/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.properties.cp.type,parentSchema:schema65.properties.cp,data:data1};
+const err5 = {instancePath:instancePath+"/cp",schemaPath:"#/properties/cp/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema68.properties.cp.type,parentSchema:schema68.properties.cp,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2410,7 +2570,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema65.type,parentSchema:schema65,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema68.type,parentSchema:schema68,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2429,7 +2589,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema64.required,parentSchema:schema64,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema67.required,parentSchema:schema67,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2439,7 +2599,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.value === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema64.required,parentSchema:schema64,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema67.required,parentSchema:schema67,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2450,7 +2610,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "kind") || (key0 === "value")) || (key0 === "panels")) || (key0 === "coefficients"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema64,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema67,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2463,7 +2623,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if(!(((data0 === "snow") || (data0 === "cladding")) || (data0 === "pressure"))){
-const err3 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema64.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema64.properties.kind.enum,parentSchema:schema64.properties.kind,data:data0};
+const err3 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema67.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema67.properties.kind.enum,parentSchema:schema67.properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2476,7 +2636,7 @@ errors++;
 if(data.value !== undefined){
 let data1 = data.value;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err4 = {instancePath:instancePath+"/value",schemaPath:"#/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema64.properties.value.type,parentSchema:schema64.properties.value,data:data1};
+const err4 = {instancePath:instancePath+"/value",schemaPath:"#/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema67.properties.value.type,parentSchema:schema67.properties.value,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2504,7 +2664,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err5 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema64.properties.coefficients.type,parentSchema:schema64.properties.coefficients,data:data3};
+const err5 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema67.properties.coefficients.type,parentSchema:schema67.properties.coefficients,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2516,7 +2676,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema64.type,parentSchema:schema64,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema67.type,parentSchema:schema67,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2535,7 +2695,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema47.required,parentSchema:schema47,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema49.required,parentSchema:schema49,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2545,8 +2705,8 @@ vErrors.push(err0);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema47.properties, key0))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema47,data};
+if(!(func2.call(schema49.properties, key0))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema49,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2584,7 +2744,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema47.properties.label.type,parentSchema:schema47.properties.label,data:data1};
+const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema49.properties.label.type,parentSchema:schema49.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2597,7 +2757,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data2 = data.selfWeight;
 if(typeof data2 !== "boolean"){
-const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema47.properties.selfWeight.type,parentSchema:schema47.properties.selfWeight,data:data2};
+const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema49.properties.selfWeight.type,parentSchema:schema49.properties.selfWeight,data:data2};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2610,7 +2770,7 @@ errors++;
 if(data.temperatureChange !== undefined){
 let data3 = data.temperatureChange;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema47.properties.temperatureChange.type,parentSchema:schema47.properties.temperatureChange,data:data3};
+const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema49.properties.temperatureChange.type,parentSchema:schema49.properties.temperatureChange,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2632,7 +2792,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema47.properties.nodalLoads.type,parentSchema:schema47.properties.nodalLoads,data:data4};
+const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema49.properties.nodalLoads.type,parentSchema:schema49.properties.nodalLoads,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2654,19 +2814,10 @@ vErrors = vErrors === null ? validate31.errors : vErrors.concat(validate31.error
 errors = vErrors.length;
 }
 }
-if(data.displacements !== undefined){
-let data8 = data.displacements;
-if(Array.isArray(data8)){
-const len1 = data8.length;
-for(let i1=0; i1<len1; i1++){
-if(!(validate34(data8[i1], {instancePath:instancePath+"/displacements/" + i1,parentData:data8,parentDataProperty:i1,rootData}))){
-vErrors = vErrors === null ? validate34.errors : vErrors.concat(validate34.errors);
-errors = vErrors.length;
-}
-}
-}
-else {
-const err8 = {instancePath:instancePath+"/displacements",schemaPath:"#/properties/displacements/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema47.properties.displacements.type,parentSchema:schema47.properties.displacements,data:data8};
+if(data.purpose !== undefined){
+let data8 = data.purpose;
+if(!((((data8 === "ultimate") || (data8 === "serviceability")) || (data8 === "accidental")) || (data8 === "componentOnly"))){
+const err8 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema64.enum},message:"must be equal to one of the allowed values",schema:schema64.enum,parentSchema:schema64,data:data8};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2676,19 +2827,10 @@ vErrors.push(err8);
 errors++;
 }
 }
-if(data.areaLoads !== undefined){
-let data10 = data.areaLoads;
-if(Array.isArray(data10)){
-const len2 = data10.length;
-for(let i2=0; i2<len2; i2++){
-if(!(validate36(data10[i2], {instancePath:instancePath+"/areaLoads/" + i2,parentData:data10,parentDataProperty:i2,rootData}))){
-vErrors = vErrors === null ? validate36.errors : vErrors.concat(validate36.errors);
-errors = vErrors.length;
-}
-}
-}
-else {
-const err9 = {instancePath:instancePath+"/areaLoads",schemaPath:"#/properties/areaLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema47.properties.areaLoads.type,parentSchema:schema47.properties.areaLoads,data:data10};
+if(data.action !== undefined){
+let data9 = data.action;
+if(!((((((data9 === "permanent") || (data9 === "wind")) || (data9 === "ice")) || (data9 === "iceWithWind")) || (data9 === "temperature")) || (data9 === "accidental"))){
+const err9 = {instancePath:instancePath+"/action",schemaPath:"#/properties/action/enum",keyword:"enum",params:{allowedValues: schema49.properties.action.enum},message:"must be equal to one of the allowed values",schema:schema49.properties.action.enum,parentSchema:schema49.properties.action,data:data9};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2698,9 +2840,19 @@ vErrors.push(err9);
 errors++;
 }
 }
+if(data.displacements !== undefined){
+let data10 = data.displacements;
+if(Array.isArray(data10)){
+const len1 = data10.length;
+for(let i1=0; i1<len1; i1++){
+if(!(validate34(data10[i1], {instancePath:instancePath+"/displacements/" + i1,parentData:data10,parentDataProperty:i1,rootData}))){
+vErrors = vErrors === null ? validate34.errors : vErrors.concat(validate34.errors);
+errors = vErrors.length;
+}
+}
 }
 else {
-const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema47.type,parentSchema:schema47,data};
+const err10 = {instancePath:instancePath+"/displacements",schemaPath:"#/properties/displacements/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema49.properties.displacements.type,parentSchema:schema49.properties.displacements,data:data10};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2709,18 +2861,52 @@ vErrors.push(err10);
 }
 errors++;
 }
+}
+if(data.areaLoads !== undefined){
+let data12 = data.areaLoads;
+if(Array.isArray(data12)){
+const len2 = data12.length;
+for(let i2=0; i2<len2; i2++){
+if(!(validate36(data12[i2], {instancePath:instancePath+"/areaLoads/" + i2,parentData:data12,parentDataProperty:i2,rootData}))){
+vErrors = vErrors === null ? validate36.errors : vErrors.concat(validate36.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err11 = {instancePath:instancePath+"/areaLoads",schemaPath:"#/properties/areaLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema49.properties.areaLoads.type,parentSchema:schema49.properties.areaLoads,data:data12};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+}
+}
+else {
+const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema49.type,parentSchema:schema49,data};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
 validate23.errors = vErrors;
 return errors === 0;
 }
 
-const schema67 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
+const schema70 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
 
 function validate42(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema67.required,parentSchema:schema67,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema70.required,parentSchema:schema70,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2730,7 +2916,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.members === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema67.required,parentSchema:schema67,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema70.required,parentSchema:schema70,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2741,7 +2927,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "label")) || (key0 === "members"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema67,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema70,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2779,7 +2965,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema67.properties.label.type,parentSchema:schema67.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema70.properties.label.type,parentSchema:schema70.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2797,7 +2983,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema67.type,parentSchema:schema67,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema70.type,parentSchema:schema70,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2810,14 +2996,14 @@ validate42.errors = vErrors;
 return errors === 0;
 }
 
-const schema69 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}}}};
+const schema72 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}};
 
 function validate45(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema69.required,parentSchema:schema69,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema72.required,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2827,7 +3013,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.factors === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema69.required,parentSchema:schema69,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema72.required,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2837,8 +3023,8 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!(((key0 === "id") || (key0 === "label")) || (key0 === "factors"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema69,data};
+if(!((((key0 === "id") || (key0 === "label")) || (key0 === "factors")) || (key0 === "purpose"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2876,7 +3062,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema69.properties.label.type,parentSchema:schema69.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema72.properties.label.type,parentSchema:schema72.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2890,7 +3076,7 @@ if(data.factors !== undefined){
 let data2 = data.factors;
 if(Array.isArray(data2)){
 if(data2.length < 1){
-const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema69.properties.factors,data:data2};
+const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema72.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2904,7 +3090,7 @@ for(let i0=0; i0<len0; i0++){
 let data3 = data2[i0];
 if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
 if(data3.case === undefined){
-const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema69.properties.factors.items.required,parentSchema:schema69.properties.factors.items,data:data3};
+const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema72.properties.factors.items.required,parentSchema:schema72.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2914,7 +3100,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data3.factor === undefined){
-const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema69.properties.factors.items.required,parentSchema:schema69.properties.factors.items,data:data3};
+const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema72.properties.factors.items.required,parentSchema:schema72.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2925,7 +3111,7 @@ errors++;
 }
 for(const key1 in data3){
 if(!((key1 === "case") || (key1 === "factor"))){
-const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema69.properties.factors.items,data:data3};
+const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema72.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2963,7 +3149,7 @@ errors++;
 if(data3.factor !== undefined){
 let data5 = data3.factor;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.factors.items.properties.factor.type,parentSchema:schema69.properties.factors.items.properties.factor,data:data5};
+const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema72.properties.factors.items.properties.factor.type,parentSchema:schema72.properties.factors.items.properties.factor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -2975,7 +3161,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema69.properties.factors.items.type,parentSchema:schema69.properties.factors.items,data:data3};
+const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.properties.factors.items.type,parentSchema:schema72.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -2987,7 +3173,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema69.properties.factors.type,parentSchema:schema69.properties.factors,data:data2};
+const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema72.properties.factors.type,parentSchema:schema72.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2997,9 +3183,10 @@ vErrors.push(err14);
 errors++;
 }
 }
-}
-else {
-const err15 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema69.type,parentSchema:schema69,data};
+if(data.purpose !== undefined){
+let data6 = data.purpose;
+if(!((((data6 === "ultimate") || (data6 === "serviceability")) || (data6 === "accidental")) || (data6 === "componentOnly"))){
+const err15 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema64.enum},message:"must be equal to one of the allowed values",schema:schema64.enum,parentSchema:schema64,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3008,18 +3195,30 @@ vErrors.push(err15);
 }
 errors++;
 }
+}
+}
+else {
+const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.type,parentSchema:schema72,data};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
 validate45.errors = vErrors;
 return errors === 0;
 }
 
-const schema72 = {"type":"object","additionalProperties":false,"properties":{"resistanceFactor":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"}}};
-const schema74 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
+const schema76 = {"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}};
+const schema78 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
 
 function validate49(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(!(data && typeof data == "object" && !Array.isArray(data))){
-const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema74.type,parentSchema:schema74,data};
+const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema78.type,parentSchema:schema78,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3034,7 +3233,7 @@ let passing0 = null;
 const _errs2 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.fractionOfSpan === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema74.oneOf[0].required,parentSchema:schema74.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema78.oneOf[0].required,parentSchema:schema78.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3045,7 +3244,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(key0 === "fractionOfSpan")){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema74.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema78.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3082,7 +3281,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema74.oneOf[0].type,parentSchema:schema74.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema78.oneOf[0].type,parentSchema:schema78.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3099,7 +3298,7 @@ passing0 = 0;
 const _errs9 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.absolute === undefined){
-const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema74.oneOf[1].required,parentSchema:schema74.oneOf[1],data};
+const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema78.oneOf[1].required,parentSchema:schema78.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3110,7 +3309,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(key1 === "absolute")){
-const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema74.oneOf[1],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema78.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3147,7 +3346,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema74.oneOf[1].type,parentSchema:schema74.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema78.oneOf[1].type,parentSchema:schema78.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3168,7 +3367,7 @@ passing0 = 1;
 }
 }
 if(!valid0){
-const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema74.oneOf,parentSchema:schema74,data};
+const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema78.oneOf,parentSchema:schema78,data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3198,48 +3397,13 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
-if(!((((((key0 === "resistanceFactor") || (key0 === "noSlackGroups")) || (key0 === "sagLimits")) || (key0 === "displacementLimits")) || (key0 === "tiltLimits")) || (key0 === "upliftNodes"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema72,data};
+if(!((((((((key0 === "noSlackGroups") || (key0 === "sagLimits")) || (key0 === "displacementLimits")) || (key0 === "tiltLimits")) || (key0 === "upliftNodes")) || (key0 === "minimumTension")) || (key0 === "memberDesign")) || (key0 === "twistLimits"))){
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema76,data};
 if(vErrors === null){
 vErrors = [err0];
 }
 else {
 vErrors.push(err0);
-}
-errors++;
-}
-}
-if(data.resistanceFactor !== undefined){
-let data0 = data.resistanceFactor;
-if((typeof data0 == "number") && (isFinite(data0))){
-if(data0 > 1 || isNaN(data0)){
-const err1 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema72.properties.resistanceFactor,data:data0};
-if(vErrors === null){
-vErrors = [err1];
-}
-else {
-vErrors.push(err1);
-}
-errors++;
-}
-if(data0 <= 0 || isNaN(data0)){
-const err2 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema72.properties.resistanceFactor,data:data0};
-if(vErrors === null){
-vErrors = [err2];
-}
-else {
-vErrors.push(err2);
-}
-errors++;
-}
-}
-else {
-const err3 = {instancePath:instancePath+"/resistanceFactor",schemaPath:"#/properties/resistanceFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema72.properties.resistanceFactor.type,parentSchema:schema72.properties.resistanceFactor,data:data0};
-if(vErrors === null){
-vErrors = [err3];
-}
-else {
-vErrors.push(err3);
 }
 errors++;
 }
@@ -3251,14 +3415,49 @@ errors = vErrors.length;
 }
 }
 if(data.sagLimits !== undefined){
-let data2 = data.sagLimits;
-if(Array.isArray(data2)){
-const len0 = data2.length;
+let data1 = data.sagLimits;
+if(Array.isArray(data1)){
+const len0 = data1.length;
 for(let i0=0; i0<len0; i0++){
-let data3 = data2[i0];
-if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
-if(data3.group === undefined){
-const err4 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema72.properties.sagLimits.items.required,parentSchema:schema72.properties.sagLimits.items,data:data3};
+let data2 = data1[i0];
+if(data2 && typeof data2 == "object" && !Array.isArray(data2)){
+if(data2.group === undefined){
+const err1 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema76.properties.sagLimits.items.required,parentSchema:schema76.properties.sagLimits.items,data:data2};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+if(data2.limit === undefined){
+const err2 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema76.properties.sagLimits.items.required,parentSchema:schema76.properties.sagLimits.items,data:data2};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+for(const key1 in data2){
+if(!((key1 === "group") || (key1 === "limit"))){
+const err3 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema76.properties.sagLimits.items,data:data2};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data2.group !== undefined){
+let data3 = data2.group;
+if(typeof data3 === "string"){
+if(!pattern0.test(data3)){
+const err4 = {instancePath:instancePath+"/sagLimits/" + i0+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data3};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3267,8 +3466,9 @@ vErrors.push(err4);
 }
 errors++;
 }
-if(data3.limit === undefined){
-const err5 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema72.properties.sagLimits.items.required,parentSchema:schema72.properties.sagLimits.items,data:data3};
+}
+else {
+const err5 = {instancePath:instancePath+"/sagLimits/" + i0+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3277,9 +3477,16 @@ vErrors.push(err5);
 }
 errors++;
 }
-for(const key1 in data3){
-if(!((key1 === "group") || (key1 === "limit"))){
-const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema72.properties.sagLimits.items,data:data3};
+}
+if(data2.limit !== undefined){
+if(!(validate49(data2.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data2,parentDataProperty:"limit",rootData}))){
+vErrors = vErrors === null ? validate49.errors : vErrors.concat(validate49.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.properties.sagLimits.items.type,parentSchema:schema76.properties.sagLimits.items,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3289,11 +3496,9 @@ vErrors.push(err6);
 errors++;
 }
 }
-if(data3.group !== undefined){
-let data4 = data3.group;
-if(typeof data4 === "string"){
-if(!pattern0.test(data4)){
-const err7 = {instancePath:instancePath+"/sagLimits/" + i0+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data4};
+}
+else {
+const err7 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.sagLimits.type,parentSchema:schema76.properties.sagLimits,data:data1};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3303,8 +3508,15 @@ vErrors.push(err7);
 errors++;
 }
 }
-else {
-const err8 = {instancePath:instancePath+"/sagLimits/" + i0+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data4};
+if(data.displacementLimits !== undefined){
+let data5 = data.displacementLimits;
+if(Array.isArray(data5)){
+const len1 = data5.length;
+for(let i1=0; i1<len1; i1++){
+let data6 = data5[i1];
+if(data6 && typeof data6 == "object" && !Array.isArray(data6)){
+if(data6.node === undefined){
+const err8 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema76.properties.displacementLimits.items.required,parentSchema:schema76.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3313,16 +3525,8 @@ vErrors.push(err8);
 }
 errors++;
 }
-}
-if(data3.limit !== undefined){
-if(!(validate49(data3.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data3,parentDataProperty:"limit",rootData}))){
-vErrors = vErrors === null ? validate49.errors : vErrors.concat(validate49.errors);
-errors = vErrors.length;
-}
-}
-}
-else {
-const err9 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.properties.sagLimits.items.type,parentSchema:schema72.properties.sagLimits.items,data:data3};
+if(data6.limit === undefined){
+const err9 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema76.properties.displacementLimits.items.required,parentSchema:schema76.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3331,10 +3535,9 @@ vErrors.push(err9);
 }
 errors++;
 }
-}
-}
-else {
-const err10 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema72.properties.sagLimits.type,parentSchema:schema72.properties.sagLimits,data:data2};
+for(const key2 in data6){
+if(!(((key2 === "node") || (key2 === "limit")) || (key2 === "direction"))){
+const err10 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema76.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3344,15 +3547,11 @@ vErrors.push(err10);
 errors++;
 }
 }
-if(data.displacementLimits !== undefined){
-let data6 = data.displacementLimits;
-if(Array.isArray(data6)){
-const len1 = data6.length;
-for(let i1=0; i1<len1; i1++){
-let data7 = data6[i1];
-if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
-if(data7.node === undefined){
-const err11 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema72.properties.displacementLimits.items.required,parentSchema:schema72.properties.displacementLimits.items,data:data7};
+if(data6.node !== undefined){
+let data7 = data6.node;
+if(typeof data7 === "string"){
+if(!pattern0.test(data7)){
+const err11 = {instancePath:instancePath+"/displacementLimits/" + i1+"/node",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data7};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3361,8 +3560,9 @@ vErrors.push(err11);
 }
 errors++;
 }
-if(data7.limit === undefined){
-const err12 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema72.properties.displacementLimits.items.required,parentSchema:schema72.properties.displacementLimits.items,data:data7};
+}
+else {
+const err12 = {instancePath:instancePath+"/displacementLimits/" + i1+"/node",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -3371,9 +3571,12 @@ vErrors.push(err12);
 }
 errors++;
 }
-for(const key2 in data7){
-if(!((key2 === "node") || (key2 === "limit"))){
-const err13 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema72.properties.displacementLimits.items,data:data7};
+}
+if(data6.limit !== undefined){
+let data8 = data6.limit;
+if((typeof data8 == "number") && (isFinite(data8))){
+if(data8 <= 0 || isNaN(data8)){
+const err13 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data8};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -3383,11 +3586,8 @@ vErrors.push(err13);
 errors++;
 }
 }
-if(data7.node !== undefined){
-let data8 = data7.node;
-if(typeof data8 === "string"){
-if(!pattern0.test(data8)){
-const err14 = {instancePath:instancePath+"/displacementLimits/" + i1+"/node",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data8};
+else {
+const err14 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data8};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -3397,8 +3597,14 @@ vErrors.push(err14);
 errors++;
 }
 }
-else {
-const err15 = {instancePath:instancePath+"/displacementLimits/" + i1+"/node",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data8};
+if(data6.direction !== undefined){
+let data9 = data6.direction;
+const _errs27 = errors;
+let valid10 = false;
+let passing0 = null;
+const _errs28 = errors;
+if(!((data9 === "horizontal") || (data9 === "total"))){
+const err15 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf/0/enum",keyword:"enum",params:{allowedValues: schema76.properties.displacementLimits.items.properties.direction.oneOf[0].enum},message:"must be equal to one of the allowed values",schema:schema76.properties.displacementLimits.items.properties.direction.oneOf[0].enum,parentSchema:schema76.properties.displacementLimits.items.properties.direction.oneOf[0],data:data9};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3407,12 +3613,15 @@ vErrors.push(err15);
 }
 errors++;
 }
+var _valid0 = _errs28 === errors;
+if(_valid0){
+valid10 = true;
+passing0 = 0;
 }
-if(data7.limit !== undefined){
-let data9 = data7.limit;
-if((typeof data9 == "number") && (isFinite(data9))){
-if(data9 <= 0 || isNaN(data9)){
-const err16 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data9};
+const _errs30 = errors;
+if(Array.isArray(data9)){
+if(data9.length > 3){
+const err16 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/definitions/vec3/maxItems",keyword:"maxItems",params:{limit: 3},message:"must NOT have more than 3 items",schema:3,parentSchema:schema16,data:data9};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -3421,9 +3630,8 @@ vErrors.push(err16);
 }
 errors++;
 }
-}
-else {
-const err17 = {instancePath:instancePath+"/displacementLimits/" + i1+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data9};
+if(data9.length < 3){
+const err17 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/definitions/vec3/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema16,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -3432,10 +3640,11 @@ vErrors.push(err17);
 }
 errors++;
 }
-}
-}
-else {
-const err18 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.properties.displacementLimits.items.type,parentSchema:schema72.properties.displacementLimits.items,data:data7};
+const len2 = data9.length;
+for(let i2=0; i2<len2; i2++){
+let data10 = data9[i2];
+if(!((typeof data10 == "number") && (isFinite(data10)))){
+const err18 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction/" + i2,schemaPath:"#/definitions/vec3/items/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema16.items.type,parentSchema:schema16.items,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -3447,7 +3656,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema72.properties.displacementLimits.type,parentSchema:schema72.properties.displacementLimits,data:data6};
+const err19 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/definitions/vec3/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema16.type,parentSchema:schema16,data:data9};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -3456,16 +3665,19 @@ vErrors.push(err19);
 }
 errors++;
 }
+var _valid0 = _errs30 === errors;
+if(_valid0 && valid10){
+valid10 = false;
+passing0 = [passing0, 1];
 }
-if(data.tiltLimits !== undefined){
-let data10 = data.tiltLimits;
-if(Array.isArray(data10)){
-const len2 = data10.length;
-for(let i2=0; i2<len2; i2++){
-let data11 = data10[i2];
-if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
-if(data11.base === undefined){
-const err20 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema72.properties.tiltLimits.items.required,parentSchema:schema72.properties.tiltLimits.items,data:data11};
+else {
+if(_valid0){
+valid10 = true;
+passing0 = 1;
+}
+}
+if(!valid10){
+const err20 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema76.properties.displacementLimits.items.properties.direction.oneOf,parentSchema:schema76.properties.displacementLimits.items.properties.direction,data:data9};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -3474,8 +3686,21 @@ vErrors.push(err20);
 }
 errors++;
 }
-if(data11.top === undefined){
-const err21 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema72.properties.tiltLimits.items.required,parentSchema:schema72.properties.tiltLimits.items,data:data11};
+else {
+errors = _errs27;
+if(vErrors !== null){
+if(_errs27){
+vErrors.length = _errs27;
+}
+else {
+vErrors = null;
+}
+}
+}
+}
+}
+else {
+const err21 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.properties.displacementLimits.items.type,parentSchema:schema76.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -3484,8 +3709,10 @@ vErrors.push(err21);
 }
 errors++;
 }
-if(data11.limit === undefined){
-const err22 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema72.properties.tiltLimits.items.required,parentSchema:schema72.properties.tiltLimits.items,data:data11};
+}
+}
+else {
+const err22 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.displacementLimits.type,parentSchema:schema76.properties.displacementLimits,data:data5};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -3494,9 +3721,16 @@ vErrors.push(err22);
 }
 errors++;
 }
-for(const key3 in data11){
-if(!(((key3 === "base") || (key3 === "top")) || (key3 === "limit"))){
-const err23 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema72.properties.tiltLimits.items,data:data11};
+}
+if(data.tiltLimits !== undefined){
+let data11 = data.tiltLimits;
+if(Array.isArray(data11)){
+const len3 = data11.length;
+for(let i3=0; i3<len3; i3++){
+let data12 = data11[i3];
+if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
+if(data12.base === undefined){
+const err23 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema76.properties.tiltLimits.items.required,parentSchema:schema76.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -3505,12 +3739,8 @@ vErrors.push(err23);
 }
 errors++;
 }
-}
-if(data11.base !== undefined){
-let data12 = data11.base;
-if(typeof data12 === "string"){
-if(!pattern0.test(data12)){
-const err24 = {instancePath:instancePath+"/tiltLimits/" + i2+"/base",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data12};
+if(data12.top === undefined){
+const err24 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema76.properties.tiltLimits.items.required,parentSchema:schema76.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -3519,9 +3749,8 @@ vErrors.push(err24);
 }
 errors++;
 }
-}
-else {
-const err25 = {instancePath:instancePath+"/tiltLimits/" + i2+"/base",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data12};
+if(data12.limit === undefined){
+const err25 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema76.properties.tiltLimits.items.required,parentSchema:schema76.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -3530,12 +3759,9 @@ vErrors.push(err25);
 }
 errors++;
 }
-}
-if(data11.top !== undefined){
-let data13 = data11.top;
-if(typeof data13 === "string"){
-if(!pattern0.test(data13)){
-const err26 = {instancePath:instancePath+"/tiltLimits/" + i2+"/top",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data13};
+for(const key3 in data12){
+if(!(((key3 === "base") || (key3 === "top")) || (key3 === "limit"))){
+const err26 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema76.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -3545,8 +3771,11 @@ vErrors.push(err26);
 errors++;
 }
 }
-else {
-const err27 = {instancePath:instancePath+"/tiltLimits/" + i2+"/top",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data13};
+if(data12.base !== undefined){
+let data13 = data12.base;
+if(typeof data13 === "string"){
+if(!pattern0.test(data13)){
+const err27 = {instancePath:instancePath+"/tiltLimits/" + i3+"/base",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data13};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -3556,11 +3785,8 @@ vErrors.push(err27);
 errors++;
 }
 }
-if(data11.limit !== undefined){
-let data14 = data11.limit;
-if((typeof data14 == "number") && (isFinite(data14))){
-if(data14 <= 0 || isNaN(data14)){
-const err28 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data14};
+else {
+const err28 = {instancePath:instancePath+"/tiltLimits/" + i3+"/base",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data13};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -3570,8 +3796,11 @@ vErrors.push(err28);
 errors++;
 }
 }
-else {
-const err29 = {instancePath:instancePath+"/tiltLimits/" + i2+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data14};
+if(data12.top !== undefined){
+let data14 = data12.top;
+if(typeof data14 === "string"){
+if(!pattern0.test(data14)){
+const err29 = {instancePath:instancePath+"/tiltLimits/" + i3+"/top",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data14};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -3581,9 +3810,8 @@ vErrors.push(err29);
 errors++;
 }
 }
-}
 else {
-const err30 = {instancePath:instancePath+"/tiltLimits/" + i2,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.properties.tiltLimits.items.type,parentSchema:schema72.properties.tiltLimits.items,data:data11};
+const err30 = {instancePath:instancePath+"/tiltLimits/" + i3+"/top",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data14};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -3593,14 +3821,51 @@ vErrors.push(err30);
 errors++;
 }
 }
-}
-else {
-const err31 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema72.properties.tiltLimits.type,parentSchema:schema72.properties.tiltLimits,data:data10};
+if(data12.limit !== undefined){
+let data15 = data12.limit;
+if((typeof data15 == "number") && (isFinite(data15))){
+if(data15 <= 0 || isNaN(data15)){
+const err31 = {instancePath:instancePath+"/tiltLimits/" + i3+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data15};
 if(vErrors === null){
 vErrors = [err31];
 }
 else {
 vErrors.push(err31);
+}
+errors++;
+}
+}
+else {
+const err32 = {instancePath:instancePath+"/tiltLimits/" + i3+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data15};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+}
+else {
+const err33 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.properties.tiltLimits.items.type,parentSchema:schema76.properties.tiltLimits.items,data:data12};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+}
+else {
+const err34 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.tiltLimits.type,parentSchema:schema76.properties.tiltLimits,data:data11};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
 }
 errors++;
 }
@@ -3611,14 +3876,467 @@ vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.error
 errors = vErrors.length;
 }
 }
-}
-else {
-const err32 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.type,parentSchema:schema72,data};
+if(data.minimumTension !== undefined){
+let data17 = data.minimumTension;
+if(Array.isArray(data17)){
+const len4 = data17.length;
+for(let i4=0; i4<len4; i4++){
+let data18 = data17[i4];
+if(data18 && typeof data18 == "object" && !Array.isArray(data18)){
+if(data18.group === undefined){
+const err35 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema76.properties.minimumTension.items.required,parentSchema:schema76.properties.minimumTension.items,data:data18};
 if(vErrors === null){
-vErrors = [err32];
+vErrors = [err35];
 }
 else {
-vErrors.push(err32);
+vErrors.push(err35);
+}
+errors++;
+}
+for(const key4 in data18){
+if(!(((key4 === "group") || (key4 === "shareOfInstallation")) || (key4 === "shareOfBreaking"))){
+const err36 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema76.properties.minimumTension.items,data:data18};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+if(data18.group !== undefined){
+let data19 = data18.group;
+if(typeof data19 === "string"){
+if(!pattern0.test(data19)){
+const err37 = {instancePath:instancePath+"/minimumTension/" + i4+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data19};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+else {
+const err38 = {instancePath:instancePath+"/minimumTension/" + i4+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data19};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
+}
+errors++;
+}
+}
+if(data18.shareOfInstallation !== undefined){
+let data20 = data18.shareOfInstallation;
+if((typeof data20 == "number") && (isFinite(data20))){
+if(data20 > 1 || isNaN(data20)){
+const err39 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema76.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+if(data20 <= 0 || isNaN(data20)){
+const err40 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema76.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
+if(vErrors === null){
+vErrors = [err40];
+}
+else {
+vErrors.push(err40);
+}
+errors++;
+}
+}
+else {
+const err41 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema76.properties.minimumTension.items.properties.shareOfInstallation.type,parentSchema:schema76.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
+if(vErrors === null){
+vErrors = [err41];
+}
+else {
+vErrors.push(err41);
+}
+errors++;
+}
+}
+if(data18.shareOfBreaking !== undefined){
+let data21 = data18.shareOfBreaking;
+if((typeof data21 == "number") && (isFinite(data21))){
+if(data21 > 1 || isNaN(data21)){
+const err42 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema76.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
+if(vErrors === null){
+vErrors = [err42];
+}
+else {
+vErrors.push(err42);
+}
+errors++;
+}
+if(data21 <= 0 || isNaN(data21)){
+const err43 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema76.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
+if(vErrors === null){
+vErrors = [err43];
+}
+else {
+vErrors.push(err43);
+}
+errors++;
+}
+}
+else {
+const err44 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema76.properties.minimumTension.items.properties.shareOfBreaking.type,parentSchema:schema76.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
+if(vErrors === null){
+vErrors = [err44];
+}
+else {
+vErrors.push(err44);
+}
+errors++;
+}
+}
+}
+else {
+const err45 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.properties.minimumTension.items.type,parentSchema:schema76.properties.minimumTension.items,data:data18};
+if(vErrors === null){
+vErrors = [err45];
+}
+else {
+vErrors.push(err45);
+}
+errors++;
+}
+}
+}
+else {
+const err46 = {instancePath:instancePath+"/minimumTension",schemaPath:"#/properties/minimumTension/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.minimumTension.type,parentSchema:schema76.properties.minimumTension,data:data17};
+if(vErrors === null){
+vErrors = [err46];
+}
+else {
+vErrors.push(err46);
+}
+errors++;
+}
+}
+if(data.memberDesign !== undefined){
+let data22 = data.memberDesign;
+if(Array.isArray(data22)){
+const len5 = data22.length;
+for(let i5=0; i5<len5; i5++){
+let data23 = data22[i5];
+if(data23 && typeof data23 == "object" && !Array.isArray(data23)){
+if(data23.group === undefined){
+const err47 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema76.properties.memberDesign.items.required,parentSchema:schema76.properties.memberDesign.items,data:data23};
+if(vErrors === null){
+vErrors = [err47];
+}
+else {
+vErrors.push(err47);
+}
+errors++;
+}
+for(const key5 in data23){
+if(!(((((key5 === "group") || (key5 === "role")) || (key5 === "bucklingLengthFactor")) || (key5 === "bucklingLength")) || (key5 === "slendernessLimit"))){
+const err48 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema76.properties.memberDesign.items,data:data23};
+if(vErrors === null){
+vErrors = [err48];
+}
+else {
+vErrors.push(err48);
+}
+errors++;
+}
+}
+if(data23.group !== undefined){
+let data24 = data23.group;
+if(typeof data24 === "string"){
+if(!pattern0.test(data24)){
+const err49 = {instancePath:instancePath+"/memberDesign/" + i5+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data24};
+if(vErrors === null){
+vErrors = [err49];
+}
+else {
+vErrors.push(err49);
+}
+errors++;
+}
+}
+else {
+const err50 = {instancePath:instancePath+"/memberDesign/" + i5+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data24};
+if(vErrors === null){
+vErrors = [err50];
+}
+else {
+vErrors.push(err50);
+}
+errors++;
+}
+}
+if(data23.role !== undefined){
+let data25 = data23.role;
+if(!((((data25 === "leg") || (data25 === "bracing")) || (data25 === "redundant")) || (data25 === "other"))){
+const err51 = {instancePath:instancePath+"/memberDesign/" + i5+"/role",schemaPath:"#/properties/memberDesign/items/properties/role/enum",keyword:"enum",params:{allowedValues: schema76.properties.memberDesign.items.properties.role.enum},message:"must be equal to one of the allowed values",schema:schema76.properties.memberDesign.items.properties.role.enum,parentSchema:schema76.properties.memberDesign.items.properties.role,data:data25};
+if(vErrors === null){
+vErrors = [err51];
+}
+else {
+vErrors.push(err51);
+}
+errors++;
+}
+}
+if(data23.bucklingLengthFactor !== undefined){
+let data26 = data23.bucklingLengthFactor;
+if((typeof data26 == "number") && (isFinite(data26))){
+if(data26 <= 0 || isNaN(data26)){
+const err52 = {instancePath:instancePath+"/memberDesign/" + i5+"/bucklingLengthFactor",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data26};
+if(vErrors === null){
+vErrors = [err52];
+}
+else {
+vErrors.push(err52);
+}
+errors++;
+}
+}
+else {
+const err53 = {instancePath:instancePath+"/memberDesign/" + i5+"/bucklingLengthFactor",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data26};
+if(vErrors === null){
+vErrors = [err53];
+}
+else {
+vErrors.push(err53);
+}
+errors++;
+}
+}
+if(data23.bucklingLength !== undefined){
+let data27 = data23.bucklingLength;
+if((typeof data27 == "number") && (isFinite(data27))){
+if(data27 <= 0 || isNaN(data27)){
+const err54 = {instancePath:instancePath+"/memberDesign/" + i5+"/bucklingLength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data27};
+if(vErrors === null){
+vErrors = [err54];
+}
+else {
+vErrors.push(err54);
+}
+errors++;
+}
+}
+else {
+const err55 = {instancePath:instancePath+"/memberDesign/" + i5+"/bucklingLength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data27};
+if(vErrors === null){
+vErrors = [err55];
+}
+else {
+vErrors.push(err55);
+}
+errors++;
+}
+}
+if(data23.slendernessLimit !== undefined){
+let data28 = data23.slendernessLimit;
+if((typeof data28 == "number") && (isFinite(data28))){
+if(data28 <= 0 || isNaN(data28)){
+const err56 = {instancePath:instancePath+"/memberDesign/" + i5+"/slendernessLimit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data28};
+if(vErrors === null){
+vErrors = [err56];
+}
+else {
+vErrors.push(err56);
+}
+errors++;
+}
+}
+else {
+const err57 = {instancePath:instancePath+"/memberDesign/" + i5+"/slendernessLimit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data28};
+if(vErrors === null){
+vErrors = [err57];
+}
+else {
+vErrors.push(err57);
+}
+errors++;
+}
+}
+}
+else {
+const err58 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.properties.memberDesign.items.type,parentSchema:schema76.properties.memberDesign.items,data:data23};
+if(vErrors === null){
+vErrors = [err58];
+}
+else {
+vErrors.push(err58);
+}
+errors++;
+}
+}
+}
+else {
+const err59 = {instancePath:instancePath+"/memberDesign",schemaPath:"#/properties/memberDesign/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.memberDesign.type,parentSchema:schema76.properties.memberDesign,data:data22};
+if(vErrors === null){
+vErrors = [err59];
+}
+else {
+vErrors.push(err59);
+}
+errors++;
+}
+}
+if(data.twistLimits !== undefined){
+let data29 = data.twistLimits;
+if(Array.isArray(data29)){
+const len6 = data29.length;
+for(let i6=0; i6<len6; i6++){
+let data30 = data29[i6];
+if(data30 && typeof data30 == "object" && !Array.isArray(data30)){
+if(data30.nodes === undefined){
+const err60 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema76.properties.twistLimits.items.required,parentSchema:schema76.properties.twistLimits.items,data:data30};
+if(vErrors === null){
+vErrors = [err60];
+}
+else {
+vErrors.push(err60);
+}
+errors++;
+}
+if(data30.limit === undefined){
+const err61 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema76.properties.twistLimits.items.required,parentSchema:schema76.properties.twistLimits.items,data:data30};
+if(vErrors === null){
+vErrors = [err61];
+}
+else {
+vErrors.push(err61);
+}
+errors++;
+}
+for(const key6 in data30){
+if(!((key6 === "nodes") || (key6 === "limit"))){
+const err62 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key6},message:"must NOT have additional properties",schema:false,parentSchema:schema76.properties.twistLimits.items,data:data30};
+if(vErrors === null){
+vErrors = [err62];
+}
+else {
+vErrors.push(err62);
+}
+errors++;
+}
+}
+if(data30.nodes !== undefined){
+let data31 = data30.nodes;
+if(Array.isArray(data31)){
+if(data31.length < 2){
+const err63 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema76.properties.twistLimits.items.properties.nodes,data:data31};
+if(vErrors === null){
+vErrors = [err63];
+}
+else {
+vErrors.push(err63);
+}
+errors++;
+}
+const len7 = data31.length;
+for(let i7=0; i7<len7; i7++){
+let data32 = data31[i7];
+if(typeof data32 === "string"){
+if(!pattern0.test(data32)){
+const err64 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes/" + i7,schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data32};
+if(vErrors === null){
+vErrors = [err64];
+}
+else {
+vErrors.push(err64);
+}
+errors++;
+}
+}
+else {
+const err65 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes/" + i7,schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data32};
+if(vErrors === null){
+vErrors = [err65];
+}
+else {
+vErrors.push(err65);
+}
+errors++;
+}
+}
+}
+else {
+const err66 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.twistLimits.items.properties.nodes.type,parentSchema:schema76.properties.twistLimits.items.properties.nodes,data:data31};
+if(vErrors === null){
+vErrors = [err66];
+}
+else {
+vErrors.push(err66);
+}
+errors++;
+}
+}
+if(data30.limit !== undefined){
+let data33 = data30.limit;
+if((typeof data33 == "number") && (isFinite(data33))){
+if(data33 <= 0 || isNaN(data33)){
+const err67 = {instancePath:instancePath+"/twistLimits/" + i6+"/limit",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data33};
+if(vErrors === null){
+vErrors = [err67];
+}
+else {
+vErrors.push(err67);
+}
+errors++;
+}
+}
+else {
+const err68 = {instancePath:instancePath+"/twistLimits/" + i6+"/limit",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data33};
+if(vErrors === null){
+vErrors = [err68];
+}
+else {
+vErrors.push(err68);
+}
+errors++;
+}
+}
+}
+else {
+const err69 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.properties.twistLimits.items.type,parentSchema:schema76.properties.twistLimits.items,data:data30};
+if(vErrors === null){
+vErrors = [err69];
+}
+else {
+vErrors.push(err69);
+}
+errors++;
+}
+}
+}
+else {
+const err70 = {instancePath:instancePath+"/twistLimits",schemaPath:"#/properties/twistLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.twistLimits.type,parentSchema:schema76.properties.twistLimits,data:data29};
+if(vErrors === null){
+vErrors = [err70];
+}
+else {
+vErrors.push(err70);
+}
+errors++;
+}
+}
+}
+else {
+const err71 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.type,parentSchema:schema76,data};
+if(vErrors === null){
+vErrors = [err71];
+}
+else {
+vErrors.push(err71);
 }
 errors++;
 }
@@ -3626,15 +4344,15 @@ validate47.errors = vErrors;
 return errors === 0;
 }
 
-const schema82 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
-const schema84 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
+const schema94 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
+const schema96 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
 
 function validate54(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.required,parentSchema:schema84,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema96.required,parentSchema:schema96,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3648,7 +4366,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "sag"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.oneOf[0].required,parentSchema:schema84.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema96.oneOf[0].required,parentSchema:schema96.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3658,7 +4376,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.group === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema84.oneOf[0].required,parentSchema:schema84.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema96.oneOf[0].required,parentSchema:schema96.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3668,7 +4386,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.case === undefined){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema84.oneOf[0].required,parentSchema:schema84.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema96.oneOf[0].required,parentSchema:schema96.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3678,7 +4396,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.limit === undefined){
-const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema84.oneOf[0].required,parentSchema:schema84.oneOf[0],data};
+const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema96.oneOf[0].required,parentSchema:schema96.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -3689,7 +4407,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "kind") || (key0 === "group")) || (key0 === "case")) || (key0 === "limit"))){
-const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema84.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema96.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3702,7 +4420,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("sag" !== data0){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema84.oneOf[0].properties.kind,data:data0};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema96.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3770,7 +4488,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.oneOf[0].type,parentSchema:schema84.oneOf[0],data};
+const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema96.oneOf[0].type,parentSchema:schema96.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3783,7 +4501,7 @@ errors++;
 else if(tag0 === "tensionShare"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.oneOf[1].required,parentSchema:schema84.oneOf[1],data};
+const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema96.oneOf[1].required,parentSchema:schema96.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -3793,7 +4511,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data.group === undefined){
-const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema84.oneOf[1].required,parentSchema:schema84.oneOf[1],data};
+const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema96.oneOf[1].required,parentSchema:schema96.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -3803,7 +4521,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data.share === undefined){
-const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema84.oneOf[1].required,parentSchema:schema84.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema96.oneOf[1].required,parentSchema:schema96.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -3814,7 +4532,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(((key1 === "kind") || (key1 === "group")) || (key1 === "share"))){
-const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema84.oneOf[1],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema96.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3827,7 +4545,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("tensionShare" !== data4){
-const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema84.oneOf[1].properties.kind,data:data4};
+const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema96.oneOf[1].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -3889,7 +4607,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.oneOf[1].type,parentSchema:schema84.oneOf[1],data};
+const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema96.oneOf[1].type,parentSchema:schema96.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -3902,7 +4620,7 @@ errors++;
 else if(tag0 === "noSlack"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.oneOf[2].required,parentSchema:schema84.oneOf[2],data};
+const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema96.oneOf[2].required,parentSchema:schema96.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -3912,7 +4630,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data.group === undefined){
-const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema84.oneOf[2].required,parentSchema:schema84.oneOf[2],data};
+const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema96.oneOf[2].required,parentSchema:schema96.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -3922,7 +4640,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data.case === undefined){
-const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema84.oneOf[2].required,parentSchema:schema84.oneOf[2],data};
+const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema96.oneOf[2].required,parentSchema:schema96.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -3933,7 +4651,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(((key2 === "kind") || (key2 === "group")) || (key2 === "case"))){
-const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema84.oneOf[2],data};
+const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema96.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -3946,7 +4664,7 @@ errors++;
 if(data.kind !== undefined){
 let data7 = data.kind;
 if("noSlack" !== data7){
-const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema84.oneOf[2].properties.kind,data:data7};
+const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema96.oneOf[2].properties.kind,data:data7};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -4008,7 +4726,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.oneOf[2].type,parentSchema:schema84.oneOf[2],data};
+const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema96.oneOf[2].type,parentSchema:schema96.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -4021,7 +4739,7 @@ errors++;
 else if(tag0 === "plumb"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.oneOf[3].required,parentSchema:schema84.oneOf[3],data};
+const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema96.oneOf[3].required,parentSchema:schema96.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -4031,7 +4749,7 @@ vErrors.push(err32);
 errors++;
 }
 if(data.base === undefined){
-const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema84.oneOf[3].required,parentSchema:schema84.oneOf[3],data};
+const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema96.oneOf[3].required,parentSchema:schema96.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -4041,7 +4759,7 @@ vErrors.push(err33);
 errors++;
 }
 if(data.top === undefined){
-const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema84.oneOf[3].required,parentSchema:schema84.oneOf[3],data};
+const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema96.oneOf[3].required,parentSchema:schema96.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -4051,7 +4769,7 @@ vErrors.push(err34);
 errors++;
 }
 if(data.case === undefined){
-const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema84.oneOf[3].required,parentSchema:schema84.oneOf[3],data};
+const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema96.oneOf[3].required,parentSchema:schema96.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -4061,7 +4779,7 @@ vErrors.push(err35);
 errors++;
 }
 if(data.tolerance === undefined){
-const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema84.oneOf[3].required,parentSchema:schema84.oneOf[3],data};
+const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema96.oneOf[3].required,parentSchema:schema96.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -4072,7 +4790,7 @@ errors++;
 }
 for(const key3 in data){
 if(!(((((key3 === "kind") || (key3 === "base")) || (key3 === "top")) || (key3 === "case")) || (key3 === "tolerance"))){
-const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema84.oneOf[3],data};
+const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema96.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -4085,7 +4803,7 @@ errors++;
 if(data.kind !== undefined){
 let data10 = data.kind;
 if("plumb" !== data10){
-const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema84.oneOf[3].properties.kind,data:data10};
+const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema96.oneOf[3].properties.kind,data:data10};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -4197,7 +4915,7 @@ errors++;
 }
 }
 else {
-const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.oneOf[3].type,parentSchema:schema84.oneOf[3],data};
+const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema96.oneOf[3].type,parentSchema:schema96.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -4210,7 +4928,7 @@ errors++;
 else if(tag0 === "reaction"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema84.oneOf[4].required,parentSchema:schema84.oneOf[4],data};
+const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema96.oneOf[4].required,parentSchema:schema96.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -4220,7 +4938,7 @@ vErrors.push(err48);
 errors++;
 }
 if(data.node === undefined){
-const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema84.oneOf[4].required,parentSchema:schema84.oneOf[4],data};
+const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema96.oneOf[4].required,parentSchema:schema96.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -4230,7 +4948,7 @@ vErrors.push(err49);
 errors++;
 }
 if(data.case === undefined){
-const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema84.oneOf[4].required,parentSchema:schema84.oneOf[4],data};
+const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema96.oneOf[4].required,parentSchema:schema96.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -4240,7 +4958,7 @@ vErrors.push(err50);
 errors++;
 }
 if(data.limit === undefined){
-const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema84.oneOf[4].required,parentSchema:schema84.oneOf[4],data};
+const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema96.oneOf[4].required,parentSchema:schema96.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -4251,7 +4969,7 @@ errors++;
 }
 for(const key4 in data){
 if(!((((key4 === "kind") || (key4 === "node")) || (key4 === "case")) || (key4 === "limit"))){
-const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema84.oneOf[4],data};
+const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema96.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -4264,7 +4982,7 @@ errors++;
 if(data.kind !== undefined){
 let data15 = data.kind;
 if("reaction" !== data15){
-const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema84.oneOf[4].properties.kind,data:data15};
+const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema96.oneOf[4].properties.kind,data:data15};
 if(vErrors === null){
 vErrors = [err53];
 }
@@ -4327,7 +5045,7 @@ errors++;
 if(data.limit !== undefined){
 let data18 = data.limit;
 if(!((typeof data18 == "number") && (isFinite(data18)))){
-const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema84.oneOf[4].properties.limit.type,parentSchema:schema84.oneOf[4].properties.limit,data:data18};
+const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema96.oneOf[4].properties.limit.type,parentSchema:schema96.oneOf[4].properties.limit,data:data18};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -4339,7 +5057,7 @@ errors++;
 }
 }
 else {
-const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.oneOf[4].type,parentSchema:schema84.oneOf[4],data};
+const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema96.oneOf[4].type,parentSchema:schema96.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -4350,7 +5068,7 @@ errors++;
 }
 }
 else {
-const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema84.discriminator,parentSchema:schema84,data};
+const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema96.discriminator,parentSchema:schema96,data};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -4361,7 +5079,7 @@ errors++;
 }
 }
 else {
-const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema84.discriminator,parentSchema:schema84,data};
+const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema96.discriminator,parentSchema:schema96,data};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -4372,7 +5090,7 @@ errors++;
 }
 }
 else {
-const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema84.type,parentSchema:schema84,data};
+const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema96.type,parentSchema:schema96,data};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -4391,7 +5109,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.variables === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema82.required,parentSchema:schema82,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema94.required,parentSchema:schema94,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4401,7 +5119,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.targets === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema82.required,parentSchema:schema82,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema94.required,parentSchema:schema94,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -4412,7 +5130,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "variables") || (key0 === "targets")) || (key0 === "lastRun"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema82,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema94,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -4430,7 +5148,7 @@ for(let i0=0; i0<len0; i0++){
 let data1 = data0[i0];
 if(data1 && typeof data1 == "object" && !Array.isArray(data1)){
 if(data1.group === undefined){
-const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema82.properties.variables.items.required,parentSchema:schema82.properties.variables.items,data:data1};
+const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema94.properties.variables.items.required,parentSchema:schema94.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -4440,7 +5158,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data1.by === undefined){
-const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema82.properties.variables.items.required,parentSchema:schema82.properties.variables.items,data:data1};
+const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema94.properties.variables.items.required,parentSchema:schema94.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -4451,7 +5169,7 @@ errors++;
 }
 for(const key1 in data1){
 if(!((((key1 === "group") || (key1 === "by")) || (key1 === "min")) || (key1 === "max"))){
-const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema82.properties.variables.items,data:data1};
+const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema94.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -4489,7 +5207,7 @@ errors++;
 if(data1.by !== undefined){
 let data3 = data1.by;
 if(!((data3 === "pretension") || (data3 === "unstressedLength"))){
-const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema82.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema82.properties.variables.items.properties.by.enum,parentSchema:schema82.properties.variables.items.properties.by,data:data3};
+const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema94.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema94.properties.variables.items.properties.by.enum,parentSchema:schema94.properties.variables.items.properties.by,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -4502,7 +5220,7 @@ errors++;
 if(data1.min !== undefined){
 let data4 = data1.min;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema82.properties.variables.items.properties.min.type,parentSchema:schema82.properties.variables.items.properties.min,data:data4};
+const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema94.properties.variables.items.properties.min.type,parentSchema:schema94.properties.variables.items.properties.min,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -4515,7 +5233,7 @@ errors++;
 if(data1.max !== undefined){
 let data5 = data1.max;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema82.properties.variables.items.properties.max.type,parentSchema:schema82.properties.variables.items.properties.max,data:data5};
+const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema94.properties.variables.items.properties.max.type,parentSchema:schema94.properties.variables.items.properties.max,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -4527,7 +5245,7 @@ errors++;
 }
 }
 else {
-const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.properties.variables.items.type,parentSchema:schema82.properties.variables.items,data:data1};
+const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema94.properties.variables.items.type,parentSchema:schema94.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -4539,7 +5257,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema82.properties.variables.type,parentSchema:schema82.properties.variables,data:data0};
+const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema94.properties.variables.type,parentSchema:schema94.properties.variables,data:data0};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -4561,7 +5279,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema82.properties.targets.type,parentSchema:schema82.properties.targets,data:data6};
+const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema94.properties.targets.type,parentSchema:schema94.properties.targets,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -4575,7 +5293,7 @@ if(data.lastRun !== undefined){
 let data8 = data.lastRun;
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 if(data8.date === undefined){
-const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema82.properties.lastRun.required,parentSchema:schema82.properties.lastRun,data:data8};
+const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema94.properties.lastRun.required,parentSchema:schema94.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -4585,7 +5303,7 @@ vErrors.push(err14);
 errors++;
 }
 if(data8.summary === undefined){
-const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema82.properties.lastRun.required,parentSchema:schema82.properties.lastRun,data:data8};
+const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema94.properties.lastRun.required,parentSchema:schema94.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -4596,7 +5314,7 @@ errors++;
 }
 for(const key2 in data8){
 if(!((key2 === "date") || (key2 === "summary"))){
-const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema82.properties.lastRun,data:data8};
+const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema94.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -4609,7 +5327,7 @@ errors++;
 if(data8.date !== undefined){
 let data9 = data8.date;
 if(typeof data9 !== "string"){
-const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema82.properties.lastRun.properties.date.type,parentSchema:schema82.properties.lastRun.properties.date,data:data9};
+const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema94.properties.lastRun.properties.date.type,parentSchema:schema94.properties.lastRun.properties.date,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -4622,7 +5340,7 @@ errors++;
 if(data8.summary !== undefined){
 let data10 = data8.summary;
 if(typeof data10 !== "string"){
-const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema82.properties.lastRun.properties.summary.type,parentSchema:schema82.properties.lastRun.properties.summary,data:data10};
+const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema94.properties.lastRun.properties.summary.type,parentSchema:schema94.properties.lastRun.properties.summary,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -4634,7 +5352,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.properties.lastRun.type,parentSchema:schema82.properties.lastRun,data:data8};
+const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema94.properties.lastRun.type,parentSchema:schema94.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -4646,7 +5364,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.type,parentSchema:schema82,data};
+const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema94.type,parentSchema:schema94,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -4659,7 +5377,7 @@ validate53.errors = vErrors;
 return errors === 0;
 }
 
-const schema97 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
+const schema109 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
 
 function validate58(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -4667,7 +5385,7 @@ let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!(key0 === "temperatures")){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema97,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema109,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4708,7 +5426,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema97.properties.temperatures.type,parentSchema:schema97.properties.temperatures,data:data0};
+const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema109.properties.temperatures.type,parentSchema:schema109.properties.temperatures,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -4720,7 +5438,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema97.type,parentSchema:schema97,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema109.type,parentSchema:schema109,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -4733,14 +5451,14 @@ validate58.errors = vErrors;
 return errors === 0;
 }
 
-const schema99 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
+const schema111 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
 
 function validate60(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema99.required,parentSchema:schema99,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema111.required,parentSchema:schema111,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4750,7 +5468,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema99.required,parentSchema:schema99,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema111.required,parentSchema:schema111,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -4760,7 +5478,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.params === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema99.required,parentSchema:schema99,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema111.required,parentSchema:schema111,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -4771,7 +5489,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "kind")) || (key0 === "params"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema99,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema111,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -4809,7 +5527,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "guyedMast") || (data1 === "saddleNet")) || (data1 === "radialNet"))){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema99.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema99.properties.kind.enum,parentSchema:schema99.properties.kind,data:data1};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema111.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema111.properties.kind.enum,parentSchema:schema111.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -4822,7 +5540,7 @@ errors++;
 if(data.params !== undefined){
 let data2 = data.params;
 if(!(data2 && typeof data2 == "object" && !Array.isArray(data2))){
-const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema99.properties.params.type,parentSchema:schema99.properties.params,data:data2};
+const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema111.properties.params.type,parentSchema:schema111.properties.params,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -4834,7 +5552,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema99.type,parentSchema:schema99,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema111.type,parentSchema:schema111,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -4847,7 +5565,7 @@ validate60.errors = vErrors;
 return errors === 0;
 }
 
-const schema101 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
+const schema113 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
 
 function validate62(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -4855,7 +5573,7 @@ let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((key0 === "units") || (key0 === "deformationScale"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema101,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema113,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4868,7 +5586,7 @@ errors++;
 if(data.units !== undefined){
 let data0 = data.units;
 if(!((data0 === "SI") || (data0 === "US"))){
-const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema101.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema101.properties.units.enum,parentSchema:schema101.properties.units,data:data0};
+const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema113.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.units.enum,parentSchema:schema113.properties.units,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -4905,7 +5623,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema101.type,parentSchema:schema101,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.type,parentSchema:schema113,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -4918,16 +5636,685 @@ validate62.errors = vErrors;
 return errors === 0;
 }
 
-const schema103 = {"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}};
-const pattern36 = new RegExp("^[xyz]{1,3}$", "u");
-const schema106 = {"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}};
+const schema115 = {"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}};
 
-function validate65(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate64(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.format === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "format"},message:"must have required property '"+"format"+"'",schema:schema115.required,parentSchema:schema115,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(((((((key0 === "format") || (key0 === "label")) || (key0 === "actionFactors")) || (key0 === "combinationFactors")) || (key0 === "cable")) || (key0 === "steel")) || (key0 === "allowable"))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema115,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+}
+if(data.format !== undefined){
+let data0 = data.format;
+if(!((data0 === "limitState") || (data0 === "allowable"))){
+const err2 = {instancePath:instancePath+"/format",schemaPath:"#/properties/format/enum",keyword:"enum",params:{allowedValues: schema115.properties.format.enum},message:"must be equal to one of the allowed values",schema:schema115.properties.format.enum,parentSchema:schema115.properties.format,data:data0};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err3 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema115.properties.label.type,parentSchema:schema115.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.actionFactors !== undefined){
+let data2 = data.actionFactors;
+if(data2 && typeof data2 == "object" && !Array.isArray(data2)){
+for(const key1 in data2){
+if(!(((((((key1 === "permanent") || (key1 === "permanentFavourable")) || (key1 === "prestress")) || (key1 === "wind")) || (key1 === "ice")) || (key1 === "temperature")) || (key1 === "accidental"))){
+const err4 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema115.properties.actionFactors,data:data2};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data2.permanent !== undefined){
+let data3 = data2.permanent;
+if((typeof data3 == "number") && (isFinite(data3))){
+if(data3 <= 0 || isNaN(data3)){
+const err5 = {instancePath:instancePath+"/actionFactors/permanent",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data3};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+else {
+const err6 = {instancePath:instancePath+"/actionFactors/permanent",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data3};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+if(data2.permanentFavourable !== undefined){
+let data4 = data2.permanentFavourable;
+if((typeof data4 == "number") && (isFinite(data4))){
+if(data4 <= 0 || isNaN(data4)){
+const err7 = {instancePath:instancePath+"/actionFactors/permanentFavourable",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data4};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+else {
+const err8 = {instancePath:instancePath+"/actionFactors/permanentFavourable",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data4};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data2.prestress !== undefined){
+let data5 = data2.prestress;
+if((typeof data5 == "number") && (isFinite(data5))){
+if(data5 <= 0 || isNaN(data5)){
+const err9 = {instancePath:instancePath+"/actionFactors/prestress",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data5};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+else {
+const err10 = {instancePath:instancePath+"/actionFactors/prestress",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data5};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+}
+if(data2.wind !== undefined){
+let data6 = data2.wind;
+if((typeof data6 == "number") && (isFinite(data6))){
+if(data6 <= 0 || isNaN(data6)){
+const err11 = {instancePath:instancePath+"/actionFactors/wind",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data6};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+}
+else {
+const err12 = {instancePath:instancePath+"/actionFactors/wind",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data6};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+if(data2.ice !== undefined){
+let data7 = data2.ice;
+if((typeof data7 == "number") && (isFinite(data7))){
+if(data7 <= 0 || isNaN(data7)){
+const err13 = {instancePath:instancePath+"/actionFactors/ice",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data7};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+}
+else {
+const err14 = {instancePath:instancePath+"/actionFactors/ice",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data7};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+if(data2.temperature !== undefined){
+let data8 = data2.temperature;
+if((typeof data8 == "number") && (isFinite(data8))){
+if(data8 <= 0 || isNaN(data8)){
+const err15 = {instancePath:instancePath+"/actionFactors/temperature",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data8};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+else {
+const err16 = {instancePath:instancePath+"/actionFactors/temperature",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data8};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+}
+if(data2.accidental !== undefined){
+let data9 = data2.accidental;
+if((typeof data9 == "number") && (isFinite(data9))){
+if(data9 <= 0 || isNaN(data9)){
+const err17 = {instancePath:instancePath+"/actionFactors/accidental",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data9};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+}
+else {
+const err18 = {instancePath:instancePath+"/actionFactors/accidental",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data9};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+}
+}
+else {
+const err19 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.properties.actionFactors.type,parentSchema:schema115.properties.actionFactors,data:data2};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+}
+if(data.combinationFactors !== undefined){
+let data10 = data.combinationFactors;
+if(data10 && typeof data10 == "object" && !Array.isArray(data10)){
+for(const key2 in data10){
+if(!(((key2 === "wind") || (key2 === "ice")) || (key2 === "temperature"))){
+const err20 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema115.properties.combinationFactors,data:data10};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
+}
+errors++;
+}
+}
+if(data10.wind !== undefined){
+let data11 = data10.wind;
+if((typeof data11 == "number") && (isFinite(data11))){
+if(data11 > 1 || isNaN(data11)){
+const err21 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema115.properties.combinationFactors.properties.wind,data:data11};
+if(vErrors === null){
+vErrors = [err21];
+}
+else {
+vErrors.push(err21);
+}
+errors++;
+}
+if(data11 < 0 || isNaN(data11)){
+const err22 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema115.properties.combinationFactors.properties.wind,data:data11};
+if(vErrors === null){
+vErrors = [err22];
+}
+else {
+vErrors.push(err22);
+}
+errors++;
+}
+}
+else {
+const err23 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema115.properties.combinationFactors.properties.wind.type,parentSchema:schema115.properties.combinationFactors.properties.wind,data:data11};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+}
+if(data10.ice !== undefined){
+let data12 = data10.ice;
+if((typeof data12 == "number") && (isFinite(data12))){
+if(data12 > 1 || isNaN(data12)){
+const err24 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema115.properties.combinationFactors.properties.ice,data:data12};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+if(data12 < 0 || isNaN(data12)){
+const err25 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema115.properties.combinationFactors.properties.ice,data:data12};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+}
+else {
+const err26 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema115.properties.combinationFactors.properties.ice.type,parentSchema:schema115.properties.combinationFactors.properties.ice,data:data12};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+}
+if(data10.temperature !== undefined){
+let data13 = data10.temperature;
+if((typeof data13 == "number") && (isFinite(data13))){
+if(data13 > 1 || isNaN(data13)){
+const err27 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema115.properties.combinationFactors.properties.temperature,data:data13};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+if(data13 < 0 || isNaN(data13)){
+const err28 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema115.properties.combinationFactors.properties.temperature,data:data13};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
+}
+errors++;
+}
+}
+else {
+const err29 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema115.properties.combinationFactors.properties.temperature.type,parentSchema:schema115.properties.combinationFactors.properties.temperature,data:data13};
+if(vErrors === null){
+vErrors = [err29];
+}
+else {
+vErrors.push(err29);
+}
+errors++;
+}
+}
+}
+else {
+const err30 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.properties.combinationFactors.type,parentSchema:schema115.properties.combinationFactors,data:data10};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+}
+if(data.cable !== undefined){
+let data14 = data.cable;
+if(data14 && typeof data14 == "object" && !Array.isArray(data14)){
+for(const key3 in data14){
+if(!(((key3 === "breakingFactor") || (key3 === "partialFactor")) || (key3 === "serviceabilityShare"))){
+const err31 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema115.properties.cable,data:data14};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+}
+if(data14.breakingFactor !== undefined){
+let data15 = data14.breakingFactor;
+if((typeof data15 == "number") && (isFinite(data15))){
+if(data15 <= 0 || isNaN(data15)){
+const err32 = {instancePath:instancePath+"/cable/breakingFactor",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data15};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+else {
+const err33 = {instancePath:instancePath+"/cable/breakingFactor",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data15};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+if(data14.partialFactor !== undefined){
+let data16 = data14.partialFactor;
+if((typeof data16 == "number") && (isFinite(data16))){
+if(data16 <= 0 || isNaN(data16)){
+const err34 = {instancePath:instancePath+"/cable/partialFactor",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data16};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+else {
+const err35 = {instancePath:instancePath+"/cable/partialFactor",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data16};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+}
+if(data14.serviceabilityShare !== undefined){
+let data17 = data14.serviceabilityShare;
+if((typeof data17 == "number") && (isFinite(data17))){
+if(data17 > 1 || isNaN(data17)){
+const err36 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema115.properties.cable.properties.serviceabilityShare,data:data17};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+if(data17 <= 0 || isNaN(data17)){
+const err37 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema115.properties.cable.properties.serviceabilityShare,data:data17};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+else {
+const err38 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema115.properties.cable.properties.serviceabilityShare.type,parentSchema:schema115.properties.cable.properties.serviceabilityShare,data:data17};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
+}
+errors++;
+}
+}
+}
+else {
+const err39 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.properties.cable.type,parentSchema:schema115.properties.cable,data:data14};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+}
+if(data.steel !== undefined){
+let data18 = data.steel;
+if(data18 && typeof data18 == "object" && !Array.isArray(data18)){
+for(const key4 in data18){
+if(!((key4 === "gammaM0") || (key4 === "gammaM1"))){
+const err40 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema115.properties.steel,data:data18};
+if(vErrors === null){
+vErrors = [err40];
+}
+else {
+vErrors.push(err40);
+}
+errors++;
+}
+}
+if(data18.gammaM0 !== undefined){
+let data19 = data18.gammaM0;
+if((typeof data19 == "number") && (isFinite(data19))){
+if(data19 <= 0 || isNaN(data19)){
+const err41 = {instancePath:instancePath+"/steel/gammaM0",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data19};
+if(vErrors === null){
+vErrors = [err41];
+}
+else {
+vErrors.push(err41);
+}
+errors++;
+}
+}
+else {
+const err42 = {instancePath:instancePath+"/steel/gammaM0",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data19};
+if(vErrors === null){
+vErrors = [err42];
+}
+else {
+vErrors.push(err42);
+}
+errors++;
+}
+}
+if(data18.gammaM1 !== undefined){
+let data20 = data18.gammaM1;
+if((typeof data20 == "number") && (isFinite(data20))){
+if(data20 <= 0 || isNaN(data20)){
+const err43 = {instancePath:instancePath+"/steel/gammaM1",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data20};
+if(vErrors === null){
+vErrors = [err43];
+}
+else {
+vErrors.push(err43);
+}
+errors++;
+}
+}
+else {
+const err44 = {instancePath:instancePath+"/steel/gammaM1",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data20};
+if(vErrors === null){
+vErrors = [err44];
+}
+else {
+vErrors.push(err44);
+}
+errors++;
+}
+}
+}
+else {
+const err45 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.properties.steel.type,parentSchema:schema115.properties.steel,data:data18};
+if(vErrors === null){
+vErrors = [err45];
+}
+else {
+vErrors.push(err45);
+}
+errors++;
+}
+}
+if(data.allowable !== undefined){
+let data21 = data.allowable;
+if(data21 && typeof data21 == "object" && !Array.isArray(data21)){
+for(const key5 in data21){
+if(!((key5 === "cableSafetyFactor") || (key5 === "memberSafetyFactor"))){
+const err46 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema115.properties.allowable,data:data21};
+if(vErrors === null){
+vErrors = [err46];
+}
+else {
+vErrors.push(err46);
+}
+errors++;
+}
+}
+if(data21.cableSafetyFactor !== undefined){
+let data22 = data21.cableSafetyFactor;
+if((typeof data22 == "number") && (isFinite(data22))){
+if(data22 < 1 || isNaN(data22)){
+const err47 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema115.properties.allowable.properties.cableSafetyFactor,data:data22};
+if(vErrors === null){
+vErrors = [err47];
+}
+else {
+vErrors.push(err47);
+}
+errors++;
+}
+}
+else {
+const err48 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema115.properties.allowable.properties.cableSafetyFactor.type,parentSchema:schema115.properties.allowable.properties.cableSafetyFactor,data:data22};
+if(vErrors === null){
+vErrors = [err48];
+}
+else {
+vErrors.push(err48);
+}
+errors++;
+}
+}
+if(data21.memberSafetyFactor !== undefined){
+let data23 = data21.memberSafetyFactor;
+if((typeof data23 == "number") && (isFinite(data23))){
+if(data23 < 1 || isNaN(data23)){
+const err49 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema115.properties.allowable.properties.memberSafetyFactor,data:data23};
+if(vErrors === null){
+vErrors = [err49];
+}
+else {
+vErrors.push(err49);
+}
+errors++;
+}
+}
+else {
+const err50 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema115.properties.allowable.properties.memberSafetyFactor.type,parentSchema:schema115.properties.allowable.properties.memberSafetyFactor,data:data23};
+if(vErrors === null){
+vErrors = [err50];
+}
+else {
+vErrors.push(err50);
+}
+errors++;
+}
+}
+}
+else {
+const err51 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.properties.allowable.type,parentSchema:schema115.properties.allowable,data:data21};
+if(vErrors === null){
+vErrors = [err51];
+}
+else {
+vErrors.push(err51);
+}
+errors++;
+}
+}
+}
+else {
+const err52 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.type,parentSchema:schema115,data};
+if(vErrors === null){
+vErrors = [err52];
+}
+else {
+vErrors.push(err52);
+}
+errors++;
+}
+validate64.errors = vErrors;
+return errors === 0;
+}
+
+const schema127 = {"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}};
+const pattern39 = new RegExp("^[xyz]{1,3}$", "u");
+const schema130 = {"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}};
+
+function validate67(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.setBy === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema106.required,parentSchema:schema106,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema130.required,parentSchema:schema130,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4938,7 +6325,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "members") || (key0 === "group")) || (key0 === "setBy")) || (key0 === "label"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema106,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema130,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -4982,7 +6369,7 @@ errors++;
 if(data.setBy !== undefined){
 let data2 = data.setBy;
 if(!((data2 === "force") || (data2 === "length"))){
-const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema106.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema106.properties.setBy.enum,parentSchema:schema106.properties.setBy,data:data2};
+const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema130.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema130.properties.setBy.enum,parentSchema:schema130.properties.setBy,data:data2};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -4995,7 +6382,7 @@ errors++;
 if(data.label !== undefined){
 let data3 = data.label;
 if(typeof data3 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema106.properties.label.type,parentSchema:schema106.properties.label,data:data3};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema130.properties.label.type,parentSchema:schema130.properties.label,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -5007,7 +6394,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema106.type,parentSchema:schema106,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema130.type,parentSchema:schema130,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -5016,17 +6403,17 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate65.errors = vErrors;
+validate67.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate64(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate66(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema103.required,parentSchema:schema103,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema127.required,parentSchema:schema127,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5036,7 +6423,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.steps === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema103.required,parentSchema:schema103,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema127.required,parentSchema:schema127,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5046,8 +6433,8 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema103.properties, key0))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema103,data};
+if(!(func2.call(schema127.properties, key0))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema127,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5085,7 +6472,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema103.properties.label.type,parentSchema:schema103.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema127.properties.label.type,parentSchema:schema127.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -5123,7 +6510,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data3 = data.selfWeight;
 if(typeof data3 !== "boolean"){
-const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema103.properties.selfWeight.type,parentSchema:schema103.properties.selfWeight,data:data3};
+const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema127.properties.selfWeight.type,parentSchema:schema127.properties.selfWeight,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -5137,7 +6524,7 @@ if(data.steps !== undefined){
 let data4 = data.steps;
 if(Array.isArray(data4)){
 if(data4.length < 1){
-const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema103.properties.steps,data:data4};
+const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema127.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -5148,14 +6535,14 @@ errors++;
 }
 const len0 = data4.length;
 for(let i0=0; i0<len0; i0++){
-if(!(validate65(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
-vErrors = vErrors === null ? validate65.errors : vErrors.concat(validate65.errors);
+if(!(validate67(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate67.errors : vErrors.concat(validate67.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema103.properties.steps.type,parentSchema:schema103.properties.steps,data:data4};
+const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema127.properties.steps.type,parentSchema:schema127.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -5173,7 +6560,7 @@ for(let i1=0; i1<len1; i1++){
 let data7 = data6[i1];
 if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 if(data7.node === undefined){
-const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema103.properties.temporaryRestraints.items.required,parentSchema:schema103.properties.temporaryRestraints.items,data:data7};
+const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema127.properties.temporaryRestraints.items.required,parentSchema:schema127.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -5183,7 +6570,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data7.fixed === undefined){
-const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema103.properties.temporaryRestraints.items.required,parentSchema:schema103.properties.temporaryRestraints.items,data:data7};
+const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema127.properties.temporaryRestraints.items.required,parentSchema:schema127.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -5194,7 +6581,7 @@ errors++;
 }
 for(const key1 in data7){
 if(!(((key1 === "node") || (key1 === "fixed")) || (key1 === "releaseAfterStep"))){
-const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema103.properties.temporaryRestraints.items,data:data7};
+const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema127.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -5232,8 +6619,8 @@ errors++;
 if(data7.fixed !== undefined){
 let data9 = data7.fixed;
 if(typeof data9 === "string"){
-if(!pattern36.test(data9)){
-const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema103.properties.temporaryRestraints.items.properties.fixed,data:data9};
+if(!pattern39.test(data9)){
+const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema127.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -5244,7 +6631,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema103.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema103.properties.temporaryRestraints.items.properties.fixed,data:data9};
+const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema127.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema127.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -5257,7 +6644,7 @@ errors++;
 if(data7.releaseAfterStep !== undefined){
 let data10 = data7.releaseAfterStep;
 if(!(((typeof data10 == "number") && (!(data10 % 1) && !isNaN(data10))) && (isFinite(data10)))){
-const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema103.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema103.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema127.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema127.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -5268,7 +6655,7 @@ errors++;
 }
 if((typeof data10 == "number") && (isFinite(data10))){
 if(data10 < 1 || isNaN(data10)){
-const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema103.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema127.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -5281,7 +6668,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema103.properties.temporaryRestraints.items.type,parentSchema:schema103.properties.temporaryRestraints.items,data:data7};
+const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema127.properties.temporaryRestraints.items.type,parentSchema:schema127.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -5293,7 +6680,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema103.properties.temporaryRestraints.type,parentSchema:schema103.properties.temporaryRestraints,data:data6};
+const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema127.properties.temporaryRestraints.type,parentSchema:schema127.properties.temporaryRestraints,data:data6};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -5307,7 +6694,7 @@ if(data.plumb !== undefined){
 let data11 = data.plumb;
 if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
 if(data11.base === undefined){
-const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema103.properties.plumb.required,parentSchema:schema103.properties.plumb,data:data11};
+const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema127.properties.plumb.required,parentSchema:schema127.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -5317,7 +6704,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data11.top === undefined){
-const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema103.properties.plumb.required,parentSchema:schema103.properties.plumb,data:data11};
+const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema127.properties.plumb.required,parentSchema:schema127.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -5327,7 +6714,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data11.limit === undefined){
-const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema103.properties.plumb.required,parentSchema:schema103.properties.plumb,data:data11};
+const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema127.properties.plumb.required,parentSchema:schema127.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -5338,7 +6725,7 @@ errors++;
 }
 for(const key2 in data11){
 if(!(((key2 === "base") || (key2 === "top")) || (key2 === "limit"))){
-const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema103.properties.plumb,data:data11};
+const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema127.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -5425,7 +6812,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema103.properties.plumb.type,parentSchema:schema103.properties.plumb,data:data11};
+const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema127.properties.plumb.type,parentSchema:schema127.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -5487,7 +6874,7 @@ errors++;
 }
 }
 else {
-const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema103.type,parentSchema:schema103,data};
+const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema127.type,parentSchema:schema127,data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -5496,18 +6883,18 @@ vErrors.push(err37);
 }
 errors++;
 }
-validate64.errors = vErrors;
+validate66.errors = vErrors;
 return errors === 0;
 }
 
-const schema114 = {"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}};
+const schema138 = {"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}};
 
-function validate69(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate71(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema114.required,parentSchema:schema114,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema138.required,parentSchema:schema138,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5517,7 +6904,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.tensions === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema114.required,parentSchema:schema114,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema138.required,parentSchema:schema138,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5528,7 +6915,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "date")) || (key0 === "tensions")) || (key0 === "positions")) || (key0 === "tolerance")) || (key0 === "lengthUncertainty"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema114,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema138,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5566,7 +6953,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema114.properties.label.type,parentSchema:schema114.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema138.properties.label.type,parentSchema:schema138.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -5579,7 +6966,7 @@ errors++;
 if(data.date !== undefined){
 let data2 = data.date;
 if(typeof data2 !== "string"){
-const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema114.properties.date.type,parentSchema:schema114.properties.date,data:data2};
+const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema138.properties.date.type,parentSchema:schema138.properties.date,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -5597,7 +6984,7 @@ for(let i0=0; i0<len0; i0++){
 let data4 = data3[i0];
 if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
 if(data4.member === undefined){
-const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema114.properties.tensions.items.required,parentSchema:schema114.properties.tensions.items,data:data4};
+const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema138.properties.tensions.items.required,parentSchema:schema138.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -5607,7 +6994,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data4.method === undefined){
-const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema114.properties.tensions.items.required,parentSchema:schema114.properties.tensions.items,data:data4};
+const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema138.properties.tensions.items.required,parentSchema:schema138.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -5617,7 +7004,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data4.value === undefined){
-const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema114.properties.tensions.items.required,parentSchema:schema114.properties.tensions.items,data:data4};
+const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema138.properties.tensions.items.required,parentSchema:schema138.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -5627,7 +7014,7 @@ vErrors.push(err9);
 errors++;
 }
 if(data4.accuracy === undefined){
-const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema114.properties.tensions.items.required,parentSchema:schema114.properties.tensions.items,data:data4};
+const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema138.properties.tensions.items.required,parentSchema:schema138.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -5637,7 +7024,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data4.temperature === undefined){
-const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema114.properties.tensions.items.required,parentSchema:schema114.properties.tensions.items,data:data4};
+const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema138.properties.tensions.items.required,parentSchema:schema138.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -5648,7 +7035,7 @@ errors++;
 }
 for(const key1 in data4){
 if(!((((((key1 === "member") || (key1 === "method")) || (key1 === "value")) || (key1 === "accuracy")) || (key1 === "temperature")) || (key1 === "mode"))){
-const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema114.properties.tensions.items,data:data4};
+const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema138.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -5686,7 +7073,7 @@ errors++;
 if(data4.method !== undefined){
 let data6 = data4.method;
 if(!(((data6 === "dynamometer") || (data6 === "frequency")) || (data6 === "sag"))){
-const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema114.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema114.properties.tensions.items.properties.method.enum,parentSchema:schema114.properties.tensions.items.properties.method,data:data6};
+const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema138.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema138.properties.tensions.items.properties.method.enum,parentSchema:schema138.properties.tensions.items.properties.method,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -5774,7 +7161,7 @@ errors++;
 if(data4.mode !== undefined){
 let data10 = data4.mode;
 if(!((((data10 === "tautString") || (data10 === "inPlaneSymmetric")) || (data10 === "inPlaneAntisymmetric")) || (data10 === "lowestInPlane"))){
-const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema114.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema114.properties.tensions.items.properties.mode.enum,parentSchema:schema114.properties.tensions.items.properties.mode,data:data10};
+const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema138.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema138.properties.tensions.items.properties.mode.enum,parentSchema:schema138.properties.tensions.items.properties.mode,data:data10};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -5786,7 +7173,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema114.properties.tensions.items.type,parentSchema:schema114.properties.tensions.items,data:data4};
+const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema138.properties.tensions.items.type,parentSchema:schema138.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -5798,7 +7185,7 @@ errors++;
 }
 }
 else {
-const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema114.properties.tensions.type,parentSchema:schema114.properties.tensions,data:data3};
+const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema138.properties.tensions.type,parentSchema:schema138.properties.tensions,data:data3};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -5816,7 +7203,7 @@ for(let i1=0; i1<len1; i1++){
 let data12 = data11[i1];
 if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
 if(data12.node === undefined){
-const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema114.properties.positions.items.required,parentSchema:schema114.properties.positions.items,data:data12};
+const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema138.properties.positions.items.required,parentSchema:schema138.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -5826,7 +7213,7 @@ vErrors.push(err25);
 errors++;
 }
 if(data12.at === undefined){
-const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema114.properties.positions.items.required,parentSchema:schema114.properties.positions.items,data:data12};
+const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema138.properties.positions.items.required,parentSchema:schema138.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -5836,7 +7223,7 @@ vErrors.push(err26);
 errors++;
 }
 if(data12.accuracy === undefined){
-const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema114.properties.positions.items.required,parentSchema:schema114.properties.positions.items,data:data12};
+const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema138.properties.positions.items.required,parentSchema:schema138.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -5846,7 +7233,7 @@ vErrors.push(err27);
 errors++;
 }
 if(data12.temperature === undefined){
-const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema114.properties.positions.items.required,parentSchema:schema114.properties.positions.items,data:data12};
+const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema138.properties.positions.items.required,parentSchema:schema138.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -5857,7 +7244,7 @@ errors++;
 }
 for(const key2 in data12){
 if(!((((key2 === "node") || (key2 === "at")) || (key2 === "accuracy")) || (key2 === "temperature"))){
-const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema114.properties.positions.items,data:data12};
+const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema138.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -5993,7 +7380,7 @@ errors++;
 }
 }
 else {
-const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema114.properties.positions.items.type,parentSchema:schema114.properties.positions.items,data:data12};
+const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema138.properties.positions.items.type,parentSchema:schema138.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -6005,7 +7392,7 @@ errors++;
 }
 }
 else {
-const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema114.properties.positions.type,parentSchema:schema114.properties.positions,data:data11};
+const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema138.properties.positions.type,parentSchema:schema138.properties.positions,data:data11};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -6067,7 +7454,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema114.type,parentSchema:schema114,data};
+const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema138.type,parentSchema:schema138,data};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -6076,18 +7463,18 @@ vErrors.push(err46);
 }
 errors++;
 }
-validate69.errors = vErrors;
+validate71.errors = vErrors;
 return errors === 0;
 }
 
-const schema127 = {"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}};
+const schema151 = {"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}};
 
-function validate71(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate73(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema127.required,parentSchema:schema127,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema151.required,parentSchema:schema151,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6097,7 +7484,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.nodes === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema127.required,parentSchema:schema127,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema151.required,parentSchema:schema151,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6108,7 +7495,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "id") || (key0 === "nodes")) || (key0 === "region")) || (key0 === "label"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema127,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema151,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -6147,7 +7534,7 @@ if(data.nodes !== undefined){
 let data1 = data.nodes;
 if(Array.isArray(data1)){
 if(data1.length < 3){
-const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema127.properties.nodes,data:data1};
+const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema151.properties.nodes,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -6184,7 +7571,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema127.properties.nodes.type,parentSchema:schema127.properties.nodes,data:data1};
+const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema151.properties.nodes.type,parentSchema:schema151.properties.nodes,data:data1};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -6222,7 +7609,7 @@ errors++;
 if(data.label !== undefined){
 let data4 = data.label;
 if(typeof data4 !== "string"){
-const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema127.properties.label.type,parentSchema:schema127.properties.label,data:data4};
+const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema151.properties.label.type,parentSchema:schema151.properties.label,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -6234,7 +7621,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema127.type,parentSchema:schema127,data};
+const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema151.type,parentSchema:schema151,data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -6243,18 +7630,18 @@ vErrors.push(err12);
 }
 errors++;
 }
-validate71.errors = vErrors;
+validate73.errors = vErrors;
 return errors === 0;
 }
 
-const schema131 = {"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}};
+const schema155 = {"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}};
 
-function validate73(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema131.required,parentSchema:schema131,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema155.required,parentSchema:schema155,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6264,7 +7651,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.meanCase === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema131.required,parentSchema:schema131,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema155.required,parentSchema:schema155,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6274,7 +7661,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.patchFactor === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema131.required,parentSchema:schema131,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema155.required,parentSchema:schema155,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -6285,7 +7672,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "id") || (key0 === "label")) || (key0 === "meanCase")) || (key0 === "patchFactor")) || (key0 === "patches"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema131,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema155,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -6323,7 +7710,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema131.properties.label.type,parentSchema:schema131.properties.label,data:data1};
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema155.properties.label.type,parentSchema:schema155.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -6362,7 +7749,7 @@ if(data.patchFactor !== undefined){
 let data3 = data.patchFactor;
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 <= 1 || isNaN(data3)){
-const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema131.properties.patchFactor,data:data3};
+const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema155.properties.patchFactor,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -6373,7 +7760,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema131.properties.patchFactor.type,parentSchema:schema131.properties.patchFactor,data:data3};
+const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema155.properties.patchFactor.type,parentSchema:schema155.properties.patchFactor,data:data3};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -6387,7 +7774,7 @@ if(data.patches !== undefined){
 let data4 = data.patches;
 if(Array.isArray(data4)){
 if(data4.length < 1){
-const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema131.properties.patches,data:data4};
+const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema155.properties.patches,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -6401,7 +7788,7 @@ for(let i0=0; i0<len0; i0++){
 let data5 = data4[i0];
 if(data5 && typeof data5 == "object" && !Array.isArray(data5)){
 if(data5.from === undefined){
-const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema131.properties.patches.items.required,parentSchema:schema131.properties.patches.items,data:data5};
+const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema155.properties.patches.items.required,parentSchema:schema155.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -6411,7 +7798,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data5.to === undefined){
-const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema131.properties.patches.items.required,parentSchema:schema131.properties.patches.items,data:data5};
+const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema155.properties.patches.items.required,parentSchema:schema155.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -6422,7 +7809,7 @@ errors++;
 }
 for(const key1 in data5){
 if(!((key1 === "from") || (key1 === "to"))){
-const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema131.properties.patches.items,data:data5};
+const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema155.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -6435,7 +7822,7 @@ errors++;
 if(data5.from !== undefined){
 let data6 = data5.from;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema131.properties.patches.items.properties.from.type,parentSchema:schema131.properties.patches.items.properties.from,data:data6};
+const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema155.properties.patches.items.properties.from.type,parentSchema:schema155.properties.patches.items.properties.from,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -6448,7 +7835,7 @@ errors++;
 if(data5.to !== undefined){
 let data7 = data5.to;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema131.properties.patches.items.properties.to.type,parentSchema:schema131.properties.patches.items.properties.to,data:data7};
+const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema155.properties.patches.items.properties.to.type,parentSchema:schema155.properties.patches.items.properties.to,data:data7};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -6460,7 +7847,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.properties.patches.items.type,parentSchema:schema131.properties.patches.items,data:data5};
+const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema155.properties.patches.items.type,parentSchema:schema155.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -6472,7 +7859,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema131.properties.patches.type,parentSchema:schema131.properties.patches,data:data4};
+const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema155.properties.patches.type,parentSchema:schema155.properties.patches,data:data4};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -6484,7 +7871,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.type,parentSchema:schema131,data};
+const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema155.type,parentSchema:schema155,data};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -6493,18 +7880,18 @@ vErrors.push(err19);
 }
 errors++;
 }
-validate73.errors = vErrors;
+validate75.errors = vErrors;
 return errors === 0;
 }
 
-const schema134 = {"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
+const schema158 = {"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
 
-function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate77(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema134.required,parentSchema:schema134,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema158.required,parentSchema:schema158,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6514,7 +7901,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.fromCase === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema134.required,parentSchema:schema134,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema158.required,parentSchema:schema158,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6525,7 +7912,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "fromCase")) || (key0 === "members")) || (key0 === "group")) || (key0 === "dynamicFactor")) || (key0 === "dampingRatio"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema134,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema158,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -6563,7 +7950,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema134.properties.label.type,parentSchema:schema134.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema158.properties.label.type,parentSchema:schema158.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -6633,7 +8020,7 @@ if(data.dynamicFactor !== undefined){
 let data5 = data.dynamicFactor;
 if((typeof data5 == "number") && (isFinite(data5))){
 if(data5 > 2 || isNaN(data5)){
-const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema134.properties.dynamicFactor,data:data5};
+const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema158.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -6643,7 +8030,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data5 < 1 || isNaN(data5)){
-const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema134.properties.dynamicFactor,data:data5};
+const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema158.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -6654,7 +8041,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema134.properties.dynamicFactor.type,parentSchema:schema134.properties.dynamicFactor,data:data5};
+const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema158.properties.dynamicFactor.type,parentSchema:schema158.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -6668,7 +8055,7 @@ if(data.dampingRatio !== undefined){
 let data6 = data.dampingRatio;
 if((typeof data6 == "number") && (isFinite(data6))){
 if(data6 < 0 || isNaN(data6)){
-const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema134.properties.dampingRatio,data:data6};
+const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema158.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -6678,7 +8065,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data6 >= 1 || isNaN(data6)){
-const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema134.properties.dampingRatio,data:data6};
+const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema158.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -6689,7 +8076,7 @@ errors++;
 }
 }
 else {
-const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema134.properties.dampingRatio.type,parentSchema:schema134.properties.dampingRatio,data:data6};
+const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema158.properties.dampingRatio.type,parentSchema:schema158.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -6701,7 +8088,7 @@ errors++;
 }
 }
 else {
-const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema134.type,parentSchema:schema134,data};
+const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema158.type,parentSchema:schema158,data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -6710,7 +8097,7 @@ vErrors.push(err16);
 }
 errors++;
 }
-validate75.errors = vErrors;
+validate77.errors = vErrors;
 return errors === 0;
 }
 
@@ -6807,8 +8194,8 @@ errors++;
 }
 if(data.version !== undefined){
 let data1 = data.version;
-if(1 !== data1){
-const err8 = {instancePath:instancePath+"/version",schemaPath:"#/properties/version/const",keyword:"const",params:{allowedValue: 1},message:"must be equal to constant",schema:1,parentSchema:schema11.properties.version,data:data1};
+if(2 !== data1){
+const err8 = {instancePath:instancePath+"/version",schemaPath:"#/properties/version/const",keyword:"const",params:{allowedValue: 2},message:"must be equal to constant",schema:2,parentSchema:schema11.properties.version,data:data1};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -7032,19 +8419,25 @@ vErrors = vErrors === null ? validate62.errors : vErrors.concat(validate62.error
 errors = vErrors.length;
 }
 }
-if(data.sequences !== undefined){
-let data21 = data.sequences;
-if(Array.isArray(data21)){
-const len7 = data21.length;
-for(let i7=0; i7<len7; i7++){
-if(!(validate64(data21[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data21,parentDataProperty:i7,rootData}))){
+if(data.designBasis !== undefined){
+if(!(validate64(data.designBasis, {instancePath:instancePath+"/designBasis",parentData:data,parentDataProperty:"designBasis",rootData}))){
 vErrors = vErrors === null ? validate64.errors : vErrors.concat(validate64.errors);
+errors = vErrors.length;
+}
+}
+if(data.sequences !== undefined){
+let data22 = data.sequences;
+if(Array.isArray(data22)){
+const len7 = data22.length;
+for(let i7=0; i7<len7; i7++){
+if(!(validate66(data22[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data22,parentDataProperty:i7,rootData}))){
+vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/sequences",schemaPath:"#/properties/sequences/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.sequences.type,parentSchema:schema11.properties.sequences,data:data21};
+const err19 = {instancePath:instancePath+"/sequences",schemaPath:"#/properties/sequences/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.sequences.type,parentSchema:schema11.properties.sequences,data:data22};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -7055,18 +8448,18 @@ errors++;
 }
 }
 if(data.siteMeasurements !== undefined){
-let data23 = data.siteMeasurements;
-if(Array.isArray(data23)){
-const len8 = data23.length;
+let data24 = data.siteMeasurements;
+if(Array.isArray(data24)){
+const len8 = data24.length;
 for(let i8=0; i8<len8; i8++){
-if(!(validate69(data23[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data23,parentDataProperty:i8,rootData}))){
-vErrors = vErrors === null ? validate69.errors : vErrors.concat(validate69.errors);
+if(!(validate71(data24[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data24,parentDataProperty:i8,rootData}))){
+vErrors = vErrors === null ? validate71.errors : vErrors.concat(validate71.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/siteMeasurements",schemaPath:"#/properties/siteMeasurements/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.siteMeasurements.type,parentSchema:schema11.properties.siteMeasurements,data:data23};
+const err20 = {instancePath:instancePath+"/siteMeasurements",schemaPath:"#/properties/siteMeasurements/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.siteMeasurements.type,parentSchema:schema11.properties.siteMeasurements,data:data24};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -7077,11 +8470,11 @@ errors++;
 }
 }
 if(data.report !== undefined){
-let data25 = data.report;
-if(data25 && typeof data25 == "object" && !Array.isArray(data25)){
-for(const key1 in data25){
+let data26 = data.report;
+if(data26 && typeof data26 == "object" && !Array.isArray(data26)){
+for(const key1 in data26){
 if(!((key1 === "documentNumber") || (key1 === "revisions"))){
-const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema126,data:data25};
+const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema150,data:data26};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -7091,10 +8484,10 @@ vErrors.push(err21);
 errors++;
 }
 }
-if(data25.documentNumber !== undefined){
-let data26 = data25.documentNumber;
-if(typeof data26 !== "string"){
-const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.documentNumber.type,parentSchema:schema126.properties.documentNumber,data:data26};
+if(data26.documentNumber !== undefined){
+let data27 = data26.documentNumber;
+if(typeof data27 !== "string"){
+const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema150.properties.documentNumber.type,parentSchema:schema150.properties.documentNumber,data:data27};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -7104,15 +8497,15 @@ vErrors.push(err22);
 errors++;
 }
 }
-if(data25.revisions !== undefined){
-let data27 = data25.revisions;
-if(Array.isArray(data27)){
-const len9 = data27.length;
+if(data26.revisions !== undefined){
+let data28 = data26.revisions;
+if(Array.isArray(data28)){
+const len9 = data28.length;
 for(let i9=0; i9<len9; i9++){
-let data28 = data27[i9];
-if(data28 && typeof data28 == "object" && !Array.isArray(data28)){
-if(data28.revision === undefined){
-const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema126.properties.revisions.items.required,parentSchema:schema126.properties.revisions.items,data:data28};
+let data29 = data28[i9];
+if(data29 && typeof data29 == "object" && !Array.isArray(data29)){
+if(data29.revision === undefined){
+const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema150.properties.revisions.items.required,parentSchema:schema150.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -7121,8 +8514,8 @@ vErrors.push(err23);
 }
 errors++;
 }
-if(data28.date === undefined){
-const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema126.properties.revisions.items.required,parentSchema:schema126.properties.revisions.items,data:data28};
+if(data29.date === undefined){
+const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema150.properties.revisions.items.required,parentSchema:schema150.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -7131,8 +8524,8 @@ vErrors.push(err24);
 }
 errors++;
 }
-if(data28.description === undefined){
-const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema126.properties.revisions.items.required,parentSchema:schema126.properties.revisions.items,data:data28};
+if(data29.description === undefined){
+const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema150.properties.revisions.items.required,parentSchema:schema150.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -7141,9 +8534,9 @@ vErrors.push(err25);
 }
 errors++;
 }
-for(const key2 in data28){
+for(const key2 in data29){
 if(!(((((key2 === "revision") || (key2 === "date")) || (key2 === "description")) || (key2 === "by")) || (key2 === "checkedBy"))){
-const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema126.properties.revisions.items,data:data28};
+const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema150.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -7153,10 +8546,10 @@ vErrors.push(err26);
 errors++;
 }
 }
-if(data28.revision !== undefined){
-let data29 = data28.revision;
-if(typeof data29 !== "string"){
-const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.revisions.items.properties.revision.type,parentSchema:schema126.properties.revisions.items.properties.revision,data:data29};
+if(data29.revision !== undefined){
+let data30 = data29.revision;
+if(typeof data30 !== "string"){
+const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema150.properties.revisions.items.properties.revision.type,parentSchema:schema150.properties.revisions.items.properties.revision,data:data30};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -7166,10 +8559,10 @@ vErrors.push(err27);
 errors++;
 }
 }
-if(data28.date !== undefined){
-let data30 = data28.date;
-if(typeof data30 !== "string"){
-const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.revisions.items.properties.date.type,parentSchema:schema126.properties.revisions.items.properties.date,data:data30};
+if(data29.date !== undefined){
+let data31 = data29.date;
+if(typeof data31 !== "string"){
+const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema150.properties.revisions.items.properties.date.type,parentSchema:schema150.properties.revisions.items.properties.date,data:data31};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -7179,10 +8572,10 @@ vErrors.push(err28);
 errors++;
 }
 }
-if(data28.description !== undefined){
-let data31 = data28.description;
-if(typeof data31 !== "string"){
-const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.revisions.items.properties.description.type,parentSchema:schema126.properties.revisions.items.properties.description,data:data31};
+if(data29.description !== undefined){
+let data32 = data29.description;
+if(typeof data32 !== "string"){
+const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema150.properties.revisions.items.properties.description.type,parentSchema:schema150.properties.revisions.items.properties.description,data:data32};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -7192,10 +8585,10 @@ vErrors.push(err29);
 errors++;
 }
 }
-if(data28.by !== undefined){
-let data32 = data28.by;
-if(typeof data32 !== "string"){
-const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.revisions.items.properties.by.type,parentSchema:schema126.properties.revisions.items.properties.by,data:data32};
+if(data29.by !== undefined){
+let data33 = data29.by;
+if(typeof data33 !== "string"){
+const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema150.properties.revisions.items.properties.by.type,parentSchema:schema150.properties.revisions.items.properties.by,data:data33};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -7205,10 +8598,10 @@ vErrors.push(err30);
 errors++;
 }
 }
-if(data28.checkedBy !== undefined){
-let data33 = data28.checkedBy;
-if(typeof data33 !== "string"){
-const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema126.properties.revisions.items.properties.checkedBy.type,parentSchema:schema126.properties.revisions.items.properties.checkedBy,data:data33};
+if(data29.checkedBy !== undefined){
+let data34 = data29.checkedBy;
+if(typeof data34 !== "string"){
+const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema150.properties.revisions.items.properties.checkedBy.type,parentSchema:schema150.properties.revisions.items.properties.checkedBy,data:data34};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -7220,7 +8613,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema126.properties.revisions.items.type,parentSchema:schema126.properties.revisions.items,data:data28};
+const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema150.properties.revisions.items.type,parentSchema:schema150.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -7232,7 +8625,7 @@ errors++;
 }
 }
 else {
-const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema126.properties.revisions.type,parentSchema:schema126.properties.revisions,data:data27};
+const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema150.properties.revisions.type,parentSchema:schema150.properties.revisions,data:data28};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -7244,7 +8637,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema126.type,parentSchema:schema126,data:data25};
+const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema150.type,parentSchema:schema150,data:data26};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -7255,18 +8648,18 @@ errors++;
 }
 }
 if(data.panels !== undefined){
-let data34 = data.panels;
-if(Array.isArray(data34)){
-const len10 = data34.length;
+let data35 = data.panels;
+if(Array.isArray(data35)){
+const len10 = data35.length;
 for(let i10=0; i10<len10; i10++){
-if(!(validate71(data34[i10], {instancePath:instancePath+"/panels/" + i10,parentData:data34,parentDataProperty:i10,rootData}))){
-vErrors = vErrors === null ? validate71.errors : vErrors.concat(validate71.errors);
+if(!(validate73(data35[i10], {instancePath:instancePath+"/panels/" + i10,parentData:data35,parentDataProperty:i10,rootData}))){
+vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err35 = {instancePath:instancePath+"/panels",schemaPath:"#/properties/panels/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.panels.type,parentSchema:schema11.properties.panels,data:data34};
+const err35 = {instancePath:instancePath+"/panels",schemaPath:"#/properties/panels/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.panels.type,parentSchema:schema11.properties.panels,data:data35};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -7277,18 +8670,18 @@ errors++;
 }
 }
 if(data.patchWind !== undefined){
-let data36 = data.patchWind;
-if(Array.isArray(data36)){
-const len11 = data36.length;
+let data37 = data.patchWind;
+if(Array.isArray(data37)){
+const len11 = data37.length;
 for(let i11=0; i11<len11; i11++){
-if(!(validate73(data36[i11], {instancePath:instancePath+"/patchWind/" + i11,parentData:data36,parentDataProperty:i11,rootData}))){
-vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+if(!(validate75(data37[i11], {instancePath:instancePath+"/patchWind/" + i11,parentData:data37,parentDataProperty:i11,rootData}))){
+vErrors = vErrors === null ? validate75.errors : vErrors.concat(validate75.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err36 = {instancePath:instancePath+"/patchWind",schemaPath:"#/properties/patchWind/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.patchWind.type,parentSchema:schema11.properties.patchWind,data:data36};
+const err36 = {instancePath:instancePath+"/patchWind",schemaPath:"#/properties/patchWind/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.patchWind.type,parentSchema:schema11.properties.patchWind,data:data37};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -7299,18 +8692,18 @@ errors++;
 }
 }
 if(data.memberLoss !== undefined){
-let data38 = data.memberLoss;
-if(Array.isArray(data38)){
-const len12 = data38.length;
+let data39 = data.memberLoss;
+if(Array.isArray(data39)){
+const len12 = data39.length;
 for(let i12=0; i12<len12; i12++){
-if(!(validate75(data38[i12], {instancePath:instancePath+"/memberLoss/" + i12,parentData:data38,parentDataProperty:i12,rootData}))){
-vErrors = vErrors === null ? validate75.errors : vErrors.concat(validate75.errors);
+if(!(validate77(data39[i12], {instancePath:instancePath+"/memberLoss/" + i12,parentData:data39,parentDataProperty:i12,rootData}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err37 = {instancePath:instancePath+"/memberLoss",schemaPath:"#/properties/memberLoss/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.memberLoss.type,parentSchema:schema11.properties.memberLoss,data:data38};
+const err37 = {instancePath:instancePath+"/memberLoss",schemaPath:"#/properties/memberLoss/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.memberLoss.type,parentSchema:schema11.properties.memberLoss,data:data39};
 if(vErrors === null){
 vErrors = [err37];
 }
