@@ -9,6 +9,7 @@ import { buildModel } from '../model/build-model.ts';
 import { resolveCaseLoads, resolveCombinationLoads } from '../loads/resolve-case-loads.ts';
 import { createWorkspace } from './workspace.ts';
 import { solveCase } from './solve-case.ts';
+import { nowMs } from './clock.ts';
 
 export interface SolveProjectOptions {
   /** Only these case / combination ids (default: all). */
@@ -16,8 +17,10 @@ export interface SolveProjectOptions {
 }
 
 export function solveProject(project: ProjectFile, control: SolveControl = {}, options: SolveProjectOptions = {}): ProjectSolution {
+  const t0 = nowMs();
   const model = buildModel(project);
   const ws = createWorkspace(model);
+  const t1 = nowMs();
   const wanted = (id: string) => !options.only || options.only.includes(id);
   const jobs = [
     ...project.loadCases.filter((c) => wanted(c.id)).map((c) => ({ id: c.id, loads: () => resolveCaseLoads(model, project, c) })),
@@ -31,5 +34,7 @@ export function solveProject(project: ProjectFile, control: SolveControl = {}, o
     solution.report.cases.push(result);
     solution.fields.push(fields);
   });
+  const t2 = nowMs();
+  solution.report.stats = { analysisSeconds: (t1 - t0) / 1000, newtonSeconds: (t2 - t1) / 1000, seconds: (t2 - t0) / 1000 };
   return solution;
 }

@@ -60,7 +60,8 @@ export function buildModel(project: ProjectFile): AnalysisModel {
     chain[0] = a;
     chain[n] = b;
     for (let k = 1; k < n; k++) chain[k] = nextNode++;
-    placeInteriorNodes(coords, chain, xa, xb, m, section, refLength * n, s0);
+    // The start shape follows the stress-free length (for a pretension: the length that carries it).
+    placeInteriorNodes(coords, chain, xa, xb, m, section, n * stressFreeLength(refLength, s0, section.E), s0);
 
     const unstressed = stressFreeLength(refLength, s0, section.E);
     for (let k = 0; k < n; k++, e++) {
@@ -146,7 +147,7 @@ function placeInteriorNodes(
   if (n < 2) return;
   if (m.kind === 'cable' && s0 >= 0) {
     const shape = sagStartShape({
-      a: xa, b: xb, unstressedLength, pretension: s0 * section.area, n,
+      a: xa, b: xb, unstressedLength, n,
       weightPerLength: (section.massPerLength ?? 0) * STANDARD_GRAVITY, EA: section.E * section.area,
     });
     for (let k = 1; k < n; k++) coords.set(shape.subarray(3 * (k - 1), 3 * k), 3 * chain[k]);

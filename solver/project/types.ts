@@ -12,7 +12,11 @@
  * runtime dependencies). Keep both in step.
  */
 
+import type { ReportSpec, SiteMeasurementSetSpec, TensioningSequenceSpec } from './site-types.ts';
 import type { BeamReleases, NodeSprings, PrescribedDisplacement, NodalMoment } from './structure-types.ts';
+import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec } from './actions-types.ts';
+
+export type * from './actions-types.ts';
 
 export type Vec3 = [number, number, number];
 export type * from './structure-types.ts';
@@ -39,6 +43,18 @@ export interface ProjectFile {
   generators?: GeneratorRecord[];
   /** Display preferences; never affect results. */
   display?: DisplaySettings;
+  /** Tensioning sequences for the crew (solver/sequence). */
+  sequences?: TensioningSequenceSpec[];
+  /** Measurements taken on site, for the as-built back-analysis (solver/asbuilt). */
+  siteMeasurements?: SiteMeasurementSetSpec[];
+  /** Calculation report: document number and revision block. */
+  report?: ReportSpec;
+  /** Panels carrying area loads (solver/project/actions-types.ts). */
+  panels?: PanelSpec[];
+  /** Patch wind on guyed masts: a combination of results (actions-types.ts). */
+  patchWind?: PatchWindSpec[];
+  /** Member loss (guy rupture) accidental cases (actions-types.ts). */
+  memberLoss?: MemberLossSpec[];
 }
 
 export interface ProjectMeta {
@@ -115,7 +131,7 @@ export interface MemberSpec {
   from: string;
   to: string;
   section: string;
-  /** Number of elements the solver splits the member into. Default 1. */
+  /** Number of elements the solver splits the member into, 1 to 10,000. Default 1. */
   segments?: number;
   /** Axial force at the modelled geometry, N (positive = tension). Exclusive with unstressedLength. */
   pretension?: number;
@@ -181,6 +197,8 @@ export interface LoadCaseSpec {
   ice?: IceSpec;
   /** Prescribed support displacements in this case. */
   displacements?: PrescribedDisplacement[];
+  /** Area loads on panels (actions-types.ts). */
+  areaLoads?: AreaLoadSpec[];
 }
 
 export interface GroupSpec {

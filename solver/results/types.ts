@@ -89,6 +89,18 @@ export interface CaseFields {
 
 export interface SolveReport {
   cases: CaseResult[];
+  /** Where the time of the whole solve went (set by solveProject). */
+  stats?: SolveTimes;
+}
+
+/** Wall time of one solveProject call, s. */
+export interface SolveTimes {
+  /** Model building plus the sparsity pattern, ordering and symbolic factorisation (once per topology). */
+  analysisSeconds: number;
+  /** Every case: Newton iterations and result extraction (the sum of the cases' stats.seconds). */
+  newtonSeconds: number;
+  /** All of the solve: analysis + Newton. */
+  seconds: number;
 }
 
 /** Everything `solveProject` returns: the JSON-able report plus raw fields per case. */

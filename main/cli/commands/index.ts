@@ -5,5 +5,7 @@ import { checkCommand } from './check.ts';
 import { tuneCommand } from './tune.ts';
 import { scheduleCommand } from './schedule.ts';
 import { validateCommand } from './validate.ts';
+import { sequenceCommand } from './sequence.ts';
+import { asBuiltCommand } from './asbuilt.ts';
 
-export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand];
+export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, sequenceCommand, asBuiltCommand];

@@ -1,4 +1,4 @@
-import type { GroupSpec, MemberSpec, NodeSpec, Vec3 } from '../../../solver/index.ts';
+import type { GroupSpec, MemberSpec, NodeSpec, PanelSpec, Vec3 } from '../../../solver/index.ts';
 import type { GeneratedParts, SectionInput } from './types.ts';
 import { ParamCheck, sectionSpec } from './types.ts';
 import type { NetLink } from './form-found-net.ts';
@@ -75,8 +75,14 @@ export function generateRadialNet(recordId: string, p: RadialNetParams): Generat
   const groupOf = new Map<string, string[]>();
   links.forEach((l) => { const g = groupOf.get(l.group) ?? []; g.push(l.id); groupOf.set(l.group, g); });
   const groups: GroupSpec[] = [...[...groupOf].map(([gid, m]) => ({ id: gid, label: gid.slice(recordId.length + 1), members: m })), { id: id('masts'), label: 'mast', members: [id('mast')] }];
+  // one panel per bay between adjacent radials and rings, corners outward then counter-clockwise (normal up)
+  const panels: PanelSpec[] = [];
+  for (let r = 0; r < rings; r++) for (let k = 0; k < n; k++) {
+    const k1 = (k + 1) % n;
+    panels.push({ id: id(`P${r + 1}-${k + 1}`), nodes: [ids[idx(r, k)], ids[idx(r + 1, k)], ids[idx(r + 1, k1)], ids[idx(r, k1)]] });
+  }
   return {
-    nodes, members, groups,
+    nodes, members, groups, panels,
     sections: [
       sectionSpec(id('radial'), p.radialCable, { label: p.radialCable.label ?? 'radial cable' }),
       sectionSpec(id('ring'), p.ringCable, { label: p.ringCable.label ?? 'inner ring cable' }),

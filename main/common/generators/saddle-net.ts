@@ -1,4 +1,4 @@
-import type { GroupSpec, MemberSpec, NodeSpec, SectionSpec, Vec3 } from '../../../solver/index.ts';
+import type { GroupSpec, MemberSpec, NodeSpec, PanelSpec, SectionSpec, Vec3 } from '../../../solver/index.ts';
 import type { GeneratedParts, SectionInput } from './types.ts';
 import { ParamCheck, sectionSpec } from './types.ts';
 import type { NetLink } from './form-found-net.ts';
@@ -120,7 +120,20 @@ export function generateSaddleNet(recordId: string, p: SaddleNetParams): Generat
     { id: id('masts'), label: 'masts', members: mastIds },
     { id: id('back-stays'), label: 'back-stays', members: stayIds },
   ];
-  return { nodes, sections, members, groups, keyNodes: { high1: ids[high[0]], high2: ids[high[1]], low1: ids[low[0]], low2: ids[low[1]], centre: ids[at(nx / 2, ny / 2)!] } };
+  return { nodes, sections, members, groups, panels: gridPanels(id, nx, ny, (i, j) => { const k = at(i, j); return k === undefined ? undefined : ids[k]; }), keyNodes: { high1: ids[high[0]], high2: ids[high[1]], low1: ids[low[0]], low2: ids[low[1]], centre: ids[at(nx / 2, ny / 2)!] } };
+}
+
+/**
+ * One panel per grid cell, corners counter-clockwise seen from above (normal up): a quad where
+ * all four corners exist, a triangle where three do (cells cut by an elliptic outline).
+ */
+function gridPanels(id: (s: string) => string, nx: number, ny: number, node: (i: number, j: number) => string | undefined): PanelSpec[] {
+  const panels: PanelSpec[] = [];
+  for (let j = 0; j < ny; j++) for (let i = 0; i < nx; i++) {
+    const corners = [node(i, j), node(i + 1, j), node(i + 1, j + 1), node(i, j + 1)].filter((c): c is string => c !== undefined);
+    if (corners.length >= 3) panels.push({ id: id(`P${i}-${j}`), nodes: corners });
+  }
+  return panels;
 }
 
 /** True when the grid link from (i, j) along (di, dj) runs along the boundary (it is an edge cable instead). */

@@ -1,4 +1,4 @@
-import type { GroupSpec, MemberSpec, NodeSpec, SectionSpec } from '../../../solver/index.ts';
+import type { GroupSpec, MemberSpec, NodeSpec, PanelSpec, SectionSpec } from '../../../solver/index.ts';
 
 /**
  * What a generator makes: ordinary, editable project parts.
@@ -13,6 +13,8 @@ export interface GeneratedParts {
   sections: SectionSpec[];
   members: MemberSpec[];
   groups: GroupSpec[];
+  /** Panels for area loads (nets: one per grid cell), ids starting "<recordId>/". */
+  panels?: PanelSpec[];
   /** Notable node ids for the caller (e.g. mast base and top for tilt checks). */
   keyNodes: Record<string, string>;
 }

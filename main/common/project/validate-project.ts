@@ -12,10 +12,11 @@ import { schemaErrors } from './validation/schema-validator.ts';
 import { duplicateIdErrors } from './validation/id-checks.ts';
 import { referenceErrors } from './validation/reference-checks.ts';
 import { valueErrors } from './validation/value-checks.ts';
+import { actionErrors } from './validation/actions-checks.ts';
 
 /** Schema plus semantic problems of a current-version document (no migration). */
 export function projectErrors(doc: unknown): string[] {
-  const all = [...schemaErrors(doc), ...duplicateIdErrors(doc), ...referenceErrors(doc), ...valueErrors(doc)];
+  const all = [...schemaErrors(doc), ...duplicateIdErrors(doc), ...referenceErrors(doc), ...valueErrors(doc), ...actionErrors(doc)];
   return [...new Set(all)];
 }
 

@@ -1,0 +1,136 @@
+/**
+ * Semantic checks of the design actions (solver/project/actions-types.ts): panels, area loads,
+ * patch wind and member loss. Messages name the entry: `panels[2] "P3": node "N9" does not exist`.
+ * Runs on partly invalid documents; values of the wrong type are left to the schema.
+ */
+import { entryLabel } from './error-path.ts';
+import { entries, idSet, isRec, num, str, strings } from './doc-access.ts';
+import type { Rec } from './doc-access.ts';
+
+/** Panels smaller than this (m²) are degenerate. Common practice: far below any real panel. */
+export const MIN_PANEL_AREA = 1e-9;
+
+function nodePositions(root: unknown): Map<string, number[]> {
+  const at = new Map<string, number[]>();
+  for (const { entry } of entries(root, 'nodes')) {
+    const id = str(entry, 'id');
+    const p = entry.at;
+    if (id !== undefined && Array.isArray(p) && p.length === 3 && p.every((c) => typeof c === 'number' && Number.isFinite(c))) at.set(id, p as number[]);
+  }
+  return at;
+}
+
+function duplicateIds(root: unknown, list: string, errors: string[]): void {
+  const first = new Map<string, number>();
+  for (const { index, entry } of entries(root, list)) {
+    const id = str(entry, 'id');
+    if (id === undefined) continue;
+    const f = first.get(id);
+    if (f === undefined) first.set(id, index);
+    else errors.push(`${entryLabel(root, list, index)}: id ${JSON.stringify(id)} is already used by ${list}[${f}]`);
+  }
+}
+
+function panelErrors(root: unknown, errors: string[]): void {
+  const at = nodePositions(root);
+  const nodes = idSet(root, 'nodes');
+  for (const { index, entry } of entries(root, 'panels')) {
+    const label = entryLabel(root, 'panels', index);
+    const corners = strings(entry, 'nodes');
+    const seen = new Set<string>();
+    for (const c of corners) {
+      if (!nodes.has(c.value)) errors.push(`${label}: node ${JSON.stringify(c.value)} does not exist`);
+      if (seen.has(c.value)) errors.push(`${label}: node ${JSON.stringify(c.value)} appears twice in the loop`);
+      seen.add(c.value);
+    }
+    const pts = corners.map((c) => at.get(c.value));
+    if (pts.length >= 3 && pts.every((p) => p !== undefined)) {
+      // vector area ½ Σ x_k × x_{k+1}
+      const a = [0, 0, 0];
+      pts.forEach((p, k) => {
+        const q = pts[(k + 1) % pts.length]!;
+        a[0] += 0.5 * (p![1] * q[2] - p![2] * q[1]);
+        a[1] += 0.5 * (p![2] * q[0] - p![0] * q[2]);
+        a[2] += 0.5 * (p![0] * q[1] - p![1] * q[0]);
+      });
+      if (Math.hypot(a[0], a[1], a[2]) < MIN_PANEL_AREA) errors.push(`${label}: the loop encloses no area (its corners are in one line or at one place)`);
+    }
+  }
+}
+
+function areaLoadErrors(root: unknown, errors: string[]): void {
+  const panelIds = idSet(root, 'panels');
+  const targets = new Set(panelIds);
+  for (const { entry } of entries(root, 'panels')) { const r = str(entry, 'region'); if (r !== undefined) targets.add(r); }
+  for (const { index, entry } of entries(root, 'loadCases')) {
+    const label = entryLabel(root, 'loadCases', index);
+    for (const { index: j, entry: load } of entries(entry, 'areaLoads')) {
+      const at = `${label}: areaLoads[${j}]`;
+      const kind = str(load, 'kind');
+      const value = num(load, 'value');
+      if (panelIds.size === 0) errors.push(`${at}: the project has no panels to carry it (add "panels")`);
+      if ((kind === 'snow' || kind === 'cladding') && value !== undefined && value < 0) errors.push(`${at}: ${kind} load must not be negative (got ${value} Pa; it acts downward)`);
+      for (const p of strings(load, 'panels')) if (panelIds.size > 0 && !targets.has(p.value)) errors.push(`${at}: panels: ${JSON.stringify(p.value)} is neither a panel nor a region`);
+      const coefficients = entries(load, 'coefficients');
+      if (coefficients.length > 0 && kind !== undefined && kind !== 'pressure') errors.push(`${at}: coefficients apply to "pressure" loads only (this is "${kind}")`);
+      for (const c of coefficients) {
+        const r = str(c.entry, 'region');
+        if (r !== undefined && panelIds.size > 0 && !targets.has(r)) errors.push(`${at}: coefficients[${c.index}]: ${JSON.stringify(r)} is neither a panel nor a region`);
+      }
+    }
+  }
+}
+
+function caseById(root: unknown): Map<string, Rec> {
+  const m = new Map<string, Rec>();
+  for (const { entry } of entries(root, 'loadCases')) { const id = str(entry, 'id'); if (id !== undefined) m.set(id, entry); }
+  return m;
+}
+
+function patchWindErrors(root: unknown, errors: string[]): void {
+  const cases = caseById(root);
+  const taken = new Set([...cases.keys(), ...idSet(root, 'combinations')]);
+  for (const { index, entry } of entries(root, 'patchWind')) {
+    const label = entryLabel(root, 'patchWind', index);
+    const id = str(entry, 'id');
+    if (id !== undefined && taken.has(id)) errors.push(`${label}: id ${JSON.stringify(id)} is already used by a load case or combination`);
+    const mean = str(entry, 'meanCase');
+    const spec = mean === undefined ? undefined : cases.get(mean);
+    if (mean !== undefined && !spec) errors.push(`${label}: meanCase: load case ${JSON.stringify(mean)} does not exist`);
+    else if (spec && !isRec(spec.wind)) errors.push(`${label}: meanCase: load case ${JSON.stringify(mean)} has no wind`);
+    for (const p of entries(entry, 'patches')) {
+      const from = num(p.entry, 'from'), to = num(p.entry, 'to');
+      if (from !== undefined && to !== undefined && !(to > from)) errors.push(`${label}: patches[${p.index}]: "to" (${to} m) must be above "from" (${from} m)`);
+    }
+  }
+}
+
+function memberLossErrors(root: unknown, errors: string[]): void {
+  const cases = new Set([...idSet(root, 'loadCases'), ...idSet(root, 'combinations')]);
+  const members = idSet(root, 'members');
+  const groups = idSet(root, 'groups');
+  for (const { entry } of entries(root, 'members')) for (const g of strings(entry, 'groups')) groups.add(g.value);
+  for (const { index, entry } of entries(root, 'memberLoss')) {
+    const label = entryLabel(root, 'memberLoss', index);
+    const id = str(entry, 'id');
+    if (id !== undefined && cases.has(id)) errors.push(`${label}: id ${JSON.stringify(id)} is already used by a load case or combination`);
+    const from = str(entry, 'fromCase');
+    if (from !== undefined && !cases.has(from)) errors.push(`${label}: fromCase: case ${JSON.stringify(from)} does not exist (no load case or combination has this id)`);
+    const listed = strings(entry, 'members');
+    for (const m of listed) if (!members.has(m.value)) errors.push(`${label}: members: member ${JSON.stringify(m.value)} does not exist`);
+    const group = str(entry, 'group');
+    if (group !== undefined && !groups.has(group)) errors.push(`${label}: group ${JSON.stringify(group)} does not exist`);
+    if (listed.length === 0 && group === undefined) errors.push(`${label}: name the members to remove ("members" or "group")`);
+    if (entry.dynamicFactor !== undefined && entry.dampingRatio !== undefined) errors.push(`${label}: give either "dynamicFactor" or "dampingRatio", not both`);
+  }
+}
+
+export function actionErrors(root: unknown): string[] {
+  const errors: string[] = [];
+  for (const list of ['panels', 'patchWind', 'memberLoss']) duplicateIds(root, list, errors);
+  panelErrors(root, errors);
+  areaLoadErrors(root, errors);
+  patchWindErrors(root, errors);
+  memberLossErrors(root, errors);
+  return errors;
+}

@@ -1,0 +1,95 @@
+/**
+ * Project-file types of the design actions: panels with area loads (canopies and nets), patch
+ * wind on guyed masts (a combination of results), member loss (guy rupture).
+ *
+ * Units SI, z up, as in types.ts. The JSON Schema keeps these in the same order
+ * (main/common/project/stayset-project.v1.schema.json, checked by a test).
+ */
+
+/**
+ * A panel: a loop of three or more nodes bounding a piece of surface that carries area loads
+ * (snow, wind pressure, cladding weight). The surface is the fan of triangles from the mean of
+ * the corners to each edge, so a non-planar loop is allowed. Its normal follows the right-hand
+ * rule on the node order (counter-clockwise seen from above = normal pointing up).
+ */
+export interface PanelSpec {
+  id: string;
+  /** Corner node ids in order around the loop (≥ 3, no repeats). */
+  nodes: string[];
+  /** Region name: pressure coefficients may be given per region instead of per panel. */
+  region?: string;
+  label?: string;
+}
+
+/** Pressure coefficient of the panels of one region (or of one panel, by its id). */
+export interface PressureCoefficientSpec {
+  /** A panel region or a panel id. */
+  region: string;
+  /** Pressure coefficient c_p (net), dimensionless. */
+  cp: number;
+}
+
+/**
+ * An area load on panels.
+ * - snow: `value` per plan area, Pa, acting downward (−z); areas at the modelled geometry.
+ * - cladding: weight per true (sloping) area, Pa, acting downward; areas at the modelled geometry.
+ * - pressure: net pressure, Pa, normal to the deformed panel (a follower load): positive acts
+ *   against the panel normal (pressure on the top face), negative is suction (uplift on a panel
+ *   whose normal points up). On each panel it is value × c_p.
+ */
+export interface AreaLoadSpec {
+  kind: 'snow' | 'cladding' | 'pressure';
+  value: number;
+  /** Only these panels or regions (default: every panel). */
+  panels?: string[];
+  /** pressure only: c_p per region or panel id (a panel id wins over its region); default c_p = 1. */
+  coefficients?: PressureCoefficientSpec[];
+}
+
+/**
+ * Patch wind on a guyed mast (equivalent static method for guyed masts, EN 1993-3-1 Annex B,
+ * B.4.3.2): the mean-wind case S_m plus one patch case S_i per patch — the mean wind everywhere,
+ * with the wind force increased inside the patch — combined per result quantity as
+ *   S = S_m ± √Σ (S_i − S_m)²      (EN 1993-3-1 B.4.3.2.5(1)).
+ * Reported as the patch cases "<id> / patch k" and the two results "<id> max" (S_m + S_p) and
+ * "<id> min" (S_m − S_p).
+ */
+export interface PatchWindSpec {
+  id: string;
+  label?: string;
+  /** The load case with the mean wind on the whole structure. */
+  meanCase: string;
+  /**
+   * Wind force inside a patch as a multiple of the mean wind force there (> 1). No default: the
+   * standard derives the patch load from the turbulence intensity (recalled — check your copy).
+   */
+  patchFactor: number;
+  /**
+   * Height ranges of the patches, m above z = 0 (an element is in a patch when its mid-height is).
+   * Default: the spans between guy levels — base to the first guy level, between adjacent levels,
+   * the top guy level to the top — where a guy level is the height of a node at which a cable
+   * meets a bar.
+   */
+  patches?: { from: number; to: number }[];
+}
+
+/**
+ * Sudden loss of a member (guy rupture): from the solved state of `fromCase`, each listed member
+ * is removed in turn (one accidental case each, "<id> / <member>"); the force it exerted on its
+ * free end nodes is released with a dynamic amplification factor, and the structure without it is
+ * solved nonlinearly under the case loads plus (1 − factor) × that force.
+ */
+export interface MemberLossSpec {
+  id: string;
+  label?: string;
+  /** Load case or combination whose solved state the loss starts from. */
+  fromCase: string;
+  /** Members removed, one case each. */
+  members?: string[];
+  /** Or every member of this group in turn. */
+  group?: string;
+  /** Dynamic amplification factor on the released force (1 = static, ≤ 2). Default from dampingRatio. */
+  dynamicFactor?: number;
+  /** Critical damping ratio ζ (0 ≤ ζ < 1) for the default factor 1 + exp(−πζ/√(1−ζ²)); default 0 (factor 2). */
+  dampingRatio?: number;
+}
