@@ -5,7 +5,7 @@ import type { ModeResult, NodeSpec, ProjectFile } from '../../../solver/index.ts
 /**
  * Euler–Bernoulli beam frequencies (closed forms, e.g. Blevins, Formulas for Natural Frequency
  * and Mode Shape, 1979, ch. 8 — recalled, check against the source; Timoshenko, Young & Weaver,
- * Vibration Problems in Engineering, ch. 5, for the axially loaded beam):
+ * Vibration Problems in Engineering, for the axially loaded beam — recalled, check against the source):
  *   simply supported:  ω_n = (nπ/L)² √(EI/μ)
  *   cantilever:        ω_1 = (1.87510407/L)² √(EI/μ), β₁L the first root of cos βL cosh βL = −1
  *   simply supported under axial compression P:  ω_1² = ω_0² (1 − P/P_cr), P_cr = π² EI/L²,

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { lowestModes } from '../../../solver/modes/block-lanczos.ts';
 import type { EigenProblem } from '../../../solver/modes/eigen-problem.ts';
 
-/** Lower-triangle CSC of a tridiagonal (spring chain) matrix with diagonal a and off-diagonal b. */
+/** Lower-triangle CSC of a fixed–fixed spring chain: tridiagonal, 2k on the diagonal, −k beside it. */
 function springChain(n: number, k: number, masses: number[]): EigenProblem {
   const colPtr = new Int32Array(n + 1), rows: number[] = [], vals: number[] = [];
   for (let j = 0; j < n; j++) {
@@ -17,7 +17,7 @@ function springChain(n: number, k: number, masses: number[]): EigenProblem {
 }
 
 describe('block Lanczos on K⁻¹M', () => {
-  it('a fixed–fixed chain of n equal masses: ω_j² = (4k/m) sin²(jπ / (2(n+1))) (closed form, e.g. Weaver, Timoshenko & Young, Vibration Problems in Engineering, 1990, ch. 5)', () => {
+  it('a fixed–fixed chain of n equal masses: ω_j² = (4k/m) sin²(jπ / (2(n+1))) (closed form: substitute φ_i = sin(i j π/(n+1)) into the chain equations)', () => {
     const n = 400, k = 1e4, m = 2;
     const out = lowestModes(springChain(n, k, Array(n).fill(m)), { count: 10 });
     expect(out.ok).toBe(true);

@@ -4,7 +4,8 @@ import type { ProjectFile } from '../../../solver/index.ts';
 
 /**
  * In-plane modes of a shallow sagging cable between supports at one level (Irvine, Cable
- * Structures, 1981, ch. 3; Irvine & Caughey, Proc. R. Soc. Lond. A 341, 1974):
+ * Structures, 1981, the chapter on cable vibrations; Irvine & Caughey, Proc. R. Soc. Lond. A 341,
+ * 1974 — chapter and volume recalled, check against the sources):
  *   antisymmetric:  ω̄ = 2nπ;   out of plane: ω̄ = nπ;
  *   symmetric:      tan(ω̄/2) = ω̄/2 − (4/λ²)(ω̄/2)³,
  * with ω̄ = ω L / √(H/m), λ² = (mgL/H)² · L / (H L_e / EA), L_e ≈ L (1 + 8 (d/L)²). At λ² = 4π² the

@@ -5,8 +5,8 @@ import { singleCable, STRAND } from '../helpers.ts';
 /**
  * A taut, weightless-loaded string: a horizontal cable between pins with pretension T, solved in a
  * case without self-weight (straight), with its mass m per length present for the modes.
- * Continuous string: f_n = n / (2L) · √(T / m) (e.g. Irvine, Cable Structures, 1981, ch. 3; any
- * vibration text). The lumped chain of N equal segments h = L/N has the exact discrete frequencies
+ * Continuous string: f_n = n / (2L) · √(T / m) (the taut string of any vibration text, e.g. Irvine,
+ * Cable Structures, 1981). The lumped chain of N equal segments h = L/N has the exact discrete frequencies
  * f_n = (1/π) √(T / (m h²)) · sin(nπ / 2N) (substitute sin(i n π / N) into the chain equations).
  */
 describe('taut string', () => {
