@@ -5,8 +5,8 @@
  * PDF printed through headless Chromium. Outputs are written atomically.
  */
 import { resolve } from 'node:path';
-import { CheckInputError, installationData, runChecks, runSequence, solveProject } from '../../../solver/index.ts';
-import type { CheckReport, InstallationData, SequenceResult, SolveReport } from '../../../solver/index.ts';
+import { CheckInputError, installationData, referenceCaseId, runChecks, runSequence, solveModes, solveProject } from '../../../solver/index.ts';
+import type { CheckReport, InstallationData, ModalOutcome, SequenceResult, SolveReport } from '../../../solver/index.ts';
 import { buildReport } from '../../common/report/build-report.ts';
 import { reportHtml } from '../../common/report/report-html.ts';
 import type { PaperSize, ScheduleUnits } from '../../common/schedule/index.ts';
@@ -22,7 +22,8 @@ import { isoToday, singleOption } from './option-helpers.ts';
 const HELP = `Writes the calculation report an engineer submits: title and revision block
 (project "report"), design basis and check settings, model summary with elevation and plan,
 materials and sections, actions and combinations, analysis, the governing result of each check
-with its case, member and reaction envelopes, cable frequencies, the tuning record, installation
+with its case, member and reaction envelopes, natural frequencies about the reference case,
+cable frequencies, the tuning record, installation
 data and every tensioning sequence — with page numbers and the caution on every page.
 
 Options:
@@ -84,7 +85,13 @@ async function run(args: string[], io: CliIO): Promise<number> {
       return EXIT.badInput;
     }
   }
-  const html = reportHtml(buildReport({ project, report, checks, installation, sequences, notes }, { issueDate: date, units: units as ScheduleUnits | undefined, paper: paper as PaperSize }));
+  let modes: ModalOutcome | null = null;
+  try {
+    modes = solveModes(project, referenceCaseId(project)).modal;
+  } catch (e) {
+    notes.push(`Natural frequencies left out: ${(e as Error).message}.`);
+  }
+  const html = reportHtml(buildReport({ project, report, checks, installation, sequences, modes, notes }, { issueDate: date, units: units as ScheduleUnits | undefined, paper: paper as PaperSize }));
   try {
     if (htmlOut) await writeFileAtomic(resolve(io.cwd, htmlOut), html);
   } catch (e) {

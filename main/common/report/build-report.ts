@@ -38,6 +38,6 @@ export function buildReport(src: ReportSource, options: ReportOptions): ReportDo
       dofs: report.cases[0]?.stats.dofs ?? 0, sections: project.sections.length, groups: project.groups?.length ?? 0,
     },
     report, checks, envelope: env, governing: governingRows(project, report, checks, env),
-    installation: src.installation, sequences: src.sequences, notes,
+    installation: src.installation, sequences: src.sequences, modes: src.modes ?? null, notes,
   };
 }

@@ -2,7 +2,8 @@
  * ReportDocument → a standalone printable HTML calculation report (no scripts, no external
  * resources): title and revision block, the caution, design basis, model, materials and sections,
  * actions and combinations, analysis, governing results per check with the case, envelopes,
- * cable frequencies, tuning record, installation data and the tensioning sequences. Page
+ * natural frequencies (solver/modes), cable frequencies, tuning record, installation data and the
+ * tensioning sequences. Page
  * numbers and the caution on every page come from print-css.ts. Key numbers carry a data-n
  * attribute (e.g. data-n="env-max|G1") so tests can compare them with the CLI.
  */
@@ -14,6 +15,7 @@ import { modelSvg } from './model-svg.ts';
 import { crewSheetBody } from './crew-sheet.ts';
 import { checkRow } from '../checks/check-text.ts';
 import { designBasisHtml, actionsHtml, sectionsHtml } from './report-input-sections.ts';
+import { modesHtml } from './report-modes.ts';
 
 const table = (caption: string, head: string[], rows: string[][]) =>
   `<table><caption>${caption}</caption><thead><tr>${head.map((h) => `<th>${h}</th>`).join('')}</tr></thead><tbody>${rows.map((r) => `<tr>${r.map((c) => `<td>${c}</td>`).join('')}</tr>`).join('\n')}</tbody></table>`;
@@ -92,6 +94,7 @@ export function reportHtml(d: ReportDocument): string {
     ['Analysis', analysisHtml(d)],
     ['Governing results per check', governingHtml(d)],
     ['Envelopes', envelopeHtml(d)],
+    ['Natural frequencies', modesHtml(d)],
     ['Installation data and cable frequencies', installationHtml(d)],
     ['Tuning record', tuningHtml(d)],
     ['Tensioning sequences', d.sequences.length ? d.sequences.map((s) => crewSheetBody(p, s, d.units, 3)).join('\n') : '<p>No tensioning sequence in the project.</p>'],

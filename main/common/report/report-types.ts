@@ -4,7 +4,7 @@
  * tensioning sequences — the same solver functions the app and the CLI call.
  */
 import type {
-  CheckReport, Envelope, InstallationData, ProjectFile, ReportRevision, SequenceResult, SolveReport,
+  CheckReport, Envelope, InstallationData, ModalOutcome, ProjectFile, ReportRevision, SequenceResult, SolveReport,
 } from '../../../solver/index.ts';
 import type { PaperSize } from '../schedule/schedule-types.ts';
 import type { ScheduleUnits } from '../schedule/schedule-units.ts';
@@ -30,6 +30,8 @@ export interface ReportSource {
   checks: CheckReport;
   installation: InstallationData | null;
   sequences: SequenceResult[];
+  /** Modes about the reference case (solver/modes), null when not computed. */
+  modes?: ModalOutcome | null;
   /** Plain notes (e.g. why a part is missing). */
   notes?: string[];
 }
@@ -49,5 +51,6 @@ export interface ReportDocument {
   governing: GoverningRow[];
   installation: InstallationData | null;
   sequences: SequenceResult[];
+  modes: ModalOutcome | null;
   notes: string[];
 }

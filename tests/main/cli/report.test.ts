@@ -1,8 +1,8 @@
 /**
  * The calculation report's numbers are those of `stayset solve --json` and `stayset check --json`
  * on the same file: the test regenerates the report through the CLI and compares every member's
- * envelope tensions, utilisations, reaction envelope and the governing utilisation, formatted the
- * way the report formats them.
+ * envelope tensions, utilisations, reaction envelope and the governing utilisation, and the natural
+ * frequencies with `stayset modes --case dead --json`, formatted the way the report formats them.
  */
 import { describe, expect, it } from 'vitest';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
@@ -62,6 +62,11 @@ describe('stayset report', () => {
       const rMax = Math.max(...cases.map((c) => Math.hypot(...c.reactions.find((r) => r.node === 'm/base')!.force)));
       expect(n.get('react|m/base')).toBe(formatForce('SI', rMax));
       expect(compared).toBeGreaterThan(100);
+      const modes = runStayset(['modes', file, '--case', 'dead', '--json']);
+      expect(modes.code, modes.stderr).toBe(0);
+      const freqs: { number: number; frequency: number }[] = JSON.parse(modes.stdout).modes.modes;
+      expect(freqs.length).toBeGreaterThan(0);
+      for (const f of freqs) expect(n.get(`mode|${f.number}`), `mode ${f.number}`).toBe(formatNumber(f.frequency, 3));
       expect(html).toContain('test issue');
       expect(html).toContain('Tensioning sequence top down');
       expect(html).toContain('Results are for review by a qualified engineer');
