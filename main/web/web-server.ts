@@ -8,7 +8,7 @@ import http, { type IncomingMessage, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { validateHostArgs, type HostHandlers } from '../common/host-validation.ts';
 import {
-  API_PREFIX, EVENTS_PATH, isHostMethodName, MAX_BODY_BYTES, STAYSET_CSP, TOKEN_HEADER, TOKEN_QUERY, type RpcReply,
+  API_PREFIX, EVENTS_PATH, isHostMethodName, type HostMethodName, MAX_BODY_BYTES, STAYSET_CSP, TOKEN_HEADER, TOKEN_QUERY, type RpcReply,
 } from '../common/web-protocol.ts';
 import { AnalysisRunner, type AnalysisRunnerOptions } from '../analysis/analysis-runner.ts';
 import { ProjectService } from '../store/project-service.ts';
@@ -73,6 +73,19 @@ function sendCaseFields(res: ServerResponse, fields: CaseFields): void {
   res.end(body);
 }
 
+/**
+ * validateHostArgs, with a body nested too deeply for the validator's recursion (JSON.parse
+ * itself is iterative; the checks are not) answered as a bad request (400), not a host failure.
+ */
+function checkArgsOrDepth(method: HostMethodName, args: unknown): ReturnType<typeof validateHostArgs> {
+  try {
+    return validateHostArgs(method, args);
+  } catch (e) {
+    if (e instanceof RangeError) return { ok: false, error: `${method}: the request is nested too deeply to be a project` };
+    throw e;
+  }
+}
+
 async function readBody(req: IncomingMessage): Promise<string | null> {
   const chunks: Buffer[] = [];
   let size = 0;
@@ -124,7 +137,7 @@ export async function startWebHost(options: WebHostOptions): Promise<WebHost> {
       return sendJson(res, 400, { ok: false, error: `${method}: request body is not valid JSON` });
     }
     const args = (body as { args?: unknown } | null)?.args ?? [];
-    const checked = validateHostArgs(method, args);
+    const checked = checkArgsOrDepth(method, args);
     if (!checked.ok) return sendJson(res, 400, { ok: false, error: checked.error });
     const handler = handlers[method] as (...a: unknown[]) => Promise<unknown>;
     const value = await handler(...(checked.value as unknown[]));
