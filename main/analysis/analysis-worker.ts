@@ -9,6 +9,7 @@ import { solveProject } from '../../solver/index.ts';
 import type { SolveProgress } from '../../solver/index.ts';
 import { solveProjectInWorkers } from './parallel-solve.ts';
 import { createProgressThrottle } from './progress-throttle.ts';
+import { failureHint } from '../common/project/plausibility/failure-hint.ts';
 import { CANCEL_REQUESTED, transferablesOf, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
 
 function post(message: WorkerMessage, transfer: ArrayBuffer[] = []): void {
@@ -29,7 +30,7 @@ async function run(): Promise<void> {
       : solveProject(data.project, { isCancelled: () => Atomics.load(flag, 0) === CANCEL_REQUESTED, onProgress }, data.only ? { only: data.only } : {});
     post({ type: 'done', report: solution.report, fields: solution.fields }, transferablesOf(solution.fields));
   } catch (e) {
-    post({ type: 'failed', error: e instanceof Error ? `${e.message}` : String(e) });
+    post({ type: 'failed', error: (e instanceof Error ? e.message : String(e)) + failureHint(data.project) });
   }
 }
 

@@ -292,3 +292,45 @@ describe('results that can be trusted', () => {
     expect(pageErrors).toEqual([]);
   }, 180_000);
 });
+
+describe('layout', () => {
+  it('panels and the results strip resize by dragging; tables sort and filter', async () => {
+    const box = async (id: string) => (await page.getByTestId(id).boundingBox())!;
+    const drag = async (id: string, dx: number, dy: number) => {
+      const b = await box(id);
+      await page.mouse.move(b.x + b.width / 2, b.y + b.height / 2);
+      await page.mouse.down();
+      await page.mouse.move(b.x + b.width / 2 + dx / 2, b.y + b.height / 2 + dy / 2);
+      await page.mouse.move(b.x + b.width / 2 + dx, b.y + b.height / 2 + dy);
+      await page.mouse.up();
+    };
+    const left = (await box('left-panel')).width, right = (await box('right-panel')).width, bottom = (await box('bottom-panel')).height;
+    await drag('split-left', -120, 0);
+    await drag('split-right', -80, 0);
+    await drag('split-bottom', 0, -150);
+    expect((await box('left-panel')).width).toBeCloseTo(left - 120, -1);
+    expect((await box('right-panel')).width).toBeCloseTo(right + 80, -1);
+    expect((await box('bottom-panel')).height).toBeCloseTo(bottom + 150, -1);
+
+    // Nodes table: filter to the anchors, sort by x, then reversed.
+    await page.getByTestId('tab-nodes').click();
+    await page.getByTestId('filter-nodes').fill('mast/A');
+    const ids = () => page.locator('[data-testid="table-nodes"] tbody tr[data-row-id]').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-row-id')));
+    await expect.poll(ids).toEqual(['mast/A1', 'mast/A2', 'mast/A3']);
+    await page.locator('[data-testid="table-nodes"] th[data-sort="x"]').click();
+    const melt = JSON.parse(await readFile(path.join(root, 'melt.stayset'), 'utf8')) as ProjectFile;
+    const byX = melt.nodes.filter((n) => n.id.startsWith('mast/A')).sort((a, b) => a.at[0] - b.at[0]).map((n) => n.id);
+    await expect.poll(ids).toEqual(byX);
+    await page.locator('[data-testid="table-nodes"] th[data-sort="x"]').click();
+    await expect.poll(ids).toEqual([...byX].reverse());
+    expect(await page.getByTestId('table-nodes').textContent()).toContain(`3 of ${melt.nodes.length} rows`);
+    // The results table filters too.
+    await page.getByTestId('case-select').selectOption('dead');
+    await page.getByTestId('results-tab-members').click();
+    await page.getByTestId('results-filter').fill('guy L3');
+    await expect.poll(() => page.locator('[data-testid="results-table"] tbody tr[data-member]').count()).toBe(3);
+    await shot('42-resized-sorted-filtered.png');
+    expect(pageErrors).toEqual([]);
+  }, 60_000);
+});
+
