@@ -68,7 +68,9 @@ function runCholmod(exe: string, kFile: string, bFile: string, reps: number, ord
  * with its default ('auto': AMD or nested dissection by predicted fill) and with AMD only.
  */
 export function runCholmodComparison(cells = 100, reps = 15, rounds = 3): CholmodComparison {
-  const src = path.resolve(repoRoot, '..', 'shared', 'bench', 'cholmod_bench.c');
+  // ../shared/bench beside the repository (or beside its worktree folder), or STAYSET_CHOLMOD_BENCH.
+  const src = [process.env.STAYSET_CHOLMOD_BENCH, path.resolve(repoRoot, '..', 'shared', 'bench', 'cholmod_bench.c'),
+    path.resolve(repoRoot, '..', '..', 'shared', 'bench', 'cholmod_bench.c')].find((f) => f && existsSync(f)) ?? path.resolve(repoRoot, '..', 'shared', 'bench', 'cholmod_bench.c');
   if (!existsSync(src)) return { skipped: `CHOLMOD benchmark source not found at ${src}`, cells, cholmod: [] };
   const dir = mkdtempSync(path.join(os.tmpdir(), 'stayset-cholmod-'));
   try {
