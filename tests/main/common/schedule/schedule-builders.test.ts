@@ -162,6 +162,7 @@ describe('schedule reactions with moments (beam models)', () => {
     const { demoTubeMast } = await import('../../../fixtures/demos/tube-mast.ts');
     const p = demoTubeMast();
     p.loadCases = p.loadCases.filter((c) => c.id === 'wind 0');
+    p.combinations = [];
     const rep = solveProject(p).report;
     const doc = buildSchedule({ project: p, report: rep, checks: runChecks(p, rep), installation: null }, { issueDate: '2026-12-01' });
     const base = doc.reactions.find((r) => r.node === 'pole/base')!;
