@@ -26,3 +26,7 @@ export { memberSag, describeDof } from './results/extract.ts';
 export { SparseLDL, writeMatrixMarketSymmetric, writeMatrixMarketDenseVector } from './linalg/index.ts';
 export * from './tuning/index.ts';
 export * from './installation/index.ts';
+// design actions: panels and area loads, patch wind, member loss
+export { actionCaseIds } from './analysis/solve-actions.ts';
+export { dynamicFactorOf, stepResponsePeak, lostMembers } from './loads/member-loss.ts';
+export { defaultPatches } from './loads/patch-wind.ts';

@@ -9,6 +9,7 @@ import { buildModel } from '../model/build-model.ts';
 import { resolveCaseLoads, resolveCombinationLoads } from '../loads/resolve-case-loads.ts';
 import { createWorkspace } from './workspace.ts';
 import { solveCase } from './solve-case.ts';
+import { appendActionCases } from './solve-actions.ts';
 
 export interface SolveProjectOptions {
   /** Only these case / combination ids (default: all). */
@@ -31,5 +32,6 @@ export function solveProject(project: ProjectFile, control: SolveControl = {}, o
     solution.report.cases.push(result);
     solution.fields.push(fields);
   });
+  appendActionCases(project, model, ws, solution, control, wanted);
   return solution;
 }

@@ -60,6 +60,26 @@ describe('demo projects in assets/', () => {
     expect(base.force[2]).toBeGreaterThan(0);
   });
 
+  it('demo mast: the patch-wind envelope is at least the mean-wind result (S_m + S_p ≥ S_m ≥ S_m − S_p)', () => {
+    const f = 'demo-mast.stayset';
+    const mean = caseOf(f, 'wind 0'), max = caseOf(f, 'patch 0 max'), min = caseOf(f, 'patch 0 min');
+    mean.members.forEach((m, k) => {
+      expect(max.members[k].tensionMax).toBeGreaterThanOrEqual(m.tensionMax);
+      expect(min.members[k].tensionMax).toBeLessThanOrEqual(m.tensionMax);
+    });
+    mean.nodes.forEach((n, k) => n.displacement.forEach((d, q) => expect(max.nodes[k].displacement[q]).toBeGreaterThanOrEqual(d)));
+    expect(maxTension(max)).toBeGreaterThan(maxTension(mean));
+  });
+
+  it('demo mast: patch wind and guy loss, key numbers (locked from a converged run; regression, not a reference)', () => {
+    const f = 'demo-mast.stayset';
+    expect(maxTension(caseOf(f, 'patch 0 max'))).toBeCloseTo(23893.0, 0);
+    expect(maxTension(caseOf(f, 'patch 0 min'))).toBeCloseTo(21930.7, 0);
+    expect(maxTension(caseOf(f, 'guy loss / mast/guy L1-1'))).toBeCloseTo(145265.2, 0);
+    // three-fold symmetry: losing any of the three guys of a level gives the same peak force
+    expect(maxTension(caseOf(f, 'guy loss / mast/guy L1-3'))).toBeCloseTo(145265.2, 0);
+  });
+
   it('demo canopy: key numbers (locked from a converged run; regression, not a reference)', () => {
     const f = 'demo-canopy.stayset';
     expect(maxTension(caseOf(f, 'dead'))).toBeCloseTo(106717.7, 0);
