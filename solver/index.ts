@@ -30,3 +30,7 @@ export * from './installation/index.ts';
 export { actionCaseIds } from './analysis/solve-actions.ts';
 export { dynamicFactorOf, stepResponsePeak, lostMembers } from './loads/member-loss.ts';
 export { defaultPatches } from './loads/patch-wind.ts';
+export { windDirectionCases } from './loads/wind-directions.ts';
+export { windForceFactor, windProfileRows } from './loads/wind-basis.ts';
+export type { WindProfileRow } from './loads/wind-basis.ts';
+export { latticeForceCoefficient, icedLattice } from './loads/lattice-force-coefficient.ts';

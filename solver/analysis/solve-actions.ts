@@ -1,6 +1,7 @@
 /**
  * The cases a project's design actions make, solved after its load cases and combinations and
  * appended to the same report (so envelopes, checks and the app take them like any case):
+ * - wind from N directions (WindDirectionsSpec): "<id> <direction>°";
  * - patch wind (PatchWindSpec): "<id> / patch k", then "<id> max" and "<id> min";
  * - member loss (MemberLossSpec): "<id> / <member>" per removed member.
  * Fields of every appended case have the full model's layout (a removed member's elements are
@@ -16,6 +17,7 @@ import type { CaseLoads } from '../loads/case-loads.ts';
 import { buildModel } from '../model/build-model.ts';
 import { resolveCaseLoads, resolveCombinationLoads } from '../loads/resolve-case-loads.ts';
 import { patchCases } from '../loads/patch-wind.ts';
+import { windDirectionCases } from '../loads/wind-directions.ts';
 import { dynamicFactorOf, lostMembers, memberEndForces, projectWithout } from '../loads/member-loss.ts';
 import { combinePatchResults } from '../results/patch-combination.ts';
 import { createWorkspace } from './workspace.ts';
@@ -24,6 +26,7 @@ import { solveCase } from './solve-case.ts';
 /** Ids of the cases the actions of a project add, in the order they are solved. */
 export function actionCaseIds(project: ProjectFile, model: AnalysisModel = buildModel(project)): string[] {
   const ids: string[] = [];
+  for (const spec of project.windDirections ?? []) ids.push(...windDirectionCases(project, spec).map((c) => c.id));
   for (const spec of project.patchWind ?? []) {
     ids.push(...patchCases(model, project, spec).map((p) => p.id), `${spec.id} max`, `${spec.id} min`);
   }
@@ -43,7 +46,7 @@ export function appendActionCases(
   project: ProjectFile, model: AnalysisModel, ws: Workspace, solution: ProjectSolution,
   control: SolveControl, wanted: (id: string) => boolean,
 ): void {
-  if (!project.patchWind?.length && !project.memberLoss?.length) return;
+  if (!project.patchWind?.length && !project.memberLoss?.length && !project.windDirections?.length) return;
   const solved = (id: string): CaseSolution => {
     const k = solution.report.cases.findIndex((c) => c.id === id);
     if (k >= 0) return { result: solution.report.cases[k], fields: solution.fields[k] };
@@ -51,6 +54,13 @@ export function appendActionCases(
   };
   const push = (s: CaseSolution) => { solution.report.cases.push(s.result); solution.fields.push(s.fields); };
   const tag = (caseId: string) => ({ caseIndex: solution.report.cases.length, caseCount: solution.report.cases.length + 1, caseId });
+
+  for (const spec of project.windDirections ?? []) {
+    for (const c of windDirectionCases(project, spec)) {
+      if (!wanted(c.id) && !wanted(spec.id)) continue;
+      push(solveCase(ws, c.id, resolveCaseLoads(model, project, c), { control, tag: tag(c.id) }));
+    }
+  }
 
   for (const spec of project.patchWind ?? []) {
     const cases = patchCases(model, project, spec);

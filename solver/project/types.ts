@@ -12,7 +12,7 @@
  * runtime dependencies). Keep both in step.
  */
 
-import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec } from './actions-types.ts';
+import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec, WindBasisSpec, WindDirectionsSpec } from './actions-types.ts';
 
 export type * from './actions-types.ts';
 
@@ -46,6 +46,8 @@ export interface ProjectFile {
   patchWind?: PatchWindSpec[];
   /** Member loss (guy rupture) accidental cases (actions-types.ts). */
   memberLoss?: MemberLossSpec[];
+  /** Wind cases from N directions (actions-types.ts). */
+  windDirections?: WindDirectionsSpec[];
 }
 
 export interface ProjectMeta {
@@ -140,6 +142,8 @@ export interface WindSpec {
   airDensity?: number;
   /** Only load these groups (default: every member). */
   groups?: string[];
+  /** What `speed` stands for and the factors on the forces (actions-types.ts). */
+  basis?: WindBasisSpec;
 }
 
 export type WindProfileSpec =

@@ -5,5 +5,6 @@ import { checkCommand } from './check.ts';
 import { tuneCommand } from './tune.ts';
 import { scheduleCommand } from './schedule.ts';
 import { validateCommand } from './validate.ts';
+import { windCommand } from './wind.ts';
 
-export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand];
+export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, windCommand];

@@ -3,9 +3,13 @@
  * Returns undefined for any other id.
  */
 import type { ProjectFile } from '../../../solver/index.ts';
-import { dynamicFactorOf, lostMembers } from '../../../solver/index.ts';
+import { dynamicFactorOf, lostMembers, windDirectionCases } from '../../../solver/index.ts';
 
 export function actionCaseTitle(project: ProjectFile, id: string): string | undefined {
+  for (const s of project.windDirections ?? []) {
+    const c = windDirectionCases(project, s).find((x) => x.id === id);
+    if (c) return `Wind direction case ${JSON.stringify(id)}: load case ${JSON.stringify(s.case)} with the wind toward ${c.wind!.direction}° (${s.count} directions${s.label ? `, ${s.label}` : ''})`;
+  }
   for (const s of project.patchWind ?? []) {
     const label = s.label ? ` (${s.label})` : '';
     if (id === `${s.id} max`) return `Patch wind ${JSON.stringify(s.id)}${label}, S = S_m + √Σ(S_i − S_m)² per result (EN 1993-3-1 B.4.3.2.5), mean case ${JSON.stringify(s.meanCase)}`;

@@ -125,9 +125,24 @@ function memberLossErrors(root: unknown, errors: string[]): void {
   }
 }
 
+function windDirectionErrors(root: unknown, errors: string[]): void {
+  const cases = caseById(root);
+  const taken = new Set([...cases.keys(), ...idSet(root, 'combinations')]);
+  for (const { index, entry } of entries(root, 'windDirections')) {
+    const label = entryLabel(root, 'windDirections', index);
+    const id = str(entry, 'id');
+    if (id !== undefined && taken.has(id)) errors.push(`${label}: id ${JSON.stringify(id)} is already used by a load case or combination`);
+    const c = str(entry, 'case');
+    const spec = c === undefined ? undefined : cases.get(c);
+    if (c !== undefined && !spec) errors.push(`${label}: case: load case ${JSON.stringify(c)} does not exist`);
+    else if (spec && !isRec(spec.wind)) errors.push(`${label}: case: load case ${JSON.stringify(c)} has no wind`);
+  }
+}
+
 export function actionErrors(root: unknown): string[] {
   const errors: string[] = [];
-  for (const list of ['panels', 'patchWind', 'memberLoss']) duplicateIds(root, list, errors);
+  for (const list of ['panels', 'patchWind', 'memberLoss', 'windDirections']) duplicateIds(root, list, errors);
+  windDirectionErrors(root, errors);
   panelErrors(root, errors);
   areaLoadErrors(root, errors);
   patchWindErrors(root, errors);
