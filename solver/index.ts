@@ -3,6 +3,7 @@
  * The solver is pure TypeScript: no Node, Electron or DOM; it runs in Node, workers and browsers.
  */
 export type * from './project/types.ts';
+export type * from './project/site-types.ts';
 export type * from './results/types.ts';
 export type { AnalysisModel, MemberTopology } from './model/analysis-model.ts';
 export type { CaseLoads, FollowerLoad } from './loads/case-loads.ts';
@@ -26,6 +27,10 @@ export { memberSag, describeDof } from './results/extract.ts';
 export { SparseLDL, writeMatrixMarketSymmetric, writeMatrixMarketDenseVector } from './linalg/index.ts';
 export * from './tuning/index.ts';
 export * from './installation/index.ts';
+export * from './sequence/index.ts';
+export { estimateModelSize, checkModelBudget, DEFAULT_MODEL_BUDGET } from './model/model-budget.ts';
+export type { ModelBudget, ModelSizeEstimate, BudgetVerdict, BudgetItem, SizeDriver } from './model/model-budget.ts';
+export * from './asbuilt/index.ts';
 // design actions: panels and area loads, patch wind, member loss
 export { actionCaseIds } from './analysis/solve-actions.ts';
 export { dynamicFactorOf, stepResponsePeak, lostMembers } from './loads/member-loss.ts';

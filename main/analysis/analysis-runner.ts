@@ -3,18 +3,20 @@
  *
  * - Progress (case k of n, iteration, load factor) is forwarded as AnalysisProgress.
  * - Cancel sets the shared Atomics flag (the solver stops between iterations and reports
- *   'cancelled'); a worker that has not finished `cancelGraceMs` later is terminated.
+ *   'cancelled'); a worker that has not finished `cancelGraceMs` later is reported cancelled
+ *   and terminated (run-limits.ts: budget checked before a worker starts, heap limit, grace).
  * - One run at a time: starting a run cancels the previous one (reported as 'cancelled').
- * - The worker file is `analysis-worker.ts` beside this file when running from sources (started
- *   with tsx as loader) or `analysis-worker.mjs` beside the bundle (dist/main/electron/).
+ * - The worker file: see worker-location.ts (the bundled worker wherever one is available).
  */
 import { randomBytes } from 'node:crypto';
 import { createRequire } from 'node:module';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { Worker } from 'node:worker_threads';
-import type { CaseFields, ProjectFile } from '../../solver/index.ts';
+import { Worker, type ResourceLimits } from 'node:worker_threads';
+import type { CaseFields, ModelBudget, ProjectFile } from '../../solver/index.ts';
 import type { AnalysisDone, AnalysisProgress } from '../common/host-contract.ts';
+import { analysisWorkerUrl } from './worker-location.ts';
+import { CANCEL_GRACE_MS, defaultResourceLimits, runRefusal, workerDeathMessage } from './run-limits.ts';
 import { CANCEL_REQUESTED, createCancelFlag, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
 
 export interface AnalysisRunnerOptions {
@@ -25,8 +27,13 @@ export interface AnalysisRunnerOptions {
   workerUrl?: URL;
   /** Node options for the worker (default none). */
   execArgv?: string[];
+  /** After cancel(), the run is reported cancelled and its worker terminated within this, ms (default CANCEL_GRACE_MS). */
   cancelGraceMs?: number;
   progressIntervalMs?: number;
+  /** Worker heap limits (default run-limits.ts). */
+  resourceLimits?: ResourceLimits;
+  /** Model-size budget checked before a worker starts (default the solver's). */
+  budget?: ModelBudget;
 }
 
 interface ActiveRun {
@@ -38,8 +45,7 @@ interface ActiveRun {
 }
 
 export function defaultWorkerUrl(moduleUrl: string = import.meta.url): URL {
-  const ext = new URL(moduleUrl).pathname.endsWith('.ts') ? '.ts' : '.mjs';
-  return new URL(`./analysis-worker${ext}`, moduleUrl);
+  return analysisWorkerUrl(moduleUrl);
 }
 
 /** File URL of tsx's ESM register API (the package's `./esm/api` import export). */
@@ -55,12 +61,12 @@ function tsxEsmApiUrl(): string {
  * bootstrap that registers tsx's loader in the worker thread first (Node 20 ignores
  * `--import` in worker execArgv); a .js worker (the bundle) is started directly.
  */
-export function spawnWorker(url: URL, workerData: unknown, execArgv: string[]): Worker {
-  if (!url.pathname.endsWith('.ts')) return new Worker(url, { workerData, execArgv });
+export function spawnWorker(url: URL, workerData: unknown, execArgv: string[], resourceLimits?: ResourceLimits): Worker {
+  if (!url.pathname.endsWith('.ts')) return new Worker(url, { workerData, execArgv, resourceLimits });
   const tsxApi = tsxEsmApiUrl();
   const code = `(async () => { const { register } = await import(${JSON.stringify(tsxApi)}); register(); await import(${JSON.stringify(url.href)}); })()
     .catch((e) => { throw e; });`;
-  return new Worker(code, { eval: true, workerData, execArgv });
+  return new Worker(code, { eval: true, workerData, execArgv, resourceLimits });
 }
 
 export function newRunId(): string {
@@ -90,17 +96,24 @@ export class AnalysisRunner {
   start(project: ProjectFile): { runId: string } {
     for (const id of this.runs.keys()) this.cancel(id);
     const runId = newRunId();
+    const refusal = runRefusal(project, this.options.budget);
+    if (refusal !== null) {
+      // Reported like any failed run, after the caller has the run id.
+      setTimeout(() => this.options.onDone({ runId, status: 'failed', error: refusal }), 0);
+      return { runId };
+    }
     const cancel = createCancelFlag();
     const data: AnalysisWorkerData = {
       project,
       cancelFlag: cancel.buffer,
       progressIntervalMs: this.options.progressIntervalMs ?? 50,
     };
-    const worker = spawnWorker(this.workerUrl, data, this.execArgv);
+    const limits = this.options.resourceLimits ?? defaultResourceLimits();
+    const worker = spawnWorker(this.workerUrl, data, this.execArgv, limits);
     const run: ActiveRun = { worker, flag: cancel.view, cancelRequested: false, finished: false };
     this.runs.set(runId, run);
     worker.on('message', (m: WorkerMessage) => this.onMessage(runId, run, m));
-    worker.on('error', (e) => this.finish(runId, run, { runId, status: 'failed', error: `Analysis worker failed: ${e.message}` }));
+    worker.on('error', (e) => this.finish(runId, run, { runId, status: 'failed', error: workerDeathMessage(e, limits) }));
     worker.on('exit', (code) => {
       if (run.cancelRequested) this.finish(runId, run, { runId, status: 'cancelled' });
       else this.finish(runId, run, { runId, status: 'failed', error: `Analysis worker stopped unexpectedly (exit code ${code}).` });
@@ -113,7 +126,9 @@ export class AnalysisRunner {
     if (!run || run.finished || run.cancelRequested) return;
     run.cancelRequested = true;
     Atomics.store(run.flag, 0, CANCEL_REQUESTED);
-    run.killTimer = setTimeout(() => void run.worker.terminate(), this.options.cancelGraceMs ?? 1500);
+    // A solver busy outside its Newton loop (model building, ordering) does not see the flag:
+    // after the grace the run is reported cancelled and the worker terminated regardless.
+    run.killTimer = setTimeout(() => this.finish(runId, run, { runId, status: 'cancelled' }), this.options.cancelGraceMs ?? CANCEL_GRACE_MS);
   }
 
   /** Stop every run now (host shutdown). */

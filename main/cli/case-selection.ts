@@ -21,5 +21,5 @@ export function checkCaseIds(project: ProjectFile, requested: readonly string[])
 export function filterReport(report: SolveReport, requested: readonly string[]): SolveReport {
   if (requested.length === 0) return report;
   const want = new Set(requested);
-  return { cases: report.cases.filter((c) => want.has(c.id)) };
+  return { ...report, cases: report.cases.filter((c) => want.has(c.id)) };
 }

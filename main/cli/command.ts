@@ -6,7 +6,7 @@
  * To add a command (e.g. `check`): create commands/check.ts exporting a CliCommand, parse its
  * arguments with parseOptions (options.ts), read projects with readProjectFile
  * (read-project-file.ts), return an EXIT status, then append it to COMMANDS in commands/index.ts
- * and add a test under tests/main/cli/ that runs main/cli/stayset.mjs.
+ * and add a test under tests/main/cli/ that runs the built bin (tests/main/cli/run-stayset.ts).
  */
 import type { CliIO } from './cli-io.ts';
 

@@ -1,5 +1,5 @@
 /**
- * Entry of the `stayset` command line (main/cli/stayset.mjs loads this file through tsx).
+ * Entry of the `stayset` command line (bin.ts calls it; the bin is bundled into dist/cli/stayset.mjs).
  * Wires the real process streams to the dispatcher; unexpected errors exit with status 1 and a
  * message asking for a report, never a bare stack trace unless STAYSET_DEBUG is set.
  */

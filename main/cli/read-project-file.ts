@@ -1,38 +1,24 @@
 /**
  * Reads and validates a project file from disk for a command. Every message starts with the
  * file name as typed, e.g. `mast.stayset.json: members[3] "G2": node "TOP2" does not exist`.
+ * Only regular files within the shared size limit are read (main/store/read-regular-file.ts).
  */
-import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { parseProjectText } from '../common/project/index.ts';
 import type { ProjectFile } from '../../solver/index.ts';
 import type { CliIO } from './cli-io.ts';
+import { modelBudgetMessage } from './model-budget-guard.ts';
+import { readRegularFileSync } from '../store/read-regular-file.ts';
+import type { FileStamp } from '../store/file-stamp.ts';
 
 export type ReadProjectOutcome =
-  | { ok: true; project: ProjectFile; migratedFrom?: number }
+  | { ok: true; project: ProjectFile; migratedFrom?: number; /** The file as read (lost-update guard of tune --write). */ stamp?: FileStamp }
   | { ok: false; errors: string[] };
 
-function readError(name: string, e: NodeJS.ErrnoException): string {
-  switch (e.code) {
-    case 'ENOENT':
-      return `${name}: no such file`;
-    case 'EISDIR':
-      return `${name}: is a folder, not a project file`;
-    case 'EACCES':
-    case 'EPERM':
-      return `${name}: permission denied`;
-    default:
-      return `${name}: cannot be read (${e.message})`;
-  }
-}
-
 export function readProjectFile(name: string, cwd: string): ReadProjectOutcome {
-  let bytes: Buffer;
-  try {
-    bytes = readFileSync(resolve(cwd, name));
-  } catch (e) {
-    return { ok: false, errors: [readError(name, e as NodeJS.ErrnoException)] };
-  }
+  const read = readRegularFileSync(resolve(cwd, name), name);
+  if (!read.ok) return { ok: false, errors: [read.error] };
+  const bytes = read.bytes;
   let text: string;
   try {
     text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
@@ -41,13 +27,17 @@ export function readProjectFile(name: string, cwd: string): ReadProjectOutcome {
   }
   const parsed = parseProjectText(text);
   if (!parsed.ok) return { ok: false, errors: parsed.errors.map((m) => `${name}: ${m}`) };
-  return parsed;
+  return { ...parsed, stamp: read.stamp };
 }
 
-/** readProjectFile for a command: on failure every message goes to stderr and null comes back (exit 2). */
+/**
+ * readProjectFile for a command that solves: on failure, or when the model would exceed the size
+ * budget, every message goes to stderr and null comes back (exit 2).
+ */
 export function readProjectOrReport(name: string, io: CliIO): Extract<ReadProjectOutcome, { ok: true }> | null {
   const read = readProjectFile(name, io.cwd);
-  if (read.ok) return read;
-  for (const m of read.errors) io.err(`${m}\n`);
+  const errors = read.ok ? [modelBudgetMessage(name, read.project)].filter((m): m is string => m !== null) : read.errors;
+  if (read.ok && errors.length === 0) return read;
+  for (const m of errors) io.err(`${m}\n`);
   return null;
 }

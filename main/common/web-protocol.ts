@@ -15,6 +15,7 @@
  *
  * The same Content-Security-Policy is sent by both hosts (`STAYSET_CSP`).
  */
+import { MAX_PROJECT_FILE_BYTES, REQUEST_MARGIN_BYTES } from './limits/file-limits.ts';
 import type { StaysetHost } from './host-contract.ts';
 
 /** Methods of StaysetHost callable over RPC (everything that is not an onDidX subscription). */
@@ -64,8 +65,8 @@ export const API_PREFIX = '/api/';
 export const EVENTS_PATH = '/api/events';
 export const TOKEN_HEADER = 'x-stayset-token';
 export const TOKEN_QUERY = 'token';
-/** Largest accepted request body, bytes (a large project is a few MB of JSON). */
-export const MAX_BODY_BYTES = 64 * 1024 * 1024;
+/** Largest accepted request body, bytes: one project of the shared file limit plus a margin. */
+export const MAX_BODY_BYTES = MAX_PROJECT_FILE_BYTES + REQUEST_MARGIN_BYTES;
 
 export interface RpcRequestBody {
   args: unknown[];

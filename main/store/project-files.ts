@@ -16,10 +16,12 @@ import type { ProjectFile } from '../../solver/index.ts';
 import type { HostResult, OpenedProject } from '../common/host-contract.ts';
 import { parseProjectText, serializeProject } from '../common/project/index.ts';
 import { writeFileAtomic } from './atomic-write.ts';
+import { readRegularFile } from './read-regular-file.ts';
+import { MAX_PROJECT_FILE_BYTES } from '../common/limits/file-limits.ts';
 
 export const PROJECT_EXTENSION = '.stayset';
-/** Largest project file read, bytes. */
-export const MAX_PROJECT_BYTES = 256 * 1024 * 1024;
+/** Largest project file read, bytes: the limit shared by every edition. */
+export const MAX_PROJECT_BYTES = MAX_PROJECT_FILE_BYTES;
 
 export type SaveMode = 'save' | 'saveAs';
 
@@ -44,16 +46,16 @@ function describeErrors(errors: string[]): string {
 /** Read and validate a project file. Never throws for file or content problems. */
 export async function readProjectFile(file: string): Promise<ReadOutcome> {
   const name = path.basename(file);
+  const read = await readRegularFile(file, name);
+  if (!read.ok) {
+    const reason = read.reason === 'missing' ? 'missing' : 'unreadable';
+    return { ok: false, reason, error: reason === 'missing' ? `${name}: file not found (${file})` : read.error };
+  }
   let text: string;
   try {
-    const stat = await fs.stat(file);
-    if (!stat.isFile()) return { ok: false, reason: 'unreadable', error: `${name}: not a file` };
-    if (stat.size > MAX_PROJECT_BYTES) return { ok: false, reason: 'unreadable', error: `${name}: ${stat.size} bytes is larger than the ${MAX_PROJECT_BYTES}-byte limit` };
-    text = await fs.readFile(file, 'utf8');
-  } catch (e) {
-    const code = (e as NodeJS.ErrnoException).code;
-    if (code === 'ENOENT') return { ok: false, reason: 'missing', error: `${name}: file not found (${file})` };
-    return { ok: false, reason: 'unreadable', error: `${name}: cannot be read (${code ?? String(e)})` };
+    text = new TextDecoder('utf-8', { fatal: true }).decode(read.bytes);
+  } catch {
+    return { ok: false, reason: 'invalid', error: `${name} is not UTF-8 text, so not a Stayset project; the file was not changed.` };
   }
   const parsed = parseProjectText(text);
   if (!parsed.ok) {

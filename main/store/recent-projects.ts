@@ -7,6 +7,7 @@ import { promises as fs } from 'node:fs';
 import path from 'node:path';
 import type { RecentEntry } from '../common/host-contract.ts';
 import { writeFileAtomic } from './atomic-write.ts';
+import { readRegularFile } from './read-regular-file.ts';
 
 export const RECENT_LIMIT = 12;
 export const RECENT_FILE = 'recent-projects.json';
@@ -41,7 +42,9 @@ export class RecentProjects {
 
   async list(): Promise<RecentEntry[]> {
     try {
-      const data: unknown = JSON.parse(await fs.readFile(this.file, 'utf8'));
+      const read = await readRegularFile(this.file, RECENT_FILE, 1024 * 1024);
+      if (!read.ok) return [];
+      const data: unknown = JSON.parse(read.bytes.toString('utf8'));
       return Array.isArray(data) ? data.filter(isEntry).slice(0, RECENT_LIMIT) : [];
     } catch {
       return [];

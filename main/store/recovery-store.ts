@@ -17,6 +17,8 @@ import type { ProjectFile } from '../../solver/index.ts';
 import type { HostResult, OpenedProject, RecoveryEntry } from '../common/host-contract.ts';
 import { parseProjectText, serializeProject } from '../common/project/index.ts';
 import { TEMP_SUFFIX, writeFileAtomic } from './atomic-write.ts';
+import { readRegularFile } from './read-regular-file.ts';
+import { MAX_PROJECT_FILE_BYTES, REQUEST_MARGIN_BYTES } from '../common/limits/file-limits.ts';
 
 interface RecoveryFile {
   path: string | null;
@@ -55,7 +57,9 @@ export class RecoveryStore {
 
   private async readRecord(id: string): Promise<RecoveryFile | null> {
     try {
-      const data: unknown = JSON.parse(await fs.readFile(this.fileFor(id), 'utf8'));
+      const read = await readRegularFile(this.fileFor(id), `${id}.json`, MAX_PROJECT_FILE_BYTES + REQUEST_MARGIN_BYTES);
+      if (!read.ok) return null;
+      const data: unknown = JSON.parse(read.bytes.toString('utf8'));
       return isRecoveryFile(data) ? data : null;
     } catch {
       return null;

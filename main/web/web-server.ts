@@ -35,7 +35,7 @@ export interface WebHostOptions {
   /** Fixed token (tests); default 32 random bytes, hex. */
   token?: string;
   initialPath?: string | null;
-  runner?: Partial<Pick<AnalysisRunnerOptions, 'workerUrl' | 'execArgv' | 'cancelGraceMs' | 'progressIntervalMs'>>;
+  runner?: Partial<Pick<AnalysisRunnerOptions, 'workerUrl' | 'execArgv' | 'cancelGraceMs' | 'progressIntervalMs' | 'resourceLimits' | 'budget'>>;
 }
 
 export interface WebHost {

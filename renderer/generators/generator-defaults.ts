@@ -13,10 +13,13 @@ const roundBar = (d: number, label: string): SectionInput => ({
   E: 210e9, area: Math.PI * d * d / 4, massPerLength: 7850 * Math.PI * d * d / 4, diameter: d, thermalExpansion: 1.2e-5, label,
 });
 /** Spiral strand: metallic area ≈ 0.75 of the circle, breaking load ≈ 1.33 kN/mm² of it (recalled typical values). */
-const strand = (d: number, label: string): SectionInput => {
+export const strand = (d: number, label: string): SectionInput => {
   const area = 0.75 * Math.PI * d * d / 4;
   return { E: 150e9, area, massPerLength: 8250 * area, breakingLoad: 1.33e9 * area, diameter: d, thermalExpansion: 1.2e-5, label };
 };
+
+/** Guy strand sizes offered in the mast form (diameters, m), with the data of `strand`. */
+export const GUY_STRAND_SIZES = [0.008, 0.01, 0.012, 0.014, 0.016, 0.018, 0.02, 0.022, 0.026];
 
 export function defaultGuyedMast(base: Vec3): GuyedMastParams {
   return {

@@ -18,6 +18,7 @@ import type { AnalysisStatus } from '../results/types.ts';
 import type { SolveControl } from './progress.ts';
 import type { Workspace } from './workspace.ts';
 import { addGravity, assemble } from '../assembly/assemble.ts';
+import { addNodalMoments } from '../loads/nodal-moments.ts';
 import { STANDARD_GRAVITY } from '../model/constants.ts';
 import { nowMs } from './clock.ts';
 import { lineSearch } from './line-search.ts';
@@ -99,7 +100,7 @@ export function solveEquilibrium(
   const counters: Counters = { iterations: 0, factorizations: 0, residual: 0, negativePivots: 0, singularDof: -1, factorMs: 0 };
 
   if (start) {
-    for (let d = 0; d < n; d++) u[d] = start[d] - ws.model.coords[d];
+    for (let d = 0; d < ws.model.dofs.translationCount; d++) u[d] = start[d] - ws.model.coords[d];
     const r = newtonAtLoad(ws, loads, fixedLoad, u, 1, options, control, tag, counters);
     if (r === 'converged' || r === 'cancelled') return outcome(r, u, counters, 1, 1);
     u.fill(0);
@@ -138,9 +139,11 @@ export function solveEquilibrium(
   return outcome('converged', u, counters, 1, steps);
 }
 
-/** Nodal loads plus member weight (fixed direction), N. */
+/** Nodal loads and moments plus member weight (fixed direction), N and N·m per DOF. */
 function fixedDirectionLoads(ws: Workspace, loads: CaseLoads): Float64Array {
-  const f = new Float64Array(loads.nodal);
+  const f = new Float64Array(ws.fInt.length);
+  f.set(loads.nodal);
+  if (loads.moments) addNodalMoments(ws.model.dofs, loads.moments, f);
   addGravity(ws.model, loads.selfWeight ? loads.gravityFactor : 0, loads.extraMassPerLength, STANDARD_GRAVITY, f);
   return f;
 }
@@ -198,6 +201,8 @@ function newtonAtLoad(
 ): StepResult {
   const { step, residual, ldl, values } = ws;
   const maxNodalStep = options.maxStepFraction * ws.size;
+  const nt = ws.model.dofs.translationCount;
+  if (loads.prescribed) applyPrescribed(loads.prescribed, lambda, u);
   let [norm, ref] = evaluateResidual(ws, loads, fixedLoad, u, lambda, true);
   let previous = Infinity;
   let indefinite = false;
@@ -227,12 +232,13 @@ function newtonAtLoad(
     }
     counters.iterations++;
     ldl.solve(residual, step);
-    if (it === 0) predictor = maxNodal(step);
+    if (it === 0) predictor = maxNodal(step, nt);
 
     let scale = 1;
     for (let i = 0; i < step.length; i += 3) {
       const s = Math.hypot(step[i], step[i + 1], step[i + 2]);
-      if (s * scale > maxNodalStep) scale = maxNodalStep / s;
+      const limit = i < nt ? maxNodalStep : MAX_ROTATION_STEP;
+      if (s * scale > limit) scale = limit / s;
     }
     const best = searchStep(ws, loads, fixedLoad, u, lambda, scale, norm);
     if (best === 0) return 'diverged';
@@ -252,11 +258,19 @@ function newtonAtLoad(
 /** Relative residual below which, after a quadratic-rate step, the next step reuses the factor. */
 const CHORD_STEP_BELOW = 1e-6;
 
-/** Largest nodal length of a 3-per-node vector, m. */
-function maxNodal(v: Float64Array): number {
+/** Largest nodal rotation step per iteration, rad (common practice for co-rotational beams). */
+const MAX_ROTATION_STEP = 0.5;
+
+/** Largest nodal translation of a DOF vector (the first nt entries, 3 per node), m. */
+function maxNodal(v: Float64Array, nt: number): number {
   let m = 0;
-  for (let i = 0; i < v.length; i += 3) m = Math.max(m, Math.hypot(v[i], v[i + 1], v[i + 2]));
+  for (let i = 0; i < nt; i += 3) m = Math.max(m, Math.hypot(v[i], v[i + 1], v[i + 2]));
   return m;
+}
+
+/** Prescribed support displacements at load factor λ (restrained DOFs: the solve never moves them). */
+function applyPrescribed(p: { dofs: Int32Array; values: Float64Array }, lambda: number, u: Float64Array): void {
+  for (let k = 0; k < p.dofs.length; k++) u[p.dofs[k]] = lambda * p.values[k];
 }
 
 /**
@@ -269,7 +283,7 @@ function maxNodal(v: Float64Array): number {
 function acceptIndefinite(ws: Workspace, u: Float64Array, predictor: number, options: NewtonOptions): boolean {
   const moved = ws.trial;
   for (let d = 0; d < u.length; d++) moved[d] = u[d] - ws.stepStart[d];
-  if (maxNodal(moved) > 3 * predictor) return false;
+  if (maxNodal(moved, ws.model.dofs.translationCount) > 3 * predictor) return false;
   return ws.ldl.factor(ws.values, options.pivotTolerance) < 0 && ws.ldl.negativePivots === 0;
 }
 

@@ -4,6 +4,8 @@
  * - wind from N directions (WindDirectionsSpec): "<id> <direction>°";
  * - patch wind (PatchWindSpec): "<id> / patch k", then "<id> max" and "<id> min";
  * - member loss (MemberLossSpec): "<id> / <member>" per removed member.
+ * An action whose case is not in the project is skipped: projects derived for tuning, sequences
+ * or as-built fitting keep only their own cases (a validated file always has the cases).
  * Fields of every appended case have the full model's layout (a removed member's elements are
  * slack with zero force, its interior nodes on the line between its ends).
  */
@@ -23,14 +25,24 @@ import { combinePatchResults } from '../results/patch-combination.ts';
 import { createWorkspace } from './workspace.ts';
 import { solveCase } from './solve-case.ts';
 
+/** The actions whose cases exist in the project (see the file comment). */
+function activeActions(project: ProjectFile) {
+  const hasWindCase = (id: string) => Boolean(project.loadCases.find((c) => c.id === id)?.wind);
+  const hasCase = (id: string) => project.loadCases.some((c) => c.id === id) || (project.combinations ?? []).some((c) => c.id === id);
+  return {
+    directions: (project.windDirections ?? []).filter((s) => hasWindCase(s.case)),
+    patches: (project.patchWind ?? []).filter((s) => hasWindCase(s.meanCase)),
+    losses: (project.memberLoss ?? []).filter((s) => hasCase(s.fromCase)),
+  };
+}
+
 /** Ids of the cases the actions of a project add, in the order they are solved. */
 export function actionCaseIds(project: ProjectFile, model: AnalysisModel = buildModel(project)): string[] {
   const ids: string[] = [];
-  for (const spec of project.windDirections ?? []) ids.push(...windDirectionCases(project, spec).map((c) => c.id));
-  for (const spec of project.patchWind ?? []) {
-    ids.push(...patchCases(model, project, spec).map((p) => p.id), `${spec.id} max`, `${spec.id} min`);
-  }
-  for (const spec of project.memberLoss ?? []) ids.push(...lostMembers(project, spec).map((m) => `${spec.id} / ${m}`));
+  const act = activeActions(project);
+  for (const spec of act.directions) ids.push(...windDirectionCases(project, spec).map((c) => c.id));
+  for (const spec of act.patches) ids.push(...patchCases(model, project, spec).map((p) => p.id), `${spec.id} max`, `${spec.id} min`);
+  for (const spec of act.losses) ids.push(...lostMembers(project, spec).map((m) => `${spec.id} / ${m}`));
   return ids;
 }
 
@@ -47,6 +59,7 @@ export function appendActionCases(
   control: SolveControl, wanted: (id: string) => boolean,
 ): void {
   if (!project.patchWind?.length && !project.memberLoss?.length && !project.windDirections?.length) return;
+  const act = activeActions(project);
   const solved = (id: string): CaseSolution => {
     const k = solution.report.cases.findIndex((c) => c.id === id);
     if (k >= 0) return { result: solution.report.cases[k], fields: solution.fields[k] };
@@ -55,14 +68,14 @@ export function appendActionCases(
   const push = (s: CaseSolution) => { solution.report.cases.push(s.result); solution.fields.push(s.fields); };
   const tag = (caseId: string) => ({ caseIndex: solution.report.cases.length, caseCount: solution.report.cases.length + 1, caseId });
 
-  for (const spec of project.windDirections ?? []) {
+  for (const spec of act.directions) {
     for (const c of windDirectionCases(project, spec)) {
       if (!wanted(c.id) && !wanted(spec.id)) continue;
       push(solveCase(ws, c.id, resolveCaseLoads(model, project, c), { control, tag: tag(c.id) }));
     }
   }
 
-  for (const spec of project.patchWind ?? []) {
+  for (const spec of act.patches) {
     const cases = patchCases(model, project, spec);
     const ids = [spec.id, `${spec.id} max`, `${spec.id} min`, ...cases.map((c) => c.id)];
     if (!ids.some(wanted)) continue;
@@ -73,7 +86,7 @@ export function appendActionCases(
     push(combinePatchResults(model, `${spec.id} min`, -1, mean, patches));
   }
 
-  for (const spec of project.memberLoss ?? []) {
+  for (const spec of act.losses) {
     const factor = dynamicFactorOf(spec);
     for (const member of lostMembers(project, spec)) {
       const id = `${spec.id} / ${member}`;

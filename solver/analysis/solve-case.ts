@@ -30,14 +30,15 @@ export function solveCase(ws: Workspace, id: string, loads: CaseLoads, options: 
   const model = ws.model;
   const converged = out.status === 'converged';
   const residual = evaluateState(ws, loads, out.u);
-  const positions = new Float64Array(out.u);
-  for (let d = 0; d < positions.length; d++) positions[d] += model.coords[d];
+  const positions = new Float64Array(model.coords);
+  for (let d = 0; d < positions.length; d++) positions[d] += out.u[d];
   const fields: CaseFields = {
     positions,
     elementTension: new Float64Array(ws.elements.tension),
     elementSlack: new Uint8Array(ws.elements.slack),
   };
-  const members = memberResults(model, positions, fields.elementTension, fields.elementSlack);
+  if (ws.elements.endForces.length > 0) fields.elementEndForces = new Float64Array(ws.elements.endForces);
+  const members = memberResults(model, positions, fields.elementTension, fields.elementSlack, fields.elementEndForces);
   let freeDofs = 0;
   for (let d = 0; d < model.fixed.length; d++) if (!model.fixed[d]) freeDofs++;
   const result: CaseResult = {
@@ -47,7 +48,7 @@ export function solveCase(ws: Workspace, id: string, loads: CaseLoads, options: 
     slackMembers: members.filter((m) => m.slack).map((m) => m.id),
     nodes: nodeResults(model, positions),
     members,
-    reactions: reactionResults(model, ws.fInt, ws.fExt),
+    reactions: reactionResults(model, ws.fInt, ws.fExt, out.u),
     stats: {
       dofs: freeDofs, iterations: out.iterations, loadSteps: out.loadSteps,
       seconds: (nowMs() - t0) / 1000, residual: converged ? residual : out.residual,

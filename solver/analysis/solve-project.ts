@@ -10,6 +10,7 @@ import { resolveCaseLoads, resolveCombinationLoads } from '../loads/resolve-case
 import { createWorkspace } from './workspace.ts';
 import { solveCase } from './solve-case.ts';
 import { appendActionCases } from './solve-actions.ts';
+import { nowMs } from './clock.ts';
 
 export interface SolveProjectOptions {
   /** Only these case / combination ids (default: all). */
@@ -17,8 +18,10 @@ export interface SolveProjectOptions {
 }
 
 export function solveProject(project: ProjectFile, control: SolveControl = {}, options: SolveProjectOptions = {}): ProjectSolution {
+  const t0 = nowMs();
   const model = buildModel(project);
   const ws = createWorkspace(model);
+  const t1 = nowMs();
   const wanted = (id: string) => !options.only || options.only.includes(id);
   const jobs = [
     ...project.loadCases.filter((c) => wanted(c.id)).map((c) => ({ id: c.id, loads: () => resolveCaseLoads(model, project, c) })),
@@ -33,5 +36,7 @@ export function solveProject(project: ProjectFile, control: SolveControl = {}, o
     solution.fields.push(fields);
   });
   appendActionCases(project, model, ws, solution, control, wanted);
+  const t2 = nowMs();
+  solution.report.stats = { analysisSeconds: (t1 - t0) / 1000, newtonSeconds: (t2 - t1) / 1000, seconds: (t2 - t0) / 1000 };
   return solution;
 }

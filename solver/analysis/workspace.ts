@@ -4,7 +4,7 @@
  */
 import type { AnalysisModel } from '../model/analysis-model.ts';
 import { buildBlockPattern, type BlockPattern } from '../assembly/block-pattern.ts';
-import { assemble, startVectors, type ElementState } from '../assembly/assemble.ts';
+import { assemble, createElementState, startVectors, type ElementState } from '../assembly/assemble.ts';
 import { SparseLDL } from '../linalg/index.ts';
 import { stressFreeLength } from '../model/build-model.ts';
 
@@ -23,7 +23,7 @@ export interface Workspace {
   elements: ElementState;
   /** Element start vectors X_b − X_a (3 × elementCount), m. */
   startVectors: Float64Array;
-  /** Displacements at the start of the current load increment (3 × nodeCount), m. */
+  /** Displacements and rotations at the start of the current load increment (dofs.count), m, rad. */
   stepStart: Float64Array;
   /** Scratch positions X + u for follower loads (3 × nodeCount), m. */
   positions: Float64Array;
@@ -32,13 +32,11 @@ export interface Workspace {
 }
 
 export function createWorkspace(model: AnalysisModel): Workspace {
-  const pattern = buildBlockPattern(model.nodeCount, model.elemNodes);
+  const pattern = buildBlockPattern(model.dofs.count, model.familyBlocks.map((b) => ({ dofsPerElement: b.family.dofsPerElement, elementDofs: b.elementDofs })));
+  // Every run of 3 DOFs is one node's translations or rotations (dof-map.ts): node blocks of 3.
   const ldl = SparseLDL.analyse(pattern, { blockSize: 3, decoupledDofs: model.fixed });
-  const n = 3 * model.nodeCount;
-  const elements: ElementState = {
-    tension: new Float64Array(model.elementCount),
-    slack: new Uint8Array(model.elementCount),
-  };
+  const n = model.dofs.count;
+  const elements: ElementState = createElementState(model);
   const fInt0 = new Float64Array(n);
   const dX = startVectors(model);
   assemble(model, null, dX, new Float64Array(n), 0, fInt0, elements, null);
@@ -46,7 +44,7 @@ export function createWorkspace(model: AnalysisModel): Workspace {
     model, pattern, ldl, values: new Float64Array(pattern.rowIdx.length), fInt0,
     fInt: new Float64Array(n), fExt: new Float64Array(n), residual: new Float64Array(n),
     step: new Float64Array(n), trial: new Float64Array(n), elements, startVectors: dX,
-    stepStart: new Float64Array(n), positions: new Float64Array(n), size: modelSize(model.coords),
+    stepStart: new Float64Array(n), positions: new Float64Array(3 * model.nodeCount), size: modelSize(model.coords),
   };
 }
 
@@ -75,5 +73,5 @@ export function setElementPrestress(
     m.elemS0[e] = initialStress[k];
     m.elemUnstressedLength[e] = stressFreeLength(refLength[k], initialStress[k], m.elemE[e]);
   }
-  assemble(m, null, ws.startVectors, new Float64Array(3 * m.nodeCount), 0, ws.fInt0, ws.elements, null);
+  assemble(m, null, ws.startVectors, new Float64Array(m.dofs.count), 0, ws.fInt0, ws.elements, null);
 }

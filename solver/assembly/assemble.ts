@@ -1,31 +1,20 @@
 /**
- * Element loop: internal forces, element axial forces and (optionally) the global tangent.
+ * Element loop over the families present: internal forces, element state and (optionally) the
+ * global tangent, plus springs to ground.
  *
- * Conventions: u is the displacement from the start positions X (3 × nodeCount, m); each element's
- * current end-to-end vector is d = (X_b − X_a) + (u_b − u_a), with X_b − X_a precomputed once
- * (`startVectors`), so round-off does not scale with the coordinates' magnitude. f_int is the
- * gradient of the strain energy (N), so equilibrium at free DOFs is f_ext − f_int = 0 and the
- * support reaction at a restrained DOF is r = f_int − f_ext. Tangent values follow the
- * BlockPattern layout; restrained DOFs get identity rows.
+ * Conventions: u is the displacement (and rotation) from the start state, indexed by the model's
+ * DOF map; each element's current end-to-end vector is d = (X_b − X_a) + (u_b − u_a), with
+ * X_b − X_a precomputed once (`startVectors`), so round-off does not scale with the coordinates'
+ * magnitude. f_int is the gradient of the strain energy (N, N·m), springs included, so
+ * equilibrium at free DOFs is f_ext − f_int = 0 and the support reaction at a restrained DOF is
+ * r = f_int − f_ext. Tangent values follow the BlockPattern layout; restrained DOFs get identity rows.
  */
 import type { AnalysisModel } from '../model/analysis-model.ts';
-import { evaluateTrussTL, OUT_N, OUT_SIZE, OUT_STATE, ELEMENT_SLACK } from '../elements/truss-tl.ts';
-import { SLOTS_PER_ELEMENT, type BlockPattern } from './block-pattern.ts';
+import type { AssemblyContext, ElementState } from '../elements/family.ts';
+import type { BlockPattern } from './block-pattern.ts';
 
-/** Geometric-stiffness floor for cables in the tangent, as a fraction of E (see truss-tl.ts). */
-export const CABLE_STRESS_FLOOR_RATIO = 1e-8;
-
-export interface ElementState {
-  /** Axial force per element, N. */
-  tension: Float64Array;
-  /** 1 where the element is slack. */
-  slack: Uint8Array;
-}
-
-// Module-scope alias: some loaders compile imports to getter calls; keep them out of the hot loop.
-const evaluateElement = evaluateTrussTL;
-const out = new Float64Array(OUT_SIZE);
-const kb = new Float64Array(9);
+export type { ElementState };
+export { CABLE_STRESS_FLOOR_RATIO } from '../elements/truss/truss-family.ts';
 
 /** Element start vectors X_b − X_a (3 × elementCount, m). */
 export function startVectors(model: AnalysisModel): Float64Array {
@@ -38,6 +27,21 @@ export function startVectors(model: AnalysisModel): Float64Array {
   return v;
 }
 
+/** Element state arrays for a model (end forces only where rotational elements exist). */
+export function createElementState(model: AnalysisModel): ElementState {
+  const rotational = model.familyBlocks.some((b) => b.family.dofsPerElement > 6);
+  return {
+    tension: new Float64Array(model.elementCount),
+    slack: new Uint8Array(model.elementCount),
+    endForces: new Float64Array(rotational ? 12 * model.elementCount : 0),
+  };
+}
+
+const ctx: AssemblyContext = {
+  model: null as unknown as AnalysisModel, dX: new Float64Array(0), u: new Float64Array(0), dT: 0,
+  fInt: new Float64Array(0), state: null as unknown as ElementState, values: null, fixed: new Uint8Array(0),
+};
+
 /**
  * Evaluate every element at displacements u with temperature change dT (K).
  * Writes f_int (zeroed first) and element state; when `values` is given, also the tangent.
@@ -46,51 +50,28 @@ export function assemble(
   model: AnalysisModel, pattern: BlockPattern | null, dX: Float64Array, u: Float64Array, dT: number,
   fInt: Float64Array, state: ElementState, values: Float64Array | null,
 ): void {
-  const { elemNodes, elemRefLength, elemS0, elemE, elemArea, elemAlpha, elemTensionOnly, fixed } = model;
-  const m = model.elementCount;
   fInt.fill(0);
-  const slots = pattern ? pattern.slots : null;
   if (values) values.fill(0);
-  for (let e = 0; e < m; e++) {
-    const a = elemNodes[2 * e], b = elemNodes[2 * e + 1];
-    const a3 = 3 * a, b3 = 3 * b;
-    const tensionOnly = elemTensionOnly[e] === 1;
-    const E = elemE[e];
-    evaluateElement(
-      dX[3 * e] + u[b3] - u[a3], dX[3 * e + 1] + u[b3 + 1] - u[a3 + 1], dX[3 * e + 2] + u[b3 + 2] - u[a3 + 2],
-      elemRefLength[e], elemS0[e], E, elemArea[e], elemAlpha[e] * dT,
-      tensionOnly, CABLE_STRESS_FLOOR_RATIO * E, out, values ? kb : null, 0,
-    );
-    fInt[b3] += out[0]; fInt[b3 + 1] += out[1]; fInt[b3 + 2] += out[2];
-    fInt[a3] -= out[0]; fInt[a3 + 1] -= out[1]; fInt[a3 + 2] -= out[2];
-    state.tension[e] = out[OUT_N];
-    state.slack[e] = out[OUT_STATE] === ELEMENT_SLACK ? 1 : 0;
-    if (values && slots) scatter(values, slots, SLOTS_PER_ELEMENT * e, a, b, fixed);
+  ctx.model = model; ctx.dX = dX; ctx.u = u; ctx.dT = dT; ctx.fInt = fInt; ctx.state = state;
+  ctx.values = pattern ? values : null; ctx.fixed = model.fixed;
+  const blocks = model.familyBlocks;
+  for (let b = 0; b < blocks.length; b++) {
+    const block = blocks[b];
+    block.family.assemble(ctx, block, pattern ? pattern.slots[b] : null);
+  }
+  const springs = model.springs;
+  if (springs) {
+    for (let d = 0; d < springs.length; d++) {
+      const k = springs[d];
+      if (k === 0) continue;
+      fInt[d] += k * u[d];
+      if (values && pattern) values[pattern.diagonal[d]] += k;
+    }
   }
   if (values && pattern) {
+    const { fixed } = model;
     const diag = pattern.diagonal;
     for (let d = 0; d < pattern.n; d++) if (fixed[d]) values[diag[d]] = 1;
-  }
-}
-
-function scatter(values: Float64Array, slots: Int32Array, o: number, a: number, b: number, fixed: Uint8Array): void {
-  // Diagonal blocks (a, a) and (b, b): lower triangle, row-major.
-  let s = o;
-  for (let t = 0; t < 2; t++) {
-    const base = 3 * (t === 0 ? a : b);
-    for (let r = 0; r < 3; r++) {
-      for (let c = 0; c <= r; c++, s++) {
-        if (fixed[base + r] || fixed[base + c]) continue;
-        values[slots[s]] += kb[3 * r + c];
-      }
-    }
-  }
-  const hi3 = 3 * (a > b ? a : b), lo3 = 3 * (a > b ? b : a);
-  for (let r = 0; r < 3; r++) {
-    for (let c = 0; c < 3; c++, s++) {
-      if (fixed[hi3 + r] || fixed[lo3 + c]) continue;
-      values[slots[s]] -= kb[3 * r + c];
-    }
   }
 }
 

@@ -14,7 +14,7 @@
  * inclination, mean of the end tensions, mass per length and EA of the section.
  * Results are for review by a qualified engineer; local codes and licensed practice govern.
  */
-import type { ProjectFile } from '../project/types.ts';
+import type { MemberKind, ProjectFile } from '../project/types.ts';
 import type { CaseResult, MemberResult } from '../results/types.ts';
 import { buildModel } from '../model/build-model.ts';
 import { resolveCaseLoads } from '../loads/resolve-case-loads.ts';
@@ -34,7 +34,7 @@ export function defaultInstallationTemperatures(): number[] {
 
 export interface MemberInstallation {
   id: string;
-  kind: 'cable' | 'bar';
+  kind: MemberKind;
   section: string;
   /** Unstressed (cut) length at T_ref, m. */
   cutLength: number;

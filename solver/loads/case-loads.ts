@@ -22,6 +22,10 @@ export interface CaseLoads {
   temperatureChange: number;
   /** Loads that depend on the current geometry (wind drag), or null. */
   follower: FollowerLoad | null;
+  /** Nodal moments (3 × nodeCount, N·m) on nodes with rotations, or absent. */
+  moments?: Float64Array | null;
+  /** Prescribed displacements of restrained DOFs (m, rad), reached at λ = 1, or absent. */
+  prescribed?: { dofs: Int32Array; values: Float64Array } | null;
 }
 
 /**

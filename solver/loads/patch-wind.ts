@@ -21,13 +21,13 @@ const LEVEL_TOLERANCE = 1e-3;
 
 /**
  * Default patches: guy levels are the heights of nodes where a cable member ends on a node that
- * a bar member also uses; the patches run base → first level → … → top level → top of the bars.
+ * a bar or beam member also uses; the patches run base → first level → … → top level → top of the bars.
  */
 export function defaultPatches(model: AnalysisModel): { from: number; to: number }[] {
   const barNode = new Set<number>();
   let zMin = Infinity, zMax = -Infinity;
   for (const m of model.members) {
-    if (m.kind !== 'bar') continue;
+    if (m.kind === 'cable') continue;
     for (const n of m.nodeChain) { barNode.add(n); const z = model.coords[3 * n + 2]; zMin = Math.min(zMin, z); zMax = Math.max(zMax, z); }
   }
   const levels: number[] = [];
@@ -73,7 +73,7 @@ export interface PatchCase {
 
 /**
  * The patch cases of a PatchWindSpec: the mean case's loads plus (patchFactor − 1) × the drag on
- * the bar members whose mid-height (modelled geometry) is inside the patch (from ≤ z < to; the
+ * the bar and beam members whose mid-height (modelled geometry) is inside the patch (from ≤ z < to; the
  * top patch includes its upper end).
  */
 export function patchCases(model: AnalysisModel, project: ProjectFile, spec: PatchWindSpec): PatchCase[] {
@@ -85,7 +85,7 @@ export function patchCases(model: AnalysisModel, project: ProjectFile, spec: Pat
   return ranges.map((range, k) => {
     const widths = new Float64Array(model.elementCount);
     for (const m of model.members) {
-      if (m.kind !== 'bar') continue;
+      if (m.kind === 'cable') continue;
       for (let e = m.firstElement; e < m.firstElement + m.elementCount; e++) {
         const z = 0.5 * (model.coords[3 * model.elemNodes[2 * e] + 2] + model.coords[3 * model.elemNodes[2 * e + 1] + 2]);
         if (z >= range.from && (z < range.to || (range.to === top && z <= top))) widths[e] = (spec.patchFactor - 1) * all[e];

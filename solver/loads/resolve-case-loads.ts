@@ -8,15 +8,24 @@ import type { AnalysisModel } from '../model/analysis-model.ts';
 import type { CaseLoads, FollowerLoad } from './case-loads.ts';
 import { createWindLoad } from './wind.ts';
 import { iceMassPerLength } from './ice.ts';
+import { prescribedDisplacements } from '../model/supports.ts';
 import { withAreaLoads } from './panel-loads.ts';
 
 export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spec: LoadCaseSpec): CaseLoads {
   const nodal = new Float64Array(3 * model.nodeCount);
+  let moments: Float64Array | null = null;
   const nodeIndex = new Map(model.nodeIds.map((id, i) => [id, i] as const));
   for (const load of spec.nodalLoads ?? []) {
     const i = nodeIndex.get(load.node);
     if (i === undefined) throw new Error(`load case "${spec.id}": node "${load.node}" does not exist`);
     for (let q = 0; q < 3; q++) nodal[3 * i + q] += load.force[q];
+    if (load.moment && load.moment.some((v) => v !== 0)) {
+      if (model.dofs.rotationOffset[i] < 0) {
+        throw new Error(`load case "${spec.id}": node "${load.node}" has no rotations (no beam or rotational support there) to take a moment`);
+      }
+      moments ??= new Float64Array(3 * model.nodeCount);
+      for (let q = 0; q < 3; q++) moments[3 * i + q] += load.moment[q];
+    }
   }
   return withAreaLoads(model, project, spec, {
     nodal,
@@ -25,6 +34,8 @@ export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spe
     extraMassPerLength: spec.ice ? iceMassPerLength(model, project, spec.ice) : null,
     temperatureChange: spec.temperatureChange ?? 0,
     follower: spec.wind ? createWindLoad(model, project, spec) : null,
+    moments,
+    prescribed: prescribedDisplacements(project, model.dofs, model.fixed, spec),
   });
 }
 
@@ -37,6 +48,8 @@ export function resolveCombinationLoads(
   model: AnalysisModel, project: ProjectFile, combination: CombinationSpec,
 ): CaseLoads {
   const nodal = new Float64Array(3 * model.nodeCount);
+  let moments: Float64Array | null = null;
+  const prescribed = new Map<number, number>();
   let gravityFactor = 0;
   let extra: Float64Array | null = null;
   let temperatureChange = 0;
@@ -46,6 +59,13 @@ export function resolveCombinationLoads(
     if (!spec) throw new Error(`combination "${combination.id}": load case "${caseId}" does not exist`);
     const loads = resolveCaseLoads(model, project, spec);
     for (let d = 0; d < nodal.length; d++) nodal[d] += factor * loads.nodal[d];
+    if (loads.moments) {
+      moments ??= new Float64Array(3 * model.nodeCount);
+      for (let d = 0; d < moments.length; d++) moments[d] += factor * loads.moments[d];
+    }
+    if (loads.prescribed) {
+      loads.prescribed.dofs.forEach((d, k) => prescribed.set(d, (prescribed.get(d) ?? 0) + factor * loads.prescribed!.values[k]));
+    }
     if (loads.selfWeight) gravityFactor += factor;
     if (loads.extraMassPerLength) {
       extra ??= new Float64Array(model.elementCount);
@@ -59,6 +79,7 @@ export function resolveCombinationLoads(
   };
   return {
     nodal, selfWeight: gravityFactor !== 0, gravityFactor: gravityFactor === 0 ? 1 : gravityFactor, extraMassPerLength: extra,
-    temperatureChange, follower,
+    temperatureChange, follower, moments,
+    prescribed: prescribed.size === 0 ? null : { dofs: Int32Array.from(prescribed.keys()), values: Float64Array.from(prescribed.values()) },
   };
 }

@@ -1,8 +1,14 @@
+import type { DofMap } from './dof-map.ts';
+import type { FamilyBlock } from '../elements/family.ts';
+import type { MemberKind } from '../project/types.ts';
+
 /**
  * The discretised model the analysis works on, built from a project by `buildModel`.
  *
  * Layout (structure of arrays, all typed):
- * - Node i has DOFs 3i, 3i+1, 3i+2 (x, y, z). The first `userNodeCount` nodes are the project's
+ * - DOFs follow `dofs` (dof-map.ts): node i's translations are 3i, 3i+1, 3i+2 (x, y, z); nodes
+ *   touched by a rotational element or restraint also carry rotations, numbered after all
+ *   translations. Position arrays stay 3 × nodeCount. The first `userNodeCount` nodes are the project's
  *   nodes in file order; the rest are interior nodes the solver made when splitting members.
  * - Element e joins nodes elemNodes[2e] → elemNodes[2e+1] (in the member's from → to order).
  * - Element law (Total Lagrangian, reference length Lr, Green–Lagrange strain):
@@ -17,8 +23,12 @@ export interface AnalysisModel {
   nodeIds: string[];
   /** Initial positions (3 × nodeCount), m: user nodes as modelled, interior nodes on the start shape. */
   coords: Float64Array;
-  /** 1 where the DOF is restrained (3 × nodeCount). */
+  /** DOF map (which nodes carry rotations, and where). */
+  dofs: DofMap;
+  /** 1 where the DOF is restrained (dofs.count entries). */
   fixed: Uint8Array;
+  /** Spring stiffness to ground per DOF (N/m, N·m/rad), or null when there are no springs. */
+  springs: Float64Array | null;
 
   elementCount: number;
   elemNodes: Int32Array;
@@ -45,6 +55,8 @@ export interface AnalysisModel {
   elemDiameter: Float64Array;
   /** Index of the member the element belongs to. */
   elemMember: Int32Array;
+  /** The element families present, each with its elements and data (see solver/elements/family.ts). */
+  familyBlocks: FamilyBlock[];
 
   members: MemberTopology[];
 }
@@ -53,7 +65,7 @@ export interface MemberTopology {
   id: string;
   /** Index in project.members. */
   index: number;
-  kind: 'cable' | 'bar';
+  kind: MemberKind;
   sectionIndex: number;
   firstElement: number;
   elementCount: number;

@@ -7,6 +7,9 @@ import type { MemberSpec, ProjectFile, SectionSpec } from '../project/types.ts';
 import type { AnalysisModel, MemberTopology } from './analysis-model.ts';
 import { sagStartShape } from './start-shape.ts';
 import { STANDARD_GRAVITY } from './constants.ts';
+import { buildDofMap } from './dof-map.ts';
+import { supportArrays, supportsTouchRotations } from './supports.ts';
+import { ELEMENT_FAMILIES } from '../elements/registry.ts';
 
 export function buildModel(project: ProjectFile): AnalysisModel {
   const nodeIndex = new Map<string, number>();
@@ -24,11 +27,7 @@ export function buildModel(project: ProjectFile): AnalysisModel {
   }
 
   const coords = new Float64Array(3 * nodeCount);
-  const fixed = new Uint8Array(3 * nodeCount);
-  project.nodes.forEach((node, i) => {
-    coords.set(node.at, 3 * i);
-    for (const letter of node.fixed ?? '') fixed[3 * i + 'xyz'.indexOf(letter)] = 1;
-  });
+  project.nodes.forEach((node, i) => coords.set(node.at, 3 * i));
 
   const elemNodes = new Int32Array(2 * elementCount);
   const elemRefLength = new Float64Array(elementCount);
@@ -61,7 +60,8 @@ export function buildModel(project: ProjectFile): AnalysisModel {
     chain[0] = a;
     chain[n] = b;
     for (let k = 1; k < n; k++) chain[k] = nextNode++;
-    placeInteriorNodes(coords, chain, xa, xb, m, section, refLength * n, s0);
+    // The start shape follows the stress-free length (for a pretension: the length that carries it).
+    placeInteriorNodes(coords, chain, xa, xb, m, section, n * stressFreeLength(refLength, s0, section.E), s0);
 
     const unstressed = stressFreeLength(refLength, s0, section.E);
     for (let k = 0; k < n; k++, e++) {
@@ -84,11 +84,44 @@ export function buildModel(project: ProjectFile): AnalysisModel {
     });
   });
 
-  return {
-    nodeCount, userNodeCount, nodeIds: project.nodes.map((n) => n.id), coords, fixed,
+  const model: AnalysisModel = {
+    nodeCount, userNodeCount, nodeIds: project.nodes.map((n) => n.id), coords,
+    dofs: buildDofMap(nodeCount, new Uint8Array(nodeCount)), fixed: new Uint8Array(3 * nodeCount), springs: null,
     elementCount, elemNodes, elemRefLength, elemS0, elemE, elemArea, elemAlpha, elemTensionOnly,
-    elemUnstressedLength, elemMassPerLength, elemDiameter, elemMember, members,
+    elemUnstressedLength, elemMassPerLength, elemDiameter, elemMember, members, familyBlocks: [],
   };
+  attachFamiliesAndDofs(project, model);
+  return model;
+}
+
+/**
+ * Group the elements by family (registry order), let each family prepare its data, then build the
+ * DOF map (rotations where a family or a support needs them), the support arrays and every
+ * block's element DOF lists.
+ */
+function attachFamiliesAndDofs(project: ProjectFile, model: AnalysisModel): void {
+  const kindOf = project.members.map((m) => m.kind as string);
+  for (const family of ELEMENT_FAMILIES) {
+    const kinds = family.kinds as readonly string[];
+    const list: number[] = [];
+    for (let e = 0; e < model.elementCount; e++) if (kinds.includes(kindOf[model.elemMember[e]])) list.push(e);
+    if (list.length === 0) continue;
+    const elements = Int32Array.from(list);
+    model.familyBlocks.push({ family, elements, data: family.prepare(project, model, elements), elementDofs: new Int32Array(0) });
+  }
+  const covered = model.familyBlocks.reduce((n, b) => n + b.elements.length, 0);
+  if (covered !== model.elementCount) {
+    const m = project.members.find((mm) => !ELEMENT_FAMILIES.some((f) => (f.kinds as readonly string[]).includes(mm.kind)));
+    throw new Error(`member "${m?.id}": no element family models kind "${m?.kind}"`);
+  }
+  const mark = new Uint8Array(model.nodeCount);
+  for (const block of model.familyBlocks) block.family.markRotations(model, block, mark);
+  project.nodes.forEach((node, i) => { if (supportsTouchRotations(node)) mark[i] = 1; });
+  model.dofs = buildDofMap(model.nodeCount, mark);
+  const { fixed, springs } = supportArrays(project, model.dofs);
+  model.fixed = fixed;
+  model.springs = springs;
+  for (const block of model.familyBlocks) block.elementDofs = block.family.elementDofs(model, block, model.dofs);
 }
 
 function segmentsOf(m: MemberSpec): number {
@@ -114,7 +147,7 @@ function placeInteriorNodes(
   if (n < 2) return;
   if (m.kind === 'cable' && s0 >= 0) {
     const shape = sagStartShape({
-      a: xa, b: xb, unstressedLength, pretension: s0 * section.area, n,
+      a: xa, b: xb, unstressedLength, n,
       weightPerLength: (section.massPerLength ?? 0) * STANDARD_GRAVITY, EA: section.E * section.area,
     });
     for (let k = 1; k < n; k++) coords.set(shape.subarray(3 * (k - 1), 3 * k), 3 * chain[k]);

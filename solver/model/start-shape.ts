@@ -1,31 +1,33 @@
 /**
- * Start shape of a cable member split into n elements: a parabola through its end points with a
- * vertical bow (the hanging shape of a shallow cable under its weight), so that a cable longer than
- * its chord — or one that must sag to carry its weight — starts near its equilibrium instead of on
- * the straight chord, where the Newton basin of a stiff, low-tension cable is tiny.
+ * Start shape of a cable member split into n elements, so that a cable longer than its chord — or
+ * one that must sag to carry its weight — starts near its equilibrium instead of on the straight
+ * chord, where the Newton basin of a stiff, low-tension cable is tiny.
  * Only the Newton start depends on this; the converged equilibrium does not.
  *
- * p(t) = A + t (B − A) + 4 d t (1 − t) ŝ,  t ∈ [0, 1], ŝ = −z (or a horizontal direction for a
- * vertical chord). The vertical sag d is chosen:
- *  - pretension P: d = w_⊥ l² / (8 P cos θ) (shallow parabola, Irvine, Cable Structures, 1981, ch. 1);
- *  - stress-free with L0 > chord and weight: not a parabola but the inextensible catenary of
- *    that length through the end points (Irvine 1981, ch. 1), lengthened by its mean tension / EA;
- *    without weight: the smallest sag at which every element is at least its reference length
- *    (no slack element at the start);
- *  - stress-free with L0 ≤ chord: from the shallow elastic cable equation (Irvine 1981, ch. 2)
+ * The shape follows from the member's stress-free length L0 alone (a pretension P at the chord l is
+ * first turned into the L0 that carries it, see stressFreeLength in build-model.ts), so the sag can
+ * never exceed what L0 allows — a tiny pretension does not give the unbounded sag w l² / (8 P):
+ *  - L0 > chord with weight: the inextensible catenary of that length through the end points
+ *    (Irvine, Cable Structures, 1981, ch. 1), lengthened by its mean tension / EA;
+ *    without weight: a parabola with the smallest sag at which every element is at least its
+ *    reference length (no slack element at the start);
+ *  - L0 ≤ chord: a parabola p(t) = A + t (B − A) + 4 d t (1 − t) ŝ, t ∈ [0, 1], ŝ = −z (or a
+ *    horizontal direction for a vertical chord), with the sag of the shallow elastic cable
+ *    (Irvine 1981, ch. 2)
  *      w_⊥² l³ / (24 H²) − H l / EA + (l − L0) = 0,   d = w_⊥ l² / (8 H cos θ)
- * with l the chord, θ its inclination and w_⊥ = w cos θ the weight per length across the chord.
- * Nodes are placed at equal arc length along the parabola.
+ *    with l the chord, θ its inclination and w_⊥ = w cos θ the weight per length across the chord.
+ * Nodes are placed at equal arc length.
  */
 
 export interface StartShapeInput {
   /** End points, m. */
   a: ArrayLike<number>;
   b: ArrayLike<number>;
-  /** Stress-free length of the whole member, m (used when pretension is 0). */
+  /**
+   * Stress-free length of the whole member, m (for a pretensioned cable: the length that carries
+   * its pretension at the modelled chord).
+   */
   unstressedLength: number;
-  /** Pretension at the modelled chord, N (0 when stress-free as modelled). */
-  pretension: number;
   /** Number of elements. */
   n: number;
   /** Weight per length, N/m. */
@@ -36,7 +38,7 @@ export interface StartShapeInput {
 
 /** Interior node positions (3 × (n − 1), m). */
 export function sagStartShape(input: StartShapeInput): Float64Array {
-  const { a, b, n, EA, unstressedLength, pretension } = input;
+  const { a, b, n, EA, unstressedLength } = input;
   const c = [b[0] - a[0], b[1] - a[1], b[2] - a[2]];
   const l = Math.hypot(c[0], c[1], c[2]);
   const cosTheta = Math.hypot(c[0], c[1]) / l;
@@ -46,13 +48,11 @@ export function sagStartShape(input: StartShapeInput): Float64Array {
   const bowFactor = vertical ? 1 : 1 / cosTheta; // vertical sag per perpendicular sag
   const curve = { a, c, s };
 
-  if (pretension <= 0 && unstressedLength > l * (1 + 1e-9) && !vertical && input.weightPerLength > 0) {
+  if (unstressedLength > l * (1 + 1e-9) && !vertical && input.weightPerLength > 0) {
     return catenaryStart(a, c, unstressedLength, n, input.weightPerLength, EA);
   }
   let d = 0;
-  if (pretension > 0) {
-    if (wPerp > 0) d = ((wPerp * l * l) / (8 * pretension)) * bowFactor;
-  } else if (unstressedLength > l * (1 + 1e-12)) {
+  if (unstressedLength > l * (1 + 1e-12)) {
     let strain = 1e-6;
     for (let pass = 0; pass < 4; pass++) {
       d = sagForShortestChord(curve, (unstressedLength / n) * (1 + strain), n);

@@ -12,11 +12,14 @@
  * runtime dependencies). Keep both in step.
  */
 
+import type { ReportSpec, SiteMeasurementSetSpec, TensioningSequenceSpec } from './site-types.ts';
+import type { BeamReleases, NodeSprings, PrescribedDisplacement, NodalMoment } from './structure-types.ts';
 import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec, WindBasisSpec, WindDirectionsSpec } from './actions-types.ts';
 
 export type * from './actions-types.ts';
 
 export type Vec3 = [number, number, number];
+export type * from './structure-types.ts';
 
 export interface ProjectFile {
   format: 'stayset-project';
@@ -40,6 +43,12 @@ export interface ProjectFile {
   generators?: GeneratorRecord[];
   /** Display preferences; never affect results. */
   display?: DisplaySettings;
+  /** Tensioning sequences for the crew (solver/sequence). */
+  sequences?: TensioningSequenceSpec[];
+  /** Measurements taken on site, for the as-built back-analysis (solver/asbuilt). */
+  siteMeasurements?: SiteMeasurementSetSpec[];
+  /** Calculation report: document number and revision block. */
+  report?: ReportSpec;
   /** Panels carrying area loads (solver/project/actions-types.ts). */
   panels?: PanelSpec[];
   /** Patch wind on guyed masts: a combination of results (actions-types.ts). */
@@ -64,8 +73,13 @@ export interface NodeSpec {
   id: string;
   /** Position [x, y, z], m. */
   at: Vec3;
-  /** Restrained translations: any of the letters x, y, z ("xyz" = pinned). Absent = free. */
+  /**
+   * Restrained directions: translations x, y, z and rotations rx, ry, rz (global axes), each at
+   * most once, written together: "xyz" = pinned, "xyzrxryrz" = clamped. Absent = free.
+   */
   fixed?: string;
+  /** Elastic supports (springs to ground), see NodeSprings. */
+  springs?: NodeSprings;
 }
 
 export interface SectionSpec {
@@ -99,18 +113,27 @@ export interface SectionSpec {
     share?: number;
   };
   label?: string;
+  /** Shear modulus, Pa (beams). */
+  G?: number;
+  /** Second moments of area about the local y and z axes, m⁴ (beams). */
+  Iy?: number;
+  Iz?: number;
+  /** Torsion constant, m⁴ (beams). */
+  J?: number;
+  /** Yield strength, Pa. */
+  yieldStrength?: number;
 }
 
-export type MemberKind = 'cable' | 'bar';
+/** cable: tension-only; bar: tension and compression; beam: beam-column (axial, bending, torsion). */
+export type MemberKind = 'cable' | 'bar' | 'beam';
 
 export interface MemberSpec {
   id: string;
-  /** cable: tension-only; bar: tension and compression. */
   kind: MemberKind;
   from: string;
   to: string;
   section: string;
-  /** Number of elements the solver splits the member into. Default 1. */
+  /** Number of elements the solver splits the member into, 1 to 10,000. Default 1. */
   segments?: number;
   /** Axial force at the modelled geometry, N (positive = tension). Exclusive with unstressedLength. */
   pretension?: number;
@@ -120,12 +143,18 @@ export interface MemberSpec {
   groups?: string[];
   /** Set by a generator: which generator record made this member. */
   generatedBy?: string;
+  /** Beams: reference vector fixing the local y axis (its part normal to the member); see solver/elements/beam. */
+  orientation?: Vec3;
+  /** Beams: end releases (pins). */
+  releases?: BeamReleases;
 }
 
 export interface NodalLoadSpec {
   node: string;
   /** Force [Fx, Fy, Fz], N. */
   force: Vec3;
+  /** Moment, N·m (nodes with rotations only). */
+  moment?: NodalMoment;
 }
 
 export interface WindSpec {
@@ -170,6 +199,8 @@ export interface LoadCaseSpec {
   nodalLoads?: NodalLoadSpec[];
   wind?: WindSpec;
   ice?: IceSpec;
+  /** Prescribed support displacements in this case. */
+  displacements?: PrescribedDisplacement[];
   /** Area loads on panels (actions-types.ts). */
   areaLoads?: AreaLoadSpec[];
 }

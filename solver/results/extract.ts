@@ -2,7 +2,8 @@
  * Solved state → the reported quantities (CaseResult fields) and raw fields.
  */
 import type { AnalysisModel } from '../model/analysis-model.ts';
-import type { MemberResult, NodeResult, ReactionResult } from './types.ts';
+import type { BeamEndActions, BeamMemberEnds, MemberResult, NodeResult, ReactionResult } from './types.ts';
+import { DIRECTION_NAMES } from '../model/supports.ts';
 import type { Vec3 } from '../project/types.ts';
 
 /** User-node positions and displacements. */
@@ -18,7 +19,7 @@ export function nodeResults(model: AnalysisModel, x: Float64Array): NodeResult[]
 
 /** Member tensions (N), slack flags and sag (m), see MemberResult. */
 export function memberResults(
-  model: AnalysisModel, x: Float64Array, tension: Float64Array, slack: Uint8Array,
+  model: AnalysisModel, x: Float64Array, tension: Float64Array, slack: Uint8Array, endForces?: Float64Array,
 ): MemberResult[] {
   return model.members.map((m) => {
     let tMax = -Infinity, tMin = Infinity, anySlack = false;
@@ -29,7 +30,7 @@ export function memberResults(
     }
     const chain = m.nodeChain;
     const a = 3 * chain[0], b = 3 * chain[chain.length - 1];
-    return {
+    const result: MemberResult = {
       id: m.id,
       tensionMax: tMax,
       tensionMin: tMin,
@@ -39,7 +40,18 @@ export function memberResults(
       sag: memberSag(x, chain),
       chordLength: Math.hypot(x[b] - x[a], x[b + 1] - x[a + 1], x[b + 2] - x[a + 2]),
     };
+    if (m.kind === 'beam' && endForces && endForces.length > 0) result.beam = beamEnds(endForces, m.firstElement, m.elementCount);
+    return result;
   });
+}
+
+function beamEnds(f: Float64Array, first: number, count: number): BeamMemberEnds {
+  const actions = (o: number): BeamEndActions => ({ fx: f[o], fy: f[o + 1], fz: f[o + 2], mx: f[o + 3], my: f[o + 4], mz: f[o + 5] });
+  let maxM = 0;
+  for (let e = first; e < first + count; e++) {
+    for (const o of [12 * e, 12 * e + 6]) maxM = Math.max(maxM, Math.hypot(f[o + 4], f[o + 5]));
+  }
+  return { start: actions(12 * first), end: actions(12 * (first + count - 1) + 6), maxBendingMoment: maxM };
 }
 
 /**
@@ -63,23 +75,41 @@ export function memberSag(x: Float64Array, chain: Int32Array): number {
   return sag;
 }
 
-/** Reaction r = f_int − f_ext at restrained DOFs of user nodes (force of the support on the structure, N). */
-export function reactionResults(model: AnalysisModel, fInt: Float64Array, fExt: Float64Array): ReactionResult[] {
+/**
+ * Support reactions of user nodes (force and moment the support exerts on the structure):
+ * r = f_int − f_ext at restrained DOFs, −k·u at springs (u the DOF's displacement or rotation).
+ * A node appears when any of its directions is restrained or sprung; `moment` where a rotation is.
+ */
+export function reactionResults(model: AnalysisModel, fInt: Float64Array, fExt: Float64Array, u?: Float64Array): ReactionResult[] {
   const out: ReactionResult[] = [];
+  const f = model.fixed, k = model.springs;
   for (let i = 0; i < model.userNodeCount; i++) {
-    const f = model.fixed;
-    if (!f[3 * i] && !f[3 * i + 1] && !f[3 * i + 2]) continue;
-    const r: Vec3 = [0, 0, 0];
-    for (let q = 0; q < 3; q++) if (f[3 * i + q]) r[q] = fInt[3 * i + q] - fExt[3 * i + q];
-    out.push({ node: model.nodeIds[i], force: r });
+    const r = [0, 0, 0, 0, 0, 0];
+    let any = false, anyRotation = false;
+    for (let dir = 0; dir < 6; dir++) {
+      const d = dir < 3 ? 3 * i + dir : model.dofs.rotationOffset[i] < 0 ? -1 : model.dofs.rotationOffset[i] + dir - 3;
+      if (d < 0) continue;
+      if (f[d]) r[dir] = fInt[d] - fExt[d];
+      else if (k && k[d] > 0) r[dir] = u ? -k[d] * u[d] : 0;
+      else continue;
+      any = true;
+      if (dir >= 3) anyRotation = true;
+    }
+    if (!any) continue;
+    const reaction: ReactionResult = { node: model.nodeIds[i], force: [r[0], r[1], r[2]] };
+    if (anyRotation) reaction.moment = [r[3], r[4], r[5]];
+    out.push(reaction);
   }
   return out;
 }
 
-/** Plain-language name of a DOF: `node "TOP" direction x` or `interior node 3 of member "G1" direction z`. */
+/**
+ * Plain-language name of a DOF: `node "TOP" direction x`, `interior node 3 of member "G1"
+ * direction z`, `node "B" direction rz` (rotation about z).
+ */
 export function describeDof(model: AnalysisModel, dof: number): string {
-  const node = Math.floor(dof / 3);
-  const dir = 'xyz'[dof % 3];
+  const node = model.dofs.dofNode[dof];
+  const dir = DIRECTION_NAMES[model.dofs.dofDirection[dof]];
   if (node < model.userNodeCount) return `node "${model.nodeIds[node]}" direction ${dir}`;
   for (const m of model.members) {
     const k = m.nodeChain.indexOf(node);

@@ -1,4 +1,6 @@
 import type { Vec3 } from '../project/types.ts';
+import type { BeamMemberEnds } from './structure-result-types.ts';
+export type * from './structure-result-types.ts';
 
 /** Why an analysis stopped. Only 'converged' results may be used for design. */
 export type AnalysisStatus =
@@ -34,12 +36,16 @@ export interface MemberResult {
   sag: number;
   /** Deformed chord length between the end nodes, m. */
   chordLength: number;
+  /** Beams: end actions and the largest bending moment. */
+  beam?: BeamMemberEnds;
 }
 
 export interface ReactionResult {
   node: string;
-  /** Force the support exerts on the structure, N. */
+  /** Force the support (restraint or spring) exerts on the structure, N. */
   force: Vec3;
+  /** Moment the support exerts on the structure, N·m (where rotations are restrained or sprung). */
+  moment?: Vec3;
 }
 
 export interface CaseStats {
@@ -77,10 +83,24 @@ export interface CaseFields {
   elementTension: Float64Array;
   /** 1 where the element is slack. */
   elementSlack: Uint8Array;
+  /** Beam end actions, 12 per element (empty without beams; see elements/beam/beam-results.ts). */
+  elementEndForces?: Float64Array;
 }
 
 export interface SolveReport {
   cases: CaseResult[];
+  /** Where the time of the whole solve went (set by solveProject). */
+  stats?: SolveTimes;
+}
+
+/** Wall time of one solveProject call, s. */
+export interface SolveTimes {
+  /** Model building plus the sparsity pattern, ordering and symbolic factorisation (once per topology). */
+  analysisSeconds: number;
+  /** Every case: Newton iterations and result extraction (the sum of the cases' stats.seconds). */
+  newtonSeconds: number;
+  /** All of the solve: analysis + Newton. */
+  seconds: number;
 }
 
 /** Everything `solveProject` returns: the JSON-able report plus raw fields per case. */

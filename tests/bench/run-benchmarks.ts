@@ -3,6 +3,7 @@
  *  1. Square pretensioned nets 20×20 … 100×100 cells: DOFs, Newton iterations, factorisation
  *     time, total time, peak memory (each size in its own process).
  *  2. One numeric factorisation of the 100×100 net's tangent against CHOLMOD on the same matrix.
+ *  0. Start-up of the `stayset` bin (bundle and sources) against `node -e 0`.
  *  3. Further suites registered below (design cases, live re-solve) when present.
  */
 import { execFileSync } from 'node:child_process';
@@ -46,6 +47,7 @@ async function optionalSuite(file: string, exportName: string): Promise<void> {
 }
 
 async function main(): Promise<void> {
+  (await import('./startup-bench.ts')).runStartupBenchmark();
   printNets(netRows([20, 40, 60, 80, 100]));
   const cholmod = await import('./cholmod-compare.ts');
   console.log('\nOne numeric factorisation of the 100×100 net tangent against CHOLMOD');

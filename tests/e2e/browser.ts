@@ -7,7 +7,9 @@ import os from 'node:os';
 import path from 'node:path';
 import { chromium, type BrowserContext } from 'playwright-core';
 
-export const CHROMIUM = process.env.STAYSET_CHROMIUM ?? '/usr/bin/chromium';
+import { CHROMIUM, requireBrowserTools } from './browser-tools.ts';
+
+export { CHROMIUM };
 
 export interface Browser {
   context: BrowserContext;
@@ -15,6 +17,7 @@ export interface Browser {
 }
 
 export async function launchBrowser(): Promise<Browser> {
+  requireBrowserTools(['chromium']);
   const profile = await mkdtemp(path.join(os.tmpdir(), 'stayset-e2e-profile-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: CHROMIUM,

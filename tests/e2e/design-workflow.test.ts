@@ -19,6 +19,7 @@ import { createLiveResolver, runChecks, solveProject } from '../../solver/index.
 import { runGenerator } from '../../main/common/generators/index.ts';
 import { startWebHost, type WebHost } from '../../main/web/web-server.ts';
 import { launchBrowser, type Browser } from './browser.ts';
+import { SKIP_BROWSER_TESTS } from './browser-tools.ts';
 import { buildRenderer, REPO, SCREENSHOTS } from './serve-app.ts';
 import { pixelStats } from './pixels.ts';
 import { CHECK_FAIL_COLOUR } from '../../renderer/view3d/colour-scale.ts';
@@ -76,7 +77,7 @@ async function membersCell(id: string, col: string) {
   return page.locator(`[data-testid="table-members"] tr[data-row-id="${id}"] td[data-col="${col}"]`);
 }
 
-describe('design, checks, tuning and generators in the browser edition', () => {
+describe.skipIf(SKIP_BROWSER_TESTS)('design, checks, tuning and generators in the browser edition', () => {
   it('runs the demo and shows the check summary: PASS, as runChecks in Node', async () => {
     await page.goto(host.url);
     await expect.poll(() => page.getByTestId('project-name').textContent(), { timeout: 20_000 }).toContain('demo-mast');

@@ -1,8 +1,7 @@
 /**
  * A 20,200-member cable net (invented, tests/renderer/net-fixture.ts) in the browser edition:
- * opens, draws, stays responsive to orbiting, and the tables stay windowed. Timings are printed
- * (SwiftShader software WebGL here, so they are an upper bound for a real GPU); the bounds only
- * catch order-of-magnitude regressions.
+ * opens, draws, redraws while orbiting, and the tables stay windowed. Behaviour only: how fast
+ * is a matter for `npm run bench`, not for a test.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdtemp, mkdir, rm, writeFile } from 'node:fs/promises';
@@ -11,6 +10,7 @@ import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { startWebHost, type WebHost } from '../../main/web/web-server.ts';
 import { launchBrowser, type Browser } from './browser.ts';
+import { SKIP_BROWSER_TESTS } from './browser-tools.ts';
 import { buildRenderer, SCREENSHOTS } from './serve-app.ts';
 import { pixelStats } from './pixels.ts';
 import { net } from '../renderer/net-fixture.ts';
@@ -39,20 +39,16 @@ afterAll(async () => {
   if (root) await rm(root, { recursive: true, force: true });
 });
 
-describe('20,000 members in the browser', () => {
+describe.skipIf(SKIP_BROWSER_TESTS)('20,000 members in the browser', () => {
   it('opens and draws the model, tables windowed', async () => {
-    const t0 = Date.now();
     await page.goto(host.url);
     await expect.poll(() => page.getByTestId('status-line').textContent(), { timeout: 60_000 }).toContain(`${project.members.length} members`);
     await page.waitForTimeout(200);
-    const openMs = Date.now() - t0;
     const rows = await page.locator('[data-testid="table-members"] tbody tr[data-row-id]').count();
     expect(rows).toBeLessThan(120);
     const png = await page.getByTestId('view3d-canvas').screenshot();
     const stats = await pixelStats(page, png, [0x1b, 0x23, 0x30], [], 0);
     expect(stats.nonBackground / stats.total).toBeGreaterThan(0.05);
-    console.log(`20k members: page open to drawn ${openMs} ms, ${rows} table rows in the DOM`);
-    expect(openMs).toBeLessThan(30_000);
     await page.screenshot({ path: path.join(SCREENSHOTS, '10-large-net.png') });
   });
 
@@ -61,7 +57,6 @@ describe('20,000 members in the browser', () => {
     const before = await page.getByTestId('view3d-canvas').screenshot();
     const cx = box.x + box.width / 2;
     const cy = box.y + box.height / 2;
-    const t0 = Date.now();
     await page.mouse.move(cx, cy);
     await page.mouse.down();
     for (let k = 1; k <= 20; k++) {
@@ -69,10 +64,7 @@ describe('20,000 members in the browser', () => {
       await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => r(null))));
     }
     await page.mouse.up();
-    const perStep = (Date.now() - t0) / 20;
     const after = await page.getByTestId('view3d-canvas').screenshot();
-    console.log(`20k members: ${perStep.toFixed(0)} ms per orbit step (SwiftShader, includes one frame each)`);
     expect(Buffer.compare(before, after)).not.toBe(0);
-    expect(perStep).toBeLessThan(2000);
   });
 });

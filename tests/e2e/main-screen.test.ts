@@ -13,6 +13,7 @@ import type { Page } from 'playwright-core';
 import type { MemberSpec, ProjectFile, SolveReport } from '../../solver/index.ts';
 import { solveProject } from '../../solver/index.ts';
 import { launchBrowser, type Browser } from './browser.ts';
+import { SKIP_BROWSER_TESTS } from './browser-tools.ts';
 import { buildRenderer, SCREENSHOTS, startApp, startBareHost, type AppRig } from './serve-app.ts';
 import { pixelStats } from './pixels.ts';
 import { TENSION_STOPS } from '../../renderer/view3d/colour-scale.ts';
@@ -67,7 +68,7 @@ async function typeInto(id: string, col: string, text: string): Promise<void> {
   await editor.press('Enter');
 }
 
-describe('main screen in the browser edition', () => {
+describe.skipIf(SKIP_BROWSER_TESTS)('main screen in the browser edition', () => {
   it('opens the demo project from the web host', async () => {
     expect(guy).toBeDefined();
     await page.goto(rig.host.url);

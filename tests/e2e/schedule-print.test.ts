@@ -17,15 +17,16 @@ import { build } from 'vite';
 import vue from '@vitejs/plugin-vue';
 import { createServer, type Server } from 'node:http';
 import type { ScheduleDocument } from '../../main/common/schedule/index.ts';
+import { CHROMIUM, SKIP_BROWSER_TESTS, requireBrowserTools } from './browser-tools.ts';
 
 const ARTIFACTS = resolve('test-artifacts/schedule');
-const CHROMIUM = '/usr/bin/chromium';
 let context: BrowserContext;
 let profile: string;
 let html: { a4: string; letter: string };
 let docA4: ScheduleDocument;
 
 beforeAll(async () => {
+  requireBrowserTools(['chromium', 'poppler']);
   const project = mastProject();
   project.tuning = {
     variables: [{ group: 'mast/guys level 1', by: 'pretension' }, { group: 'mast/guys level 2', by: 'pretension' }],
@@ -76,7 +77,7 @@ function inkShare(pgm: Buffer): number {
   return dark / (w * h);
 }
 
-describe.runIf(existsSync(CHROMIUM))('printed member tension schedule', () => {
+describe.skipIf(SKIP_BROWSER_TESTS)('printed member tension schedule', () => {
   for (const [paper, format, w, h] of [['a4', 'A4', 595.28, 841.89], ['letter', 'Letter', 612, 792]] as const) {
     it(`prints on ${format} with the caution, readable pages and repeating headers`, async () => {
       const page = await context.newPage();
@@ -139,7 +140,7 @@ if (location.hash === '#tuning') {
 }
 `;
 
-describe.runIf(existsSync(CHROMIUM))('the renderer schedule components', () => {
+describe.skipIf(SKIP_BROWSER_TESTS)('the renderer schedule components', () => {
   let server: Server;
   let base: string;
   const work = join(ARTIFACTS, 'vue-print-build');

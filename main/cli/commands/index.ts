@@ -5,6 +5,8 @@ import { checkCommand } from './check.ts';
 import { tuneCommand } from './tune.ts';
 import { scheduleCommand } from './schedule.ts';
 import { validateCommand } from './validate.ts';
+import { sequenceCommand } from './sequence.ts';
+import { asBuiltCommand } from './asbuilt.ts';
 import { windCommand } from './wind.ts';
 
-export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, windCommand];
+export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, sequenceCommand, asBuiltCommand, windCommand];

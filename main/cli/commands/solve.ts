@@ -14,14 +14,17 @@ import { replaceNonFinite } from '../format/finite-guard.ts';
 import { solveReportText } from '../format/solve-report-text.ts';
 import { jsonOutput } from '../format/json-output.ts';
 import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
+import { runTimes, runTimesLine, withStatsProperty } from '../format/run-times.ts';
 
 const HELP = `Solves every load case and combination of a project file (geometrically nonlinear,
 tension-only cables) and prints, per case: status, member forces, node displacements and
 support reactions.
 
 Options:
-  --json        Print {"cases": [...], "disclaimer": "..."} instead of tables. Numbers are SI
-                (N, m); tension is positive; reactions are forces the supports exert.
+  --json        Print {"cases": [...], "disclaimer": "...", "stats": {...}} instead of tables.
+                Numbers are SI (N, m); tension is positive; reactions are forces the supports
+                exert. stats: inputSeconds, analysisSeconds (model and symbolic analysis),
+                newtonSeconds, outputSeconds, seconds (all of the solve).
   --case ID     Solve only this load case or combination (repeat for several).
   --help        Show this help.
 
@@ -39,7 +42,9 @@ async function run(solver: ProjectSolver, args: string[], io: CliIO): Promise<nu
     throw new UsageError(opts.positionals.length === 0 ? 'solve needs a project FILE' : `solve takes one FILE (got ${opts.positionals.length})`);
   }
   const file = opts.positionals[0];
+  const t0 = performance.now();
   const read = readProjectOrReport(file, io);
+  const inputSeconds = (performance.now() - t0) / 1000;
   if (!read) return EXIT.badInput;
   const requested = opts.values.get('case') ?? [];
   const project = read.project;
@@ -56,9 +61,14 @@ async function run(solver: ProjectSolver, args: string[], io: CliIO): Promise<nu
     io.err(`${file}: the analysis failed: ${(e as Error).message}\n`);
     return EXIT.notConverged;
   }
+  const t1 = performance.now();
   const guarded = replaceNonFinite(report);
-  if (opts.flags.has('json')) io.out(jsonOutput({ cases: guarded.value.cases, disclaimer: RESULTS_DISCLAIMER }));
-  else io.out(solveReportText(project, guarded.value, RESULTS_DISCLAIMER));
+  const json = opts.flags.has('json');
+  const text = json ? jsonOutput({ cases: guarded.value.cases, disclaimer: RESULTS_DISCLAIMER }) : solveReportText(project, guarded.value, RESULTS_DISCLAIMER);
+  const times = runTimes(report, inputSeconds, (performance.now() - t1) / 1000);
+  // Tables: the time line goes before the closing caution, which stays the last line.
+  const tail = `${RESULTS_DISCLAIMER}\n`;
+  io.out(json ? withStatsProperty(text, times) : `${text.slice(0, text.length - tail.length)}${runTimesLine(times)}\n\n${tail}`);
 
   if (guarded.paths.length > 0) {
     const shown = guarded.paths.slice(0, 10).join(', ');

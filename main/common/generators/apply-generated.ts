@@ -1,51 +1,143 @@
-import type { GeneratorRecord, ProjectFile } from '../../../solver/index.ts';
+import type { GeneratorRecord, GroupSpec, MemberSpec, ProjectFile, Vec3 } from '../../../solver/index.ts';
 import type { GeneratedParts } from './types.ts';
+import { NodeFollower, nearestMember } from './follow-parts.ts';
+import { followCaseLoads, followChecks, followNode, followTuning, type FollowContext } from './follow-references.ts';
+import { dropGroupReferences } from './drop-group-references.ts';
+import { followPanels } from './follow-panels.ts';
+
+/**
+ * What to do with the user's parts that use generated parts a re-run no longer makes:
+ * 'reattach' to the nearest new part (a member end to the nearest node, a group entry to the
+ * nearest new member of the same kind), or 'drop' the reference (the user member is removed, a
+ * group entry is taken out).
+ */
+export type DanglingChoice = 'reattach' | 'drop';
+
+/** One user reference to a generated part the re-run no longer makes. */
+export interface DanglingReference {
+  /** The user's entry, e.g. `member "bracket"` or `group "mine"`. */
+  entry: string;
+  /** What it uses, e.g. `node "mast/P30a"`. */
+  uses: string;
+  /** The nearest new part it would be re-attached to, or null when there is none. */
+  reattachTo: string | null;
+}
 
 export interface ApplyOutcome {
   /** A new project (the input is not changed). */
   project: ProjectFile;
-  /** Plain notes about user edits that touched replaced parts, each naming the entry. */
+  /** Exactly what moved, was re-attached, dropped or kept, each naming the entry (SI: N, m). */
   notes: string[];
+  /** User references to parts the re-run no longer makes (the choice applied to them is `choice`). */
+  dangling: DanglingReference[];
 }
 
+/** x, y and z all restrained: a node that stands without any member. */
+const pinned = (fixed: string | undefined) => ['x', 'y', 'z'].every((d) => fixed?.includes(d));
 const ownedBy = (recordId: string, id: string) => id.startsWith(`${recordId}/`);
 
 /**
  * Put generated parts into a project, replacing what the same generator record made before:
  * members with generatedBy = record id; nodes, sections and groups whose id starts with
- * "<recordId>/". The user's other edits are kept. A replaced node or section that a user member,
- * nodal load or check still uses, and that the new run no longer makes, is kept (not lost) and
- * reported. User groups lose ids of generated members that no longer exist (reported). The
- * generator record is stored (replacing one with the same id).
+ * "<recordId>/". No old generated node is kept. References follow the new run:
+ * - loads, displacement/tilt/uplift checks and tuning targets on generated nodes follow by role,
+ *   place or pattern (follow-references.ts);
+ * - the user's members on generated nodes and the user's groups listing generated members are
+ *   re-attached or dropped per `choice` (a member on a node made again at the same place is
+ *   untouched); dropping a member also takes out user nodes left without any member;
+ * - references to generated groups the run no longer makes are dropped;
+ * - a generated section still used by a user member is kept.
+ * `oldKeyNodes` are the key nodes of the previous run of this record (for role matching).
  */
-export function applyGenerated(project: ProjectFile, record: GeneratorRecord, parts: GeneratedParts): ApplyOutcome {
+export function applyGenerated(project: ProjectFile, record: GeneratorRecord, parts: GeneratedParts, choice: DanglingChoice = 'reattach', oldKeyNodes: Record<string, string> | null = null): ApplyOutcome {
   const rid = record.id;
   const notes: string[] = [];
+  const dangling: DanglingReference[] = [];
   const newNodeIds = new Set(parts.nodes.map((n) => n.id));
-  const newSectionIds = new Set(parts.sections.map((s) => s.id));
   const newMemberIds = new Set(parts.members.map((m) => m.id));
-
-  const userMembers = project.members.filter((m) => m.generatedBy !== rid);
+  for (const n of project.nodes) {
+    if (!ownedBy(rid, n.id) && newNodeIds.has(n.id)) throw new Error(`nodes "${n.id}": a node you added has an id the generator "${rid}" makes; rename it first`);
+  }
+  let userMembers = project.members.filter((m) => m.generatedBy !== rid);
   for (const m of userMembers) {
     if (newMemberIds.has(m.id)) throw new Error(`members "${m.id}": a member you added has the id the generator "${rid}" makes; rename it first`);
   }
-  const usedNodes = new Map<string, string>();
-  userMembers.forEach((m) => { usedNodes.set(m.from, `member "${m.id}"`); usedNodes.set(m.to, `member "${m.id}"`); });
-  project.loadCases.forEach((c) => (c.nodalLoads ?? []).forEach((l) => usedNodes.set(l.node, `load case "${c.id}"`)));
-  const ch = project.checks;
-  (ch?.displacementLimits ?? []).forEach((l) => usedNodes.set(l.node, 'checks.displacementLimits'));
-  (ch?.tiltLimits ?? []).forEach((l) => { usedNodes.set(l.base, 'checks.tiltLimits'); usedNodes.set(l.top, 'checks.tiltLimits'); });
-  (ch?.upliftNodes ?? []).forEach((n) => usedNodes.set(n, 'checks.upliftNodes'));
-  (project.panels ?? []).filter((pa) => !ownedBy(rid, pa.id)).forEach((pa) => pa.nodes.forEach((n) => usedNodes.set(n, `panel "${pa.id}"`)));
-  const usedSections = new Map(userMembers.map((m) => [m.section, `member "${m.id}"`] as const));
+  const oldNodes = new Map(project.nodes.filter((n) => ownedBy(rid, n.id)).map((n) => [n.id, n] as const));
+  const follower = new NodeFollower(parts.nodes, oldKeyNodes, parts.keyNodes);
+  const ctx: FollowContext = { recordId: rid, oldNodes, newNodes: parts.nodes, follower, notes };
 
-  const keptNodes = project.nodes.filter((n) => {
-    if (!ownedBy(rid, n.id)) return true;
-    if (newNodeIds.has(n.id)) return false;
-    const user = usedNodes.get(n.id);
-    if (user) notes.push(`node "${n.id}" is no longer made by generator "${rid}" but ${user} uses it: kept where it was`);
-    return Boolean(user);
+  // The user's members on generated nodes. A re-attached member does not take the same two nodes
+  // as another member (two members on one pair of nodes would leave the far node a mechanism).
+  const droppedMembers = new Set<string>();
+  const pairs = new Set<string>();
+  const pairKey = (a: string, b: string) => (a < b ? `${a}\u0000${b}` : `${b}\u0000${a}`);
+  for (const m of [...parts.members, ...userMembers]) if (!oldNodes.has(m.from) && !oldNodes.has(m.to)) pairs.add(pairKey(m.from, m.to));
+  userMembers = userMembers.flatMap((m) => {
+    const ends = (['from', 'to'] as const).filter((k) => oldNodes.has(m[k]));
+    if (!ends.length) return [m];
+    const gone = ends.filter((k) => !newNodeIds.has(m[k]));
+    for (const k of gone) {
+      const to = follower.follow(oldNodes.get(m[k])!, 'any');
+      dangling.push({ entry: `member "${m.id}"`, uses: `node "${m[k]}"`, reattachTo: to ? `node "${to.id}" (${+to.distance.toFixed(3)} m away)` : null });
+    }
+    if (gone.length && choice === 'drop') {
+      droppedMembers.add(m.id);
+      notes.push(`member "${m.id}": dropped (it used ${gone.map((k) => `node "${m[k]}"`).join(' and ')}, which the new run does not make)`);
+      return [];
+    }
+    const next: MemberSpec = { ...m };
+    for (const k of ends) {
+      const other = k === 'from' ? next.to : next.from;
+      const avoid = new Set([other, ...parts.nodes.filter((n) => pairs.has(pairKey(n.id, other))).map((n) => n.id)]);
+      const id = followNode(ctx, `member "${m.id}" ${k}`, m[k], 'any', avoid);
+      if (id === null) { droppedMembers.add(m.id); return []; }
+      next[k] = id;
+    }
+    pairs.add(pairKey(next.from, next.to));
+    if (next.from === next.to) {
+      droppedMembers.add(m.id);
+      notes.push(`member "${m.id}": both ends would be node "${next.from}": dropped`);
+      return [];
+    }
+    return [next];
   });
+
+  // User nodes left without any member (after dropping members) would be mechanisms: take them out.
+  const used = new Set<string>();
+  for (const m of [...userMembers, ...parts.members]) { used.add(m.from); used.add(m.to); }
+  const lonely = new Set(droppedMembers.size ? project.nodes.filter((n) => !ownedBy(rid, n.id) && !used.has(n.id) && !pinned(n.fixed)
+    && project.members.some((m) => droppedMembers.has(m.id) && (m.from === n.id || m.to === n.id))).map((n) => n.id) : []);
+  lonely.forEach((id) => notes.push(`node "${id}": no member is left on it: removed (with its loads and checks)`));
+
+  // Groups: the generator's are replaced; the user's lose or re-attach generated members no longer made.
+  const oldAt = new Map<string, Vec3>(project.nodes.map((n) => [n.id, n.at]));
+  const newAt = new Map<string, Vec3>(parts.nodes.map((n) => [n.id, n.at]));
+  const oldGenerated = new Map(project.members.filter((m) => m.generatedBy === rid).map((m) => [m.id, m] as const));
+  const userMemberIds = new Set(userMembers.map((m) => m.id));
+  const gone = new Set<string>();
+  const keptGroups: GroupSpec[] = [];
+  for (const g of project.groups ?? []) {
+    if (ownedBy(rid, g.id)) continue;
+    const members: string[] = [];
+    for (const id of g.members) {
+      if (userMemberIds.has(id) || newMemberIds.has(id)) { members.push(id); continue; }
+      if (droppedMembers.has(id)) { notes.push(`group "${g.id}": member "${id}" was dropped: taken out`); continue; }
+      const old = oldGenerated.get(id);
+      const near = old ? nearestMember(old, oldAt, parts.members, newAt) : null;
+      if (old) dangling.push({ entry: `group "${g.id}"`, uses: `member "${id}"`, reattachTo: near ? `member "${near.id}"` : null });
+      if (choice === 'reattach' && near) {
+        if (!members.includes(near.id)) members.push(near.id);
+        notes.push(`group "${g.id}": member "${id}" → "${near.id}" (nearest new ${near.kind})`);
+      } else notes.push(`group "${g.id}": member "${id}" no longer exists: taken out`);
+    }
+    if (members.length) keptGroups.push(members.length === g.members.length && members.every((m, i) => m === g.members[i]) ? g : { ...g, members });
+    else { gone.add(g.id); notes.push(`group "${g.id}": no member left: removed`); }
+  }
+  const newGroupIds = new Set(parts.groups.map((g) => g.id));
+  for (const g of project.groups ?? []) if (ownedBy(rid, g.id) && !newGroupIds.has(g.id)) gone.add(g.id);
+
+  const newSectionIds = new Set(parts.sections.map((s) => s.id));
+  const usedSections = new Map(userMembers.map((m) => [m.section, `member "${m.id}"`] as const));
   const keptSections = project.sections.filter((s) => {
     if (!ownedBy(rid, s.id)) return true;
     if (newSectionIds.has(s.id)) return false;
@@ -53,26 +145,33 @@ export function applyGenerated(project: ProjectFile, record: GeneratorRecord, pa
     if (user) notes.push(`section "${s.id}" is no longer made by generator "${rid}" but ${user} uses it: kept`);
     return Boolean(user);
   });
-  for (const n of project.nodes) {
-    if (!ownedBy(rid, n.id) && newNodeIds.has(n.id)) throw new Error(`nodes "${n.id}": a node you added has an id the generator "${rid}" makes; rename it first`);
-  }
-  const allMemberIds = new Set([...userMembers.map((m) => m.id), ...newMemberIds]);
-  const keptGroups = (project.groups ?? []).filter((g) => !ownedBy(rid, g.id)).map((g) => {
-    const lost = g.members.filter((m) => !allMemberIds.has(m));
-    if (lost.length) notes.push(`group "${g.id}": ${lost.length} generated member(s) no longer exist and were taken out (e.g. "${lost[0]}")`);
-    return lost.length ? { ...g, members: g.members.filter((m) => allMemberIds.has(m)) } : g;
-  });
 
-  const generators = [...(project.generators ?? []).filter((r) => r.id !== rid), structuredClone(record)];
-  const out: ProjectFile = {
+  const dropLonely = (l: { node: string }) => !lonely.has(l.node);
+  let out: ProjectFile = {
     ...project,
-    nodes: [...keptNodes, ...parts.nodes],
+    nodes: [...project.nodes.filter((n) => !ownedBy(rid, n.id) && !lonely.has(n.id)), ...parts.nodes],
     sections: [...keptSections, ...parts.sections],
     members: [...userMembers, ...parts.members],
     groups: [...keptGroups, ...parts.groups],
-    generators,
+    loadCases: project.loadCases.map((c) => {
+      const loads = followCaseLoads(ctx, c)?.filter(dropLonely);
+      return loads === c.nodalLoads || (loads && c.nodalLoads && loads.length === c.nodalLoads.length && loads.every((l, i) => l === c.nodalLoads![i])) ? c : { ...c, nodalLoads: loads };
+    }),
+    generators: [...(project.generators ?? []).filter((r) => r.id !== rid), structuredClone(record)],
   };
-  const panels = [...(project.panels ?? []).filter((pa) => !ownedBy(rid, pa.id)), ...(parts.panels ?? [])];
-  if (panels.length > 0 || project.panels) out.panels = panels;
-  return { project: out, notes };
+  const checks = followChecks(ctx, project.checks);
+  if (checks) {
+    out.checks = {
+      ...checks,
+      ...(checks.displacementLimits ? { displacementLimits: checks.displacementLimits.filter(dropLonely) } : {}),
+      ...(checks.upliftNodes ? { upliftNodes: checks.upliftNodes.filter((n) => !lonely.has(n)) } : {}),
+    };
+  }
+  const tuning = followTuning(ctx, project.tuning);
+  if (tuning) out.tuning = tuning;
+  out = dropGroupReferences(out, gone, notes);
+  if (!out.groups?.length) delete out.groups;
+  const panels = followPanels(project, rid, parts, notes);
+  if (panels) out.panels = panels;
+  return { project: out, notes, dangling };
 }

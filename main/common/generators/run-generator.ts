@@ -1,5 +1,5 @@
 import type { GeneratorRecord, ProjectFile } from '../../../solver/index.ts';
-import type { ApplyOutcome } from './apply-generated.ts';
+import type { ApplyOutcome, DanglingChoice } from './apply-generated.ts';
 import { applyGenerated } from './apply-generated.ts';
 import type { GuyedMastParams } from './guyed-mast.ts';
 import { generateGuyedMast } from './guyed-mast.ts';
@@ -18,7 +18,23 @@ export function partsOf(record: GeneratorRecord): GeneratedParts {
   }
 }
 
-/** Run (or re-run) a generator record on a project: its old parts are replaced, other edits kept. */
-export function runGenerator(project: ProjectFile, record: GeneratorRecord): ApplyOutcome {
-  return applyGenerated(project, record, partsOf(record));
+/** Key nodes (roles) of the record's previous run in `project`, or null when there is none or it no longer runs. */
+function previousKeyNodes(project: ProjectFile, id: string): Record<string, string> | null {
+  const old = project.generators?.find((g) => g.id === id);
+  if (!old) return null;
+  try {
+    return partsOf(old).keyNodes;
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * Run (or re-run) a generator record on a project: its old parts are replaced, other edits kept;
+ * loads and checks on its nodes follow the new geometry; the user's parts that used parts it no
+ * longer makes are re-attached or dropped per `choice` (see applyGenerated). The outcome lists
+ * them (`dangling`) so a caller can ask first and run again with the answer.
+ */
+export function runGenerator(project: ProjectFile, record: GeneratorRecord, choice: DanglingChoice = 'reattach'): ApplyOutcome {
+  return applyGenerated(project, record, partsOf(record), choice, previousKeyNodes(project, record.id));
 }

@@ -4,6 +4,7 @@
  * Built by buildSchedule (build-schedule.ts) from project + solution + checks + installation data.
  */
 import type { ScheduleUnits } from './schedule-units.ts';
+import type { MemberKind } from '../../../solver/index.ts';
 
 export const SCHEDULE_CAUTION = 'Results are for review by a qualified engineer; local codes and licensed practice govern.';
 
@@ -34,7 +35,7 @@ export interface ScheduleMemberRow {
   /** Group ids the member belongs to, comma-joined for display. */
   groups: string[];
   section: string;
-  kind: 'cable' | 'bar';
+  kind: MemberKind;
   /** Unstressed (cut) length, m; null when installation data is missing. */
   cutLength: number | null;
   /** Tension at the lower end in the reference state at T_ref, N. */

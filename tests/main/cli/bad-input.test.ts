@@ -15,7 +15,7 @@ describe('stayset solve on bad files', () => {
   it.each([
     ['bad-missing-node.stayset.json', 'members[2] "G2": node "TOP2" does not exist'],
     ['bad-duplicate-id.stayset.json', 'members[3] "G1": id "G1" is already used by members[1]'],
-    ['bad-fixed-letters.stayset.json', 'nodes[2] "AN1": "fixed" must be made of the letters x, y, z, each at most once (got "xxz")'],
+    ['bad-fixed-letters.stayset.json', 'nodes[2] "AN1": "fixed" must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once (got "xxz")'],
     ['bad-both-lengths.stayset.json', 'members[1] "G1": give either "pretension" or "unstressedLength", not both'],
     ['bad-typo-property.stayset.json', 'members[1] "G1": unknown property "pretention" (did you mean "pretension"?)'],
     ['bad-newer-version.stayset.json', 'this file was written by a newer Stayset (format version 3); this version reads up to 1'],

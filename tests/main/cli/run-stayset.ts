@@ -1,9 +1,12 @@
-/** Runs the real `stayset` bin as a child process (as a user or a script would). */
+/**
+ * Runs the real `stayset` bin, the bundle dist/cli/stayset.mjs (built by `npm ci` and by the
+ * vitest globalSetup), as a child process (as a user or a script would).
+ */
 import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 
 export const REPO_ROOT = fileURLToPath(new URL('../../../', import.meta.url));
-export const BIN = fileURLToPath(new URL('../../../main/cli/stayset.mjs', import.meta.url));
+export const BIN = fileURLToPath(new URL('../../../dist/cli/stayset.mjs', import.meta.url));
 export const FIXTURES = 'tests/fixtures/projects';
 
 export interface RunResult {

@@ -83,7 +83,12 @@ describe('stayset solve --json', () => {
     const r = runStayset(['solve', fixture('kestrel-moor-mast.stayset.json'), '--json']);
     expect(r.stdout).not.toMatch(/NaN|Infinity/);
     const out = JSON.parse(r.stdout) as Record<string, unknown>;
-    expect(Object.keys(out).sort()).toEqual(['cases', 'disclaimer']);
+    expect(Object.keys(out).sort()).toEqual(['cases', 'disclaimer', 'stats']);
+    // Where the time went: the solve (seconds) is its analysis plus its Newton part.
+    const t = out.stats as Record<string, number>;
+    expect(Object.keys(t).sort()).toEqual(['analysisSeconds', 'inputSeconds', 'newtonSeconds', 'outputSeconds', 'seconds']);
+    for (const v of Object.values(t)) expect(v).toBeGreaterThanOrEqual(0);
+    expect(t.seconds).toBeCloseTo(t.analysisSeconds + t.newtonSeconds, 6);
     const c = (out.cases as Record<string, unknown>[])[0];
     expect(Object.keys(c).sort()).toEqual(
       ['converged', 'id', 'members', 'nodes', 'reactions', 'slackMembers', 'stats', 'status', ...('message' in c ? ['message'] : [])].sort(),

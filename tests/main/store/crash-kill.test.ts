@@ -18,7 +18,6 @@ import { largeGrid } from './sample-project.ts';
 
 const writerSource = path.join(path.dirname(fileURLToPath(import.meta.url)), 'crash-writer.ts');
 const KILLS = 45;
-const TIME_BUDGET_MS = 60_000; // a cap for slow, shared machines; ~10–30 s is usual
 
 function runAndKill(writer: string, args: string[], delayMs: number): Promise<void> {
   return new Promise((resolve, reject) => {
@@ -50,10 +49,9 @@ describe('atomic save under SIGKILL', () => {
     const target = path.join(dir, 'grid.stayset');
     // A previous version exists from the start, so every save has something to back up.
     await writeFileAtomic(target, b);
-    const started = Date.now();
     let kills = 0;
     const seen = new Set<string>();
-    while (kills < KILLS && Date.now() - started < TIME_BUDGET_MS) {
+    while (kills < KILLS) {
       await runAndKill(writer, [target, fileA, fileB], Math.random() * 120);
       kills++;
       const text = readFileSync(target, 'utf8');
@@ -62,7 +60,6 @@ describe('atomic save under SIGKILL', () => {
       const backup = readFileSync(target + '.bak', 'utf8');
       expect(backup === a || backup === b, `kill ${kills}: backup incomplete`).toBe(true);
     }
-    expect(kills).toBeGreaterThanOrEqual(40);
     expect(seen.size).toBe(2); // kills landed at different points of the loop
     // Leftover temp files of killed writers are removed by the next save.
     await writeFileAtomic(target, a, { backup: true });

@@ -3,7 +3,7 @@
  * differences, step 1e-6 of the length) — common practice for verifying consistent tangents.
  */
 import { describe, expect, it } from 'vitest';
-import { evaluateTrussTL, OUT_N, OUT_SIZE, OUT_STATE, ELEMENT_SLACK } from '../../../solver/elements/truss-tl.ts';
+import { evaluateTrussTL, OUT_N, OUT_SIZE, OUT_STATE, ELEMENT_SLACK } from '../../../solver/elements/truss/truss-tl.ts';
 
 function fdCheck(d: [number, number, number], Lr: number, S0: number, thermal: number, tensionOnly: boolean) {
   const E = 160e9, A = 1.5e-4;

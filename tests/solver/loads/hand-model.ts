@@ -1,5 +1,6 @@
 import type { AnalysisModel } from '../../../solver/index.ts';
 import type { ProjectFile, Vec3 } from '../../../solver/index.ts';
+import { buildDofMap } from '../../../solver/model/dof-map.ts';
 
 /**
  * A hand-built AnalysisModel of one-element members (no interior nodes) from a small project,
@@ -17,6 +18,7 @@ export function handModel(project: ProjectFile): AnalysisModel {
   const ne = project.members.length;
   const m: AnalysisModel = {
     nodeCount: n, userNodeCount: n, nodeIds: project.nodes.map((nd) => nd.id), coords, fixed,
+    dofs: buildDofMap(n, new Uint8Array(n)), springs: null, familyBlocks: [],
     elementCount: ne, elemNodes: new Int32Array(2 * ne), elemRefLength: new Float64Array(ne),
     elemS0: new Float64Array(ne), elemE: new Float64Array(ne), elemArea: new Float64Array(ne),
     elemAlpha: new Float64Array(ne), elemTensionOnly: new Uint8Array(ne),

@@ -47,10 +47,11 @@ function knownIds(root: unknown): Known {
 export function referenceErrors(root: unknown): string[] {
   const known = knownIds(root);
   const errors: string[] = [];
-  const need = (where: string, kind: keyof Known, id: string | undefined, prefix = ''): void => {
+  // `where` may be a function: the entry label is then built only for an error (cheap on large files).
+  const need = (where: string | (() => string), kind: keyof Known, id: string | undefined, prefix = ''): void => {
     if (id !== undefined && !known[kind].has(id)) {
       const why = kind === 'case' ? ' (no load case or combination has this id)' : '';
-      errors.push(`${where}: ${prefix}${WORD[kind]} ${JSON.stringify(id)} does not exist${why}`);
+      errors.push(`${typeof where === 'string' ? where : where()}: ${prefix}${WORD[kind]} ${JSON.stringify(id)} does not exist${why}`);
     }
   };
   const needAll = (where: string, kind: keyof Known, owner: Rec, key: string, prefix = ''): void => {
@@ -58,7 +59,7 @@ export function referenceErrors(root: unknown): string[] {
   };
 
   for (const { index, entry } of entries(root, 'members')) {
-    const at = entryLabel(root, 'members', index);
+    const at = (): string => entryLabel(root, 'members', index);
     need(at, 'node', str(entry, 'from'));
     need(at, 'node', str(entry, 'to'));
     need(at, 'section', str(entry, 'section'));

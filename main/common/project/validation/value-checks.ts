@@ -39,20 +39,20 @@ function memberErrors(root: unknown): string[] {
   const errors: string[] = [];
   const at = positions(root);
   for (const { index, entry } of entries(root, 'members')) {
-    const label = entryLabel(root, 'members', index);
+    const label = (): string => entryLabel(root, 'members', index); // built only for an error
     const from = str(entry, 'from');
     const to = str(entry, 'to');
     const L0 = num(entry, 'unstressedLength');
-    if (L0 !== undefined && L0 <= 0) errors.push(`${label}: unstressedLength must be positive (got ${L0} m)`);
+    if (L0 !== undefined && L0 <= 0) errors.push(`${label()}: unstressedLength must be positive (got ${L0} m)`);
     if (from === undefined || to === undefined) continue;
     if (from === to) {
-      errors.push(`${label}: "from" and "to" are the same node ${JSON.stringify(from)}`);
+      errors.push(`${label()}: "from" and "to" are the same node ${JSON.stringify(from)}`);
       continue;
     }
     const a = at.get(from);
     const b = at.get(to);
     if (a && b && Math.hypot(b[0] - a[0], b[1] - a[1], b[2] - a[2]) < MIN_MEMBER_LENGTH) {
-      errors.push(`${label}: zero length: nodes ${JSON.stringify(from)} and ${JSON.stringify(to)} are at the same position`);
+      errors.push(`${label()}: zero length: nodes ${JSON.stringify(from)} and ${JSON.stringify(to)} are at the same position`);
     }
   }
   return errors;

@@ -104,9 +104,10 @@ describe('re-running a generator', () => {
     expect(p.generators).toHaveLength(1);
     expect(p.members.filter((m) => m.generatedBy === 'mast').length).toBeLessThan(first.members.length);
     expect(p.members.some((m) => m.id === 'bracket') && p.nodes.some((n) => n.id === 'dish')).toBe(true);
-    // mast/P30a is no longer generated (top now at 28 m) but "bracket" uses it: kept and reported
-    expect(p.nodes.some((n) => n.id === 'mast/P30a')).toBe(true);
-    expect(again.notes.join('\n')).toMatch(/node "mast\/P30a".*member "bracket"/);
+    // mast/P30a is no longer generated (top now at 28 m): "bracket" is re-attached to the new top, no old node is kept
+    expect(p.nodes.some((n) => n.id === 'mast/P30a')).toBe(false);
+    expect(p.members.find((m) => m.id === 'bracket')!.from).toBe('mast/P28a');
+    expect(again.notes.join('\n')).toMatch(/member "bracket" from: node "mast\/P30a" → "mast\/P28a"/);
     // a node still generated is simply the new one
     expect(p.nodes.filter((n) => n.id === 'mast/P14a')).toHaveLength(1);
     // unused old nodes are gone; no duplicate ids

@@ -53,7 +53,7 @@ describe('valid project files', () => {
   it.each(['xx', 'xyzx', 'a', 'X', 'x y', 'xyzz'])('fixed "%s" is rejected', (fixed) => {
     const r = validateProject(withFixed(fixed));
     expect(r.ok ? [] : r.errors).toEqual([
-      `nodes[0] "A": "fixed" must be made of the letters x, y, z, each at most once (got ${JSON.stringify(fixed)})`,
+      `nodes[0] "A": "fixed" must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once (got ${JSON.stringify(fixed)})`,
     ]);
   });
 

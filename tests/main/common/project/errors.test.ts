@@ -62,7 +62,7 @@ describe('schema errors in Stayset words', () => {
     delete doc.members[0].section;
     expect(errorsOf(doc)).toEqual([
       'members[0] "G1": "section" is required',
-      'members[0] "G1": "kind" must be one of cable, bar (got "rope")',
+      'members[0] "G1": "kind" must be one of cable, bar, beam (got "rope")',
       'members[0] "G1": "segments" must be a whole number of at least 1 (got 2.5)',
     ]);
     doc.members[0].section = 'strand';

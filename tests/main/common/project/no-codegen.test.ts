@@ -27,7 +27,7 @@ describe('validation without eval', () => {
     expect(JSON.parse(r.stdout)).toEqual({
       blocked: true,
       good: true,
-      bad: ['nodes[2] "AN1": "fixed" must be made of the letters x, y, z, each at most once (got "xxz")'],
+      bad: ['nodes[2] "AN1": "fixed" must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once (got "xxz")'],
     });
   });
 });

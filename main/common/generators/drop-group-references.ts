@@ -1,0 +1,50 @@
+import type { ProjectFile, TuningTarget } from '../../../solver/index.ts';
+
+/**
+ * Remove every reference to the groups in `gone` (group ids that no longer exist): check settings
+ * (no-slack groups, sag limits), tuning variables and group targets, wind and ice groups of load
+ * cases, members' own `groups`. Each removal is described in `notes`. Returns a new project.
+ */
+export function dropGroupReferences(p: ProjectFile, gone: ReadonlySet<string>, notes: string[]): ProjectFile {
+  if (gone.size === 0) return p;
+  const out: ProjectFile = { ...p };
+  const say = (entry: string, g: string) => notes.push(`${entry}: group "${g}" no longer exists: reference dropped`);
+  if (p.checks) {
+    const ch = { ...p.checks };
+    if (ch.noSlackGroups) ch.noSlackGroups = ch.noSlackGroups.filter((g) => (gone.has(g) ? (say('checks.noSlackGroups', g), false) : true));
+    if (ch.sagLimits) ch.sagLimits = ch.sagLimits.filter((s, i) => (gone.has(s.group) ? (say(`checks.sagLimits[${i}]`, s.group), false) : true));
+    out.checks = ch;
+  }
+  if (p.tuning) {
+    const variables = p.tuning.variables.filter((v, i) => (gone.has(v.group) ? (say(`tuning.variables[${i}]`, v.group), false) : true));
+    const targets = p.tuning.targets.filter((t: TuningTarget, i) => ('group' in t && gone.has(t.group) ? (say(`tuning.targets[${i}]`, t.group), false) : true));
+    out.tuning = { ...p.tuning, variables, targets };
+  }
+  out.loadCases = p.loadCases.map((c) => {
+    let next = c;
+    for (const key of ['wind', 'ice'] as const) {
+      const spec = next[key];
+      if (!spec?.groups?.some((g) => gone.has(g))) continue;
+      spec.groups.filter((g) => gone.has(g)).forEach((g) => say(`load case "${c.id}" ${key}`, g));
+      const groups = spec.groups.filter((g) => !gone.has(g));
+      const copy = { ...spec } as typeof spec;
+      if (groups.length) copy.groups = groups;
+      else {
+        delete copy.groups;
+        notes.push(`load case "${c.id}" ${key}: no group left, so it now applies to every member`);
+      }
+      next = { ...next, [key]: copy };
+    }
+    return next;
+  });
+  out.members = p.members.map((m) => {
+    if (!m.groups?.some((g) => gone.has(g))) return m;
+    const groups = m.groups.filter((g) => !gone.has(g));
+    const copy = { ...m };
+    if (groups.length) copy.groups = groups;
+    else delete copy.groups;
+    say(`members "${m.id}" groups`, m.groups.find((g) => gone.has(g))!);
+    return copy;
+  });
+  return out;
+}

@@ -1,0 +1,162 @@
+/**
+ * Size of the analysis model a project makes, estimated before anything is built, and the budget
+ * it is checked against. Pure and cheap: O(members + nodes) plus an ordering of the graph of the
+ * user's nodes only (each member condensed to one edge), never of the split model.
+ *
+ * Estimate (3 DOFs per node, every DOF kept, see DEVELOPERS.md "Linear algebra"):
+ * - nodes = user nodes + Σ (segments − 1); elements = Σ segments; DOFs = 3 · nodes.
+ * - factor L in 3×3 node blocks: the interior nodes of a member chain have degree 2 and are
+ *   eliminated first by minimum degree, each leaving 2 off-diagonal blocks in L (its chain
+ *   neighbour and the far end node), and the edge between the member's end nodes as fill; the
+ *   remaining graph of user nodes is ordered by the solver's own AMD and its column counts taken
+ *   (Davis, Direct Methods for Sparse Linear Systems, SIAM 2006, ch. 4). Scalar nnz(L) including
+ *   the diagonal = 9 · off-diagonal blocks + 6 · nodes (lower triangle of each diagonal block).
+ * - memory (bytes): per node, per element and per factor entry, with the coefficients below
+ *   (typed arrays of the model, pattern, workspace and per-case results; JS object overhead of the
+ *   project itself is not counted).
+ */
+import type { ProjectFile } from '../project/types.ts';
+import { approximateMinimumDegree } from '../linalg/amd.ts';
+import { columnCounts, eliminationTreeOfPermuted } from '../linalg/elimination-tree.ts';
+
+export interface ModelBudget {
+  /** Largest number of degrees of freedom solved. */
+  maxDofs: number;
+  /** Largest predicted nnz of the LDLᵀ factor (scalar entries, diagonal included). */
+  maxFactorNonzeros: number;
+  /** Largest predicted memory of the solve, bytes. */
+  maxBytes: number;
+}
+
+/**
+ * Defaults (common practice for this program, not a standard): 300,000 DOFs is about 100 times
+ * the demo mast at its usual division; the factor and memory limits keep a solve well inside
+ * 2 GB of address space for the worker that runs it.
+ */
+export const DEFAULT_MODEL_BUDGET: Readonly<ModelBudget> = Object.freeze({
+  maxDofs: 300_000,
+  maxFactorNonzeros: 40_000_000,
+  maxBytes: 1_500_000_000,
+});
+
+/** Bytes per node: coordinates, restraints, ~10 Newton vectors, ordering arrays. */
+export const BYTES_PER_NODE = 400;
+/** Bytes per element: 11 property arrays, 21 pattern slots (value + index + map). */
+export const BYTES_PER_ELEMENT = 450;
+/** Bytes per factor entry: value (8) and row index (4). */
+export const BYTES_PER_FACTOR_ENTRY = 12;
+/** Bytes per node and per element and case of kept results (positions; tension + slack flag). */
+export const RESULT_BYTES_PER_NODE_CASE = 24;
+export const RESULT_BYTES_PER_ELEMENT_CASE = 9;
+
+export interface SizeDriver {
+  /** Index into project.members. */
+  member: number;
+  id: string;
+  segments: number;
+  /** DOFs this member adds (3 per interior node). */
+  dofs: number;
+}
+
+export interface ModelSizeEstimate {
+  nodes: number;
+  elements: number;
+  dofs: number;
+  factorNonzeros: number;
+  bytes: number;
+  /** Load cases plus combinations (each keeps its result arrays). */
+  cases: number;
+  /** Members adding the most DOFs, largest first (at most 3; none when no member is split). */
+  drivers: SizeDriver[];
+}
+
+export type BudgetItem = 'dofs' | 'factorNonzeros' | 'bytes';
+
+export type BudgetVerdict =
+  | { ok: true; estimate: ModelSizeEstimate }
+  | { ok: false; estimate: ModelSizeEstimate; budget: ModelBudget; exceeded: BudgetItem[] };
+
+function segmentCount(s: number | undefined): number {
+  return Number.isFinite(s) ? Math.max(1, Math.floor(s as number)) : 1;
+}
+
+/** Off-diagonal node blocks of L for the graph of user nodes with one edge per connected pair. */
+function userGraphFactorBlocks(project: ProjectFile): number {
+  const n = project.nodes.length;
+  const index = new Map<string, number>();
+  project.nodes.forEach((node, i) => index.set(node.id, i));
+  const edges = new Set<number>();
+  const pairs: number[] = [];
+  for (const m of project.members) {
+    const a = index.get(m.from), b = index.get(m.to);
+    if (a === undefined || b === undefined || a === b) continue;
+    const key = Math.min(a, b) * n + Math.max(a, b);
+    if (edges.has(key)) continue;
+    edges.add(key);
+    pairs.push(a, b);
+  }
+  const deg = new Int32Array(n);
+  for (const v of pairs) deg[v]++;
+  const ptr = new Int32Array(n + 1);
+  for (let i = 0; i < n; i++) ptr[i + 1] = ptr[i] + deg[i];
+  const next = ptr.slice(0, n);
+  const idx = new Int32Array(ptr[n]);
+  for (let k = 0; k < pairs.length; k += 2) {
+    idx[next[pairs[k]]++] = pairs[k + 1];
+    idx[next[pairs[k + 1]]++] = pairs[k];
+  }
+  const perm = approximateMinimumDegree(n, ptr, idx);
+  const pinv = new Int32Array(n);
+  for (let k = 0; k < n; k++) pinv[perm[k]] = k;
+  const parent = eliminationTreeOfPermuted(n, ptr, idx, perm, pinv);
+  // Upper triangle of the permuted graph, column k = rows pinv[u] < k, for the column counts.
+  const uptr = new Int32Array(n + 1);
+  const uidx: number[] = [];
+  for (let k = 0; k < n; k++) {
+    const v = perm[k];
+    for (let q = ptr[v]; q < ptr[v + 1]; q++) {
+      const i = pinv[idx[q]];
+      if (i < k) uidx.push(i);
+    }
+    uptr[k + 1] = uidx.length;
+  }
+  const counts = columnCounts(n, uptr, Int32Array.from(uidx), parent);
+  let blocks = 0;
+  for (let k = 0; k < n; k++) blocks += counts[k];
+  return blocks;
+}
+
+/** Estimate the size of the model `project` makes (see the module comment). */
+export function estimateModelSize(project: ProjectFile, budget: ModelBudget = DEFAULT_MODEL_BUDGET): ModelSizeEstimate {
+  let nodes = project.nodes.length;
+  let elements = 0;
+  let chainBlocks = 0;
+  const split: SizeDriver[] = [];
+  project.members.forEach((m, i) => {
+    const s = segmentCount(m.segments);
+    elements += s;
+    nodes += s - 1;
+    chainBlocks += 2 * (s - 1);
+    if (s > 1) split.push({ member: i, id: m.id, segments: s, dofs: 3 * (s - 1) });
+  });
+  split.sort((a, b) => b.dofs - a.dofs || a.member - b.member);
+  // The ordering of the user graph is skipped when the user nodes alone exceed the budget (the
+  // verdict is then decided by the DOFs; the factor figure is a lower bound).
+  const userBlocks = 3 * project.nodes.length <= budget.maxDofs ? userGraphFactorBlocks(project) : project.members.length;
+  const factorNonzeros = 9 * (chainBlocks + userBlocks) + 6 * nodes;
+  const cases = project.loadCases.length + (project.combinations?.length ?? 0);
+  const bytes = nodes * (BYTES_PER_NODE + RESULT_BYTES_PER_NODE_CASE * cases)
+    + elements * (BYTES_PER_ELEMENT + RESULT_BYTES_PER_ELEMENT_CASE * cases)
+    + BYTES_PER_FACTOR_ENTRY * factorNonzeros;
+  return { nodes, elements, dofs: 3 * nodes, factorNonzeros, bytes, cases, drivers: split.slice(0, 3) };
+}
+
+/** Check a project against a budget before building its model. */
+export function checkModelBudget(project: ProjectFile, budget: ModelBudget = DEFAULT_MODEL_BUDGET): BudgetVerdict {
+  const estimate = estimateModelSize(project, budget);
+  const exceeded: BudgetItem[] = [];
+  if (estimate.dofs > budget.maxDofs) exceeded.push('dofs');
+  if (estimate.factorNonzeros > budget.maxFactorNonzeros) exceeded.push('factorNonzeros');
+  if (estimate.bytes > budget.maxBytes) exceeded.push('bytes');
+  return exceeded.length === 0 ? { ok: true, estimate } : { ok: false, estimate, budget: { ...budget }, exceeded };
+}
