@@ -10,6 +10,7 @@ import { createWindLoad } from './wind.ts';
 import { iceMassPerLength } from './ice.ts';
 import { prescribedDisplacements } from '../model/supports.ts';
 import { withAreaLoads } from './panel-loads.ts';
+import { withAncillaryLoads } from './ancillary-loads.ts';
 
 export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spec: LoadCaseSpec): CaseLoads {
   const nodal = new Float64Array(3 * model.nodeCount);
@@ -27,7 +28,7 @@ export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spe
       for (let q = 0; q < 3; q++) moments[3 * i + q] += load.moment[q];
     }
   }
-  return withAreaLoads(model, project, spec, {
+  return withAncillaryLoads(model, project, spec, withAreaLoads(model, project, spec, {
     nodal,
     selfWeight: spec.selfWeight ?? true,
     gravityFactor: 1,
@@ -36,7 +37,7 @@ export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spe
     follower: spec.wind ? createWindLoad(model, project, spec) : null,
     moments,
     prescribed: prescribedDisplacements(project, model.dofs, model.fixed, spec),
-  });
+  }));
 }
 
 /**

@@ -123,3 +123,26 @@ export interface WindDirectionsSpec {
   /** First direction, degrees (same convention as WindSpec.direction); default 0. */
   azimuth?: number;
 }
+
+/**
+ * An ancillary on the structure (antenna, dish, feeder, ladder, platform): its wind drag, weight
+ * and ice. A point item hangs on `node`; a line item (feeder, ladder) runs along the members of
+ * `along.group` between two heights and is spread over their nodes by tributary height.
+ */
+export interface AncillarySpec {
+  id: string;
+  label?: string;
+  kind: 'antenna' | 'dish' | 'feeder' | 'ladder' | 'platform' | 'other';
+  /** Point item: the node it is attached at. */
+  node?: string;
+  /** Line item: the group it runs along and the height range, m above z = 0. */
+  along?: { group: string; from: number; to: number };
+  /** Drag area C_f · A, m² (point item) or m² per metre of height (line item). */
+  dragArea: number;
+  /** Mass, kg (point item) or kg per metre of height (line item). */
+  mass: number;
+  /** Drag area added per metre of radial ice (m²/m; line items per metre of height too); default 0: ice ignored. */
+  iceDragArea?: number;
+  /** Ice mass per metre of radial ice (kg/m; line items per metre of height too); default 0: ice ignored. */
+  iceMass?: number;
+}

@@ -14,7 +14,7 @@
 
 import type { ReportSpec, SiteMeasurementSetSpec, TensioningSequenceSpec } from './site-types.ts';
 import type { BeamReleases, NodeSprings, PrescribedDisplacement, NodalMoment } from './structure-types.ts';
-import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec, WindBasisSpec, WindDirectionsSpec } from './actions-types.ts';
+import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec, WindBasisSpec, WindDirectionsSpec, AncillarySpec } from './actions-types.ts';
 
 export type * from './actions-types.ts';
 
@@ -57,6 +57,8 @@ export interface ProjectFile {
   memberLoss?: MemberLossSpec[];
   /** Wind cases from N directions (actions-types.ts). */
   windDirections?: WindDirectionsSpec[];
+  /** Antennas, feeders, ladders, platforms: wind, weight and ice (actions-types.ts). */
+  ancillaries?: AncillarySpec[];
 }
 
 export interface ProjectMeta {

@@ -139,9 +139,29 @@ function windDirectionErrors(root: unknown, errors: string[]): void {
   }
 }
 
+function ancillaryErrors(root: unknown, errors: string[]): void {
+  const nodes = idSet(root, 'nodes');
+  const groups = idSet(root, 'groups');
+  for (const { entry } of entries(root, 'members')) for (const g of strings(entry, 'groups')) groups.add(g.value);
+  for (const { index, entry } of entries(root, 'ancillaries')) {
+    const label = entryLabel(root, 'ancillaries', index);
+    const node = str(entry, 'node');
+    const along = isRec(entry.along) ? entry.along : undefined;
+    if ((node === undefined) === (along === undefined)) errors.push(`${label}: give either "node" (a point item) or "along" (a line item)`);
+    if (node !== undefined && !nodes.has(node)) errors.push(`${label}: node ${JSON.stringify(node)} does not exist`);
+    if (along) {
+      const g = str(along, 'group');
+      if (g !== undefined && !groups.has(g)) errors.push(`${label}: along: group ${JSON.stringify(g)} does not exist`);
+      const from = num(along, 'from'), to = num(along, 'to');
+      if (from !== undefined && to !== undefined && !(to > from)) errors.push(`${label}: along: "to" (${to} m) must be above "from" (${from} m)`);
+    }
+  }
+}
+
 export function actionErrors(root: unknown): string[] {
   const errors: string[] = [];
-  for (const list of ['panels', 'patchWind', 'memberLoss', 'windDirections']) duplicateIds(root, list, errors);
+  for (const list of ['panels', 'patchWind', 'memberLoss', 'windDirections', 'ancillaries']) duplicateIds(root, list, errors);
+  ancillaryErrors(root, errors);
   windDirectionErrors(root, errors);
   panelErrors(root, errors);
   areaLoadErrors(root, errors);

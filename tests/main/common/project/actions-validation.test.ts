@@ -128,7 +128,7 @@ describe('schema matches solver/project/actions-types.ts', () => {
   const pairs: [string, Schema][] = [
     ['PanelSpec', defs.panel], ['PressureCoefficientSpec', defs.pressureCoefficient], ['AreaLoadSpec', defs.areaLoad],
     ['PatchWindSpec', defs.patchWind], ['MemberLossSpec', defs.memberLoss],
-    ['WindBasisSpec', defs.windBasis], ['WindDirectionsSpec', defs.windDirections],
+    ['WindBasisSpec', defs.windBasis], ['WindDirectionsSpec', defs.windDirections], ['AncillarySpec', defs.ancillary],
   ];
   it.each(pairs)('%s: same fields, optionality and order', (name, schema) => {
     expect(schemaFields(schema)).toEqual(interfaceFields(name));
