@@ -55,6 +55,8 @@ export interface OpenedProject {
   project: ProjectFile;
   /** Set when the file was migrated from an older format version on load. */
   migratedFrom?: number;
+  /** added: things that went wrong beside the open itself (e.g. the recent list could not be written). */
+  warnings?: string[];
 }
 
 export interface RecentEntry {
@@ -107,8 +109,12 @@ export interface StaysetHost {
   /** Recovery files left by a crash. */
   listRecovery(): Promise<RecoveryEntry[]>;
   recover(id: string): Promise<HostResult<OpenedProject>>;
-  /** Write the autosave for a project with unsaved changes (path null for untitled). */
-  autosave(path: string | null, project: ProjectFile): Promise<void>;
+  /**
+   * Write the autosave for a project with unsaved changes (path null for untitled). changed:
+   * returns ok:false with the reason when the recovery file could not be written, so the app
+   * can say that recovery is not available (desktop: only for paths the host handed out).
+   */
+  autosave(path: string | null, project: ProjectFile): Promise<HostResult<{ savedAt: string }>>;
   /** Forget the autosave after a successful save or on discard. */
   discardRecovery(path: string | null): Promise<void>;
   /** Run every case (and combination) of the project off the UI thread. */

@@ -8,7 +8,7 @@ import type { HostResult, OpenedProject } from '../common/host-contract.ts';
 import type { HostHandlers } from '../common/host-validation.ts';
 import type { ProjectService } from '../store/project-service.ts';
 import { hasProjectExtension } from '../store/project-files.ts';
-import type { GrantedPaths } from './granted-paths.ts';
+import { GrantedPaths } from './granted-paths.ts';
 import type { QuitGuard } from './quit-guard.ts';
 
 export interface DesktopDialogs {
@@ -52,6 +52,14 @@ export function createDesktopHandlers(deps: DesktopHostDeps): HostHandlers {
     return result;
   };
 
+  /** A path from the page: granted, offered by the system, or on the recent list. */
+  const mayOpenByPath = async (file: string): Promise<boolean> => {
+    if (deps.granted.mayOpen(file)) return true;
+    const probe = new GrantedPaths();
+    probe.grant(file);
+    return (await deps.projects.recentProjects()).some((r) => probe.has(r.path));
+  };
+
   return {
     kind: async () => 'desktop',
     openInitial: async () => {
@@ -61,6 +69,9 @@ export function createDesktopHandlers(deps: DesktopHostDeps): HostHandlers {
     open: async (file) => {
       if (file !== undefined) {
         if (!path.isAbsolute(file) || !hasProjectExtension(file)) return { ok: false, error: `"${file}" is not an absolute path to a .stayset file` };
+        if (!(await mayOpenByPath(file))) {
+          return { ok: false, error: `Open "${file}" refused: the page may open only files chosen in the Open dialog, on the recent list, or given to Stayset by the system. Use Open….` };
+        }
         return openFile(file);
       }
       const chosen = await deps.dialogs.chooseProjectToOpen();
@@ -103,8 +114,11 @@ export function createDesktopHandlers(deps: DesktopHostDeps): HostHandlers {
       return result;
     },
     autosave: async (file, project) => {
+      if (file !== null && !deps.granted.has(file)) {
+        return { ok: false, error: `Autosave for "${file}" refused: the file was not opened or chosen in this session.` };
+      }
       deps.quit.lastAutosavePath = file;
-      await deps.projects.autosave(file, project);
+      return deps.projects.autosave(file, project);
     },
     discardRecovery: (file) => deps.projects.discardRecovery(file),
     runAnalysis: async (project) => deps.analysis.start(project),

@@ -62,6 +62,7 @@ const runner = new AnalysisRunner({
 });
 
 function requestOpen(file: string): void {
+  granted.offer(file);
   if (win) send('requestOpen', path.resolve(file));
   else pendingOpens.push(file);
 }
@@ -114,7 +115,7 @@ const handlers = createDesktopHandlers({
 });
 
 function createWindow(): void {
-  win = new BrowserWindow(mainWindowOptions(preloadPath));
+  win = new BrowserWindow(mainWindowOptions(preloadPath, !app.isPackaged));
   const id = win.webContents.id;
   allowedSenders.add(id);
   hardenWebContents(win.webContents);

@@ -8,14 +8,17 @@
  *            is refused with a message that says why and suggests Save As.
  * - `saveAs` is the user's explicit choice of a path (a dialog on the desktop, a typed path on
  *            the web host): it replaces whatever is there. Both keep the previous file as `.bak`.
- * Writes are atomic (see atomic-write.ts).
+ * - lost update: `save` also refuses when the file changed on disk since this process read or
+ *            wrote it (another program or window saved it); Save As replaces it deliberately.
+ * Writes are atomic and keep mode, owner, read-only and symlinks (atomic-write.ts, write-keep.ts).
  */
-import { promises as fs } from 'node:fs';
 import path from 'node:path';
 import type { ProjectFile } from '../../solver/index.ts';
 import type { HostResult, OpenedProject } from '../common/host-contract.ts';
 import { parseProjectText, serializeProject } from '../common/project/index.ts';
 import { writeFileAtomic } from './atomic-write.ts';
+import { currentStamp, sameStamp, type FileStamp } from './file-stamp.ts';
+import { WriteRefusedError } from './write-keep.ts';
 import { readRegularFile } from './read-regular-file.ts';
 import { MAX_PROJECT_FILE_BYTES } from '../common/limits/file-limits.ts';
 
@@ -63,40 +66,45 @@ export async function readProjectFile(file: string): Promise<ReadOutcome> {
   }
   const opened: OpenedProject = { path: path.resolve(file), name, project: parsed.project };
   if (parsed.migratedFrom !== undefined) opened.migratedFrom = parsed.migratedFrom;
-  else await remember(file);
+  else rememberStamp(file, read.stamp);
   return { ok: true, opened };
 }
 
 /**
  * Files this process last read as valid current-version projects or wrote itself, by resolved
- * path, with their size and modification time then. Unchanged since → no need to re-read them
- * before the next save (a 6 MB project takes about half a second to validate).
+ * path, with their stamp then (file-stamp.ts). Save compares the file on disk with it: unchanged
+ * → no need to re-read it (a 6 MB project takes about half a second to validate); changed → it
+ * was saved by someone else since, and Save refuses rather than lose that version.
  */
-const knownGood = new Map<string, { size: number; mtimeMs: number }>();
+const knownGood = new Map<string, FileStamp>();
 
-async function remember(file: string): Promise<void> {
-  try {
-    const st = await fs.stat(file);
-    knownGood.set(path.resolve(file), { size: st.size, mtimeMs: st.mtimeMs });
-  } catch {
-    knownGood.delete(path.resolve(file));
-  }
+function rememberStamp(file: string, stamp: FileStamp): void {
+  knownGood.set(path.resolve(file), stamp);
 }
 
-async function unchangedSinceKnownGood(file: string): Promise<boolean> {
-  const known = knownGood.get(path.resolve(file));
-  if (!known) return false;
-  try {
-    const st = await fs.stat(file);
-    return st.size === known.size && st.mtimeMs === known.mtimeMs;
-  } catch {
-    return false;
-  }
+/** The stamp of `file` as this process last read or wrote it, if it did. */
+export function knownStamp(file: string): FileStamp | undefined {
+  return knownGood.get(path.resolve(file));
+}
+
+/** Adopt `stamp` as the version of `file` the user's edits start from (recovery of an autosave). */
+export function adoptKnownStamp(file: string, stamp: FileStamp): void {
+  rememberStamp(file, stamp);
+}
+
+export function changedOnDiskMessage(file: string): string {
+  return `${path.basename(file)} changed on disk since it was opened or last saved here (another program or window saved it). `
+    + 'Save will not overwrite that version: reopen the file to see it, or use Save As to choose where your version goes.';
 }
 
 /** Why `save` may not replace `file`, or null when it may. */
 export async function saveRefusal(file: string): Promise<string | null> {
-  if (await unchangedSinceKnownGood(file)) return null;
+  const known = knownStamp(file);
+  if (known) {
+    const now = await currentStamp(file);
+    if (now === null || sameStamp(now, known)) return null;
+    return changedOnDiskMessage(file);
+  }
   const current = await readProjectFile(file);
   if (current.ok) {
     if (current.opened.migratedFrom === undefined) return null;
@@ -124,9 +132,11 @@ export async function writeProjectFile(file: string, project: ProjectFile, mode:
     return { ok: false, error: `The project could not be written as text: ${(e as Error).message}` };
   }
   try {
-    await writeFileAtomic(target, text, { backup: true });
-    await remember(target);
+    // Save: the file must still be the version this process knows (checked again just before the rename).
+    const expect = mode === 'save' ? knownStamp(target) : undefined;
+    rememberStamp(target, await writeFileAtomic(target, text, { backup: true, expect }));
   } catch (e) {
+    if (e instanceof WriteRefusedError) return { ok: false, error: e.refusal === 'changed' ? changedOnDiskMessage(target) : e.message };
     const code = (e as NodeJS.ErrnoException).code;
     return { ok: false, error: `Saving ${path.basename(target)} failed (${code ?? (e as Error).message}); the previous file is unchanged.` };
   }

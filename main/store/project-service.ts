@@ -30,16 +30,29 @@ export class ProjectService {
   async open(file: string, remember = true): Promise<HostResult<OpenedProject>> {
     const read = await readProjectFile(file);
     if (!read.ok) {
-      if (read.reason === 'missing') await this.recent.remove(file);
+      if (read.reason === 'missing') await this.recent.remove(file).catch(() => undefined);
       return { ok: false, error: read.error };
     }
-    if (remember) await this.recent.add(read.opened.path ?? file);
+    if (remember) {
+      const warning = await this.tryRecent(read.opened.path ?? file);
+      if (warning) read.opened.warnings = [...(read.opened.warnings ?? []), warning];
+    }
     return { ok: true, value: read.opened };
+  }
+
+  /** Put a path on the recent list; the list is a convenience: a failure is a warning, never an error. */
+  private async tryRecent(file: string): Promise<string | null> {
+    try {
+      await this.recent.add(file);
+      return null;
+    } catch (e) {
+      return `The recent-projects list could not be updated (${(e as NodeJS.ErrnoException).code ?? (e as Error).message}); the project itself is fine.`;
+    }
   }
 
   async save(file: string, project: ProjectFile): Promise<HostResult<{ path: string }>> {
     const result = await writeProjectFile(file, project, 'save');
-    if (result.ok) await this.recovery.discard(result.value.path);
+    if (result.ok) await this.recovery.discard(result.value.path).catch(() => undefined);
     return result;
   }
 
@@ -47,8 +60,8 @@ export class ProjectService {
   async saveAs(file: string, project: ProjectFile): Promise<HostResult<{ path: string; name: string }>> {
     const result = await writeProjectFile(withProjectExtension(file), project, 'saveAs');
     if (!result.ok) return result;
-    await this.recent.add(result.value.path);
-    await this.recovery.discard(result.value.path);
+    await this.tryRecent(result.value.path);
+    await this.recovery.discard(result.value.path).catch(() => undefined);
     return { ok: true, value: { path: result.value.path, name: path.basename(result.value.path) } };
   }
 
@@ -64,8 +77,15 @@ export class ProjectService {
     return this.recovery.recover(id);
   }
 
-  async autosave(file: string | null, project: ProjectFile): Promise<void> {
-    await this.recovery.autosave(file, project);
+  /** Write the recovery file; a failure comes back as a message (recovery is then not available). */
+  async autosave(file: string | null, project: ProjectFile): Promise<HostResult<{ savedAt: string }>> {
+    try {
+      const entry = await this.recovery.autosave(file, project);
+      return { ok: true, value: { savedAt: entry.savedAt } };
+    } catch (e) {
+      const code = (e as NodeJS.ErrnoException).code ?? (e as Error).message;
+      return { ok: false, error: `Autosave failed (${code}): unsaved changes cannot be recovered after a crash until this is fixed. Save the project to keep your changes.` };
+    }
   }
 
   discardRecovery(file: string | null): Promise<void> {

@@ -1,12 +1,15 @@
 /**
  * The recent-projects list: a small JSON file (`recent-projects.json`) in the user data folder,
  * newest first, deduplicated by resolved path, capped at `RECENT_LIMIT` entries. A missing or
- * damaged list reads as empty (it is a convenience, never a reason to fail).
+ * damaged list reads as empty (it is a convenience, never a reason to fail). Updates are
+ * read-modify-write under a lock file (file-lock.ts), so two processes (desktop and web host, two
+ * windows) do not lose each other's entries; a failed update throws for the caller to report.
  */
 import { promises as fs } from 'node:fs';
 import path from 'node:path';
 import type { RecentEntry } from '../common/host-contract.ts';
 import { writeFileAtomic } from './atomic-write.ts';
+import { withFileLock } from './file-lock.ts';
 import { readRegularFile } from './read-regular-file.ts';
 
 export const RECENT_LIMIT = 12;
@@ -54,20 +57,24 @@ export class RecentProjects {
   add(projectPath: string, now = new Date()): Promise<RecentEntry[]> {
     return this.serial(async () => {
       const resolved = path.resolve(projectPath);
-      const next = addRecent(await this.list(), { path: resolved, name: path.basename(resolved), openedAt: now.toISOString() });
       await fs.mkdir(path.dirname(this.file), { recursive: true });
-      await writeFileAtomic(this.file, JSON.stringify(next, null, 2) + '\n');
-      return next;
+      return withFileLock(this.file, async () => {
+        const next = addRecent(await this.list(), { path: resolved, name: path.basename(resolved), openedAt: now.toISOString() });
+        await writeFileAtomic(this.file, JSON.stringify(next, null, 2) + '\n');
+        return next;
+      });
     });
   }
 
   remove(projectPath: string): Promise<void> {
     return this.serial(async () => {
       const resolved = path.resolve(projectPath);
-      const list = await this.list();
-      const next = list.filter((e) => !samePath(e.path, resolved));
-      if (next.length === list.length) return;
-      await writeFileAtomic(this.file, JSON.stringify(next, null, 2) + '\n');
+      if (!(await this.list()).some((e) => samePath(e.path, resolved))) return;
+      await withFileLock(this.file, async () => {
+        const list = await this.list();
+        const next = list.filter((e) => !samePath(e.path, resolved));
+        if (next.length !== list.length) await writeFileAtomic(this.file, JSON.stringify(next, null, 2) + '\n');
+      });
     });
   }
 }

@@ -79,4 +79,36 @@ export class PathPolicy {
     if (!isInside(this.root, real)) return this.outside(input);
     return { ok: true, path: real, readOnly: false };
   }
+
+  /**
+   * As forWrite, for Save As into a folder that does not exist yet: the missing folders are made
+   * when the nearest existing one is (really) inside the root and not the assets folder.
+   */
+  async forNewFile(input: string): Promise<PathVerdict> {
+    const abs = this.absolute(input);
+    let dir = path.dirname(abs);
+    let missing = false;
+    for (;;) {
+      try {
+        await fs.stat(dir);
+        break;
+      } catch {
+        missing = true;
+        const up = path.dirname(dir);
+        if (up === dir) return this.outside(input);
+        dir = up;
+      }
+    }
+    if (missing) {
+      let existing: string;
+      try {
+        existing = await fs.realpath(dir);
+      } catch {
+        return this.outside(input);
+      }
+      if (!isInside(this.root, existing) || !isInside(this.root, abs) || this.inAssets(existing)) return this.outside(input);
+      await fs.mkdir(path.dirname(abs), { recursive: true });
+    }
+    return this.forWrite(input);
+  }
 }

@@ -38,7 +38,7 @@ export function createWebHostHandlers(o: WebHostServiceOptions): HostHandlers {
     saveAs: async (project, input) => {
       if (input === undefined) return { ok: false, error: NEEDS_PATH };
       const target = path.extname(input) === '' ? `${input}.stayset` : input;
-      const verdict = await o.paths.forWrite(target);
+      const verdict = await o.paths.forNewFile(target);
       if (!verdict.ok) return verdict;
       return o.projects.saveAs(verdict.path, project);
     },

@@ -4,7 +4,7 @@
  * stores; no three.js here.
  */
 import { ref, shallowRef } from 'vue';
-import type { CaseFields, SolveReport } from '../../solver/index.ts';
+import type { CaseFields, ProjectFile, SolveReport } from '../../solver/index.ts';
 import type { HostResult, OpenedProject, RecentEntry, RecoveryEntry, StaysetHost } from '../../main/common/host-contract.ts';
 import { getHost } from '../host/client.ts';
 import { useProjectStore } from '../stores/project.ts';
@@ -12,8 +12,10 @@ import { useResultsStore } from '../stores/results.ts';
 import { useSelectionStore } from '../stores/selection.ts';
 import { useSettingsStore } from '../stores/settings.ts';
 import { buildSchedulePage, isoDate, type SchedulePage } from '../schedule/schedule-document.ts';
+import { blankProject } from '../model/new-project.ts';
+import type { GeneratorKind } from '../generators/generator-defaults.ts';
 
-/** Interval of the autosave while there are unsaved changes, ms. */
+/** Interval of the autosave check, ms (it writes only when the unsaved content changed). */
 export const AUTOSAVE_MS = 10_000;
 
 export type Phase = 'starting' | 'empty' | 'loading' | 'ready' | 'noHost';
@@ -41,8 +43,13 @@ export function createAppActions(hostOverride?: StaysetHost) {
   const schedule = shallowRef<SchedulePage | null>(null);
   /** The Generate dialog is open. */
   const generating = ref(false);
+  /** Generator kind the Generate dialog opens with (null: the project's first record's kind). */
+  const generateKind = ref<GeneratorKind | null>(null);
+  /** The New project dialog is open. */
+  const creating = ref(false);
   let host: StaysetHost | null = hostOverride ?? null;
   let autosaveTimer: ReturnType<typeof setInterval> | null = null;
+  let lastAutosaveError: string | null = null;
   const unsubscribers: (() => void)[] = [];
 
   /**
@@ -84,6 +91,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
     if (d?.deformationScale !== undefined) settings.setDeformationScale(d.deformationScale);
     phase.value = 'ready';
     if (result.value.migratedFrom) say('info', `Converted from format version ${result.value.migratedFrom}; Save As to keep the original file untouched.`);
+    if (result.value.warnings?.length) say('error', result.value.warnings.join(' '));
     void syncDirty();
     return true;
   }
@@ -134,8 +142,9 @@ export function createAppActions(hostOverride?: StaysetHost) {
     adopt(r);
   }
 
-  async function openPath(path?: string): Promise<void> {
-    if (projectStore.dirty && !window.confirm(`Discard unsaved changes to ${projectStore.name}?`)) return;
+  /** Open a project file; `confirmed`: the user already agreed to discard unsaved changes (asked once). */
+  async function openPath(path?: string, confirmed = false): Promise<void> {
+    if (!confirmed && projectStore.dirty && !window.confirm(`Discard unsaved changes to ${projectStore.name}?`)) return;
     if (!path && hostKind.value === 'web') {
       pathPrompt.value = { purpose: 'open', suggestion: '' };
       return;
@@ -149,6 +158,24 @@ export function createAppActions(hostOverride?: StaysetHost) {
     } catch (e) {
       phase.value = projectStore.project ? 'ready' : 'empty';
       openErrors.value = [(e as Error).message];
+    }
+  }
+
+  /** Open the New project dialog (after confirming that unsaved changes may be discarded). */
+  function askNew(): void {
+    if (projectStore.dirty && !window.confirm(`Discard unsaved changes to ${projectStore.name}?`)) return;
+    creating.value = true;
+  }
+
+  /** A new, never-saved project: blank, or blank with the Generate dialog open on `start`. */
+  function createProject(name: string, start: 'blank' | GeneratorKind): void {
+    creating.value = false;
+    const project = blankProject(name);
+    adopt({ ok: true, value: { path: null, name: `${project.meta!.name}.stayset`, project } });
+    projectStore.markUnsaved();
+    if (start !== 'blank') {
+      generateKind.value = start;
+      generating.value = true;
     }
   }
 
@@ -185,7 +212,8 @@ export function createAppActions(hostOverride?: StaysetHost) {
     const p = projectStore.project;
     if (!p) return false;
     if (!path && hostKind.value === 'web') {
-      pathPrompt.value = { purpose: 'saveAs', suggestion: projectStore.name.replace(/\.stayset(\.json)?$/, '') + '-copy.stayset' };
+      const stem = projectStore.name.replace(/\.stayset(\.json)?$/, '');
+      pathPrompt.value = { purpose: 'saveAs', suggestion: `${stem}${projectStore.path ? '-copy' : ''}.stayset` };
       return false;
     }
     const r = await h().saveAs(p, path).catch((e: Error) => ({ ok: false as const, error: e.message }));
@@ -206,13 +234,30 @@ export function createAppActions(hostOverride?: StaysetHost) {
     const prompt = pathPrompt.value;
     pathPrompt.value = null;
     if (!prompt || !path) return;
-    if (prompt.purpose === 'open') await openPath(path);
+    if (prompt.purpose === 'open') await openPath(path, true);
     else await saveAs(path);
   }
 
-  async function autosave(): Promise<void> {
-    if (!projectStore.project || !projectStore.dirty) return;
-    await h().autosave(projectStore.path, projectStore.project).catch(() => undefined);
+  /** The document the last autosave wrote (autosave posts only when the content changed since). */
+  let autosaved: ProjectFile | null = null;
+
+  /**
+   * Write a recovery copy when there are unsaved changes that differ from the last autosave. A
+   * document that does not validate (a new project before its first member) is not sent: the
+   * host refuses it. A failed autosave is said once per distinct reason (recovery is then not
+   * available) and retried at the next tick.
+   */
+  async function autosave(): Promise<boolean> {
+    const p = projectStore.project;
+    if (!p || !projectStore.dirty || p === autosaved || projectStore.problems.length) return false;
+    autosaved = p;
+    const r = await h().autosave(projectStore.path, p).catch((e: Error) => ({ ok: false as const, error: e.message }));
+    if (r && !r.ok) {
+      autosaved = null;
+      if (r.error !== lastAutosaveError) say('error', r.error);
+    }
+    lastAutosaveError = r && !r.ok ? r.error : null;
+    return true;
   }
 
   async function run(): Promise<void> {
@@ -221,6 +266,10 @@ export function createAppActions(hostOverride?: StaysetHost) {
     if (projectStore.problems.length) {
       say('error', 'Fix the problems listed above before running the analysis.');
       return;
+    }
+    if (projectStore.warnings.length) {
+      const w = projectStore.warnings;
+      say('info', `Check ${w.length === 1 ? 'this input' : `these ${w.length} inputs`} (the run goes ahead): ${w.slice(0, 3).join('; ')}${w.length > 3 ? ' …' : ''}`);
     }
     results.started(projectStore.revision, p);
     try {
@@ -257,7 +306,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
       case 'fit': fitRequests.value++; break;
       case 'generate': generating.value = Boolean(projectStore.project); break;
       case 'print': await print(); break;
-      case 'new': say('info', 'New projects start from a generator or a copy of the demo (Save As).'); break;
+      case 'new': askNew(); break;
     }
   }
 
@@ -313,7 +362,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
   }
 
   return {
-    phase, hostKind, notice, openErrors, recents, recovery, pathPrompt, fitRequests, schedule, generating,
+    phase, hostKind, notice, openErrors, recents, recovery, pathPrompt, fitRequests, schedule, generating, generateKind, creating, askNew, createProject,
     start, showSchedule, stop, openDemo, openPath, recover, save, saveAs, answerPathPrompt, autosave, run, cancel, undo, redo,
     menuCommand, print, onKeydown, syncDirty, say,
   };

@@ -21,6 +21,8 @@ export interface EditCheck {
   ok: boolean;
   /** Messages the edit introduces, those about `rows` first. */
   errors: string[];
+  /** Every validation message of the edited document (so the caller need not validate it again). */
+  after: string[];
 }
 
 /**
@@ -29,8 +31,9 @@ export interface EditCheck {
  */
 export function checkEdit(before: ProjectFile, after: ProjectFile, table: TableName, rows: readonly number[], beforeErrors?: string[]): EditCheck {
   const old = new Set(beforeErrors ?? validationErrors(before));
-  const added = validationErrors(after).filter((m) => !old.has(m));
+  const all = validationErrors(after);
+  const added = all.filter((m) => !old.has(m));
   const mine = added.filter((m) => rows.some((r) => concernsRow(m, table, r)));
   const others = added.filter((m) => !mine.includes(m));
-  return { ok: added.length === 0, errors: [...mine, ...others] };
+  return { ok: added.length === 0, errors: [...mine, ...others], after: all };
 }

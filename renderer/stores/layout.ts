@@ -1,13 +1,15 @@
-/** Which tab of the right panel is shown (inspector, loads of a case, tuning); display only. */
+/** Which tab of the right panel is shown (inspector, wind and ice, checks, tuning, project); display only. */
 import { defineStore } from 'pinia';
 import { ref } from 'vue';
 
-export type RightTab = 'inspector' | 'loads' | 'tuning';
+export type RightTab = 'inspector' | 'loads' | 'checks' | 'tuning' | 'project';
 
 export const useLayoutStore = defineStore('layout', () => {
   const rightTab = ref<RightTab>('inspector');
+  /** The load case last chosen in a loads editor: its loads are drawn when no result case is shown. */
+  const loadCaseId = ref<string | null>(null);
   function showRight(tab: RightTab): void {
     rightTab.value = tab;
   }
-  return { rightTab, showRight };
+  return { rightTab, showRight, loadCaseId };
 });

@@ -9,6 +9,7 @@ import type { ProjectFile } from '../../solver/index.ts';
 import type { OpenedProject } from '../../main/common/host-contract.ts';
 import { EditHistory } from '../model/edit-history.ts';
 import { checkEdit, validationErrors } from '../model/validate-edit.ts';
+import { plausibilityWarnings } from '../../main/common/project/plausibility/plausibility-warnings.ts';
 import { appendRow, deleteRows, updateRows } from '../model/project-edits.ts';
 import type { TableName, TableRow } from '../model/table-names.ts';
 
@@ -25,6 +26,11 @@ export const useProjectStore = defineStore('project', () => {
   const migratedFrom = ref<number | null>(null);
   /** Validation messages of the current document (shown in the error banner). */
   const problems = shallowRef<string[]>([]);
+  /**
+   * Plausibility warnings of a valid document (values outside the ranges of real members or
+   * sites, main/common/project/plausibility): shown before a run; never block an edit or a run.
+   */
+  const warnings = computed(() => (project.value && problems.value.length === 0 ? plausibilityWarnings(project.value) : []));
   /** Bumped on every change of `project`; cheap to watch. */
   const revision = ref(0);
   const history = new EditHistory<ProjectFile>(HISTORY_CAP);
@@ -37,9 +43,23 @@ export const useProjectStore = defineStore('project', () => {
   const redoLabel = computed(() => (historyTick.value, history.redoLabel));
   const title = computed(() => (project.value ? `${name.value || 'Untitled'}${dirty.value ? ' •' : ''}` : ''));
 
+  /** Validation messages by document: each document is validated once (edits, undo and redo reuse them). */
+  const problemsOf = new WeakMap<ProjectFile, string[]>();
+  /** Number of full validations run (the responsiveness benchmark and tests read it). */
+  let validations = 0;
+  function validated(p: ProjectFile): string[] {
+    let list = problemsOf.get(p);
+    if (!list) {
+      validations++;
+      list = validationErrors(p);
+      problemsOf.set(p, list);
+    }
+    return list;
+  }
+
   function setCurrent(next: ProjectFile | null): void {
     project.value = next;
-    problems.value = next ? validationErrors(next) : [];
+    problems.value = next ? validated(next) : [];
     revision.value++;
     historyTick.value++;
   }
@@ -77,6 +97,8 @@ export const useProjectStore = defineStore('project', () => {
     }
     if (next === current) return { ok: true };
     const check = checkEdit(current, next, table ?? 'nodes', rows, problems.value);
+    validations++;
+    problemsOf.set(next, check.after);
     if (!check.ok) return { ok: false, errors: check.errors };
     history.record(current, label);
     setCurrent(next);
@@ -121,8 +143,15 @@ export const useProjectStore = defineStore('project', () => {
     historyTick.value++;
   }
 
+  /** A new project that was never saved: dirty until Save As. */
+  function markUnsaved(): void {
+    savedProject.value = null;
+    historyTick.value++;
+  }
+
   return {
-    project, path, name, migratedFrom, problems, revision, dirty, title,
+    markUnsaved, validationCount: () => validations,
+    project, path, name, migratedFrom, problems, warnings, revision, dirty, title,
     canUndo, canRedo, undoLabel, redoLabel,
     load, close, edit, updateRowsIn, addRow, removeRows, undo, redo, markSaved,
   };

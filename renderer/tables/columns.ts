@@ -3,7 +3,7 @@
  * Numeric columns carry a QuantityKind and are entered unit-aware (renderer/units); the header
  * shows the display unit. Optional columns accept an empty cell (field removed from the file).
  */
-import type { LoadCaseSpec, MemberSpec, NodeSpec, SectionSpec } from '../../solver/index.ts';
+import type { LoadCaseSpec, MemberSpec, NodeSpec, ProjectFile, SectionSpec } from '../../solver/index.ts';
 import type { QuantityKind } from '../units/quantity-kinds.ts';
 import type { TableName, TableRow } from '../model/table-names.ts';
 import { withField } from '../model/project-edits.ts';
@@ -108,8 +108,11 @@ export const COLUMNS: { [K in TableName]: Column<TableRow[K]>[] } = {
   loadCases: LOAD_CASE_COLUMNS,
 };
 
-/** A new row for `table` with a fresh id and sensible defaults taken from the existing rows. */
-export function newRow<K extends TableName>(table: K, id: string, rows: TableRow[K][]): TableRow[K] {
+/**
+ * A new row for `table` with a fresh id and sensible defaults taken from the existing rows (the
+ * first member of a project goes between its first two nodes, with its first section).
+ */
+export function newRow<K extends TableName>(table: K, id: string, rows: TableRow[K][], project?: ProjectFile): TableRow[K] {
   const last = rows[rows.length - 1] as unknown;
   switch (table) {
     case 'nodes': {
@@ -118,7 +121,8 @@ export function newRow<K extends TableName>(table: K, id: string, rows: TableRow
     }
     case 'members': {
       const m = last as MemberSpec | undefined;
-      return { id, kind: m?.kind ?? 'cable', from: m?.from ?? '', to: m?.to ?? '', section: m?.section ?? '' } as TableRow[K];
+      const nodes = project?.nodes ?? [];
+      return { id, kind: m?.kind ?? 'cable', from: m?.from ?? nodes[0]?.id ?? '', to: m?.to ?? nodes[1]?.id ?? '', section: m?.section ?? project?.sections[0]?.id ?? '' } as TableRow[K];
     }
     case 'sections': {
       const s = last as SectionSpec | undefined;

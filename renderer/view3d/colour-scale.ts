@@ -15,6 +15,8 @@ export const SLACK_COLOUR: Rgb = [0.78, 0.33, 1.0]; // violet, drawn dashed
 export const COMPRESSION_COLOUR: Rgb = [0.2, 0.45, 0.9]; // blue (bars only)
 export const UNANALYSED_CABLE: Rgb = [0.62, 0.66, 0.74];
 export const UNANALYSED_BAR: Rgb = [0.42, 0.47, 0.56];
+/** Beam-columns before analysis: a warm grey, apart from bars and cables. */
+export const UNANALYSED_BEAM: Rgb = [0.55, 0.45, 0.32];
 export const SELECTED_COLOUR: Rgb = [1.0, 1.0, 1.0];
 /** "Checks" colour mode: members (and nodes) that fail a design check, pass, or are not checked. */
 export const CHECK_FAIL_COLOUR: Rgb = [1.0, 0.23, 0.19]; // signal red

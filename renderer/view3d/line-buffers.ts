@@ -9,7 +9,7 @@
  */
 import {
   CHECK_FAIL_COLOUR, CHECK_PASS_COLOUR, CHECK_UNCHECKED_COLOUR, COMPRESSION_COLOUR, CheckState, MemberState, SLACK_COLOUR,
-  UNANALYSED_BAR, UNANALYSED_CABLE, scaleColour, type Rgb,
+  UNANALYSED_BAR, UNANALYSED_BEAM, UNANALYSED_CABLE, scaleColour, type Rgb,
 } from './colour-scale.ts';
 import type { SceneData } from './scene-data.ts';
 
@@ -31,7 +31,7 @@ type Bucket = 0 | 1 | 2;
 
 function bucketOf(data: SceneData, j: number): Bucket {
   if (data.memberState[j] === MemberState.Slack) return 1;
-  return data.memberKind[j] === 1 ? 2 : 0;
+  return data.memberKind[j] !== 0 ? 2 : 0;
 }
 
 function allocate(count: number): SegmentBuffer {
@@ -74,7 +74,8 @@ export function memberColour(data: SceneData, j: number, out: Rgb): Rgb {
   const state = data.memberState[j];
   if (data.colour === 'checks' && state !== MemberState.NotAnalysed) return checkColour(data, j, out);
   if (state === MemberState.NotAnalysed) {
-    const c = data.memberKind[j] === 1 ? UNANALYSED_BAR : UNANALYSED_CABLE;
+    const kind = data.memberKind[j];
+    const c = kind === 1 ? UNANALYSED_BAR : kind === 2 ? UNANALYSED_BEAM : UNANALYSED_CABLE;
     out[0] = c[0]; out[1] = c[1]; out[2] = c[2];
     return out;
   }

@@ -6,7 +6,7 @@
  * - node i: nodePositions[3i..3i+2] (displayed position, m), nodeSupport[i] (0 free, 1 some
  *   directions restrained, 2 all of x, y, z restrained).
  * - member j: drawn as the polyline polyPoints[3k..] for k in [polyOffsets[j], polyOffsets[j+1]);
- *   memberKind[j] (0 cable, 1 bar), memberState[j] (MemberState), memberValue[j] (what the colour
+ *   memberKind[j] (0 cable, 1 bar, 2 beam), memberState[j] (MemberState), memberValue[j] (what the colour
  *   shows: tension in N or utilisation), memberCheck[j] (CheckState, from the design checks).
  * - nodeCheck[i] (CheckState); failedNodes lists the node indices whose check failed.
  * - colour: the colour mode the arrays were built for.
@@ -73,7 +73,8 @@ export interface SolvedShape {
 
 export function supportLevel(fixed: string | undefined): number {
   if (!fixed) return 0;
-  return ['x', 'y', 'z'].every((d) => fixed.includes(d)) ? 2 : 1;
+  const translations = fixed.replace(/r[xyz]/g, ''); // rotations are written rx, ry, rz
+  return ['x', 'y', 'z'].every((d) => translations.includes(d)) ? 2 : 1;
 }
 
 export function buildSceneData(project: ProjectFile, options: SceneOptions): SceneData {
@@ -110,11 +111,11 @@ export function buildSceneData(project: ProjectFile, options: SceneOptions): Sce
   const polyOffsets = new Int32Array(m + 1);
   for (let j = 0; j < m; j++) {
     const mb = project.members[j];
-    memberKind[j] = mb.kind === 'bar' ? 1 : 0;
+    memberKind[j] = mb.kind === 'bar' ? 1 : mb.kind === 'beam' ? 2 : 0;
     const r = memberResults?.get(mb.id);
     if (r) {
       if (r.slack) memberState[j] = MemberState.Slack;
-      else if (mb.kind === 'bar' && r.tensionMax < 0) memberState[j] = MemberState.Compression;
+      else if (mb.kind !== 'cable' && r.tensionMax < 0) memberState[j] = MemberState.Compression;
       else memberState[j] = MemberState.Tension;
       const b = breaking.get(mb.section) ?? 0;
       memberValue[j] = options.colour === 'utilisation' ? (b > 0 ? r.tensionMax / b : 0) : r.tensionMax;

@@ -14,6 +14,10 @@ import { buildLineBuffers, type LineBuffers, type SegmentBuffer } from './line-b
 import { pickAt, type PickHit } from './pick.ts';
 import type { SceneData } from './scene-data.ts';
 import { CHECK_FAIL_COLOUR, SELECTED_COLOUR } from './colour-scale.ts';
+import type { LoadArrows } from './load-arrows.ts';
+
+const LOAD_COLOUR = 0xff9f43;
+const WIND_COLOUR = 0x7fd4ff;
 
 const BACKGROUND = 0x1b2330;
 
@@ -24,6 +28,11 @@ export class Viewer3D {
   private readonly controls: OrbitControls;
   private readonly content = new THREE.Group();
   private readonly overlay = new THREE.Group();
+  /** Load arrows and the wind arrow; their materials live as long as the viewer. */
+  private readonly loads = new THREE.Group();
+  private readonly loadLineMaterial = new THREE.LineBasicMaterial({ color: LOAD_COLOUR, depthTest: false, transparent: true });
+  private readonly loadHeadMaterial = new THREE.MeshBasicMaterial({ color: LOAD_COLOUR, depthTest: false, transparent: true });
+  private readonly windMaterial = new THREE.MeshBasicMaterial({ color: WIND_COLOUR, transparent: true, opacity: 0.85 });
   private data: SceneData | null = null;
   private buffers: LineBuffers | null = null;
   private extent = 10;
@@ -40,7 +49,7 @@ export class Viewer3D {
     const sun = new THREE.DirectionalLight(0xffffff, 0.9);
     sun.position.set(1, -2, 3);
     this.scene.add(sun);
-    this.scene.add(this.content, this.overlay);
+    this.scene.add(this.content, this.overlay, this.loads);
     this.controls = new OrbitControls(this.camera, canvas);
     this.controls.enableDamping = false;
     this.controls.screenSpacePanning = true;
@@ -109,6 +118,57 @@ export class Viewer3D {
     this.requestRender();
   }
 
+  /**
+   * Draw the loads of the shown case: nodal forces as arrows ending at their node (shaft and
+   * head), the wind as a flat arrow on the ground on the upwind side pointing where the air flows.
+   */
+  setLoads(arrows: LoadArrows | null): void {
+    this.clearGroup(this.loads, false);
+    const origin = this.buffers?.origin;
+    if (!arrows || !origin) { this.requestRender(); return; }
+    const [ox, oy, oz] = origin;
+    if (arrows.count) {
+      const pts = new Float32Array(6 * arrows.count);
+      const head = this.extent * 0.012;
+      const heads = new THREE.InstancedMesh(new THREE.ConeGeometry(head * 0.45, head, 8), this.loadHeadMaterial, arrows.count);
+      const up = new THREE.Vector3(0, 1, 0), dir = new THREE.Vector3(), q = new THREE.Quaternion(), m = new THREE.Matrix4(), at = new THREE.Vector3(), one = new THREE.Vector3(1, 1, 1);
+      for (let k = 0; k < arrows.count; k++) {
+        const t = [arrows.tails[3 * k] - ox, arrows.tails[3 * k + 1] - oy, arrows.tails[3 * k + 2] - oz];
+        const h = [arrows.tips[3 * k] - ox, arrows.tips[3 * k + 1] - oy, arrows.tips[3 * k + 2] - oz];
+        pts.set([...t, ...h], 6 * k);
+        dir.set(h[0] - t[0], h[1] - t[1], h[2] - t[2]).normalize();
+        q.setFromUnitVectors(up, dir);
+        at.set(h[0], h[1], h[2]).addScaledVector(dir, -head / 2);
+        heads.setMatrixAt(k, m.compose(at, q, one));
+      }
+      const g = new THREE.BufferGeometry();
+      g.setAttribute('position', new THREE.BufferAttribute(pts, 3));
+      const shafts = new THREE.LineSegments(g, this.loadLineMaterial);
+      shafts.renderOrder = 8;
+      heads.renderOrder = 8;
+      shafts.frustumCulled = false;
+      heads.frustumCulled = false;
+      this.loads.add(shafts, heads);
+    }
+    if (arrows.wind && this.data) {
+      const a = (arrows.wind.direction * Math.PI) / 180;
+      const d = new THREE.Vector2(Math.cos(a), Math.sin(a));
+      const r = this.extent * 0.55;
+      let zMin = Infinity;
+      for (let i = 2; i < this.data.nodePositions.length; i += 3) zMin = Math.min(zMin, this.data.nodePositions[i]);
+      const len = this.extent * 0.22, w = len * 0.18;
+      const shape = new THREE.Shape();
+      shape.moveTo(0, -w / 2); shape.lineTo(len * 0.65, -w / 2); shape.lineTo(len * 0.65, -w * 1.2); shape.lineTo(len, 0);
+      shape.lineTo(len * 0.65, w * 1.2); shape.lineTo(len * 0.65, w / 2); shape.lineTo(0, w / 2); shape.closePath();
+      const mesh = new THREE.Mesh(new THREE.ShapeGeometry(shape), this.windMaterial);
+      mesh.position.set(-d.x * (r + len), -d.y * (r + len), (Number.isFinite(zMin) ? zMin : 0) - oz + this.extent * 0.002);
+      mesh.rotation.z = a;
+      mesh.frustumCulled = false;
+      this.loads.add(mesh);
+    }
+    this.requestRender();
+  }
+
   /** Frame the whole model (its nodes and member polylines; the ground grid does not count). */
   fit(): void {
     const box = new THREE.Box3();
@@ -165,6 +225,8 @@ export class Viewer3D {
     this.controls.dispose();
     this.clearGroup(this.content);
     this.clearGroup(this.overlay);
+    this.clearGroup(this.loads, false);
+    for (const m of [this.loadLineMaterial, this.loadHeadMaterial, this.windMaterial]) m.dispose();
     this.renderer.dispose();
   }
 
@@ -299,11 +361,13 @@ export class Viewer3D {
     return grid;
   }
 
-  private clearGroup(group: THREE.Group): void {
+  /** Remove and dispose a group's objects (their geometry; their materials too unless `materials` is false: shared ones). */
+  private clearGroup(group: THREE.Group, materials = true): void {
     for (const child of [...group.children]) {
       group.remove(child);
       const obj = child as THREE.Mesh;
       obj.geometry?.dispose();
+      if (!materials) continue;
       const mat = obj.material as THREE.Material | THREE.Material[] | undefined;
       if (Array.isArray(mat)) mat.forEach((mm) => mm.dispose());
       else mat?.dispose();

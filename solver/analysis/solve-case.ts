@@ -7,6 +7,7 @@ import type { SolveControl } from './progress.ts';
 import type { Workspace } from './workspace.ts';
 import { DEFAULT_NEWTON_OPTIONS, evaluateState, solveEquilibrium, type CaseTag, type NewtonOptions } from './newton.ts';
 import { nowMs } from './clock.ts';
+import { untensionedMechanismDof } from './untensioned-mechanism.ts';
 import { describeDof, memberResults, nodeResults, reactionResults } from '../results/extract.ts';
 
 export interface SolveCaseOptions {
@@ -20,6 +21,8 @@ export interface SolveCaseOptions {
 export interface CaseSolution {
   result: CaseResult;
   fields: CaseFields;
+  /** Displacements and rotations from the start state at the end (dofs.count), m and rad. */
+  displacements?: Float64Array;
 }
 
 export function solveCase(ws: Workspace, id: string, loads: CaseLoads, options: SolveCaseOptions = {}): CaseSolution {
@@ -27,6 +30,8 @@ export function solveCase(ws: Workspace, id: string, loads: CaseLoads, options: 
   const newton = { ...DEFAULT_NEWTON_OPTIONS, ...options.newton };
   const tag = options.tag ?? { caseIndex: 0, caseCount: 1, caseId: id };
   const out = solveEquilibrium(ws, loads, newton, options.control ?? {}, tag, options.start);
+  const untensioned = out.status === 'converged' ? untensionedMechanismDof(ws, loads, out.u, newton.pivotTolerance) : -1;
+  if (untensioned >= 0) Object.assign(out, { status: 'singular', singularDofs: [untensioned] });
   const model = ws.model;
   const converged = out.status === 'converged';
   const residual = evaluateState(ws, loads, out.u);
@@ -55,16 +60,19 @@ export function solveCase(ws: Workspace, id: string, loads: CaseLoads, options: 
       factorSeconds: out.factorSeconds, factorizations: out.factorizations,
     },
   };
-  if (!converged) result.message = explain(ws, out.status, out.loadFactor, out.singularDofs);
-  return { result, fields };
+  if (!converged) result.message = explain(ws, out.status, out.loadFactor, out.singularDofs, untensioned >= 0);
+  return { result, fields, displacements: out.u };
 }
 
-function explain(ws: Workspace, status: CaseResult['status'], loadFactor: number, dofs?: number[]): string {
+function explain(ws: Workspace, status: CaseResult['status'], loadFactor: number, dofs?: number[], untensioned = false): string {
   const at = `at load factor ${loadFactor.toFixed(3)}`;
   switch (status) {
     case 'singular': {
       const names = (dofs ?? []).slice(0, 12).map((d) => describeDof(ws.model, d));
       const more = dofs && dofs.length > 12 ? ` and ${dofs.length - 12} more` : '';
+      if (untensioned) {
+        return `mechanism ${at}: in equilibrium, but held only by cables without tension, so it is free to move at ${names.join(', ')}${more}; give those cables pretension, weight or load, or add members there`;
+      }
       return `mechanism ${at}: the structure is free to move at ${names.join(', ')}${more}; add supports or members there`;
     }
     case 'limitPoint':

@@ -1,8 +1,8 @@
 import { validatePattern, adjacencyGraph, type SymmetricPattern } from './symmetric-pattern.ts';
-import { fillReducingOrdering } from './ordering.ts';
-import { invertPermutation, composePermutations, permuteGraph } from './permutation.ts';
+import { invertPermutation, permuteGraph } from './permutation.ts';
 import { permutedUpper } from './permuted-upper.ts';
-import { eliminationTree, eliminationTreeOfPermuted, postorderTree, columnCounts } from './elimination-tree.ts';
+import { blockOrdering, type OrderingMethod } from './block-ordering.ts';
+import { groupDofs, uniformBlocks, validateBlocks } from './dof-groups.ts';
 import type { FactorBackend } from './factor-backend.ts';
 import { SimplicialBackend } from './simplicial-backend.ts';
 import { SupernodalLDL } from './supernodal-ldl.ts';
@@ -10,10 +10,18 @@ import { dropDecoupledEntries, gatherKeptValues } from './decoupled-dofs.ts';
 import { supernodalStructure, supernodalScatterMap } from './supernodal-symbolic.ts';
 
 export interface SparseLDLOptions {
-  /** Consecutive DOFs grouped for the ordering (3 for truss/cable models; 1 = plain). Default 3. */
+  /** DOFs per node when every node has the same number (3 for truss/cable models; 1 = plain). Default 3. */
   blockSize?: number;
-  /** Fill-reducing ordering. Default 'amd'. */
-  ordering?: 'amd' | 'natural';
+  /**
+   * First DOF of each node (ascending, last entry n), for nodes with different DOF counts (3 or 6);
+   * overrides blockSize. The orderings and the symbolic analysis work on these node blocks.
+   */
+  blockStart?: ArrayLike<number>;
+  /**
+   * Fill-reducing ordering: 'auto' (default: AMD and nested dissection, the one with the smaller
+   * nnz(L) kept), 'amd', 'nd' or 'natural'.
+   */
+  ordering?: OrderingMethod;
   /** Numeric kernel: 'supernodal' (default, fast) or 'simplicial' (up-looking, the reference). */
   kernel?: 'supernodal' | 'simplicial';
   /** Supernodal kernel: merge small supernodes into their parents (explicit zeros). Default false:
@@ -36,8 +44,9 @@ const TINY = 1e-300;
  * refactorised many times with one sparsity pattern. D may have negative entries (indefinite K);
  * a (near) zero pivot is reported, not hidden.
  *
- * Pipeline: fill-reducing ordering (AMD on the node graph) → postorder of the elimination tree →
- * symbolic analysis (column counts, storage) → numeric factor per tangent → solve.
+ * Pipeline: DOF groups of the node blocks (dof-groups.ts) → fill-reducing ordering of the group
+ * graph, AMD or nested dissection by predicted fill (block-ordering.ts) → postorder of the
+ * elimination tree → symbolic analysis (column counts, storage) → numeric factor per tangent → solve.
  * Sources: T. A. Davis, Direct Methods for Sparse Linear Systems, SIAM 2006, ch. 4;
  * Amestoy, Davis & Duff, SIAM J. Matrix Anal. Appl. 17(4), 1996 (AMD).
  */
@@ -47,6 +56,8 @@ export class SparseLDL {
   readonly factorNonzeros: number;
   /** perm[k] = original index of permuted row/column k. */
   readonly perm: Int32Array;
+  /** The ordering analyse used, and nnz(L) predicted for every ordering it tried. */
+  readonly ordering: { chosen: 'amd' | 'nd' | 'natural'; predicted: { amd?: number; nd?: number; natural?: number } };
   private readonly backend: FactorBackend;
   private readonly pattern: SymmetricPattern;
   private readonly nnzA: number;
@@ -59,8 +70,10 @@ export class SparseLDL {
 
   private constructor(
     pattern: SymmetricPattern, perm: Int32Array, backend: FactorBackend, keep: Int32Array | null, reducedNnz: number,
+    ordering: SparseLDL['ordering'],
   ) {
     const n = pattern.n;
+    this.ordering = ordering;
     this.keep = keep;
     this.reducedValues = keep ? new Float64Array(reducedNnz) : null;
     this.n = n;
@@ -84,19 +97,18 @@ export class SparseLDL {
     const pattern = reduction ? reduction.reduced : original;
     const blockSize = options.blockSize ?? 3;
     if (!Number.isInteger(blockSize) || blockSize < 1) throw new Error(`SparseLDL: blockSize must be a positive integer, got ${blockSize}`);
-    const method = options.ordering ?? 'amd';
-    if (method !== 'amd' && method !== 'natural') throw new Error(`SparseLDL: unknown ordering '${String(method)}'`);
+    const method = options.ordering ?? 'auto';
+    if (!['auto', 'amd', 'nd', 'natural'].includes(method)) throw new Error(`SparseLDL: unknown ordering '${String(method)}'`);
+    const blocks = options.blockStart ?? uniformBlocks(n, blockSize);
+    validateBlocks(n, blocks);
     const graph = adjacencyGraph(pattern);
-    const order = fillReducingOrdering(pattern, method, blockSize, graph);
-    // Postorder the elimination tree of the ordered matrix (same fill, contiguous subtrees).
-    const post = postorderTree(eliminationTreeOfPermuted(n, graph.ptr, graph.idx, order, invertPermutation(order)));
-    const perm = composePermutations(order, post);
+    const ord = blockOrdering(n, groupDofs(n, graph, blocks), method);
+    const perm = ord.perm;
     const kernel = options.kernel ?? 'supernodal';
     if (kernel !== 'supernodal' && kernel !== 'simplicial') throw new Error(`SparseLDL: unknown kernel '${String(kernel)}'`);
     const pinv = invertPermutation(perm);
     const pg = permuteGraph(graph.ptr, graph.idx, perm, pinv); // C's adjacency, both triangles
-    const parent = eliminationTree(n, pg.ptr, pg.idx);
-    const counts = columnCounts(n, pg.ptr, pg.idx, parent);
+    const { parent, counts } = ord;
     let backend: FactorBackend;
     if (kernel === 'simplicial') {
       backend = new SimplicialBackend(n, permutedUpper(pattern, pinv), parent, counts);
@@ -104,7 +116,7 @@ export class SparseLDL {
       const st = supernodalStructure(n, pg.ptr, pg.idx, parent, counts, options.relaxedSupernodes ?? false);
       backend = new SupernodalLDL(st, supernodalScatterMap(st, pattern.colPtr, pattern.rowIdx, pinv));
     }
-    return new SparseLDL(original, perm, backend, reduction ? reduction.keep : null, pattern.colPtr[n]);
+    return new SparseLDL(original, perm, backend, reduction ? reduction.keep : null, pattern.colPtr[n], { chosen: ord.chosen, predicted: ord.predicted });
   }
 
   /**

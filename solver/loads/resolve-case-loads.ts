@@ -1,7 +1,7 @@
 /**
  * Load case / combination → CaseLoads on an AnalysisModel.
- * Nodal loads go to user nodes; self-weight, ice mass and temperature are carried as data and
- * applied by the analysis; wind becomes a follower load (solver/loads/wind.ts).
+ * Nodal loads go to user nodes, with the weight of added node masses when self-weight is on;
+ * member self-weight, ice mass and temperature are carried as data and applied by the analysis; wind becomes a follower load (solver/loads/wind.ts).
  */
 import type { CombinationSpec, LoadCaseSpec, ProjectFile } from '../project/types.ts';
 import type { AnalysisModel } from '../model/analysis-model.ts';
@@ -11,6 +11,7 @@ import { iceMassPerLength } from './ice.ts';
 import { prescribedDisplacements } from '../model/supports.ts';
 import { withAreaLoads } from './panel-loads.ts';
 import { withAncillaryLoads } from './ancillary-loads.ts';
+import { addNodeMassWeight } from './node-mass.ts';
 
 export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spec: LoadCaseSpec): CaseLoads {
   const nodal = new Float64Array(3 * model.nodeCount);
@@ -28,6 +29,7 @@ export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spe
       for (let q = 0; q < 3; q++) moments[3 * i + q] += load.moment[q];
     }
   }
+  if (spec.selfWeight ?? true) addNodeMassWeight(model, project, 1, nodal);
   return withAncillaryLoads(model, project, spec, withAreaLoads(model, project, spec, {
     nodal,
     selfWeight: spec.selfWeight ?? true,

@@ -47,7 +47,7 @@ export function supportArrays(project: ProjectFile, dofs: DofMap): { fixed: Uint
       if (k === undefined) return;
       if (!(k >= 0 && Number.isFinite(k))) throw new Error(`${where}: springs.${name} must be a finite stiffness ≥ 0, got ${k}`);
       const d = dofOf(dofs, i, dir);
-      if (fixed[d]) throw new Error(`${where}: springs.${name} is on a restrained direction; remove it from "fixed" or drop the spring`);
+      if (fixed[d]) throw new Error(`${where}: springs.${name} is on a restrained direction; take that letter out of "fixed" or drop the spring`);
       springs ??= new Float64Array(dofs.count);
       springs[d] += k;
     });

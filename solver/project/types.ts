@@ -82,6 +82,8 @@ export interface NodeSpec {
   fixed?: string;
   /** Elastic supports (springs to ground), see NodeSprings. */
   springs?: NodeSprings;
+  /** Added lumped mass at the node (equipment, antennas, fittings), kg: weighs with self-weight, vibrates in modes. */
+  mass?: number;
 }
 
 export interface SectionSpec {

@@ -19,13 +19,18 @@ import { benchNet, formatRow } from './linalg/factor-bench.ts';
 
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
 
-export interface CholmodRun { mode: string; factorMs: number; factorMinMs: number; nnzL: number; ordering: string; relres: number; analyzeMs: number; solveMs: number }
+export interface CholmodRun { order: string; mode: string; factorMs: number; factorMinMs: number; nnzL: number; ordering: string; relres: number; analyzeMs: number; solveMs: number }
 export interface CholmodComparison {
   skipped?: string;
   cells: number;
   ours?: ReturnType<typeof benchNet>;
+  /** Ours with AMD only (the previous default), for the fill and analyse comparison. */
+  oursAmd?: ReturnType<typeof benchNet>;
   cholmod: CholmodRun[];
 }
+
+/** CHOLMOD runs: [ordering, mode]; 'default' = CHOLMOD's own strategy (AMD, and METIS too when AMD fills much). */
+const CHOLMOD_RUNS: ReadonlyArray<readonly [string, string]> = [['amd', 'simp'], ['amd', 'super'], ['metis', 'super'], ['default', 'super']];
 
 function tryCompile(src: string, exe: string): string | undefined {
   try {
@@ -38,10 +43,10 @@ function tryCompile(src: string, exe: string): string | undefined {
   }
 }
 
-function runCholmod(exe: string, kFile: string, bFile: string, reps: number, mode: string, cells: number): CholmodRun {
+function runCholmod(exe: string, kFile: string, bFile: string, reps: number, order: string, mode: string, cells: number): CholmodRun {
   let out: string;
   try {
-    out = execFileSync(exe, [kFile, bFile, String(reps), '--order', 'amd', '--mode', mode, '--label', `net${cells}-${mode}`], {
+    out = execFileSync(exe, [kFile, bFile, String(reps), '--order', order, '--mode', mode, '--label', `net${cells}-${mode}`], {
       encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'], env: { ...process.env, OPENBLAS_NUM_THREADS: '1', OMP_NUM_THREADS: '1' },
     });
   } catch (e) {
@@ -53,12 +58,15 @@ function runCholmod(exe: string, kFile: string, bFile: string, reps: number, mod
   const j = JSON.parse(line.slice(5)) as Record<string, number | string | boolean>;
   if (j.spd !== true) throw new Error(`CHOLMOD reports the net tangent as not positive definite (--mode ${mode})`);
   return {
-    mode, factorMs: Number(j.factorize_ms), factorMinMs: Number(j.factorize_min_ms), nnzL: Number(j.nnzL),
+    order, mode, factorMs: Number(j.factorize_ms), factorMinMs: Number(j.factorize_min_ms), nnzL: Number(j.nnzL),
     ordering: String(j.ordering), relres: Number(j.relres), analyzeMs: Number(j.analyze_ms), solveMs: Number(j.solve_ms),
   };
 }
 
-/** CHOLMOD is run with AMD only (--order amd), so the fill comparison is AMD against AMD. */
+/**
+ * CHOLMOD with AMD (simplicial and supernodal), with METIS, and with its default strategy; ours
+ * with its default ('auto': AMD or nested dissection by predicted fill) and with AMD only.
+ */
 export function runCholmodComparison(cells = 100, reps = 15, rounds = 3): CholmodComparison {
   const src = path.resolve(repoRoot, '..', 'shared', 'bench', 'cholmod_bench.c');
   if (!existsSync(src)) return { skipped: `CHOLMOD benchmark source not found at ${src}`, cells, cholmod: [] };
@@ -84,33 +92,42 @@ function compareIn(dir: string, src: string, cells: number, reps: number, rounds
   // median, so a burst of load does not land on one side only.
   const best = new Map<string, CholmodRun>();
   let ours: ReturnType<typeof benchNet> | undefined;
+  let oursAmd: ReturnType<typeof benchNet> | undefined;
   for (let round = 0; round < rounds; round++) {
     const mine = benchNet(cells, 'supernodal', reps);
     if (!ours || mine.factorMs < ours.factorMs) ours = mine;
-    for (const mode of ['simp', 'super']) {
-      const run = runCholmod(exe, kFile, bFile, reps, mode, cells);
-      const prev = best.get(mode);
-      if (!prev || run.factorMs < prev.factorMs) best.set(mode, run);
+    const amd = benchNet(cells, 'supernodal', Math.min(reps, 3), 'amd');
+    if (!oursAmd || amd.analyseRepeatMs < oursAmd.analyseRepeatMs) oursAmd = amd;
+    for (const [order, mode] of CHOLMOD_RUNS) {
+      const run = runCholmod(exe, kFile, bFile, reps, order, mode, cells);
+      const prev = best.get(`${order} ${mode}`);
+      if (!prev || run.factorMs < prev.factorMs) best.set(`${order} ${mode}`, run);
     }
   }
   const cholmod = [...best.values()];
-  return { cells, ours, cholmod };
+  return { cells, ours, oursAmd, cholmod };
 }
 
 export function printCholmodComparison(c: CholmodComparison): void {
   if (c.skipped) { console.log(`CHOLMOD comparison skipped: ${c.skipped}`); return; }
   if (!c.ours) return;
   console.log(formatRow(c.ours));
+  if (c.oursAmd) console.log(formatRow(c.oursAmd));
   for (const r of c.cholmod) {
-    console.log(`CHOLMOD ${r.mode.padEnd(5)} (${r.ordering}, 1 thread): nnz(L)=${r.nnzL}  analyse ${r.analyzeMs.toFixed(1)} ms  ` +
+    console.log(`CHOLMOD --order ${r.order} ${r.mode.padEnd(5)} (${r.ordering}, 1 thread): nnz(L)=${r.nnzL}  analyse ${r.analyzeMs.toFixed(1)} ms  ` +
       `factor ${r.factorMs.toFixed(1)} ms (min ${r.factorMinMs.toFixed(1)})  solve ${r.solveMs.toFixed(2)} ms  residual ${r.relres.toExponential(2)}  ` +
       `→ ours / CHOLMOD factor = ${(c.ours.factorMs / r.factorMs).toFixed(2)} (medians), ${(c.ours.factorMinMs / r.factorMinMs).toFixed(2)} (minima)`);
   }
-  const ref = c.cholmod[0];
-  if (ref) console.log(`fill: nnz(L) ours ${c.ours.nnzL} vs CHOLMOD AMD ${ref.nnzL} (ratio ${(c.ours.nnzL / ref.nnzL).toFixed(3)})`);
+  const find = (order: string) => c.cholmod.find((r) => r.order === order && r.mode === 'super');
+  const amd = find('amd'), metis = find('metis'), def = find('default');
+  if (amd) console.log(`fill: nnz(L) ours ${c.ours.nnzL} (${c.ours.ordering}) vs CHOLMOD AMD ${amd.nnzL} (ratio ${(c.ours.nnzL / amd.nnzL).toFixed(3)})`);
+  if (metis) console.log(`fill: nnz(L) ours ${c.ours.nnzL} vs CHOLMOD METIS ${metis.nnzL} (ratio ${(c.ours.nnzL / metis.nnzL).toFixed(3)}); ours AMD only ${c.oursAmd?.nnzL ?? '?'}`);
+  const ratio = (a: number, b?: CholmodRun) => (b ? `${(a / b.analyzeMs).toFixed(2)}× CHOLMOD ${b.order} (${b.analyzeMs.toFixed(1)} ms)` : '');
+  console.log(`symbolic analysis (repeat median): ours ${c.ours.analyseRepeatMs.toFixed(1)} ms = ${ratio(c.ours.analyseRepeatMs, def)}, ${ratio(c.ours.analyseRepeatMs, amd)}; `
+    + `first in process ${c.ours.analyseMs.toFixed(1)} ms; ours AMD only ${c.oursAmd?.analyseRepeatMs.toFixed(1) ?? '?'} ms`);
 }
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {
   const cells = Number(process.argv[2] ?? 100);
-  printCholmodComparison(runCholmodComparison(cells));
+  printCholmodComparison(cells >= 150 ? runCholmodComparison(cells, 3, 1) : runCholmodComparison(cells));
 }

@@ -50,10 +50,12 @@ async function main(): Promise<void> {
   (await import('./startup-bench.ts')).runStartupBenchmark();
   printNets(netRows([20, 40, 60, 80, 100]));
   const cholmod = await import('./cholmod-compare.ts');
-  console.log('\nOne numeric factorisation of the 100×100 net tangent against CHOLMOD');
+  console.log('\nOrdering, symbolic analysis and one numeric factorisation of the 100×100 and 200×200 net tangents against CHOLMOD');
   cholmod.printCholmodComparison(cholmod.runCholmodComparison(100));
+  cholmod.printCholmodComparison(cholmod.runCholmodComparison(200, 3, 1));
   await optionalSuite('design/design-bench.ts', 'runDesignBenchmark');
   await optionalSuite('tuning/live-resolve-bench.ts', 'runLiveResolveBenchmark');
+  await optionalSuite('modes/modes-bench.ts', 'runModesBenchmark');
 }
 
 await main();

@@ -16,6 +16,10 @@ import { fitGuyedMastLevels, runGenerator, type GuyedMastParams } from '../../ma
 import { startWebHost, type WebHost } from '../../main/web/web-server.ts';
 import { launchBrowser, type Browser } from './browser.ts';
 import { buildRenderer, REPO, SCREENSHOTS } from './serve-app.ts';
+import { pixelStats } from './pixels.ts';
+import { solveProject } from '../../solver/index.ts';
+import { blankProject } from '../../renderer/model/new-project.ts';
+import { defaultGuyedMast, newRecordId } from '../../renderer/generators/generator-defaults.ts';
 
 let root: string;
 let host: WebHost;
@@ -114,3 +118,219 @@ describe('generator re-runs in the app', () => {
     expect(pageErrors).toEqual([]);
   }, 180_000);
 });
+
+describe('a new project, edited without a text editor', () => {
+  it('New… from the guyed-mast generator, then project information, temperatures, checks, tuning targets and nodal loads, each one undo step', async () => {
+    await page.getByTestId('new-project').click();
+    page.once('dialog', (d) => void d.accept()); // discard the re-generated, unsaved mast
+    await page.getByTestId('new-project-dialog').waitFor({ timeout: 5000 }).catch(async () => {
+      await page.getByTestId('new-project').click();
+      await page.getByTestId('new-project-dialog').waitFor();
+    });
+    await page.getByTestId('new-project-name').fill('Kestrel Hill test mast');
+    await page.getByTestId('new-from-guyedMast').check();
+    await page.getByTestId('new-project-create').click();
+    const form = page.getByTestId('guyed-mast-form');
+    await form.waitFor();
+    await shot('34-new-project-generate.png');
+    await page.getByTestId('generate-dialog').getByRole('button', { name: 'Generate' }).click();
+    await page.getByTestId('generate-notes').waitFor();
+    await page.getByTestId('generate-close').click();
+    expect(await page.getByTestId('project-name').textContent()).toContain('Kestrel Hill test mast');
+    expect(await statusText()).toContain('model valid');
+    const members = await memberCount();
+    expect(members).toBeGreaterThan(50);
+
+    // Project information and temperatures.
+    await page.getByTestId('right-tab-project').click();
+    const panel = page.getByTestId('project-panel');
+    for (const [field, text] of [['site', 'Kestrel Hill (invented)'], ['client', 'Test client'], ['engineer', 'A. Checker']]) {
+      await panel.locator(`input[data-field="${field}"]`).fill(text);
+      await panel.locator(`input[data-field="${field}"]`).press('Enter');
+    }
+    await panel.locator('input[data-field="referenceTemperature"]').fill('10');
+    await panel.locator('input[data-field="referenceTemperature"]').press('Enter');
+    await panel.locator('input[data-field="installationTemperatures"]').fill('-10, 0, 10, 20, 30');
+    await panel.locator('input[data-field="installationTemperatures"]').press('Enter');
+    await expect.poll(() => page.getByTestId('undo').getAttribute('title')).toContain('Installation temperatures');
+    await page.getByTestId('undo').click();
+    expect(await panel.locator('input[data-field="installationTemperatures"]').inputValue()).toBe('');
+    expect(await panel.locator('input[data-field="referenceTemperature"]').inputValue()).toBe('10');
+    await page.getByTestId('undo').click();
+    expect(await panel.locator('input[data-field="referenceTemperature"]').inputValue()).toBe('15');
+    expect(await panel.locator('input[data-field="engineer"]').inputValue()).toBe('A. Checker');
+    await shot('35-project-panel.png');
+
+    // Check settings: a displacement limit on the node selected in the Nodes table, an uplift check, a sag limit.
+    // The same project made in Node: its mast top and where it sits in the Nodes table.
+    const made = runGenerator(blankProject('x'), { id: newRecordId(blankProject('x'), 'guyedMast'), kind: 'guyedMast', params: defaultGuyedMast([0, 0, 0]) as unknown as Record<string, unknown> }).project;
+    expect(made.members.length).toBe(members);
+    const rid = made.generators![0].id;
+    const topNode = made.nodes.filter((n) => n.id.startsWith(`${rid}/P`)).reduce((a, b) => (b.at[2] > a.at[2] ? b : a));
+    const top = topNode.id;
+    const base = `${rid}/base`;
+    await page.getByTestId('tab-nodes').click();
+    await page.locator('[data-testid="table-nodes"] .scroller').evaluate((el, y) => { el.scrollTop = y; el.dispatchEvent(new Event('scroll')); }, Math.max(0, made.nodes.indexOf(topNode) * 24 - 100));
+    await page.locator(`[data-testid="table-nodes"] tr[data-row-id="${top}"] td.rowhead`).click();
+    await page.getByTestId('right-tab-checks').click();
+    const checks = page.getByTestId('checks-editor');
+    await page.getByTestId('displacement-limit').fill('0.3');
+    await page.getByTestId('add-displacement').click();
+    await expect.poll(() => checks.textContent()).toContain(`|Δ| of ${top} ≤ 0.3 m`);
+    await page.getByTestId('uplift-node').fill(base);
+    await page.getByTestId('add-uplift').click();
+    await page.getByTestId('sag-group').selectOption(`${rid}/guys`);
+    await page.getByTestId('add-sag').click();
+    await expect.poll(() => checks.textContent()).toContain(`${rid}/guys: sag ≤ 2 % of span`);
+    await page.getByTestId('uplift-node').fill('no such node');
+    await page.getByTestId('add-uplift').click();
+    expect(await page.getByTestId('checks-editor-errors').textContent()).toMatch(/no such node/);
+    await shot('36-checks-editor.png');
+
+    // Tuning: a plumb target (base and top typed) and a reaction target.
+    await page.getByTestId('right-tab-tuning').click();
+    await page.getByTestId('tuning-target-kind').selectOption('plumb');
+    await page.getByTestId('tuning-target-base').fill(base);
+    await page.getByTestId('tuning-target-top').fill(top);
+    await page.getByTestId('tuning-target-value').fill('0.05');
+    await page.getByTestId('tuning-add-target').click();
+    await page.getByTestId('tuning-target-kind').selectOption('reaction');
+    await page.getByTestId('tuning-target-node').fill(base);
+    await page.getByTestId('tuning-target-value').fill('60');
+    await page.getByTestId('tuning-add-target').click();
+    const setup = (await page.getByTestId('tuning-setup').textContent()) ?? '';
+    expect(setup).toMatch(/plumb|top/i);
+    expect(setup).toMatch(/reaction/i);
+    await shot('37-tuning-targets.png');
+
+    // A nodal load on the picked node, then its Fz edited in the table.
+    await page.getByTestId('tab-nodalLoads').click();
+    const loads = page.getByTestId('nodal-loads');
+    await loads.locator('input[data-field="fx"]').fill('2');
+    await loads.locator('input[data-field="fz"]').fill('-1.5');
+    await page.getByTestId('add-nodal-load').click();
+    await expect.poll(() => loads.locator('tbody tr').count()).toBe(1);
+    expect(await loads.locator('tbody tr input.node').inputValue()).toBe(top);
+    await loads.locator('tbody tr input[data-col="fz"]').fill('-2.5');
+    await loads.locator('tbody tr input[data-col="fz"]').press('Tab');
+    await expect.poll(() => page.getByTestId('undo').getAttribute('title')).toContain('Fz of a load in dead');
+    await shot('38-nodal-loads.png');
+    expect(await runAnalysis()).toMatch(/^1 cases converged$/);
+    expect(pageErrors).toEqual([]);
+  }, 180_000);
+});
+
+describe('results that can be trusted', () => {
+  it('a case that did not converge shows no tensions or colours but the reason; reactions per case and as an envelope; loads drawn in 3D', async () => {
+    // The demo mast with a case that heats the guys until they go slack: the mast alone is a mechanism.
+    const melt = structuredClone(project);
+    melt.members = melt.members.filter((m) => m.id !== 'bracket' && m.id !== 'strut');
+    melt.nodes = melt.nodes.filter((n) => n.id !== 'aerial');
+    melt.sections = melt.sections.filter((s) => s.id !== 'bracket tube');
+    melt.loadCases = [melt.loadCases[0], { id: 'melt', label: 'guys heated until slack', temperatureChange: 900 }, melt.loadCases[1]];
+    melt.combinations = [];
+    await writeFile(path.join(root, 'melt.stayset'), JSON.stringify(melt, null, 2));
+    const reference = solveProject(melt).report;
+    expect(reference.cases.map((c) => c.status)).toEqual(['converged', 'limitPoint', 'converged']);
+    // Save the new project into a folder that does not exist yet: the prompt has the focus and adds the extension.
+    await page.getByRole('button', { name: 'Save As…' }).click();
+    await page.getByTestId('path-prompt').waitFor();
+    await page.keyboard.press('Control+A');
+    await page.keyboard.type('jobs/kestrel/test-mast');
+    await page.keyboard.press('Enter');
+    await expect.poll(() => page.getByTestId('dirty-mark').count()).toBe(0);
+    const saved = JSON.parse(await readFile(path.join(root, 'jobs', 'kestrel', 'test-mast.stayset'), 'utf8')) as ProjectFile;
+    expect(saved.meta?.site).toBe('Kestrel Hill (invented)');
+    await page.getByRole('button', { name: 'Open…' }).click();
+    await page.getByTestId('path-input').fill('melt.stayset');
+    await page.getByTestId('path-input').press('Enter');
+    await expect.poll(() => page.getByTestId('project-name').textContent(), { timeout: 20_000 }).toContain('melt');
+    expect(await runAnalysis()).toBe('1 of 3 cases not converged');
+    await page.getByTestId('case-select').selectOption('melt');
+    const state = page.getByTestId('not-converged');
+    await state.waitFor();
+    expect(await state.textContent()).toContain('Case "melt" did not converge: the load passes a limit point');
+    expect(await state.textContent()).toContain(reference.cases[1].message!);
+    expect(await state.textContent()).toContain('What to try');
+    expect(await page.getByTestId('results-table').count()).toBe(0);
+    await page.getByTestId('view-not-converged').waitFor();
+    expect(await page.getByTestId('legend').textContent()).not.toMatch(/kN/);
+    await page.waitForTimeout(300);
+    await shot('39-not-converged.png');
+
+    // Reactions of the dead case and their envelope: the numbers the solver gives, in kN.
+    await page.getByTestId('case-select').selectOption('dead');
+    await page.getByTestId('results-tab-reactions').click();
+    const dead = reference.cases[0];
+    const base = dead.reactions.find((r) => r.node === 'mast/base')!;
+    const row = page.locator('[data-testid="reactions-case"] tr[data-node="mast/base"] td');
+    expect(Number(await row.nth(3).textContent())).toBeCloseTo(base.force[2] / 1000, 1);
+    expect(await page.locator('[data-testid="reactions-case"] tbody tr').count()).toBe(dead.reactions.length);
+    expect(await page.getByTestId('reactions').textContent()).toContain('Envelope over 2 converged cases (1 not converged, left out)');
+    await shot('40-reactions.png');
+
+    // Loads in 3D: a 50 kN load on the mast top draws an orange arrow; the wind case shows its direction.
+    await page.getByTestId('tab-nodalLoads').click();
+    await page.getByTestId('nodal-loads').locator('input[data-field="node"]').fill('mast/P49a');
+    await page.getByTestId('nodal-loads').locator('input[data-field="fx"]').fill('50');
+    await page.getByTestId('nodal-loads').locator('input[data-field="fz"]').fill('0');
+    await page.getByTestId('add-nodal-load').click();
+    await page.getByTestId('fit').click();
+    await page.waitForTimeout(400);
+    const canvas = page.getByTestId('view3d-canvas');
+    const orange = async () => (await pixelStats(page, await canvas.screenshot(), [0x1b, 0x23, 0x30], [[0xff, 0x9f, 0x43]], 60)).matches[0];
+    const withLoad = await orange();
+    await page.getByTestId('show-loads').uncheck();
+    await page.waitForTimeout(300);
+    const without = await orange();
+    expect(withLoad).toBeGreaterThan(without + 20);
+    await page.getByTestId('show-loads').check();
+    await page.getByTestId('case-select').selectOption('wind 0');
+    await expect.poll(() => page.getByTestId('wind-note').textContent()).toContain('toward 0°');
+    await page.waitForTimeout(300);
+    await shot('41-loads-in-3d.png');
+    expect(pageErrors).toEqual([]);
+  }, 180_000);
+});
+
+describe('layout', () => {
+  it('panels and the results strip resize by dragging; tables sort and filter', async () => {
+    const box = async (id: string) => (await page.getByTestId(id).boundingBox())!;
+    const drag = async (id: string, dx: number, dy: number) => {
+      const b = await box(id);
+      await page.mouse.move(b.x + b.width / 2, b.y + b.height / 2);
+      await page.mouse.down();
+      await page.mouse.move(b.x + b.width / 2 + dx / 2, b.y + b.height / 2 + dy / 2);
+      await page.mouse.move(b.x + b.width / 2 + dx, b.y + b.height / 2 + dy);
+      await page.mouse.up();
+    };
+    const left = (await box('left-panel')).width, right = (await box('right-panel')).width, bottom = (await box('bottom-panel')).height;
+    await drag('split-left', -120, 0);
+    await drag('split-right', -80, 0);
+    await drag('split-bottom', 0, -150);
+    expect((await box('left-panel')).width).toBeCloseTo(left - 120, -1);
+    expect((await box('right-panel')).width).toBeCloseTo(right + 80, -1);
+    expect((await box('bottom-panel')).height).toBeCloseTo(bottom + 150, -1);
+
+    // Nodes table: filter to the anchors, sort by x, then reversed.
+    await page.getByTestId('tab-nodes').click();
+    await page.getByTestId('filter-nodes').fill('mast/A');
+    const ids = () => page.locator('[data-testid="table-nodes"] tbody tr[data-row-id]').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-row-id')));
+    await expect.poll(ids).toEqual(['mast/A1', 'mast/A2', 'mast/A3']);
+    await page.locator('[data-testid="table-nodes"] th[data-sort="x"]').click();
+    const melt = JSON.parse(await readFile(path.join(root, 'melt.stayset'), 'utf8')) as ProjectFile;
+    const byX = melt.nodes.filter((n) => n.id.startsWith('mast/A')).sort((a, b) => a.at[0] - b.at[0]).map((n) => n.id);
+    await expect.poll(ids).toEqual(byX);
+    await page.locator('[data-testid="table-nodes"] th[data-sort="x"]').click();
+    await expect.poll(ids).toEqual([...byX].reverse());
+    expect(await page.getByTestId('table-nodes').textContent()).toContain(`3 of ${melt.nodes.length} rows`);
+    // The results table filters too.
+    await page.getByTestId('case-select').selectOption('dead');
+    await page.getByTestId('results-tab-members').click();
+    await page.getByTestId('results-filter').fill('guy L3');
+    await expect.poll(() => page.locator('[data-testid="results-table"] tbody tr[data-member]').count()).toBe(3);
+    await shot('42-resized-sorted-filtered.png');
+    expect(pageErrors).toEqual([]);
+  }, 60_000);
+});
+

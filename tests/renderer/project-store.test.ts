@@ -75,3 +75,17 @@ describe('project store', () => {
     expect(s.dirty).toBe(true);
   });
 });
+
+describe('validation once per edit', () => {
+  beforeEach(() => setActivePinia(createPinia()));
+  it('an edit validates the new document once; undo and redo reuse what is known', () => {
+    const s = useProjectStore();
+    s.load({ path: '/p/d.stayset', name: 'd.stayset', project: demo });
+    const afterLoad = s.validationCount();
+    expect(s.edit('Rename', (p) => ({ ...p, meta: { ...p.meta, name: 'x' } }))).toEqual({ ok: true });
+    expect(s.validationCount()).toBe(afterLoad + 1);
+    s.undo();
+    s.redo();
+    expect(s.validationCount()).toBe(afterLoad + 1);
+  });
+});

@@ -25,6 +25,7 @@ export async function buildCli(outdir = CLI_OUTDIR, quiet = false) {
   };
   await Promise.all([
     build({ ...common, entryPoints: [path.join(repo, 'main/cli/bin.ts')], outfile: path.join(outdir, 'stayset.mjs'),
+      external: ['playwright-core'], // loaded at run time by `stayset report --pdf` only (main/cli/print-pdf.ts)
       banner: { js: `#!/usr/bin/env node\n${requireShim}` } }),
     build({ ...common, entryPoints: [path.join(repo, 'main/analysis/analysis-worker.ts')], outfile: path.join(outdir, 'analysis-worker.mjs'),
       banner: { js: requireShim } }),

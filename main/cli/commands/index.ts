@@ -5,8 +5,10 @@ import { checkCommand } from './check.ts';
 import { tuneCommand } from './tune.ts';
 import { scheduleCommand } from './schedule.ts';
 import { validateCommand } from './validate.ts';
+import { modesCommand } from './modes.ts';
 import { sequenceCommand } from './sequence.ts';
 import { asBuiltCommand } from './asbuilt.ts';
+import { reportCommand } from './report.ts';
 import { windCommand } from './wind.ts';
 
-export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, sequenceCommand, asBuiltCommand, windCommand];
+export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, modesCommand, sequenceCommand, asBuiltCommand, reportCommand, windCommand];

@@ -2,7 +2,7 @@
  * `stayset solve FILE [--json] [--case ID ...]`: validate a project, run the nonlinear analysis
  * of every load case and combination (or the chosen ones) and print the results.
  */
-import { solveProject } from '../../../solver/index.ts';
+import { solveOnWorkers } from '../solve-on-workers.ts';
 import type { ProjectFile, ProjectSolution, SolveControl, SolveProjectOptions, SolveReport } from '../../../solver/index.ts';
 import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
@@ -17,13 +17,14 @@ import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
 import { runTimes, runTimesLine, withStatsProperty } from '../format/run-times.ts';
 
 const HELP = `Solves every load case and combination of a project file (geometrically nonlinear,
-tension-only cables) and prints, per case: status, member forces, node displacements and
-support reactions.
+tension-only cables, beam-columns) and prints, per case: status, member forces, beam end actions,
+node displacements and support reactions (with moments where rotations are restrained).
 
 Options:
   --json        Print {"cases": [...], "disclaimer": "...", "stats": {...}} instead of tables.
-                Numbers are SI (N, m); tension is positive; reactions are forces the supports
-                exert. stats: inputSeconds, analysisSeconds (model and symbolic analysis),
+                Numbers are SI (N, m, N·m); tension is positive; reactions are forces and moments
+                the supports exert; members[].beam holds beam end actions (node on member end,
+                local axes). stats: inputSeconds, analysisSeconds (model and symbolic analysis),
                 newtonSeconds, outputSeconds, seconds (all of the solve).
   --case ID     Solve only this load case or combination (repeat for several).
   --help        Show this help.
@@ -34,7 +35,7 @@ Exit status:
   2  bad input: missing or invalid file, unknown option or case (messages on stderr, nothing on stdout)`;
 
 /** The solver entry the command calls (solveProject; replaceable in tests of the output guards). */
-export type ProjectSolver = (project: ProjectFile, control?: SolveControl, options?: SolveProjectOptions) => ProjectSolution;
+export type ProjectSolver = (project: ProjectFile, control?: SolveControl, options?: SolveProjectOptions) => ProjectSolution | Promise<ProjectSolution>;
 
 async function run(solver: ProjectSolver, args: string[], io: CliIO): Promise<number> {
   const opts = parseOptions(args, { json: { type: 'boolean' }, case: { type: 'string', multiple: true } });
@@ -56,7 +57,7 @@ async function run(solver: ProjectSolver, args: string[], io: CliIO): Promise<nu
   let report: SolveReport;
   try {
     const only = requested.length > 0 ? { only: [...new Set(requested)] } : {};
-    report = filterReport(solver(project, {}, only).report, requested);
+    report = filterReport((await solver(project, {}, only)).report, requested);
   } catch (e) {
     io.err(`${file}: the analysis failed: ${(e as Error).message}\n`);
     return EXIT.notConverged;
@@ -89,4 +90,5 @@ export function makeSolveCommand(solver: ProjectSolver): CliCommand {
   };
 }
 
-export const solveCommand: CliCommand = makeSolveCommand(solveProject);
+/** Several cases: one worker thread per core (solve-on-workers.ts). */
+export const solveCommand: CliCommand = makeSolveCommand(solveOnWorkers);

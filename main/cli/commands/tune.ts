@@ -16,7 +16,7 @@ import { fixed } from '../format/number-text.ts';
 import { forceIn, lengthIn, unitLabels, type ScheduleUnits } from '../../common/schedule/schedule-units.ts';
 import { textTable } from '../format/text-table.ts';
 import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
-import { writeFileAtomic } from '../../store/atomic-write.ts';
+import { writeTunedFile } from '../tune-write.ts';
 import { resolve } from 'node:path';
 
 /** Exit status when every case converged but some tuning target is not met. */
@@ -32,7 +32,8 @@ conflict or cannot be met are explained.
 Options:
   --write       Save the tuned pretensions (and tuning.lastRun) into FILE: written to a temp file
                 beside it, synced, then renamed over it; the previous file is kept as FILE.bak.
-                Not done when a case did not converge.
+                Not done when a case did not converge, nor when FILE changed on disk while
+                tune ran (the other version is kept; exit 1).
   --json        Print {"status", "targets", "variables", "iterations", "evaluations",
                 "diagnosis", "summary", "cancelled", "disclaimer"} instead of tables (SI: N, m).
 Tables use the project's display units (display.units: SI → kN, m; US → kip, ft).
@@ -40,7 +41,7 @@ Tables use the project's display units (display.units: SI → kN, m; US → kip,
 
 Exit status:
   0  every target met
-  1  a case did not converge (nothing written)
+  1  a case did not converge, or --write could not save (nothing written)
   2  bad input: missing or invalid file, no tuning section, unknown groups, cases or nodes
   3  the cases converged but some target is not met`;
 
@@ -99,11 +100,9 @@ async function run(args: string[], io: CliIO): Promise<number> {
       ...result.project,
       tuning: { ...result.project.tuning!, lastRun: { date: new Date().toISOString(), summary: result.summary } },
     };
-    const target = resolve(io.cwd, file);
-    try {
-      await writeFileAtomic(target, serializeProject(tuned), { backup: true });
-    } catch (e) {
-      io.err(`${file}: saving failed (${(e as NodeJS.ErrnoException).code ?? (e as Error).message}); the file is unchanged\n`);
+    const failed = await writeTunedFile(resolve(io.cwd, file), file, serializeProject(tuned), read.stamp);
+    if (failed !== null) {
+      io.err(`${failed}\n`);
       return EXIT.notConverged;
     }
     io.err(`${file}: tuned pretensions written (previous file kept as ${file}.bak)\n`);

@@ -1,13 +1,15 @@
 /**
  * The readable form of a solve report: per case a header line (status, iterations, load steps,
  * DOFs, time, residual), then tables of members (forces in kN, tension positive; sag in m),
- * user-node displacements (m) and support reactions (kN, force the support exerts on the
- * structure). Cases that did not converge show the reason instead of tables.
+ * user-node displacements (m), beam end actions where there are beams, and support reactions (kN,
+ * force the support exerts on the structure; moments in kN·m where rotations are restrained).
+ * Cases that did not converge show the reason instead of tables.
  */
 import type { CaseResult, ProjectFile, SolveReport } from '../../../solver/index.ts';
 import { kN, fixed, metres3, metres4 } from './number-text.ts';
 import { textTable } from './text-table.ts';
 import { actionCaseTitle } from './action-case-title.ts';
+import { beamTable, supportMomentTable } from './beam-report-text.ts';
 
 function caseTitle(project: ProjectFile, id: string): string {
   const action = actionCaseTitle(project, id);
@@ -87,7 +89,11 @@ export function caseText(project: ProjectFile, c: CaseResult): string {
   if (c.slackMembers.length > 0) parts.push(`  slack members: ${c.slackMembers.join(', ')}`);
   parts.push('', '  Members (tension positive)', memberTable(project, c));
   parts.push('', '  Node displacements', nodeTable(project, c));
+  const beams = beamTable(c);
+  if (beams) parts.push('', '  Beam end actions (node on member end, member local axes; N tension positive)', beams);
   parts.push('', '  Support reactions (force on the structure)', reactionTable(c));
+  const moments = supportMomentTable(c);
+  if (moments) parts.push('', '  Support moments (moment on the structure)', moments);
   return parts.join('\n');
 }
 

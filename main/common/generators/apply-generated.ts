@@ -3,7 +3,7 @@ import type { GeneratedParts } from './types.ts';
 import { NodeFollower, nearestMember } from './follow-parts.ts';
 import { followCaseLoads, followChecks, followNode, followTuning, type FollowContext } from './follow-references.ts';
 import { dropGroupReferences } from './drop-group-references.ts';
-import { followPanels } from './follow-panels.ts';
+import { followPanelRegions } from './follow-panel-regions.ts';
 
 /**
  * What to do with the user's parts that use generated parts a re-run no longer makes:
@@ -171,7 +171,16 @@ export function applyGenerated(project: ProjectFile, record: GeneratorRecord, pa
   if (tuning) out.tuning = tuning;
   out = dropGroupReferences(out, gone, notes);
   if (!out.groups?.length) delete out.groups;
-  const panels = followPanels(project, rid, parts, notes);
-  if (panels) out.panels = panels;
+  const newPanels = followPanelRegions((project.panels ?? []).filter((pa) => ownedBy(rid, pa.id)), oldAt, parts.panels ?? [], newAt, notes);
+  const userPanels = (project.panels ?? []).filter((pa) => !ownedBy(rid, pa.id)).flatMap((pa) => {
+    const nodes = pa.nodes.map((n) => followNode(ctx, `panel "${pa.id}"`, n, 'any'));
+    if (nodes.some((n) => n === null || lonely.has(n)) || new Set(nodes).size < nodes.length) {
+      notes.push(`panel "${pa.id}": its corners no longer make a loop of distinct nodes: dropped`);
+      return [];
+    }
+    return [nodes.every((n, i) => n === pa.nodes[i]) ? pa : { ...pa, nodes: nodes as string[] }];
+  });
+  const panels = [...userPanels, ...newPanels];
+  if (panels.length > 0 || project.panels) out.panels = panels;
   return { project: out, notes, dangling };
 }

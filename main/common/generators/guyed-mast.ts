@@ -2,6 +2,7 @@ import type { GroupSpec, MemberSpec, NodeSpec, SectionSpec, Vec3 } from '../../.
 import { DEFAULT_GUY_PRETENSION_SHARE, DEFAULT_LATTICE_DRAG_FACTOR } from '../../../solver/index.ts';
 import type { GeneratedParts, SectionInput } from './types.ts';
 import { ParamCheck, roundCoord, sectionSpec } from './types.ts';
+import { stickMastParts, stickMembers } from './guyed-mast-stick.ts';
 
 /**
  * Parameters of a guyed mast. Lengths m, angles degrees (counter-clockwise from +x in plan),
@@ -21,8 +22,16 @@ export interface GuyedMastParams {
   anchorOrientation?: number;
   /** Anchor height relative to the base, m (default 0). */
   anchorElevation?: number;
-  /** 'lattice': triangular lattice of legs, horizontals and diagonals as bars; 'singleBar': one equivalent bar per span between guy levels. */
-  mastModel?: 'lattice' | 'singleBar';
+  /**
+   * 'lattice': triangular lattice of legs, horizontals and diagonals as bars, each leg foot pinned
+   * on the foundation; 'singleBar': one equivalent bar per span between guy levels; 'stick':
+   * beam-columns on the mast axis (guyed-mast-stick.ts), which may stand above the top guy level.
+   */
+  mastModel?: 'lattice' | 'singleBar' | 'stick';
+  /** Stick model: the beam section (default the lattice's equivalent beam). Lengths m. */
+  stickSection?: { shape: 'latticeEquivalent' } | { shape: 'tube'; diameter: number; wall: number };
+  /** Stick model: target element length, m (default 2). */
+  stickElementLength?: number;
   /** Face width of the triangular lattice (side of the triangle), m. */
   faceWidth: number;
   /** Target panel height, m (default = faceWidth). */
@@ -69,7 +78,14 @@ export function checkGuyedMastParams(p: GuyedMastParams, recordId: string): void
     if (p.pretension === undefined && g && !(g.breakingLoad && g.breakingLoad > 0)) c.fail('guy.breakingLoad: needed to set the pretension as a share of it (or give pretension)');
   }
   c.section('leg', p.leg);
-  if ((p.mastModel ?? 'lattice') === 'lattice') c.section('bracing', p.bracing);
+  const stickLattice = p.mastModel === 'stick' && (p.stickSection?.shape ?? 'latticeEquivalent') === 'latticeEquivalent';
+  if ((p.mastModel ?? 'lattice') === 'lattice' || stickLattice) c.section('bracing', p.bracing);
+  if (p.mastModel === 'stick' && p.stickSection?.shape === 'tube') {
+    c.positive('stickSection.diameter', p.stickSection.diameter);
+    c.positive('stickSection.wall', p.stickSection.wall);
+    if (p.stickSection.wall * 2 > p.stickSection.diameter) c.fail('stickSection.wall: more than half the diameter');
+  }
+  if (p.stickElementLength !== undefined) c.positive('stickElementLength', p.stickElementLength);
   if (p.mastModel === 'singleBar' && n > 0 && Math.abs(p.guyLevels[n - 1] - p.height) > 1e-9) {
     c.fail('guyLevels: the single-bar mast model is a pinned bar chain, so the top guy level must be at the mast top');
   }
@@ -90,9 +106,12 @@ function panelLevels(p: GuyedMastParams): number[] {
 }
 
 /**
- * A guyed mast: pinned base, triangular lattice (or single bar line), guys as multi-segment
- * cables from anchors (fixed xyz) to the mast at each guy level, pretensioned. Ids start with
- * `<recordId>/`; groups "<id>/mast legs", "<id>/mast bracing", "<id>/guys", "<id>/guys level k".
+ * A guyed mast: triangular lattice (each leg foot pinned on the foundation, so the base takes
+ * twist and the mast cannot spin about its axis), single bar line (pinned base) or stick of
+ * beam-columns (pivot base), guys as multi-segment cables from anchors (fixed xyz) to the mast at
+ * each guy level, pretensioned. Ids start with `<recordId>/` (the lattice's first foot, and the
+ * other models' base node, is `<recordId>/base`); groups "<id>/mast legs", "<id>/mast bracing",
+ * "<id>/guys", "<id>/guys level k".
  */
 export function generateGuyedMast(recordId: string, p: GuyedMastParams): GeneratedParts {
   checkGuyedMastParams(p, recordId);
@@ -108,18 +127,34 @@ export function generateGuyedMast(recordId: string, p: GuyedMastParams): Generat
     nodes.push(n);
     return nid;
   };
-  const member = (mid: string, kind: 'cable' | 'bar', from: string, to: string, section: string, list: string[], extra: Partial<MemberSpec> = {}) => {
+  const member = (mid: string, kind: MemberSpec['kind'], from: string, to: string, section: string, list: string[], extra: Partial<MemberSpec> = {}) => {
     members.push({ id: mid, kind, from, to, section, generatedBy: recordId, ...extra });
     list.push(mid);
   };
   const az0 = p.anchorOrientation ?? 0;
   const lattice = (p.mastModel ?? 'lattice') === 'lattice';
   const latticeInfo = { faceWidth: p.faceWidth, solidity: p.solidity ?? 0.2, ...(p.latticeDragFactor !== undefined ? { dragFactor: p.latticeDragFactor } : {}) };
-  const baseId = node(id('base'), [bx, by, bz], 'xyz');
+  const r = p.faceWidth / Math.sqrt(3);
+  const footAt = (j: number): Vec3 => {
+    const a = ((az0 + 120 * j) * Math.PI) / 180;
+    return [bx + r * Math.cos(a), by + r * Math.sin(a), bz];
+  };
+  const stick = p.mastModel === 'stick';
+  const baseId = node(id('base'), lattice ? footAt(0) : [bx, by, bz], stick ? 'xyzrz' : 'xyz');
   const attach: string[][] = []; // per guy level: node id per guy
   let topId = baseId;
 
-  if (lattice) {
+  if (stick) {
+    const parts = stickMastParts(id('mast'), p);
+    sections.push(parts.section);
+    const ids = [baseId, ...parts.levels.slice(1).map((z, k) => node(id(`M${k + 1}`), [bx, by, bz + z]))];
+    for (const m of stickMembers(recordId, ids, parts)) member(m.id, 'beam', m.from, m.to, m.section, legIds, { segments: m.segments });
+    p.guyLevels.forEach((zg) => {
+      const k = parts.levels.findIndex((z) => Math.abs(z - zg) < 1e-9);
+      attach.push(Array.from({ length: p.guysPerLevel }, () => ids[k]));
+    });
+    topId = ids[ids.length - 1];
+  } else if (lattice) {
     // Each of the 3 leg lines carries a third of the whole-mast lattice drag (lattice.share).
     const cf = p.latticeDragFactor ?? DEFAULT_LATTICE_DRAG_FACTOR;
     sections.push(sectionSpec(id('leg'), p.leg, {
@@ -127,9 +162,9 @@ export function generateGuyedMast(recordId: string, p: GuyedMastParams): Generat
       label: p.leg.label ?? 'mast leg (a third of the lattice drag per leg)',
     }));
     sections.push(sectionSpec(id('bracing'), { ...p.bracing!, diameter: undefined, dragCoefficient: undefined }, { label: p.bracing!.label ?? 'mast bracing' }));
-    const r = p.faceWidth / Math.sqrt(3);
     const levels = panelLevels(p);
-    const ring: string[][] = [];
+    // Base: the three leg feet, each pinned on the foundation ("<id>/base", "<id>/base b", "… c").
+    const ring: string[][] = [[baseId, node(id('base b'), footAt(1), 'xyz'), node(id('base c'), footAt(2), 'xyz')]];
     levels.forEach((z, k) => {
       if (k === 0) return;
       ring[k] = [0, 1, 2].map((j) => {
@@ -137,10 +172,9 @@ export function generateGuyedMast(recordId: string, p: GuyedMastParams): Generat
         return node(id(`P${k}${'abc'[j]}`), [bx + r * Math.cos(a), by + r * Math.sin(a), bz + z]);
       });
       for (let j = 0; j < 3; j++) {
-        const below = k === 1 ? baseId : ring[k - 1][j];
-        member(id(`leg ${k}${'abc'[j]}`), 'bar', below, ring[k][j], id('leg'), legIds);
+        member(id(`leg ${k}${'abc'[j]}`), 'bar', ring[k - 1][j], ring[k][j], id('leg'), legIds);
         member(id(`hor ${k}${'abc'[j]}`), 'bar', ring[k][j], ring[k][(j + 1) % 3], id('bracing'), braceIds);
-        if (k > 1) member(id(`diag ${k}${'abc'[j]}`), 'bar', ring[k - 1][j], ring[k][(j + 1) % 3], id('bracing'), braceIds);
+        member(id(`diag ${k}${'abc'[j]}`), 'bar', ring[k - 1][j], ring[k][(j + 1) % 3], id('bracing'), braceIds);
       }
     });
     topId = ring[levels.length - 1][0];
@@ -166,7 +200,7 @@ export function generateGuyedMast(recordId: string, p: GuyedMastParams): Generat
   }
 
   const groups: GroupSpec[] = [
-    { id: id('mast legs'), label: lattice ? 'mast legs' : 'mast', members: legIds },
+    { id: id('mast legs'), label: lattice ? 'mast legs' : stick ? 'mast (beam-columns)' : 'mast', members: legIds },
   ];
   if (braceIds.length) groups.push({ id: id('mast bracing'), label: 'mast bracing', members: braceIds });
   const allGuys: string[] = [];

@@ -79,6 +79,7 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
 
   const reactions = report.cases.filter((c) => c.converged).flatMap((c) => c.reactions.map((r) => ({
     node: r.node, case: c.id, force: [...r.force] as [number, number, number], magnitude: Math.hypot(...r.force),
+    ...(r.moment ? { moment: [...r.moment] as [number, number, number] } : {}),
   })));
   reactions.sort((a, b) => (a.node < b.node ? -1 : a.node > b.node ? 1 : 0));
 

@@ -16,6 +16,9 @@ export function scheduleCsv(doc: ScheduleDocument): string {
   const l = unitLabels(u);
   const fd = u === 'US' ? 3 : 2;
   const F = (n: number | null) => num(n === null ? null : forceIn(u, n), fd);
+  // Moments: force unit × length unit (kN·m, kip·ft); columns only when a support restrains a rotation.
+  const M = (n: number | null) => num(n === null ? null : lengthIn(u, forceIn(u, n)), fd);
+  const withMoments = doc.reactions.some((r) => r.moment);
   const L = (m: number | null) => num(m === null ? null : lengthIn(u, m), 4);
   const h = doc.header;
   const records: string[][] = [
@@ -39,8 +42,8 @@ export function scheduleCsv(doc: ScheduleDocument): string {
     ...doc.members.map((m) => [m.id, ...m.tensionByCase.map(F)]),
     [],
     [`Reactions (${l.force})`],
-    ['support', 'case', 'Fx', 'Fy', 'Fz', '|R|'],
-    ...doc.reactions.map((r) => [r.node, r.case, ...r.force.map(F), F(r.magnitude)]),
+    ['support', 'case', 'Fx', 'Fy', 'Fz', '|R|', ...(withMoments ? [`Mx (${l.force}·${l.length})`, `My (${l.force}·${l.length})`, `Mz (${l.force}·${l.length})`] : [])],
+    ...doc.reactions.map((r) => [r.node, r.case, ...r.force.map(F), F(r.magnitude), ...(withMoments ? (r.moment ?? [null, null, null]).map(M) : [])]),
   ];
   if (doc.temperatureTable) {
     records.push([], [`Installation tension by temperature (${l.force}); header = temperature (${l.temperature})`],

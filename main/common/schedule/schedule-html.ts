@@ -6,7 +6,7 @@
  * borders, never by colour alone.
  */
 import type { ScheduleDocument } from './schedule-types.ts';
-import { formatForce, formatLength, formatNumber, formatTemperature, unitLabels } from './schedule-units.ts';
+import { formatForce, formatLength, formatMoment, formatNumber, formatTemperature, momentLabel, unitLabels } from './schedule-units.ts';
 
 export function escapeHtml(s: string): string {
   return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
@@ -66,9 +66,13 @@ function scheduleMarkup(doc: ScheduleDocument): { title: string; body: string } 
       ['Member', ...cs.map((c) => `${e(c.label)}${c.converged ? '' : ' <b>(NOT CONVERGED)</b>'}<br><small>${e(c.id)}</small>`)], rows));
   }
 
-  const reactionRows = doc.reactions.map((r) => [`<b>${e(r.node)}</b>`, e(r.case), ...r.force.map((f) => formatForce(u, f)), formatForce(u, r.magnitude)]);
+  // Moment columns only when some support restrains a rotation (beam models).
+  const withMoments = doc.reactions.some((r) => r.moment);
+  const momentCells = (m: [number, number, number] | undefined) => (withMoments ? (m ? m.map((v) => formatMoment(u, v)) : ['—', '—', '—']) : []);
+  const reactionRows = doc.reactions.map((r) => [`<b>${e(r.node)}</b>`, e(r.case), ...r.force.map((f) => formatForce(u, f)), formatForce(u, r.magnitude), ...momentCells(r.moment)]);
+  const momentHeads = withMoments ? [`Mx (${momentLabel(u)})`, `My (${momentLabel(u)})`, `Mz (${momentLabel(u)})`] : [];
   const reactionsHtml = doc.reactions.length
-    ? table(`Anchor and base reactions (force the support exerts on the structure, ${l.force})`, ['Support', 'Case', 'Fx', 'Fy', 'Fz', '|R|'], reactionRows, 2)
+    ? table(`Anchor and base reactions (force and moment the support exerts on the structure, ${l.force})`, ['Support', 'Case', 'Fx', 'Fy', 'Fz', '|R|', ...momentHeads], reactionRows, 2)
     : '<p>No support reactions (no converged case).</p>';
 
   let tuningHtml = '<p>No tuning run is recorded for this project.</p>';

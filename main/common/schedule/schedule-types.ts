@@ -65,6 +65,8 @@ export interface ScheduleReactionRow {
   /** Force the support exerts on the structure [Fx, Fy, Fz], N. */
   force: [number, number, number];
   magnitude: number;
+  /** Moment the support exerts [Mx, My, Mz], N·m, where it restrains or springs a rotation. */
+  moment?: [number, number, number];
 }
 
 export interface ScheduleTuning {

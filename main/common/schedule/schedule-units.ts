@@ -46,6 +46,16 @@ export function formatForce(units: ScheduleUnits, newtons: number | null | undef
   return text(newtons === null || newtons === undefined ? newtons : forceIn(units, newtons), units === 'US' ? 2 : 1);
 }
 
+/** Moment N·m → kN·m or kip·ft. */
+export function formatMoment(units: ScheduleUnits, newtonMetres: number | null | undefined): string {
+  if (newtonMetres === null || newtonMetres === undefined) return text(newtonMetres, 1);
+  return text(units === 'US' ? newtonMetres / (NEWTONS_PER_KIP * METRES_PER_FOOT) : newtonMetres / 1000, units === 'US' ? 2 : 1);
+}
+
+export function momentLabel(units: ScheduleUnits): string {
+  return units === 'US' ? 'kip·ft' : 'kN·m';
+}
+
 export function formatLength(units: ScheduleUnits, metres: number | null | undefined, digits = 3): string {
   return text(metres === null || metres === undefined ? metres : lengthIn(units, metres), digits);
 }

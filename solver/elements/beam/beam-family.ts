@@ -50,9 +50,7 @@ function prepareBeams(project: ProjectFile, model: AnalysisModel, elements: Int3
     let r = 0;
     if (e === mt.firstElement) r |= bits.start;
     if (e === mt.firstElement + mt.elementCount - 1) r |= bits.end;
-    if ((r & RELEASE_A_ALL) === RELEASE_A_ALL && (r & RELEASE_B_ALL) === RELEASE_B_ALL) {
-      throw new Error(`${where}: every rotation is released at both ends; model it as kind "bar"`);
-    }
+    // releaseBits refuses torsion released at both ends, so at most one end is fully released.
     data.releases[k] = r;
     data.EIy[k] = section.E * section.Iy!;
     data.EIz[k] = section.E * section.Iz!;
@@ -63,7 +61,7 @@ function prepareBeams(project: ProjectFile, model: AnalysisModel, elements: Int3
 }
 
 const consts: BeamConstants = {
-  frame: new Float64Array(9), Lr: 0, S0: 0, E: 0, A: 0, thermalStrain: 0, EIy: 0, EIz: 0, GJ: 0, releases: 0,
+  frame: new Float64Array(9), start: new Float64Array(3), Lr: 0, S0: 0, E: 0, A: 0, thermalStrain: 0, EIy: 0, EIz: 0, GJ: 0, releases: 0,
 };
 const x9 = new Float64Array(9);
 const fe = new Float64Array(12);
@@ -78,7 +76,8 @@ function assembleBeams(ctx: AssemblyContext, block: FamilyBlock, slots: Int32Arr
     const e = list[k];
     const o = 12 * k;
     for (let q = 0; q < 3; q++) {
-      x9[q] = dX[3 * e + q] + u[dofs[o + 6 + q]] - u[dofs[o + q]];
+      x9[q] = u[dofs[o + 6 + q]] - u[dofs[o + q]];
+      consts.start[q] = dX[3 * e + q];
       x9[3 + q] = dofs[o + 3] >= 0 ? u[dofs[o + 3 + q]] : 0;
       x9[6 + q] = dofs[o + 9] >= 0 ? u[dofs[o + 9 + q]] : 0;
     }

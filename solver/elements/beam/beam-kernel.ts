@@ -1,9 +1,9 @@
 /**
  * Internal force and consistent tangent of one co-rotational beam element: the gradient and the
  * exact Hessian of its strain energy (beam-energy.ts, one second-order Taylor evaluation), mapped
- * from the 9 energy variables (d, θ_a, θ_b) to the 12 element DOFs
+ * from the 9 energy variables (Δ, θ_a, θ_b) to the 12 element DOFs
  *   [u_a (x, y, z), θ_a (x, y, z), u_b (x, y, z), θ_b (x, y, z)]   (m, rad; forces N, N·m)
- * with d = (X_b − X_a) + u_b − u_a, so ∂/∂u_a = −∂/∂d and ∂/∂u_b = ∂/∂d. Allocates nothing.
+ * with Δ = u_b − u_a, so ∂/∂u_a = −∂/∂Δ and ∂/∂u_b = ∂/∂Δ. Allocates nothing.
  */
 import { T, gradientOf, hessianOf } from './taylor2.ts';
 import { beamEnergy, type BeamConstants } from './beam-energy.ts';

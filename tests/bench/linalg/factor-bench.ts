@@ -13,18 +13,26 @@ export interface FactorBenchRow {
   /** First analysis in this call (cold in a fresh process) and a repeated one. */
   analyseMs: number; analyseRepeatMs: number; factorMs: number; factorMinMs: number; solveMs: number; relResidual: number;
   kernel: string;
+  /** Ordering used ('auto' picks AMD or nested dissection by predicted fill) and nnz(L) of each tried. */
+  ordering: string; predicted: Record<string, number | undefined>;
 }
 
 const median = (v: number[]): number => { const s = [...v].sort((a, b) => a - b); const m = s.length >> 1; return s.length % 2 ? s[m] : 0.5 * (s[m - 1] + s[m]); };
 
-export function benchNet(cells: number, kernel: 'supernodal' | 'simplicial' = 'supernodal', reps = 9): FactorBenchRow {
+export function benchNet(
+  cells: number, kernel: 'supernodal' | 'simplicial' = 'supernodal', reps = 9, ordering: 'auto' | 'amd' | 'nd' = 'auto',
+): FactorBenchRow {
   const { pattern, values, n } = netTangent(cells);
   let t0 = performance.now();
-  const ldl = SparseLDL.analyse(pattern, { blockSize: 3, kernel });
+  const ldl = SparseLDL.analyse(pattern, { blockSize: 3, kernel, ordering });
   const analyseMs = performance.now() - t0;
-  t0 = performance.now();
-  SparseLDL.analyse(pattern, { blockSize: 3, kernel });
-  const analyseRepeatMs = performance.now() - t0;
+  const repeats: number[] = [];
+  for (let r = 0; r < 3; r++) {
+    t0 = performance.now();
+    SparseLDL.analyse(pattern, { blockSize: 3, kernel, ordering });
+    repeats.push(performance.now() - t0);
+  }
+  const analyseRepeatMs = median(repeats);
   const tf: number[] = [], ts: number[] = [];
   const b = Float64Array.from({ length: n }, (_, i) => Math.sin(0.37 * i) + 0.1);
   const x = new Float64Array(n);
@@ -44,12 +52,13 @@ export function benchNet(cells: number, kernel: 'supernodal' | 'simplicial' = 's
   return {
     cells, n, nnzK: pattern.rowIdx.length, nnzL: ldl.factorNonzeros, analyseMs, analyseRepeatMs,
     factorMs: median(tf), factorMinMs: Math.min(...tf), solveMs: median(ts), relResidual: Math.sqrt(rn / bn), kernel,
+    ordering: ordering === 'auto' ? `auto → ${ldl.ordering.chosen}` : ordering, predicted: ldl.ordering.predicted,
   };
 }
 
 export function formatRow(r: FactorBenchRow): string {
-  return `net ${r.cells}×${r.cells} (${r.kernel}): n=${r.n} nnz(K,lower)=${r.nnzK} nnz(L)=${r.nnzL}  ` +
-    `analyse ${r.analyseMs.toFixed(1)} ms (repeat ${r.analyseRepeatMs.toFixed(1)})  factor median ${r.factorMs.toFixed(1)} ms (min ${r.factorMinMs.toFixed(1)})  ` +
+  return `net ${r.cells}×${r.cells} (${r.kernel}, ${r.ordering}): n=${r.n} nnz(K,lower)=${r.nnzK} nnz(L)=${r.nnzL}  ` +
+    `analyse ${r.analyseMs.toFixed(1)} ms (repeat median ${r.analyseRepeatMs.toFixed(1)})  factor median ${r.factorMs.toFixed(1)} ms (min ${r.factorMinMs.toFixed(1)})  ` +
     `solve ${r.solveMs.toFixed(2)} ms  residual ${r.relResidual.toExponential(2)}`;
 }
 

@@ -24,12 +24,10 @@ describe('stayset wind', () => {
 });
 
 describe('stayset solve with design actions', () => {
-  it('names patch-wind and member-loss cases and solves them by --case', () => {
-    const r = runStayset(['solve', 'assets/demo-mast.stayset', '--case', 'patch 0 min', '--case', 'guy loss / mast/guy L1-1']);
+  it('names patch-wind cases and solves them by --case', () => {
+    const r = runStayset(['solve', 'assets/demo-mast.stayset', '--case', 'patch 0 min']);
     expect(r.code).toBe(0);
     expect(r.stdout).toContain('Patch wind "patch 0"');
     expect(r.stdout).toContain('S = S_m − √Σ(S_i − S_m)²');
-    expect(r.stdout).toContain('Member loss "guy loss"');
-    expect(r.stdout).toContain('dynamic factor 1.939'); // 1 + exp(−π·0.02/√(1 − 0.02²))
   });
 });

@@ -79,12 +79,12 @@ describe('project files', () => {
 });
 
 describe('save after an outside change', () => {
-  it('re-checks a file that changed on disk since it was last read or written', async () => {
+  it('refuses to save over a file that changed on disk since it was last read or written', async () => {
     const file = path.join(tmp.dir, 'mast.stayset');
     expect((await writeProjectFile(file, sampleMast(), 'save')).ok).toBe(true);
     writeFileSync(file, '{ "damaged by another program"'); // size and time change
     const saved = await writeProjectFile(file, sampleMast(), 'save');
-    expect(!saved.ok && saved.error).toMatch(/could not be read as a Stayset project/);
+    expect(!saved.ok && saved.error).toMatch(/changed on disk since it was opened or last saved here/);
     expect(readFileSync(file, 'utf8')).toBe('{ "damaged by another program"');
   });
 });

@@ -29,6 +29,13 @@ describe('generated models solve', () => {
     converges(runGenerator(emptyProject(), mastRecord({ guysPerLevel: 4, anchorRadius: [16, 22] })).project);
     converges(runGenerator(emptyProject(), mastRecord({ mastModel: 'singleBar', guyLevels: [14, 30] })).project);
   });
+  it('guyed stick mast of beam-columns: lattice equivalent, and a tube with a cantilever above the top guys', () => {
+    converges(runGenerator(emptyProject(), mastRecord({ mastModel: 'stick' })).project);
+    const tube = runGenerator(emptyProject(), mastRecord({ mastModel: 'stick', guyLevels: [10, 20], height: 30, stickSection: { shape: 'tube', diameter: 0.4, wall: 0.01 } })).project;
+    converges(tube);
+    expect(tube.nodes.find((n) => n.id === 'mast/base')!.fixed).toBe('xyzrz');
+    expect(tube.members.filter((m) => m.kind === 'beam')).toHaveLength(3);
+  });
   it('saddle nets over a rectangle and an ellipse, radial net', () => {
     converges(runGenerator(emptyProject(), saddle('rectangle')).project);
     converges(runGenerator(emptyProject(), saddle('ellipse')).project);
@@ -44,6 +51,20 @@ describe('generated models solve', () => {
   });
 });
 
+describe('lattice mast base', () => {
+  it('the leg feet are pinned: the first panel twists a small fraction of a degree under dead load (the single pivot of old twisted ~4°)', () => {
+    const p = runGenerator(emptyProject(), mastRecord()).project;
+    p.loadCases = [{ id: 'dead' }];
+    const c = solveProject(p).report.cases[0];
+    const ring = ['a', 'b', 'c'].map((j) => c.nodes.find((n) => n.id === `mast/P1${j}`)!);
+    const cx = ring.reduce((s, n) => s + n.position[0], 0) / 3, cy = ring.reduce((s, n) => s + n.position[1], 0) / 3;
+    const ox = ring.reduce((s, n) => s + n.position[0] - n.displacement[0], 0) / 3, oy = ring.reduce((s, n) => s + n.position[1] - n.displacement[1], 0) / 3;
+    const a = ring[0];
+    const twist = Math.atan2(a.position[1] - cy, a.position[0] - cx) - Math.atan2(a.position[1] - a.displacement[1] - oy, a.position[0] - a.displacement[0] - ox);
+    expect(Math.abs(twist) * 180 / Math.PI).toBeLessThan(0.1);
+  });
+});
+
 describe('guyed mast parts', () => {
   const { project } = runGenerator(emptyProject(), mastRecord());
   it('tags members, groups by level, pretension 10 % of breaking load (common practice default)', () => {
@@ -54,10 +75,10 @@ describe('guyed mast parts', () => {
     expect(guy.pretension).toBeCloseTo(0.1 * strand(0.012).breakingLoad, -1);
     expect(guy.segments).toBe(8);
     expect(project.nodes.find((n) => n.id === 'mast/base')!.fixed).toBe('xyz');
-    expect(project.nodes.filter((n) => n.fixed === 'xyz')).toHaveLength(4); // base + 3 shared anchors
+    expect(project.nodes.filter((n) => n.fixed === 'xyz')).toHaveLength(6); // 3 leg feet + 3 shared anchors
   });
   it('per-level anchor radii: equal radii share anchors, different radii get their own', () => {
-    const anchors = (r: number[]) => runGenerator(emptyProject(), mastRecord({ anchorRadius: r })).project.nodes.filter((n) => n.fixed === 'xyz').length - 1;
+    const anchors = (r: number[]) => runGenerator(emptyProject(), mastRecord({ anchorRadius: r })).project.nodes.filter((n) => n.fixed === 'xyz').length - 3;
     expect(anchors([20, 20])).toBe(3);
     expect(anchors([16, 22])).toBe(6);
   });

@@ -156,3 +156,17 @@ describe('schedule HTML', () => {
     expect(html).not.toContain('<script>');
   });
 });
+
+describe('schedule reactions with moments (beam models)', () => {
+  it('lists support moments of the tube demo in the HTML and the CSV', async () => {
+    const { demoTubeMast } = await import('../../../fixtures/demos/tube-mast.ts');
+    const p = demoTubeMast();
+    p.loadCases = p.loadCases.filter((c) => c.id === 'wind 0');
+    const rep = solveProject(p).report;
+    const doc = buildSchedule({ project: p, report: rep, checks: runChecks(p, rep), installation: null }, { issueDate: '2026-12-01' });
+    const base = doc.reactions.find((r) => r.node === 'pole/base')!;
+    expect(base.moment).toBeDefined();
+    expect(scheduleHtml(doc)).toMatch(/Mz \(kN·m\)/);
+    expect(scheduleCsv(doc)).toMatch(/Mx \(kN·m\)/);
+  });
+});

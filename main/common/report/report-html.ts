@@ -1,0 +1,126 @@
+/**
+ * ReportDocument → a standalone printable HTML calculation report (no scripts, no external
+ * resources): title and revision block, the caution, design basis, model, materials and sections,
+ * actions and combinations, analysis, governing results per check with the case, envelopes,
+ * cable frequencies, tuning record, installation data and the tensioning sequences. Page
+ * numbers and the caution on every page come from print-css.ts. Key numbers carry a data-n
+ * attribute (e.g. data-n="env-max|G1") so tests can compare them with the CLI.
+ */
+import { escapeHtml as e } from '../schedule/schedule-html.ts';
+import { formatForce, formatLength, formatNumber, formatTemperature, unitLabels } from '../schedule/schedule-units.ts';
+import type { ReportDocument } from './report-types.ts';
+import { printCss } from './print-css.ts';
+import { modelSvg } from './model-svg.ts';
+import { crewSheetBody } from './crew-sheet.ts';
+import { designBasisHtml, actionsHtml, sectionsHtml } from './report-input-sections.ts';
+
+const table = (caption: string, head: string[], rows: string[][]) =>
+  `<table><caption>${caption}</caption><thead><tr>${head.map((h) => `<th>${h}</th>`).join('')}</tr></thead><tbody>${rows.map((r) => `<tr>${r.map((c) => `<td>${c}</td>`).join('')}</tr>`).join('\n')}</tbody></table>`;
+const num = (key: string, text: string) => `<span class="num" data-n="${e(key)}">${text}</span>`;
+
+const CHECK_NAMES: Record<string, string> = {
+  utilisation: 'Utilisation T/(φ·MBL)', minimumTension: 'Least tension of no-slack members', sag: 'Sag', displacement: 'Node displacement', tilt: 'Mast tilt', uplift: 'Support uplift (Fz)',
+};
+
+function governingHtml(d: ReportDocument): string {
+  const u = d.units, l = unitLabels(u);
+  const v = (check: string, x: number) => {
+    if (check === 'utilisation') return formatNumber(x, 3);
+    if (check === 'minimumTension' || check === 'uplift') return `${formatForce(u, x)} ${l.force}`;
+    if (check === 'tilt') return x > 0 ? `1/${formatNumber(1 / x, 0)}` : '0';
+    return `${formatLength(u, x)} ${l.length}`;
+  };
+  const rows = d.governing.map((g) => [CHECK_NAMES[g.check], e(g.item), e(g.case), num(`gov-${g.check}|${g.item}`, v(g.check, g.value)),
+    g.limit === null ? '—' : v(g.check, g.limit), g.ratio === null ? '—' : formatNumber(g.ratio, 3), g.pass ? 'PASS' : '<b class="fail">FAIL</b>']);
+  const failures = d.checks.failures.map((f) => [e(f.kind), e(f.id), e(f.case), e(f.message)]);
+  return (rows.length ? table('Governing value of each check over every case and combination', ['Check', 'Item', 'Case', 'Value', 'Limit', 'Ratio', 'Result'], rows) : '<p>No check settings in the project.</p>')
+    + `<p><b>Overall: ${d.checks.pass ? 'every check passes in every case' : `${d.checks.failures.length} failure(s)`}</b> (φ = ${d.checks.resistanceFactor}).</p>`
+    + (failures.length ? table('Failures (worst case of each)', ['Check', 'Item', 'Case', 'Description'], failures) : '');
+}
+
+function envelopeHtml(d: ReportDocument): string {
+  const u = d.units, l = unitLabels(u);
+  const util = new Map(d.checks.members.map((m) => [m.id, m]));
+  const rows = d.envelope.members.map((m) => [`<b>${e(m.id)}</b>`, num(`env-max|${m.id}`, formatForce(u, m.tensionMax)), e(m.tensionMaxCase), num(`env-min|${m.id}`, formatForce(u, m.tensionMin)), e(m.tensionMinCase),
+    formatLength(u, m.sagMax), util.get(m.id)?.utilisation == null ? '—' : num(`util|${m.id}`, formatNumber(util.get(m.id)!.utilisation, 3)), m.slackCases.length ? `<b>slack</b> ${e(m.slackCases.join(', '))}` : '']);
+  const reactions = d.envelope.reactions.map((r) => [`<b>${e(r.node)}</b>`, num(`react|${r.node}`, formatForce(u, r.magnitudeMax)), e(r.magnitudeMaxCase), formatForce(u, r.min[2]), e(r.minCase[2]), formatForce(u, r.max[2]), e(r.maxCase[2])]);
+  return table(`Member envelope over ${d.envelope.cases.length} converged case(s) (${l.force}, ${l.length})`, ['Member', 'T max', 'case', 'T min', 'case', 'Sag max', 'Utilisation', 'Slack'], rows)
+    + table(`Support reactions envelope (${l.force}; force of the support on the structure)`, ['Support', '|R| max', 'case', 'Fz min', 'case', 'Fz max', 'case'], reactions);
+}
+
+function analysisHtml(d: ReportDocument): string {
+  const rows = d.report.cases.map((c) => [e(c.id), c.converged ? 'yes' : '<b class="fail">NO</b>', String(c.stats.iterations), formatNumber(c.stats.residual * 1e10, 3), String(c.slackMembers.length),
+    d.checks.cases.find((x) => x.id === c.id)?.pass ? 'PASS' : '<b class="fail">FAIL</b>']);
+  return `<p>Geometrically nonlinear static analysis (Total Lagrangian truss elements, Green–Lagrange strain, S = S0 + E(ε − αΔT); cables tension-only). Each case and combination is solved from the pretensioned state to a relative residual of 1e-10.</p>`
+    + table('Cases and combinations', ['Case', 'Converged', 'Newton iterations', 'Residual ×1e-10', 'Slack members', 'Checks'], rows);
+}
+
+function installationHtml(d: ReportDocument): string {
+  const inst = d.installation;
+  if (!inst) return '<p>Installation data was not computed.</p>';
+  const u = d.units, l = unitLabels(u);
+  const rows = inst.members.filter((m) => m.kind === 'cable').map((m) => [`<b>${e(m.id)}</b>`, num(`cut|${m.id}`, formatLength(u, m.cutLength, 4)), num(`inst|${m.id}`, formatForce(u, m.installationTension)),
+    formatNumber(m.frequencies?.tautString ?? null, 3), formatNumber(m.frequencies?.lowestInPlane ?? null, 3), formatNumber(m.frequencies?.lambdaSquared ?? null, 2)]);
+  return `<p>Reference case "${e(inst.referenceCase)}" at ${formatTemperature(u, inst.referenceTemperature)} ${l.temperature}${inst.referenceTemperatureAssumed ? ' (assumed)' : ''}. Cut length = stress-free length (end fittings not included). Frequencies after Irvine (Cable Structures, 1981): f₁ taut string, lowest in-plane with the sag parameter λ².</p>`
+    + table('Cables: cut lengths, installation tension (lower end) and frequencies', ['Cable', `Cut length (${l.length})`, `Tension (${l.force})`, 'f₁ (Hz)', 'f in-plane (Hz)', 'λ²'], rows);
+}
+
+function tuningHtml(d: ReportDocument): string {
+  const t = d.project.tuning;
+  if (!t) return '<p>No tuning is recorded in the project.</p>';
+  const vars = t.variables.map((v) => [e(v.group), e(v.by), v.min === undefined ? '—' : String(v.min), v.max === undefined ? '—' : String(v.max)]);
+  const targets = t.targets.map((x) => [e(x.kind), e(JSON.stringify(x).replace(/^\{|\}$/g, ''))]);
+  return (t.lastRun ? `<p><b>Last run ${e(t.lastRun.date)}:</b> ${e(t.lastRun.summary)}</p>` : '<p>The tuner has not been run on this file (no record).</p>')
+    + table('Tuning variables', ['Group', 'By', 'Min', 'Max'], vars) + table('Tuning targets', ['Kind', 'Definition'], targets);
+}
+
+function revisionsHtml(d: ReportDocument): string {
+  const rows = d.revisions.map((r) => [e(r.revision), e(r.date), e(r.description), e(r.by ?? ''), e(r.checkedBy ?? '')]);
+  return table('Revisions', ['Rev.', 'Date', 'Description', 'By', 'Checked'], rows.length ? rows : [['—', e(d.issueDate), 'not recorded in the project (report.revisions)', '', '']]);
+}
+
+export function reportHtml(d: ReportDocument): string {
+  const p = d.project;
+  const name = p.meta?.name ?? '(unnamed project)';
+  const rev = d.revisions.at(-1)?.revision ?? '—';
+  const sections: [string, string][] = [
+    ['Design basis', designBasisHtml(d)],
+    ['Model', `<p>${d.model.nodes} nodes (${d.model.supports} with supports), ${d.model.members} members (${d.model.cables} cables, ${d.model.bars} bars) in ${d.model.elements} elements, ${d.model.dofs} free degrees of freedom, ${d.model.sections} sections, ${d.model.groups} groups.</p>${modelSvg(p)}`],
+    ['Materials and sections', sectionsHtml(d)],
+    ['Actions and combinations', actionsHtml(d)],
+    ['Analysis', analysisHtml(d)],
+    ['Governing results per check', governingHtml(d)],
+    ['Envelopes', envelopeHtml(d)],
+    ['Installation data and cable frequencies', installationHtml(d)],
+    ['Tuning record', tuningHtml(d)],
+    ['Tensioning sequences', d.sequences.length ? d.sequences.map((s) => crewSheetBody(p, s, d.units, 3)).join('\n') : '<p>No tensioning sequence in the project.</p>'],
+  ];
+  const contents = `<ol>${sections.map(([t]) => `<li>${t}</li>`).join('')}</ol>`;
+  const meta: [string, string][] = [['Project', name], ['Site', p.meta?.site ?? ''], ['Client', p.meta?.client ?? ''], ['Engineer', p.meta?.engineer ?? ''], ['Document', d.documentNumber || '—'], ['Revision', rev], ['Date of issue', d.issueDate]];
+  return `<!DOCTYPE html>
+<html lang="en">
+<head>
+<meta charset="utf-8">
+<title>Calculation report — ${e(name)}</title>
+<style>
+${printCss({ paper: d.paper, caution: d.caution, header: `${name} — calculation report ${d.documentNumber} rev. ${rev}`, footer: `${name} — issued ${d.issueDate}` })}
+.views { display: flex; gap: 6mm; } .views svg { border: 0.6pt solid #000; }
+</style>
+</head>
+<body>
+<header>
+<h1>Calculation report — ${e(name)}</h1>
+<table class="meta"><tbody>${meta.map(([k, v]) => `<tr><th scope="row">${e(k)}</th><td>${e(v)}</td></tr>`).join('')}</tbody></table>
+${revisionsHtml(d)}
+<p class="caution" role="note">${e(d.caution)}</p>
+<h2>Contents</h2>${contents}
+</header>
+<main>
+${sections.map(([t, body], i) => `<section${i === 0 ? '' : ''}><h2>${i + 1}. ${t}</h2>\n${body}</section>`).join('\n')}
+${d.notes.length ? `<h2>Notes</h2><ul>${d.notes.map((n) => `<li>${e(n)}</li>`).join('')}</ul>` : ''}
+<p class="caution" role="note">${e(d.caution)}</p>
+</main>
+</body>
+</html>
+`;
+}

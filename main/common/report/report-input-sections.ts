@@ -1,0 +1,57 @@
+/**
+ * Report sections that restate the input: design basis (check settings, reference temperature,
+ * and a recorded design basis when the project file carries one), materials and sections, load
+ * cases and combinations. Numbers in the chosen display units.
+ */
+import { escapeHtml as e } from '../schedule/schedule-html.ts';
+import { formatForce, formatLength, formatNumber, formatTemperature, unitLabels } from '../schedule/schedule-units.ts';
+import type { ReportDocument } from './report-types.ts';
+
+const table = (caption: string, head: string[], rows: string[][]) =>
+  `<table><caption>${caption}</caption><thead><tr>${head.map((h) => `<th>${h}</th>`).join('')}</tr></thead><tbody>${rows.map((r) => `<tr>${r.map((c) => `<td>${c}</td>`).join('')}</tr>`).join('\n')}</tbody></table>`;
+
+/** A recorded design basis object (a later file format may carry one) as key/value rows. */
+function recordedBasis(value: unknown, prefix = ''): [string, string][] {
+  if (value === null || typeof value !== 'object') return [[prefix || 'value', String(value)]];
+  return Object.entries(value as Record<string, unknown>).flatMap(([k, v]) =>
+    v !== null && typeof v === 'object' && !Array.isArray(v) ? recordedBasis(v, `${prefix}${k}.`) : [[`${prefix}${k}`, Array.isArray(v) ? v.map((x) => (typeof x === 'object' ? JSON.stringify(x) : String(x))).join('; ') : String(v)]]);
+}
+
+export function designBasisHtml(d: ReportDocument): string {
+  const p = d.project, u = d.units, l = unitLabels(u);
+  const s = p.checks ?? {};
+  const basis = (p as unknown as { designBasis?: unknown }).designBasis;
+  const rows: [string, string][] = [
+    ['Reference temperature', p.meta?.referenceTemperature ? `${formatTemperature(u, p.meta.referenceTemperature)} ${l.temperature}` : 'not set (15 °C assumed)'],
+    ['Resistance factor φ on breaking load', String(d.checks.resistanceFactor)],
+    ['Members that must not go slack', (s.noSlackGroups ?? []).join(', ') || '—'],
+    ['Sag limits', (s.sagLimits ?? []).map((x) => `${x.group}: ${'fractionOfSpan' in x.limit ? `${formatNumber(x.limit.fractionOfSpan * 100, 2)} % of span` : `${formatLength(u, x.limit.absolute)} ${l.length}`}`).join('; ') || '—'],
+    ['Displacement limits', (s.displacementLimits ?? []).map((x) => `${x.node}: ${formatLength(u, x.limit)} ${l.length}`).join('; ') || '—'],
+    ['Tilt limits', (s.tiltLimits ?? []).map((x) => `${x.base}→${x.top}: 1/${formatNumber(1 / x.limit, 0)}`).join('; ') || '—'],
+    ['Uplift checked at', (s.upliftNodes ?? []).join(', ') || '—'],
+  ];
+  const recorded = basis === undefined ? '<p>No design basis (codes, classes, partial factors) is recorded in the project file: state it here before issue.</p>'
+    : table('Recorded design basis', ['Item', 'Value'], recordedBasis(basis).map(([k, v]) => [e(k), e(v)]));
+  return recorded + table('Check settings used', ['Item', 'Value'], rows.map(([k, v]) => [e(k), e(v)]))
+    + '<p>Not checked by this program: compression, buckling and connections of bars (mast members), foundations and anchors; check those separately.</p>';
+}
+
+export function sectionsHtml(d: ReportDocument): string {
+  const u = d.units, l = unitLabels(u);
+  const rows = d.project.sections.map((s) => [`<b>${e(s.id)}</b>`, e(s.label ?? ''), formatNumber(s.E / 1e9, 1), formatNumber(s.area * 1e6, 1), formatNumber(s.massPerLength ?? 0, 3),
+    s.breakingLoad ? formatForce(u, s.breakingLoad) : '—', s.thermalExpansion ? formatNumber(s.thermalExpansion * 1e6, 2) : '—', s.diameter ? formatNumber(s.diameter * 1000, 1) : '—']);
+  return table('Sections', ['Section', 'Description', 'E (GPa)', 'A (mm²)', 'Mass (kg/m)', `MBL (${l.force})`, 'α (10⁻⁶/K)', 'Ø (mm)'], rows);
+}
+
+export function actionsHtml(d: ReportDocument): string {
+  const u = d.units, l = unitLabels(u);
+  const cases = d.project.loadCases.map((c) => {
+    const nodal = (c.nodalLoads ?? []).reduce((s, x) => s + Math.hypot(...x.force), 0);
+    return [`<b>${e(c.id)}</b>`, e(c.label ?? ''), c.selfWeight ?? true ? 'yes' : 'no', formatNumber(c.temperatureChange ?? 0, 1),
+      c.nodalLoads?.length ? `${c.nodalLoads.length} loads, Σ|F| ${formatForce(u, nodal)} ${l.force}` : '—',
+      c.wind ? `${formatNumber(c.wind.speed, 1)} m/s toward ${formatNumber(c.wind.direction, 0)}°` : '—', c.ice ? `${formatNumber(c.ice.thickness * 1000, 0)} mm` : '—'];
+  });
+  const combos = (d.project.combinations ?? []).map((c) => [`<b>${e(c.id)}</b>`, e(c.label ?? ''), e(c.factors.map((f) => `${f.factor} × ${f.case}`).join(' + '))]);
+  return table('Load cases', ['Case', 'Description', 'Self-weight', 'ΔT (K)', 'Nodal loads', 'Wind (at 10 m)', 'Ice'], cases)
+    + (combos.length ? table('Combinations (each solved as its own nonlinear case)', ['Combination', 'Description', 'Factors'], combos) : '<p>No combinations.</p>');
+}

@@ -1,0 +1,79 @@
+/**
+ * The calculation report's numbers are those of `stayset solve --json` and `stayset check --json`
+ * on the same file: the test regenerates the report through the CLI and compares every member's
+ * envelope tensions, utilisations, reaction envelope and the governing utilisation, formatted the
+ * way the report formats them.
+ */
+import { describe, expect, it } from 'vitest';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { runStayset } from './run-stayset.ts';
+import { smallMast } from '../../solver/sequence/small-mast.ts';
+import { formatForce, formatNumber } from '../../../main/common/schedule/schedule-units.ts';
+import { serializeProject } from '../../../main/common/project/index.ts';
+
+interface CaseJson { id: string; converged: boolean; members: { id: string; tensionMax: number; tensionMin: number }[]; reactions: { node: string; force: number[] }[] }
+
+function cells(html: string): Map<string, string> {
+  const out = new Map<string, string>();
+  for (const m of html.matchAll(/data-n="([^"]+)">([^<]*)</g)) out.set(m[1].replace(/&amp;/g, '&').replace(/&quot;/g, '"'), m[2]);
+  return out;
+}
+
+describe('stayset report', () => {
+  it('prints the same numbers as solve --json and check --json', () => {
+    const p = smallMast();
+    p.loadCases.push({ id: 'wind 0', wind: { direction: 0, speed: 25 } }, { id: 'cold', temperatureChange: -20 });
+    p.checks = { noSlackGroups: ['m/guys'], upliftNodes: ['m/base'], tiltLimits: [{ base: 'm/base', top: 'm/P16a', limit: 0.01 }] };
+    p.sequences = [{ id: 'top down', steps: [{ group: 'm/guys level 2', setBy: 'force' }, { group: 'm/guys level 1', setBy: 'length' }] }];
+    p.report = { documentNumber: 'T-1', revisions: [{ revision: 'B', date: '2026-12-01', description: 'test issue' }] };
+    const dir = mkdtempSync(join(tmpdir(), 'stayset-report-'));
+    try {
+      const file = join(dir, 'mast.stayset');
+      writeFileSync(file, serializeProject(p));
+      const solve = runStayset(['solve', file, '--json']);
+      expect(solve.code).toBe(0);
+      const check = runStayset(['check', file, '--json']);
+      expect([0, 3]).toContain(check.code);
+      const out = join(dir, 'report.html');
+      const rep = runStayset(['report', file, '--html', out, '--date', '2026-12-01']);
+      expect(rep.code, rep.stderr).toBe(0);
+      const html = readFileSync(out, 'utf8');
+      const n = cells(html);
+      const cases: CaseJson[] = JSON.parse(solve.stdout).cases;
+      const members = p.members.map((m) => m.id);
+      let compared = 0;
+      for (const id of members) {
+        const max = Math.max(...cases.map((c) => c.members.find((m) => m.id === id)!.tensionMax));
+        const min = Math.min(...cases.map((c) => c.members.find((m) => m.id === id)!.tensionMin));
+        expect(n.get(`env-max|${id}`), id).toBe(formatForce('SI', max));
+        expect(n.get(`env-min|${id}`), id).toBe(formatForce('SI', min));
+        compared += 2;
+      }
+      const checkJson = JSON.parse(check.stdout).check;
+      for (const m of checkJson.members) {
+        if (m.utilisation === null) continue;
+        expect(n.get(`util|${m.id}`), m.id).toBe(formatNumber(m.utilisation, 3));
+        compared++;
+      }
+      const top = Math.max(...checkJson.members.filter((m: { utilisation: number | null }) => m.utilisation !== null).map((m: { utilisation: number }) => m.utilisation));
+      expect([...n].find(([k]) => k.startsWith('gov-utilisation|'))![1]).toBe(formatNumber(top, 3));
+      const rMax = Math.max(...cases.map((c) => Math.hypot(...c.reactions.find((r) => r.node === 'm/base')!.force)));
+      expect(n.get('react|m/base')).toBe(formatForce('SI', rMax));
+      expect(compared).toBeGreaterThan(100);
+      expect(html).toContain('test issue');
+      expect(html).toContain('Tensioning sequence top down');
+      expect(html).toContain('Results are for review by a qualified engineer');
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+
+  it('needs an output and refuses to overwrite the project', () => {
+    expect(runStayset(['report', 'assets/demo-mast.stayset']).code).toBe(2);
+    const r = runStayset(['report', 'assets/demo-mast.stayset', '--html', 'assets/demo-mast.stayset']);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain('is the project file itself');
+  });
+});
