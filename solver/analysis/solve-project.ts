@@ -9,6 +9,7 @@ import { buildModel } from '../model/build-model.ts';
 import { resolveCaseLoads, resolveCombinationLoads } from '../loads/resolve-case-loads.ts';
 import { createWorkspace } from './workspace.ts';
 import { solveCase } from './solve-case.ts';
+import { appendActionCases } from './solve-actions.ts';
 import { nowMs } from './clock.ts';
 
 export interface SolveProjectOptions {
@@ -34,6 +35,7 @@ export function solveProject(project: ProjectFile, control: SolveControl = {}, o
     solution.report.cases.push(result);
     solution.fields.push(fields);
   });
+  appendActionCases(project, model, ws, solution, control, wanted);
   const t2 = nowMs();
   solution.report.stats = { analysisSeconds: (t1 - t0) / 1000, newtonSeconds: (t2 - t1) / 1000, seconds: (t2 - t0) / 1000 };
   return solution;

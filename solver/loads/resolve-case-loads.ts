@@ -10,6 +10,7 @@ import { createWindLoad } from './wind.ts';
 import { iceMassPerLength } from './ice.ts';
 import { prescribedDisplacements } from '../model/supports.ts';
 import { withAreaLoads } from './panel-loads.ts';
+import { withAncillaryLoads } from './ancillary-loads.ts';
 import { addNodeMassWeight } from './node-mass.ts';
 
 export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spec: LoadCaseSpec): CaseLoads {
@@ -29,7 +30,7 @@ export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spe
     }
   }
   if (spec.selfWeight ?? true) addNodeMassWeight(model, project, 1, nodal);
-  return withAreaLoads(model, project, spec, {
+  return withAncillaryLoads(model, project, spec, withAreaLoads(model, project, spec, {
     nodal,
     selfWeight: spec.selfWeight ?? true,
     gravityFactor: 1,
@@ -38,7 +39,7 @@ export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spe
     follower: spec.wind ? createWindLoad(model, project, spec) : null,
     moments,
     prescribed: prescribedDisplacements(project, model.dofs, model.fixed, spec),
-  });
+  }));
 }
 
 /**

@@ -7,6 +7,7 @@
  * order of operations.
  */
 import type { WindSpec } from '../project/types.ts';
+import { windForceFactor } from './wind-basis.ts';
 import { DEFAULT_AIR_DENSITY, DEFAULT_POWER_LAW_EXPONENT, DEFAULT_PROFILE_MIN_HEIGHT, DEFAULT_ROUGHNESS_LENGTH } from './defaults.ts';
 
 export interface WindCase {
@@ -22,14 +23,14 @@ export interface WindCase {
   /** Unit flow direction in the x–y plane. */
   cx: number;
   cy: number;
-  /** ½ ρ, kg/m³. */
+  /** ½ ρ × the wind basis force factor (gust × structural, wind-basis.ts), kg/m³. */
   halfRho: number;
 }
 
 export function resolveWindCase(wind: WindSpec): WindCase {
   const p = wind.profile ?? { kind: 'power' as const, exponent: DEFAULT_POWER_LAW_EXPONENT };
   const a = (wind.direction * Math.PI) / 180;
-  const base = { speed10: wind.speed, cx: Math.cos(a), cy: Math.sin(a), halfRho: 0.5 * (wind.airDensity ?? DEFAULT_AIR_DENSITY) };
+  const base = { speed10: wind.speed, cx: Math.cos(a), cy: Math.sin(a), halfRho: 0.5 * (wind.airDensity ?? DEFAULT_AIR_DENSITY) * windForceFactor(wind) };
   switch (p.kind) {
     case 'uniform':
       return { ...base, kind: 0, exponent: 0, zMin: 0, z0: 1, logRef: 1 };

@@ -10,6 +10,7 @@ import {
 } from './defaults.ts';
 import { iceThicknessPerElement } from './ice.ts';
 import { windSpeedAt } from './wind-profile.ts';
+import { windForceFactor } from './wind-basis.ts';
 import { resolveWindCase, windSpeedAtHeight } from './wind-case.ts';
 
 /**
@@ -50,7 +51,7 @@ export function windDirectionVector(directionDeg: number): [number, number] {
 
 /**
  * Drag force on one straight element, N, added into out[0..2]:
- *   F = ½ ρ (Cd D) |V_n| V_n · l,   V_n = V − (V·t) t,
+ *   F = k ½ ρ (Cd D) |V_n| V_n · l,   V_n = V − (V·t) t,   k = gust × structural factor (wind-basis.ts),
  * with t the unit tangent of the current chord a → b, l its current length and V the wind
  * velocity at the chord's mid-height (a cross-flow drag model on the normal velocity component).
  */
@@ -68,7 +69,7 @@ export function elementDragForce(
   const vt = vx * tx + vy * ty;
   const nx = vx - vt * tx, ny = vy - vt * ty, nz = -vt * tz;
   const vn = Math.hypot(nx, ny, nz);
-  const c = 0.5 * (wind.airDensity ?? DEFAULT_AIR_DENSITY) * dragWidth * vn * l;
+  const c = 0.5 * (wind.airDensity ?? DEFAULT_AIR_DENSITY) * windForceFactor(wind) * dragWidth * vn * l;
   out[0] = c * nx; out[1] = c * ny; out[2] = c * nz;
 }
 

@@ -93,3 +93,56 @@ export interface MemberLossSpec {
   /** Critical damping ratio ζ (0 ≤ ζ < 1) for the default factor 1 + exp(−πζ/√(1−ζ²)); default 0 (factor 2). */
   dampingRatio?: number;
 }
+
+/**
+ * What a wind action's speed stands for, and the factors applied to its forces. Velocity pressure
+ * q = ½ ρ V(z)²; the wind forces are multiplied by gustFactor × structuralFactor.
+ */
+export interface WindBasisSpec {
+  /** 'mean': `speed` is a mean wind speed; 'peak': a gust (peak) speed. */
+  velocity: 'mean' | 'peak';
+  /** Averaging period of `speed`, s (600 = 10-minute mean, 3 = 3-second gust). */
+  averagingPeriod: number;
+  /** Factor on the forces of a mean-velocity pressure to reach a peak (gust) pressure; default 1 (none applied). */
+  gustFactor?: number;
+  /** Structural factor (e.g. c_s c_d of EN 1991-1-4 §6) on the forces; default 1 (none applied). */
+  structuralFactor?: number;
+}
+
+/**
+ * Wind from `count` directions: the load case `case` (with wind) is solved once per direction
+ * azimuth + k · 360°/count (k = 0 … count − 1), as cases "<id> <direction>°".
+ */
+export interface WindDirectionsSpec {
+  id: string;
+  label?: string;
+  /** Load case with wind whose direction is replaced. */
+  case: string;
+  /** Number of directions (1 … 72). */
+  count: number;
+  /** First direction, degrees (same convention as WindSpec.direction); default 0. */
+  azimuth?: number;
+}
+
+/**
+ * An ancillary on the structure (antenna, dish, feeder, ladder, platform): its wind drag, weight
+ * and ice. A point item hangs on `node`; a line item (feeder, ladder) runs along the members of
+ * `along.group` between two heights and is spread over their nodes by tributary height.
+ */
+export interface AncillarySpec {
+  id: string;
+  label?: string;
+  kind: 'antenna' | 'dish' | 'feeder' | 'ladder' | 'platform' | 'other';
+  /** Point item: the node it is attached at. */
+  node?: string;
+  /** Line item: the group it runs along and the height range, m above z = 0. */
+  along?: { group: string; from: number; to: number };
+  /** Drag area C_f · A, m² (point item) or m² per metre of height (line item). */
+  dragArea: number;
+  /** Mass, kg (point item) or kg per metre of height (line item). */
+  mass: number;
+  /** Drag area added per metre of radial ice (m²/m; line items per metre of height too); default 0: ice ignored. */
+  iceDragArea?: number;
+  /** Ice mass per metre of radial ice (kg/m; line items per metre of height too); default 0: ice ignored. */
+  iceMass?: number;
+}

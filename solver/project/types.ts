@@ -17,7 +17,7 @@ import type { ActionKind, BucklingCurve, CasePurpose, DesignBasis, MemberDesignR
 export type * from './design-basis-types.ts';
 import type { ReportSpec, SiteMeasurementSetSpec, TensioningSequenceSpec } from './site-types.ts';
 import type { BeamReleases, NodeSprings, PrescribedDisplacement, NodalMoment } from './structure-types.ts';
-import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec } from './actions-types.ts';
+import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec, WindBasisSpec, WindDirectionsSpec, AncillarySpec } from './actions-types.ts';
 
 export type * from './actions-types.ts';
 
@@ -60,6 +60,10 @@ export interface ProjectFile {
   patchWind?: PatchWindSpec[];
   /** Member loss (guy rupture) accidental cases (actions-types.ts). */
   memberLoss?: MemberLossSpec[];
+  /** Wind cases from N directions (actions-types.ts). */
+  windDirections?: WindDirectionsSpec[];
+  /** Antennas, feeders, ladders, platforms: wind, weight and ice (actions-types.ts). */
+  ancillaries?: AncillarySpec[];
 }
 
 export interface ProjectMeta {
@@ -190,6 +194,8 @@ export interface WindSpec {
   airDensity?: number;
   /** Only load these groups (default: every member). */
   groups?: string[];
+  /** What `speed` stands for and the factors on the forces (actions-types.ts). */
+  basis?: WindBasisSpec;
 }
 
 export type WindProfileSpec =

@@ -10,5 +10,6 @@ import { sequenceCommand } from './sequence.ts';
 import { asBuiltCommand } from './asbuilt.ts';
 import { reportCommand } from './report.ts';
 import { combineCommand } from './combine.ts';
+import { windCommand } from './wind.ts';
 
-export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, modesCommand, sequenceCommand, asBuiltCommand, reportCommand, combineCommand];
+export const COMMANDS: CommandRegistry = [solveCommand, checkCommand, tuneCommand, scheduleCommand, validateCommand, modesCommand, sequenceCommand, asBuiltCommand, reportCommand, combineCommand, windCommand];

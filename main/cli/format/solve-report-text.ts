@@ -8,9 +8,12 @@
 import type { CaseResult, ProjectFile, SolveReport } from '../../../solver/index.ts';
 import { kN, fixed, metres3, metres4 } from './number-text.ts';
 import { textTable } from './text-table.ts';
+import { actionCaseTitle } from './action-case-title.ts';
 import { beamTable, supportMomentTable } from './beam-report-text.ts';
 
 function caseTitle(project: ProjectFile, id: string): string {
+  const action = actionCaseTitle(project, id);
+  if (action) return action;
   const lc = project.loadCases.find((c) => c.id === id);
   const combo = project.combinations?.find((c) => c.id === id);
   const label = lc?.label ?? combo?.label;

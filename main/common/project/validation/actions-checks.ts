@@ -125,9 +125,44 @@ function memberLossErrors(root: unknown, errors: string[]): void {
   }
 }
 
+function windDirectionErrors(root: unknown, errors: string[]): void {
+  const cases = caseById(root);
+  const taken = new Set([...cases.keys(), ...idSet(root, 'combinations')]);
+  for (const { index, entry } of entries(root, 'windDirections')) {
+    const label = entryLabel(root, 'windDirections', index);
+    const id = str(entry, 'id');
+    if (id !== undefined && taken.has(id)) errors.push(`${label}: id ${JSON.stringify(id)} is already used by a load case or combination`);
+    const c = str(entry, 'case');
+    const spec = c === undefined ? undefined : cases.get(c);
+    if (c !== undefined && !spec) errors.push(`${label}: case: load case ${JSON.stringify(c)} does not exist`);
+    else if (spec && !isRec(spec.wind)) errors.push(`${label}: case: load case ${JSON.stringify(c)} has no wind`);
+  }
+}
+
+function ancillaryErrors(root: unknown, errors: string[]): void {
+  const nodes = idSet(root, 'nodes');
+  const groups = idSet(root, 'groups');
+  for (const { entry } of entries(root, 'members')) for (const g of strings(entry, 'groups')) groups.add(g.value);
+  for (const { index, entry } of entries(root, 'ancillaries')) {
+    const label = entryLabel(root, 'ancillaries', index);
+    const node = str(entry, 'node');
+    const along = isRec(entry.along) ? entry.along : undefined;
+    if ((node === undefined) === (along === undefined)) errors.push(`${label}: give either "node" (a point item) or "along" (a line item)`);
+    if (node !== undefined && !nodes.has(node)) errors.push(`${label}: node ${JSON.stringify(node)} does not exist`);
+    if (along) {
+      const g = str(along, 'group');
+      if (g !== undefined && !groups.has(g)) errors.push(`${label}: along: group ${JSON.stringify(g)} does not exist`);
+      const from = num(along, 'from'), to = num(along, 'to');
+      if (from !== undefined && to !== undefined && !(to > from)) errors.push(`${label}: along: "to" (${to} m) must be above "from" (${from} m)`);
+    }
+  }
+}
+
 export function actionErrors(root: unknown): string[] {
   const errors: string[] = [];
-  for (const list of ['panels', 'patchWind', 'memberLoss']) duplicateIds(root, list, errors);
+  for (const list of ['panels', 'patchWind', 'memberLoss', 'windDirections', 'ancillaries']) duplicateIds(root, list, errors);
+  ancillaryErrors(root, errors);
+  windDirectionErrors(root, errors);
   panelErrors(root, errors);
   areaLoadErrors(root, errors);
   patchWindErrors(root, errors);

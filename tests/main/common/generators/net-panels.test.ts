@@ -68,8 +68,21 @@ describe('panels made by the net generators', () => {
     expect(again.panels).toHaveLength(10 * 8 + 1);
     expect(again.panels!.filter((x) => x.id === 'my panel')).toHaveLength(1);
     const coarser = runGenerator(first, { ...saddle('rectangle'), params: { ...saddle('rectangle').params, spacing: 4 } });
-    // the user panel's corners are kept although the coarser net (6 × 4 bays) no longer makes N9-0
+    // the coarser net (6 × 4 bays) no longer makes N9-0: the user panel's corners move to the nearest new nodes
     expect(coarser.notes.some((n) => n.includes('panel "my panel"'))).toBe(true);
     expect(validateProject(coarser.project).ok).toBe(true);
+  });
+
+  it('regions follow a re-run by place: each new panel takes the region of the nearest old panel', () => {
+    const first = runGenerator(emptyProject(), saddle('rectangle')).project;
+    const at = new Map(first.nodes.map((n) => [n.id, n.at] as const));
+    const cx = (p: { nodes: string[] }, m: Map<string, readonly number[]>) => p.nodes.reduce((s, id) => s + m.get(id)![0], 0) / p.nodes.length;
+    for (const panel of first.panels!) panel.region = cx(panel, at) < 0 ? 'west' : 'east';
+    const finer = runGenerator(first, { ...saddle('rectangle'), params: { ...saddle('rectangle').params, spacing: 1 } }).project;
+    const newAt = new Map(finer.nodes.map((n) => [n.id, n.at] as const));
+    for (const panel of finer.panels!) {
+      const cx = panel.nodes.reduce((s, id) => s + newAt.get(id)![0], 0) / panel.nodes.length;
+      if (Math.abs(cx) > 1.5) expect(panel.region).toBe(cx < 0 ? 'west' : 'east');
+    }
   });
 });

@@ -65,15 +65,14 @@ describe('demo canopy re-run on a finer grid', () => {
   snowCase.nodalLoads = before.nodes.filter((n) => /^canopy\/N\d+-\d+$/.test(n.id) && !n.fixed).map((n) => ({ node: n.id, force: [0, 0, -300] }));
   const rec = before.generators![0] as GeneratorRecord;
   const out = runGenerator(before, { ...rec, params: { ...rec.params, spacing: 1 } });
-  const snow = out.project.loadCases.find((c) => c.id === 'snow')!.nodalLoads!;
   const nodes = new Map(out.project.nodes.map((n) => [n.id, n]));
-  it('the snow loads cover every free net node of the new grid, none on a support, same total', () => {
-    const freeNet = out.project.nodes.filter((n) => /^canopy\/N\d+-\d+$/.test(n.id) && !n.fixed);
-    expect(new Set(snow.map((l) => l.node))).toEqual(new Set(freeNet.map((n) => n.id)));
-    expect(snow.every((l) => !nodes.get(l.node)!.fixed)).toBe(true);
-    const total = (loads: { force: number[] }[]) => loads.reduce((s, l) => s + l.force[2], 0);
-    expect(total(snow)).toBeCloseTo(total(before.loadCases.find((c) => c.id === 'snow')!.nodalLoads!), 6);
-    expect(out.notes.join('\n')).toMatch(/load case "snow": 115 equal loads \(0, 0, -300\) N on every free "canopy\/N#-#" node → the \d+ such nodes of the new run/);
+  it('the snow and covering are area loads on panels: the panels of the new grid cover the net, regions follow', () => {
+    expect(out.project.loadCases.find((c) => c.id === 'snow')!.areaLoads).toEqual(before.loadCases.find((c) => c.id === 'snow')!.areaLoads);
+    const net = out.project.nodes.filter((n) => /^canopy\/N\d+-\d+$/.test(n.id));
+    const corners = new Set(out.project.panels!.flatMap((p) => p.nodes));
+    expect(net.every((n) => corners.has(n.id))).toBe(true);
+    expect(out.project.panels!.every((p) => p.nodes.every((id) => nodes.has(id)))).toBe(true);
+    expect(new Set(out.project.panels!.map((p) => p.region))).toEqual(new Set(['west', 'east']));
   });
   it('validates, leaves no orphan and the snow case converges', () => {
     valid(out.project);

@@ -92,6 +92,23 @@ describe('patch wind and member loss', () => {
   });
 });
 
+describe('wind basis and directions', () => {
+  it('basis fields and direction sets are checked, naming the entry', () => {
+    const doc = base();
+    doc.loadCases.push({ id: 'w', wind: { direction: 0, speed: 30, basis: { velocity: 'gust', averagingPeriod: 0, gustFactor: -1 } } });
+    doc.windDirections = [{ id: 'dirs', case: 'dead', count: 0 }, { id: 'w', case: 'none', count: 8 }, { id: 'ok', case: 'w', count: 12, azimuth: 15 }];
+    const e = errorsOf(doc);
+    expect(e.some((m) => m.startsWith('loadCases[1] "w": "wind.basis.velocity"'))).toBe(true);
+    expect(e.some((m) => m.startsWith('loadCases[1] "w": "wind.basis.averagingPeriod" must be positive'))).toBe(true);
+    expect(e.some((m) => m.startsWith('loadCases[1] "w": "wind.basis.gustFactor" must be positive'))).toBe(true);
+    expect(e).toContain('windDirections[0] "dirs": case: load case "dead" has no wind');
+    expect(e.some((m) => m.startsWith('windDirections[0] "dirs": "count" must be a whole number from 1 to 72'))).toBe(true);
+    expect(e).toContain('windDirections[1] "w": id "w" is already used by a load case or combination');
+    expect(e).toContain('windDirections[1] "w": case: load case "none" does not exist');
+    expect(e.filter((m) => m.startsWith('windDirections[2]'))).toEqual([]);
+  });
+});
+
 // ---- schema ↔ actions-types.ts (same method as schema-matches-types.test.ts) ----
 type Schema = Record<string, unknown>;
 const defs = (projectSchema as Schema).definitions as Record<string, Schema>;
@@ -111,6 +128,7 @@ describe('schema matches solver/project/actions-types.ts', () => {
   const pairs: [string, Schema][] = [
     ['PanelSpec', defs.panel], ['PressureCoefficientSpec', defs.pressureCoefficient], ['AreaLoadSpec', defs.areaLoad],
     ['PatchWindSpec', defs.patchWind], ['MemberLossSpec', defs.memberLoss],
+    ['WindBasisSpec', defs.windBasis], ['WindDirectionsSpec', defs.windDirections], ['AncillarySpec', defs.ancillary],
   ];
   it.each(pairs)('%s: same fields, optionality and order', (name, schema) => {
     expect(schemaFields(schema)).toEqual(interfaceFields(name));

@@ -3,8 +3,8 @@
 "use strict";
 export const validate = validate10;
 export default validate10;
-const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 2","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":2,"x-message":"{field} must be 2"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"designBasis":{"$ref":"#/definitions/designBasis"},"sequences":{"type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"$ref":"#/definitions/report"},"panels":{"type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"type":"array","items":{"$ref":"#/definitions/memberLoss"}}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"},"mass":{"$ref":"#/definitions/nonNegative"}}},"springs":{"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"shape":{"enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"$ref":"#/definitions/positive"},"termination":{"enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"$ref":"#/definitions/positive"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"purpose":{"$ref":"#/definitions/casePurpose"},"action":{"enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"sequenceStep":{"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}},"sequence":{"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}},"report":{"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}},"casePurpose":{"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"},"designBasis":{"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}},"panel":{"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}},"pressureCoefficient":{"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}},"areaLoad":{"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}},"memberLoss":{"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}}}};
-const schema150 = {"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}};
+const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 2","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":2,"x-message":"{field} must be 2"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"designBasis":{"$ref":"#/definitions/designBasis"},"sequences":{"type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"$ref":"#/definitions/report"},"panels":{"type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"type":"array","items":{"$ref":"#/definitions/memberLoss"}},"windDirections":{"type":"array","items":{"$ref":"#/definitions/windDirections"}},"ancillaries":{"type":"array","items":{"$ref":"#/definitions/ancillary"}}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"},"mass":{"$ref":"#/definitions/nonNegative"}}},"springs":{"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"shape":{"enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"$ref":"#/definitions/positive"},"termination":{"enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"$ref":"#/definitions/positive"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"},"basis":{"$ref":"#/definitions/windBasis"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"purpose":{"$ref":"#/definitions/casePurpose"},"action":{"enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"sequenceStep":{"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}},"sequence":{"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}},"report":{"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}},"casePurpose":{"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"},"designBasis":{"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}},"panel":{"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}},"pressureCoefficient":{"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}},"areaLoad":{"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}},"memberLoss":{"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}},"windBasis":{"type":"object","additionalProperties":false,"required":["velocity","averagingPeriod"],"properties":{"velocity":{"enum":["mean","peak"]},"averagingPeriod":{"$ref":"#/definitions/positive"},"gustFactor":{"$ref":"#/definitions/positive"},"structuralFactor":{"$ref":"#/definitions/positive"}}},"windDirections":{"type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"case":{"$ref":"#/definitions/id"},"count":{"type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"type":"number"}}},"ancillary":{"type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"kind":{"enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"$ref":"#/definitions/id"},"along":{"type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"$ref":"#/definitions/id"},"from":{"type":"number"},"to":{"type":"number"}}},"dragArea":{"$ref":"#/definitions/nonNegative"},"mass":{"$ref":"#/definitions/nonNegative"},"iceDragArea":{"$ref":"#/definitions/nonNegative"},"iceMass":{"$ref":"#/definitions/nonNegative"}}}}};
+const schema154 = {"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}};
 const func2 = Object.prototype.hasOwnProperty;
 const schema12 = {"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}};
 const schema13 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}};
@@ -1670,7 +1670,7 @@ return errors === 0;
 }
 
 const schema49 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"purpose":{"$ref":"#/definitions/casePurpose"},"action":{"enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}};
-const schema64 = {"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"};
+const schema68 = {"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"};
 const schema51 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}};
 
 function validate24(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
@@ -1847,7 +1847,7 @@ validate24.errors = vErrors;
 return errors === 0;
 }
 
-const schema55 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema55 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"},"basis":{"$ref":"#/definitions/windBasis"}}};
 const schema57 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
 
 function validate27(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
@@ -2119,6 +2119,147 @@ validate27.errors = vErrors;
 return errors === 0;
 }
 
+const schema61 = {"type":"object","additionalProperties":false,"required":["velocity","averagingPeriod"],"properties":{"velocity":{"enum":["mean","peak"]},"averagingPeriod":{"$ref":"#/definitions/positive"},"gustFactor":{"$ref":"#/definitions/positive"},"structuralFactor":{"$ref":"#/definitions/positive"}}};
+
+function validate30(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.velocity === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "velocity"},message:"must have required property '"+"velocity"+"'",schema:schema61.required,parentSchema:schema61,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.averagingPeriod === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "averagingPeriod"},message:"must have required property '"+"averagingPeriod"+"'",schema:schema61.required,parentSchema:schema61,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((((key0 === "velocity") || (key0 === "averagingPeriod")) || (key0 === "gustFactor")) || (key0 === "structuralFactor"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema61,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.velocity !== undefined){
+let data0 = data.velocity;
+if(!((data0 === "mean") || (data0 === "peak"))){
+const err3 = {instancePath:instancePath+"/velocity",schemaPath:"#/properties/velocity/enum",keyword:"enum",params:{allowedValues: schema61.properties.velocity.enum},message:"must be equal to one of the allowed values",schema:schema61.properties.velocity.enum,parentSchema:schema61.properties.velocity,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.averagingPeriod !== undefined){
+let data1 = data.averagingPeriod;
+if((typeof data1 == "number") && (isFinite(data1))){
+if(data1 <= 0 || isNaN(data1)){
+const err4 = {instancePath:instancePath+"/averagingPeriod",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data1};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+else {
+const err5 = {instancePath:instancePath+"/averagingPeriod",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data1};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.gustFactor !== undefined){
+let data2 = data.gustFactor;
+if((typeof data2 == "number") && (isFinite(data2))){
+if(data2 <= 0 || isNaN(data2)){
+const err6 = {instancePath:instancePath+"/gustFactor",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data2};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+else {
+const err7 = {instancePath:instancePath+"/gustFactor",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+if(data.structuralFactor !== undefined){
+let data3 = data.structuralFactor;
+if((typeof data3 == "number") && (isFinite(data3))){
+if(data3 <= 0 || isNaN(data3)){
+const err8 = {instancePath:instancePath+"/structuralFactor",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data3};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+else {
+const err9 = {instancePath:instancePath+"/structuralFactor",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data3};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+}
+else {
+const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema61.type,parentSchema:schema61,data};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+validate30.errors = vErrors;
+return errors === 0;
+}
+
 
 function validate26(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -2145,7 +2286,7 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!(((((key0 === "direction") || (key0 === "speed")) || (key0 === "profile")) || (key0 === "airDensity")) || (key0 === "groups"))){
+if(!((((((key0 === "direction") || (key0 === "speed")) || (key0 === "profile")) || (key0 === "airDensity")) || (key0 === "groups")) || (key0 === "basis"))){
 const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema55,data};
 if(vErrors === null){
 vErrors = [err2];
@@ -2231,6 +2372,12 @@ vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.error
 errors = vErrors.length;
 }
 }
+if(data.basis !== undefined){
+if(!(validate30(data.basis, {instancePath:instancePath+"/basis",parentData:data,parentDataProperty:"basis",rootData}))){
+vErrors = vErrors === null ? validate30.errors : vErrors.concat(validate30.errors);
+errors = vErrors.length;
+}
+}
 }
 else {
 const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.type,parentSchema:schema55,data};
@@ -2246,14 +2393,14 @@ validate26.errors = vErrors;
 return errors === 0;
 }
 
-const schema61 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema65 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
 
-function validate31(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate33(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.thickness === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema61.required,parentSchema:schema61,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema65.required,parentSchema:schema65,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2264,7 +2411,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "thickness") || (key0 === "density")) || (key0 === "groups"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema61,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema65,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2332,7 +2479,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema61.type,parentSchema:schema61,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema65.type,parentSchema:schema65,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2341,18 +2488,18 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate31.errors = vErrors;
+validate33.errors = vErrors;
 return errors === 0;
 }
 
-const schema65 = {"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}};
+const schema69 = {"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}};
 
-function validate34(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate36(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.node === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema65.required,parentSchema:schema65,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema69.required,parentSchema:schema69,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2363,7 +2510,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "node") || (key0 === "x")) || (key0 === "y")) || (key0 === "z")) || (key0 === "rx")) || (key0 === "ry")) || (key0 === "rz"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema65,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema69,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2401,7 +2548,7 @@ errors++;
 if(data.x !== undefined){
 let data1 = data.x;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err4 = {instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.properties.x.type,parentSchema:schema65.properties.x,data:data1};
+const err4 = {instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.x.type,parentSchema:schema69.properties.x,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2414,7 +2561,7 @@ errors++;
 if(data.y !== undefined){
 let data2 = data.y;
 if(!((typeof data2 == "number") && (isFinite(data2)))){
-const err5 = {instancePath:instancePath+"/y",schemaPath:"#/properties/y/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.properties.y.type,parentSchema:schema65.properties.y,data:data2};
+const err5 = {instancePath:instancePath+"/y",schemaPath:"#/properties/y/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.y.type,parentSchema:schema69.properties.y,data:data2};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2427,7 +2574,7 @@ errors++;
 if(data.z !== undefined){
 let data3 = data.z;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err6 = {instancePath:instancePath+"/z",schemaPath:"#/properties/z/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.properties.z.type,parentSchema:schema65.properties.z,data:data3};
+const err6 = {instancePath:instancePath+"/z",schemaPath:"#/properties/z/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.z.type,parentSchema:schema69.properties.z,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2440,7 +2587,7 @@ errors++;
 if(data.rx !== undefined){
 let data4 = data.rx;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err7 = {instancePath:instancePath+"/rx",schemaPath:"#/properties/rx/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.properties.rx.type,parentSchema:schema65.properties.rx,data:data4};
+const err7 = {instancePath:instancePath+"/rx",schemaPath:"#/properties/rx/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.rx.type,parentSchema:schema69.properties.rx,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2453,7 +2600,7 @@ errors++;
 if(data.ry !== undefined){
 let data5 = data.ry;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err8 = {instancePath:instancePath+"/ry",schemaPath:"#/properties/ry/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.properties.ry.type,parentSchema:schema65.properties.ry,data:data5};
+const err8 = {instancePath:instancePath+"/ry",schemaPath:"#/properties/ry/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.ry.type,parentSchema:schema69.properties.ry,data:data5};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2466,7 +2613,7 @@ errors++;
 if(data.rz !== undefined){
 let data6 = data.rz;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err9 = {instancePath:instancePath+"/rz",schemaPath:"#/properties/rz/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema65.properties.rz.type,parentSchema:schema65.properties.rz,data:data6};
+const err9 = {instancePath:instancePath+"/rz",schemaPath:"#/properties/rz/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.rz.type,parentSchema:schema69.properties.rz,data:data6};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2478,7 +2625,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema65.type,parentSchema:schema65,data};
+const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema69.type,parentSchema:schema69,data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2487,19 +2634,19 @@ vErrors.push(err10);
 }
 errors++;
 }
-validate34.errors = vErrors;
+validate36.errors = vErrors;
 return errors === 0;
 }
 
-const schema67 = {"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}};
-const schema68 = {"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}};
+const schema71 = {"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}};
+const schema72 = {"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}};
 
-function validate38(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate40(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.region === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "region"},message:"must have required property '"+"region"+"'",schema:schema68.required,parentSchema:schema68,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "region"},message:"must have required property '"+"region"+"'",schema:schema72.required,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2509,7 +2656,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.cp === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "cp"},message:"must have required property '"+"cp"+"'",schema:schema68.required,parentSchema:schema68,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "cp"},message:"must have required property '"+"cp"+"'",schema:schema72.required,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2520,7 +2667,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((key0 === "region") || (key0 === "cp"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema68,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2558,7 +2705,7 @@ errors++;
 if(data.cp !== undefined){
 let data1 = data.cp;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err5 = {instancePath:instancePath+"/cp",schemaPath:"#/properties/cp/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema68.properties.cp.type,parentSchema:schema68.properties.cp,data:data1};
+const err5 = {instancePath:instancePath+"/cp",schemaPath:"#/properties/cp/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema72.properties.cp.type,parentSchema:schema72.properties.cp,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2570,7 +2717,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema68.type,parentSchema:schema68,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.type,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2579,17 +2726,17 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate38.errors = vErrors;
+validate40.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate36(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate38(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema67.required,parentSchema:schema67,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema71.required,parentSchema:schema71,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2599,7 +2746,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.value === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema67.required,parentSchema:schema67,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema71.required,parentSchema:schema71,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2610,7 +2757,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "kind") || (key0 === "value")) || (key0 === "panels")) || (key0 === "coefficients"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema67,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema71,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2623,7 +2770,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if(!(((data0 === "snow") || (data0 === "cladding")) || (data0 === "pressure"))){
-const err3 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema67.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema67.properties.kind.enum,parentSchema:schema67.properties.kind,data:data0};
+const err3 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema71.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema71.properties.kind.enum,parentSchema:schema71.properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2636,7 +2783,7 @@ errors++;
 if(data.value !== undefined){
 let data1 = data.value;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err4 = {instancePath:instancePath+"/value",schemaPath:"#/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema67.properties.value.type,parentSchema:schema67.properties.value,data:data1};
+const err4 = {instancePath:instancePath+"/value",schemaPath:"#/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema71.properties.value.type,parentSchema:schema71.properties.value,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2657,14 +2804,14 @@ let data3 = data.coefficients;
 if(Array.isArray(data3)){
 const len0 = data3.length;
 for(let i0=0; i0<len0; i0++){
-if(!(validate38(data3[i0], {instancePath:instancePath+"/coefficients/" + i0,parentData:data3,parentDataProperty:i0,rootData}))){
-vErrors = vErrors === null ? validate38.errors : vErrors.concat(validate38.errors);
+if(!(validate40(data3[i0], {instancePath:instancePath+"/coefficients/" + i0,parentData:data3,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate40.errors : vErrors.concat(validate40.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err5 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema67.properties.coefficients.type,parentSchema:schema67.properties.coefficients,data:data3};
+const err5 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema71.properties.coefficients.type,parentSchema:schema71.properties.coefficients,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2676,7 +2823,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema67.type,parentSchema:schema67,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema71.type,parentSchema:schema71,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2685,7 +2832,7 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate36.errors = vErrors;
+validate38.errors = vErrors;
 return errors === 0;
 }
 
@@ -2809,15 +2956,15 @@ errors = vErrors.length;
 }
 }
 if(data.ice !== undefined){
-if(!(validate31(data.ice, {instancePath:instancePath+"/ice",parentData:data,parentDataProperty:"ice",rootData}))){
-vErrors = vErrors === null ? validate31.errors : vErrors.concat(validate31.errors);
+if(!(validate33(data.ice, {instancePath:instancePath+"/ice",parentData:data,parentDataProperty:"ice",rootData}))){
+vErrors = vErrors === null ? validate33.errors : vErrors.concat(validate33.errors);
 errors = vErrors.length;
 }
 }
 if(data.purpose !== undefined){
 let data8 = data.purpose;
 if(!((((data8 === "ultimate") || (data8 === "serviceability")) || (data8 === "accidental")) || (data8 === "componentOnly"))){
-const err8 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema64.enum},message:"must be equal to one of the allowed values",schema:schema64.enum,parentSchema:schema64,data:data8};
+const err8 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema68.enum},message:"must be equal to one of the allowed values",schema:schema68.enum,parentSchema:schema68,data:data8};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2845,8 +2992,8 @@ let data10 = data.displacements;
 if(Array.isArray(data10)){
 const len1 = data10.length;
 for(let i1=0; i1<len1; i1++){
-if(!(validate34(data10[i1], {instancePath:instancePath+"/displacements/" + i1,parentData:data10,parentDataProperty:i1,rootData}))){
-vErrors = vErrors === null ? validate34.errors : vErrors.concat(validate34.errors);
+if(!(validate36(data10[i1], {instancePath:instancePath+"/displacements/" + i1,parentData:data10,parentDataProperty:i1,rootData}))){
+vErrors = vErrors === null ? validate36.errors : vErrors.concat(validate36.errors);
 errors = vErrors.length;
 }
 }
@@ -2867,8 +3014,8 @@ let data12 = data.areaLoads;
 if(Array.isArray(data12)){
 const len2 = data12.length;
 for(let i2=0; i2<len2; i2++){
-if(!(validate36(data12[i2], {instancePath:instancePath+"/areaLoads/" + i2,parentData:data12,parentDataProperty:i2,rootData}))){
-vErrors = vErrors === null ? validate36.errors : vErrors.concat(validate36.errors);
+if(!(validate38(data12[i2], {instancePath:instancePath+"/areaLoads/" + i2,parentData:data12,parentDataProperty:i2,rootData}))){
+vErrors = vErrors === null ? validate38.errors : vErrors.concat(validate38.errors);
 errors = vErrors.length;
 }
 }
@@ -2899,14 +3046,14 @@ validate23.errors = vErrors;
 return errors === 0;
 }
 
-const schema70 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
+const schema74 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
 
-function validate42(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate44(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema70.required,parentSchema:schema70,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema74.required,parentSchema:schema74,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2916,7 +3063,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.members === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema70.required,parentSchema:schema70,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema74.required,parentSchema:schema74,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2927,7 +3074,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "label")) || (key0 === "members"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema70,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema74,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2965,7 +3112,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema70.properties.label.type,parentSchema:schema70.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema74.properties.label.type,parentSchema:schema74.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2983,7 +3130,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema70.type,parentSchema:schema70,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema74.type,parentSchema:schema74,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2992,18 +3139,18 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate42.errors = vErrors;
+validate44.errors = vErrors;
 return errors === 0;
 }
 
-const schema72 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}};
+const schema76 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}};
 
-function validate45(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate47(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema72.required,parentSchema:schema72,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema76.required,parentSchema:schema76,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3013,7 +3160,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.factors === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema72.required,parentSchema:schema72,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema76.required,parentSchema:schema76,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3024,7 +3171,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "id") || (key0 === "label")) || (key0 === "factors")) || (key0 === "purpose"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema72,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema76,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3062,7 +3209,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema72.properties.label.type,parentSchema:schema72.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema76.properties.label.type,parentSchema:schema76.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3076,7 +3223,7 @@ if(data.factors !== undefined){
 let data2 = data.factors;
 if(Array.isArray(data2)){
 if(data2.length < 1){
-const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema72.properties.factors,data:data2};
+const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema76.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3090,7 +3237,7 @@ for(let i0=0; i0<len0; i0++){
 let data3 = data2[i0];
 if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
 if(data3.case === undefined){
-const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema72.properties.factors.items.required,parentSchema:schema72.properties.factors.items,data:data3};
+const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema76.properties.factors.items.required,parentSchema:schema76.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3100,7 +3247,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data3.factor === undefined){
-const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema72.properties.factors.items.required,parentSchema:schema72.properties.factors.items,data:data3};
+const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema76.properties.factors.items.required,parentSchema:schema76.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3111,7 +3258,7 @@ errors++;
 }
 for(const key1 in data3){
 if(!((key1 === "case") || (key1 === "factor"))){
-const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema72.properties.factors.items,data:data3};
+const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema76.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3149,7 +3296,7 @@ errors++;
 if(data3.factor !== undefined){
 let data5 = data3.factor;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema72.properties.factors.items.properties.factor.type,parentSchema:schema72.properties.factors.items.properties.factor,data:data5};
+const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema76.properties.factors.items.properties.factor.type,parentSchema:schema76.properties.factors.items.properties.factor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -3161,7 +3308,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.properties.factors.items.type,parentSchema:schema72.properties.factors.items,data:data3};
+const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.properties.factors.items.type,parentSchema:schema76.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -3173,7 +3320,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema72.properties.factors.type,parentSchema:schema72.properties.factors,data:data2};
+const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.factors.type,parentSchema:schema76.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -3186,7 +3333,7 @@ errors++;
 if(data.purpose !== undefined){
 let data6 = data.purpose;
 if(!((((data6 === "ultimate") || (data6 === "serviceability")) || (data6 === "accidental")) || (data6 === "componentOnly"))){
-const err15 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema64.enum},message:"must be equal to one of the allowed values",schema:schema64.enum,parentSchema:schema64,data:data6};
+const err15 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema68.enum},message:"must be equal to one of the allowed values",schema:schema68.enum,parentSchema:schema68,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3198,7 +3345,7 @@ errors++;
 }
 }
 else {
-const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.type,parentSchema:schema72,data};
+const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.type,parentSchema:schema76,data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -3207,18 +3354,18 @@ vErrors.push(err16);
 }
 errors++;
 }
-validate45.errors = vErrors;
+validate47.errors = vErrors;
 return errors === 0;
 }
 
-const schema76 = {"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}};
-const schema78 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
+const schema80 = {"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}};
+const schema82 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
 
-function validate49(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate51(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(!(data && typeof data == "object" && !Array.isArray(data))){
-const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema78.type,parentSchema:schema78,data};
+const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.type,parentSchema:schema82,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3233,7 +3380,7 @@ let passing0 = null;
 const _errs2 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.fractionOfSpan === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema78.oneOf[0].required,parentSchema:schema78.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema82.oneOf[0].required,parentSchema:schema82.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3244,7 +3391,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(key0 === "fractionOfSpan")){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema78.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema82.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3281,7 +3428,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema78.oneOf[0].type,parentSchema:schema78.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.oneOf[0].type,parentSchema:schema82.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3298,7 +3445,7 @@ passing0 = 0;
 const _errs9 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.absolute === undefined){
-const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema78.oneOf[1].required,parentSchema:schema78.oneOf[1],data};
+const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema82.oneOf[1].required,parentSchema:schema82.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3309,7 +3456,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(key1 === "absolute")){
-const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema78.oneOf[1],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema82.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3346,7 +3493,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema78.oneOf[1].type,parentSchema:schema78.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.oneOf[1].type,parentSchema:schema82.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3367,7 +3514,7 @@ passing0 = 1;
 }
 }
 if(!valid0){
-const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema78.oneOf,parentSchema:schema78,data};
+const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema82.oneOf,parentSchema:schema82,data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3387,18 +3534,18 @@ vErrors = null;
 }
 }
 }
-validate49.errors = vErrors;
+validate51.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate47(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate49(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((((((((key0 === "noSlackGroups") || (key0 === "sagLimits")) || (key0 === "displacementLimits")) || (key0 === "tiltLimits")) || (key0 === "upliftNodes")) || (key0 === "minimumTension")) || (key0 === "memberDesign")) || (key0 === "twistLimits"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema76,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema80,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3422,7 +3569,7 @@ for(let i0=0; i0<len0; i0++){
 let data2 = data1[i0];
 if(data2 && typeof data2 == "object" && !Array.isArray(data2)){
 if(data2.group === undefined){
-const err1 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema76.properties.sagLimits.items.required,parentSchema:schema76.properties.sagLimits.items,data:data2};
+const err1 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema80.properties.sagLimits.items.required,parentSchema:schema80.properties.sagLimits.items,data:data2};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3432,7 +3579,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data2.limit === undefined){
-const err2 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema76.properties.sagLimits.items.required,parentSchema:schema76.properties.sagLimits.items,data:data2};
+const err2 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema80.properties.sagLimits.items.required,parentSchema:schema80.properties.sagLimits.items,data:data2};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3443,7 +3590,7 @@ errors++;
 }
 for(const key1 in data2){
 if(!((key1 === "group") || (key1 === "limit"))){
-const err3 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema76.properties.sagLimits.items,data:data2};
+const err3 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.sagLimits.items,data:data2};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3479,14 +3626,14 @@ errors++;
 }
 }
 if(data2.limit !== undefined){
-if(!(validate49(data2.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data2,parentDataProperty:"limit",rootData}))){
-vErrors = vErrors === null ? validate49.errors : vErrors.concat(validate49.errors);
+if(!(validate51(data2.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data2,parentDataProperty:"limit",rootData}))){
+vErrors = vErrors === null ? validate51.errors : vErrors.concat(validate51.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.properties.sagLimits.items.type,parentSchema:schema76.properties.sagLimits.items,data:data2};
+const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.sagLimits.items.type,parentSchema:schema80.properties.sagLimits.items,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3498,7 +3645,7 @@ errors++;
 }
 }
 else {
-const err7 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.sagLimits.type,parentSchema:schema76.properties.sagLimits,data:data1};
+const err7 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.sagLimits.type,parentSchema:schema80.properties.sagLimits,data:data1};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3516,7 +3663,7 @@ for(let i1=0; i1<len1; i1++){
 let data6 = data5[i1];
 if(data6 && typeof data6 == "object" && !Array.isArray(data6)){
 if(data6.node === undefined){
-const err8 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema76.properties.displacementLimits.items.required,parentSchema:schema76.properties.displacementLimits.items,data:data6};
+const err8 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema80.properties.displacementLimits.items.required,parentSchema:schema80.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3526,7 +3673,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data6.limit === undefined){
-const err9 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema76.properties.displacementLimits.items.required,parentSchema:schema76.properties.displacementLimits.items,data:data6};
+const err9 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema80.properties.displacementLimits.items.required,parentSchema:schema80.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3537,7 +3684,7 @@ errors++;
 }
 for(const key2 in data6){
 if(!(((key2 === "node") || (key2 === "limit")) || (key2 === "direction"))){
-const err10 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema76.properties.displacementLimits.items,data:data6};
+const err10 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3604,7 +3751,7 @@ let valid10 = false;
 let passing0 = null;
 const _errs28 = errors;
 if(!((data9 === "horizontal") || (data9 === "total"))){
-const err15 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf/0/enum",keyword:"enum",params:{allowedValues: schema76.properties.displacementLimits.items.properties.direction.oneOf[0].enum},message:"must be equal to one of the allowed values",schema:schema76.properties.displacementLimits.items.properties.direction.oneOf[0].enum,parentSchema:schema76.properties.displacementLimits.items.properties.direction.oneOf[0],data:data9};
+const err15 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf/0/enum",keyword:"enum",params:{allowedValues: schema80.properties.displacementLimits.items.properties.direction.oneOf[0].enum},message:"must be equal to one of the allowed values",schema:schema80.properties.displacementLimits.items.properties.direction.oneOf[0].enum,parentSchema:schema80.properties.displacementLimits.items.properties.direction.oneOf[0],data:data9};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3677,7 +3824,7 @@ passing0 = 1;
 }
 }
 if(!valid10){
-const err20 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema76.properties.displacementLimits.items.properties.direction.oneOf,parentSchema:schema76.properties.displacementLimits.items.properties.direction,data:data9};
+const err20 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema80.properties.displacementLimits.items.properties.direction.oneOf,parentSchema:schema80.properties.displacementLimits.items.properties.direction,data:data9};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -3700,7 +3847,7 @@ vErrors = null;
 }
 }
 else {
-const err21 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.properties.displacementLimits.items.type,parentSchema:schema76.properties.displacementLimits.items,data:data6};
+const err21 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.displacementLimits.items.type,parentSchema:schema80.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -3712,7 +3859,7 @@ errors++;
 }
 }
 else {
-const err22 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.displacementLimits.type,parentSchema:schema76.properties.displacementLimits,data:data5};
+const err22 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.displacementLimits.type,parentSchema:schema80.properties.displacementLimits,data:data5};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -3730,7 +3877,7 @@ for(let i3=0; i3<len3; i3++){
 let data12 = data11[i3];
 if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
 if(data12.base === undefined){
-const err23 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema76.properties.tiltLimits.items.required,parentSchema:schema76.properties.tiltLimits.items,data:data12};
+const err23 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema80.properties.tiltLimits.items.required,parentSchema:schema80.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -3740,7 +3887,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data12.top === undefined){
-const err24 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema76.properties.tiltLimits.items.required,parentSchema:schema76.properties.tiltLimits.items,data:data12};
+const err24 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema80.properties.tiltLimits.items.required,parentSchema:schema80.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -3750,7 +3897,7 @@ vErrors.push(err24);
 errors++;
 }
 if(data12.limit === undefined){
-const err25 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema76.properties.tiltLimits.items.required,parentSchema:schema76.properties.tiltLimits.items,data:data12};
+const err25 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema80.properties.tiltLimits.items.required,parentSchema:schema80.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -3761,7 +3908,7 @@ errors++;
 }
 for(const key3 in data12){
 if(!(((key3 === "base") || (key3 === "top")) || (key3 === "limit"))){
-const err26 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema76.properties.tiltLimits.items,data:data12};
+const err26 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -3848,7 +3995,7 @@ errors++;
 }
 }
 else {
-const err33 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.properties.tiltLimits.items.type,parentSchema:schema76.properties.tiltLimits.items,data:data12};
+const err33 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.tiltLimits.items.type,parentSchema:schema80.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -3860,7 +4007,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.tiltLimits.type,parentSchema:schema76.properties.tiltLimits,data:data11};
+const err34 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.tiltLimits.type,parentSchema:schema80.properties.tiltLimits,data:data11};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -3884,7 +4031,7 @@ for(let i4=0; i4<len4; i4++){
 let data18 = data17[i4];
 if(data18 && typeof data18 == "object" && !Array.isArray(data18)){
 if(data18.group === undefined){
-const err35 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema76.properties.minimumTension.items.required,parentSchema:schema76.properties.minimumTension.items,data:data18};
+const err35 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema80.properties.minimumTension.items.required,parentSchema:schema80.properties.minimumTension.items,data:data18};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -3895,7 +4042,7 @@ errors++;
 }
 for(const key4 in data18){
 if(!(((key4 === "group") || (key4 === "shareOfInstallation")) || (key4 === "shareOfBreaking"))){
-const err36 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema76.properties.minimumTension.items,data:data18};
+const err36 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.minimumTension.items,data:data18};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -3934,7 +4081,7 @@ if(data18.shareOfInstallation !== undefined){
 let data20 = data18.shareOfInstallation;
 if((typeof data20 == "number") && (isFinite(data20))){
 if(data20 > 1 || isNaN(data20)){
-const err39 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema76.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
+const err39 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema80.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -3944,7 +4091,7 @@ vErrors.push(err39);
 errors++;
 }
 if(data20 <= 0 || isNaN(data20)){
-const err40 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema76.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
+const err40 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema80.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -3955,7 +4102,7 @@ errors++;
 }
 }
 else {
-const err41 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema76.properties.minimumTension.items.properties.shareOfInstallation.type,parentSchema:schema76.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
+const err41 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema80.properties.minimumTension.items.properties.shareOfInstallation.type,parentSchema:schema80.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -3969,7 +4116,7 @@ if(data18.shareOfBreaking !== undefined){
 let data21 = data18.shareOfBreaking;
 if((typeof data21 == "number") && (isFinite(data21))){
 if(data21 > 1 || isNaN(data21)){
-const err42 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema76.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
+const err42 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema80.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
 if(vErrors === null){
 vErrors = [err42];
 }
@@ -3979,7 +4126,7 @@ vErrors.push(err42);
 errors++;
 }
 if(data21 <= 0 || isNaN(data21)){
-const err43 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema76.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
+const err43 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema80.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
 if(vErrors === null){
 vErrors = [err43];
 }
@@ -3990,7 +4137,7 @@ errors++;
 }
 }
 else {
-const err44 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema76.properties.minimumTension.items.properties.shareOfBreaking.type,parentSchema:schema76.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
+const err44 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema80.properties.minimumTension.items.properties.shareOfBreaking.type,parentSchema:schema80.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
 if(vErrors === null){
 vErrors = [err44];
 }
@@ -4002,7 +4149,7 @@ errors++;
 }
 }
 else {
-const err45 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.properties.minimumTension.items.type,parentSchema:schema76.properties.minimumTension.items,data:data18};
+const err45 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.minimumTension.items.type,parentSchema:schema80.properties.minimumTension.items,data:data18};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -4014,7 +4161,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath:instancePath+"/minimumTension",schemaPath:"#/properties/minimumTension/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.minimumTension.type,parentSchema:schema76.properties.minimumTension,data:data17};
+const err46 = {instancePath:instancePath+"/minimumTension",schemaPath:"#/properties/minimumTension/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.minimumTension.type,parentSchema:schema80.properties.minimumTension,data:data17};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -4032,7 +4179,7 @@ for(let i5=0; i5<len5; i5++){
 let data23 = data22[i5];
 if(data23 && typeof data23 == "object" && !Array.isArray(data23)){
 if(data23.group === undefined){
-const err47 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema76.properties.memberDesign.items.required,parentSchema:schema76.properties.memberDesign.items,data:data23};
+const err47 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema80.properties.memberDesign.items.required,parentSchema:schema80.properties.memberDesign.items,data:data23};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -4043,7 +4190,7 @@ errors++;
 }
 for(const key5 in data23){
 if(!(((((key5 === "group") || (key5 === "role")) || (key5 === "bucklingLengthFactor")) || (key5 === "bucklingLength")) || (key5 === "slendernessLimit"))){
-const err48 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema76.properties.memberDesign.items,data:data23};
+const err48 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.memberDesign.items,data:data23};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -4081,7 +4228,7 @@ errors++;
 if(data23.role !== undefined){
 let data25 = data23.role;
 if(!((((data25 === "leg") || (data25 === "bracing")) || (data25 === "redundant")) || (data25 === "other"))){
-const err51 = {instancePath:instancePath+"/memberDesign/" + i5+"/role",schemaPath:"#/properties/memberDesign/items/properties/role/enum",keyword:"enum",params:{allowedValues: schema76.properties.memberDesign.items.properties.role.enum},message:"must be equal to one of the allowed values",schema:schema76.properties.memberDesign.items.properties.role.enum,parentSchema:schema76.properties.memberDesign.items.properties.role,data:data25};
+const err51 = {instancePath:instancePath+"/memberDesign/" + i5+"/role",schemaPath:"#/properties/memberDesign/items/properties/role/enum",keyword:"enum",params:{allowedValues: schema80.properties.memberDesign.items.properties.role.enum},message:"must be equal to one of the allowed values",schema:schema80.properties.memberDesign.items.properties.role.enum,parentSchema:schema80.properties.memberDesign.items.properties.role,data:data25};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -4168,7 +4315,7 @@ errors++;
 }
 }
 else {
-const err58 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.properties.memberDesign.items.type,parentSchema:schema76.properties.memberDesign.items,data:data23};
+const err58 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.memberDesign.items.type,parentSchema:schema80.properties.memberDesign.items,data:data23};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -4180,7 +4327,7 @@ errors++;
 }
 }
 else {
-const err59 = {instancePath:instancePath+"/memberDesign",schemaPath:"#/properties/memberDesign/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.memberDesign.type,parentSchema:schema76.properties.memberDesign,data:data22};
+const err59 = {instancePath:instancePath+"/memberDesign",schemaPath:"#/properties/memberDesign/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.memberDesign.type,parentSchema:schema80.properties.memberDesign,data:data22};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -4198,7 +4345,7 @@ for(let i6=0; i6<len6; i6++){
 let data30 = data29[i6];
 if(data30 && typeof data30 == "object" && !Array.isArray(data30)){
 if(data30.nodes === undefined){
-const err60 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema76.properties.twistLimits.items.required,parentSchema:schema76.properties.twistLimits.items,data:data30};
+const err60 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema80.properties.twistLimits.items.required,parentSchema:schema80.properties.twistLimits.items,data:data30};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -4208,7 +4355,7 @@ vErrors.push(err60);
 errors++;
 }
 if(data30.limit === undefined){
-const err61 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema76.properties.twistLimits.items.required,parentSchema:schema76.properties.twistLimits.items,data:data30};
+const err61 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema80.properties.twistLimits.items.required,parentSchema:schema80.properties.twistLimits.items,data:data30};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -4219,7 +4366,7 @@ errors++;
 }
 for(const key6 in data30){
 if(!((key6 === "nodes") || (key6 === "limit"))){
-const err62 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key6},message:"must NOT have additional properties",schema:false,parentSchema:schema76.properties.twistLimits.items,data:data30};
+const err62 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key6},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.twistLimits.items,data:data30};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -4233,7 +4380,7 @@ if(data30.nodes !== undefined){
 let data31 = data30.nodes;
 if(Array.isArray(data31)){
 if(data31.length < 2){
-const err63 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema76.properties.twistLimits.items.properties.nodes,data:data31};
+const err63 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema80.properties.twistLimits.items.properties.nodes,data:data31};
 if(vErrors === null){
 vErrors = [err63];
 }
@@ -4270,7 +4417,7 @@ errors++;
 }
 }
 else {
-const err66 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.twistLimits.items.properties.nodes.type,parentSchema:schema76.properties.twistLimits.items.properties.nodes,data:data31};
+const err66 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.twistLimits.items.properties.nodes.type,parentSchema:schema80.properties.twistLimits.items.properties.nodes,data:data31};
 if(vErrors === null){
 vErrors = [err66];
 }
@@ -4307,7 +4454,7 @@ errors++;
 }
 }
 else {
-const err69 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.properties.twistLimits.items.type,parentSchema:schema76.properties.twistLimits.items,data:data30};
+const err69 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.twistLimits.items.type,parentSchema:schema80.properties.twistLimits.items,data:data30};
 if(vErrors === null){
 vErrors = [err69];
 }
@@ -4319,7 +4466,7 @@ errors++;
 }
 }
 else {
-const err70 = {instancePath:instancePath+"/twistLimits",schemaPath:"#/properties/twistLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.twistLimits.type,parentSchema:schema76.properties.twistLimits,data:data29};
+const err70 = {instancePath:instancePath+"/twistLimits",schemaPath:"#/properties/twistLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.twistLimits.type,parentSchema:schema80.properties.twistLimits,data:data29};
 if(vErrors === null){
 vErrors = [err70];
 }
@@ -4331,7 +4478,7 @@ errors++;
 }
 }
 else {
-const err71 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.type,parentSchema:schema76,data};
+const err71 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.type,parentSchema:schema80,data};
 if(vErrors === null){
 vErrors = [err71];
 }
@@ -4340,19 +4487,19 @@ vErrors.push(err71);
 }
 errors++;
 }
-validate47.errors = vErrors;
+validate49.errors = vErrors;
 return errors === 0;
 }
 
-const schema94 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
-const schema96 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
+const schema98 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
+const schema100 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
 
-function validate54(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate56(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema96.required,parentSchema:schema96,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.required,parentSchema:schema100,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4366,7 +4513,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "sag"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema96.oneOf[0].required,parentSchema:schema96.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.oneOf[0].required,parentSchema:schema100.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -4376,7 +4523,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.group === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema96.oneOf[0].required,parentSchema:schema96.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema100.oneOf[0].required,parentSchema:schema100.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -4386,7 +4533,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.case === undefined){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema96.oneOf[0].required,parentSchema:schema96.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema100.oneOf[0].required,parentSchema:schema100.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -4396,7 +4543,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.limit === undefined){
-const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema96.oneOf[0].required,parentSchema:schema96.oneOf[0],data};
+const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema100.oneOf[0].required,parentSchema:schema100.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -4407,7 +4554,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "kind") || (key0 === "group")) || (key0 === "case")) || (key0 === "limit"))){
-const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema96.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema100.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -4420,7 +4567,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("sag" !== data0){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema96.oneOf[0].properties.kind,data:data0};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema100.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -4481,14 +4628,14 @@ errors++;
 }
 }
 if(data.limit !== undefined){
-if(!(validate49(data.limit, {instancePath:instancePath+"/limit",parentData:data,parentDataProperty:"limit",rootData}))){
-vErrors = vErrors === null ? validate49.errors : vErrors.concat(validate49.errors);
+if(!(validate51(data.limit, {instancePath:instancePath+"/limit",parentData:data,parentDataProperty:"limit",rootData}))){
+vErrors = vErrors === null ? validate51.errors : vErrors.concat(validate51.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema96.oneOf[0].type,parentSchema:schema96.oneOf[0],data};
+const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.oneOf[0].type,parentSchema:schema100.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -4501,7 +4648,7 @@ errors++;
 else if(tag0 === "tensionShare"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema96.oneOf[1].required,parentSchema:schema96.oneOf[1],data};
+const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.oneOf[1].required,parentSchema:schema100.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -4511,7 +4658,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data.group === undefined){
-const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema96.oneOf[1].required,parentSchema:schema96.oneOf[1],data};
+const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema100.oneOf[1].required,parentSchema:schema100.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -4521,7 +4668,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data.share === undefined){
-const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema96.oneOf[1].required,parentSchema:schema96.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema100.oneOf[1].required,parentSchema:schema100.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -4532,7 +4679,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(((key1 === "kind") || (key1 === "group")) || (key1 === "share"))){
-const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema96.oneOf[1],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema100.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -4545,7 +4692,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("tensionShare" !== data4){
-const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema96.oneOf[1].properties.kind,data:data4};
+const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema100.oneOf[1].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -4607,7 +4754,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema96.oneOf[1].type,parentSchema:schema96.oneOf[1],data};
+const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.oneOf[1].type,parentSchema:schema100.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -4620,7 +4767,7 @@ errors++;
 else if(tag0 === "noSlack"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema96.oneOf[2].required,parentSchema:schema96.oneOf[2],data};
+const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.oneOf[2].required,parentSchema:schema100.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -4630,7 +4777,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data.group === undefined){
-const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema96.oneOf[2].required,parentSchema:schema96.oneOf[2],data};
+const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema100.oneOf[2].required,parentSchema:schema100.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -4640,7 +4787,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data.case === undefined){
-const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema96.oneOf[2].required,parentSchema:schema96.oneOf[2],data};
+const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema100.oneOf[2].required,parentSchema:schema100.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -4651,7 +4798,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(((key2 === "kind") || (key2 === "group")) || (key2 === "case"))){
-const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema96.oneOf[2],data};
+const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema100.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -4664,7 +4811,7 @@ errors++;
 if(data.kind !== undefined){
 let data7 = data.kind;
 if("noSlack" !== data7){
-const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema96.oneOf[2].properties.kind,data:data7};
+const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema100.oneOf[2].properties.kind,data:data7};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -4726,7 +4873,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema96.oneOf[2].type,parentSchema:schema96.oneOf[2],data};
+const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.oneOf[2].type,parentSchema:schema100.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -4739,7 +4886,7 @@ errors++;
 else if(tag0 === "plumb"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema96.oneOf[3].required,parentSchema:schema96.oneOf[3],data};
+const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.oneOf[3].required,parentSchema:schema100.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -4749,7 +4896,7 @@ vErrors.push(err32);
 errors++;
 }
 if(data.base === undefined){
-const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema96.oneOf[3].required,parentSchema:schema96.oneOf[3],data};
+const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema100.oneOf[3].required,parentSchema:schema100.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -4759,7 +4906,7 @@ vErrors.push(err33);
 errors++;
 }
 if(data.top === undefined){
-const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema96.oneOf[3].required,parentSchema:schema96.oneOf[3],data};
+const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema100.oneOf[3].required,parentSchema:schema100.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -4769,7 +4916,7 @@ vErrors.push(err34);
 errors++;
 }
 if(data.case === undefined){
-const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema96.oneOf[3].required,parentSchema:schema96.oneOf[3],data};
+const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema100.oneOf[3].required,parentSchema:schema100.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -4779,7 +4926,7 @@ vErrors.push(err35);
 errors++;
 }
 if(data.tolerance === undefined){
-const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema96.oneOf[3].required,parentSchema:schema96.oneOf[3],data};
+const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema100.oneOf[3].required,parentSchema:schema100.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -4790,7 +4937,7 @@ errors++;
 }
 for(const key3 in data){
 if(!(((((key3 === "kind") || (key3 === "base")) || (key3 === "top")) || (key3 === "case")) || (key3 === "tolerance"))){
-const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema96.oneOf[3],data};
+const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema100.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -4803,7 +4950,7 @@ errors++;
 if(data.kind !== undefined){
 let data10 = data.kind;
 if("plumb" !== data10){
-const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema96.oneOf[3].properties.kind,data:data10};
+const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema100.oneOf[3].properties.kind,data:data10};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -4915,7 +5062,7 @@ errors++;
 }
 }
 else {
-const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema96.oneOf[3].type,parentSchema:schema96.oneOf[3],data};
+const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.oneOf[3].type,parentSchema:schema100.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -4928,7 +5075,7 @@ errors++;
 else if(tag0 === "reaction"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema96.oneOf[4].required,parentSchema:schema96.oneOf[4],data};
+const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.oneOf[4].required,parentSchema:schema100.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -4938,7 +5085,7 @@ vErrors.push(err48);
 errors++;
 }
 if(data.node === undefined){
-const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema96.oneOf[4].required,parentSchema:schema96.oneOf[4],data};
+const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema100.oneOf[4].required,parentSchema:schema100.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -4948,7 +5095,7 @@ vErrors.push(err49);
 errors++;
 }
 if(data.case === undefined){
-const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema96.oneOf[4].required,parentSchema:schema96.oneOf[4],data};
+const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema100.oneOf[4].required,parentSchema:schema100.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -4958,7 +5105,7 @@ vErrors.push(err50);
 errors++;
 }
 if(data.limit === undefined){
-const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema96.oneOf[4].required,parentSchema:schema96.oneOf[4],data};
+const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema100.oneOf[4].required,parentSchema:schema100.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -4969,7 +5116,7 @@ errors++;
 }
 for(const key4 in data){
 if(!((((key4 === "kind") || (key4 === "node")) || (key4 === "case")) || (key4 === "limit"))){
-const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema96.oneOf[4],data};
+const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema100.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -4982,7 +5129,7 @@ errors++;
 if(data.kind !== undefined){
 let data15 = data.kind;
 if("reaction" !== data15){
-const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema96.oneOf[4].properties.kind,data:data15};
+const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema100.oneOf[4].properties.kind,data:data15};
 if(vErrors === null){
 vErrors = [err53];
 }
@@ -5045,7 +5192,7 @@ errors++;
 if(data.limit !== undefined){
 let data18 = data.limit;
 if(!((typeof data18 == "number") && (isFinite(data18)))){
-const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema96.oneOf[4].properties.limit.type,parentSchema:schema96.oneOf[4].properties.limit,data:data18};
+const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema100.oneOf[4].properties.limit.type,parentSchema:schema100.oneOf[4].properties.limit,data:data18};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -5057,7 +5204,7 @@ errors++;
 }
 }
 else {
-const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema96.oneOf[4].type,parentSchema:schema96.oneOf[4],data};
+const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.oneOf[4].type,parentSchema:schema100.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -5068,7 +5215,7 @@ errors++;
 }
 }
 else {
-const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema96.discriminator,parentSchema:schema96,data};
+const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema100.discriminator,parentSchema:schema100,data};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -5079,7 +5226,7 @@ errors++;
 }
 }
 else {
-const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema96.discriminator,parentSchema:schema96,data};
+const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema100.discriminator,parentSchema:schema100,data};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -5090,7 +5237,7 @@ errors++;
 }
 }
 else {
-const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema96.type,parentSchema:schema96,data};
+const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.type,parentSchema:schema100,data};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -5099,17 +5246,17 @@ vErrors.push(err62);
 }
 errors++;
 }
-validate54.errors = vErrors;
+validate56.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate53(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate55(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.variables === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema94.required,parentSchema:schema94,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema98.required,parentSchema:schema98,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5119,7 +5266,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.targets === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema94.required,parentSchema:schema94,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema98.required,parentSchema:schema98,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5130,7 +5277,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "variables") || (key0 === "targets")) || (key0 === "lastRun"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema94,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema98,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5148,7 +5295,7 @@ for(let i0=0; i0<len0; i0++){
 let data1 = data0[i0];
 if(data1 && typeof data1 == "object" && !Array.isArray(data1)){
 if(data1.group === undefined){
-const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema94.properties.variables.items.required,parentSchema:schema94.properties.variables.items,data:data1};
+const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema98.properties.variables.items.required,parentSchema:schema98.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5158,7 +5305,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data1.by === undefined){
-const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema94.properties.variables.items.required,parentSchema:schema94.properties.variables.items,data:data1};
+const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema98.properties.variables.items.required,parentSchema:schema98.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -5169,7 +5316,7 @@ errors++;
 }
 for(const key1 in data1){
 if(!((((key1 === "group") || (key1 === "by")) || (key1 === "min")) || (key1 === "max"))){
-const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema94.properties.variables.items,data:data1};
+const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema98.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -5207,7 +5354,7 @@ errors++;
 if(data1.by !== undefined){
 let data3 = data1.by;
 if(!((data3 === "pretension") || (data3 === "unstressedLength"))){
-const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema94.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema94.properties.variables.items.properties.by.enum,parentSchema:schema94.properties.variables.items.properties.by,data:data3};
+const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema98.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema98.properties.variables.items.properties.by.enum,parentSchema:schema98.properties.variables.items.properties.by,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -5220,7 +5367,7 @@ errors++;
 if(data1.min !== undefined){
 let data4 = data1.min;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema94.properties.variables.items.properties.min.type,parentSchema:schema94.properties.variables.items.properties.min,data:data4};
+const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema98.properties.variables.items.properties.min.type,parentSchema:schema98.properties.variables.items.properties.min,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -5233,7 +5380,7 @@ errors++;
 if(data1.max !== undefined){
 let data5 = data1.max;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema94.properties.variables.items.properties.max.type,parentSchema:schema94.properties.variables.items.properties.max,data:data5};
+const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema98.properties.variables.items.properties.max.type,parentSchema:schema98.properties.variables.items.properties.max,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -5245,7 +5392,7 @@ errors++;
 }
 }
 else {
-const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema94.properties.variables.items.type,parentSchema:schema94.properties.variables.items,data:data1};
+const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.properties.variables.items.type,parentSchema:schema98.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -5257,7 +5404,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema94.properties.variables.type,parentSchema:schema94.properties.variables,data:data0};
+const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema98.properties.variables.type,parentSchema:schema98.properties.variables,data:data0};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -5272,14 +5419,14 @@ let data6 = data.targets;
 if(Array.isArray(data6)){
 const len1 = data6.length;
 for(let i1=0; i1<len1; i1++){
-if(!(validate54(data6[i1], {instancePath:instancePath+"/targets/" + i1,parentData:data6,parentDataProperty:i1,rootData}))){
-vErrors = vErrors === null ? validate54.errors : vErrors.concat(validate54.errors);
+if(!(validate56(data6[i1], {instancePath:instancePath+"/targets/" + i1,parentData:data6,parentDataProperty:i1,rootData}))){
+vErrors = vErrors === null ? validate56.errors : vErrors.concat(validate56.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema94.properties.targets.type,parentSchema:schema94.properties.targets,data:data6};
+const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema98.properties.targets.type,parentSchema:schema98.properties.targets,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -5293,7 +5440,7 @@ if(data.lastRun !== undefined){
 let data8 = data.lastRun;
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 if(data8.date === undefined){
-const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema94.properties.lastRun.required,parentSchema:schema94.properties.lastRun,data:data8};
+const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema98.properties.lastRun.required,parentSchema:schema98.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -5303,7 +5450,7 @@ vErrors.push(err14);
 errors++;
 }
 if(data8.summary === undefined){
-const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema94.properties.lastRun.required,parentSchema:schema94.properties.lastRun,data:data8};
+const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema98.properties.lastRun.required,parentSchema:schema98.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -5314,7 +5461,7 @@ errors++;
 }
 for(const key2 in data8){
 if(!((key2 === "date") || (key2 === "summary"))){
-const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema94.properties.lastRun,data:data8};
+const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema98.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -5327,7 +5474,7 @@ errors++;
 if(data8.date !== undefined){
 let data9 = data8.date;
 if(typeof data9 !== "string"){
-const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema94.properties.lastRun.properties.date.type,parentSchema:schema94.properties.lastRun.properties.date,data:data9};
+const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema98.properties.lastRun.properties.date.type,parentSchema:schema98.properties.lastRun.properties.date,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -5340,7 +5487,7 @@ errors++;
 if(data8.summary !== undefined){
 let data10 = data8.summary;
 if(typeof data10 !== "string"){
-const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema94.properties.lastRun.properties.summary.type,parentSchema:schema94.properties.lastRun.properties.summary,data:data10};
+const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema98.properties.lastRun.properties.summary.type,parentSchema:schema98.properties.lastRun.properties.summary,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -5352,7 +5499,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema94.properties.lastRun.type,parentSchema:schema94.properties.lastRun,data:data8};
+const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.properties.lastRun.type,parentSchema:schema98.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -5364,7 +5511,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema94.type,parentSchema:schema94,data};
+const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.type,parentSchema:schema98,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -5373,19 +5520,19 @@ vErrors.push(err20);
 }
 errors++;
 }
-validate53.errors = vErrors;
+validate55.errors = vErrors;
 return errors === 0;
 }
 
-const schema109 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
+const schema113 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
 
-function validate58(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate60(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!(key0 === "temperatures")){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema109,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema113,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5426,7 +5573,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema109.properties.temperatures.type,parentSchema:schema109.properties.temperatures,data:data0};
+const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema113.properties.temperatures.type,parentSchema:schema113.properties.temperatures,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5438,7 +5585,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema109.type,parentSchema:schema109,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.type,parentSchema:schema113,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -5447,18 +5594,18 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate58.errors = vErrors;
+validate60.errors = vErrors;
 return errors === 0;
 }
 
-const schema111 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
+const schema115 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
 
-function validate60(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate62(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema111.required,parentSchema:schema111,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema115.required,parentSchema:schema115,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5468,7 +5615,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema111.required,parentSchema:schema111,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema115.required,parentSchema:schema115,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5478,7 +5625,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.params === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema111.required,parentSchema:schema111,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema115.required,parentSchema:schema115,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5489,7 +5636,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "kind")) || (key0 === "params"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema111,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema115,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5527,7 +5674,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "guyedMast") || (data1 === "saddleNet")) || (data1 === "radialNet"))){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema111.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema111.properties.kind.enum,parentSchema:schema111.properties.kind,data:data1};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema115.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema115.properties.kind.enum,parentSchema:schema115.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -5540,7 +5687,7 @@ errors++;
 if(data.params !== undefined){
 let data2 = data.params;
 if(!(data2 && typeof data2 == "object" && !Array.isArray(data2))){
-const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema111.properties.params.type,parentSchema:schema111.properties.params,data:data2};
+const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.properties.params.type,parentSchema:schema115.properties.params,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -5552,7 +5699,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema111.type,parentSchema:schema111,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.type,parentSchema:schema115,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -5561,19 +5708,19 @@ vErrors.push(err8);
 }
 errors++;
 }
-validate60.errors = vErrors;
+validate62.errors = vErrors;
 return errors === 0;
 }
 
-const schema113 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
+const schema117 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
 
-function validate62(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate64(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((key0 === "units") || (key0 === "deformationScale"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema113,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema117,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5586,7 +5733,7 @@ errors++;
 if(data.units !== undefined){
 let data0 = data.units;
 if(!((data0 === "SI") || (data0 === "US"))){
-const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema113.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.units.enum,parentSchema:schema113.properties.units,data:data0};
+const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema117.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema117.properties.units.enum,parentSchema:schema117.properties.units,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5623,7 +5770,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.type,parentSchema:schema113,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema117.type,parentSchema:schema117,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -5632,18 +5779,18 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate62.errors = vErrors;
+validate64.errors = vErrors;
 return errors === 0;
 }
 
-const schema115 = {"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}};
+const schema119 = {"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}};
 
-function validate64(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate66(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.format === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "format"},message:"must have required property '"+"format"+"'",schema:schema115.required,parentSchema:schema115,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "format"},message:"must have required property '"+"format"+"'",schema:schema119.required,parentSchema:schema119,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5654,7 +5801,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "format") || (key0 === "label")) || (key0 === "actionFactors")) || (key0 === "combinationFactors")) || (key0 === "cable")) || (key0 === "steel")) || (key0 === "allowable"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema115,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema119,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5667,7 +5814,7 @@ errors++;
 if(data.format !== undefined){
 let data0 = data.format;
 if(!((data0 === "limitState") || (data0 === "allowable"))){
-const err2 = {instancePath:instancePath+"/format",schemaPath:"#/properties/format/enum",keyword:"enum",params:{allowedValues: schema115.properties.format.enum},message:"must be equal to one of the allowed values",schema:schema115.properties.format.enum,parentSchema:schema115.properties.format,data:data0};
+const err2 = {instancePath:instancePath+"/format",schemaPath:"#/properties/format/enum",keyword:"enum",params:{allowedValues: schema119.properties.format.enum},message:"must be equal to one of the allowed values",schema:schema119.properties.format.enum,parentSchema:schema119.properties.format,data:data0};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5680,7 +5827,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err3 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema115.properties.label.type,parentSchema:schema115.properties.label,data:data1};
+const err3 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema119.properties.label.type,parentSchema:schema119.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5695,7 +5842,7 @@ let data2 = data.actionFactors;
 if(data2 && typeof data2 == "object" && !Array.isArray(data2)){
 for(const key1 in data2){
 if(!(((((((key1 === "permanent") || (key1 === "permanentFavourable")) || (key1 === "prestress")) || (key1 === "wind")) || (key1 === "ice")) || (key1 === "temperature")) || (key1 === "accidental"))){
-const err4 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema115.properties.actionFactors,data:data2};
+const err4 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.actionFactors,data:data2};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -5882,7 +6029,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.properties.actionFactors.type,parentSchema:schema115.properties.actionFactors,data:data2};
+const err19 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.actionFactors.type,parentSchema:schema119.properties.actionFactors,data:data2};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -5897,7 +6044,7 @@ let data10 = data.combinationFactors;
 if(data10 && typeof data10 == "object" && !Array.isArray(data10)){
 for(const key2 in data10){
 if(!(((key2 === "wind") || (key2 === "ice")) || (key2 === "temperature"))){
-const err20 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema115.properties.combinationFactors,data:data10};
+const err20 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.combinationFactors,data:data10};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -5911,7 +6058,7 @@ if(data10.wind !== undefined){
 let data11 = data10.wind;
 if((typeof data11 == "number") && (isFinite(data11))){
 if(data11 > 1 || isNaN(data11)){
-const err21 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema115.properties.combinationFactors.properties.wind,data:data11};
+const err21 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.combinationFactors.properties.wind,data:data11};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -5921,7 +6068,7 @@ vErrors.push(err21);
 errors++;
 }
 if(data11 < 0 || isNaN(data11)){
-const err22 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema115.properties.combinationFactors.properties.wind,data:data11};
+const err22 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema119.properties.combinationFactors.properties.wind,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -5932,7 +6079,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema115.properties.combinationFactors.properties.wind.type,parentSchema:schema115.properties.combinationFactors.properties.wind,data:data11};
+const err23 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.combinationFactors.properties.wind.type,parentSchema:schema119.properties.combinationFactors.properties.wind,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -5946,7 +6093,7 @@ if(data10.ice !== undefined){
 let data12 = data10.ice;
 if((typeof data12 == "number") && (isFinite(data12))){
 if(data12 > 1 || isNaN(data12)){
-const err24 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema115.properties.combinationFactors.properties.ice,data:data12};
+const err24 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.combinationFactors.properties.ice,data:data12};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -5956,7 +6103,7 @@ vErrors.push(err24);
 errors++;
 }
 if(data12 < 0 || isNaN(data12)){
-const err25 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema115.properties.combinationFactors.properties.ice,data:data12};
+const err25 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema119.properties.combinationFactors.properties.ice,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -5967,7 +6114,7 @@ errors++;
 }
 }
 else {
-const err26 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema115.properties.combinationFactors.properties.ice.type,parentSchema:schema115.properties.combinationFactors.properties.ice,data:data12};
+const err26 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.combinationFactors.properties.ice.type,parentSchema:schema119.properties.combinationFactors.properties.ice,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -5981,7 +6128,7 @@ if(data10.temperature !== undefined){
 let data13 = data10.temperature;
 if((typeof data13 == "number") && (isFinite(data13))){
 if(data13 > 1 || isNaN(data13)){
-const err27 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema115.properties.combinationFactors.properties.temperature,data:data13};
+const err27 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.combinationFactors.properties.temperature,data:data13};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -5991,7 +6138,7 @@ vErrors.push(err27);
 errors++;
 }
 if(data13 < 0 || isNaN(data13)){
-const err28 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema115.properties.combinationFactors.properties.temperature,data:data13};
+const err28 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema119.properties.combinationFactors.properties.temperature,data:data13};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -6002,7 +6149,7 @@ errors++;
 }
 }
 else {
-const err29 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema115.properties.combinationFactors.properties.temperature.type,parentSchema:schema115.properties.combinationFactors.properties.temperature,data:data13};
+const err29 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.combinationFactors.properties.temperature.type,parentSchema:schema119.properties.combinationFactors.properties.temperature,data:data13};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -6014,7 +6161,7 @@ errors++;
 }
 }
 else {
-const err30 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.properties.combinationFactors.type,parentSchema:schema115.properties.combinationFactors,data:data10};
+const err30 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.combinationFactors.type,parentSchema:schema119.properties.combinationFactors,data:data10};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -6029,7 +6176,7 @@ let data14 = data.cable;
 if(data14 && typeof data14 == "object" && !Array.isArray(data14)){
 for(const key3 in data14){
 if(!(((key3 === "breakingFactor") || (key3 === "partialFactor")) || (key3 === "serviceabilityShare"))){
-const err31 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema115.properties.cable,data:data14};
+const err31 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.cable,data:data14};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -6093,7 +6240,7 @@ if(data14.serviceabilityShare !== undefined){
 let data17 = data14.serviceabilityShare;
 if((typeof data17 == "number") && (isFinite(data17))){
 if(data17 > 1 || isNaN(data17)){
-const err36 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema115.properties.cable.properties.serviceabilityShare,data:data17};
+const err36 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.cable.properties.serviceabilityShare,data:data17};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -6103,7 +6250,7 @@ vErrors.push(err36);
 errors++;
 }
 if(data17 <= 0 || isNaN(data17)){
-const err37 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema115.properties.cable.properties.serviceabilityShare,data:data17};
+const err37 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema119.properties.cable.properties.serviceabilityShare,data:data17};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -6114,7 +6261,7 @@ errors++;
 }
 }
 else {
-const err38 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema115.properties.cable.properties.serviceabilityShare.type,parentSchema:schema115.properties.cable.properties.serviceabilityShare,data:data17};
+const err38 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.cable.properties.serviceabilityShare.type,parentSchema:schema119.properties.cable.properties.serviceabilityShare,data:data17};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -6126,7 +6273,7 @@ errors++;
 }
 }
 else {
-const err39 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.properties.cable.type,parentSchema:schema115.properties.cable,data:data14};
+const err39 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.cable.type,parentSchema:schema119.properties.cable,data:data14};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -6141,7 +6288,7 @@ let data18 = data.steel;
 if(data18 && typeof data18 == "object" && !Array.isArray(data18)){
 for(const key4 in data18){
 if(!((key4 === "gammaM0") || (key4 === "gammaM1"))){
-const err40 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema115.properties.steel,data:data18};
+const err40 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.steel,data:data18};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -6203,7 +6350,7 @@ errors++;
 }
 }
 else {
-const err45 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.properties.steel.type,parentSchema:schema115.properties.steel,data:data18};
+const err45 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.steel.type,parentSchema:schema119.properties.steel,data:data18};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -6218,7 +6365,7 @@ let data21 = data.allowable;
 if(data21 && typeof data21 == "object" && !Array.isArray(data21)){
 for(const key5 in data21){
 if(!((key5 === "cableSafetyFactor") || (key5 === "memberSafetyFactor"))){
-const err46 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema115.properties.allowable,data:data21};
+const err46 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.allowable,data:data21};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -6232,7 +6379,7 @@ if(data21.cableSafetyFactor !== undefined){
 let data22 = data21.cableSafetyFactor;
 if((typeof data22 == "number") && (isFinite(data22))){
 if(data22 < 1 || isNaN(data22)){
-const err47 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema115.properties.allowable.properties.cableSafetyFactor,data:data22};
+const err47 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema119.properties.allowable.properties.cableSafetyFactor,data:data22};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -6243,7 +6390,7 @@ errors++;
 }
 }
 else {
-const err48 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema115.properties.allowable.properties.cableSafetyFactor.type,parentSchema:schema115.properties.allowable.properties.cableSafetyFactor,data:data22};
+const err48 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.allowable.properties.cableSafetyFactor.type,parentSchema:schema119.properties.allowable.properties.cableSafetyFactor,data:data22};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -6257,7 +6404,7 @@ if(data21.memberSafetyFactor !== undefined){
 let data23 = data21.memberSafetyFactor;
 if((typeof data23 == "number") && (isFinite(data23))){
 if(data23 < 1 || isNaN(data23)){
-const err49 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema115.properties.allowable.properties.memberSafetyFactor,data:data23};
+const err49 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema119.properties.allowable.properties.memberSafetyFactor,data:data23};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -6268,7 +6415,7 @@ errors++;
 }
 }
 else {
-const err50 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema115.properties.allowable.properties.memberSafetyFactor.type,parentSchema:schema115.properties.allowable.properties.memberSafetyFactor,data:data23};
+const err50 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.allowable.properties.memberSafetyFactor.type,parentSchema:schema119.properties.allowable.properties.memberSafetyFactor,data:data23};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -6280,7 +6427,7 @@ errors++;
 }
 }
 else {
-const err51 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.properties.allowable.type,parentSchema:schema115.properties.allowable,data:data21};
+const err51 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.allowable.type,parentSchema:schema119.properties.allowable,data:data21};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -6292,7 +6439,7 @@ errors++;
 }
 }
 else {
-const err52 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.type,parentSchema:schema115,data};
+const err52 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.type,parentSchema:schema119,data};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -6301,20 +6448,20 @@ vErrors.push(err52);
 }
 errors++;
 }
-validate64.errors = vErrors;
+validate66.errors = vErrors;
 return errors === 0;
 }
 
-const schema127 = {"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}};
+const schema131 = {"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}};
 const pattern39 = new RegExp("^[xyz]{1,3}$", "u");
-const schema130 = {"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}};
+const schema134 = {"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}};
 
-function validate67(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate69(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.setBy === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema130.required,parentSchema:schema130,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema134.required,parentSchema:schema134,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6325,7 +6472,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "members") || (key0 === "group")) || (key0 === "setBy")) || (key0 === "label"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema130,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema134,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6369,7 +6516,7 @@ errors++;
 if(data.setBy !== undefined){
 let data2 = data.setBy;
 if(!((data2 === "force") || (data2 === "length"))){
-const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema130.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema130.properties.setBy.enum,parentSchema:schema130.properties.setBy,data:data2};
+const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema134.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema134.properties.setBy.enum,parentSchema:schema134.properties.setBy,data:data2};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -6382,7 +6529,7 @@ errors++;
 if(data.label !== undefined){
 let data3 = data.label;
 if(typeof data3 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema130.properties.label.type,parentSchema:schema130.properties.label,data:data3};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema134.properties.label.type,parentSchema:schema134.properties.label,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -6394,7 +6541,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema130.type,parentSchema:schema130,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema134.type,parentSchema:schema134,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -6403,17 +6550,17 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate67.errors = vErrors;
+validate69.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate66(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate68(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema127.required,parentSchema:schema127,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema131.required,parentSchema:schema131,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6423,7 +6570,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.steps === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema127.required,parentSchema:schema127,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema131.required,parentSchema:schema131,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6433,8 +6580,8 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema127.properties, key0))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema127,data};
+if(!(func2.call(schema131.properties, key0))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema131,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -6472,7 +6619,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema127.properties.label.type,parentSchema:schema127.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema131.properties.label.type,parentSchema:schema131.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -6510,7 +6657,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data3 = data.selfWeight;
 if(typeof data3 !== "boolean"){
-const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema127.properties.selfWeight.type,parentSchema:schema127.properties.selfWeight,data:data3};
+const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema131.properties.selfWeight.type,parentSchema:schema131.properties.selfWeight,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -6524,7 +6671,7 @@ if(data.steps !== undefined){
 let data4 = data.steps;
 if(Array.isArray(data4)){
 if(data4.length < 1){
-const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema127.properties.steps,data:data4};
+const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema131.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -6535,14 +6682,14 @@ errors++;
 }
 const len0 = data4.length;
 for(let i0=0; i0<len0; i0++){
-if(!(validate67(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
-vErrors = vErrors === null ? validate67.errors : vErrors.concat(validate67.errors);
+if(!(validate69(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate69.errors : vErrors.concat(validate69.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema127.properties.steps.type,parentSchema:schema127.properties.steps,data:data4};
+const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema131.properties.steps.type,parentSchema:schema131.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -6560,7 +6707,7 @@ for(let i1=0; i1<len1; i1++){
 let data7 = data6[i1];
 if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 if(data7.node === undefined){
-const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema127.properties.temporaryRestraints.items.required,parentSchema:schema127.properties.temporaryRestraints.items,data:data7};
+const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema131.properties.temporaryRestraints.items.required,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -6570,7 +6717,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data7.fixed === undefined){
-const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema127.properties.temporaryRestraints.items.required,parentSchema:schema127.properties.temporaryRestraints.items,data:data7};
+const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema131.properties.temporaryRestraints.items.required,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -6581,7 +6728,7 @@ errors++;
 }
 for(const key1 in data7){
 if(!(((key1 === "node") || (key1 === "fixed")) || (key1 === "releaseAfterStep"))){
-const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema127.properties.temporaryRestraints.items,data:data7};
+const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -6620,7 +6767,7 @@ if(data7.fixed !== undefined){
 let data9 = data7.fixed;
 if(typeof data9 === "string"){
 if(!pattern39.test(data9)){
-const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema127.properties.temporaryRestraints.items.properties.fixed,data:data9};
+const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema131.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -6631,7 +6778,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema127.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema127.properties.temporaryRestraints.items.properties.fixed,data:data9};
+const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema131.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema131.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -6644,7 +6791,7 @@ errors++;
 if(data7.releaseAfterStep !== undefined){
 let data10 = data7.releaseAfterStep;
 if(!(((typeof data10 == "number") && (!(data10 % 1) && !isNaN(data10))) && (isFinite(data10)))){
-const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema127.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema127.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema131.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema131.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -6655,7 +6802,7 @@ errors++;
 }
 if((typeof data10 == "number") && (isFinite(data10))){
 if(data10 < 1 || isNaN(data10)){
-const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema127.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema131.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -6668,7 +6815,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema127.properties.temporaryRestraints.items.type,parentSchema:schema127.properties.temporaryRestraints.items,data:data7};
+const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.properties.temporaryRestraints.items.type,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -6680,7 +6827,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema127.properties.temporaryRestraints.type,parentSchema:schema127.properties.temporaryRestraints,data:data6};
+const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema131.properties.temporaryRestraints.type,parentSchema:schema131.properties.temporaryRestraints,data:data6};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -6694,7 +6841,7 @@ if(data.plumb !== undefined){
 let data11 = data.plumb;
 if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
 if(data11.base === undefined){
-const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema127.properties.plumb.required,parentSchema:schema127.properties.plumb,data:data11};
+const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema131.properties.plumb.required,parentSchema:schema131.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -6704,7 +6851,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data11.top === undefined){
-const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema127.properties.plumb.required,parentSchema:schema127.properties.plumb,data:data11};
+const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema131.properties.plumb.required,parentSchema:schema131.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -6714,7 +6861,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data11.limit === undefined){
-const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema127.properties.plumb.required,parentSchema:schema127.properties.plumb,data:data11};
+const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema131.properties.plumb.required,parentSchema:schema131.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -6725,7 +6872,7 @@ errors++;
 }
 for(const key2 in data11){
 if(!(((key2 === "base") || (key2 === "top")) || (key2 === "limit"))){
-const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema127.properties.plumb,data:data11};
+const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema131.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -6812,7 +6959,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema127.properties.plumb.type,parentSchema:schema127.properties.plumb,data:data11};
+const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.properties.plumb.type,parentSchema:schema131.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -6874,7 +7021,7 @@ errors++;
 }
 }
 else {
-const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema127.type,parentSchema:schema127,data};
+const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.type,parentSchema:schema131,data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -6883,18 +7030,18 @@ vErrors.push(err37);
 }
 errors++;
 }
-validate66.errors = vErrors;
+validate68.errors = vErrors;
 return errors === 0;
 }
 
-const schema138 = {"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}};
+const schema142 = {"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}};
 
-function validate71(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate73(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema138.required,parentSchema:schema138,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema142.required,parentSchema:schema142,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6904,7 +7051,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.tensions === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema138.required,parentSchema:schema138,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema142.required,parentSchema:schema142,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6915,7 +7062,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "date")) || (key0 === "tensions")) || (key0 === "positions")) || (key0 === "tolerance")) || (key0 === "lengthUncertainty"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema138,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema142,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -6953,7 +7100,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema138.properties.label.type,parentSchema:schema138.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema142.properties.label.type,parentSchema:schema142.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -6966,7 +7113,7 @@ errors++;
 if(data.date !== undefined){
 let data2 = data.date;
 if(typeof data2 !== "string"){
-const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema138.properties.date.type,parentSchema:schema138.properties.date,data:data2};
+const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema142.properties.date.type,parentSchema:schema142.properties.date,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -6984,7 +7131,7 @@ for(let i0=0; i0<len0; i0++){
 let data4 = data3[i0];
 if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
 if(data4.member === undefined){
-const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema138.properties.tensions.items.required,parentSchema:schema138.properties.tensions.items,data:data4};
+const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -6994,7 +7141,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data4.method === undefined){
-const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema138.properties.tensions.items.required,parentSchema:schema138.properties.tensions.items,data:data4};
+const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -7004,7 +7151,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data4.value === undefined){
-const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema138.properties.tensions.items.required,parentSchema:schema138.properties.tensions.items,data:data4};
+const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -7014,7 +7161,7 @@ vErrors.push(err9);
 errors++;
 }
 if(data4.accuracy === undefined){
-const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema138.properties.tensions.items.required,parentSchema:schema138.properties.tensions.items,data:data4};
+const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -7024,7 +7171,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data4.temperature === undefined){
-const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema138.properties.tensions.items.required,parentSchema:schema138.properties.tensions.items,data:data4};
+const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -7035,7 +7182,7 @@ errors++;
 }
 for(const key1 in data4){
 if(!((((((key1 === "member") || (key1 === "method")) || (key1 === "value")) || (key1 === "accuracy")) || (key1 === "temperature")) || (key1 === "mode"))){
-const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema138.properties.tensions.items,data:data4};
+const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema142.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -7073,7 +7220,7 @@ errors++;
 if(data4.method !== undefined){
 let data6 = data4.method;
 if(!(((data6 === "dynamometer") || (data6 === "frequency")) || (data6 === "sag"))){
-const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema138.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema138.properties.tensions.items.properties.method.enum,parentSchema:schema138.properties.tensions.items.properties.method,data:data6};
+const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema142.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema142.properties.tensions.items.properties.method.enum,parentSchema:schema142.properties.tensions.items.properties.method,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -7161,7 +7308,7 @@ errors++;
 if(data4.mode !== undefined){
 let data10 = data4.mode;
 if(!((((data10 === "tautString") || (data10 === "inPlaneSymmetric")) || (data10 === "inPlaneAntisymmetric")) || (data10 === "lowestInPlane"))){
-const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema138.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema138.properties.tensions.items.properties.mode.enum,parentSchema:schema138.properties.tensions.items.properties.mode,data:data10};
+const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema142.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema142.properties.tensions.items.properties.mode.enum,parentSchema:schema142.properties.tensions.items.properties.mode,data:data10};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -7173,7 +7320,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema138.properties.tensions.items.type,parentSchema:schema138.properties.tensions.items,data:data4};
+const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema142.properties.tensions.items.type,parentSchema:schema142.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -7185,7 +7332,7 @@ errors++;
 }
 }
 else {
-const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema138.properties.tensions.type,parentSchema:schema138.properties.tensions,data:data3};
+const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema142.properties.tensions.type,parentSchema:schema142.properties.tensions,data:data3};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -7203,7 +7350,7 @@ for(let i1=0; i1<len1; i1++){
 let data12 = data11[i1];
 if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
 if(data12.node === undefined){
-const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema138.properties.positions.items.required,parentSchema:schema138.properties.positions.items,data:data12};
+const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -7213,7 +7360,7 @@ vErrors.push(err25);
 errors++;
 }
 if(data12.at === undefined){
-const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema138.properties.positions.items.required,parentSchema:schema138.properties.positions.items,data:data12};
+const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -7223,7 +7370,7 @@ vErrors.push(err26);
 errors++;
 }
 if(data12.accuracy === undefined){
-const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema138.properties.positions.items.required,parentSchema:schema138.properties.positions.items,data:data12};
+const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -7233,7 +7380,7 @@ vErrors.push(err27);
 errors++;
 }
 if(data12.temperature === undefined){
-const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema138.properties.positions.items.required,parentSchema:schema138.properties.positions.items,data:data12};
+const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -7244,7 +7391,7 @@ errors++;
 }
 for(const key2 in data12){
 if(!((((key2 === "node") || (key2 === "at")) || (key2 === "accuracy")) || (key2 === "temperature"))){
-const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema138.properties.positions.items,data:data12};
+const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema142.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -7380,7 +7527,7 @@ errors++;
 }
 }
 else {
-const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema138.properties.positions.items.type,parentSchema:schema138.properties.positions.items,data:data12};
+const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema142.properties.positions.items.type,parentSchema:schema142.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -7392,7 +7539,7 @@ errors++;
 }
 }
 else {
-const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema138.properties.positions.type,parentSchema:schema138.properties.positions,data:data11};
+const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema142.properties.positions.type,parentSchema:schema142.properties.positions,data:data11};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -7454,7 +7601,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema138.type,parentSchema:schema138,data};
+const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema142.type,parentSchema:schema142,data};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -7463,18 +7610,18 @@ vErrors.push(err46);
 }
 errors++;
 }
-validate71.errors = vErrors;
+validate73.errors = vErrors;
 return errors === 0;
 }
 
-const schema151 = {"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}};
+const schema155 = {"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}};
 
-function validate73(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema151.required,parentSchema:schema151,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema155.required,parentSchema:schema155,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -7484,7 +7631,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.nodes === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema151.required,parentSchema:schema151,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema155.required,parentSchema:schema155,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -7495,7 +7642,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "id") || (key0 === "nodes")) || (key0 === "region")) || (key0 === "label"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema151,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema155,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -7534,7 +7681,7 @@ if(data.nodes !== undefined){
 let data1 = data.nodes;
 if(Array.isArray(data1)){
 if(data1.length < 3){
-const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema151.properties.nodes,data:data1};
+const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema155.properties.nodes,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -7571,7 +7718,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema151.properties.nodes.type,parentSchema:schema151.properties.nodes,data:data1};
+const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema155.properties.nodes.type,parentSchema:schema155.properties.nodes,data:data1};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -7609,7 +7756,7 @@ errors++;
 if(data.label !== undefined){
 let data4 = data.label;
 if(typeof data4 !== "string"){
-const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema151.properties.label.type,parentSchema:schema151.properties.label,data:data4};
+const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema155.properties.label.type,parentSchema:schema155.properties.label,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -7621,7 +7768,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema151.type,parentSchema:schema151,data};
+const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema155.type,parentSchema:schema155,data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -7630,18 +7777,18 @@ vErrors.push(err12);
 }
 errors++;
 }
-validate73.errors = vErrors;
+validate75.errors = vErrors;
 return errors === 0;
 }
 
-const schema155 = {"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}};
+const schema159 = {"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}};
 
-function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate77(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema155.required,parentSchema:schema155,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema159.required,parentSchema:schema159,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -7651,7 +7798,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.meanCase === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema155.required,parentSchema:schema155,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema159.required,parentSchema:schema159,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -7661,7 +7808,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.patchFactor === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema155.required,parentSchema:schema155,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema159.required,parentSchema:schema159,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -7672,7 +7819,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "id") || (key0 === "label")) || (key0 === "meanCase")) || (key0 === "patchFactor")) || (key0 === "patches"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema155,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema159,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -7710,7 +7857,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema155.properties.label.type,parentSchema:schema155.properties.label,data:data1};
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema159.properties.label.type,parentSchema:schema159.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -7749,7 +7896,7 @@ if(data.patchFactor !== undefined){
 let data3 = data.patchFactor;
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 <= 1 || isNaN(data3)){
-const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema155.properties.patchFactor,data:data3};
+const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema159.properties.patchFactor,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -7760,7 +7907,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema155.properties.patchFactor.type,parentSchema:schema155.properties.patchFactor,data:data3};
+const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema159.properties.patchFactor.type,parentSchema:schema159.properties.patchFactor,data:data3};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -7774,7 +7921,7 @@ if(data.patches !== undefined){
 let data4 = data.patches;
 if(Array.isArray(data4)){
 if(data4.length < 1){
-const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema155.properties.patches,data:data4};
+const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema159.properties.patches,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -7788,7 +7935,7 @@ for(let i0=0; i0<len0; i0++){
 let data5 = data4[i0];
 if(data5 && typeof data5 == "object" && !Array.isArray(data5)){
 if(data5.from === undefined){
-const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema155.properties.patches.items.required,parentSchema:schema155.properties.patches.items,data:data5};
+const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema159.properties.patches.items.required,parentSchema:schema159.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -7798,7 +7945,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data5.to === undefined){
-const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema155.properties.patches.items.required,parentSchema:schema155.properties.patches.items,data:data5};
+const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema159.properties.patches.items.required,parentSchema:schema159.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -7809,7 +7956,7 @@ errors++;
 }
 for(const key1 in data5){
 if(!((key1 === "from") || (key1 === "to"))){
-const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema155.properties.patches.items,data:data5};
+const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema159.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -7822,7 +7969,7 @@ errors++;
 if(data5.from !== undefined){
 let data6 = data5.from;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema155.properties.patches.items.properties.from.type,parentSchema:schema155.properties.patches.items.properties.from,data:data6};
+const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema159.properties.patches.items.properties.from.type,parentSchema:schema159.properties.patches.items.properties.from,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -7835,7 +7982,7 @@ errors++;
 if(data5.to !== undefined){
 let data7 = data5.to;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema155.properties.patches.items.properties.to.type,parentSchema:schema155.properties.patches.items.properties.to,data:data7};
+const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema159.properties.patches.items.properties.to.type,parentSchema:schema159.properties.patches.items.properties.to,data:data7};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -7847,7 +7994,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema155.properties.patches.items.type,parentSchema:schema155.properties.patches.items,data:data5};
+const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema159.properties.patches.items.type,parentSchema:schema159.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -7859,7 +8006,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema155.properties.patches.type,parentSchema:schema155.properties.patches,data:data4};
+const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema159.properties.patches.type,parentSchema:schema159.properties.patches,data:data4};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -7871,7 +8018,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema155.type,parentSchema:schema155,data};
+const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema159.type,parentSchema:schema159,data};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -7880,18 +8027,18 @@ vErrors.push(err19);
 }
 errors++;
 }
-validate75.errors = vErrors;
+validate77.errors = vErrors;
 return errors === 0;
 }
 
-const schema158 = {"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
+const schema162 = {"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
 
-function validate77(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate79(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema158.required,parentSchema:schema158,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema162.required,parentSchema:schema162,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -7901,7 +8048,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.fromCase === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema158.required,parentSchema:schema158,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema162.required,parentSchema:schema162,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -7912,7 +8059,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "fromCase")) || (key0 === "members")) || (key0 === "group")) || (key0 === "dynamicFactor")) || (key0 === "dampingRatio"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema158,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema162,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -7950,7 +8097,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema158.properties.label.type,parentSchema:schema158.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema162.properties.label.type,parentSchema:schema162.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -8020,7 +8167,7 @@ if(data.dynamicFactor !== undefined){
 let data5 = data.dynamicFactor;
 if((typeof data5 == "number") && (isFinite(data5))){
 if(data5 > 2 || isNaN(data5)){
-const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema158.properties.dynamicFactor,data:data5};
+const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema162.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -8030,7 +8177,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data5 < 1 || isNaN(data5)){
-const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema158.properties.dynamicFactor,data:data5};
+const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema162.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -8041,7 +8188,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema158.properties.dynamicFactor.type,parentSchema:schema158.properties.dynamicFactor,data:data5};
+const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema162.properties.dynamicFactor.type,parentSchema:schema162.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -8055,7 +8202,7 @@ if(data.dampingRatio !== undefined){
 let data6 = data.dampingRatio;
 if((typeof data6 == "number") && (isFinite(data6))){
 if(data6 < 0 || isNaN(data6)){
-const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema158.properties.dampingRatio,data:data6};
+const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema162.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -8065,7 +8212,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data6 >= 1 || isNaN(data6)){
-const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema158.properties.dampingRatio,data:data6};
+const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema162.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -8076,7 +8223,7 @@ errors++;
 }
 }
 else {
-const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema158.properties.dampingRatio.type,parentSchema:schema158.properties.dampingRatio,data:data6};
+const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema162.properties.dampingRatio.type,parentSchema:schema162.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -8088,7 +8235,7 @@ errors++;
 }
 }
 else {
-const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema158.type,parentSchema:schema158,data};
+const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema162.type,parentSchema:schema162,data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -8097,7 +8244,538 @@ vErrors.push(err16);
 }
 errors++;
 }
-validate77.errors = vErrors;
+validate79.errors = vErrors;
+return errors === 0;
+}
+
+const schema166 = {"type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"case":{"$ref":"#/definitions/id"},"count":{"type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"type":"number"}}};
+
+function validate82(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema166.required,parentSchema:schema166,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.case === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema166.required,parentSchema:schema166,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+if(data.count === undefined){
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema166.required,parentSchema:schema166,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(((((key0 === "id") || (key0 === "label")) || (key0 === "case")) || (key0 === "count")) || (key0 === "azimuth"))){
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema166,data};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+else {
+const err5 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema166.properties.label.type,parentSchema:schema166.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+if(data.case !== undefined){
+let data2 = data.case;
+if(typeof data2 === "string"){
+if(!pattern0.test(data2)){
+const err7 = {instancePath:instancePath+"/case",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+else {
+const err8 = {instancePath:instancePath+"/case",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.count !== undefined){
+let data3 = data.count;
+if(!(((typeof data3 == "number") && (!(data3 % 1) && !isNaN(data3))) && (isFinite(data3)))){
+const err9 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema166.properties.count.type,parentSchema:schema166.properties.count,data:data3};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+if((typeof data3 == "number") && (isFinite(data3))){
+if(data3 > 72 || isNaN(data3)){
+const err10 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 72},message:"must be <= 72",schema:72,parentSchema:schema166.properties.count,data:data3};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+if(data3 < 1 || isNaN(data3)){
+const err11 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema166.properties.count,data:data3};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+}
+}
+if(data.azimuth !== undefined){
+let data4 = data.azimuth;
+if(!((typeof data4 == "number") && (isFinite(data4)))){
+const err12 = {instancePath:instancePath+"/azimuth",schemaPath:"#/properties/azimuth/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema166.properties.azimuth.type,parentSchema:schema166.properties.azimuth,data:data4};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+}
+else {
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema166.type,parentSchema:schema166,data};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+validate82.errors = vErrors;
+return errors === 0;
+}
+
+const schema169 = {"type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"kind":{"enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"$ref":"#/definitions/id"},"along":{"type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"$ref":"#/definitions/id"},"from":{"type":"number"},"to":{"type":"number"}}},"dragArea":{"$ref":"#/definitions/nonNegative"},"mass":{"$ref":"#/definitions/nonNegative"},"iceDragArea":{"$ref":"#/definitions/nonNegative"},"iceMass":{"$ref":"#/definitions/nonNegative"}}};
+
+function validate84(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema169.required,parentSchema:schema169,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.kind === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema169.required,parentSchema:schema169,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+if(data.dragArea === undefined){
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "dragArea"},message:"must have required property '"+"dragArea"+"'",schema:schema169.required,parentSchema:schema169,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+if(data.mass === undefined){
+const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "mass"},message:"must have required property '"+"mass"+"'",schema:schema169.required,parentSchema:schema169,data};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+for(const key0 in data){
+if(!(func2.call(schema169.properties, key0))){
+const err4 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema169,data};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err5 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+else {
+const err6 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err7 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema169.properties.label.type,parentSchema:schema169.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+if(data.kind !== undefined){
+let data2 = data.kind;
+if(!((((((data2 === "antenna") || (data2 === "dish")) || (data2 === "feeder")) || (data2 === "ladder")) || (data2 === "platform")) || (data2 === "other"))){
+const err8 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema169.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema169.properties.kind.enum,parentSchema:schema169.properties.kind,data:data2};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.node !== undefined){
+let data3 = data.node;
+if(typeof data3 === "string"){
+if(!pattern0.test(data3)){
+const err9 = {instancePath:instancePath+"/node",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data3};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+else {
+const err10 = {instancePath:instancePath+"/node",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data3};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+}
+if(data.along !== undefined){
+let data4 = data.along;
+if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
+if(data4.group === undefined){
+const err11 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema169.properties.along.required,parentSchema:schema169.properties.along,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+if(data4.from === undefined){
+const err12 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema169.properties.along.required,parentSchema:schema169.properties.along,data:data4};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+if(data4.to === undefined){
+const err13 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema169.properties.along.required,parentSchema:schema169.properties.along,data:data4};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+for(const key1 in data4){
+if(!(((key1 === "group") || (key1 === "from")) || (key1 === "to"))){
+const err14 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema169.properties.along,data:data4};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+if(data4.group !== undefined){
+let data5 = data4.group;
+if(typeof data5 === "string"){
+if(!pattern0.test(data5)){
+const err15 = {instancePath:instancePath+"/along/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data5};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+else {
+const err16 = {instancePath:instancePath+"/along/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data5};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+}
+if(data4.from !== undefined){
+let data6 = data4.from;
+if(!((typeof data6 == "number") && (isFinite(data6)))){
+const err17 = {instancePath:instancePath+"/along/from",schemaPath:"#/properties/along/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema169.properties.along.properties.from.type,parentSchema:schema169.properties.along.properties.from,data:data6};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+}
+if(data4.to !== undefined){
+let data7 = data4.to;
+if(!((typeof data7 == "number") && (isFinite(data7)))){
+const err18 = {instancePath:instancePath+"/along/to",schemaPath:"#/properties/along/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema169.properties.along.properties.to.type,parentSchema:schema169.properties.along.properties.to,data:data7};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+}
+}
+else {
+const err19 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema169.properties.along.type,parentSchema:schema169.properties.along,data:data4};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+}
+if(data.dragArea !== undefined){
+let data8 = data.dragArea;
+if((typeof data8 == "number") && (isFinite(data8))){
+if(data8 < 0 || isNaN(data8)){
+const err20 = {instancePath:instancePath+"/dragArea",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data8};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
+}
+errors++;
+}
+}
+else {
+const err21 = {instancePath:instancePath+"/dragArea",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data8};
+if(vErrors === null){
+vErrors = [err21];
+}
+else {
+vErrors.push(err21);
+}
+errors++;
+}
+}
+if(data.mass !== undefined){
+let data9 = data.mass;
+if((typeof data9 == "number") && (isFinite(data9))){
+if(data9 < 0 || isNaN(data9)){
+const err22 = {instancePath:instancePath+"/mass",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data9};
+if(vErrors === null){
+vErrors = [err22];
+}
+else {
+vErrors.push(err22);
+}
+errors++;
+}
+}
+else {
+const err23 = {instancePath:instancePath+"/mass",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data9};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+}
+if(data.iceDragArea !== undefined){
+let data10 = data.iceDragArea;
+if((typeof data10 == "number") && (isFinite(data10))){
+if(data10 < 0 || isNaN(data10)){
+const err24 = {instancePath:instancePath+"/iceDragArea",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data10};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+}
+else {
+const err25 = {instancePath:instancePath+"/iceDragArea",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data10};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+}
+if(data.iceMass !== undefined){
+let data11 = data.iceMass;
+if((typeof data11 == "number") && (isFinite(data11))){
+if(data11 < 0 || isNaN(data11)){
+const err26 = {instancePath:instancePath+"/iceMass",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data11};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+}
+else {
+const err27 = {instancePath:instancePath+"/iceMass",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data11};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+}
+}
+else {
+const err28 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema169.type,parentSchema:schema169,data};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
+}
+errors++;
+}
+validate84.errors = vErrors;
 return errors === 0;
 }
 
@@ -8334,8 +9012,8 @@ let data11 = data.groups;
 if(Array.isArray(data11)){
 const len4 = data11.length;
 for(let i4=0; i4<len4; i4++){
-if(!(validate42(data11[i4], {instancePath:instancePath+"/groups/" + i4,parentData:data11,parentDataProperty:i4,rootData}))){
-vErrors = vErrors === null ? validate42.errors : vErrors.concat(validate42.errors);
+if(!(validate44(data11[i4], {instancePath:instancePath+"/groups/" + i4,parentData:data11,parentDataProperty:i4,rootData}))){
+vErrors = vErrors === null ? validate44.errors : vErrors.concat(validate44.errors);
 errors = vErrors.length;
 }
 }
@@ -8356,8 +9034,8 @@ let data13 = data.combinations;
 if(Array.isArray(data13)){
 const len5 = data13.length;
 for(let i5=0; i5<len5; i5++){
-if(!(validate45(data13[i5], {instancePath:instancePath+"/combinations/" + i5,parentData:data13,parentDataProperty:i5,rootData}))){
-vErrors = vErrors === null ? validate45.errors : vErrors.concat(validate45.errors);
+if(!(validate47(data13[i5], {instancePath:instancePath+"/combinations/" + i5,parentData:data13,parentDataProperty:i5,rootData}))){
+vErrors = vErrors === null ? validate47.errors : vErrors.concat(validate47.errors);
 errors = vErrors.length;
 }
 }
@@ -8374,20 +9052,20 @@ errors++;
 }
 }
 if(data.checks !== undefined){
-if(!(validate47(data.checks, {instancePath:instancePath+"/checks",parentData:data,parentDataProperty:"checks",rootData}))){
-vErrors = vErrors === null ? validate47.errors : vErrors.concat(validate47.errors);
+if(!(validate49(data.checks, {instancePath:instancePath+"/checks",parentData:data,parentDataProperty:"checks",rootData}))){
+vErrors = vErrors === null ? validate49.errors : vErrors.concat(validate49.errors);
 errors = vErrors.length;
 }
 }
 if(data.tuning !== undefined){
-if(!(validate53(data.tuning, {instancePath:instancePath+"/tuning",parentData:data,parentDataProperty:"tuning",rootData}))){
-vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+if(!(validate55(data.tuning, {instancePath:instancePath+"/tuning",parentData:data,parentDataProperty:"tuning",rootData}))){
+vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
 errors = vErrors.length;
 }
 }
 if(data.installation !== undefined){
-if(!(validate58(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
-vErrors = vErrors === null ? validate58.errors : vErrors.concat(validate58.errors);
+if(!(validate60(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
+vErrors = vErrors === null ? validate60.errors : vErrors.concat(validate60.errors);
 errors = vErrors.length;
 }
 }
@@ -8396,8 +9074,8 @@ let data18 = data.generators;
 if(Array.isArray(data18)){
 const len6 = data18.length;
 for(let i6=0; i6<len6; i6++){
-if(!(validate60(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
-vErrors = vErrors === null ? validate60.errors : vErrors.concat(validate60.errors);
+if(!(validate62(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
+vErrors = vErrors === null ? validate62.errors : vErrors.concat(validate62.errors);
 errors = vErrors.length;
 }
 }
@@ -8414,14 +9092,14 @@ errors++;
 }
 }
 if(data.display !== undefined){
-if(!(validate62(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
-vErrors = vErrors === null ? validate62.errors : vErrors.concat(validate62.errors);
+if(!(validate64(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
+vErrors = vErrors === null ? validate64.errors : vErrors.concat(validate64.errors);
 errors = vErrors.length;
 }
 }
 if(data.designBasis !== undefined){
-if(!(validate64(data.designBasis, {instancePath:instancePath+"/designBasis",parentData:data,parentDataProperty:"designBasis",rootData}))){
-vErrors = vErrors === null ? validate64.errors : vErrors.concat(validate64.errors);
+if(!(validate66(data.designBasis, {instancePath:instancePath+"/designBasis",parentData:data,parentDataProperty:"designBasis",rootData}))){
+vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
 errors = vErrors.length;
 }
 }
@@ -8430,8 +9108,8 @@ let data22 = data.sequences;
 if(Array.isArray(data22)){
 const len7 = data22.length;
 for(let i7=0; i7<len7; i7++){
-if(!(validate66(data22[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data22,parentDataProperty:i7,rootData}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(!(validate68(data22[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data22,parentDataProperty:i7,rootData}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
 }
@@ -8452,8 +9130,8 @@ let data24 = data.siteMeasurements;
 if(Array.isArray(data24)){
 const len8 = data24.length;
 for(let i8=0; i8<len8; i8++){
-if(!(validate71(data24[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data24,parentDataProperty:i8,rootData}))){
-vErrors = vErrors === null ? validate71.errors : vErrors.concat(validate71.errors);
+if(!(validate73(data24[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data24,parentDataProperty:i8,rootData}))){
+vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
 errors = vErrors.length;
 }
 }
@@ -8474,7 +9152,7 @@ let data26 = data.report;
 if(data26 && typeof data26 == "object" && !Array.isArray(data26)){
 for(const key1 in data26){
 if(!((key1 === "documentNumber") || (key1 === "revisions"))){
-const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema150,data:data26};
+const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema154,data:data26};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -8487,7 +9165,7 @@ errors++;
 if(data26.documentNumber !== undefined){
 let data27 = data26.documentNumber;
 if(typeof data27 !== "string"){
-const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema150.properties.documentNumber.type,parentSchema:schema150.properties.documentNumber,data:data27};
+const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.documentNumber.type,parentSchema:schema154.properties.documentNumber,data:data27};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -8505,7 +9183,7 @@ for(let i9=0; i9<len9; i9++){
 let data29 = data28[i9];
 if(data29 && typeof data29 == "object" && !Array.isArray(data29)){
 if(data29.revision === undefined){
-const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema150.properties.revisions.items.required,parentSchema:schema150.properties.revisions.items,data:data29};
+const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema154.properties.revisions.items.required,parentSchema:schema154.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -8515,7 +9193,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data29.date === undefined){
-const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema150.properties.revisions.items.required,parentSchema:schema150.properties.revisions.items,data:data29};
+const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema154.properties.revisions.items.required,parentSchema:schema154.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -8525,7 +9203,7 @@ vErrors.push(err24);
 errors++;
 }
 if(data29.description === undefined){
-const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema150.properties.revisions.items.required,parentSchema:schema150.properties.revisions.items,data:data29};
+const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema154.properties.revisions.items.required,parentSchema:schema154.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -8536,7 +9214,7 @@ errors++;
 }
 for(const key2 in data29){
 if(!(((((key2 === "revision") || (key2 === "date")) || (key2 === "description")) || (key2 === "by")) || (key2 === "checkedBy"))){
-const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema150.properties.revisions.items,data:data29};
+const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema154.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -8549,7 +9227,7 @@ errors++;
 if(data29.revision !== undefined){
 let data30 = data29.revision;
 if(typeof data30 !== "string"){
-const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema150.properties.revisions.items.properties.revision.type,parentSchema:schema150.properties.revisions.items.properties.revision,data:data30};
+const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.revision.type,parentSchema:schema154.properties.revisions.items.properties.revision,data:data30};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -8562,7 +9240,7 @@ errors++;
 if(data29.date !== undefined){
 let data31 = data29.date;
 if(typeof data31 !== "string"){
-const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema150.properties.revisions.items.properties.date.type,parentSchema:schema150.properties.revisions.items.properties.date,data:data31};
+const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.date.type,parentSchema:schema154.properties.revisions.items.properties.date,data:data31};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -8575,7 +9253,7 @@ errors++;
 if(data29.description !== undefined){
 let data32 = data29.description;
 if(typeof data32 !== "string"){
-const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema150.properties.revisions.items.properties.description.type,parentSchema:schema150.properties.revisions.items.properties.description,data:data32};
+const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.description.type,parentSchema:schema154.properties.revisions.items.properties.description,data:data32};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -8588,7 +9266,7 @@ errors++;
 if(data29.by !== undefined){
 let data33 = data29.by;
 if(typeof data33 !== "string"){
-const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema150.properties.revisions.items.properties.by.type,parentSchema:schema150.properties.revisions.items.properties.by,data:data33};
+const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.by.type,parentSchema:schema154.properties.revisions.items.properties.by,data:data33};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -8601,7 +9279,7 @@ errors++;
 if(data29.checkedBy !== undefined){
 let data34 = data29.checkedBy;
 if(typeof data34 !== "string"){
-const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema150.properties.revisions.items.properties.checkedBy.type,parentSchema:schema150.properties.revisions.items.properties.checkedBy,data:data34};
+const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.checkedBy.type,parentSchema:schema154.properties.revisions.items.properties.checkedBy,data:data34};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -8613,7 +9291,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema150.properties.revisions.items.type,parentSchema:schema150.properties.revisions.items,data:data29};
+const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema154.properties.revisions.items.type,parentSchema:schema154.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -8625,7 +9303,7 @@ errors++;
 }
 }
 else {
-const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema150.properties.revisions.type,parentSchema:schema150.properties.revisions,data:data28};
+const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema154.properties.revisions.type,parentSchema:schema154.properties.revisions,data:data28};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -8637,7 +9315,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema150.type,parentSchema:schema150,data:data26};
+const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema154.type,parentSchema:schema154,data:data26};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -8652,8 +9330,8 @@ let data35 = data.panels;
 if(Array.isArray(data35)){
 const len10 = data35.length;
 for(let i10=0; i10<len10; i10++){
-if(!(validate73(data35[i10], {instancePath:instancePath+"/panels/" + i10,parentData:data35,parentDataProperty:i10,rootData}))){
-vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+if(!(validate75(data35[i10], {instancePath:instancePath+"/panels/" + i10,parentData:data35,parentDataProperty:i10,rootData}))){
+vErrors = vErrors === null ? validate75.errors : vErrors.concat(validate75.errors);
 errors = vErrors.length;
 }
 }
@@ -8674,8 +9352,8 @@ let data37 = data.patchWind;
 if(Array.isArray(data37)){
 const len11 = data37.length;
 for(let i11=0; i11<len11; i11++){
-if(!(validate75(data37[i11], {instancePath:instancePath+"/patchWind/" + i11,parentData:data37,parentDataProperty:i11,rootData}))){
-vErrors = vErrors === null ? validate75.errors : vErrors.concat(validate75.errors);
+if(!(validate77(data37[i11], {instancePath:instancePath+"/patchWind/" + i11,parentData:data37,parentDataProperty:i11,rootData}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
@@ -8696,8 +9374,8 @@ let data39 = data.memberLoss;
 if(Array.isArray(data39)){
 const len12 = data39.length;
 for(let i12=0; i12<len12; i12++){
-if(!(validate77(data39[i12], {instancePath:instancePath+"/memberLoss/" + i12,parentData:data39,parentDataProperty:i12,rootData}))){
-vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
+if(!(validate79(data39[i12], {instancePath:instancePath+"/memberLoss/" + i12,parentData:data39,parentDataProperty:i12,rootData}))){
+vErrors = vErrors === null ? validate79.errors : vErrors.concat(validate79.errors);
 errors = vErrors.length;
 }
 }
@@ -8713,14 +9391,58 @@ vErrors.push(err37);
 errors++;
 }
 }
+if(data.windDirections !== undefined){
+let data41 = data.windDirections;
+if(Array.isArray(data41)){
+const len13 = data41.length;
+for(let i13=0; i13<len13; i13++){
+if(!(validate82(data41[i13], {instancePath:instancePath+"/windDirections/" + i13,parentData:data41,parentDataProperty:i13,rootData}))){
+vErrors = vErrors === null ? validate82.errors : vErrors.concat(validate82.errors);
+errors = vErrors.length;
+}
+}
 }
 else {
-const err38 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema11.type,parentSchema:schema11,data};
+const err38 = {instancePath:instancePath+"/windDirections",schemaPath:"#/properties/windDirections/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.windDirections.type,parentSchema:schema11.properties.windDirections,data:data41};
 if(vErrors === null){
 vErrors = [err38];
 }
 else {
 vErrors.push(err38);
+}
+errors++;
+}
+}
+if(data.ancillaries !== undefined){
+let data43 = data.ancillaries;
+if(Array.isArray(data43)){
+const len14 = data43.length;
+for(let i14=0; i14<len14; i14++){
+if(!(validate84(data43[i14], {instancePath:instancePath+"/ancillaries/" + i14,parentData:data43,parentDataProperty:i14,rootData}))){
+vErrors = vErrors === null ? validate84.errors : vErrors.concat(validate84.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err39 = {instancePath:instancePath+"/ancillaries",schemaPath:"#/properties/ancillaries/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.ancillaries.type,parentSchema:schema11.properties.ancillaries,data:data43};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+}
+}
+else {
+const err40 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema11.type,parentSchema:schema11,data};
+if(vErrors === null){
+vErrors = [err40];
+}
+else {
+vErrors.push(err40);
 }
 errors++;
 }
