@@ -1,31 +1,37 @@
 /**
  * Worker-thread entry: solves the project in workerData and posts progress and the result to
- * the parent (messages in worker-messages.ts). Runs solveProject from the solver barrel.
+ * the parent (messages in worker-messages.ts). Runs solveProject from the solver barrel on the
+ * cases in `only` (default all); with `workers` > 1 it deals the cases out to that many workers
+ * of its own (parallel-solve.ts) and passes their progress and merged result on.
  */
-import { parentPort, workerData } from 'node:worker_threads';
+import { parentPort, resourceLimits, workerData } from 'node:worker_threads';
 import { solveProject } from '../../solver/index.ts';
+import type { SolveProgress } from '../../solver/index.ts';
+import { solveProjectInWorkers } from './parallel-solve.ts';
 import { createProgressThrottle } from './progress-throttle.ts';
+import { failureHint } from '../common/project/plausibility/failure-hint.ts';
 import { CANCEL_REQUESTED, transferablesOf, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
 
 function post(message: WorkerMessage, transfer: ArrayBuffer[] = []): void {
   parentPort?.postMessage(message, transfer);
 }
 
-function run(): void {
+async function run(): Promise<void> {
   const data = workerData as AnalysisWorkerData;
   const flag = new Int32Array(data.cancelFlag);
   const pass = createProgressThrottle(data.progressIntervalMs);
+  const onProgress = (progress: SolveProgress): void => { if (pass(progress)) post({ type: 'progress', progress }); };
   try {
-    const solution = solveProject(data.project, {
-      isCancelled: () => Atomics.load(flag, 0) === CANCEL_REQUESTED,
-      onProgress: (progress) => {
-        if (pass(progress)) post({ type: 'progress', progress });
-      },
-    });
+    const solution = (data.workers ?? 1) > 1
+      ? await solveProjectInWorkers(data.project, {
+        workers: data.workers, workerUrl: new URL(import.meta.url), cancelFlag: data.cancelFlag,
+        progressIntervalMs: data.progressIntervalMs, onProgress, resourceLimits, ...(data.only ? { only: data.only } : {}),
+      })
+      : solveProject(data.project, { isCancelled: () => Atomics.load(flag, 0) === CANCEL_REQUESTED, onProgress }, data.only ? { only: data.only } : {});
     post({ type: 'done', report: solution.report, fields: solution.fields }, transferablesOf(solution.fields));
   } catch (e) {
-    post({ type: 'failed', error: e instanceof Error ? `${e.message}` : String(e) });
+    post({ type: 'failed', error: (e instanceof Error ? e.message : String(e)) + failureHint(data.project) });
   }
 }
 
-run();
+void run();

@@ -15,6 +15,10 @@ export interface AnalysisWorkerData {
   cancelFlag: SharedArrayBuffer;
   /** Shortest time between two progress messages, ms (the last iteration of a case is always sent). */
   progressIntervalMs: number;
+  /** Only these case ids (a share of a parallel run; parallel-solve.ts). */
+  only?: string[];
+  /** Threads for this run: above 1 the worker deals the cases out to that many workers of its own. */
+  workers?: number;
 }
 
 export type WorkerMessage =

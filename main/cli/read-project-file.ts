@@ -10,6 +10,7 @@ import type { CliIO } from './cli-io.ts';
 import { modelBudgetMessage } from './model-budget-guard.ts';
 import { readRegularFileSync } from '../store/read-regular-file.ts';
 import type { FileStamp } from '../store/file-stamp.ts';
+import { plausibilityWarnings } from '../common/project/plausibility/plausibility-warnings.ts';
 
 export type ReadProjectOutcome =
   | { ok: true; project: ProjectFile; migratedFrom?: number; /** The file as read (lost-update guard of tune --write). */ stamp?: FileStamp }
@@ -32,12 +33,17 @@ export function readProjectFile(name: string, cwd: string): ReadProjectOutcome {
 
 /**
  * readProjectFile for a command that solves: on failure, or when the model would exceed the size
- * budget, every message goes to stderr and null comes back (exit 2).
+ * budget, every message goes to stderr and null comes back (exit 2). Plausibility warnings
+ * (values outside the ranges of real members, main/common/project/plausibility) go to stderr as
+ * `FILE: warning: …` and do not stop the command.
  */
 export function readProjectOrReport(name: string, io: CliIO): Extract<ReadProjectOutcome, { ok: true }> | null {
   const read = readProjectFile(name, io.cwd);
   const errors = read.ok ? [modelBudgetMessage(name, read.project)].filter((m): m is string => m !== null) : read.errors;
-  if (read.ok && errors.length === 0) return read;
+  if (read.ok && errors.length === 0) {
+    for (const w of plausibilityWarnings(read.project)) io.err(`${name}: warning: ${w}\n`);
+    return read;
+  }
   for (const m of errors) io.err(`${m}\n`);
   return null;
 }

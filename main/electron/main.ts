@@ -115,7 +115,7 @@ const handlers = createDesktopHandlers({
 });
 
 function createWindow(): void {
-  win = new BrowserWindow(mainWindowOptions(preloadPath));
+  win = new BrowserWindow(mainWindowOptions(preloadPath, !app.isPackaged));
   const id = win.webContents.id;
   allowedSenders.add(id);
   hardenWebContents(win.webContents);

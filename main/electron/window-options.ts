@@ -4,7 +4,11 @@
  */
 import type { BrowserWindowConstructorOptions, WebPreferences } from 'electron';
 
-export function secureWebPreferences(preloadPath: string): WebPreferences {
+/**
+ * `devTools` is true only for an unpackaged (development) run: a packaged build gives the page no
+ * DevTools (Electron security checklist; main.ts passes `!app.isPackaged`).
+ */
+export function secureWebPreferences(preloadPath: string, devTools = false): WebPreferences {
   return {
     preload: preloadPath,
     contextIsolation: true,
@@ -18,11 +22,11 @@ export function secureWebPreferences(preloadPath: string): WebPreferences {
     experimentalFeatures: false,
     navigateOnDragDrop: false,
     spellcheck: false,
-    devTools: true,
+    devTools,
   };
 }
 
-export function mainWindowOptions(preloadPath: string): BrowserWindowConstructorOptions {
+export function mainWindowOptions(preloadPath: string, devTools = false): BrowserWindowConstructorOptions {
   return {
     width: 1400,
     height: 900,
@@ -31,7 +35,7 @@ export function mainWindowOptions(preloadPath: string): BrowserWindowConstructor
     title: 'Stayset',
     show: false,
     backgroundColor: '#1e1f22',
-    webPreferences: secureWebPreferences(preloadPath),
+    webPreferences: secureWebPreferences(preloadPath, devTools),
   };
 }
 

@@ -267,6 +267,10 @@ export function createAppActions(hostOverride?: StaysetHost) {
       say('error', 'Fix the problems listed above before running the analysis.');
       return;
     }
+    if (projectStore.warnings.length) {
+      const w = projectStore.warnings;
+      say('info', `Check ${w.length === 1 ? 'this input' : `these ${w.length} inputs`} (the run goes ahead): ${w.slice(0, 3).join('; ')}${w.length > 3 ? ' …' : ''}`);
+    }
     results.started(projectStore.revision, p);
     try {
       const { runId } = await h().runAnalysis(p);

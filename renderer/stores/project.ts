@@ -9,6 +9,7 @@ import type { ProjectFile } from '../../solver/index.ts';
 import type { OpenedProject } from '../../main/common/host-contract.ts';
 import { EditHistory } from '../model/edit-history.ts';
 import { checkEdit, validationErrors } from '../model/validate-edit.ts';
+import { plausibilityWarnings } from '../../main/common/project/plausibility/plausibility-warnings.ts';
 import { appendRow, deleteRows, updateRows } from '../model/project-edits.ts';
 import type { TableName, TableRow } from '../model/table-names.ts';
 
@@ -25,6 +26,11 @@ export const useProjectStore = defineStore('project', () => {
   const migratedFrom = ref<number | null>(null);
   /** Validation messages of the current document (shown in the error banner). */
   const problems = shallowRef<string[]>([]);
+  /**
+   * Plausibility warnings of a valid document (values outside the ranges of real members or
+   * sites, main/common/project/plausibility): shown before a run; never block an edit or a run.
+   */
+  const warnings = computed(() => (project.value && problems.value.length === 0 ? plausibilityWarnings(project.value) : []));
   /** Bumped on every change of `project`; cheap to watch. */
   const revision = ref(0);
   const history = new EditHistory<ProjectFile>(HISTORY_CAP);
@@ -145,7 +151,7 @@ export const useProjectStore = defineStore('project', () => {
 
   return {
     markUnsaved, validationCount: () => validations,
-    project, path, name, migratedFrom, problems, revision, dirty, title,
+    project, path, name, migratedFrom, problems, warnings, revision, dirty, title,
     canUndo, canRedo, undoLabel, redoLabel,
     load, close, edit, updateRowsIn, addRow, removeRows, undo, redo, markSaved,
   };

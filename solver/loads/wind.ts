@@ -10,6 +10,7 @@ import {
 } from './defaults.ts';
 import { iceThicknessPerElement } from './ice.ts';
 import { windSpeedAt } from './wind-profile.ts';
+import { resolveWindCase, windSpeedAtHeight } from './wind-case.ts';
 
 /**
  * Drag area per unit length, m²/m (= m), of every element: Cd · D for round sections
@@ -79,22 +80,38 @@ export function elementDragForce(
 export function createWindLoad(model: AnalysisModel, project: ProjectFile, caseSpec: LoadCaseSpec): FollowerLoad {
   const wind = caseSpec.wind;
   const widths = windDragWidths(model, project, caseSpec);
-  const active: number[] = [];
-  for (let e = 0; e < model.elementCount; e++) if (widths[e] > 0) active.push(e);
-  const fe = new Float64Array(3);
-  const a = new Float64Array(3), b = new Float64Array(3);
+  let count = 0;
+  for (let e = 0; e < model.elementCount; e++) if (widths[e] > 0) count++;
+  // Geometry-independent parts, once per case (wind-case.ts): per residual only the chord, the
+  // speed at its mid-height and the normal velocity are computed; nothing is allocated.
+  const nodeA = new Int32Array(count), nodeB = new Int32Array(count), width = new Float64Array(count);
+  for (let e = 0, k = 0; e < model.elementCount; e++) {
+    if (!(widths[e] > 0)) continue;
+    nodeA[k] = model.elemNodes[2 * e]; nodeB[k] = model.elemNodes[2 * e + 1]; width[k] = widths[e]; k++;
+  }
+  const w = wind ? resolveWindCase(wind) : null;
   return {
     accumulate(x: Float64Array, factor: number, f: Float64Array): void {
-      if (!wind || factor === 0) return;
-      for (const e of active) {
-        const i = model.elemNodes[2 * e], j = model.elemNodes[2 * e + 1];
-        for (let d = 0; d < 3; d++) { a[d] = x[3 * i + d]; b[d] = x[3 * j + d]; }
-        elementDragForce(a, b, widths[e], wind, fe);
-        for (let d = 0; d < 3; d++) {
-          const h = 0.5 * factor * fe[d];
-          f[3 * i + d] += h;
-          f[3 * j + d] += h;
-        }
+      if (!w || factor === 0) return;
+      const { cx, cy, halfRho } = w;
+      for (let k = 0; k < count; k++) {
+        const i3 = 3 * nodeA[k], j3 = 3 * nodeB[k];
+        const az = x[i3 + 2], bz = x[j3 + 2];
+        const dx = x[j3] - x[i3], dy = x[j3 + 1] - x[i3 + 1], dz = bz - az;
+        const l = Math.hypot(dx, dy, dz);
+        if (!(l > 0)) continue;
+        // elementDragForce, term by term.
+        const tx = dx / l, ty = dy / l, tz = dz / l;
+        const v = windSpeedAtHeight(w, 0.5 * (az + bz));
+        const vx = v * cx, vy = v * cy;
+        const vt = vx * tx + vy * ty;
+        const nx = vx - vt * tx, ny = vy - vt * ty, nz = -vt * tz;
+        const vn = Math.hypot(nx, ny, nz);
+        const c = halfRho * width[k] * vn * l;
+        const h = 0.5 * factor;
+        const fx = h * (c * nx), fy = h * (c * ny), fz = h * (c * nz);
+        f[i3] += fx; f[i3 + 1] += fy; f[i3 + 2] += fz;
+        f[j3] += fx; f[j3 + 1] += fy; f[j3 + 2] += fz;
       }
     },
   };

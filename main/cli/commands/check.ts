@@ -10,6 +10,8 @@ import { EXIT, UsageError } from '../cli-io.ts';
 import type { CliIO } from '../cli-io.ts';
 import { parseOptions } from '../options.ts';
 import { readProjectOrReport } from '../read-project-file.ts';
+import { plausibilityWarnings, resultWarnings } from '../../common/project/plausibility/plausibility-warnings.ts';
+import { failureHint } from '../../common/project/plausibility/failure-hint.ts';
 import { replaceNonFinite } from '../format/finite-guard.ts';
 import { fixed, kN } from '../format/number-text.ts';
 import { textTable } from '../format/text-table.ts';
@@ -88,6 +90,11 @@ export function checkReportText(project: ProjectFile, check: CheckReport, env: E
   return out.join('\n');
 }
 
+function plausibilityText(warnings: string[]): string {
+  if (warnings.length === 0) return '';
+  return `Plausibility warnings (the results below may rest on a unit slip):\n${warnings.map((w) => `  warning: ${w}`).join('\n')}\n\n`;
+}
+
 async function run(args: string[], io: CliIO): Promise<number> {
   const opts = parseOptions(args, { json: { type: 'boolean' } });
   if (opts.positionals.length !== 1) {
@@ -101,7 +108,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   try {
     report = solveProject(project).report;
   } catch (e) {
-    io.err(`${file}: the analysis failed: ${(e as Error).message}\n`);
+    io.err(`${file}: the analysis failed: ${(e as Error).message}${failureHint(project)}\n`);
     return EXIT.notConverged;
   }
   let check: CheckReport;
@@ -115,9 +122,11 @@ async function run(args: string[], io: CliIO): Promise<number> {
     throw e;
   }
   const env = envelopeOf(report);
-  const guarded = replaceNonFinite({ pass: check.pass, check, envelope: env });
+  // Plausibility warnings are part of the report: inputs outside real ranges, sags of a unit slip.
+  const plausibility = [...plausibilityWarnings(project), ...resultWarnings(project, report)];
+  const guarded = replaceNonFinite({ pass: check.pass, check, envelope: env, plausibility });
   if (opts.flags.has('json')) io.out(`${JSON.stringify({ ...guarded.value, disclaimer: RESULTS_DISCLAIMER }, null, 2)}\n`);
-  else io.out(checkReportText(project, check, env));
+  else io.out(plausibilityText(plausibility) + checkReportText(project, check, env));
   if (guarded.paths.length > 0) {
     io.err(`${file}: error: the solver produced non-finite numbers at ${guarded.paths.slice(0, 10).join(', ')}; these results are invalid\n`);
     return EXIT.notConverged;

@@ -2,7 +2,7 @@
  * `stayset solve FILE [--json] [--case ID ...]`: validate a project, run the nonlinear analysis
  * of every load case and combination (or the chosen ones) and print the results.
  */
-import { solveProject } from '../../../solver/index.ts';
+import { solveOnWorkers } from '../solve-on-workers.ts';
 import type { ProjectFile, ProjectSolution, SolveControl, SolveProjectOptions, SolveReport } from '../../../solver/index.ts';
 import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
@@ -35,7 +35,7 @@ Exit status:
   2  bad input: missing or invalid file, unknown option or case (messages on stderr, nothing on stdout)`;
 
 /** The solver entry the command calls (solveProject; replaceable in tests of the output guards). */
-export type ProjectSolver = (project: ProjectFile, control?: SolveControl, options?: SolveProjectOptions) => ProjectSolution;
+export type ProjectSolver = (project: ProjectFile, control?: SolveControl, options?: SolveProjectOptions) => ProjectSolution | Promise<ProjectSolution>;
 
 async function run(solver: ProjectSolver, args: string[], io: CliIO): Promise<number> {
   const opts = parseOptions(args, { json: { type: 'boolean' }, case: { type: 'string', multiple: true } });
@@ -57,7 +57,7 @@ async function run(solver: ProjectSolver, args: string[], io: CliIO): Promise<nu
   let report: SolveReport;
   try {
     const only = requested.length > 0 ? { only: [...new Set(requested)] } : {};
-    report = filterReport(solver(project, {}, only).report, requested);
+    report = filterReport((await solver(project, {}, only)).report, requested);
   } catch (e) {
     io.err(`${file}: the analysis failed: ${(e as Error).message}\n`);
     return EXIT.notConverged;
@@ -90,4 +90,5 @@ export function makeSolveCommand(solver: ProjectSolver): CliCommand {
   };
 }
 
-export const solveCommand: CliCommand = makeSolveCommand(solveProject);
+/** Several cases: one worker thread per core (solve-on-workers.ts). */
+export const solveCommand: CliCommand = makeSolveCommand(solveOnWorkers);

@@ -8,13 +8,18 @@ import type { CliIO } from '../cli-io.ts';
 import { parseOptions } from '../options.ts';
 import { readProjectFile } from '../read-project-file.ts';
 import { jsonOutput } from '../format/json-output.ts';
+import { modelBudgetMessage } from '../model-budget-guard.ts';
+import { plausibilityWarnings } from '../../common/project/plausibility/plausibility-warnings.ts';
 
 const HELP = `Checks a project file without solving it: JSON syntax, format and version, the schema,
 unique ids, references between entries and values (positive E and area, no zero-length members).
 
 Options:
-  --json        Print {"valid": true|false, "errors": [...], "counts": {...}} on stdout (always,
-                also for an invalid file) instead of a summary line.
+  --json        Print {"valid": true|false, "errors": [...], "warnings": [...], "counts": {...}}
+                on stdout (always, also for an invalid file) instead of a summary line.
+Warnings (exit status unchanged) name entries whose values lie outside the ranges of real steel
+strand, rod and rope or of site conditions (E typed in MPa, ΔT of thousands of K, ice metres
+thick, negative pretension, sags that suggest a unit slip) and models too large to solve.
   --help        Show this help.
 
 Exit status:
@@ -35,6 +40,8 @@ async function run(args: string[], io: CliIO): Promise<number> {
     return EXIT.badInput;
   }
   const p = read.project;
+  const budget = modelBudgetMessage(file, p);
+  const warnings = [...plausibilityWarnings(p).map((w) => `${file}: ${w}`), ...(budget ? [budget] : [])];
   const counts = {
     nodes: p.nodes.length,
     members: p.members.length,
@@ -43,7 +50,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
     combinations: p.combinations?.length ?? 0,
   };
   if (json) {
-    io.out(jsonOutput({ valid: true, errors: [], counts, ...(read.migratedFrom !== undefined ? { migratedFrom: read.migratedFrom } : {}) }));
+    io.out(jsonOutput({ valid: true, errors: [], warnings, counts, ...(read.migratedFrom !== undefined ? { migratedFrom: read.migratedFrom } : {}) }));
   } else {
     const migrated = read.migratedFrom !== undefined ? ` (format version ${read.migratedFrom}, migrated on reading)` : '';
     const n = (k: number, one: string, many: string) => `${k} ${k === 1 ? one : many}`;
@@ -53,6 +60,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
         `${n(counts.combinations, 'combination', 'combinations')}\n`,
     );
   }
+  for (const w of warnings) io.err(`warning: ${w}\n`);
   return EXIT.ok;
 }
 

@@ -41,3 +41,27 @@ describe('electron-builder.yml', () => {
     expect(cfg.asarUnpack).toContain('dist/main/electron/analysis-worker.mjs');
   });
 });
+
+/**
+ * Electron security checklist (electronjs.org/docs/latest/tutorial/security, "Check which fuses
+ * you can change"; fuse names per @electron/fuses and electron-builder's electronFuses option).
+ */
+describe('electron-builder.yml: fuses', () => {
+  it('turns off Node entry points and pins the app to its asar archive', () => {
+    expect(cfg.electronFuses).toEqual({
+      runAsNode: false,
+      enableCookieEncryption: true,
+      enableNodeOptionsEnvironmentVariable: false,
+      enableNodeCliInspectArguments: false,
+      enableEmbeddedAsarIntegrityValidation: true,
+      onlyLoadAppFromAsar: true,
+      grantFileProtocolExtraPrivileges: false,
+    });
+  });
+
+  it('every fuse named is one electron-builder knows (its own configuration schema)', () => {
+    const scheme = JSON.parse(readFileSync(path.join(repo, 'node_modules', 'app-builder-lib', 'scheme.json'), 'utf8'));
+    const known = Object.keys(scheme.definitions.FuseOptionsV1.properties);
+    for (const name of Object.keys(cfg.electronFuses)) expect(known).toContain(name);
+  });
+});

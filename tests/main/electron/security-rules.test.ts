@@ -3,6 +3,7 @@
  * electronjs.org/docs/latest/tutorial/security: context isolation, sandbox, no Node in the page,
  * webSecurity, CSP, navigation and window-open limits, permission requests denied).
  */
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { STAYSET_CSP } from '../../../main/common/web-protocol.ts';
 import { appPageUrl, isAppUrl } from '../../../main/electron/app-url.ts';
@@ -18,6 +19,20 @@ describe('window options', () => {
       nodeIntegrationInWorker: false, nodeIntegrationInSubFrames: false, webSecurity: true,
       allowRunningInsecureContent: false, webviewTag: false,
     });
+  });
+});
+
+describe('DevTools', () => {
+  it('are off unless main.ts asks for them (it passes !app.isPackaged): never in a packaged build or a print window', () => {
+    expect(mainWindowOptions('/p.cjs').webPreferences!.devTools).toBe(false);
+    expect(mainWindowOptions('/p.cjs', false).webPreferences!.devTools).toBe(false);
+    expect(mainWindowOptions('/p.cjs', true).webPreferences!.devTools).toBe(true);
+    expect(printWindowOptions('/p.cjs').webPreferences!.devTools).toBe(false);
+  });
+
+  it('main.ts opens its window with DevTools tied to app.isPackaged', () => {
+    const main = readFileSync(new URL('../../../main/electron/main.ts', import.meta.url), 'utf8');
+    expect(main).toContain('mainWindowOptions(preloadPath, !app.isPackaged)');
   });
 });
 
