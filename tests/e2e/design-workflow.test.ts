@@ -131,7 +131,7 @@ describe.skipIf(SKIP_BROWSER_TESTS)('design, checks, tuning and generators in th
     const setup = page.getByTestId('tuning-setup');
     await setup.locator('select[aria-label="Target kind"]').selectOption('tensionShare');
     await setup.locator('select[aria-label="Target group"]').selectOption(LEVEL);
-    await setup.locator('input[aria-label="Target value %"]').fill('12');
+    await setup.locator('input[data-testid="tuning-target-value"]').fill('12');
     await setup.getByRole('button', { name: '+ Target' }).click();
     await page.getByTestId('run-tuning').click();
     await expect.poll(() => page.getByTestId('tuning-message').textContent(), { timeout: 60_000 }).toMatch(/targets met/);

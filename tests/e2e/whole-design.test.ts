@@ -17,7 +17,7 @@ import { startWebHost, type WebHost } from '../../main/web/web-server.ts';
 import { launchBrowser, type Browser } from './browser.ts';
 import { buildRenderer, REPO, SCREENSHOTS } from './serve-app.ts';
 import { pixelStats } from './pixels.ts';
-import { solveProject } from '../../solver/index.ts';
+import { DEFAULT_MODE_COUNT, solveModes, solveProject } from '../../solver/index.ts';
 import { blankProject } from '../../renderer/model/new-project.ts';
 import { defaultGuyedMast, newRecordId } from '../../renderer/generators/generator-defaults.ts';
 
@@ -330,7 +330,18 @@ describe('layout', () => {
     await page.getByTestId('results-filter').fill('guy L3');
     await expect.poll(() => page.locator('[data-testid="results-table"] tbody tr[data-member]').count()).toBe(3);
     await shot('42-resized-sorted-filtered.png');
+    // Natural frequencies about the dead case, as solveModes gives them in Node on the same project.
+    const edited = structuredClone(melt);
+    edited.loadCases[0] = { ...edited.loadCases[0], nodalLoads: [{ node: 'mast/P49a', force: [50_000, 0, 0] }] };
+    const modes = solveModes(edited, 'dead', { count: DEFAULT_MODE_COUNT });
+    expect(modes.modal.ok).toBe(true);
+    await page.getByTestId('results-tab-modes').click();
+    await page.getByTestId('compute-modes').click();
+    await page.getByTestId('modes-table').waitFor({ timeout: 60_000 });
+    const first = Number(await page.locator('[data-testid="modes-table"] tbody tr').first().locator('td').nth(1).textContent());
+    if (modes.modal.ok) expect(first).toBeCloseTo(modes.modal.analysis.modes[0].frequency, 2);
+    await shot('43-modes.png');
     expect(pageErrors).toEqual([]);
-  }, 60_000);
+  }, 120_000);
 });
 
