@@ -58,9 +58,11 @@ describe('3D view geometry from typed arrays', () => {
     expect(b.taut.colours[0]).toBeCloseTo(TENSION_STOPS[2][0], 6);
   });
 
-  it('colours by utilisation T max / breaking load', () => {
+  it('colours by utilisation: design tension / design resistance (default limit-state basis)', () => {
     const d = buildSceneData(project, { result, deformationScale: 1, colour: 'utilisation' });
-    expect(d.memberValue[0]).toBeCloseTo(0.5, 12);
+    // No designBasis in the project: limit-state format, F_Rd = k_e·MBL/(1.5·γ_R) with k_e = γ_R = 1
+    // (solver/checks/basis-defaults.ts), so T = 0.5·MBL is a utilisation of 0.5·1.5 = 0.75.
+    expect(d.memberValue[0]).toBeCloseTo(0.75, 12);
   });
 
   it('picks the nearest node, else the nearest member, in screen space', () => {

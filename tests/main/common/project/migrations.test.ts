@@ -18,7 +18,7 @@ const toV2: Migration = {
 };
 const toV3: Migration = { fromVersion: 2, summary: 'add notes list', migrate: (doc) => ({ ...doc, version: 3, notes: [] }) };
 
-const v1 = { format: 'stayset-project', version: 2, members: [{ id: 'M', segments: 4 }] };
+const v1 = { format: 'stayset-project', version: 1, members: [{ id: 'M', segments: 4 }] };
 
 describe('migration framework', () => {
   it('the shipped chain reaches the current version with no gaps', () => {
@@ -90,7 +90,7 @@ describe('migration framework', () => {
 });
 
 describe('format 1 → 2: the resistance factor becomes the design basis', () => {
-  const base = { format: 'stayset-project', version: 2, meta: { name: 'x', notes: 'old note' }, checks: { resistanceFactor: 0.4, upliftNodes: ['A'] } };
+  const base = { format: 'stayset-project', version: 1, meta: { name: 'x', notes: 'old note' }, checks: { resistanceFactor: 0.4, upliftNodes: ['A'] } };
 
   it('φ becomes the allowable format with cable safety factor 1/φ and a note saying so', () => {
     const r = migrateDocument(structuredClone(base));
@@ -106,7 +106,7 @@ describe('format 1 → 2: the resistance factor becomes the design basis', () =>
   });
 
   it('a file without φ gets the version-1 default 0.5, i.e. safety factor 2, and says it was the default', () => {
-    const r = migrateDocument({ format: 'stayset-project', version: 2 });
+    const r = migrateDocument({ format: 'stayset-project', version: 1 });
     if (!r.ok) throw new Error(r.errors.join('\n'));
     expect(r.doc.designBasis).toEqual({ format: 'allowable', allowable: { cableSafetyFactor: 2 } });
     expect((r.doc.meta as { notes: string }).notes).toMatch(/φ = 0.5 \(the version-1 default\)/);
