@@ -36,8 +36,11 @@ interface Share { report: { cases: CaseResult[]; stats?: { analysisSeconds: numb
 
 export async function solveProjectInWorkers(project: ProjectFile, options: ParallelSolveOptions = {}): Promise<ProjectSolution> {
   const t0 = performance.now();
+  // Cases derived from actions (patch wind, member loss, wind directions) need their base cases in
+  // the same solve: such projects run as one share, in solveProject's own order.
+  const derived = Boolean(project.patchWind?.length || project.memberLoss?.length || project.windDirections?.length);
   const ids = caseIds(project, options.only);
-  const parts = splitCases(ids, options.workers ?? defaultWorkerCount(ids.length));
+  const parts: (string[] | undefined)[] = derived ? [options.only] : splitCases(ids, options.workers ?? defaultWorkerCount(ids.length));
   const indexOf = new Map(ids.map((id, i) => [id, i] as const));
   const url = options.workerUrl ?? analysisWorkerUrl(import.meta.url);
   const cancelFlag = options.cancelFlag ?? new SharedArrayBuffer(4);
@@ -56,6 +59,11 @@ export async function solveProjectInWorkers(project: ProjectFile, options: Paral
     worker.on('error', (e) => settle(() => reject(e)));
     worker.on('exit', (code) => settle(() => reject(new Error(`analysis worker stopped unexpectedly (exit code ${code})`))));
   })));
+  const seconds0 = () => (performance.now() - t0) / 1000;
+  if (derived) {
+    const s = shares[0], analysis = s.report.stats?.analysisSeconds ?? 0, total = seconds0();
+    return { report: { cases: s.report.cases, stats: { analysisSeconds: analysis, newtonSeconds: total - analysis, seconds: total } }, fields: s.fields };
+  }
   const cases = new Array<CaseResult>(ids.length);
   const fields = new Array<CaseFields>(ids.length);
   let analysisSeconds = 0;
