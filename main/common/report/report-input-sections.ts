@@ -34,7 +34,7 @@ export function designBasisHtml(d: ReportDocument): string {
   const recorded = basis === undefined ? '<p>No design basis (codes, classes, partial factors) is recorded in the project file: state it here before issue.</p>'
     : table('Recorded design basis', ['Item', 'Value'], recordedBasis(basis).map(([k, v]) => [e(k), e(v)]));
   return recorded + table('Check settings used', ['Item', 'Value'], rows.map(([k, v]) => [e(k), e(v)]))
-    + '<p>Not checked by this program: compression, buckling and connections of bars (mast members), foundations and anchors; check those separately.</p>';
+    + '<p>Not checked by this program: connections, lateral-torsional buckling, foundations and anchors; check those separately. Bars and beam-columns are checked for tension, flexural buckling and slenderness (and beams for N + M) as listed in the check results.</p>';
 }
 
 export function sectionsHtml(d: ReportDocument): string {
