@@ -59,9 +59,9 @@ export async function solveProjectInWorkers(project: ProjectFile, options: Paral
     worker.on('error', (e) => settle(() => reject(e)));
     worker.on('exit', (code) => settle(() => reject(new Error(`analysis worker stopped unexpectedly (exit code ${code})`))));
   })));
-  const seconds0 = () => (performance.now() - t0) / 1000;
+  const elapsed = () => (performance.now() - t0) / 1000;
   if (derived) {
-    const s = shares[0], analysis = s.report.stats?.analysisSeconds ?? 0, total = seconds0();
+    const s = shares[0], analysis = s.report.stats?.analysisSeconds ?? 0, total = elapsed();
     return { report: { cases: s.report.cases, stats: { analysisSeconds: analysis, newtonSeconds: total - analysis, seconds: total } }, fields: s.fields };
   }
   const cases = new Array<CaseResult>(ids.length);
@@ -71,6 +71,6 @@ export async function solveProjectInWorkers(project: ProjectFile, options: Paral
     s.report.cases.forEach((c, k) => { const i = indexOf.get(c.id)!; cases[i] = c; fields[i] = s.fields[k]; });
     analysisSeconds = Math.max(analysisSeconds, s.report.stats?.analysisSeconds ?? 0);
   }
-  const seconds = (performance.now() - t0) / 1000;
+  const seconds = elapsed();
   return { report: { cases, stats: { analysisSeconds, newtonSeconds: seconds - analysisSeconds, seconds } }, fields };
 }

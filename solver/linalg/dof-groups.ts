@@ -81,7 +81,7 @@ export function groupDofs(n: number, graph: { ptr: Int32Array; idx: Int32Array }
  * True when {a} ∪ adj(a) equals {b} ∪ adj(b) (a != b, lists sorted ascending, no self loops):
  * b ∈ adj(a) and adj(a) \ {b} = adj(b) \ {a}.
  */
-function sameClosedNeighbourhood(ptr: Int32Array, idx: Int32Array, a: number, b: number): boolean {
+export function sameClosedNeighbourhood(ptr: Int32Array, idx: Int32Array, a: number, b: number): boolean {
   const ea = ptr[a + 1], eb = ptr[b + 1];
   if (ea - ptr[a] !== eb - ptr[b]) return false;
   let qa = ptr[a], qb = ptr[b];

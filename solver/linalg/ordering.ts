@@ -1,5 +1,6 @@
 import { adjacencyGraph, type SymmetricPattern } from './symmetric-pattern.ts';
 import { approximateMinimumDegree } from './amd.ts';
+import { sameClosedNeighbourhood } from './dof-groups.ts';
 
 /**
  * Fill-reducing ordering of a symmetric pattern, returned as perm (new → old).
@@ -59,22 +60,4 @@ export function fillReducingOrdering(
     for (let j = groupStart[s]; j < groupStart[s + 1]; j++) perm[k++] = j;
   }
   return perm;
-}
-
-/**
- * True when {a} ∪ adj(a) equals {b} ∪ adj(b) (a != b, lists sorted ascending, no self loops):
- * b ∈ adj(a) and adj(a) \ {b} = adj(b) \ {a}.
- */
-function sameClosedNeighbourhood(ptr: Int32Array, idx: Int32Array, a: number, b: number): boolean {
-  const ea = ptr[a + 1], eb = ptr[b + 1];
-  if (ea - ptr[a] !== eb - ptr[b]) return false;
-  let qa = ptr[a], qb = ptr[b];
-  let sawB = false;
-  for (;;) {
-    if (qa < ea && idx[qa] === b) { qa++; sawB = true; continue; }
-    if (qb < eb && idx[qb] === a) { qb++; continue; }
-    if (qa >= ea || qb >= eb) return sawB && qa >= ea && qb >= eb;
-    if (idx[qa] !== idx[qb]) return false;
-    qa++; qb++;
-  }
 }
