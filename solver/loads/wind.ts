@@ -59,7 +59,7 @@ export function elementDragForce(
   a: ArrayLike<number>, b: ArrayLike<number>, dragWidth: number, wind: WindSpec, out: Float64Array,
 ): void {
   const dx = b[0] - a[0], dy = b[1] - a[1], dz = b[2] - a[2];
-  const l = Math.hypot(dx, dy, dz);
+  const l = Math.sqrt(dx * dx + dy * dy + dz * dz);
   out[0] = 0; out[1] = 0; out[2] = 0;
   if (!(l > 0) || !(dragWidth > 0)) return;
   const tx = dx / l, ty = dy / l, tz = dz / l;
@@ -68,7 +68,7 @@ export function elementDragForce(
   const vx = v * cx, vy = v * cy;
   const vt = vx * tx + vy * ty;
   const nx = vx - vt * tx, ny = vy - vt * ty, nz = -vt * tz;
-  const vn = Math.hypot(nx, ny, nz);
+  const vn = Math.sqrt(nx * nx + ny * ny + nz * nz);
   const c = 0.5 * (wind.airDensity ?? DEFAULT_AIR_DENSITY) * windForceFactor(wind) * dragWidth * vn * l;
   out[0] = c * nx; out[1] = c * ny; out[2] = c * nz;
 }
@@ -99,7 +99,7 @@ export function createWindLoad(model: AnalysisModel, project: ProjectFile, caseS
         const i3 = 3 * nodeA[k], j3 = 3 * nodeB[k];
         const az = x[i3 + 2], bz = x[j3 + 2];
         const dx = x[j3] - x[i3], dy = x[j3 + 1] - x[i3 + 1], dz = bz - az;
-        const l = Math.hypot(dx, dy, dz);
+        const l = Math.sqrt(dx * dx + dy * dy + dz * dz);
         if (!(l > 0)) continue;
         // elementDragForce, term by term.
         const tx = dx / l, ty = dy / l, tz = dz / l;
@@ -107,7 +107,7 @@ export function createWindLoad(model: AnalysisModel, project: ProjectFile, caseS
         const vx = v * cx, vy = v * cy;
         const vt = vx * tx + vy * ty;
         const nx = vx - vt * tx, ny = vy - vt * ty, nz = -vt * tz;
-        const vn = Math.hypot(nx, ny, nz);
+        const vn = Math.sqrt(nx * nx + ny * ny + nz * nz);
         const c = halfRho * width[k] * vn * l;
         const h = 0.5 * factor;
         const fx = h * (c * nx), fy = h * (c * ny), fz = h * (c * nz);
