@@ -2,14 +2,17 @@
  * The 3D view's drawing is updated in place: another case, colour mode, deformation scale or
  * selection on the same model keeps every geometry, BufferAttribute array and material, and
  * rewrites the arrays (marked for upload); only a change of topology builds geometry again, and
- * even then the materials stay (so no shader program is compiled or linked again). Behaviour, not time.
+ * even then the materials stay (so no shader program is compiled or linked again). Mode animation
+ * frames (base + factor × φ, by the definition of a mode shape) go through the same in-place path.
+ * Behaviour, not time.
  */
 import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import * as THREE from 'three';
-import { buildModel, solveProject, type ProjectFile } from '../../solver/index.ts';
+import { buildModel, solveModes, solveProject, type ProjectFile } from '../../solver/index.ts';
 import { buildSceneData, type SceneData } from '../../renderer/view3d/scene-data.ts';
 import { ModelDrawing } from '../../renderer/view3d/model-drawing.ts';
+import { frameBuffer, largestTranslation, modeFrame, readableAmplitude } from '../../renderer/view3d/mode-shape.ts';
 
 const project = JSON.parse(readFileSync(new URL('../e2e/fixtures/demo-mast.stayset.json', import.meta.url), 'utf8')) as ProjectFile;
 const solution = solveProject(project);
@@ -111,5 +114,49 @@ describe('ModelDrawing updates in place', () => {
     const all = new Set<THREE.Material>(Object.values(d.materials));
     for (const m of materialsIn(d)) expect(all.has(m)).toBe(true);
     expect(d.stats.rebuilds).toBe(2);
+  });
+});
+
+describe('mode animation frames', () => {
+  const modes = solveModes(project, solution.report.cases[0].id, { count: 3 });
+  if (!modes.modal.ok) throw new Error('the fixture must have modes');
+  const input = { shape: modes.modal.fields.shapes[0], chains, modelNodes: model.coords.length / 3 };
+
+  it('moves nodes and element points by factor × φ and scales the largest movement to a share of the model', () => {
+    const base = scene(0);
+    const out = frameBuffer(base);
+    const f = 0.37;
+    modeFrame(base, input, f, out);
+    for (let i = 0; i < base.nodeIds.length; i++) {
+      for (let k = 0; k < 3; k++) expect(out.nodePositions[3 * i + k]).toBeCloseTo(base.nodePositions[3 * i + k] + f * input.shape[3 * i + k], 12);
+    }
+    // Members drawn through their element chain follow φ at every element node.
+    for (let j = 0; j < base.memberIds.length; j++) {
+      const start = base.polyOffsets[j];
+      expect(base.polyOffsets[j + 1] - start).toBe(chains[j].length);
+      chains[j].forEach((node, p) => {
+        for (let k = 0; k < 3; k++) expect(out.polyPoints[3 * (start + p) + k]).toBeCloseTo(base.polyPoints[3 * (start + p) + k] + f * input.shape[3 * node + k], 12);
+      });
+    }
+    const a = readableAmplitude(input, 50, 0.06);
+    expect(a * largestTranslation(input)).toBeCloseTo(3, 12);
+  });
+
+  it('frames are written into the drawing in place', () => {
+    const d = new ModelDrawing();
+    const base = scene(0);
+    d.update(base);
+    const { taut } = d.objects();
+    const array = positionAttr(taut).array;
+    const out = frameBuffer(base);
+    const seen: number[] = [];
+    for (let k = 0; k < 5; k++) {
+      expect(d.update(modeFrame(base, input, readableAmplitude(input, 30) * Math.sin(k), out))).toBe(false);
+      seen.push(array[3]);
+    }
+    expect(d.objects().taut).toBe(taut);
+    expect(positionAttr(taut).array).toBe(array);
+    expect(new Set(seen).size).toBeGreaterThan(1);
+    expect(d.stats).toEqual({ rebuilds: 1, inPlaceUpdates: 5 });
   });
 });
