@@ -2,7 +2,8 @@
  * Worker-thread entry: solves the project in workerData and posts progress and the result to
  * the parent (messages in worker-messages.ts). Runs solveProject from the solver barrel on the
  * cases in `only` (default all); with `workers` > 1 it deals the cases out to that many workers
- * of its own (parallel-solve.ts) and passes their progress and merged result on.
+ * of its own (parallel-solve.ts) and passes their progress and merged result on. With `site` set it
+ * runs that site request instead (main/common/site/site-run.ts) and posts 'site-done'.
  */
 import { parentPort, resourceLimits, workerData } from 'node:worker_threads';
 import { solveProject } from '../../solver/index.ts';
@@ -10,6 +11,7 @@ import type { SolveProgress } from '../../solver/index.ts';
 import { solveProjectInWorkers } from './parallel-solve.ts';
 import { createProgressThrottle } from './progress-throttle.ts';
 import { failureHint } from '../common/project/plausibility/failure-hint.ts';
+import { runSiteRequest } from '../common/site/site-run.ts';
 import { CANCEL_REQUESTED, transferablesOf, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
 
 function post(message: WorkerMessage, transfer: ArrayBuffer[] = []): void {
@@ -21,6 +23,14 @@ async function run(): Promise<void> {
   const flag = new Int32Array(data.cancelFlag);
   const pass = createProgressThrottle(data.progressIntervalMs);
   const onProgress = (progress: SolveProgress): void => { if (pass(progress)) post({ type: 'progress', progress }); };
+  if (data.site) {
+    try {
+      post({ type: 'site-done', outcome: runSiteRequest(data.project, data.site) });
+    } catch (e) {
+      post({ type: 'failed', error: e instanceof Error ? e.message : String(e) });
+    }
+    return;
+  }
   try {
     const solution = (data.workers ?? 1) > 1
       ? await solveProjectInWorkers(data.project, {

@@ -54,7 +54,7 @@ export async function solveProjectInWorkers(project: ProjectFile, options: Paral
         const p = m.progress;
         options.onProgress?.({ ...p, caseIndex: indexOf.get(p.caseId) ?? p.caseIndex, caseCount: ids.length });
       } else if (m.type === 'done') settle(() => resolve({ report: m.report, fields: m.fields }));
-      else settle(() => reject(new Error(m.error)));
+      else if (m.type === 'failed') settle(() => reject(new Error(m.error)));
     });
     worker.on('error', (e) => settle(() => reject(e)));
     worker.on('exit', (code) => settle(() => reject(new Error(`analysis worker stopped unexpectedly (exit code ${code})`))));

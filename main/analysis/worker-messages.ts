@@ -9,6 +9,7 @@
  * as transferred ArrayBuffers (no copy).
  */
 import type { CaseFields, ProjectFile, SolveProgress, SolveReport } from '../../solver/index.ts';
+import type { SiteOutcome, SiteRequest } from '../common/site/site-run.ts';
 
 export interface AnalysisWorkerData {
   project: ProjectFile;
@@ -19,12 +20,15 @@ export interface AnalysisWorkerData {
   only?: string[];
   /** Threads for this run: above 1 the worker deals the cases out to that many workers of its own. */
   workers?: number;
+  /** Instead of solving every case: this site request (site-runner.ts), answered with 'site-done'. */
+  site?: SiteRequest;
 }
 
 export type WorkerMessage =
   | { type: 'progress'; progress: SolveProgress }
   | { type: 'done'; report: SolveReport; fields: CaseFields[] }
-  | { type: 'failed'; error: string };
+  | { type: 'failed'; error: string }
+  | { type: 'site-done'; outcome: SiteOutcome };
 
 export const CANCEL_REQUESTED = 1;
 

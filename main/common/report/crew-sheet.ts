@@ -64,7 +64,7 @@ export function crewSheetBody(project: ProjectFile, r: SequenceResult, units: Sc
     ['Sequence', `${spec?.label ?? r.id} (${r.id})`],
     ['Day\'s temperature', `${formatTemperature(units, r.temperature)} ${l.temperature}`],
     ['Reference temperature', `${formatTemperature(units, r.referenceTemperature)} ${l.temperature}${r.referenceTemperatureAssumed ? ' (assumed: not set in the project)' : ''}`],
-    ['Stage checks', `φ = ${r.resistanceFactor} on breaking load; no slack cable; ${r.plumbLimit ? `tilt ≤ 1/${formatNumber(1 / r.plumbLimit, 0)}` : 'no plumb tolerance set'}`],
+    ['Stage checks', `φ = ${formatNumber(r.resistanceFactor, 3)} on breaking load; no slack cable; ${r.plumbLimit ? `tilt ≤ 1/${formatNumber(1 / r.plumbLimit, 0)}` : 'no plumb tolerance set'}`],
     ['Result', r.ok ? 'every stage passes; the final state equals the design state' : 'SOME STAGE FAILS — do not use this order as it stands'],
   ];
   const metaHtml = `<table class="meta"><tbody>${meta.map(([k, v]) => `<tr><th scope="row">${e(k)}</th><td>${e(v)}</td></tr>`).join('')}</tbody></table>`;

@@ -21,22 +21,20 @@ const table = (caption: string, head: string[], rows: string[][]) =>
   `<table><caption>${caption}</caption><thead><tr>${head.map((h) => `<th>${h}</th>`).join('')}</tr></thead><tbody>${rows.map((r) => `<tr>${r.map((c) => `<td>${c}</td>`).join('')}</tr>`).join('\n')}</tbody></table>`;
 const num = (key: string, text: string) => `<span class="num" data-n="${e(key)}">${text}</span>`;
 
-const CHECK_NAMES: Record<string, string> = {
-  utilisation: 'Utilisation T/(φ·MBL)', minimumTension: 'Least tension of no-slack members', sag: 'Sag', displacement: 'Node displacement', tilt: 'Mast tilt', uplift: 'Support uplift (Fz)',
-};
-
 function governingHtml(d: ReportDocument): string {
   const u = d.units, l = unitLabels(u);
-  const v = (check: string, x: number) => {
-    if (check === 'utilisation') return formatNumber(x, 3);
-    if (check === 'minimumTension' || check === 'uplift') return `${formatForce(u, x)} ${l.force}`;
-    if (check === 'tilt') return x > 0 ? `1/${formatNumber(1 / x, 0)}` : '0';
-    return `${formatLength(u, x)} ${l.length}`;
-  };
-  const rows = d.governing.map((g) => [CHECK_NAMES[g.check], e(g.item), e(g.case), num(`gov-${g.check}|${g.item}`, v(g.check, g.value)),
-    g.limit === null ? '—' : v(g.check, g.limit), g.ratio === null ? '—' : formatNumber(g.ratio, 3), g.pass ? 'PASS' : '<b class="fail">FAIL</b>']);
+  const rows = d.governing.map((g) => {
+    const key = `gov-${g.check}|${g.item}`;
+    if (g.result) {
+      const r = checkRow(g.result, u);
+      return [e(r.check), e(r.item), e(r.case), num(key, e(r.value)), e(r.limit || '—'), num(`${key}|ratio`, r.ratio), g.pass ? 'PASS' : '<b class="fail">FAIL</b>'];
+    }
+    const value = g.check === 'utilisation' ? formatNumber(g.value, 3) : `${formatForce(u, g.value)} ${l.force}`;
+    const name = g.check === 'utilisation' ? 'highest utilisation (design force / resistance)' : 'least tension of the no-slack members';
+    return [name, e(g.item), e(g.case), num(key, value), g.limit === null ? 'no slack' : formatNumber(g.limit, 3), g.ratio === null ? '—' : formatNumber(g.ratio, 3), g.pass ? 'PASS' : '<b class="fail">FAIL</b>'];
+  });
   const failures = d.checks.failures.map((f) => checkRow(f, u)).map((r) => [e(r.check), e(r.item), e(r.case), e(`${r.value} against ${r.limit}${r.ratio === '—' ? '' : ` (ratio ${r.ratio})`} — ${r.source}`)]);
-  return (rows.length ? table('Governing value of each check over every case and combination', ['Check', 'Item', 'Case', 'Value', 'Limit', 'Ratio', 'Result'], rows) : '<p>No check settings in the project.</p>')
+  return (rows.length ? table('Governing value of each check over every case and combination (the results of the design checks on this solve)', ['Check', 'Item', 'Case', 'Value', 'Limit', 'Ratio', 'Result'], rows) : '<p>No check settings in the project.</p>')
     + `<p><b>Overall: ${d.checks.pass ? 'every check passes in every case' : `${d.checks.failures.length} failure(s)`}</b> (design basis: ${e(d.checks.basis.label)}).</p>`
     + (failures.length ? table('Failures (worst case of each)', ['Check', 'Item', 'Case', 'Description'], failures) : '');
 }
