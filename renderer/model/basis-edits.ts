@@ -57,6 +57,17 @@ export function setCaseField(project: ProjectFile, caseId: string, key: 'purpose
   return { ...project, loadCases };
 }
 
+/** Set (or clear: ultimate) the purpose of combination `index`. */
+export function setCombinationPurpose(project: ProjectFile, index: number, purpose: CasePurpose | undefined): ProjectFile {
+  const combinations = (project.combinations ?? []).slice();
+  if (!combinations[index]) throw new RangeError(`combinations[${index}] does not exist`);
+  const c = { ...combinations[index] };
+  if (purpose === undefined) delete c.purpose;
+  else c.purpose = purpose;
+  combinations[index] = c;
+  return { ...project, combinations };
+}
+
 export interface BuiltEdit {
   project: ProjectFile;
   built: BuiltCombinations;

@@ -14,7 +14,7 @@ import { useProjectStore } from '../../renderer/stores/project.ts';
 import { addActionEntry, editAreaLoad, replaceActionEntry, setPath } from '../../renderer/model/action-edits.ts';
 import { ACTION_FIELDS, AREA_LOAD_FIELDS, MEMBER_LOSS_FIELDS, newActionEntry } from '../../renderer/model/action-fields.ts';
 import { applyFieldText, fieldText, otherFields, type Entry, type FieldContext, type FieldSpec } from '../../renderer/model/field-spec.ts';
-import { buildBasisCombinations, setBasisFactor, setBasisFormat, setCaseField } from '../../renderer/model/basis-edits.ts';
+import { buildBasisCombinations, setBasisFactor, setBasisFormat, setCaseField, setCombinationPurpose } from '../../renderer/model/basis-edits.ts';
 import { parseQuantity } from '../../renderer/units/parse-quantity.ts';
 
 const read = (name: string) => JSON.parse(readFileSync(fileURLToPath(new URL(`../../assets/${name}`, import.meta.url)), 'utf8')) as ProjectFile;
@@ -153,6 +153,13 @@ describe('design basis edits', () => {
     expect(s.edit('Factor', (p) => setBasisFactor(p, 'steel', 'gammaM0', -1)).ok).toBe(false);
     s.undo(); s.undo(); s.undo();
     expect(s.project).toBe(mast);
+    // A combination's purpose: set, cleared (ultimate when absent), refused for a bad value.
+    s.edit('Purpose', (p) => setCombinationPurpose(p, 1, 'accidental'));
+    expect(s.project!.combinations![1]).toEqual({ ...mast.combinations![1], purpose: 'accidental' });
+    s.edit('Purpose', (p) => setCombinationPurpose(p, 1, undefined));
+    expect('purpose' in s.project!.combinations![1]).toBe(false);
+    const bad = s.edit('Purpose', (p) => setCaseField(p, 'dead', 'purpose', 'sometimes' as never));
+    expect(!bad.ok && bad.errors[0]).toMatch(/^loadCases\[0\] "dead"/);
   });
 
   it('builds the combinations as the library behind `stayset combine --write` does, as one undo step', () => {
