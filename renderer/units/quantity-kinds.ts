@@ -17,7 +17,11 @@ export type QuantityKind =
   | 'massPerLength'
   | 'temperatureChange'
   | 'thermalExpansion'
-  | 'count';
+  | 'count'
+  | 'mass'
+  | 'dragArea'
+  | 'dragAreaPerLength'
+  | 'pressure';
 
 export interface DisplayUnit {
   /** Label shown in column headers and after values. */
@@ -77,6 +81,25 @@ export const KINDS: Record<QuantityKind, KindInfo> = {
   count: {
     siUnit: '', noun: 'a number',
     units: { SI: { label: '', mathUnit: '', toSI: 1 }, US: { label: '', mathUnit: '', toSI: 1 } },
+  },
+  mass: {
+    siUnit: 'kg', noun: 'a mass',
+    units: { SI: { label: 'kg', mathUnit: 'kg', toSI: 1 }, US: { label: 'lb', mathUnit: 'lb', toSI: LB } },
+  },
+  /** Drag area C_f·A of an ancillary (m² in the file). */
+  dragArea: {
+    siUnit: 'm^2', noun: 'an area',
+    units: { SI: { label: 'm²', mathUnit: 'm^2', toSI: 1 }, US: { label: 'ft²', mathUnit: 'ft^2', toSI: FT * FT } },
+  },
+  /** Drag area per length of a line ancillary (m²/m = m in the file). */
+  dragAreaPerLength: {
+    siUnit: 'm', noun: 'an area per length',
+    units: { SI: { label: 'm²/m', mathUnit: 'm', toSI: 1 }, US: { label: 'ft²/ft', mathUnit: 'ft', toSI: FT } },
+  },
+  /** Area loads and velocity pressure (Pa in the file); psf = lbf/ft². */
+  pressure: {
+    siUnit: 'Pa', noun: 'a pressure',
+    units: { SI: { label: 'Pa', mathUnit: 'Pa', toSI: 1 }, US: { label: 'psf', mathUnit: 'psf', toSI: LBF / (FT * FT) } },
   },
 };
 
