@@ -3,8 +3,8 @@
 "use strict";
 export const validate = validate10;
 export default validate10;
-const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 2","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":2,"x-message":"{field} must be 2"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"designBasis":{"$ref":"#/definitions/designBasis"},"sequences":{"type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"$ref":"#/definitions/report"},"panels":{"type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"type":"array","items":{"$ref":"#/definitions/memberLoss"}},"windDirections":{"type":"array","items":{"$ref":"#/definitions/windDirections"}},"ancillaries":{"type":"array","items":{"$ref":"#/definitions/ancillary"}}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"},"mass":{"$ref":"#/definitions/nonNegative"}}},"springs":{"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"shape":{"enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"$ref":"#/definitions/positive"},"termination":{"enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"$ref":"#/definitions/positive"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"},"basis":{"$ref":"#/definitions/windBasis"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"purpose":{"$ref":"#/definitions/casePurpose"},"action":{"enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"sequenceStep":{"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}},"sequence":{"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}},"report":{"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}},"casePurpose":{"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"},"designBasis":{"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}},"panel":{"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}},"pressureCoefficient":{"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}},"areaLoad":{"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}},"memberLoss":{"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}},"windBasis":{"type":"object","additionalProperties":false,"required":["velocity","averagingPeriod"],"properties":{"velocity":{"enum":["mean","peak"]},"averagingPeriod":{"$ref":"#/definitions/positive"},"gustFactor":{"$ref":"#/definitions/positive"},"structuralFactor":{"$ref":"#/definitions/positive"}}},"windDirections":{"type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"case":{"$ref":"#/definitions/id"},"count":{"type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"type":"number"}}},"ancillary":{"type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"kind":{"enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"$ref":"#/definitions/id"},"along":{"type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"$ref":"#/definitions/id"},"from":{"type":"number"},"to":{"type":"number"}}},"dragArea":{"$ref":"#/definitions/nonNegative"},"mass":{"$ref":"#/definitions/nonNegative"},"iceDragArea":{"$ref":"#/definitions/nonNegative"},"iceMass":{"$ref":"#/definitions/nonNegative"}}}}};
-const schema154 = {"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}};
+const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 2","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":2,"x-message":"{field} must be 2"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"designBasis":{"$ref":"#/definitions/designBasis"},"sequences":{"type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"$ref":"#/definitions/report"},"panels":{"type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"type":"array","items":{"$ref":"#/definitions/memberLoss"}},"windDirections":{"type":"array","items":{"$ref":"#/definitions/windDirections"}},"ancillaries":{"type":"array","items":{"$ref":"#/definitions/ancillary"}},"schedule":{"$ref":"#/definitions/schedule"}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"},"mass":{"$ref":"#/definitions/nonNegative"}}},"springs":{"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"shape":{"enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"$ref":"#/definitions/positive"},"termination":{"enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"$ref":"#/definitions/positive"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"},"basis":{"$ref":"#/definitions/windBasis"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"purpose":{"$ref":"#/definitions/casePurpose"},"action":{"enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"$ref":"#/definitions/tuningRunRecord"}}},"tuningRunRecord":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"},"status":{"enum":["met","unmet","notConverged"]},"targets":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["kind","label","value","limit","unit","sense","met"],"properties":{"kind":{"type":"string"},"label":{"type":"string"},"value":{"type":"number"},"limit":{"type":"number"},"unit":{"enum":["m","N","share"]},"sense":{"enum":["atMost","equal"]},"met":{"type":"boolean"},"governing":{"type":"string"}}}},"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by","initial","final"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"initial":{"type":"number"},"final":{"type":"number"},"atBound":{"enum":["lower","upper"]}}}},"diagnosis":{"type":"array","items":{"type":"string"}}}},"schedule":{"type":"object","additionalProperties":false,"properties":{"list":{"enum":["cables","groups","all"],"x-message":"{field} must be one of cables, groups, all"},"groups":{"$ref":"#/definitions/idList"}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"sequenceStep":{"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}},"sequence":{"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}},"report":{"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}},"casePurpose":{"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"},"designBasis":{"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}},"panel":{"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}},"pressureCoefficient":{"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}},"areaLoad":{"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}},"memberLoss":{"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}},"windBasis":{"type":"object","additionalProperties":false,"required":["velocity","averagingPeriod"],"properties":{"velocity":{"enum":["mean","peak"]},"averagingPeriod":{"$ref":"#/definitions/positive"},"gustFactor":{"$ref":"#/definitions/positive"},"structuralFactor":{"$ref":"#/definitions/positive"}}},"windDirections":{"type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"case":{"$ref":"#/definitions/id"},"count":{"type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"type":"number"}}},"ancillary":{"type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"kind":{"enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"$ref":"#/definitions/id"},"along":{"type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"$ref":"#/definitions/id"},"from":{"type":"number"},"to":{"type":"number"}}},"dragArea":{"$ref":"#/definitions/nonNegative"},"mass":{"$ref":"#/definitions/nonNegative"},"iceDragArea":{"$ref":"#/definitions/nonNegative"},"iceMass":{"$ref":"#/definitions/nonNegative"}}}}};
+const schema156 = {"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}};
 const func2 = Object.prototype.hasOwnProperty;
 const schema12 = {"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}};
 const schema13 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}};
@@ -4491,7 +4491,7 @@ validate49.errors = vErrors;
 return errors === 0;
 }
 
-const schema98 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
+const schema98 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"$ref":"#/definitions/tuningRunRecord"}}};
 const schema100 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
 
 function validate56(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
@@ -5250,6 +5250,504 @@ validate56.errors = vErrors;
 return errors === 0;
 }
 
+const schema113 = {"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"},"status":{"enum":["met","unmet","notConverged"]},"targets":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["kind","label","value","limit","unit","sense","met"],"properties":{"kind":{"type":"string"},"label":{"type":"string"},"value":{"type":"number"},"limit":{"type":"number"},"unit":{"enum":["m","N","share"]},"sense":{"enum":["atMost","equal"]},"met":{"type":"boolean"},"governing":{"type":"string"}}}},"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by","initial","final"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"initial":{"type":"number"},"final":{"type":"number"},"atBound":{"enum":["lower","upper"]}}}},"diagnosis":{"type":"array","items":{"type":"string"}}}};
+
+function validate59(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.date === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema113.required,parentSchema:schema113,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.summary === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema113.required,parentSchema:schema113,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((((((key0 === "date") || (key0 === "summary")) || (key0 === "status")) || (key0 === "targets")) || (key0 === "variables")) || (key0 === "diagnosis"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema113,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.date !== undefined){
+let data0 = data.date;
+if(typeof data0 !== "string"){
+const err3 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.date.type,parentSchema:schema113.properties.date,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.summary !== undefined){
+let data1 = data.summary;
+if(typeof data1 !== "string"){
+const err4 = {instancePath:instancePath+"/summary",schemaPath:"#/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.summary.type,parentSchema:schema113.properties.summary,data:data1};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.status !== undefined){
+let data2 = data.status;
+if(!(((data2 === "met") || (data2 === "unmet")) || (data2 === "notConverged"))){
+const err5 = {instancePath:instancePath+"/status",schemaPath:"#/properties/status/enum",keyword:"enum",params:{allowedValues: schema113.properties.status.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.status.enum,parentSchema:schema113.properties.status,data:data2};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.targets !== undefined){
+let data3 = data.targets;
+if(Array.isArray(data3)){
+const len0 = data3.length;
+for(let i0=0; i0<len0; i0++){
+let data4 = data3[i0];
+if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
+if(data4.kind === undefined){
+const err6 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema113.properties.targets.items.required,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+if(data4.label === undefined){
+const err7 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "label"},message:"must have required property '"+"label"+"'",schema:schema113.properties.targets.items.required,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+if(data4.value === undefined){
+const err8 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema113.properties.targets.items.required,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+if(data4.limit === undefined){
+const err9 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema113.properties.targets.items.required,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+if(data4.unit === undefined){
+const err10 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "unit"},message:"must have required property '"+"unit"+"'",schema:schema113.properties.targets.items.required,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+if(data4.sense === undefined){
+const err11 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "sense"},message:"must have required property '"+"sense"+"'",schema:schema113.properties.targets.items.required,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+if(data4.met === undefined){
+const err12 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "met"},message:"must have required property '"+"met"+"'",schema:schema113.properties.targets.items.required,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+for(const key1 in data4){
+if(!((((((((key1 === "kind") || (key1 === "label")) || (key1 === "value")) || (key1 === "limit")) || (key1 === "unit")) || (key1 === "sense")) || (key1 === "met")) || (key1 === "governing"))){
+const err13 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+}
+if(data4.kind !== undefined){
+let data5 = data4.kind;
+if(typeof data5 !== "string"){
+const err14 = {instancePath:instancePath+"/targets/" + i0+"/kind",schemaPath:"#/properties/targets/items/properties/kind/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.targets.items.properties.kind.type,parentSchema:schema113.properties.targets.items.properties.kind,data:data5};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+if(data4.label !== undefined){
+let data6 = data4.label;
+if(typeof data6 !== "string"){
+const err15 = {instancePath:instancePath+"/targets/" + i0+"/label",schemaPath:"#/properties/targets/items/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.targets.items.properties.label.type,parentSchema:schema113.properties.targets.items.properties.label,data:data6};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+if(data4.value !== undefined){
+let data7 = data4.value;
+if(!((typeof data7 == "number") && (isFinite(data7)))){
+const err16 = {instancePath:instancePath+"/targets/" + i0+"/value",schemaPath:"#/properties/targets/items/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema113.properties.targets.items.properties.value.type,parentSchema:schema113.properties.targets.items.properties.value,data:data7};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+}
+if(data4.limit !== undefined){
+let data8 = data4.limit;
+if(!((typeof data8 == "number") && (isFinite(data8)))){
+const err17 = {instancePath:instancePath+"/targets/" + i0+"/limit",schemaPath:"#/properties/targets/items/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema113.properties.targets.items.properties.limit.type,parentSchema:schema113.properties.targets.items.properties.limit,data:data8};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+}
+if(data4.unit !== undefined){
+let data9 = data4.unit;
+if(!(((data9 === "m") || (data9 === "N")) || (data9 === "share"))){
+const err18 = {instancePath:instancePath+"/targets/" + i0+"/unit",schemaPath:"#/properties/targets/items/properties/unit/enum",keyword:"enum",params:{allowedValues: schema113.properties.targets.items.properties.unit.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.targets.items.properties.unit.enum,parentSchema:schema113.properties.targets.items.properties.unit,data:data9};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+}
+if(data4.sense !== undefined){
+let data10 = data4.sense;
+if(!((data10 === "atMost") || (data10 === "equal"))){
+const err19 = {instancePath:instancePath+"/targets/" + i0+"/sense",schemaPath:"#/properties/targets/items/properties/sense/enum",keyword:"enum",params:{allowedValues: schema113.properties.targets.items.properties.sense.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.targets.items.properties.sense.enum,parentSchema:schema113.properties.targets.items.properties.sense,data:data10};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+}
+if(data4.met !== undefined){
+let data11 = data4.met;
+if(typeof data11 !== "boolean"){
+const err20 = {instancePath:instancePath+"/targets/" + i0+"/met",schemaPath:"#/properties/targets/items/properties/met/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema113.properties.targets.items.properties.met.type,parentSchema:schema113.properties.targets.items.properties.met,data:data11};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
+}
+errors++;
+}
+}
+if(data4.governing !== undefined){
+let data12 = data4.governing;
+if(typeof data12 !== "string"){
+const err21 = {instancePath:instancePath+"/targets/" + i0+"/governing",schemaPath:"#/properties/targets/items/properties/governing/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.targets.items.properties.governing.type,parentSchema:schema113.properties.targets.items.properties.governing,data:data12};
+if(vErrors === null){
+vErrors = [err21];
+}
+else {
+vErrors.push(err21);
+}
+errors++;
+}
+}
+}
+else {
+const err22 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.properties.targets.items.type,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err22];
+}
+else {
+vErrors.push(err22);
+}
+errors++;
+}
+}
+}
+else {
+const err23 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema113.properties.targets.type,parentSchema:schema113.properties.targets,data:data3};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+}
+if(data.variables !== undefined){
+let data13 = data.variables;
+if(Array.isArray(data13)){
+const len1 = data13.length;
+for(let i1=0; i1<len1; i1++){
+let data14 = data13[i1];
+if(data14 && typeof data14 == "object" && !Array.isArray(data14)){
+if(data14.group === undefined){
+const err24 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema113.properties.variables.items.required,parentSchema:schema113.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+if(data14.by === undefined){
+const err25 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema113.properties.variables.items.required,parentSchema:schema113.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+if(data14.initial === undefined){
+const err26 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "initial"},message:"must have required property '"+"initial"+"'",schema:schema113.properties.variables.items.required,parentSchema:schema113.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+if(data14.final === undefined){
+const err27 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "final"},message:"must have required property '"+"final"+"'",schema:schema113.properties.variables.items.required,parentSchema:schema113.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+for(const key2 in data14){
+if(!(((((key2 === "group") || (key2 === "by")) || (key2 === "initial")) || (key2 === "final")) || (key2 === "atBound"))){
+const err28 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema113.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
+}
+errors++;
+}
+}
+if(data14.group !== undefined){
+let data15 = data14.group;
+if(typeof data15 === "string"){
+if(!pattern0.test(data15)){
+const err29 = {instancePath:instancePath+"/variables/" + i1+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data15};
+if(vErrors === null){
+vErrors = [err29];
+}
+else {
+vErrors.push(err29);
+}
+errors++;
+}
+}
+else {
+const err30 = {instancePath:instancePath+"/variables/" + i1+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data15};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+}
+if(data14.by !== undefined){
+let data16 = data14.by;
+if(!((data16 === "pretension") || (data16 === "unstressedLength"))){
+const err31 = {instancePath:instancePath+"/variables/" + i1+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema113.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.variables.items.properties.by.enum,parentSchema:schema113.properties.variables.items.properties.by,data:data16};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+}
+if(data14.initial !== undefined){
+let data17 = data14.initial;
+if(!((typeof data17 == "number") && (isFinite(data17)))){
+const err32 = {instancePath:instancePath+"/variables/" + i1+"/initial",schemaPath:"#/properties/variables/items/properties/initial/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema113.properties.variables.items.properties.initial.type,parentSchema:schema113.properties.variables.items.properties.initial,data:data17};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+if(data14.final !== undefined){
+let data18 = data14.final;
+if(!((typeof data18 == "number") && (isFinite(data18)))){
+const err33 = {instancePath:instancePath+"/variables/" + i1+"/final",schemaPath:"#/properties/variables/items/properties/final/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema113.properties.variables.items.properties.final.type,parentSchema:schema113.properties.variables.items.properties.final,data:data18};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+if(data14.atBound !== undefined){
+let data19 = data14.atBound;
+if(!((data19 === "lower") || (data19 === "upper"))){
+const err34 = {instancePath:instancePath+"/variables/" + i1+"/atBound",schemaPath:"#/properties/variables/items/properties/atBound/enum",keyword:"enum",params:{allowedValues: schema113.properties.variables.items.properties.atBound.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.variables.items.properties.atBound.enum,parentSchema:schema113.properties.variables.items.properties.atBound,data:data19};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+}
+else {
+const err35 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.properties.variables.items.type,parentSchema:schema113.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+}
+}
+else {
+const err36 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema113.properties.variables.type,parentSchema:schema113.properties.variables,data:data13};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+if(data.diagnosis !== undefined){
+let data20 = data.diagnosis;
+if(Array.isArray(data20)){
+const len2 = data20.length;
+for(let i2=0; i2<len2; i2++){
+let data21 = data20[i2];
+if(typeof data21 !== "string"){
+const err37 = {instancePath:instancePath+"/diagnosis/" + i2,schemaPath:"#/properties/diagnosis/items/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.diagnosis.items.type,parentSchema:schema113.properties.diagnosis.items,data:data21};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+}
+else {
+const err38 = {instancePath:instancePath+"/diagnosis",schemaPath:"#/properties/diagnosis/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema113.properties.diagnosis.type,parentSchema:schema113.properties.diagnosis,data:data20};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
+}
+errors++;
+}
+}
+}
+else {
+const err39 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.type,parentSchema:schema113,data};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+validate59.errors = vErrors;
+return errors === 0;
+}
+
 
 function validate55(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -5437,10 +5935,14 @@ errors++;
 }
 }
 if(data.lastRun !== undefined){
-let data8 = data.lastRun;
-if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
-if(data8.date === undefined){
-const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema98.properties.lastRun.required,parentSchema:schema98.properties.lastRun,data:data8};
+if(!(validate59(data.lastRun, {instancePath:instancePath+"/lastRun",parentData:data,parentDataProperty:"lastRun",rootData}))){
+vErrors = vErrors === null ? validate59.errors : vErrors.concat(validate59.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err14 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.type,parentSchema:schema98,data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -5449,90 +5951,19 @@ vErrors.push(err14);
 }
 errors++;
 }
-if(data8.summary === undefined){
-const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema98.properties.lastRun.required,parentSchema:schema98.properties.lastRun,data:data8};
-if(vErrors === null){
-vErrors = [err15];
-}
-else {
-vErrors.push(err15);
-}
-errors++;
-}
-for(const key2 in data8){
-if(!((key2 === "date") || (key2 === "summary"))){
-const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema98.properties.lastRun,data:data8};
-if(vErrors === null){
-vErrors = [err16];
-}
-else {
-vErrors.push(err16);
-}
-errors++;
-}
-}
-if(data8.date !== undefined){
-let data9 = data8.date;
-if(typeof data9 !== "string"){
-const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema98.properties.lastRun.properties.date.type,parentSchema:schema98.properties.lastRun.properties.date,data:data9};
-if(vErrors === null){
-vErrors = [err17];
-}
-else {
-vErrors.push(err17);
-}
-errors++;
-}
-}
-if(data8.summary !== undefined){
-let data10 = data8.summary;
-if(typeof data10 !== "string"){
-const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema98.properties.lastRun.properties.summary.type,parentSchema:schema98.properties.lastRun.properties.summary,data:data10};
-if(vErrors === null){
-vErrors = [err18];
-}
-else {
-vErrors.push(err18);
-}
-errors++;
-}
-}
-}
-else {
-const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.properties.lastRun.type,parentSchema:schema98.properties.lastRun,data:data8};
-if(vErrors === null){
-vErrors = [err19];
-}
-else {
-vErrors.push(err19);
-}
-errors++;
-}
-}
-}
-else {
-const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.type,parentSchema:schema98,data};
-if(vErrors === null){
-vErrors = [err20];
-}
-else {
-vErrors.push(err20);
-}
-errors++;
-}
 validate55.errors = vErrors;
 return errors === 0;
 }
 
-const schema113 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
+const schema115 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
 
-function validate60(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate62(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!(key0 === "temperatures")){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema113,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema115,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5573,7 +6004,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema113.properties.temperatures.type,parentSchema:schema113.properties.temperatures,data:data0};
+const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema115.properties.temperatures.type,parentSchema:schema115.properties.temperatures,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5585,7 +6016,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.type,parentSchema:schema113,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.type,parentSchema:schema115,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -5594,18 +6025,18 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate60.errors = vErrors;
+validate62.errors = vErrors;
 return errors === 0;
 }
 
-const schema115 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
+const schema117 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
 
-function validate62(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate64(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema115.required,parentSchema:schema115,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema117.required,parentSchema:schema117,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5615,7 +6046,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema115.required,parentSchema:schema115,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema117.required,parentSchema:schema117,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5625,7 +6056,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.params === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema115.required,parentSchema:schema115,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema117.required,parentSchema:schema117,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5636,7 +6067,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "kind")) || (key0 === "params"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema115,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema117,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5674,7 +6105,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "guyedMast") || (data1 === "saddleNet")) || (data1 === "radialNet"))){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema115.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema115.properties.kind.enum,parentSchema:schema115.properties.kind,data:data1};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema117.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema117.properties.kind.enum,parentSchema:schema117.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -5687,7 +6118,7 @@ errors++;
 if(data.params !== undefined){
 let data2 = data.params;
 if(!(data2 && typeof data2 == "object" && !Array.isArray(data2))){
-const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.properties.params.type,parentSchema:schema115.properties.params,data:data2};
+const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema117.properties.params.type,parentSchema:schema117.properties.params,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -5699,7 +6130,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.type,parentSchema:schema115,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema117.type,parentSchema:schema117,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -5708,19 +6139,19 @@ vErrors.push(err8);
 }
 errors++;
 }
-validate62.errors = vErrors;
+validate64.errors = vErrors;
 return errors === 0;
 }
 
-const schema117 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
+const schema119 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
 
-function validate64(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate66(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((key0 === "units") || (key0 === "deformationScale"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema117,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema119,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5733,7 +6164,7 @@ errors++;
 if(data.units !== undefined){
 let data0 = data.units;
 if(!((data0 === "SI") || (data0 === "US"))){
-const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema117.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema117.properties.units.enum,parentSchema:schema117.properties.units,data:data0};
+const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema119.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema119.properties.units.enum,parentSchema:schema119.properties.units,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5770,7 +6201,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema117.type,parentSchema:schema117,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.type,parentSchema:schema119,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -5779,18 +6210,18 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate64.errors = vErrors;
+validate66.errors = vErrors;
 return errors === 0;
 }
 
-const schema119 = {"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}};
+const schema121 = {"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}};
 
-function validate66(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate68(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.format === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "format"},message:"must have required property '"+"format"+"'",schema:schema119.required,parentSchema:schema119,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "format"},message:"must have required property '"+"format"+"'",schema:schema121.required,parentSchema:schema121,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5801,7 +6232,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "format") || (key0 === "label")) || (key0 === "actionFactors")) || (key0 === "combinationFactors")) || (key0 === "cable")) || (key0 === "steel")) || (key0 === "allowable"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema119,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema121,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5814,7 +6245,7 @@ errors++;
 if(data.format !== undefined){
 let data0 = data.format;
 if(!((data0 === "limitState") || (data0 === "allowable"))){
-const err2 = {instancePath:instancePath+"/format",schemaPath:"#/properties/format/enum",keyword:"enum",params:{allowedValues: schema119.properties.format.enum},message:"must be equal to one of the allowed values",schema:schema119.properties.format.enum,parentSchema:schema119.properties.format,data:data0};
+const err2 = {instancePath:instancePath+"/format",schemaPath:"#/properties/format/enum",keyword:"enum",params:{allowedValues: schema121.properties.format.enum},message:"must be equal to one of the allowed values",schema:schema121.properties.format.enum,parentSchema:schema121.properties.format,data:data0};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5827,7 +6258,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err3 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema119.properties.label.type,parentSchema:schema119.properties.label,data:data1};
+const err3 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema121.properties.label.type,parentSchema:schema121.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5842,7 +6273,7 @@ let data2 = data.actionFactors;
 if(data2 && typeof data2 == "object" && !Array.isArray(data2)){
 for(const key1 in data2){
 if(!(((((((key1 === "permanent") || (key1 === "permanentFavourable")) || (key1 === "prestress")) || (key1 === "wind")) || (key1 === "ice")) || (key1 === "temperature")) || (key1 === "accidental"))){
-const err4 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.actionFactors,data:data2};
+const err4 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema121.properties.actionFactors,data:data2};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -6029,7 +6460,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.actionFactors.type,parentSchema:schema119.properties.actionFactors,data:data2};
+const err19 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema121.properties.actionFactors.type,parentSchema:schema121.properties.actionFactors,data:data2};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -6044,7 +6475,7 @@ let data10 = data.combinationFactors;
 if(data10 && typeof data10 == "object" && !Array.isArray(data10)){
 for(const key2 in data10){
 if(!(((key2 === "wind") || (key2 === "ice")) || (key2 === "temperature"))){
-const err20 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.combinationFactors,data:data10};
+const err20 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema121.properties.combinationFactors,data:data10};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -6058,7 +6489,7 @@ if(data10.wind !== undefined){
 let data11 = data10.wind;
 if((typeof data11 == "number") && (isFinite(data11))){
 if(data11 > 1 || isNaN(data11)){
-const err21 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.combinationFactors.properties.wind,data:data11};
+const err21 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema121.properties.combinationFactors.properties.wind,data:data11};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -6068,7 +6499,7 @@ vErrors.push(err21);
 errors++;
 }
 if(data11 < 0 || isNaN(data11)){
-const err22 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema119.properties.combinationFactors.properties.wind,data:data11};
+const err22 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema121.properties.combinationFactors.properties.wind,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -6079,7 +6510,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.combinationFactors.properties.wind.type,parentSchema:schema119.properties.combinationFactors.properties.wind,data:data11};
+const err23 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema121.properties.combinationFactors.properties.wind.type,parentSchema:schema121.properties.combinationFactors.properties.wind,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -6093,7 +6524,7 @@ if(data10.ice !== undefined){
 let data12 = data10.ice;
 if((typeof data12 == "number") && (isFinite(data12))){
 if(data12 > 1 || isNaN(data12)){
-const err24 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.combinationFactors.properties.ice,data:data12};
+const err24 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema121.properties.combinationFactors.properties.ice,data:data12};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -6103,7 +6534,7 @@ vErrors.push(err24);
 errors++;
 }
 if(data12 < 0 || isNaN(data12)){
-const err25 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema119.properties.combinationFactors.properties.ice,data:data12};
+const err25 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema121.properties.combinationFactors.properties.ice,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -6114,7 +6545,7 @@ errors++;
 }
 }
 else {
-const err26 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.combinationFactors.properties.ice.type,parentSchema:schema119.properties.combinationFactors.properties.ice,data:data12};
+const err26 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema121.properties.combinationFactors.properties.ice.type,parentSchema:schema121.properties.combinationFactors.properties.ice,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -6128,7 +6559,7 @@ if(data10.temperature !== undefined){
 let data13 = data10.temperature;
 if((typeof data13 == "number") && (isFinite(data13))){
 if(data13 > 1 || isNaN(data13)){
-const err27 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.combinationFactors.properties.temperature,data:data13};
+const err27 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema121.properties.combinationFactors.properties.temperature,data:data13};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -6138,7 +6569,7 @@ vErrors.push(err27);
 errors++;
 }
 if(data13 < 0 || isNaN(data13)){
-const err28 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema119.properties.combinationFactors.properties.temperature,data:data13};
+const err28 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema121.properties.combinationFactors.properties.temperature,data:data13};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -6149,7 +6580,7 @@ errors++;
 }
 }
 else {
-const err29 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.combinationFactors.properties.temperature.type,parentSchema:schema119.properties.combinationFactors.properties.temperature,data:data13};
+const err29 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema121.properties.combinationFactors.properties.temperature.type,parentSchema:schema121.properties.combinationFactors.properties.temperature,data:data13};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -6161,7 +6592,7 @@ errors++;
 }
 }
 else {
-const err30 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.combinationFactors.type,parentSchema:schema119.properties.combinationFactors,data:data10};
+const err30 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema121.properties.combinationFactors.type,parentSchema:schema121.properties.combinationFactors,data:data10};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -6176,7 +6607,7 @@ let data14 = data.cable;
 if(data14 && typeof data14 == "object" && !Array.isArray(data14)){
 for(const key3 in data14){
 if(!(((key3 === "breakingFactor") || (key3 === "partialFactor")) || (key3 === "serviceabilityShare"))){
-const err31 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.cable,data:data14};
+const err31 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema121.properties.cable,data:data14};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -6240,7 +6671,7 @@ if(data14.serviceabilityShare !== undefined){
 let data17 = data14.serviceabilityShare;
 if((typeof data17 == "number") && (isFinite(data17))){
 if(data17 > 1 || isNaN(data17)){
-const err36 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.cable.properties.serviceabilityShare,data:data17};
+const err36 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema121.properties.cable.properties.serviceabilityShare,data:data17};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -6250,7 +6681,7 @@ vErrors.push(err36);
 errors++;
 }
 if(data17 <= 0 || isNaN(data17)){
-const err37 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema119.properties.cable.properties.serviceabilityShare,data:data17};
+const err37 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema121.properties.cable.properties.serviceabilityShare,data:data17};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -6261,7 +6692,7 @@ errors++;
 }
 }
 else {
-const err38 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.cable.properties.serviceabilityShare.type,parentSchema:schema119.properties.cable.properties.serviceabilityShare,data:data17};
+const err38 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema121.properties.cable.properties.serviceabilityShare.type,parentSchema:schema121.properties.cable.properties.serviceabilityShare,data:data17};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -6273,7 +6704,7 @@ errors++;
 }
 }
 else {
-const err39 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.cable.type,parentSchema:schema119.properties.cable,data:data14};
+const err39 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema121.properties.cable.type,parentSchema:schema121.properties.cable,data:data14};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -6288,7 +6719,7 @@ let data18 = data.steel;
 if(data18 && typeof data18 == "object" && !Array.isArray(data18)){
 for(const key4 in data18){
 if(!((key4 === "gammaM0") || (key4 === "gammaM1"))){
-const err40 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.steel,data:data18};
+const err40 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema121.properties.steel,data:data18};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -6350,7 +6781,7 @@ errors++;
 }
 }
 else {
-const err45 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.steel.type,parentSchema:schema119.properties.steel,data:data18};
+const err45 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema121.properties.steel.type,parentSchema:schema121.properties.steel,data:data18};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -6365,7 +6796,7 @@ let data21 = data.allowable;
 if(data21 && typeof data21 == "object" && !Array.isArray(data21)){
 for(const key5 in data21){
 if(!((key5 === "cableSafetyFactor") || (key5 === "memberSafetyFactor"))){
-const err46 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.allowable,data:data21};
+const err46 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema121.properties.allowable,data:data21};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -6379,7 +6810,7 @@ if(data21.cableSafetyFactor !== undefined){
 let data22 = data21.cableSafetyFactor;
 if((typeof data22 == "number") && (isFinite(data22))){
 if(data22 < 1 || isNaN(data22)){
-const err47 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema119.properties.allowable.properties.cableSafetyFactor,data:data22};
+const err47 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema121.properties.allowable.properties.cableSafetyFactor,data:data22};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -6390,7 +6821,7 @@ errors++;
 }
 }
 else {
-const err48 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.allowable.properties.cableSafetyFactor.type,parentSchema:schema119.properties.allowable.properties.cableSafetyFactor,data:data22};
+const err48 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema121.properties.allowable.properties.cableSafetyFactor.type,parentSchema:schema121.properties.allowable.properties.cableSafetyFactor,data:data22};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -6404,7 +6835,7 @@ if(data21.memberSafetyFactor !== undefined){
 let data23 = data21.memberSafetyFactor;
 if((typeof data23 == "number") && (isFinite(data23))){
 if(data23 < 1 || isNaN(data23)){
-const err49 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema119.properties.allowable.properties.memberSafetyFactor,data:data23};
+const err49 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema121.properties.allowable.properties.memberSafetyFactor,data:data23};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -6415,7 +6846,7 @@ errors++;
 }
 }
 else {
-const err50 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.allowable.properties.memberSafetyFactor.type,parentSchema:schema119.properties.allowable.properties.memberSafetyFactor,data:data23};
+const err50 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema121.properties.allowable.properties.memberSafetyFactor.type,parentSchema:schema121.properties.allowable.properties.memberSafetyFactor,data:data23};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -6427,7 +6858,7 @@ errors++;
 }
 }
 else {
-const err51 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.allowable.type,parentSchema:schema119.properties.allowable,data:data21};
+const err51 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema121.properties.allowable.type,parentSchema:schema121.properties.allowable,data:data21};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -6439,7 +6870,7 @@ errors++;
 }
 }
 else {
-const err52 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.type,parentSchema:schema119,data};
+const err52 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema121.type,parentSchema:schema121,data};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -6448,20 +6879,20 @@ vErrors.push(err52);
 }
 errors++;
 }
-validate66.errors = vErrors;
+validate68.errors = vErrors;
 return errors === 0;
 }
 
-const schema131 = {"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}};
-const pattern39 = new RegExp("^[xyz]{1,3}$", "u");
-const schema134 = {"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}};
+const schema133 = {"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}};
+const pattern40 = new RegExp("^[xyz]{1,3}$", "u");
+const schema136 = {"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}};
 
-function validate69(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate71(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.setBy === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema134.required,parentSchema:schema134,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema136.required,parentSchema:schema136,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6472,7 +6903,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "members") || (key0 === "group")) || (key0 === "setBy")) || (key0 === "label"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema134,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema136,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6516,7 +6947,7 @@ errors++;
 if(data.setBy !== undefined){
 let data2 = data.setBy;
 if(!((data2 === "force") || (data2 === "length"))){
-const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema134.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema134.properties.setBy.enum,parentSchema:schema134.properties.setBy,data:data2};
+const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema136.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema136.properties.setBy.enum,parentSchema:schema136.properties.setBy,data:data2};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -6529,7 +6960,7 @@ errors++;
 if(data.label !== undefined){
 let data3 = data.label;
 if(typeof data3 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema134.properties.label.type,parentSchema:schema134.properties.label,data:data3};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema136.properties.label.type,parentSchema:schema136.properties.label,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -6541,7 +6972,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema134.type,parentSchema:schema134,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema136.type,parentSchema:schema136,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -6550,17 +6981,17 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate69.errors = vErrors;
+validate71.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate68(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate70(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema131.required,parentSchema:schema131,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema133.required,parentSchema:schema133,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6570,7 +7001,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.steps === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema131.required,parentSchema:schema131,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema133.required,parentSchema:schema133,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6580,8 +7011,8 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema131.properties, key0))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema131,data};
+if(!(func2.call(schema133.properties, key0))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema133,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -6619,7 +7050,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema131.properties.label.type,parentSchema:schema131.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema133.properties.label.type,parentSchema:schema133.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -6657,7 +7088,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data3 = data.selfWeight;
 if(typeof data3 !== "boolean"){
-const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema131.properties.selfWeight.type,parentSchema:schema131.properties.selfWeight,data:data3};
+const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema133.properties.selfWeight.type,parentSchema:schema133.properties.selfWeight,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -6671,7 +7102,7 @@ if(data.steps !== undefined){
 let data4 = data.steps;
 if(Array.isArray(data4)){
 if(data4.length < 1){
-const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema131.properties.steps,data:data4};
+const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema133.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -6682,14 +7113,14 @@ errors++;
 }
 const len0 = data4.length;
 for(let i0=0; i0<len0; i0++){
-if(!(validate69(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
-vErrors = vErrors === null ? validate69.errors : vErrors.concat(validate69.errors);
+if(!(validate71(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate71.errors : vErrors.concat(validate71.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema131.properties.steps.type,parentSchema:schema131.properties.steps,data:data4};
+const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema133.properties.steps.type,parentSchema:schema133.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -6707,7 +7138,7 @@ for(let i1=0; i1<len1; i1++){
 let data7 = data6[i1];
 if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 if(data7.node === undefined){
-const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema131.properties.temporaryRestraints.items.required,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema133.properties.temporaryRestraints.items.required,parentSchema:schema133.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -6717,7 +7148,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data7.fixed === undefined){
-const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema131.properties.temporaryRestraints.items.required,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema133.properties.temporaryRestraints.items.required,parentSchema:schema133.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -6728,7 +7159,7 @@ errors++;
 }
 for(const key1 in data7){
 if(!(((key1 === "node") || (key1 === "fixed")) || (key1 === "releaseAfterStep"))){
-const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema133.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -6766,8 +7197,8 @@ errors++;
 if(data7.fixed !== undefined){
 let data9 = data7.fixed;
 if(typeof data9 === "string"){
-if(!pattern39.test(data9)){
-const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema131.properties.temporaryRestraints.items.properties.fixed,data:data9};
+if(!pattern40.test(data9)){
+const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema133.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -6778,7 +7209,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema131.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema131.properties.temporaryRestraints.items.properties.fixed,data:data9};
+const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema133.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema133.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -6791,7 +7222,7 @@ errors++;
 if(data7.releaseAfterStep !== undefined){
 let data10 = data7.releaseAfterStep;
 if(!(((typeof data10 == "number") && (!(data10 % 1) && !isNaN(data10))) && (isFinite(data10)))){
-const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema131.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema131.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema133.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema133.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -6802,7 +7233,7 @@ errors++;
 }
 if((typeof data10 == "number") && (isFinite(data10))){
 if(data10 < 1 || isNaN(data10)){
-const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema131.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema133.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -6815,7 +7246,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.properties.temporaryRestraints.items.type,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema133.properties.temporaryRestraints.items.type,parentSchema:schema133.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -6827,7 +7258,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema131.properties.temporaryRestraints.type,parentSchema:schema131.properties.temporaryRestraints,data:data6};
+const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema133.properties.temporaryRestraints.type,parentSchema:schema133.properties.temporaryRestraints,data:data6};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -6841,7 +7272,7 @@ if(data.plumb !== undefined){
 let data11 = data.plumb;
 if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
 if(data11.base === undefined){
-const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema131.properties.plumb.required,parentSchema:schema131.properties.plumb,data:data11};
+const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema133.properties.plumb.required,parentSchema:schema133.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -6851,7 +7282,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data11.top === undefined){
-const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema131.properties.plumb.required,parentSchema:schema131.properties.plumb,data:data11};
+const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema133.properties.plumb.required,parentSchema:schema133.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -6861,7 +7292,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data11.limit === undefined){
-const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema131.properties.plumb.required,parentSchema:schema131.properties.plumb,data:data11};
+const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema133.properties.plumb.required,parentSchema:schema133.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -6872,7 +7303,7 @@ errors++;
 }
 for(const key2 in data11){
 if(!(((key2 === "base") || (key2 === "top")) || (key2 === "limit"))){
-const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema131.properties.plumb,data:data11};
+const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema133.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -6959,7 +7390,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.properties.plumb.type,parentSchema:schema131.properties.plumb,data:data11};
+const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema133.properties.plumb.type,parentSchema:schema133.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -7021,7 +7452,7 @@ errors++;
 }
 }
 else {
-const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.type,parentSchema:schema131,data};
+const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema133.type,parentSchema:schema133,data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -7030,18 +7461,18 @@ vErrors.push(err37);
 }
 errors++;
 }
-validate68.errors = vErrors;
+validate70.errors = vErrors;
 return errors === 0;
 }
 
-const schema142 = {"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}};
+const schema144 = {"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}};
 
-function validate73(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema142.required,parentSchema:schema142,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema144.required,parentSchema:schema144,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -7051,7 +7482,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.tensions === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema142.required,parentSchema:schema142,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema144.required,parentSchema:schema144,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -7062,7 +7493,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "date")) || (key0 === "tensions")) || (key0 === "positions")) || (key0 === "tolerance")) || (key0 === "lengthUncertainty"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema142,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema144,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -7100,7 +7531,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema142.properties.label.type,parentSchema:schema142.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema144.properties.label.type,parentSchema:schema144.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -7113,7 +7544,7 @@ errors++;
 if(data.date !== undefined){
 let data2 = data.date;
 if(typeof data2 !== "string"){
-const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema142.properties.date.type,parentSchema:schema142.properties.date,data:data2};
+const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema144.properties.date.type,parentSchema:schema144.properties.date,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -7131,7 +7562,7 @@ for(let i0=0; i0<len0; i0++){
 let data4 = data3[i0];
 if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
 if(data4.member === undefined){
-const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema144.properties.tensions.items.required,parentSchema:schema144.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -7141,7 +7572,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data4.method === undefined){
-const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema144.properties.tensions.items.required,parentSchema:schema144.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -7151,7 +7582,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data4.value === undefined){
-const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema144.properties.tensions.items.required,parentSchema:schema144.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -7161,7 +7592,7 @@ vErrors.push(err9);
 errors++;
 }
 if(data4.accuracy === undefined){
-const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema144.properties.tensions.items.required,parentSchema:schema144.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -7171,7 +7602,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data4.temperature === undefined){
-const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema144.properties.tensions.items.required,parentSchema:schema144.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -7182,7 +7613,7 @@ errors++;
 }
 for(const key1 in data4){
 if(!((((((key1 === "member") || (key1 === "method")) || (key1 === "value")) || (key1 === "accuracy")) || (key1 === "temperature")) || (key1 === "mode"))){
-const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema142.properties.tensions.items,data:data4};
+const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema144.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -7220,7 +7651,7 @@ errors++;
 if(data4.method !== undefined){
 let data6 = data4.method;
 if(!(((data6 === "dynamometer") || (data6 === "frequency")) || (data6 === "sag"))){
-const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema142.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema142.properties.tensions.items.properties.method.enum,parentSchema:schema142.properties.tensions.items.properties.method,data:data6};
+const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema144.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema144.properties.tensions.items.properties.method.enum,parentSchema:schema144.properties.tensions.items.properties.method,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -7308,7 +7739,7 @@ errors++;
 if(data4.mode !== undefined){
 let data10 = data4.mode;
 if(!((((data10 === "tautString") || (data10 === "inPlaneSymmetric")) || (data10 === "inPlaneAntisymmetric")) || (data10 === "lowestInPlane"))){
-const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema142.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema142.properties.tensions.items.properties.mode.enum,parentSchema:schema142.properties.tensions.items.properties.mode,data:data10};
+const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema144.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema144.properties.tensions.items.properties.mode.enum,parentSchema:schema144.properties.tensions.items.properties.mode,data:data10};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -7320,7 +7751,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema142.properties.tensions.items.type,parentSchema:schema142.properties.tensions.items,data:data4};
+const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema144.properties.tensions.items.type,parentSchema:schema144.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -7332,7 +7763,7 @@ errors++;
 }
 }
 else {
-const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema142.properties.tensions.type,parentSchema:schema142.properties.tensions,data:data3};
+const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema144.properties.tensions.type,parentSchema:schema144.properties.tensions,data:data3};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -7350,7 +7781,7 @@ for(let i1=0; i1<len1; i1++){
 let data12 = data11[i1];
 if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
 if(data12.node === undefined){
-const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema144.properties.positions.items.required,parentSchema:schema144.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -7360,7 +7791,7 @@ vErrors.push(err25);
 errors++;
 }
 if(data12.at === undefined){
-const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema144.properties.positions.items.required,parentSchema:schema144.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -7370,7 +7801,7 @@ vErrors.push(err26);
 errors++;
 }
 if(data12.accuracy === undefined){
-const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema144.properties.positions.items.required,parentSchema:schema144.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -7380,7 +7811,7 @@ vErrors.push(err27);
 errors++;
 }
 if(data12.temperature === undefined){
-const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema144.properties.positions.items.required,parentSchema:schema144.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -7391,7 +7822,7 @@ errors++;
 }
 for(const key2 in data12){
 if(!((((key2 === "node") || (key2 === "at")) || (key2 === "accuracy")) || (key2 === "temperature"))){
-const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema142.properties.positions.items,data:data12};
+const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema144.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -7527,7 +7958,7 @@ errors++;
 }
 }
 else {
-const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema142.properties.positions.items.type,parentSchema:schema142.properties.positions.items,data:data12};
+const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema144.properties.positions.items.type,parentSchema:schema144.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -7539,7 +7970,7 @@ errors++;
 }
 }
 else {
-const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema142.properties.positions.type,parentSchema:schema142.properties.positions,data:data11};
+const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema144.properties.positions.type,parentSchema:schema144.properties.positions,data:data11};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -7601,7 +8032,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema142.type,parentSchema:schema142,data};
+const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema144.type,parentSchema:schema144,data};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -7610,18 +8041,18 @@ vErrors.push(err46);
 }
 errors++;
 }
-validate73.errors = vErrors;
+validate75.errors = vErrors;
 return errors === 0;
 }
 
-const schema155 = {"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}};
+const schema157 = {"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}};
 
-function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate77(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema155.required,parentSchema:schema155,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema157.required,parentSchema:schema157,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -7631,7 +8062,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.nodes === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema155.required,parentSchema:schema155,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema157.required,parentSchema:schema157,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -7642,7 +8073,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "id") || (key0 === "nodes")) || (key0 === "region")) || (key0 === "label"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema155,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema157,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -7681,7 +8112,7 @@ if(data.nodes !== undefined){
 let data1 = data.nodes;
 if(Array.isArray(data1)){
 if(data1.length < 3){
-const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema155.properties.nodes,data:data1};
+const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema157.properties.nodes,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -7718,7 +8149,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema155.properties.nodes.type,parentSchema:schema155.properties.nodes,data:data1};
+const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema157.properties.nodes.type,parentSchema:schema157.properties.nodes,data:data1};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -7756,7 +8187,7 @@ errors++;
 if(data.label !== undefined){
 let data4 = data.label;
 if(typeof data4 !== "string"){
-const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema155.properties.label.type,parentSchema:schema155.properties.label,data:data4};
+const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema157.properties.label.type,parentSchema:schema157.properties.label,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -7768,7 +8199,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema155.type,parentSchema:schema155,data};
+const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema157.type,parentSchema:schema157,data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -7777,18 +8208,18 @@ vErrors.push(err12);
 }
 errors++;
 }
-validate75.errors = vErrors;
+validate77.errors = vErrors;
 return errors === 0;
 }
 
-const schema159 = {"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}};
+const schema161 = {"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}};
 
-function validate77(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate79(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema159.required,parentSchema:schema159,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema161.required,parentSchema:schema161,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -7798,7 +8229,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.meanCase === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema159.required,parentSchema:schema159,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema161.required,parentSchema:schema161,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -7808,7 +8239,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.patchFactor === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema159.required,parentSchema:schema159,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema161.required,parentSchema:schema161,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -7819,7 +8250,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "id") || (key0 === "label")) || (key0 === "meanCase")) || (key0 === "patchFactor")) || (key0 === "patches"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema159,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema161,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -7857,7 +8288,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema159.properties.label.type,parentSchema:schema159.properties.label,data:data1};
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema161.properties.label.type,parentSchema:schema161.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -7896,7 +8327,7 @@ if(data.patchFactor !== undefined){
 let data3 = data.patchFactor;
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 <= 1 || isNaN(data3)){
-const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema159.properties.patchFactor,data:data3};
+const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema161.properties.patchFactor,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -7907,7 +8338,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema159.properties.patchFactor.type,parentSchema:schema159.properties.patchFactor,data:data3};
+const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema161.properties.patchFactor.type,parentSchema:schema161.properties.patchFactor,data:data3};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -7921,7 +8352,7 @@ if(data.patches !== undefined){
 let data4 = data.patches;
 if(Array.isArray(data4)){
 if(data4.length < 1){
-const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema159.properties.patches,data:data4};
+const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema161.properties.patches,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -7935,7 +8366,7 @@ for(let i0=0; i0<len0; i0++){
 let data5 = data4[i0];
 if(data5 && typeof data5 == "object" && !Array.isArray(data5)){
 if(data5.from === undefined){
-const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema159.properties.patches.items.required,parentSchema:schema159.properties.patches.items,data:data5};
+const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema161.properties.patches.items.required,parentSchema:schema161.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -7945,7 +8376,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data5.to === undefined){
-const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema159.properties.patches.items.required,parentSchema:schema159.properties.patches.items,data:data5};
+const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema161.properties.patches.items.required,parentSchema:schema161.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -7956,7 +8387,7 @@ errors++;
 }
 for(const key1 in data5){
 if(!((key1 === "from") || (key1 === "to"))){
-const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema159.properties.patches.items,data:data5};
+const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema161.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -7969,7 +8400,7 @@ errors++;
 if(data5.from !== undefined){
 let data6 = data5.from;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema159.properties.patches.items.properties.from.type,parentSchema:schema159.properties.patches.items.properties.from,data:data6};
+const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema161.properties.patches.items.properties.from.type,parentSchema:schema161.properties.patches.items.properties.from,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -7982,7 +8413,7 @@ errors++;
 if(data5.to !== undefined){
 let data7 = data5.to;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema159.properties.patches.items.properties.to.type,parentSchema:schema159.properties.patches.items.properties.to,data:data7};
+const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema161.properties.patches.items.properties.to.type,parentSchema:schema161.properties.patches.items.properties.to,data:data7};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -7994,7 +8425,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema159.properties.patches.items.type,parentSchema:schema159.properties.patches.items,data:data5};
+const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema161.properties.patches.items.type,parentSchema:schema161.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -8006,7 +8437,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema159.properties.patches.type,parentSchema:schema159.properties.patches,data:data4};
+const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema161.properties.patches.type,parentSchema:schema161.properties.patches,data:data4};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -8018,7 +8449,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema159.type,parentSchema:schema159,data};
+const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema161.type,parentSchema:schema161,data};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -8027,18 +8458,18 @@ vErrors.push(err19);
 }
 errors++;
 }
-validate77.errors = vErrors;
+validate79.errors = vErrors;
 return errors === 0;
 }
 
-const schema162 = {"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
+const schema164 = {"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
 
-function validate79(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate81(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema162.required,parentSchema:schema162,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema164.required,parentSchema:schema164,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -8048,7 +8479,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.fromCase === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema162.required,parentSchema:schema162,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema164.required,parentSchema:schema164,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -8059,7 +8490,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "fromCase")) || (key0 === "members")) || (key0 === "group")) || (key0 === "dynamicFactor")) || (key0 === "dampingRatio"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema162,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema164,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -8097,7 +8528,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema162.properties.label.type,parentSchema:schema162.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema164.properties.label.type,parentSchema:schema164.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -8167,7 +8598,7 @@ if(data.dynamicFactor !== undefined){
 let data5 = data.dynamicFactor;
 if((typeof data5 == "number") && (isFinite(data5))){
 if(data5 > 2 || isNaN(data5)){
-const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema162.properties.dynamicFactor,data:data5};
+const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema164.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -8177,7 +8608,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data5 < 1 || isNaN(data5)){
-const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema162.properties.dynamicFactor,data:data5};
+const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema164.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -8188,7 +8619,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema162.properties.dynamicFactor.type,parentSchema:schema162.properties.dynamicFactor,data:data5};
+const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema164.properties.dynamicFactor.type,parentSchema:schema164.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -8202,7 +8633,7 @@ if(data.dampingRatio !== undefined){
 let data6 = data.dampingRatio;
 if((typeof data6 == "number") && (isFinite(data6))){
 if(data6 < 0 || isNaN(data6)){
-const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema162.properties.dampingRatio,data:data6};
+const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema164.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -8212,7 +8643,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data6 >= 1 || isNaN(data6)){
-const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema162.properties.dampingRatio,data:data6};
+const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema164.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -8223,7 +8654,7 @@ errors++;
 }
 }
 else {
-const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema162.properties.dampingRatio.type,parentSchema:schema162.properties.dampingRatio,data:data6};
+const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema164.properties.dampingRatio.type,parentSchema:schema164.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -8235,7 +8666,7 @@ errors++;
 }
 }
 else {
-const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema162.type,parentSchema:schema162,data};
+const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema164.type,parentSchema:schema164,data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -8244,18 +8675,18 @@ vErrors.push(err16);
 }
 errors++;
 }
-validate79.errors = vErrors;
+validate81.errors = vErrors;
 return errors === 0;
 }
 
-const schema166 = {"type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"case":{"$ref":"#/definitions/id"},"count":{"type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"type":"number"}}};
+const schema168 = {"type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"case":{"$ref":"#/definitions/id"},"count":{"type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"type":"number"}}};
 
-function validate82(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate84(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema166.required,parentSchema:schema166,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema168.required,parentSchema:schema168,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -8265,7 +8696,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.case === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema166.required,parentSchema:schema166,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema168.required,parentSchema:schema168,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -8275,7 +8706,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.count === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema166.required,parentSchema:schema166,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema168.required,parentSchema:schema168,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -8286,7 +8717,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "id") || (key0 === "label")) || (key0 === "case")) || (key0 === "count")) || (key0 === "azimuth"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema166,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema168,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -8324,7 +8755,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema166.properties.label.type,parentSchema:schema166.properties.label,data:data1};
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema168.properties.label.type,parentSchema:schema168.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -8362,7 +8793,7 @@ errors++;
 if(data.count !== undefined){
 let data3 = data.count;
 if(!(((typeof data3 == "number") && (!(data3 % 1) && !isNaN(data3))) && (isFinite(data3)))){
-const err9 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema166.properties.count.type,parentSchema:schema166.properties.count,data:data3};
+const err9 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema168.properties.count.type,parentSchema:schema168.properties.count,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -8373,7 +8804,7 @@ errors++;
 }
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 > 72 || isNaN(data3)){
-const err10 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 72},message:"must be <= 72",schema:72,parentSchema:schema166.properties.count,data:data3};
+const err10 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 72},message:"must be <= 72",schema:72,parentSchema:schema168.properties.count,data:data3};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -8383,7 +8814,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data3 < 1 || isNaN(data3)){
-const err11 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema166.properties.count,data:data3};
+const err11 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema168.properties.count,data:data3};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -8397,7 +8828,7 @@ errors++;
 if(data.azimuth !== undefined){
 let data4 = data.azimuth;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err12 = {instancePath:instancePath+"/azimuth",schemaPath:"#/properties/azimuth/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema166.properties.azimuth.type,parentSchema:schema166.properties.azimuth,data:data4};
+const err12 = {instancePath:instancePath+"/azimuth",schemaPath:"#/properties/azimuth/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema168.properties.azimuth.type,parentSchema:schema168.properties.azimuth,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -8409,7 +8840,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema166.type,parentSchema:schema166,data};
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema168.type,parentSchema:schema168,data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -8418,18 +8849,18 @@ vErrors.push(err13);
 }
 errors++;
 }
-validate82.errors = vErrors;
+validate84.errors = vErrors;
 return errors === 0;
 }
 
-const schema169 = {"type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"kind":{"enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"$ref":"#/definitions/id"},"along":{"type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"$ref":"#/definitions/id"},"from":{"type":"number"},"to":{"type":"number"}}},"dragArea":{"$ref":"#/definitions/nonNegative"},"mass":{"$ref":"#/definitions/nonNegative"},"iceDragArea":{"$ref":"#/definitions/nonNegative"},"iceMass":{"$ref":"#/definitions/nonNegative"}}};
+const schema171 = {"type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"kind":{"enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"$ref":"#/definitions/id"},"along":{"type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"$ref":"#/definitions/id"},"from":{"type":"number"},"to":{"type":"number"}}},"dragArea":{"$ref":"#/definitions/nonNegative"},"mass":{"$ref":"#/definitions/nonNegative"},"iceDragArea":{"$ref":"#/definitions/nonNegative"},"iceMass":{"$ref":"#/definitions/nonNegative"}}};
 
-function validate84(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate86(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema171.required,parentSchema:schema171,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -8439,7 +8870,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema171.required,parentSchema:schema171,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -8449,7 +8880,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.dragArea === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "dragArea"},message:"must have required property '"+"dragArea"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "dragArea"},message:"must have required property '"+"dragArea"+"'",schema:schema171.required,parentSchema:schema171,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -8459,7 +8890,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.mass === undefined){
-const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "mass"},message:"must have required property '"+"mass"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "mass"},message:"must have required property '"+"mass"+"'",schema:schema171.required,parentSchema:schema171,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -8469,8 +8900,8 @@ vErrors.push(err3);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema169.properties, key0))){
-const err4 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema169,data};
+if(!(func2.call(schema171.properties, key0))){
+const err4 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema171,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -8508,7 +8939,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err7 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema169.properties.label.type,parentSchema:schema169.properties.label,data:data1};
+const err7 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema171.properties.label.type,parentSchema:schema171.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -8521,7 +8952,7 @@ errors++;
 if(data.kind !== undefined){
 let data2 = data.kind;
 if(!((((((data2 === "antenna") || (data2 === "dish")) || (data2 === "feeder")) || (data2 === "ladder")) || (data2 === "platform")) || (data2 === "other"))){
-const err8 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema169.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema169.properties.kind.enum,parentSchema:schema169.properties.kind,data:data2};
+const err8 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema171.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema171.properties.kind.enum,parentSchema:schema171.properties.kind,data:data2};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -8560,7 +8991,7 @@ if(data.along !== undefined){
 let data4 = data.along;
 if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
 if(data4.group === undefined){
-const err11 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema169.properties.along.required,parentSchema:schema169.properties.along,data:data4};
+const err11 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema171.properties.along.required,parentSchema:schema171.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -8570,7 +9001,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data4.from === undefined){
-const err12 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema169.properties.along.required,parentSchema:schema169.properties.along,data:data4};
+const err12 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema171.properties.along.required,parentSchema:schema171.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -8580,7 +9011,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data4.to === undefined){
-const err13 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema169.properties.along.required,parentSchema:schema169.properties.along,data:data4};
+const err13 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema171.properties.along.required,parentSchema:schema171.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -8591,7 +9022,7 @@ errors++;
 }
 for(const key1 in data4){
 if(!(((key1 === "group") || (key1 === "from")) || (key1 === "to"))){
-const err14 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema169.properties.along,data:data4};
+const err14 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema171.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -8629,7 +9060,7 @@ errors++;
 if(data4.from !== undefined){
 let data6 = data4.from;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err17 = {instancePath:instancePath+"/along/from",schemaPath:"#/properties/along/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema169.properties.along.properties.from.type,parentSchema:schema169.properties.along.properties.from,data:data6};
+const err17 = {instancePath:instancePath+"/along/from",schemaPath:"#/properties/along/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema171.properties.along.properties.from.type,parentSchema:schema171.properties.along.properties.from,data:data6};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -8642,7 +9073,7 @@ errors++;
 if(data4.to !== undefined){
 let data7 = data4.to;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err18 = {instancePath:instancePath+"/along/to",schemaPath:"#/properties/along/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema169.properties.along.properties.to.type,parentSchema:schema169.properties.along.properties.to,data:data7};
+const err18 = {instancePath:instancePath+"/along/to",schemaPath:"#/properties/along/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema171.properties.along.properties.to.type,parentSchema:schema171.properties.along.properties.to,data:data7};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -8654,7 +9085,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema169.properties.along.type,parentSchema:schema169.properties.along,data:data4};
+const err19 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema171.properties.along.type,parentSchema:schema171.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -8766,7 +9197,7 @@ errors++;
 }
 }
 else {
-const err28 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema169.type,parentSchema:schema169,data};
+const err28 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema171.type,parentSchema:schema171,data};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -8775,7 +9206,59 @@ vErrors.push(err28);
 }
 errors++;
 }
-validate84.errors = vErrors;
+validate86.errors = vErrors;
+return errors === 0;
+}
+
+const schema179 = {"type":"object","additionalProperties":false,"properties":{"list":{"enum":["cables","groups","all"],"x-message":"{field} must be one of cables, groups, all"},"groups":{"$ref":"#/definitions/idList"}}};
+
+function validate88(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+for(const key0 in data){
+if(!((key0 === "list") || (key0 === "groups"))){
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema179,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+}
+if(data.list !== undefined){
+let data0 = data.list;
+if(!(((data0 === "cables") || (data0 === "groups")) || (data0 === "all"))){
+const err1 = {instancePath:instancePath+"/list",schemaPath:"#/properties/list/enum",keyword:"enum",params:{allowedValues: schema179.properties.list.enum},message:"must be equal to one of the allowed values",schema:schema179.properties.list.enum,parentSchema:schema179.properties.list,data:data0};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+}
+if(data.groups !== undefined){
+if(!(validate20(data.groups, {instancePath:instancePath+"/groups",parentData:data,parentDataProperty:"groups",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema179.type,parentSchema:schema179,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+validate88.errors = vErrors;
 return errors === 0;
 }
 
@@ -9064,8 +9547,8 @@ errors = vErrors.length;
 }
 }
 if(data.installation !== undefined){
-if(!(validate60(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
-vErrors = vErrors === null ? validate60.errors : vErrors.concat(validate60.errors);
+if(!(validate62(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
+vErrors = vErrors === null ? validate62.errors : vErrors.concat(validate62.errors);
 errors = vErrors.length;
 }
 }
@@ -9074,8 +9557,8 @@ let data18 = data.generators;
 if(Array.isArray(data18)){
 const len6 = data18.length;
 for(let i6=0; i6<len6; i6++){
-if(!(validate62(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
-vErrors = vErrors === null ? validate62.errors : vErrors.concat(validate62.errors);
+if(!(validate64(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
+vErrors = vErrors === null ? validate64.errors : vErrors.concat(validate64.errors);
 errors = vErrors.length;
 }
 }
@@ -9092,14 +9575,14 @@ errors++;
 }
 }
 if(data.display !== undefined){
-if(!(validate64(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
-vErrors = vErrors === null ? validate64.errors : vErrors.concat(validate64.errors);
+if(!(validate66(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
+vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
 errors = vErrors.length;
 }
 }
 if(data.designBasis !== undefined){
-if(!(validate66(data.designBasis, {instancePath:instancePath+"/designBasis",parentData:data,parentDataProperty:"designBasis",rootData}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(!(validate68(data.designBasis, {instancePath:instancePath+"/designBasis",parentData:data,parentDataProperty:"designBasis",rootData}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
 }
@@ -9108,8 +9591,8 @@ let data22 = data.sequences;
 if(Array.isArray(data22)){
 const len7 = data22.length;
 for(let i7=0; i7<len7; i7++){
-if(!(validate68(data22[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data22,parentDataProperty:i7,rootData}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+if(!(validate70(data22[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data22,parentDataProperty:i7,rootData}))){
+vErrors = vErrors === null ? validate70.errors : vErrors.concat(validate70.errors);
 errors = vErrors.length;
 }
 }
@@ -9130,8 +9613,8 @@ let data24 = data.siteMeasurements;
 if(Array.isArray(data24)){
 const len8 = data24.length;
 for(let i8=0; i8<len8; i8++){
-if(!(validate73(data24[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data24,parentDataProperty:i8,rootData}))){
-vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+if(!(validate75(data24[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data24,parentDataProperty:i8,rootData}))){
+vErrors = vErrors === null ? validate75.errors : vErrors.concat(validate75.errors);
 errors = vErrors.length;
 }
 }
@@ -9152,7 +9635,7 @@ let data26 = data.report;
 if(data26 && typeof data26 == "object" && !Array.isArray(data26)){
 for(const key1 in data26){
 if(!((key1 === "documentNumber") || (key1 === "revisions"))){
-const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema154,data:data26};
+const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema156,data:data26};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -9165,7 +9648,7 @@ errors++;
 if(data26.documentNumber !== undefined){
 let data27 = data26.documentNumber;
 if(typeof data27 !== "string"){
-const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.documentNumber.type,parentSchema:schema154.properties.documentNumber,data:data27};
+const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema156.properties.documentNumber.type,parentSchema:schema156.properties.documentNumber,data:data27};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -9183,7 +9666,7 @@ for(let i9=0; i9<len9; i9++){
 let data29 = data28[i9];
 if(data29 && typeof data29 == "object" && !Array.isArray(data29)){
 if(data29.revision === undefined){
-const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema154.properties.revisions.items.required,parentSchema:schema154.properties.revisions.items,data:data29};
+const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema156.properties.revisions.items.required,parentSchema:schema156.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -9193,7 +9676,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data29.date === undefined){
-const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema154.properties.revisions.items.required,parentSchema:schema154.properties.revisions.items,data:data29};
+const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema156.properties.revisions.items.required,parentSchema:schema156.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -9203,7 +9686,7 @@ vErrors.push(err24);
 errors++;
 }
 if(data29.description === undefined){
-const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema154.properties.revisions.items.required,parentSchema:schema154.properties.revisions.items,data:data29};
+const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema156.properties.revisions.items.required,parentSchema:schema156.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -9214,7 +9697,7 @@ errors++;
 }
 for(const key2 in data29){
 if(!(((((key2 === "revision") || (key2 === "date")) || (key2 === "description")) || (key2 === "by")) || (key2 === "checkedBy"))){
-const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema154.properties.revisions.items,data:data29};
+const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema156.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -9227,7 +9710,7 @@ errors++;
 if(data29.revision !== undefined){
 let data30 = data29.revision;
 if(typeof data30 !== "string"){
-const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.revision.type,parentSchema:schema154.properties.revisions.items.properties.revision,data:data30};
+const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema156.properties.revisions.items.properties.revision.type,parentSchema:schema156.properties.revisions.items.properties.revision,data:data30};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -9240,7 +9723,7 @@ errors++;
 if(data29.date !== undefined){
 let data31 = data29.date;
 if(typeof data31 !== "string"){
-const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.date.type,parentSchema:schema154.properties.revisions.items.properties.date,data:data31};
+const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema156.properties.revisions.items.properties.date.type,parentSchema:schema156.properties.revisions.items.properties.date,data:data31};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -9253,7 +9736,7 @@ errors++;
 if(data29.description !== undefined){
 let data32 = data29.description;
 if(typeof data32 !== "string"){
-const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.description.type,parentSchema:schema154.properties.revisions.items.properties.description,data:data32};
+const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema156.properties.revisions.items.properties.description.type,parentSchema:schema156.properties.revisions.items.properties.description,data:data32};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -9266,7 +9749,7 @@ errors++;
 if(data29.by !== undefined){
 let data33 = data29.by;
 if(typeof data33 !== "string"){
-const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.by.type,parentSchema:schema154.properties.revisions.items.properties.by,data:data33};
+const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema156.properties.revisions.items.properties.by.type,parentSchema:schema156.properties.revisions.items.properties.by,data:data33};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -9279,7 +9762,7 @@ errors++;
 if(data29.checkedBy !== undefined){
 let data34 = data29.checkedBy;
 if(typeof data34 !== "string"){
-const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.checkedBy.type,parentSchema:schema154.properties.revisions.items.properties.checkedBy,data:data34};
+const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema156.properties.revisions.items.properties.checkedBy.type,parentSchema:schema156.properties.revisions.items.properties.checkedBy,data:data34};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -9291,7 +9774,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema154.properties.revisions.items.type,parentSchema:schema154.properties.revisions.items,data:data29};
+const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema156.properties.revisions.items.type,parentSchema:schema156.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -9303,7 +9786,7 @@ errors++;
 }
 }
 else {
-const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema154.properties.revisions.type,parentSchema:schema154.properties.revisions,data:data28};
+const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema156.properties.revisions.type,parentSchema:schema156.properties.revisions,data:data28};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -9315,7 +9798,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema154.type,parentSchema:schema154,data:data26};
+const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema156.type,parentSchema:schema156,data:data26};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -9330,8 +9813,8 @@ let data35 = data.panels;
 if(Array.isArray(data35)){
 const len10 = data35.length;
 for(let i10=0; i10<len10; i10++){
-if(!(validate75(data35[i10], {instancePath:instancePath+"/panels/" + i10,parentData:data35,parentDataProperty:i10,rootData}))){
-vErrors = vErrors === null ? validate75.errors : vErrors.concat(validate75.errors);
+if(!(validate77(data35[i10], {instancePath:instancePath+"/panels/" + i10,parentData:data35,parentDataProperty:i10,rootData}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
@@ -9352,8 +9835,8 @@ let data37 = data.patchWind;
 if(Array.isArray(data37)){
 const len11 = data37.length;
 for(let i11=0; i11<len11; i11++){
-if(!(validate77(data37[i11], {instancePath:instancePath+"/patchWind/" + i11,parentData:data37,parentDataProperty:i11,rootData}))){
-vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
+if(!(validate79(data37[i11], {instancePath:instancePath+"/patchWind/" + i11,parentData:data37,parentDataProperty:i11,rootData}))){
+vErrors = vErrors === null ? validate79.errors : vErrors.concat(validate79.errors);
 errors = vErrors.length;
 }
 }
@@ -9374,8 +9857,8 @@ let data39 = data.memberLoss;
 if(Array.isArray(data39)){
 const len12 = data39.length;
 for(let i12=0; i12<len12; i12++){
-if(!(validate79(data39[i12], {instancePath:instancePath+"/memberLoss/" + i12,parentData:data39,parentDataProperty:i12,rootData}))){
-vErrors = vErrors === null ? validate79.errors : vErrors.concat(validate79.errors);
+if(!(validate81(data39[i12], {instancePath:instancePath+"/memberLoss/" + i12,parentData:data39,parentDataProperty:i12,rootData}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
@@ -9396,8 +9879,8 @@ let data41 = data.windDirections;
 if(Array.isArray(data41)){
 const len13 = data41.length;
 for(let i13=0; i13<len13; i13++){
-if(!(validate82(data41[i13], {instancePath:instancePath+"/windDirections/" + i13,parentData:data41,parentDataProperty:i13,rootData}))){
-vErrors = vErrors === null ? validate82.errors : vErrors.concat(validate82.errors);
+if(!(validate84(data41[i13], {instancePath:instancePath+"/windDirections/" + i13,parentData:data41,parentDataProperty:i13,rootData}))){
+vErrors = vErrors === null ? validate84.errors : vErrors.concat(validate84.errors);
 errors = vErrors.length;
 }
 }
@@ -9418,8 +9901,8 @@ let data43 = data.ancillaries;
 if(Array.isArray(data43)){
 const len14 = data43.length;
 for(let i14=0; i14<len14; i14++){
-if(!(validate84(data43[i14], {instancePath:instancePath+"/ancillaries/" + i14,parentData:data43,parentDataProperty:i14,rootData}))){
-vErrors = vErrors === null ? validate84.errors : vErrors.concat(validate84.errors);
+if(!(validate86(data43[i14], {instancePath:instancePath+"/ancillaries/" + i14,parentData:data43,parentDataProperty:i14,rootData}))){
+vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
 errors = vErrors.length;
 }
 }
@@ -9433,6 +9916,12 @@ else {
 vErrors.push(err39);
 }
 errors++;
+}
+}
+if(data.schedule !== undefined){
+if(!(validate88(data.schedule, {instancePath:instancePath+"/schedule",parentData:data,parentDataProperty:"schedule",rootData}))){
+vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
+errors = vErrors.length;
 }
 }
 }
