@@ -4,7 +4,7 @@
  * tuning variables and targets, and applying a tuning run's final values to the current project.
  */
 import type { ProjectFile, TuningResult, TuningSpec, TuningTarget } from '../../solver/index.ts';
-import { applyVariables, resolveVariables } from '../../solver/index.ts';
+import { applyVariables, resolveVariables, tuningRunRecord } from '../../solver/index.ts';
 
 export interface SliderGroup {
   id: string;
@@ -32,12 +32,17 @@ export function commitPretension(project: ProjectFile, group: string, pretension
   return applyVariables(project, [v], [pretension]);
 }
 
-/** Put a tuning run's final values (matched by group) into `project`, which may have changed since. */
-export function applyTuningResult(project: ProjectFile, result: Pick<TuningResult, 'variables'>): ProjectFile {
+/**
+ * Put a tuning run's final values (matched by group) into `project`, which may have changed
+ * since, and keep the run as `tuning.lastRun` (tuningRunRecord, dated `date`, ISO 8601) so the
+ * schedule and the report print it.
+ */
+export function applyTuningResult(project: ProjectFile, result: Pick<TuningResult, 'variables' | 'status' | 'summary' | 'targets' | 'diagnosis'>, date: string): ProjectFile {
   const finals = new Map(result.variables.map((v) => [`${v.group}\u0000${v.by}`, v.final]));
   const vars = resolveVariables(project).filter((v) => finals.has(`${v.group}\u0000${v.by}`));
   if (!vars.length) throw new Error('tuning: none of the tuned groups is a tuning variable of the project any more');
-  return applyVariables(project, vars, vars.map((v) => finals.get(`${v.group}\u0000${v.by}`)!));
+  const tuned = applyVariables(project, vars, vars.map((v) => finals.get(`${v.group}\u0000${v.by}`)!));
+  return { ...tuned, tuning: { ...(tuned.tuning ?? { variables: [], targets: [] }), lastRun: tuningRunRecord(result, date) } };
 }
 
 /** Values in the order of project.tuning.variables (a cancelled run's best x) → project. */

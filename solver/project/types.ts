@@ -17,9 +17,11 @@ import type { ActionKind, BucklingCurve, CasePurpose, DesignBasis, MemberDesignR
 export type * from './design-basis-types.ts';
 import type { ReportSpec, SiteMeasurementSetSpec, TensioningSequenceSpec } from './site-types.ts';
 import type { BeamReleases, NodeSprings, PrescribedDisplacement, NodalMoment } from './structure-types.ts';
+import type { ScheduleSpec, TuningRunRecord } from './schedule-types.ts';
 import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec, WindBasisSpec, WindDirectionsSpec, AncillarySpec } from './actions-types.ts';
 
 export type * from './actions-types.ts';
+export type * from './schedule-types.ts';
 
 export type Vec3 = [number, number, number];
 export type * from './structure-types.ts';
@@ -64,6 +66,8 @@ export interface ProjectFile {
   windDirections?: WindDirectionsSpec[];
   /** Antennas, feeders, ladders, platforms: wind, weight and ice (actions-types.ts). */
   ancillaries?: AncillarySpec[];
+  /** What the printed schedule lists (schedule-types.ts); absent = cables only. */
+  schedule?: ScheduleSpec;
 }
 
 export interface ProjectMeta {
@@ -290,7 +294,7 @@ export interface TuningSpec {
   variables: { group: string; by: 'pretension' | 'unstressedLength'; min?: number; max?: number }[];
   targets: TuningTarget[];
   /** Result of the last tuning run, written by `stayset tune --write`. */
-  lastRun?: { date: string; summary: string };
+  lastRun?: TuningRunRecord;
 }
 
 export interface InstallationSpec {

@@ -6,3 +6,4 @@ export { referenceCaseId } from './reference-case.ts';
 export { describeTarget } from './target-evaluation.ts';
 export { memberPretension, memberUnstressedLength, resolveVariables, applyVariables } from './tuning-variables.ts';
 export { createLiveResolver, type LiveResolver, type LiveStep } from './live-resolve.ts';
+export { tuningRunRecord } from './run-record.ts';

@@ -101,5 +101,10 @@ export function referenceErrors(root: unknown): string[] {
       need('tuning', 'node', str(t.entry, 'top'), prefix);
     }
   }
+  const schedule = isRec(root) ? root.schedule : undefined;
+  if (isRec(schedule)) {
+    needAll('schedule', 'group', schedule, 'groups', 'groups: ');
+    if (schedule.list === 'groups' && strings(schedule, 'groups').length === 0) errors.push('schedule: list "groups" needs at least one group in "groups"');
+  }
   return errors;
 }

@@ -3,8 +3,8 @@
 "use strict";
 export const validate = validate10;
 export default validate10;
-const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 2","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"description":"File format marker; always \"stayset-project\".","const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"description":"Format version of the file; 2 (version-1 files are migrated on load).","const":2,"x-message":"{field} must be 2"},"meta":{"description":"Project information: name, site, client, engineer, notes, reference temperature.","$ref":"#/definitions/meta"},"nodes":{"description":"Points of the model: position, supports, springs, added mass.","type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"description":"Cross-sections and materials the members use.","type":"array","items":{"$ref":"#/definitions/section"}},"members":{"description":"Cables, bars and beams between two nodes.","type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"description":"Load cases, each solved as its own nonlinear analysis from the pretensioned state.","type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"description":"Named sets of members, used by loads, checks, tuning and the schedule.","type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"description":"Factored sums of load cases; each is solved as its own nonlinear case.","type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"description":"Design-check settings and limits.","$ref":"#/definitions/checks"},"tuning":{"description":"Pretension tuning: the variables the tuner may change and the targets it must meet.","$ref":"#/definitions/tuning"},"installation":{"description":"Settings of the installation data (temperature table).","$ref":"#/definitions/installation"},"generators":{"description":"Parameters of the generators that made parts of this model, for re-running them.","type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"description":"Display preferences; never affect results.","$ref":"#/definitions/display"},"designBasis":{"description":"Check format (limit state or allowable) and its factors; absent = the limit-state defaults.","$ref":"#/definitions/designBasis"},"sequences":{"description":"Tensioning sequences for the crew.","type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"description":"Tensions and positions measured on site, for the as-built back-analysis.","type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"description":"Calculation report and schedule: document number and revision block.","$ref":"#/definitions/report"},"panels":{"description":"Panels (loops of nodes) that carry area loads: snow, cladding, wind pressure.","type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"description":"Patch wind on guyed masts: a mean-wind case plus patch cases, combined per result.","type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"description":"Sudden loss of a member (guy rupture): one accidental case per member removed.","type":"array","items":{"$ref":"#/definitions/memberLoss"}},"windDirections":{"description":"Wind cases from N directions made from one load case with wind.","type":"array","items":{"$ref":"#/definitions/windDirections"}},"ancillaries":{"description":"Antennas, dishes, feeders, ladders, platforms: their wind drag, weight and ice.","type":"array","items":{"$ref":"#/definitions/ancillary"}}},"definitions":{"id":{"description":"An identifier: any text without leading or trailing spaces.","type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"description":"A list of identifiers.","type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"description":"Three numbers [x, y, z] along the global axes (z up).","type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"description":"A number greater than 0.","type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"description":"A number not below 0.","type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"description":"An absolute temperature, K (above 0; 15 °C = 288.15 K).","type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"description":"Project information, printed on the schedule and the report.","type":"object","additionalProperties":false,"properties":{"name":{"description":"Project name.","type":"string"},"site":{"description":"Site (location) of the structure.","type":"string"},"client":{"description":"Client.","type":"string"},"engineer":{"description":"Engineer responsible for the design.","type":"string"},"notes":{"description":"Free notes.","type":"string"},"referenceTemperature":{"description":"Design reference temperature, K: the state the model and its pretensions describe (default 288.15 K = 15 °C).","$ref":"#/definitions/absoluteTemperature"}}},"node":{"description":"A point of the model.","type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"description":"Node id, unique among nodes.","$ref":"#/definitions/id"},"at":{"description":"Position [x, y, z], m (z up).","$ref":"#/definitions/vec3"},"fixed":{"description":"Restrained directions: translations x, y, z and rotations rx, ry, rz (global axes), each at most once, written together (\"xyz\" pinned, \"xyzrxryrz\" clamped). Absent = free.","type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"description":"Elastic supports (springs to ground) of the node.","$ref":"#/definitions/springs"},"mass":{"description":"Added lumped mass at the node (equipment, antennas, fittings), kg: weighs with self-weight, vibrates in modes.","$ref":"#/definitions/nonNegative"}}},"springs":{"description":"Springs to ground: translational along x, y, z (N/m), rotational about x, y, z (N·m/rad), global axes. A spring on a restrained direction is refused.","type":"object","additionalProperties":false,"properties":{"x":{"description":"Translational stiffness along x, N/m.","$ref":"#/definitions/nonNegative"},"y":{"description":"Translational stiffness along y, N/m.","$ref":"#/definitions/nonNegative"},"z":{"description":"Translational stiffness along z, N/m.","$ref":"#/definitions/nonNegative"},"rx":{"description":"Rotational stiffness about x, N·m/rad.","$ref":"#/definitions/nonNegative"},"ry":{"description":"Rotational stiffness about y, N·m/rad.","$ref":"#/definitions/nonNegative"},"rz":{"description":"Rotational stiffness about z, N·m/rad.","$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"description":"Prescribed movement of a support in one load case (anchor movement, settlement); every direction given must be restrained in the node's \"fixed\".","type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"description":"Support node id.","$ref":"#/definitions/id"},"x":{"description":"Displacement along x, m.","type":"number"},"y":{"description":"Displacement along y, m.","type":"number"},"z":{"description":"Displacement along z, m.","type":"number"},"rx":{"description":"Rotation about x, rad.","type":"number"},"ry":{"description":"Rotation about y, rad.","type":"number"},"rz":{"description":"Rotation about z, rad.","type":"number"}}},"section":{"description":"A cross-section and its material.","type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"description":"Section id, unique among sections.","$ref":"#/definitions/id"},"E":{"description":"Young's modulus, Pa (for strands, the effective modulus of the strand).","type":"number"},"area":{"description":"Metallic cross-section area, m².","type":"number"},"massPerLength":{"description":"Mass per unit unstressed length, kg/m (default 0).","type":"number"},"breakingLoad":{"description":"Minimum breaking load, N; needed for the cable utilisation checks.","$ref":"#/definitions/positive"},"thermalExpansion":{"description":"Coefficient of thermal expansion, 1/K (default 0).","type":"number"},"diameter":{"description":"Outer diameter, m; used for wind and ice.","$ref":"#/definitions/positive"},"dragCoefficient":{"description":"Drag coefficient on the diameter, dimensionless (default 1.2, common practice for stranded cables).","$ref":"#/definitions/nonNegative"},"lattice":{"description":"For members that stand for a lattice mast segment: the wind model uses a lattice drag factor on solidity × face width instead of the round-section drag.","type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"description":"Face width of the lattice mast, m.","$ref":"#/definitions/positive"},"solidity":{"description":"Solidity ratio of a face (0..1), dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"description":"Drag (force) factor on solidity × face width, dimensionless (default 2.0).","$ref":"#/definitions/nonNegative"},"share":{"description":"Share (0..1] of the whole-mast lattice drag this member line carries (default 1; a triangular mast modelled leg by leg gives each leg 1/3).","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"description":"Name shown in tables and on the schedule.","type":"string"},"shape":{"description":"Shape, for the buckling-curve and radius-of-gyration defaults.","enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"description":"Buckling curve of EN 1993-1-1 Table 6.2 (default from \"shape\").","enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"description":"Least radius of gyration, m (default for solid rounds: diameter / 4).","$ref":"#/definitions/positive"},"termination":{"description":"Cable end termination, for its efficiency factor k_e.","enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"description":"End-termination efficiency k_e (0..1], dimensionless; overrides \"termination\".","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"description":"Shear modulus, Pa (beams).","$ref":"#/definitions/positive"},"Iy":{"description":"Second moment of area about the local y axis, m⁴ (beams).","$ref":"#/definitions/positive"},"Iz":{"description":"Second moment of area about the local z axis, m⁴ (beams).","$ref":"#/definitions/positive"},"J":{"description":"Torsion constant, m⁴ (beams).","$ref":"#/definitions/positive"},"yieldStrength":{"description":"Yield strength, Pa (bar and beam checks).","$ref":"#/definitions/positive"}}},"member":{"description":"A cable, bar or beam between two nodes.","type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"description":"Member id, unique among members.","$ref":"#/definitions/id"},"kind":{"description":"cable: tension-only; bar: tension and compression; beam: beam-column (axial force, bending, torsion).","enum":["cable","bar","beam"]},"from":{"description":"Start node id.","$ref":"#/definitions/id"},"to":{"description":"End node id.","$ref":"#/definitions/id"},"section":{"description":"Section id.","$ref":"#/definitions/id"},"segments":{"description":"Number of elements the solver splits the member into, 1 to 10,000 (default 1).","type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"description":"Axial force at the modelled geometry, N (tension positive). Give this or \"unstressedLength\", not both.","type":"number"},"unstressedLength":{"description":"Stress-free length of the whole member, m. Give this or \"pretension\", not both.","type":"number"},"groups":{"description":"Group ids this member belongs to (in addition to the groups' member lists).","$ref":"#/definitions/idList"},"generatedBy":{"description":"Id of the generator record that made this member.","type":"string"},"terminationEfficiency":{"description":"End-termination efficiency k_e (0..1], dimensionless; overrides the section's.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"description":"Buckling length, m; overrides the member design rules.","$ref":"#/definitions/positive"},"orientation":{"description":"Beams: reference vector [x, y, z] fixing the local y axis (its part normal to the member), dimensionless.","$ref":"#/definitions/vec3"},"releases":{"description":"Beams: end releases (pins), as letters of the local rotation axes.","type":"object","additionalProperties":false,"properties":{"start":{"description":"Local rotations released at the start (\"x\" torsion, \"y\" and \"z\" bending; \"xyz\" full pin).","$ref":"#/definitions/releaseLetters"},"end":{"description":"Local rotations released at the end (\"x\" torsion, \"y\" and \"z\" bending; \"xyz\" full pin).","$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"description":"Letters of the local rotation axes: x (torsion), y, z (bending), each at most once.","type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"description":"A force (and moment) on a node.","type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"force":{"description":"Force [Fx, Fy, Fz], N, global axes.","$ref":"#/definitions/vec3"},"moment":{"description":"Moment [Mx, My, Mz], N·m, global axes (nodes with rotations only).","$ref":"#/definitions/vec3"}}},"windProfile":{"description":"Height profile of the mean wind speed.","type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"description":"power: V(z) = V10 · (z/10)^exponent.","const":"power"},"exponent":{"description":"Power-law exponent α, dimensionless (1/7 is common practice for open country).","$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"description":"log: V(z) = V10 · ln(z/z0) / ln(10/z0).","const":"log"},"roughnessLength":{"description":"Roughness length z0, m.","$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"description":"uniform: the same speed at every height.","const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"description":"Wind on the members of a load case.","type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"description":"Direction the air flows toward, degrees, counter-clockwise from +x in the x–y plane (0 = toward +x, 90 = toward +y).","type":"number"},"speed":{"description":"Wind speed at 10 m above z = 0, m/s (a mean speed unless \"basis\" says otherwise).","$ref":"#/definitions/nonNegative"},"profile":{"description":"Height profile (default: power law with exponent 1/7).","$ref":"#/definitions/windProfile"},"airDensity":{"description":"Air density, kg/m³ (default 1.225).","$ref":"#/definitions/positive"},"groups":{"description":"Only load these groups (default: every member).","$ref":"#/definitions/idList"},"basis":{"description":"What \"speed\" stands for (mean or peak, averaging period) and the factors on the wind forces.","$ref":"#/definitions/windBasis"}}},"ice":{"description":"Radial ice on the members of a load case.","type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"description":"Radial ice thickness, m.","$ref":"#/definitions/nonNegative"},"density":{"description":"Ice density, kg/m³ (default 900, glaze ice).","$ref":"#/definitions/positive"},"groups":{"description":"Only ice these groups (default: every member with a diameter).","$ref":"#/definitions/idList"}}},"loadCase":{"description":"A load case.","type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"description":"Load case id, unique among cases and combinations.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"selfWeight":{"description":"Include the self-weight of every member (default true).","type":"boolean"},"temperatureChange":{"description":"Uniform temperature change from the reference temperature, K (default 0).","type":"number"},"nodalLoads":{"description":"Forces and moments on nodes.","type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"description":"Wind on the members.","$ref":"#/definitions/wind"},"ice":{"description":"Ice on the members.","$ref":"#/definitions/ice"},"purpose":{"description":"What the case is checked for (default serviceability).","$ref":"#/definitions/casePurpose"},"action":{"description":"Which action the case represents, for the combination builder.","enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"description":"Prescribed support movements in this case.","type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"description":"Area loads on panels.","type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"description":"A named set of members.","type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"description":"Group id, unique among groups.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables and on the schedule.","type":"string"},"members":{"description":"Member ids in the group.","$ref":"#/definitions/idList"}}},"combination":{"description":"A factored sum of load cases, solved as its own nonlinear case.","type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"description":"Combination id, unique among cases and combinations.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"factors":{"description":"Factor × load case terms; self-weight, nodal loads, wind pressure and temperature change are all scaled.","type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"description":"Load case id.","$ref":"#/definitions/id"},"factor":{"description":"Factor on that case, dimensionless.","type":"number"}}}},"purpose":{"description":"What the combination is checked for (default ultimate).","$ref":"#/definitions/casePurpose"}}},"sagLimit":{"description":"A sag limit: a fraction of the chord length, or an absolute length.","type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"description":"Largest sag as a fraction of the chord length, dimensionless (e.g. 0.02).","$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"description":"Largest sag, m.","$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"description":"Design-check settings and limits.","type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"description":"Groups (or \"*\" for all cables) that must not go slack in any case.","$ref":"#/definitions/idList"},"sagLimits":{"description":"Sag limits per group.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"limit":{"description":"Sag limit of every member of the group.","$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"description":"Limits on the displacement of named nodes.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"limit":{"description":"Largest displacement, m.","$ref":"#/definitions/positive"},"direction":{"description":"\"horizontal\" (default), \"total\", or a direction vector [x, y, z] along which the displacement is measured.","oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"description":"Mast tilt limits.","type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"description":"Node at the foot of the mast.","$ref":"#/definitions/id"},"top":{"description":"Node at the top of the mast.","$ref":"#/definitions/id"},"limit":{"description":"Largest horizontal offset of top relative to base over their height difference, dimensionless ratio (e.g. 0.01).","$ref":"#/definitions/positive"}}}},"upliftNodes":{"description":"Supports at which uplift (reaction Fz < 0: the support holds the structure down) is flagged.","$ref":"#/definitions/idList"},"minimumTension":{"description":"Minimum tension of cables per group in serviceability cases.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"shareOfInstallation":{"description":"Least tension as a share of the member's installation tension, dimensionless.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"description":"Least tension as a share of the member's breaking load, dimensionless.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"description":"Design data of bars per group: role, buckling length, slenderness limit.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"role":{"description":"Role of the bars (sets the default slenderness limit).","enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"description":"Buckling length as a factor on the system length (between the end nodes), dimensionless.","$ref":"#/definitions/positive"},"bucklingLength":{"description":"Buckling length, m.","$ref":"#/definitions/positive"},"slendernessLimit":{"description":"Largest slenderness (buckling length / radius of gyration), dimensionless.","$ref":"#/definitions/positive"}}}},"twistLimits":{"description":"Limits on twist (rotation about the vertical) of node sets at one level.","type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"description":"Node ids at one level; their plan centroid is the centre of rotation.","type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"description":"Largest twist, degrees.","$ref":"#/definitions/positive"}}}}}},"tuningTarget":{"description":"A tuning target, by \"kind\".","type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"description":"sag: the sag of every member of the group stays within the limit in the case.","const":"sag"},"group":{"description":"Group id.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"},"limit":{"description":"Sag limit.","$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"description":"tensionShare: tension / breaking load at installation (the reference case) equals the share.","const":"tensionShare"},"group":{"description":"Group id.","$ref":"#/definitions/id"},"share":{"description":"Tension as a share of the breaking load, dimensionless (0..1).","$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"description":"noSlack: no member of the group is slack in the case.","const":"noSlack"},"group":{"description":"Group id.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"description":"plumb: the horizontal offset of top relative to base stays within the tolerance in the case.","const":"plumb"},"base":{"description":"Node at the foot of the mast.","$ref":"#/definitions/id"},"top":{"description":"Node at the top of the mast.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"},"tolerance":{"description":"Largest horizontal offset, m.","$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"description":"reaction: the magnitude of the support reaction at the node stays within the limit in the case.","const":"reaction"},"node":{"description":"Support node id.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"},"limit":{"description":"Largest reaction magnitude, N.","type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"description":"Pretension tuning settings.","type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"description":"Groups whose pretension the tuner may change, and how.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"by":{"description":"pretension: one force for every member of the group (N); unstressedLength: one factor on the members' unstressed lengths (dimensionless).","enum":["pretension","unstressedLength"]},"min":{"description":"Lower bound: N for \"pretension\", a factor for \"unstressedLength\".","type":"number"},"max":{"description":"Upper bound: N for \"pretension\", a factor for \"unstressedLength\".","type":"number"}}}},"targets":{"description":"Targets the tuned design must meet.","type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"description":"Result of the last tuning run.","type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"description":"Date and time of the run (ISO 8601).","type":"string"},"summary":{"description":"Summary of the run as printed.","type":"string"}}}}},"installation":{"description":"Installation data settings.","type":"object","additionalProperties":false,"properties":{"temperatures":{"description":"Installation temperatures for the table, K (default −20 °C to +40 °C in 5 °C steps).","type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"description":"A record of a generator run, for re-running it.","type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"description":"Generator record id; generated parts carry it as \"generatedBy\" and as an id prefix.","$ref":"#/definitions/id"},"kind":{"description":"Which generator: guyed lattice mast, saddle net or radial net.","enum":["guyedMast","saddleNet","radialNet"]},"params":{"description":"The generator's parameters, in SI units, as its form shows them.","type":"object"}}},"sequenceStep":{"description":"One step of a tensioning sequence.","type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"description":"Members tensioned together in this step (give \"members\" or \"group\", not both).","$ref":"#/definitions/idList"},"group":{"description":"A group tensioned together in this step.","$ref":"#/definitions/id"},"setBy":{"description":"How the crew sets the members: by a force reading or by a length.","enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"description":"Name of the step on the crew sheet.","type":"string"}}},"sequence":{"description":"A tensioning sequence for the crew.","type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"description":"Sequence id.","$ref":"#/definitions/id"},"label":{"description":"Name printed on the crew sheet.","type":"string"},"temperature":{"description":"Air temperature on the day of tensioning, K (default: the reference temperature).","$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"description":"Self-weight acts during erection (default true).","type":"boolean"},"steps":{"description":"Ordered steps; members in no step are in place before the first step.","type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"description":"Restraints in place during erection only.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"fixed":{"description":"Restrained translations while in place (letters of \"xyz\").","type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"description":"Number of the step after which the restraint is released (1-based; default: after the last step).","type":"integer","minimum":1}}}},"plumb":{"description":"Mast plumb tolerance during erection.","type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"description":"Node at the foot of the mast.","$ref":"#/definitions/id"},"top":{"description":"Node at the top of the mast.","$ref":"#/definitions/id"},"limit":{"description":"Largest horizontal offset of top over height, dimensionless ratio.","$ref":"#/definitions/positive"}}},"forceTolerance":{"description":"Tolerance band on a force setting, fraction of the value (default 0.05, common practice).","$ref":"#/definitions/positive"},"lengthTolerance":{"description":"Tolerance band on a length setting, m (default 0.005, common practice).","$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"description":"Readings taken on site on one occasion.","type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"description":"Measurement set id.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"date":{"description":"Date of the measurements (ISO 8601).","type":"string"},"tensions":{"description":"Tension readings.","type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"description":"Member id.","$ref":"#/definitions/id"},"method":{"description":"How the tension was read: dynamometer, vibration frequency or sag.","enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"description":"The reading: dynamometer tension at the lower end, N; frequency, Hz; largest vertical sag, m.","$ref":"#/definitions/positive"},"accuracy":{"description":"Standard uncertainty of the reading as a fraction of the value, dimensionless (0.03 = 3 %).","$ref":"#/definitions/positive"},"temperature":{"description":"Air temperature at the measurement, K.","$ref":"#/definitions/absoluteTemperature"},"mode":{"description":"Frequency readings: which mode was measured (default the taut-string mode).","enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"description":"Surveyed node positions.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"at":{"description":"Measured position [x, y, z], m.","$ref":"#/definitions/vec3"},"accuracy":{"description":"Standard uncertainty of each horizontal coordinate, m.","$ref":"#/definitions/positive"},"temperature":{"description":"Air temperature at the survey, K.","$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"description":"Acceptance band on the tension at the reference state, fraction of the design tension (default 0.1, common practice).","$ref":"#/definitions/positive"},"lengthUncertainty":{"description":"Prior uncertainty of each cable's unstressed length, m (default 0.02, common practice).","$ref":"#/definitions/positive"}}},"report":{"description":"Document data of the printed report and schedule.","type":"object","additionalProperties":false,"properties":{"documentNumber":{"description":"Document number printed in the page header.","type":"string"},"revisions":{"description":"Revision block, oldest first.","type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"description":"Revision mark, e.g. \"A\", \"P01\".","type":"string"},"date":{"description":"Date of the revision (ISO 8601).","type":"string"},"description":{"description":"What changed.","type":"string"},"by":{"description":"Prepared by.","type":"string"},"checkedBy":{"description":"Checked by.","type":"string"}}}}}},"display":{"description":"Display preferences; never affect results.","type":"object","additionalProperties":false,"properties":{"units":{"description":"Display units: SI or US customary.","enum":["SI","US"]},"deformationScale":{"description":"Scale factor on displacements in the 3D view, dimensionless.","$ref":"#/definitions/positive"}}},"casePurpose":{"description":"ultimate: strength checks with factored actions; serviceability: deformation, sag, slack and tension limits, unfactored; accidental: strength with the accidental factors; componentOnly: used inside combinations only, never checked.","enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"},"designBasis":{"description":"Check format and its factors; every default is listed with its source in the design-check report.","type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"description":"limitState: partial factors on actions and resistances; allowable: safety factors on service states.","enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"description":"Name of the basis as printed on reports.","type":"string"},"actionFactors":{"description":"Limit state: partial factors γ_F on actions (unfavourable unless named favourable), dimensionless.","type":"object","additionalProperties":false,"properties":{"permanent":{"description":"γ_G on unfavourable permanent actions, dimensionless.","$ref":"#/definitions/positive"},"permanentFavourable":{"description":"γ_G on favourable permanent actions, dimensionless.","$ref":"#/definitions/positive"},"prestress":{"description":"Factor on the pretension; only 1 is supported (every case starts from the installed pretension).","$ref":"#/definitions/positive"},"wind":{"description":"γ_Q on wind, dimensionless.","$ref":"#/definitions/positive"},"ice":{"description":"γ_Q on ice, dimensionless.","$ref":"#/definitions/positive"},"temperature":{"description":"γ_Q on temperature, dimensionless.","$ref":"#/definitions/positive"},"accidental":{"description":"Factor on accidental actions, dimensionless.","$ref":"#/definitions/positive"}}},"combinationFactors":{"description":"Combination factors ψ0 of accompanying variable actions (both formats), dimensionless.","type":"object","additionalProperties":false,"properties":{"wind":{"description":"ψ0 of wind, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"description":"ψ0 of ice, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"description":"ψ0 of temperature, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"description":"Limit state: cable resistance F_Rd = k_e · MBL / (breakingFactor · γ_R); serviceability T ≤ serviceabilityShare · k_e · MBL.","type":"object","additionalProperties":false,"properties":{"breakingFactor":{"description":"Factor on the minimum breaking load in F_Rd, dimensionless.","$ref":"#/definitions/positive"},"partialFactor":{"description":"Partial factor γ_R of the cable resistance, dimensionless.","$ref":"#/definitions/positive"},"serviceabilityShare":{"description":"Largest service tension as a share of k_e · MBL, dimensionless.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"description":"Limit state: partial factors of steel members, dimensionless.","type":"object","additionalProperties":false,"properties":{"gammaM0":{"description":"γ_M0: resistance of cross-sections (yield), dimensionless.","$ref":"#/definitions/positive"},"gammaM1":{"description":"γ_M1: resistance of members to instability (buckling), dimensionless.","$ref":"#/definitions/positive"}}},"allowable":{"description":"Allowable format: safety factors, dimensionless.","type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"description":"Cable tension ≤ k_e · MBL / cableSafetyFactor.","type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"description":"Member force ≤ resistance (yield or χ · yield) / memberSafetyFactor.","type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}},"panel":{"description":"A loop of three or more nodes bounding a piece of surface that carries area loads; its normal follows the right-hand rule on the node order.","type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"description":"Panel id.","$ref":"#/definitions/id"},"nodes":{"description":"Corner node ids in order around the loop (3 or more, no repeats).","type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"description":"Region name: pressure coefficients may be given per region instead of per panel.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"}}},"pressureCoefficient":{"description":"Pressure coefficient of the panels of one region or of one panel.","type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"description":"A panel region or a panel id.","$ref":"#/definitions/id"},"cp":{"description":"Net pressure coefficient c_p, dimensionless.","type":"number"}}},"areaLoad":{"description":"An area load on panels.","type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"description":"snow: per plan area, downward; cladding: weight per true (sloping) area, downward; pressure: net pressure normal to the deformed panel (a follower load).","enum":["snow","cladding","pressure"]},"value":{"description":"Load per area, Pa; for pressure, positive acts against the panel normal, negative is suction.","type":"number"},"panels":{"description":"Only these panels or regions (default: every panel).","$ref":"#/definitions/idList"},"coefficients":{"description":"Pressure only: c_p per region or panel id (a panel id wins over its region; default c_p = 1).","type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"description":"Patch wind on a guyed mast (EN 1993-3-1 Annex B, B.4.3.2): S = S_m ± √Σ(S_i − S_m)² per result.","type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"description":"Patch wind id; its cases are \"<id> / patch k\", \"<id> max\" and \"<id> min\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"meanCase":{"description":"Load case with the mean wind on the whole structure.","$ref":"#/definitions/id"},"patchFactor":{"description":"Wind force inside a patch as a multiple of the mean wind force there (> 1), dimensionless.","type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"description":"Height ranges of the patches (default: the spans between guy levels).","type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"description":"Bottom of the patch, m above z = 0.","type":"number"},"to":{"description":"Top of the patch, m above z = 0.","type":"number"}}}}}},"memberLoss":{"description":"Sudden loss of members: from the solved state of a case, each member is removed in turn and its released force amplified.","type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"description":"Member loss id; its cases are \"<id> / <member>\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"fromCase":{"description":"Load case or combination whose solved state the loss starts from.","$ref":"#/definitions/id"},"members":{"description":"Members removed, one case each.","$ref":"#/definitions/idList"},"group":{"description":"Or every member of this group in turn.","$ref":"#/definitions/id"},"dynamicFactor":{"description":"Dynamic amplification factor on the released force (1 = static, at most 2), dimensionless; default from dampingRatio.","type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"description":"Critical damping ratio ζ (0 ≤ ζ < 1) for the default factor 1 + exp(−πζ/√(1−ζ²)), dimensionless (default 0: factor 2).","type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}},"windBasis":{"description":"What a wind speed stands for; velocity pressure q = ½ ρ V(z)², wind forces × gustFactor × structuralFactor.","type":"object","additionalProperties":false,"required":["velocity","averagingPeriod"],"properties":{"velocity":{"description":"mean: \"speed\" is a mean wind speed; peak: a gust (peak) speed.","enum":["mean","peak"]},"averagingPeriod":{"description":"Averaging period of the speed, s (600 = 10-minute mean, 3 = 3-second gust).","$ref":"#/definitions/positive"},"gustFactor":{"description":"Factor on the forces from a mean-velocity pressure to a peak pressure, dimensionless (default 1).","$ref":"#/definitions/positive"},"structuralFactor":{"description":"Structural factor (e.g. c_s c_d of EN 1991-1-4 §6) on the forces, dimensionless (default 1).","$ref":"#/definitions/positive"}}},"windDirections":{"description":"Wind from \"count\" directions: the case is solved once per direction azimuth + k · 360°/count.","type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"description":"Id; its cases are \"<id> <direction>°\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"case":{"description":"Load case with wind whose direction is replaced.","$ref":"#/definitions/id"},"count":{"description":"Number of directions (1 to 72).","type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"description":"First direction, degrees, same convention as the wind direction (default 0).","type":"number"}}},"ancillary":{"description":"An item on the structure: point items hang on a node; line items run along a group between two heights.","type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"description":"Ancillary id.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"kind":{"description":"What the item is: antenna, dish, feeder, ladder, platform or other.","enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"description":"Point item: the node it is attached at.","$ref":"#/definitions/id"},"along":{"description":"Line item: the group it runs along and its height range.","type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"from":{"description":"Bottom of the run, m above z = 0.","type":"number"},"to":{"description":"Top of the run, m above z = 0.","type":"number"}}},"dragArea":{"description":"Drag area C_f · A: m² for a point item, m² per metre of height for a line item.","$ref":"#/definitions/nonNegative"},"mass":{"description":"Mass: kg for a point item, kg per metre of height for a line item.","$ref":"#/definitions/nonNegative"},"iceDragArea":{"description":"Drag area added per metre of radial ice, m²/m (line items per metre of height too); default 0: ice ignored.","$ref":"#/definitions/nonNegative"},"iceMass":{"description":"Ice mass per metre of radial ice, kg/m (line items per metre of height too); default 0: ice ignored.","$ref":"#/definitions/nonNegative"}}}}};
-const schema154 = {"description":"Document data of the printed report and schedule.","type":"object","additionalProperties":false,"properties":{"documentNumber":{"description":"Document number printed in the page header.","type":"string"},"revisions":{"description":"Revision block, oldest first.","type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"description":"Revision mark, e.g. \"A\", \"P01\".","type":"string"},"date":{"description":"Date of the revision (ISO 8601).","type":"string"},"description":{"description":"What changed.","type":"string"},"by":{"description":"Prepared by.","type":"string"},"checkedBy":{"description":"Checked by.","type":"string"}}}}}};
+const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 2","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"description":"File format marker; always \"stayset-project\".","const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"description":"Format version of the file; 2 (version-1 files are migrated on load).","const":2,"x-message":"{field} must be 2"},"meta":{"description":"Project information: name, site, client, engineer, notes, reference temperature.","$ref":"#/definitions/meta"},"nodes":{"description":"Points of the model: position, supports, springs, added mass.","type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"description":"Cross-sections and materials the members use.","type":"array","items":{"$ref":"#/definitions/section"}},"members":{"description":"Cables, bars and beams between two nodes.","type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"description":"Load cases, each solved as its own nonlinear analysis from the pretensioned state.","type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"description":"Named sets of members, used by loads, checks, tuning and the schedule.","type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"description":"Factored sums of load cases; each is solved as its own nonlinear case.","type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"description":"Design-check settings and limits.","$ref":"#/definitions/checks"},"tuning":{"description":"Pretension tuning: the variables the tuner may change and the targets it must meet.","$ref":"#/definitions/tuning"},"installation":{"description":"Settings of the installation data (temperature table).","$ref":"#/definitions/installation"},"generators":{"description":"Parameters of the generators that made parts of this model, for re-running them.","type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"description":"Display preferences; never affect results.","$ref":"#/definitions/display"},"designBasis":{"description":"Check format (limit state or allowable) and its factors; absent = the limit-state defaults.","$ref":"#/definitions/designBasis"},"sequences":{"description":"Tensioning sequences for the crew.","type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"description":"Tensions and positions measured on site, for the as-built back-analysis.","type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"description":"Calculation report and schedule: document number and revision block.","$ref":"#/definitions/report"},"panels":{"description":"Panels (loops of nodes) that carry area loads: snow, cladding, wind pressure.","type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"description":"Patch wind on guyed masts: a mean-wind case plus patch cases, combined per result.","type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"description":"Sudden loss of a member (guy rupture): one accidental case per member removed.","type":"array","items":{"$ref":"#/definitions/memberLoss"}},"windDirections":{"description":"Wind cases from N directions made from one load case with wind.","type":"array","items":{"$ref":"#/definitions/windDirections"}},"ancillaries":{"description":"Antennas, dishes, feeders, ladders, platforms: their wind drag, weight and ice.","type":"array","items":{"$ref":"#/definitions/ancillary"}},"schedule":{"description":"What the tension schedule lists: cables only (default), chosen groups, or all members.","$ref":"#/definitions/schedule"}},"definitions":{"id":{"description":"An identifier: any text without leading or trailing spaces.","type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"description":"A list of identifiers.","type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"description":"Three numbers [x, y, z] along the global axes (z up).","type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"description":"A number greater than 0.","type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"description":"A number not below 0.","type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"description":"An absolute temperature, K (above 0; 15 °C = 288.15 K).","type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"description":"Project information, printed on the schedule and the report.","type":"object","additionalProperties":false,"properties":{"name":{"description":"Project name.","type":"string"},"site":{"description":"Site (location) of the structure.","type":"string"},"client":{"description":"Client.","type":"string"},"engineer":{"description":"Engineer responsible for the design.","type":"string"},"notes":{"description":"Free notes.","type":"string"},"referenceTemperature":{"description":"Design reference temperature, K: the state the model and its pretensions describe (default 288.15 K = 15 °C).","$ref":"#/definitions/absoluteTemperature"}}},"node":{"description":"A point of the model.","type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"description":"Node id, unique among nodes.","$ref":"#/definitions/id"},"at":{"description":"Position [x, y, z], m (z up).","$ref":"#/definitions/vec3"},"fixed":{"description":"Restrained directions: translations x, y, z and rotations rx, ry, rz (global axes), each at most once, written together (\"xyz\" pinned, \"xyzrxryrz\" clamped). Absent = free.","type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"description":"Elastic supports (springs to ground) of the node.","$ref":"#/definitions/springs"},"mass":{"description":"Added lumped mass at the node (equipment, antennas, fittings), kg: weighs with self-weight, vibrates in modes.","$ref":"#/definitions/nonNegative"}}},"springs":{"description":"Springs to ground: translational along x, y, z (N/m), rotational about x, y, z (N·m/rad), global axes. A spring on a restrained direction is refused.","type":"object","additionalProperties":false,"properties":{"x":{"description":"Translational stiffness along x, N/m.","$ref":"#/definitions/nonNegative"},"y":{"description":"Translational stiffness along y, N/m.","$ref":"#/definitions/nonNegative"},"z":{"description":"Translational stiffness along z, N/m.","$ref":"#/definitions/nonNegative"},"rx":{"description":"Rotational stiffness about x, N·m/rad.","$ref":"#/definitions/nonNegative"},"ry":{"description":"Rotational stiffness about y, N·m/rad.","$ref":"#/definitions/nonNegative"},"rz":{"description":"Rotational stiffness about z, N·m/rad.","$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"description":"Prescribed movement of a support in one load case (anchor movement, settlement); every direction given must be restrained in the node's \"fixed\".","type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"description":"Support node id.","$ref":"#/definitions/id"},"x":{"description":"Displacement along x, m.","type":"number"},"y":{"description":"Displacement along y, m.","type":"number"},"z":{"description":"Displacement along z, m.","type":"number"},"rx":{"description":"Rotation about x, rad.","type":"number"},"ry":{"description":"Rotation about y, rad.","type":"number"},"rz":{"description":"Rotation about z, rad.","type":"number"}}},"section":{"description":"A cross-section and its material.","type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"description":"Section id, unique among sections.","$ref":"#/definitions/id"},"E":{"description":"Young's modulus, Pa (for strands, the effective modulus of the strand).","type":"number"},"area":{"description":"Metallic cross-section area, m².","type":"number"},"massPerLength":{"description":"Mass per unit unstressed length, kg/m (default 0).","type":"number"},"breakingLoad":{"description":"Minimum breaking load, N; needed for the cable utilisation checks.","$ref":"#/definitions/positive"},"thermalExpansion":{"description":"Coefficient of thermal expansion, 1/K (default 0).","type":"number"},"diameter":{"description":"Outer diameter, m; used for wind and ice.","$ref":"#/definitions/positive"},"dragCoefficient":{"description":"Drag coefficient on the diameter, dimensionless (default 1.2, common practice for stranded cables).","$ref":"#/definitions/nonNegative"},"lattice":{"description":"For members that stand for a lattice mast segment: the wind model uses a lattice drag factor on solidity × face width instead of the round-section drag.","type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"description":"Face width of the lattice mast, m.","$ref":"#/definitions/positive"},"solidity":{"description":"Solidity ratio of a face (0..1), dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"description":"Drag (force) factor on solidity × face width, dimensionless (default 2.0).","$ref":"#/definitions/nonNegative"},"share":{"description":"Share (0..1] of the whole-mast lattice drag this member line carries (default 1; a triangular mast modelled leg by leg gives each leg 1/3).","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"description":"Name shown in tables and on the schedule.","type":"string"},"shape":{"description":"Shape, for the buckling-curve and radius-of-gyration defaults.","enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"description":"Buckling curve of EN 1993-1-1 Table 6.2 (default from \"shape\").","enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"description":"Least radius of gyration, m (default for solid rounds: diameter / 4).","$ref":"#/definitions/positive"},"termination":{"description":"Cable end termination, for its efficiency factor k_e.","enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"description":"End-termination efficiency k_e (0..1], dimensionless; overrides \"termination\".","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"description":"Shear modulus, Pa (beams).","$ref":"#/definitions/positive"},"Iy":{"description":"Second moment of area about the local y axis, m⁴ (beams).","$ref":"#/definitions/positive"},"Iz":{"description":"Second moment of area about the local z axis, m⁴ (beams).","$ref":"#/definitions/positive"},"J":{"description":"Torsion constant, m⁴ (beams).","$ref":"#/definitions/positive"},"yieldStrength":{"description":"Yield strength, Pa (bar and beam checks).","$ref":"#/definitions/positive"}}},"member":{"description":"A cable, bar or beam between two nodes.","type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"description":"Member id, unique among members.","$ref":"#/definitions/id"},"kind":{"description":"cable: tension-only; bar: tension and compression; beam: beam-column (axial force, bending, torsion).","enum":["cable","bar","beam"]},"from":{"description":"Start node id.","$ref":"#/definitions/id"},"to":{"description":"End node id.","$ref":"#/definitions/id"},"section":{"description":"Section id.","$ref":"#/definitions/id"},"segments":{"description":"Number of elements the solver splits the member into, 1 to 10,000 (default 1).","type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"description":"Axial force at the modelled geometry, N (tension positive). Give this or \"unstressedLength\", not both.","type":"number"},"unstressedLength":{"description":"Stress-free length of the whole member, m. Give this or \"pretension\", not both.","type":"number"},"groups":{"description":"Group ids this member belongs to (in addition to the groups' member lists).","$ref":"#/definitions/idList"},"generatedBy":{"description":"Id of the generator record that made this member.","type":"string"},"terminationEfficiency":{"description":"End-termination efficiency k_e (0..1], dimensionless; overrides the section's.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"description":"Buckling length, m; overrides the member design rules.","$ref":"#/definitions/positive"},"orientation":{"description":"Beams: reference vector [x, y, z] fixing the local y axis (its part normal to the member), dimensionless.","$ref":"#/definitions/vec3"},"releases":{"description":"Beams: end releases (pins), as letters of the local rotation axes.","type":"object","additionalProperties":false,"properties":{"start":{"description":"Local rotations released at the start (\"x\" torsion, \"y\" and \"z\" bending; \"xyz\" full pin).","$ref":"#/definitions/releaseLetters"},"end":{"description":"Local rotations released at the end (\"x\" torsion, \"y\" and \"z\" bending; \"xyz\" full pin).","$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"description":"Letters of the local rotation axes: x (torsion), y, z (bending), each at most once.","type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"description":"A force (and moment) on a node.","type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"force":{"description":"Force [Fx, Fy, Fz], N, global axes.","$ref":"#/definitions/vec3"},"moment":{"description":"Moment [Mx, My, Mz], N·m, global axes (nodes with rotations only).","$ref":"#/definitions/vec3"}}},"windProfile":{"description":"Height profile of the mean wind speed.","type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"description":"power: V(z) = V10 · (z/10)^exponent.","const":"power"},"exponent":{"description":"Power-law exponent α, dimensionless (1/7 is common practice for open country).","$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"description":"log: V(z) = V10 · ln(z/z0) / ln(10/z0).","const":"log"},"roughnessLength":{"description":"Roughness length z0, m.","$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"description":"uniform: the same speed at every height.","const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"description":"Wind on the members of a load case.","type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"description":"Direction the air flows toward, degrees, counter-clockwise from +x in the x–y plane (0 = toward +x, 90 = toward +y).","type":"number"},"speed":{"description":"Wind speed at 10 m above z = 0, m/s (a mean speed unless \"basis\" says otherwise).","$ref":"#/definitions/nonNegative"},"profile":{"description":"Height profile (default: power law with exponent 1/7).","$ref":"#/definitions/windProfile"},"airDensity":{"description":"Air density, kg/m³ (default 1.225).","$ref":"#/definitions/positive"},"groups":{"description":"Only load these groups (default: every member).","$ref":"#/definitions/idList"},"basis":{"description":"What \"speed\" stands for (mean or peak, averaging period) and the factors on the wind forces.","$ref":"#/definitions/windBasis"}}},"ice":{"description":"Radial ice on the members of a load case.","type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"description":"Radial ice thickness, m.","$ref":"#/definitions/nonNegative"},"density":{"description":"Ice density, kg/m³ (default 900, glaze ice).","$ref":"#/definitions/positive"},"groups":{"description":"Only ice these groups (default: every member with a diameter).","$ref":"#/definitions/idList"}}},"loadCase":{"description":"A load case.","type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"description":"Load case id, unique among cases and combinations.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"selfWeight":{"description":"Include the self-weight of every member (default true).","type":"boolean"},"temperatureChange":{"description":"Uniform temperature change from the reference temperature, K (default 0).","type":"number"},"nodalLoads":{"description":"Forces and moments on nodes.","type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"description":"Wind on the members.","$ref":"#/definitions/wind"},"ice":{"description":"Ice on the members.","$ref":"#/definitions/ice"},"purpose":{"description":"What the case is checked for (default serviceability).","$ref":"#/definitions/casePurpose"},"action":{"description":"Which action the case represents, for the combination builder.","enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"description":"Prescribed support movements in this case.","type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"description":"Area loads on panels.","type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"description":"A named set of members.","type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"description":"Group id, unique among groups.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables and on the schedule.","type":"string"},"members":{"description":"Member ids in the group.","$ref":"#/definitions/idList"}}},"combination":{"description":"A factored sum of load cases, solved as its own nonlinear case.","type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"description":"Combination id, unique among cases and combinations.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"factors":{"description":"Factor × load case terms; self-weight, nodal loads, wind pressure and temperature change are all scaled.","type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"description":"Load case id.","$ref":"#/definitions/id"},"factor":{"description":"Factor on that case, dimensionless.","type":"number"}}}},"purpose":{"description":"What the combination is checked for (default ultimate).","$ref":"#/definitions/casePurpose"}}},"sagLimit":{"description":"A sag limit: a fraction of the chord length, or an absolute length.","type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"description":"Largest sag as a fraction of the chord length, dimensionless (e.g. 0.02).","$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"description":"Largest sag, m.","$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"description":"Design-check settings and limits.","type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"description":"Groups (or \"*\" for all cables) that must not go slack in any case.","$ref":"#/definitions/idList"},"sagLimits":{"description":"Sag limits per group.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"limit":{"description":"Sag limit of every member of the group.","$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"description":"Limits on the displacement of named nodes.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"limit":{"description":"Largest displacement, m.","$ref":"#/definitions/positive"},"direction":{"description":"\"horizontal\" (default), \"total\", or a direction vector [x, y, z] along which the displacement is measured.","oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"description":"Mast tilt limits.","type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"description":"Node at the foot of the mast.","$ref":"#/definitions/id"},"top":{"description":"Node at the top of the mast.","$ref":"#/definitions/id"},"limit":{"description":"Largest horizontal offset of top relative to base over their height difference, dimensionless ratio (e.g. 0.01).","$ref":"#/definitions/positive"}}}},"upliftNodes":{"description":"Supports at which uplift (reaction Fz < 0: the support holds the structure down) is flagged.","$ref":"#/definitions/idList"},"minimumTension":{"description":"Minimum tension of cables per group in serviceability cases.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"shareOfInstallation":{"description":"Least tension as a share of the member's installation tension, dimensionless.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"description":"Least tension as a share of the member's breaking load, dimensionless.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"description":"Design data of bars per group: role, buckling length, slenderness limit.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"role":{"description":"Role of the bars (sets the default slenderness limit).","enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"description":"Buckling length as a factor on the system length (between the end nodes), dimensionless.","$ref":"#/definitions/positive"},"bucklingLength":{"description":"Buckling length, m.","$ref":"#/definitions/positive"},"slendernessLimit":{"description":"Largest slenderness (buckling length / radius of gyration), dimensionless.","$ref":"#/definitions/positive"}}}},"twistLimits":{"description":"Limits on twist (rotation about the vertical) of node sets at one level.","type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"description":"Node ids at one level; their plan centroid is the centre of rotation.","type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"description":"Largest twist, degrees.","$ref":"#/definitions/positive"}}}}}},"tuningTarget":{"description":"A tuning target, by \"kind\".","type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"description":"sag: the sag of every member of the group stays within the limit in the case.","const":"sag"},"group":{"description":"Group id.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"},"limit":{"description":"Sag limit.","$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"description":"tensionShare: tension / breaking load at installation (the reference case) equals the share.","const":"tensionShare"},"group":{"description":"Group id.","$ref":"#/definitions/id"},"share":{"description":"Tension as a share of the breaking load, dimensionless (0..1).","$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"description":"noSlack: no member of the group is slack in the case.","const":"noSlack"},"group":{"description":"Group id.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"description":"plumb: the horizontal offset of top relative to base stays within the tolerance in the case.","const":"plumb"},"base":{"description":"Node at the foot of the mast.","$ref":"#/definitions/id"},"top":{"description":"Node at the top of the mast.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"},"tolerance":{"description":"Largest horizontal offset, m.","$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"description":"reaction: the magnitude of the support reaction at the node stays within the limit in the case.","const":"reaction"},"node":{"description":"Support node id.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"},"limit":{"description":"Largest reaction magnitude, N.","type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"description":"Pretension tuning settings.","type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"description":"Groups whose pretension the tuner may change, and how.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"by":{"description":"pretension: one force for every member of the group (N); unstressedLength: one factor on the members' unstressed lengths (dimensionless).","enum":["pretension","unstressedLength"]},"min":{"description":"Lower bound: N for \"pretension\", a factor for \"unstressedLength\".","type":"number"},"max":{"description":"Upper bound: N for \"pretension\", a factor for \"unstressedLength\".","type":"number"}}}},"targets":{"description":"Targets the tuned design must meet.","type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"description":"Record of the last tuning run (kept in the project, printed on the schedule).","$ref":"#/definitions/tuningRunRecord"}}},"tuningRunRecord":{"description":"Record of a tuning run: when, outcome, targets and variables.","type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"description":"Date and time of the run (ISO 8601).","type":"string"},"summary":{"description":"Summary of the run as printed.","type":"string"},"status":{"description":"Outcome: all targets met, some unmet, or a case did not converge.","enum":["met","unmet","notConverged"]},"targets":{"description":"Each target at the end of the run.","type":"array","items":{"type":"object","additionalProperties":false,"required":["kind","label","value","limit","unit","sense","met"],"properties":{"kind":{"description":"Target kind.","type":"string"},"label":{"description":"What the target concerns, as printed.","type":"string"},"value":{"description":"Value reached, in the target's unit.","type":"number"},"limit":{"description":"Limit or goal, in the target's unit.","type":"number"},"unit":{"description":"Unit of value and limit: m, N, or a share (dimensionless).","enum":["m","N","share"]},"sense":{"description":"atMost: value ≤ limit; equal: value = goal within tolerance.","enum":["atMost","equal"]},"met":{"description":"True when the target is met.","type":"boolean"},"governing":{"description":"Case or member that governs the value.","type":"string"}}}},"variables":{"description":"Each tuning variable: start and end values.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by","initial","final"],"properties":{"group":{"description":"Group the variable acts on.","$ref":"#/definitions/id"},"by":{"description":"pretension (N) or unstressedLength (factor).","enum":["pretension","unstressedLength"]},"initial":{"description":"Value before the run (N or factor).","type":"number"},"final":{"description":"Value after the run (N or factor).","type":"number"},"atBound":{"description":"The bound the variable ended on, if any.","enum":["lower","upper"]}}}},"diagnosis":{"description":"Why targets were not met, as printed.","type":"array","items":{"type":"string"}}}},"schedule":{"description":"What the tension schedule lists.","type":"object","additionalProperties":false,"properties":{"list":{"description":"cables (default): cables in full, other members summarised per group; groups: the chosen groups; all: every member.","enum":["cables","groups","all"],"x-message":"{field} must be one of cables, groups, all"},"groups":{"description":"Groups listed when list is \"groups\".","$ref":"#/definitions/idList"}}},"installation":{"description":"Installation data settings.","type":"object","additionalProperties":false,"properties":{"temperatures":{"description":"Installation temperatures for the table, K (default −20 °C to +40 °C in 5 °C steps).","type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"description":"A record of a generator run, for re-running it.","type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"description":"Generator record id; generated parts carry it as \"generatedBy\" and as an id prefix.","$ref":"#/definitions/id"},"kind":{"description":"Which generator: guyed lattice mast, saddle net or radial net.","enum":["guyedMast","saddleNet","radialNet"]},"params":{"description":"The generator's parameters, in SI units, as its form shows them.","type":"object"}}},"sequenceStep":{"description":"One step of a tensioning sequence.","type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"description":"Members tensioned together in this step (give \"members\" or \"group\", not both).","$ref":"#/definitions/idList"},"group":{"description":"A group tensioned together in this step.","$ref":"#/definitions/id"},"setBy":{"description":"How the crew sets the members: by a force reading or by a length.","enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"description":"Name of the step on the crew sheet.","type":"string"}}},"sequence":{"description":"A tensioning sequence for the crew.","type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"description":"Sequence id.","$ref":"#/definitions/id"},"label":{"description":"Name printed on the crew sheet.","type":"string"},"temperature":{"description":"Air temperature on the day of tensioning, K (default: the reference temperature).","$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"description":"Self-weight acts during erection (default true).","type":"boolean"},"steps":{"description":"Ordered steps; members in no step are in place before the first step.","type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"description":"Restraints in place during erection only.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"fixed":{"description":"Restrained translations while in place (letters of \"xyz\").","type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"description":"Number of the step after which the restraint is released (1-based; default: after the last step).","type":"integer","minimum":1}}}},"plumb":{"description":"Mast plumb tolerance during erection.","type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"description":"Node at the foot of the mast.","$ref":"#/definitions/id"},"top":{"description":"Node at the top of the mast.","$ref":"#/definitions/id"},"limit":{"description":"Largest horizontal offset of top over height, dimensionless ratio.","$ref":"#/definitions/positive"}}},"forceTolerance":{"description":"Tolerance band on a force setting, fraction of the value (default 0.05, common practice).","$ref":"#/definitions/positive"},"lengthTolerance":{"description":"Tolerance band on a length setting, m (default 0.005, common practice).","$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"description":"Readings taken on site on one occasion.","type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"description":"Measurement set id.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"date":{"description":"Date of the measurements (ISO 8601).","type":"string"},"tensions":{"description":"Tension readings.","type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"description":"Member id.","$ref":"#/definitions/id"},"method":{"description":"How the tension was read: dynamometer, vibration frequency or sag.","enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"description":"The reading: dynamometer tension at the lower end, N; frequency, Hz; largest vertical sag, m.","$ref":"#/definitions/positive"},"accuracy":{"description":"Standard uncertainty of the reading as a fraction of the value, dimensionless (0.03 = 3 %).","$ref":"#/definitions/positive"},"temperature":{"description":"Air temperature at the measurement, K.","$ref":"#/definitions/absoluteTemperature"},"mode":{"description":"Frequency readings: which mode was measured (default the taut-string mode).","enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"description":"Surveyed node positions.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"at":{"description":"Measured position [x, y, z], m.","$ref":"#/definitions/vec3"},"accuracy":{"description":"Standard uncertainty of each horizontal coordinate, m.","$ref":"#/definitions/positive"},"temperature":{"description":"Air temperature at the survey, K.","$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"description":"Acceptance band on the tension at the reference state, fraction of the design tension (default 0.1, common practice).","$ref":"#/definitions/positive"},"lengthUncertainty":{"description":"Prior uncertainty of each cable's unstressed length, m (default 0.02, common practice).","$ref":"#/definitions/positive"}}},"report":{"description":"Document data of the printed report and schedule.","type":"object","additionalProperties":false,"properties":{"documentNumber":{"description":"Document number printed in the page header.","type":"string"},"revisions":{"description":"Revision block, oldest first.","type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"description":"Revision mark, e.g. \"A\", \"P01\".","type":"string"},"date":{"description":"Date of the revision (ISO 8601).","type":"string"},"description":{"description":"What changed.","type":"string"},"by":{"description":"Prepared by.","type":"string"},"checkedBy":{"description":"Checked by.","type":"string"}}}}}},"display":{"description":"Display preferences; never affect results.","type":"object","additionalProperties":false,"properties":{"units":{"description":"Display units: SI or US customary.","enum":["SI","US"]},"deformationScale":{"description":"Scale factor on displacements in the 3D view, dimensionless.","$ref":"#/definitions/positive"}}},"casePurpose":{"description":"ultimate: strength checks with factored actions; serviceability: deformation, sag, slack and tension limits, unfactored; accidental: strength with the accidental factors; componentOnly: used inside combinations only, never checked.","enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"},"designBasis":{"description":"Check format and its factors; every default is listed with its source in the design-check report.","type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"description":"limitState: partial factors on actions and resistances; allowable: safety factors on service states.","enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"description":"Name of the basis as printed on reports.","type":"string"},"actionFactors":{"description":"Limit state: partial factors γ_F on actions (unfavourable unless named favourable), dimensionless.","type":"object","additionalProperties":false,"properties":{"permanent":{"description":"γ_G on unfavourable permanent actions, dimensionless.","$ref":"#/definitions/positive"},"permanentFavourable":{"description":"γ_G on favourable permanent actions, dimensionless.","$ref":"#/definitions/positive"},"prestress":{"description":"Factor on the pretension; only 1 is supported (every case starts from the installed pretension).","$ref":"#/definitions/positive"},"wind":{"description":"γ_Q on wind, dimensionless.","$ref":"#/definitions/positive"},"ice":{"description":"γ_Q on ice, dimensionless.","$ref":"#/definitions/positive"},"temperature":{"description":"γ_Q on temperature, dimensionless.","$ref":"#/definitions/positive"},"accidental":{"description":"Factor on accidental actions, dimensionless.","$ref":"#/definitions/positive"}}},"combinationFactors":{"description":"Combination factors ψ0 of accompanying variable actions (both formats), dimensionless.","type":"object","additionalProperties":false,"properties":{"wind":{"description":"ψ0 of wind, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"description":"ψ0 of ice, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"description":"ψ0 of temperature, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"description":"Limit state: cable resistance F_Rd = k_e · MBL / (breakingFactor · γ_R); serviceability T ≤ serviceabilityShare · k_e · MBL.","type":"object","additionalProperties":false,"properties":{"breakingFactor":{"description":"Factor on the minimum breaking load in F_Rd, dimensionless.","$ref":"#/definitions/positive"},"partialFactor":{"description":"Partial factor γ_R of the cable resistance, dimensionless.","$ref":"#/definitions/positive"},"serviceabilityShare":{"description":"Largest service tension as a share of k_e · MBL, dimensionless.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"description":"Limit state: partial factors of steel members, dimensionless.","type":"object","additionalProperties":false,"properties":{"gammaM0":{"description":"γ_M0: resistance of cross-sections (yield), dimensionless.","$ref":"#/definitions/positive"},"gammaM1":{"description":"γ_M1: resistance of members to instability (buckling), dimensionless.","$ref":"#/definitions/positive"}}},"allowable":{"description":"Allowable format: safety factors, dimensionless.","type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"description":"Cable tension ≤ k_e · MBL / cableSafetyFactor.","type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"description":"Member force ≤ resistance (yield or χ · yield) / memberSafetyFactor.","type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}},"panel":{"description":"A loop of three or more nodes bounding a piece of surface that carries area loads; its normal follows the right-hand rule on the node order.","type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"description":"Panel id.","$ref":"#/definitions/id"},"nodes":{"description":"Corner node ids in order around the loop (3 or more, no repeats).","type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"description":"Region name: pressure coefficients may be given per region instead of per panel.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"}}},"pressureCoefficient":{"description":"Pressure coefficient of the panels of one region or of one panel.","type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"description":"A panel region or a panel id.","$ref":"#/definitions/id"},"cp":{"description":"Net pressure coefficient c_p, dimensionless.","type":"number"}}},"areaLoad":{"description":"An area load on panels.","type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"description":"snow: per plan area, downward; cladding: weight per true (sloping) area, downward; pressure: net pressure normal to the deformed panel (a follower load).","enum":["snow","cladding","pressure"]},"value":{"description":"Load per area, Pa; for pressure, positive acts against the panel normal, negative is suction.","type":"number"},"panels":{"description":"Only these panels or regions (default: every panel).","$ref":"#/definitions/idList"},"coefficients":{"description":"Pressure only: c_p per region or panel id (a panel id wins over its region; default c_p = 1).","type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"description":"Patch wind on a guyed mast (EN 1993-3-1 Annex B, B.4.3.2): S = S_m ± √Σ(S_i − S_m)² per result.","type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"description":"Patch wind id; its cases are \"<id> / patch k\", \"<id> max\" and \"<id> min\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"meanCase":{"description":"Load case with the mean wind on the whole structure.","$ref":"#/definitions/id"},"patchFactor":{"description":"Wind force inside a patch as a multiple of the mean wind force there (> 1), dimensionless.","type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"description":"Height ranges of the patches (default: the spans between guy levels).","type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"description":"Bottom of the patch, m above z = 0.","type":"number"},"to":{"description":"Top of the patch, m above z = 0.","type":"number"}}}}}},"memberLoss":{"description":"Sudden loss of members: from the solved state of a case, each member is removed in turn and its released force amplified.","type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"description":"Member loss id; its cases are \"<id> / <member>\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"fromCase":{"description":"Load case or combination whose solved state the loss starts from.","$ref":"#/definitions/id"},"members":{"description":"Members removed, one case each.","$ref":"#/definitions/idList"},"group":{"description":"Or every member of this group in turn.","$ref":"#/definitions/id"},"dynamicFactor":{"description":"Dynamic amplification factor on the released force (1 = static, at most 2), dimensionless; default from dampingRatio.","type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"description":"Critical damping ratio ζ (0 ≤ ζ < 1) for the default factor 1 + exp(−πζ/√(1−ζ²)), dimensionless (default 0: factor 2).","type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}},"windBasis":{"description":"What a wind speed stands for; velocity pressure q = ½ ρ V(z)², wind forces × gustFactor × structuralFactor.","type":"object","additionalProperties":false,"required":["velocity","averagingPeriod"],"properties":{"velocity":{"description":"mean: \"speed\" is a mean wind speed; peak: a gust (peak) speed.","enum":["mean","peak"]},"averagingPeriod":{"description":"Averaging period of the speed, s (600 = 10-minute mean, 3 = 3-second gust).","$ref":"#/definitions/positive"},"gustFactor":{"description":"Factor on the forces from a mean-velocity pressure to a peak pressure, dimensionless (default 1).","$ref":"#/definitions/positive"},"structuralFactor":{"description":"Structural factor (e.g. c_s c_d of EN 1991-1-4 §6) on the forces, dimensionless (default 1).","$ref":"#/definitions/positive"}}},"windDirections":{"description":"Wind from \"count\" directions: the case is solved once per direction azimuth + k · 360°/count.","type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"description":"Id; its cases are \"<id> <direction>°\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"case":{"description":"Load case with wind whose direction is replaced.","$ref":"#/definitions/id"},"count":{"description":"Number of directions (1 to 72).","type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"description":"First direction, degrees, same convention as the wind direction (default 0).","type":"number"}}},"ancillary":{"description":"An item on the structure: point items hang on a node; line items run along a group between two heights.","type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"description":"Ancillary id.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"kind":{"description":"What the item is: antenna, dish, feeder, ladder, platform or other.","enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"description":"Point item: the node it is attached at.","$ref":"#/definitions/id"},"along":{"description":"Line item: the group it runs along and its height range.","type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"from":{"description":"Bottom of the run, m above z = 0.","type":"number"},"to":{"description":"Top of the run, m above z = 0.","type":"number"}}},"dragArea":{"description":"Drag area C_f · A: m² for a point item, m² per metre of height for a line item.","$ref":"#/definitions/nonNegative"},"mass":{"description":"Mass: kg for a point item, kg per metre of height for a line item.","$ref":"#/definitions/nonNegative"},"iceDragArea":{"description":"Drag area added per metre of radial ice, m²/m (line items per metre of height too); default 0: ice ignored.","$ref":"#/definitions/nonNegative"},"iceMass":{"description":"Ice mass per metre of radial ice, kg/m (line items per metre of height too); default 0: ice ignored.","$ref":"#/definitions/nonNegative"}}}}};
+const schema156 = {"description":"Document data of the printed report and schedule.","type":"object","additionalProperties":false,"properties":{"documentNumber":{"description":"Document number printed in the page header.","type":"string"},"revisions":{"description":"Revision block, oldest first.","type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"description":"Revision mark, e.g. \"A\", \"P01\".","type":"string"},"date":{"description":"Date of the revision (ISO 8601).","type":"string"},"description":{"description":"What changed.","type":"string"},"by":{"description":"Prepared by.","type":"string"},"checkedBy":{"description":"Checked by.","type":"string"}}}}}};
 const func2 = Object.prototype.hasOwnProperty;
 const schema12 = {"description":"Project information, printed on the schedule and the report.","type":"object","additionalProperties":false,"properties":{"name":{"description":"Project name.","type":"string"},"site":{"description":"Site (location) of the structure.","type":"string"},"client":{"description":"Client.","type":"string"},"engineer":{"description":"Engineer responsible for the design.","type":"string"},"notes":{"description":"Free notes.","type":"string"},"referenceTemperature":{"description":"Design reference temperature, K: the state the model and its pretensions describe (default 288.15 K = 15 °C).","$ref":"#/definitions/absoluteTemperature"}}};
 const schema13 = {"description":"An absolute temperature, K (above 0; 15 °C = 288.15 K).","type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}};
@@ -4491,7 +4491,7 @@ validate49.errors = vErrors;
 return errors === 0;
 }
 
-const schema98 = {"description":"Pretension tuning settings.","type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"description":"Groups whose pretension the tuner may change, and how.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"by":{"description":"pretension: one force for every member of the group (N); unstressedLength: one factor on the members' unstressed lengths (dimensionless).","enum":["pretension","unstressedLength"]},"min":{"description":"Lower bound: N for \"pretension\", a factor for \"unstressedLength\".","type":"number"},"max":{"description":"Upper bound: N for \"pretension\", a factor for \"unstressedLength\".","type":"number"}}}},"targets":{"description":"Targets the tuned design must meet.","type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"description":"Result of the last tuning run.","type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"description":"Date and time of the run (ISO 8601).","type":"string"},"summary":{"description":"Summary of the run as printed.","type":"string"}}}}};
+const schema98 = {"description":"Pretension tuning settings.","type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"description":"Groups whose pretension the tuner may change, and how.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"by":{"description":"pretension: one force for every member of the group (N); unstressedLength: one factor on the members' unstressed lengths (dimensionless).","enum":["pretension","unstressedLength"]},"min":{"description":"Lower bound: N for \"pretension\", a factor for \"unstressedLength\".","type":"number"},"max":{"description":"Upper bound: N for \"pretension\", a factor for \"unstressedLength\".","type":"number"}}}},"targets":{"description":"Targets the tuned design must meet.","type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"description":"Record of the last tuning run (kept in the project, printed on the schedule).","$ref":"#/definitions/tuningRunRecord"}}};
 const schema100 = {"description":"A tuning target, by \"kind\".","type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"description":"sag: the sag of every member of the group stays within the limit in the case.","const":"sag"},"group":{"description":"Group id.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"},"limit":{"description":"Sag limit.","$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"description":"tensionShare: tension / breaking load at installation (the reference case) equals the share.","const":"tensionShare"},"group":{"description":"Group id.","$ref":"#/definitions/id"},"share":{"description":"Tension as a share of the breaking load, dimensionless (0..1).","$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"description":"noSlack: no member of the group is slack in the case.","const":"noSlack"},"group":{"description":"Group id.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"description":"plumb: the horizontal offset of top relative to base stays within the tolerance in the case.","const":"plumb"},"base":{"description":"Node at the foot of the mast.","$ref":"#/definitions/id"},"top":{"description":"Node at the top of the mast.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"},"tolerance":{"description":"Largest horizontal offset, m.","$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"description":"reaction: the magnitude of the support reaction at the node stays within the limit in the case.","const":"reaction"},"node":{"description":"Support node id.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"},"limit":{"description":"Largest reaction magnitude, N.","type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
 
 function validate56(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
@@ -5250,6 +5250,504 @@ validate56.errors = vErrors;
 return errors === 0;
 }
 
+const schema113 = {"description":"Record of a tuning run: when, outcome, targets and variables.","type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"description":"Date and time of the run (ISO 8601).","type":"string"},"summary":{"description":"Summary of the run as printed.","type":"string"},"status":{"description":"Outcome: all targets met, some unmet, or a case did not converge.","enum":["met","unmet","notConverged"]},"targets":{"description":"Each target at the end of the run.","type":"array","items":{"type":"object","additionalProperties":false,"required":["kind","label","value","limit","unit","sense","met"],"properties":{"kind":{"description":"Target kind.","type":"string"},"label":{"description":"What the target concerns, as printed.","type":"string"},"value":{"description":"Value reached, in the target's unit.","type":"number"},"limit":{"description":"Limit or goal, in the target's unit.","type":"number"},"unit":{"description":"Unit of value and limit: m, N, or a share (dimensionless).","enum":["m","N","share"]},"sense":{"description":"atMost: value ≤ limit; equal: value = goal within tolerance.","enum":["atMost","equal"]},"met":{"description":"True when the target is met.","type":"boolean"},"governing":{"description":"Case or member that governs the value.","type":"string"}}}},"variables":{"description":"Each tuning variable: start and end values.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by","initial","final"],"properties":{"group":{"description":"Group the variable acts on.","$ref":"#/definitions/id"},"by":{"description":"pretension (N) or unstressedLength (factor).","enum":["pretension","unstressedLength"]},"initial":{"description":"Value before the run (N or factor).","type":"number"},"final":{"description":"Value after the run (N or factor).","type":"number"},"atBound":{"description":"The bound the variable ended on, if any.","enum":["lower","upper"]}}}},"diagnosis":{"description":"Why targets were not met, as printed.","type":"array","items":{"type":"string"}}}};
+
+function validate59(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.date === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema113.required,parentSchema:schema113,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.summary === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema113.required,parentSchema:schema113,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((((((key0 === "date") || (key0 === "summary")) || (key0 === "status")) || (key0 === "targets")) || (key0 === "variables")) || (key0 === "diagnosis"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema113,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.date !== undefined){
+let data0 = data.date;
+if(typeof data0 !== "string"){
+const err3 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.date.type,parentSchema:schema113.properties.date,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.summary !== undefined){
+let data1 = data.summary;
+if(typeof data1 !== "string"){
+const err4 = {instancePath:instancePath+"/summary",schemaPath:"#/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.summary.type,parentSchema:schema113.properties.summary,data:data1};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.status !== undefined){
+let data2 = data.status;
+if(!(((data2 === "met") || (data2 === "unmet")) || (data2 === "notConverged"))){
+const err5 = {instancePath:instancePath+"/status",schemaPath:"#/properties/status/enum",keyword:"enum",params:{allowedValues: schema113.properties.status.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.status.enum,parentSchema:schema113.properties.status,data:data2};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.targets !== undefined){
+let data3 = data.targets;
+if(Array.isArray(data3)){
+const len0 = data3.length;
+for(let i0=0; i0<len0; i0++){
+let data4 = data3[i0];
+if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
+if(data4.kind === undefined){
+const err6 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema113.properties.targets.items.required,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+if(data4.label === undefined){
+const err7 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "label"},message:"must have required property '"+"label"+"'",schema:schema113.properties.targets.items.required,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+if(data4.value === undefined){
+const err8 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema113.properties.targets.items.required,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+if(data4.limit === undefined){
+const err9 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema113.properties.targets.items.required,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+if(data4.unit === undefined){
+const err10 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "unit"},message:"must have required property '"+"unit"+"'",schema:schema113.properties.targets.items.required,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+if(data4.sense === undefined){
+const err11 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "sense"},message:"must have required property '"+"sense"+"'",schema:schema113.properties.targets.items.required,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+if(data4.met === undefined){
+const err12 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "met"},message:"must have required property '"+"met"+"'",schema:schema113.properties.targets.items.required,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+for(const key1 in data4){
+if(!((((((((key1 === "kind") || (key1 === "label")) || (key1 === "value")) || (key1 === "limit")) || (key1 === "unit")) || (key1 === "sense")) || (key1 === "met")) || (key1 === "governing"))){
+const err13 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+}
+if(data4.kind !== undefined){
+let data5 = data4.kind;
+if(typeof data5 !== "string"){
+const err14 = {instancePath:instancePath+"/targets/" + i0+"/kind",schemaPath:"#/properties/targets/items/properties/kind/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.targets.items.properties.kind.type,parentSchema:schema113.properties.targets.items.properties.kind,data:data5};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+if(data4.label !== undefined){
+let data6 = data4.label;
+if(typeof data6 !== "string"){
+const err15 = {instancePath:instancePath+"/targets/" + i0+"/label",schemaPath:"#/properties/targets/items/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.targets.items.properties.label.type,parentSchema:schema113.properties.targets.items.properties.label,data:data6};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+if(data4.value !== undefined){
+let data7 = data4.value;
+if(!((typeof data7 == "number") && (isFinite(data7)))){
+const err16 = {instancePath:instancePath+"/targets/" + i0+"/value",schemaPath:"#/properties/targets/items/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema113.properties.targets.items.properties.value.type,parentSchema:schema113.properties.targets.items.properties.value,data:data7};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+}
+if(data4.limit !== undefined){
+let data8 = data4.limit;
+if(!((typeof data8 == "number") && (isFinite(data8)))){
+const err17 = {instancePath:instancePath+"/targets/" + i0+"/limit",schemaPath:"#/properties/targets/items/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema113.properties.targets.items.properties.limit.type,parentSchema:schema113.properties.targets.items.properties.limit,data:data8};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+}
+if(data4.unit !== undefined){
+let data9 = data4.unit;
+if(!(((data9 === "m") || (data9 === "N")) || (data9 === "share"))){
+const err18 = {instancePath:instancePath+"/targets/" + i0+"/unit",schemaPath:"#/properties/targets/items/properties/unit/enum",keyword:"enum",params:{allowedValues: schema113.properties.targets.items.properties.unit.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.targets.items.properties.unit.enum,parentSchema:schema113.properties.targets.items.properties.unit,data:data9};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+}
+if(data4.sense !== undefined){
+let data10 = data4.sense;
+if(!((data10 === "atMost") || (data10 === "equal"))){
+const err19 = {instancePath:instancePath+"/targets/" + i0+"/sense",schemaPath:"#/properties/targets/items/properties/sense/enum",keyword:"enum",params:{allowedValues: schema113.properties.targets.items.properties.sense.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.targets.items.properties.sense.enum,parentSchema:schema113.properties.targets.items.properties.sense,data:data10};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+}
+if(data4.met !== undefined){
+let data11 = data4.met;
+if(typeof data11 !== "boolean"){
+const err20 = {instancePath:instancePath+"/targets/" + i0+"/met",schemaPath:"#/properties/targets/items/properties/met/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema113.properties.targets.items.properties.met.type,parentSchema:schema113.properties.targets.items.properties.met,data:data11};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
+}
+errors++;
+}
+}
+if(data4.governing !== undefined){
+let data12 = data4.governing;
+if(typeof data12 !== "string"){
+const err21 = {instancePath:instancePath+"/targets/" + i0+"/governing",schemaPath:"#/properties/targets/items/properties/governing/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.targets.items.properties.governing.type,parentSchema:schema113.properties.targets.items.properties.governing,data:data12};
+if(vErrors === null){
+vErrors = [err21];
+}
+else {
+vErrors.push(err21);
+}
+errors++;
+}
+}
+}
+else {
+const err22 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.properties.targets.items.type,parentSchema:schema113.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err22];
+}
+else {
+vErrors.push(err22);
+}
+errors++;
+}
+}
+}
+else {
+const err23 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema113.properties.targets.type,parentSchema:schema113.properties.targets,data:data3};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+}
+if(data.variables !== undefined){
+let data13 = data.variables;
+if(Array.isArray(data13)){
+const len1 = data13.length;
+for(let i1=0; i1<len1; i1++){
+let data14 = data13[i1];
+if(data14 && typeof data14 == "object" && !Array.isArray(data14)){
+if(data14.group === undefined){
+const err24 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema113.properties.variables.items.required,parentSchema:schema113.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+if(data14.by === undefined){
+const err25 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema113.properties.variables.items.required,parentSchema:schema113.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+if(data14.initial === undefined){
+const err26 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "initial"},message:"must have required property '"+"initial"+"'",schema:schema113.properties.variables.items.required,parentSchema:schema113.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+if(data14.final === undefined){
+const err27 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "final"},message:"must have required property '"+"final"+"'",schema:schema113.properties.variables.items.required,parentSchema:schema113.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+for(const key2 in data14){
+if(!(((((key2 === "group") || (key2 === "by")) || (key2 === "initial")) || (key2 === "final")) || (key2 === "atBound"))){
+const err28 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema113.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
+}
+errors++;
+}
+}
+if(data14.group !== undefined){
+let data15 = data14.group;
+if(typeof data15 === "string"){
+if(!pattern0.test(data15)){
+const err29 = {instancePath:instancePath+"/variables/" + i1+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data15};
+if(vErrors === null){
+vErrors = [err29];
+}
+else {
+vErrors.push(err29);
+}
+errors++;
+}
+}
+else {
+const err30 = {instancePath:instancePath+"/variables/" + i1+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data15};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+}
+if(data14.by !== undefined){
+let data16 = data14.by;
+if(!((data16 === "pretension") || (data16 === "unstressedLength"))){
+const err31 = {instancePath:instancePath+"/variables/" + i1+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema113.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.variables.items.properties.by.enum,parentSchema:schema113.properties.variables.items.properties.by,data:data16};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+}
+if(data14.initial !== undefined){
+let data17 = data14.initial;
+if(!((typeof data17 == "number") && (isFinite(data17)))){
+const err32 = {instancePath:instancePath+"/variables/" + i1+"/initial",schemaPath:"#/properties/variables/items/properties/initial/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema113.properties.variables.items.properties.initial.type,parentSchema:schema113.properties.variables.items.properties.initial,data:data17};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+if(data14.final !== undefined){
+let data18 = data14.final;
+if(!((typeof data18 == "number") && (isFinite(data18)))){
+const err33 = {instancePath:instancePath+"/variables/" + i1+"/final",schemaPath:"#/properties/variables/items/properties/final/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema113.properties.variables.items.properties.final.type,parentSchema:schema113.properties.variables.items.properties.final,data:data18};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+if(data14.atBound !== undefined){
+let data19 = data14.atBound;
+if(!((data19 === "lower") || (data19 === "upper"))){
+const err34 = {instancePath:instancePath+"/variables/" + i1+"/atBound",schemaPath:"#/properties/variables/items/properties/atBound/enum",keyword:"enum",params:{allowedValues: schema113.properties.variables.items.properties.atBound.enum},message:"must be equal to one of the allowed values",schema:schema113.properties.variables.items.properties.atBound.enum,parentSchema:schema113.properties.variables.items.properties.atBound,data:data19};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+}
+else {
+const err35 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.properties.variables.items.type,parentSchema:schema113.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+}
+}
+else {
+const err36 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema113.properties.variables.type,parentSchema:schema113.properties.variables,data:data13};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+if(data.diagnosis !== undefined){
+let data20 = data.diagnosis;
+if(Array.isArray(data20)){
+const len2 = data20.length;
+for(let i2=0; i2<len2; i2++){
+let data21 = data20[i2];
+if(typeof data21 !== "string"){
+const err37 = {instancePath:instancePath+"/diagnosis/" + i2,schemaPath:"#/properties/diagnosis/items/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema113.properties.diagnosis.items.type,parentSchema:schema113.properties.diagnosis.items,data:data21};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+}
+else {
+const err38 = {instancePath:instancePath+"/diagnosis",schemaPath:"#/properties/diagnosis/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema113.properties.diagnosis.type,parentSchema:schema113.properties.diagnosis,data:data20};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
+}
+errors++;
+}
+}
+}
+else {
+const err39 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.type,parentSchema:schema113,data};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+validate59.errors = vErrors;
+return errors === 0;
+}
+
 
 function validate55(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -5437,10 +5935,14 @@ errors++;
 }
 }
 if(data.lastRun !== undefined){
-let data8 = data.lastRun;
-if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
-if(data8.date === undefined){
-const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema98.properties.lastRun.required,parentSchema:schema98.properties.lastRun,data:data8};
+if(!(validate59(data.lastRun, {instancePath:instancePath+"/lastRun",parentData:data,parentDataProperty:"lastRun",rootData}))){
+vErrors = vErrors === null ? validate59.errors : vErrors.concat(validate59.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err14 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.type,parentSchema:schema98,data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -5449,90 +5951,19 @@ vErrors.push(err14);
 }
 errors++;
 }
-if(data8.summary === undefined){
-const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema98.properties.lastRun.required,parentSchema:schema98.properties.lastRun,data:data8};
-if(vErrors === null){
-vErrors = [err15];
-}
-else {
-vErrors.push(err15);
-}
-errors++;
-}
-for(const key2 in data8){
-if(!((key2 === "date") || (key2 === "summary"))){
-const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema98.properties.lastRun,data:data8};
-if(vErrors === null){
-vErrors = [err16];
-}
-else {
-vErrors.push(err16);
-}
-errors++;
-}
-}
-if(data8.date !== undefined){
-let data9 = data8.date;
-if(typeof data9 !== "string"){
-const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema98.properties.lastRun.properties.date.type,parentSchema:schema98.properties.lastRun.properties.date,data:data9};
-if(vErrors === null){
-vErrors = [err17];
-}
-else {
-vErrors.push(err17);
-}
-errors++;
-}
-}
-if(data8.summary !== undefined){
-let data10 = data8.summary;
-if(typeof data10 !== "string"){
-const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema98.properties.lastRun.properties.summary.type,parentSchema:schema98.properties.lastRun.properties.summary,data:data10};
-if(vErrors === null){
-vErrors = [err18];
-}
-else {
-vErrors.push(err18);
-}
-errors++;
-}
-}
-}
-else {
-const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.properties.lastRun.type,parentSchema:schema98.properties.lastRun,data:data8};
-if(vErrors === null){
-vErrors = [err19];
-}
-else {
-vErrors.push(err19);
-}
-errors++;
-}
-}
-}
-else {
-const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.type,parentSchema:schema98,data};
-if(vErrors === null){
-vErrors = [err20];
-}
-else {
-vErrors.push(err20);
-}
-errors++;
-}
 validate55.errors = vErrors;
 return errors === 0;
 }
 
-const schema113 = {"description":"Installation data settings.","type":"object","additionalProperties":false,"properties":{"temperatures":{"description":"Installation temperatures for the table, K (default −20 °C to +40 °C in 5 °C steps).","type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
+const schema115 = {"description":"Installation data settings.","type":"object","additionalProperties":false,"properties":{"temperatures":{"description":"Installation temperatures for the table, K (default −20 °C to +40 °C in 5 °C steps).","type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
 
-function validate60(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate62(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!(key0 === "temperatures")){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema113,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema115,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5573,7 +6004,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema113.properties.temperatures.type,parentSchema:schema113.properties.temperatures,data:data0};
+const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema115.properties.temperatures.type,parentSchema:schema115.properties.temperatures,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5585,7 +6016,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.type,parentSchema:schema113,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.type,parentSchema:schema115,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -5594,18 +6025,18 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate60.errors = vErrors;
+validate62.errors = vErrors;
 return errors === 0;
 }
 
-const schema115 = {"description":"A record of a generator run, for re-running it.","type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"description":"Generator record id; generated parts carry it as \"generatedBy\" and as an id prefix.","$ref":"#/definitions/id"},"kind":{"description":"Which generator: guyed lattice mast, saddle net or radial net.","enum":["guyedMast","saddleNet","radialNet"]},"params":{"description":"The generator's parameters, in SI units, as its form shows them.","type":"object"}}};
+const schema117 = {"description":"A record of a generator run, for re-running it.","type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"description":"Generator record id; generated parts carry it as \"generatedBy\" and as an id prefix.","$ref":"#/definitions/id"},"kind":{"description":"Which generator: guyed lattice mast, saddle net or radial net.","enum":["guyedMast","saddleNet","radialNet"]},"params":{"description":"The generator's parameters, in SI units, as its form shows them.","type":"object"}}};
 
-function validate62(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate64(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema115.required,parentSchema:schema115,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema117.required,parentSchema:schema117,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5615,7 +6046,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema115.required,parentSchema:schema115,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema117.required,parentSchema:schema117,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5625,7 +6056,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.params === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema115.required,parentSchema:schema115,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema117.required,parentSchema:schema117,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5636,7 +6067,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "kind")) || (key0 === "params"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema115,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema117,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5674,7 +6105,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "guyedMast") || (data1 === "saddleNet")) || (data1 === "radialNet"))){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema115.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema115.properties.kind.enum,parentSchema:schema115.properties.kind,data:data1};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema117.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema117.properties.kind.enum,parentSchema:schema117.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -5687,7 +6118,7 @@ errors++;
 if(data.params !== undefined){
 let data2 = data.params;
 if(!(data2 && typeof data2 == "object" && !Array.isArray(data2))){
-const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.properties.params.type,parentSchema:schema115.properties.params,data:data2};
+const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema117.properties.params.type,parentSchema:schema117.properties.params,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -5699,7 +6130,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.type,parentSchema:schema115,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema117.type,parentSchema:schema117,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -5708,19 +6139,19 @@ vErrors.push(err8);
 }
 errors++;
 }
-validate62.errors = vErrors;
+validate64.errors = vErrors;
 return errors === 0;
 }
 
-const schema117 = {"description":"Display preferences; never affect results.","type":"object","additionalProperties":false,"properties":{"units":{"description":"Display units: SI or US customary.","enum":["SI","US"]},"deformationScale":{"description":"Scale factor on displacements in the 3D view, dimensionless.","$ref":"#/definitions/positive"}}};
+const schema119 = {"description":"Display preferences; never affect results.","type":"object","additionalProperties":false,"properties":{"units":{"description":"Display units: SI or US customary.","enum":["SI","US"]},"deformationScale":{"description":"Scale factor on displacements in the 3D view, dimensionless.","$ref":"#/definitions/positive"}}};
 
-function validate64(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate66(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((key0 === "units") || (key0 === "deformationScale"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema117,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema119,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5733,7 +6164,7 @@ errors++;
 if(data.units !== undefined){
 let data0 = data.units;
 if(!((data0 === "SI") || (data0 === "US"))){
-const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema117.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema117.properties.units.enum,parentSchema:schema117.properties.units,data:data0};
+const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema119.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema119.properties.units.enum,parentSchema:schema119.properties.units,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5770,7 +6201,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema117.type,parentSchema:schema117,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.type,parentSchema:schema119,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -5779,18 +6210,18 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate64.errors = vErrors;
+validate66.errors = vErrors;
 return errors === 0;
 }
 
-const schema119 = {"description":"Check format and its factors; every default is listed with its source in the design-check report.","type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"description":"limitState: partial factors on actions and resistances; allowable: safety factors on service states.","enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"description":"Name of the basis as printed on reports.","type":"string"},"actionFactors":{"description":"Limit state: partial factors γ_F on actions (unfavourable unless named favourable), dimensionless.","type":"object","additionalProperties":false,"properties":{"permanent":{"description":"γ_G on unfavourable permanent actions, dimensionless.","$ref":"#/definitions/positive"},"permanentFavourable":{"description":"γ_G on favourable permanent actions, dimensionless.","$ref":"#/definitions/positive"},"prestress":{"description":"Factor on the pretension; only 1 is supported (every case starts from the installed pretension).","$ref":"#/definitions/positive"},"wind":{"description":"γ_Q on wind, dimensionless.","$ref":"#/definitions/positive"},"ice":{"description":"γ_Q on ice, dimensionless.","$ref":"#/definitions/positive"},"temperature":{"description":"γ_Q on temperature, dimensionless.","$ref":"#/definitions/positive"},"accidental":{"description":"Factor on accidental actions, dimensionless.","$ref":"#/definitions/positive"}}},"combinationFactors":{"description":"Combination factors ψ0 of accompanying variable actions (both formats), dimensionless.","type":"object","additionalProperties":false,"properties":{"wind":{"description":"ψ0 of wind, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"description":"ψ0 of ice, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"description":"ψ0 of temperature, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"description":"Limit state: cable resistance F_Rd = k_e · MBL / (breakingFactor · γ_R); serviceability T ≤ serviceabilityShare · k_e · MBL.","type":"object","additionalProperties":false,"properties":{"breakingFactor":{"description":"Factor on the minimum breaking load in F_Rd, dimensionless.","$ref":"#/definitions/positive"},"partialFactor":{"description":"Partial factor γ_R of the cable resistance, dimensionless.","$ref":"#/definitions/positive"},"serviceabilityShare":{"description":"Largest service tension as a share of k_e · MBL, dimensionless.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"description":"Limit state: partial factors of steel members, dimensionless.","type":"object","additionalProperties":false,"properties":{"gammaM0":{"description":"γ_M0: resistance of cross-sections (yield), dimensionless.","$ref":"#/definitions/positive"},"gammaM1":{"description":"γ_M1: resistance of members to instability (buckling), dimensionless.","$ref":"#/definitions/positive"}}},"allowable":{"description":"Allowable format: safety factors, dimensionless.","type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"description":"Cable tension ≤ k_e · MBL / cableSafetyFactor.","type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"description":"Member force ≤ resistance (yield or χ · yield) / memberSafetyFactor.","type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}};
+const schema121 = {"description":"Check format and its factors; every default is listed with its source in the design-check report.","type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"description":"limitState: partial factors on actions and resistances; allowable: safety factors on service states.","enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"description":"Name of the basis as printed on reports.","type":"string"},"actionFactors":{"description":"Limit state: partial factors γ_F on actions (unfavourable unless named favourable), dimensionless.","type":"object","additionalProperties":false,"properties":{"permanent":{"description":"γ_G on unfavourable permanent actions, dimensionless.","$ref":"#/definitions/positive"},"permanentFavourable":{"description":"γ_G on favourable permanent actions, dimensionless.","$ref":"#/definitions/positive"},"prestress":{"description":"Factor on the pretension; only 1 is supported (every case starts from the installed pretension).","$ref":"#/definitions/positive"},"wind":{"description":"γ_Q on wind, dimensionless.","$ref":"#/definitions/positive"},"ice":{"description":"γ_Q on ice, dimensionless.","$ref":"#/definitions/positive"},"temperature":{"description":"γ_Q on temperature, dimensionless.","$ref":"#/definitions/positive"},"accidental":{"description":"Factor on accidental actions, dimensionless.","$ref":"#/definitions/positive"}}},"combinationFactors":{"description":"Combination factors ψ0 of accompanying variable actions (both formats), dimensionless.","type":"object","additionalProperties":false,"properties":{"wind":{"description":"ψ0 of wind, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"description":"ψ0 of ice, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"description":"ψ0 of temperature, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"description":"Limit state: cable resistance F_Rd = k_e · MBL / (breakingFactor · γ_R); serviceability T ≤ serviceabilityShare · k_e · MBL.","type":"object","additionalProperties":false,"properties":{"breakingFactor":{"description":"Factor on the minimum breaking load in F_Rd, dimensionless.","$ref":"#/definitions/positive"},"partialFactor":{"description":"Partial factor γ_R of the cable resistance, dimensionless.","$ref":"#/definitions/positive"},"serviceabilityShare":{"description":"Largest service tension as a share of k_e · MBL, dimensionless.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"description":"Limit state: partial factors of steel members, dimensionless.","type":"object","additionalProperties":false,"properties":{"gammaM0":{"description":"γ_M0: resistance of cross-sections (yield), dimensionless.","$ref":"#/definitions/positive"},"gammaM1":{"description":"γ_M1: resistance of members to instability (buckling), dimensionless.","$ref":"#/definitions/positive"}}},"allowable":{"description":"Allowable format: safety factors, dimensionless.","type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"description":"Cable tension ≤ k_e · MBL / cableSafetyFactor.","type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"description":"Member force ≤ resistance (yield or χ · yield) / memberSafetyFactor.","type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}};
 
-function validate66(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate68(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.format === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "format"},message:"must have required property '"+"format"+"'",schema:schema119.required,parentSchema:schema119,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "format"},message:"must have required property '"+"format"+"'",schema:schema121.required,parentSchema:schema121,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5801,7 +6232,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "format") || (key0 === "label")) || (key0 === "actionFactors")) || (key0 === "combinationFactors")) || (key0 === "cable")) || (key0 === "steel")) || (key0 === "allowable"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema119,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema121,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5814,7 +6245,7 @@ errors++;
 if(data.format !== undefined){
 let data0 = data.format;
 if(!((data0 === "limitState") || (data0 === "allowable"))){
-const err2 = {instancePath:instancePath+"/format",schemaPath:"#/properties/format/enum",keyword:"enum",params:{allowedValues: schema119.properties.format.enum},message:"must be equal to one of the allowed values",schema:schema119.properties.format.enum,parentSchema:schema119.properties.format,data:data0};
+const err2 = {instancePath:instancePath+"/format",schemaPath:"#/properties/format/enum",keyword:"enum",params:{allowedValues: schema121.properties.format.enum},message:"must be equal to one of the allowed values",schema:schema121.properties.format.enum,parentSchema:schema121.properties.format,data:data0};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5827,7 +6258,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err3 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema119.properties.label.type,parentSchema:schema119.properties.label,data:data1};
+const err3 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema121.properties.label.type,parentSchema:schema121.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5842,7 +6273,7 @@ let data2 = data.actionFactors;
 if(data2 && typeof data2 == "object" && !Array.isArray(data2)){
 for(const key1 in data2){
 if(!(((((((key1 === "permanent") || (key1 === "permanentFavourable")) || (key1 === "prestress")) || (key1 === "wind")) || (key1 === "ice")) || (key1 === "temperature")) || (key1 === "accidental"))){
-const err4 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.actionFactors,data:data2};
+const err4 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema121.properties.actionFactors,data:data2};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -6029,7 +6460,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.actionFactors.type,parentSchema:schema119.properties.actionFactors,data:data2};
+const err19 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema121.properties.actionFactors.type,parentSchema:schema121.properties.actionFactors,data:data2};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -6044,7 +6475,7 @@ let data10 = data.combinationFactors;
 if(data10 && typeof data10 == "object" && !Array.isArray(data10)){
 for(const key2 in data10){
 if(!(((key2 === "wind") || (key2 === "ice")) || (key2 === "temperature"))){
-const err20 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.combinationFactors,data:data10};
+const err20 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema121.properties.combinationFactors,data:data10};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -6058,7 +6489,7 @@ if(data10.wind !== undefined){
 let data11 = data10.wind;
 if((typeof data11 == "number") && (isFinite(data11))){
 if(data11 > 1 || isNaN(data11)){
-const err21 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.combinationFactors.properties.wind,data:data11};
+const err21 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema121.properties.combinationFactors.properties.wind,data:data11};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -6068,7 +6499,7 @@ vErrors.push(err21);
 errors++;
 }
 if(data11 < 0 || isNaN(data11)){
-const err22 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema119.properties.combinationFactors.properties.wind,data:data11};
+const err22 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema121.properties.combinationFactors.properties.wind,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -6079,7 +6510,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.combinationFactors.properties.wind.type,parentSchema:schema119.properties.combinationFactors.properties.wind,data:data11};
+const err23 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema121.properties.combinationFactors.properties.wind.type,parentSchema:schema121.properties.combinationFactors.properties.wind,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -6093,7 +6524,7 @@ if(data10.ice !== undefined){
 let data12 = data10.ice;
 if((typeof data12 == "number") && (isFinite(data12))){
 if(data12 > 1 || isNaN(data12)){
-const err24 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.combinationFactors.properties.ice,data:data12};
+const err24 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema121.properties.combinationFactors.properties.ice,data:data12};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -6103,7 +6534,7 @@ vErrors.push(err24);
 errors++;
 }
 if(data12 < 0 || isNaN(data12)){
-const err25 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema119.properties.combinationFactors.properties.ice,data:data12};
+const err25 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema121.properties.combinationFactors.properties.ice,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -6114,7 +6545,7 @@ errors++;
 }
 }
 else {
-const err26 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.combinationFactors.properties.ice.type,parentSchema:schema119.properties.combinationFactors.properties.ice,data:data12};
+const err26 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema121.properties.combinationFactors.properties.ice.type,parentSchema:schema121.properties.combinationFactors.properties.ice,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -6128,7 +6559,7 @@ if(data10.temperature !== undefined){
 let data13 = data10.temperature;
 if((typeof data13 == "number") && (isFinite(data13))){
 if(data13 > 1 || isNaN(data13)){
-const err27 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.combinationFactors.properties.temperature,data:data13};
+const err27 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema121.properties.combinationFactors.properties.temperature,data:data13};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -6138,7 +6569,7 @@ vErrors.push(err27);
 errors++;
 }
 if(data13 < 0 || isNaN(data13)){
-const err28 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema119.properties.combinationFactors.properties.temperature,data:data13};
+const err28 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema121.properties.combinationFactors.properties.temperature,data:data13};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -6149,7 +6580,7 @@ errors++;
 }
 }
 else {
-const err29 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.combinationFactors.properties.temperature.type,parentSchema:schema119.properties.combinationFactors.properties.temperature,data:data13};
+const err29 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema121.properties.combinationFactors.properties.temperature.type,parentSchema:schema121.properties.combinationFactors.properties.temperature,data:data13};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -6161,7 +6592,7 @@ errors++;
 }
 }
 else {
-const err30 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.combinationFactors.type,parentSchema:schema119.properties.combinationFactors,data:data10};
+const err30 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema121.properties.combinationFactors.type,parentSchema:schema121.properties.combinationFactors,data:data10};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -6176,7 +6607,7 @@ let data14 = data.cable;
 if(data14 && typeof data14 == "object" && !Array.isArray(data14)){
 for(const key3 in data14){
 if(!(((key3 === "breakingFactor") || (key3 === "partialFactor")) || (key3 === "serviceabilityShare"))){
-const err31 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.cable,data:data14};
+const err31 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema121.properties.cable,data:data14};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -6240,7 +6671,7 @@ if(data14.serviceabilityShare !== undefined){
 let data17 = data14.serviceabilityShare;
 if((typeof data17 == "number") && (isFinite(data17))){
 if(data17 > 1 || isNaN(data17)){
-const err36 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.cable.properties.serviceabilityShare,data:data17};
+const err36 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema121.properties.cable.properties.serviceabilityShare,data:data17};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -6250,7 +6681,7 @@ vErrors.push(err36);
 errors++;
 }
 if(data17 <= 0 || isNaN(data17)){
-const err37 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema119.properties.cable.properties.serviceabilityShare,data:data17};
+const err37 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema121.properties.cable.properties.serviceabilityShare,data:data17};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -6261,7 +6692,7 @@ errors++;
 }
 }
 else {
-const err38 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.cable.properties.serviceabilityShare.type,parentSchema:schema119.properties.cable.properties.serviceabilityShare,data:data17};
+const err38 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema121.properties.cable.properties.serviceabilityShare.type,parentSchema:schema121.properties.cable.properties.serviceabilityShare,data:data17};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -6273,7 +6704,7 @@ errors++;
 }
 }
 else {
-const err39 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.cable.type,parentSchema:schema119.properties.cable,data:data14};
+const err39 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema121.properties.cable.type,parentSchema:schema121.properties.cable,data:data14};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -6288,7 +6719,7 @@ let data18 = data.steel;
 if(data18 && typeof data18 == "object" && !Array.isArray(data18)){
 for(const key4 in data18){
 if(!((key4 === "gammaM0") || (key4 === "gammaM1"))){
-const err40 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.steel,data:data18};
+const err40 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema121.properties.steel,data:data18};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -6350,7 +6781,7 @@ errors++;
 }
 }
 else {
-const err45 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.steel.type,parentSchema:schema119.properties.steel,data:data18};
+const err45 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema121.properties.steel.type,parentSchema:schema121.properties.steel,data:data18};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -6365,7 +6796,7 @@ let data21 = data.allowable;
 if(data21 && typeof data21 == "object" && !Array.isArray(data21)){
 for(const key5 in data21){
 if(!((key5 === "cableSafetyFactor") || (key5 === "memberSafetyFactor"))){
-const err46 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.allowable,data:data21};
+const err46 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema121.properties.allowable,data:data21};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -6379,7 +6810,7 @@ if(data21.cableSafetyFactor !== undefined){
 let data22 = data21.cableSafetyFactor;
 if((typeof data22 == "number") && (isFinite(data22))){
 if(data22 < 1 || isNaN(data22)){
-const err47 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema119.properties.allowable.properties.cableSafetyFactor,data:data22};
+const err47 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema121.properties.allowable.properties.cableSafetyFactor,data:data22};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -6390,7 +6821,7 @@ errors++;
 }
 }
 else {
-const err48 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.allowable.properties.cableSafetyFactor.type,parentSchema:schema119.properties.allowable.properties.cableSafetyFactor,data:data22};
+const err48 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema121.properties.allowable.properties.cableSafetyFactor.type,parentSchema:schema121.properties.allowable.properties.cableSafetyFactor,data:data22};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -6404,7 +6835,7 @@ if(data21.memberSafetyFactor !== undefined){
 let data23 = data21.memberSafetyFactor;
 if((typeof data23 == "number") && (isFinite(data23))){
 if(data23 < 1 || isNaN(data23)){
-const err49 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema119.properties.allowable.properties.memberSafetyFactor,data:data23};
+const err49 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema121.properties.allowable.properties.memberSafetyFactor,data:data23};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -6415,7 +6846,7 @@ errors++;
 }
 }
 else {
-const err50 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.allowable.properties.memberSafetyFactor.type,parentSchema:schema119.properties.allowable.properties.memberSafetyFactor,data:data23};
+const err50 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema121.properties.allowable.properties.memberSafetyFactor.type,parentSchema:schema121.properties.allowable.properties.memberSafetyFactor,data:data23};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -6427,7 +6858,7 @@ errors++;
 }
 }
 else {
-const err51 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.allowable.type,parentSchema:schema119.properties.allowable,data:data21};
+const err51 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema121.properties.allowable.type,parentSchema:schema121.properties.allowable,data:data21};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -6439,7 +6870,7 @@ errors++;
 }
 }
 else {
-const err52 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.type,parentSchema:schema119,data};
+const err52 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema121.type,parentSchema:schema121,data};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -6448,20 +6879,20 @@ vErrors.push(err52);
 }
 errors++;
 }
-validate66.errors = vErrors;
+validate68.errors = vErrors;
 return errors === 0;
 }
 
-const schema131 = {"description":"A tensioning sequence for the crew.","type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"description":"Sequence id.","$ref":"#/definitions/id"},"label":{"description":"Name printed on the crew sheet.","type":"string"},"temperature":{"description":"Air temperature on the day of tensioning, K (default: the reference temperature).","$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"description":"Self-weight acts during erection (default true).","type":"boolean"},"steps":{"description":"Ordered steps; members in no step are in place before the first step.","type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"description":"Restraints in place during erection only.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"fixed":{"description":"Restrained translations while in place (letters of \"xyz\").","type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"description":"Number of the step after which the restraint is released (1-based; default: after the last step).","type":"integer","minimum":1}}}},"plumb":{"description":"Mast plumb tolerance during erection.","type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"description":"Node at the foot of the mast.","$ref":"#/definitions/id"},"top":{"description":"Node at the top of the mast.","$ref":"#/definitions/id"},"limit":{"description":"Largest horizontal offset of top over height, dimensionless ratio.","$ref":"#/definitions/positive"}}},"forceTolerance":{"description":"Tolerance band on a force setting, fraction of the value (default 0.05, common practice).","$ref":"#/definitions/positive"},"lengthTolerance":{"description":"Tolerance band on a length setting, m (default 0.005, common practice).","$ref":"#/definitions/positive"}}};
-const pattern39 = new RegExp("^[xyz]{1,3}$", "u");
-const schema134 = {"description":"One step of a tensioning sequence.","type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"description":"Members tensioned together in this step (give \"members\" or \"group\", not both).","$ref":"#/definitions/idList"},"group":{"description":"A group tensioned together in this step.","$ref":"#/definitions/id"},"setBy":{"description":"How the crew sets the members: by a force reading or by a length.","enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"description":"Name of the step on the crew sheet.","type":"string"}}};
+const schema133 = {"description":"A tensioning sequence for the crew.","type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"description":"Sequence id.","$ref":"#/definitions/id"},"label":{"description":"Name printed on the crew sheet.","type":"string"},"temperature":{"description":"Air temperature on the day of tensioning, K (default: the reference temperature).","$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"description":"Self-weight acts during erection (default true).","type":"boolean"},"steps":{"description":"Ordered steps; members in no step are in place before the first step.","type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"description":"Restraints in place during erection only.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"fixed":{"description":"Restrained translations while in place (letters of \"xyz\").","type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"description":"Number of the step after which the restraint is released (1-based; default: after the last step).","type":"integer","minimum":1}}}},"plumb":{"description":"Mast plumb tolerance during erection.","type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"description":"Node at the foot of the mast.","$ref":"#/definitions/id"},"top":{"description":"Node at the top of the mast.","$ref":"#/definitions/id"},"limit":{"description":"Largest horizontal offset of top over height, dimensionless ratio.","$ref":"#/definitions/positive"}}},"forceTolerance":{"description":"Tolerance band on a force setting, fraction of the value (default 0.05, common practice).","$ref":"#/definitions/positive"},"lengthTolerance":{"description":"Tolerance band on a length setting, m (default 0.005, common practice).","$ref":"#/definitions/positive"}}};
+const pattern40 = new RegExp("^[xyz]{1,3}$", "u");
+const schema136 = {"description":"One step of a tensioning sequence.","type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"description":"Members tensioned together in this step (give \"members\" or \"group\", not both).","$ref":"#/definitions/idList"},"group":{"description":"A group tensioned together in this step.","$ref":"#/definitions/id"},"setBy":{"description":"How the crew sets the members: by a force reading or by a length.","enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"description":"Name of the step on the crew sheet.","type":"string"}}};
 
-function validate69(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate71(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.setBy === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema134.required,parentSchema:schema134,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema136.required,parentSchema:schema136,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6472,7 +6903,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "members") || (key0 === "group")) || (key0 === "setBy")) || (key0 === "label"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema134,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema136,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6516,7 +6947,7 @@ errors++;
 if(data.setBy !== undefined){
 let data2 = data.setBy;
 if(!((data2 === "force") || (data2 === "length"))){
-const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema134.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema134.properties.setBy.enum,parentSchema:schema134.properties.setBy,data:data2};
+const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema136.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema136.properties.setBy.enum,parentSchema:schema136.properties.setBy,data:data2};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -6529,7 +6960,7 @@ errors++;
 if(data.label !== undefined){
 let data3 = data.label;
 if(typeof data3 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema134.properties.label.type,parentSchema:schema134.properties.label,data:data3};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema136.properties.label.type,parentSchema:schema136.properties.label,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -6541,7 +6972,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema134.type,parentSchema:schema134,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema136.type,parentSchema:schema136,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -6550,17 +6981,17 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate69.errors = vErrors;
+validate71.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate68(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate70(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema131.required,parentSchema:schema131,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema133.required,parentSchema:schema133,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6570,7 +7001,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.steps === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema131.required,parentSchema:schema131,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema133.required,parentSchema:schema133,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6580,8 +7011,8 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema131.properties, key0))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema131,data};
+if(!(func2.call(schema133.properties, key0))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema133,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -6619,7 +7050,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema131.properties.label.type,parentSchema:schema131.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema133.properties.label.type,parentSchema:schema133.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -6657,7 +7088,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data3 = data.selfWeight;
 if(typeof data3 !== "boolean"){
-const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema131.properties.selfWeight.type,parentSchema:schema131.properties.selfWeight,data:data3};
+const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema133.properties.selfWeight.type,parentSchema:schema133.properties.selfWeight,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -6671,7 +7102,7 @@ if(data.steps !== undefined){
 let data4 = data.steps;
 if(Array.isArray(data4)){
 if(data4.length < 1){
-const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema131.properties.steps,data:data4};
+const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema133.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -6682,14 +7113,14 @@ errors++;
 }
 const len0 = data4.length;
 for(let i0=0; i0<len0; i0++){
-if(!(validate69(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
-vErrors = vErrors === null ? validate69.errors : vErrors.concat(validate69.errors);
+if(!(validate71(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate71.errors : vErrors.concat(validate71.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema131.properties.steps.type,parentSchema:schema131.properties.steps,data:data4};
+const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema133.properties.steps.type,parentSchema:schema133.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -6707,7 +7138,7 @@ for(let i1=0; i1<len1; i1++){
 let data7 = data6[i1];
 if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 if(data7.node === undefined){
-const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema131.properties.temporaryRestraints.items.required,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema133.properties.temporaryRestraints.items.required,parentSchema:schema133.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -6717,7 +7148,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data7.fixed === undefined){
-const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema131.properties.temporaryRestraints.items.required,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema133.properties.temporaryRestraints.items.required,parentSchema:schema133.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -6728,7 +7159,7 @@ errors++;
 }
 for(const key1 in data7){
 if(!(((key1 === "node") || (key1 === "fixed")) || (key1 === "releaseAfterStep"))){
-const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema133.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -6766,8 +7197,8 @@ errors++;
 if(data7.fixed !== undefined){
 let data9 = data7.fixed;
 if(typeof data9 === "string"){
-if(!pattern39.test(data9)){
-const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema131.properties.temporaryRestraints.items.properties.fixed,data:data9};
+if(!pattern40.test(data9)){
+const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema133.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -6778,7 +7209,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema131.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema131.properties.temporaryRestraints.items.properties.fixed,data:data9};
+const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema133.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema133.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -6791,7 +7222,7 @@ errors++;
 if(data7.releaseAfterStep !== undefined){
 let data10 = data7.releaseAfterStep;
 if(!(((typeof data10 == "number") && (!(data10 % 1) && !isNaN(data10))) && (isFinite(data10)))){
-const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema131.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema131.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema133.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema133.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -6802,7 +7233,7 @@ errors++;
 }
 if((typeof data10 == "number") && (isFinite(data10))){
 if(data10 < 1 || isNaN(data10)){
-const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema131.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema133.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -6815,7 +7246,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.properties.temporaryRestraints.items.type,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema133.properties.temporaryRestraints.items.type,parentSchema:schema133.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -6827,7 +7258,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema131.properties.temporaryRestraints.type,parentSchema:schema131.properties.temporaryRestraints,data:data6};
+const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema133.properties.temporaryRestraints.type,parentSchema:schema133.properties.temporaryRestraints,data:data6};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -6841,7 +7272,7 @@ if(data.plumb !== undefined){
 let data11 = data.plumb;
 if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
 if(data11.base === undefined){
-const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema131.properties.plumb.required,parentSchema:schema131.properties.plumb,data:data11};
+const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema133.properties.plumb.required,parentSchema:schema133.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -6851,7 +7282,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data11.top === undefined){
-const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema131.properties.plumb.required,parentSchema:schema131.properties.plumb,data:data11};
+const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema133.properties.plumb.required,parentSchema:schema133.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -6861,7 +7292,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data11.limit === undefined){
-const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema131.properties.plumb.required,parentSchema:schema131.properties.plumb,data:data11};
+const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema133.properties.plumb.required,parentSchema:schema133.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -6872,7 +7303,7 @@ errors++;
 }
 for(const key2 in data11){
 if(!(((key2 === "base") || (key2 === "top")) || (key2 === "limit"))){
-const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema131.properties.plumb,data:data11};
+const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema133.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -6959,7 +7390,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.properties.plumb.type,parentSchema:schema131.properties.plumb,data:data11};
+const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema133.properties.plumb.type,parentSchema:schema133.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -7021,7 +7452,7 @@ errors++;
 }
 }
 else {
-const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.type,parentSchema:schema131,data};
+const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema133.type,parentSchema:schema133,data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -7030,18 +7461,18 @@ vErrors.push(err37);
 }
 errors++;
 }
-validate68.errors = vErrors;
+validate70.errors = vErrors;
 return errors === 0;
 }
 
-const schema142 = {"description":"Readings taken on site on one occasion.","type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"description":"Measurement set id.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"date":{"description":"Date of the measurements (ISO 8601).","type":"string"},"tensions":{"description":"Tension readings.","type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"description":"Member id.","$ref":"#/definitions/id"},"method":{"description":"How the tension was read: dynamometer, vibration frequency or sag.","enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"description":"The reading: dynamometer tension at the lower end, N; frequency, Hz; largest vertical sag, m.","$ref":"#/definitions/positive"},"accuracy":{"description":"Standard uncertainty of the reading as a fraction of the value, dimensionless (0.03 = 3 %).","$ref":"#/definitions/positive"},"temperature":{"description":"Air temperature at the measurement, K.","$ref":"#/definitions/absoluteTemperature"},"mode":{"description":"Frequency readings: which mode was measured (default the taut-string mode).","enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"description":"Surveyed node positions.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"at":{"description":"Measured position [x, y, z], m.","$ref":"#/definitions/vec3"},"accuracy":{"description":"Standard uncertainty of each horizontal coordinate, m.","$ref":"#/definitions/positive"},"temperature":{"description":"Air temperature at the survey, K.","$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"description":"Acceptance band on the tension at the reference state, fraction of the design tension (default 0.1, common practice).","$ref":"#/definitions/positive"},"lengthUncertainty":{"description":"Prior uncertainty of each cable's unstressed length, m (default 0.02, common practice).","$ref":"#/definitions/positive"}}};
+const schema144 = {"description":"Readings taken on site on one occasion.","type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"description":"Measurement set id.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"date":{"description":"Date of the measurements (ISO 8601).","type":"string"},"tensions":{"description":"Tension readings.","type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"description":"Member id.","$ref":"#/definitions/id"},"method":{"description":"How the tension was read: dynamometer, vibration frequency or sag.","enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"description":"The reading: dynamometer tension at the lower end, N; frequency, Hz; largest vertical sag, m.","$ref":"#/definitions/positive"},"accuracy":{"description":"Standard uncertainty of the reading as a fraction of the value, dimensionless (0.03 = 3 %).","$ref":"#/definitions/positive"},"temperature":{"description":"Air temperature at the measurement, K.","$ref":"#/definitions/absoluteTemperature"},"mode":{"description":"Frequency readings: which mode was measured (default the taut-string mode).","enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"description":"Surveyed node positions.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"at":{"description":"Measured position [x, y, z], m.","$ref":"#/definitions/vec3"},"accuracy":{"description":"Standard uncertainty of each horizontal coordinate, m.","$ref":"#/definitions/positive"},"temperature":{"description":"Air temperature at the survey, K.","$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"description":"Acceptance band on the tension at the reference state, fraction of the design tension (default 0.1, common practice).","$ref":"#/definitions/positive"},"lengthUncertainty":{"description":"Prior uncertainty of each cable's unstressed length, m (default 0.02, common practice).","$ref":"#/definitions/positive"}}};
 
-function validate73(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema142.required,parentSchema:schema142,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema144.required,parentSchema:schema144,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -7051,7 +7482,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.tensions === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema142.required,parentSchema:schema142,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema144.required,parentSchema:schema144,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -7062,7 +7493,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "date")) || (key0 === "tensions")) || (key0 === "positions")) || (key0 === "tolerance")) || (key0 === "lengthUncertainty"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema142,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema144,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -7100,7 +7531,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema142.properties.label.type,parentSchema:schema142.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema144.properties.label.type,parentSchema:schema144.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -7113,7 +7544,7 @@ errors++;
 if(data.date !== undefined){
 let data2 = data.date;
 if(typeof data2 !== "string"){
-const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema142.properties.date.type,parentSchema:schema142.properties.date,data:data2};
+const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema144.properties.date.type,parentSchema:schema144.properties.date,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -7131,7 +7562,7 @@ for(let i0=0; i0<len0; i0++){
 let data4 = data3[i0];
 if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
 if(data4.member === undefined){
-const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema144.properties.tensions.items.required,parentSchema:schema144.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -7141,7 +7572,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data4.method === undefined){
-const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema144.properties.tensions.items.required,parentSchema:schema144.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -7151,7 +7582,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data4.value === undefined){
-const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema144.properties.tensions.items.required,parentSchema:schema144.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -7161,7 +7592,7 @@ vErrors.push(err9);
 errors++;
 }
 if(data4.accuracy === undefined){
-const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema144.properties.tensions.items.required,parentSchema:schema144.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -7171,7 +7602,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data4.temperature === undefined){
-const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema144.properties.tensions.items.required,parentSchema:schema144.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -7182,7 +7613,7 @@ errors++;
 }
 for(const key1 in data4){
 if(!((((((key1 === "member") || (key1 === "method")) || (key1 === "value")) || (key1 === "accuracy")) || (key1 === "temperature")) || (key1 === "mode"))){
-const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema142.properties.tensions.items,data:data4};
+const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema144.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -7220,7 +7651,7 @@ errors++;
 if(data4.method !== undefined){
 let data6 = data4.method;
 if(!(((data6 === "dynamometer") || (data6 === "frequency")) || (data6 === "sag"))){
-const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema142.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema142.properties.tensions.items.properties.method.enum,parentSchema:schema142.properties.tensions.items.properties.method,data:data6};
+const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema144.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema144.properties.tensions.items.properties.method.enum,parentSchema:schema144.properties.tensions.items.properties.method,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -7308,7 +7739,7 @@ errors++;
 if(data4.mode !== undefined){
 let data10 = data4.mode;
 if(!((((data10 === "tautString") || (data10 === "inPlaneSymmetric")) || (data10 === "inPlaneAntisymmetric")) || (data10 === "lowestInPlane"))){
-const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema142.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema142.properties.tensions.items.properties.mode.enum,parentSchema:schema142.properties.tensions.items.properties.mode,data:data10};
+const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema144.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema144.properties.tensions.items.properties.mode.enum,parentSchema:schema144.properties.tensions.items.properties.mode,data:data10};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -7320,7 +7751,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema142.properties.tensions.items.type,parentSchema:schema142.properties.tensions.items,data:data4};
+const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema144.properties.tensions.items.type,parentSchema:schema144.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -7332,7 +7763,7 @@ errors++;
 }
 }
 else {
-const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema142.properties.tensions.type,parentSchema:schema142.properties.tensions,data:data3};
+const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema144.properties.tensions.type,parentSchema:schema144.properties.tensions,data:data3};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -7350,7 +7781,7 @@ for(let i1=0; i1<len1; i1++){
 let data12 = data11[i1];
 if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
 if(data12.node === undefined){
-const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema144.properties.positions.items.required,parentSchema:schema144.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -7360,7 +7791,7 @@ vErrors.push(err25);
 errors++;
 }
 if(data12.at === undefined){
-const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema144.properties.positions.items.required,parentSchema:schema144.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -7370,7 +7801,7 @@ vErrors.push(err26);
 errors++;
 }
 if(data12.accuracy === undefined){
-const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema144.properties.positions.items.required,parentSchema:schema144.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -7380,7 +7811,7 @@ vErrors.push(err27);
 errors++;
 }
 if(data12.temperature === undefined){
-const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema144.properties.positions.items.required,parentSchema:schema144.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -7391,7 +7822,7 @@ errors++;
 }
 for(const key2 in data12){
 if(!((((key2 === "node") || (key2 === "at")) || (key2 === "accuracy")) || (key2 === "temperature"))){
-const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema142.properties.positions.items,data:data12};
+const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema144.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -7527,7 +7958,7 @@ errors++;
 }
 }
 else {
-const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema142.properties.positions.items.type,parentSchema:schema142.properties.positions.items,data:data12};
+const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema144.properties.positions.items.type,parentSchema:schema144.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -7539,7 +7970,7 @@ errors++;
 }
 }
 else {
-const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema142.properties.positions.type,parentSchema:schema142.properties.positions,data:data11};
+const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema144.properties.positions.type,parentSchema:schema144.properties.positions,data:data11};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -7601,7 +8032,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema142.type,parentSchema:schema142,data};
+const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema144.type,parentSchema:schema144,data};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -7610,18 +8041,18 @@ vErrors.push(err46);
 }
 errors++;
 }
-validate73.errors = vErrors;
+validate75.errors = vErrors;
 return errors === 0;
 }
 
-const schema155 = {"description":"A loop of three or more nodes bounding a piece of surface that carries area loads; its normal follows the right-hand rule on the node order.","type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"description":"Panel id.","$ref":"#/definitions/id"},"nodes":{"description":"Corner node ids in order around the loop (3 or more, no repeats).","type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"description":"Region name: pressure coefficients may be given per region instead of per panel.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"}}};
+const schema157 = {"description":"A loop of three or more nodes bounding a piece of surface that carries area loads; its normal follows the right-hand rule on the node order.","type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"description":"Panel id.","$ref":"#/definitions/id"},"nodes":{"description":"Corner node ids in order around the loop (3 or more, no repeats).","type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"description":"Region name: pressure coefficients may be given per region instead of per panel.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"}}};
 
-function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate77(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema155.required,parentSchema:schema155,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema157.required,parentSchema:schema157,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -7631,7 +8062,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.nodes === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema155.required,parentSchema:schema155,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema157.required,parentSchema:schema157,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -7642,7 +8073,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "id") || (key0 === "nodes")) || (key0 === "region")) || (key0 === "label"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema155,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema157,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -7681,7 +8112,7 @@ if(data.nodes !== undefined){
 let data1 = data.nodes;
 if(Array.isArray(data1)){
 if(data1.length < 3){
-const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema155.properties.nodes,data:data1};
+const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema157.properties.nodes,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -7718,7 +8149,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema155.properties.nodes.type,parentSchema:schema155.properties.nodes,data:data1};
+const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema157.properties.nodes.type,parentSchema:schema157.properties.nodes,data:data1};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -7756,7 +8187,7 @@ errors++;
 if(data.label !== undefined){
 let data4 = data.label;
 if(typeof data4 !== "string"){
-const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema155.properties.label.type,parentSchema:schema155.properties.label,data:data4};
+const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema157.properties.label.type,parentSchema:schema157.properties.label,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -7768,7 +8199,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema155.type,parentSchema:schema155,data};
+const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema157.type,parentSchema:schema157,data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -7777,18 +8208,18 @@ vErrors.push(err12);
 }
 errors++;
 }
-validate75.errors = vErrors;
+validate77.errors = vErrors;
 return errors === 0;
 }
 
-const schema159 = {"description":"Patch wind on a guyed mast (EN 1993-3-1 Annex B, B.4.3.2): S = S_m ± √Σ(S_i − S_m)² per result.","type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"description":"Patch wind id; its cases are \"<id> / patch k\", \"<id> max\" and \"<id> min\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"meanCase":{"description":"Load case with the mean wind on the whole structure.","$ref":"#/definitions/id"},"patchFactor":{"description":"Wind force inside a patch as a multiple of the mean wind force there (> 1), dimensionless.","type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"description":"Height ranges of the patches (default: the spans between guy levels).","type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"description":"Bottom of the patch, m above z = 0.","type":"number"},"to":{"description":"Top of the patch, m above z = 0.","type":"number"}}}}}};
+const schema161 = {"description":"Patch wind on a guyed mast (EN 1993-3-1 Annex B, B.4.3.2): S = S_m ± √Σ(S_i − S_m)² per result.","type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"description":"Patch wind id; its cases are \"<id> / patch k\", \"<id> max\" and \"<id> min\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"meanCase":{"description":"Load case with the mean wind on the whole structure.","$ref":"#/definitions/id"},"patchFactor":{"description":"Wind force inside a patch as a multiple of the mean wind force there (> 1), dimensionless.","type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"description":"Height ranges of the patches (default: the spans between guy levels).","type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"description":"Bottom of the patch, m above z = 0.","type":"number"},"to":{"description":"Top of the patch, m above z = 0.","type":"number"}}}}}};
 
-function validate77(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate79(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema159.required,parentSchema:schema159,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema161.required,parentSchema:schema161,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -7798,7 +8229,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.meanCase === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema159.required,parentSchema:schema159,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema161.required,parentSchema:schema161,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -7808,7 +8239,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.patchFactor === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema159.required,parentSchema:schema159,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema161.required,parentSchema:schema161,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -7819,7 +8250,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "id") || (key0 === "label")) || (key0 === "meanCase")) || (key0 === "patchFactor")) || (key0 === "patches"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema159,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema161,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -7857,7 +8288,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema159.properties.label.type,parentSchema:schema159.properties.label,data:data1};
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema161.properties.label.type,parentSchema:schema161.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -7896,7 +8327,7 @@ if(data.patchFactor !== undefined){
 let data3 = data.patchFactor;
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 <= 1 || isNaN(data3)){
-const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema159.properties.patchFactor,data:data3};
+const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema161.properties.patchFactor,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -7907,7 +8338,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema159.properties.patchFactor.type,parentSchema:schema159.properties.patchFactor,data:data3};
+const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema161.properties.patchFactor.type,parentSchema:schema161.properties.patchFactor,data:data3};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -7921,7 +8352,7 @@ if(data.patches !== undefined){
 let data4 = data.patches;
 if(Array.isArray(data4)){
 if(data4.length < 1){
-const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema159.properties.patches,data:data4};
+const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema161.properties.patches,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -7935,7 +8366,7 @@ for(let i0=0; i0<len0; i0++){
 let data5 = data4[i0];
 if(data5 && typeof data5 == "object" && !Array.isArray(data5)){
 if(data5.from === undefined){
-const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema159.properties.patches.items.required,parentSchema:schema159.properties.patches.items,data:data5};
+const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema161.properties.patches.items.required,parentSchema:schema161.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -7945,7 +8376,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data5.to === undefined){
-const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema159.properties.patches.items.required,parentSchema:schema159.properties.patches.items,data:data5};
+const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema161.properties.patches.items.required,parentSchema:schema161.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -7956,7 +8387,7 @@ errors++;
 }
 for(const key1 in data5){
 if(!((key1 === "from") || (key1 === "to"))){
-const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema159.properties.patches.items,data:data5};
+const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema161.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -7969,7 +8400,7 @@ errors++;
 if(data5.from !== undefined){
 let data6 = data5.from;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema159.properties.patches.items.properties.from.type,parentSchema:schema159.properties.patches.items.properties.from,data:data6};
+const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema161.properties.patches.items.properties.from.type,parentSchema:schema161.properties.patches.items.properties.from,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -7982,7 +8413,7 @@ errors++;
 if(data5.to !== undefined){
 let data7 = data5.to;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema159.properties.patches.items.properties.to.type,parentSchema:schema159.properties.patches.items.properties.to,data:data7};
+const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema161.properties.patches.items.properties.to.type,parentSchema:schema161.properties.patches.items.properties.to,data:data7};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -7994,7 +8425,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema159.properties.patches.items.type,parentSchema:schema159.properties.patches.items,data:data5};
+const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema161.properties.patches.items.type,parentSchema:schema161.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -8006,7 +8437,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema159.properties.patches.type,parentSchema:schema159.properties.patches,data:data4};
+const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema161.properties.patches.type,parentSchema:schema161.properties.patches,data:data4};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -8018,7 +8449,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema159.type,parentSchema:schema159,data};
+const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema161.type,parentSchema:schema161,data};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -8027,18 +8458,18 @@ vErrors.push(err19);
 }
 errors++;
 }
-validate77.errors = vErrors;
+validate79.errors = vErrors;
 return errors === 0;
 }
 
-const schema162 = {"description":"Sudden loss of members: from the solved state of a case, each member is removed in turn and its released force amplified.","type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"description":"Member loss id; its cases are \"<id> / <member>\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"fromCase":{"description":"Load case or combination whose solved state the loss starts from.","$ref":"#/definitions/id"},"members":{"description":"Members removed, one case each.","$ref":"#/definitions/idList"},"group":{"description":"Or every member of this group in turn.","$ref":"#/definitions/id"},"dynamicFactor":{"description":"Dynamic amplification factor on the released force (1 = static, at most 2), dimensionless; default from dampingRatio.","type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"description":"Critical damping ratio ζ (0 ≤ ζ < 1) for the default factor 1 + exp(−πζ/√(1−ζ²)), dimensionless (default 0: factor 2).","type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
+const schema164 = {"description":"Sudden loss of members: from the solved state of a case, each member is removed in turn and its released force amplified.","type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"description":"Member loss id; its cases are \"<id> / <member>\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"fromCase":{"description":"Load case or combination whose solved state the loss starts from.","$ref":"#/definitions/id"},"members":{"description":"Members removed, one case each.","$ref":"#/definitions/idList"},"group":{"description":"Or every member of this group in turn.","$ref":"#/definitions/id"},"dynamicFactor":{"description":"Dynamic amplification factor on the released force (1 = static, at most 2), dimensionless; default from dampingRatio.","type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"description":"Critical damping ratio ζ (0 ≤ ζ < 1) for the default factor 1 + exp(−πζ/√(1−ζ²)), dimensionless (default 0: factor 2).","type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
 
-function validate79(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate81(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema162.required,parentSchema:schema162,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema164.required,parentSchema:schema164,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -8048,7 +8479,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.fromCase === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema162.required,parentSchema:schema162,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema164.required,parentSchema:schema164,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -8059,7 +8490,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "fromCase")) || (key0 === "members")) || (key0 === "group")) || (key0 === "dynamicFactor")) || (key0 === "dampingRatio"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema162,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema164,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -8097,7 +8528,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema162.properties.label.type,parentSchema:schema162.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema164.properties.label.type,parentSchema:schema164.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -8167,7 +8598,7 @@ if(data.dynamicFactor !== undefined){
 let data5 = data.dynamicFactor;
 if((typeof data5 == "number") && (isFinite(data5))){
 if(data5 > 2 || isNaN(data5)){
-const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema162.properties.dynamicFactor,data:data5};
+const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema164.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -8177,7 +8608,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data5 < 1 || isNaN(data5)){
-const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema162.properties.dynamicFactor,data:data5};
+const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema164.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -8188,7 +8619,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema162.properties.dynamicFactor.type,parentSchema:schema162.properties.dynamicFactor,data:data5};
+const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema164.properties.dynamicFactor.type,parentSchema:schema164.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -8202,7 +8633,7 @@ if(data.dampingRatio !== undefined){
 let data6 = data.dampingRatio;
 if((typeof data6 == "number") && (isFinite(data6))){
 if(data6 < 0 || isNaN(data6)){
-const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema162.properties.dampingRatio,data:data6};
+const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema164.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -8212,7 +8643,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data6 >= 1 || isNaN(data6)){
-const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema162.properties.dampingRatio,data:data6};
+const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema164.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -8223,7 +8654,7 @@ errors++;
 }
 }
 else {
-const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema162.properties.dampingRatio.type,parentSchema:schema162.properties.dampingRatio,data:data6};
+const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema164.properties.dampingRatio.type,parentSchema:schema164.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -8235,7 +8666,7 @@ errors++;
 }
 }
 else {
-const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema162.type,parentSchema:schema162,data};
+const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema164.type,parentSchema:schema164,data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -8244,18 +8675,18 @@ vErrors.push(err16);
 }
 errors++;
 }
-validate79.errors = vErrors;
+validate81.errors = vErrors;
 return errors === 0;
 }
 
-const schema166 = {"description":"Wind from \"count\" directions: the case is solved once per direction azimuth + k · 360°/count.","type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"description":"Id; its cases are \"<id> <direction>°\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"case":{"description":"Load case with wind whose direction is replaced.","$ref":"#/definitions/id"},"count":{"description":"Number of directions (1 to 72).","type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"description":"First direction, degrees, same convention as the wind direction (default 0).","type":"number"}}};
+const schema168 = {"description":"Wind from \"count\" directions: the case is solved once per direction azimuth + k · 360°/count.","type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"description":"Id; its cases are \"<id> <direction>°\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"case":{"description":"Load case with wind whose direction is replaced.","$ref":"#/definitions/id"},"count":{"description":"Number of directions (1 to 72).","type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"description":"First direction, degrees, same convention as the wind direction (default 0).","type":"number"}}};
 
-function validate82(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate84(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema166.required,parentSchema:schema166,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema168.required,parentSchema:schema168,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -8265,7 +8696,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.case === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema166.required,parentSchema:schema166,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema168.required,parentSchema:schema168,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -8275,7 +8706,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.count === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema166.required,parentSchema:schema166,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema168.required,parentSchema:schema168,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -8286,7 +8717,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "id") || (key0 === "label")) || (key0 === "case")) || (key0 === "count")) || (key0 === "azimuth"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema166,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema168,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -8324,7 +8755,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema166.properties.label.type,parentSchema:schema166.properties.label,data:data1};
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema168.properties.label.type,parentSchema:schema168.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -8362,7 +8793,7 @@ errors++;
 if(data.count !== undefined){
 let data3 = data.count;
 if(!(((typeof data3 == "number") && (!(data3 % 1) && !isNaN(data3))) && (isFinite(data3)))){
-const err9 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema166.properties.count.type,parentSchema:schema166.properties.count,data:data3};
+const err9 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema168.properties.count.type,parentSchema:schema168.properties.count,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -8373,7 +8804,7 @@ errors++;
 }
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 > 72 || isNaN(data3)){
-const err10 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 72},message:"must be <= 72",schema:72,parentSchema:schema166.properties.count,data:data3};
+const err10 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 72},message:"must be <= 72",schema:72,parentSchema:schema168.properties.count,data:data3};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -8383,7 +8814,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data3 < 1 || isNaN(data3)){
-const err11 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema166.properties.count,data:data3};
+const err11 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema168.properties.count,data:data3};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -8397,7 +8828,7 @@ errors++;
 if(data.azimuth !== undefined){
 let data4 = data.azimuth;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err12 = {instancePath:instancePath+"/azimuth",schemaPath:"#/properties/azimuth/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema166.properties.azimuth.type,parentSchema:schema166.properties.azimuth,data:data4};
+const err12 = {instancePath:instancePath+"/azimuth",schemaPath:"#/properties/azimuth/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema168.properties.azimuth.type,parentSchema:schema168.properties.azimuth,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -8409,7 +8840,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema166.type,parentSchema:schema166,data};
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema168.type,parentSchema:schema168,data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -8418,18 +8849,18 @@ vErrors.push(err13);
 }
 errors++;
 }
-validate82.errors = vErrors;
+validate84.errors = vErrors;
 return errors === 0;
 }
 
-const schema169 = {"description":"An item on the structure: point items hang on a node; line items run along a group between two heights.","type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"description":"Ancillary id.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"kind":{"description":"What the item is: antenna, dish, feeder, ladder, platform or other.","enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"description":"Point item: the node it is attached at.","$ref":"#/definitions/id"},"along":{"description":"Line item: the group it runs along and its height range.","type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"from":{"description":"Bottom of the run, m above z = 0.","type":"number"},"to":{"description":"Top of the run, m above z = 0.","type":"number"}}},"dragArea":{"description":"Drag area C_f · A: m² for a point item, m² per metre of height for a line item.","$ref":"#/definitions/nonNegative"},"mass":{"description":"Mass: kg for a point item, kg per metre of height for a line item.","$ref":"#/definitions/nonNegative"},"iceDragArea":{"description":"Drag area added per metre of radial ice, m²/m (line items per metre of height too); default 0: ice ignored.","$ref":"#/definitions/nonNegative"},"iceMass":{"description":"Ice mass per metre of radial ice, kg/m (line items per metre of height too); default 0: ice ignored.","$ref":"#/definitions/nonNegative"}}};
+const schema171 = {"description":"An item on the structure: point items hang on a node; line items run along a group between two heights.","type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"description":"Ancillary id.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"kind":{"description":"What the item is: antenna, dish, feeder, ladder, platform or other.","enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"description":"Point item: the node it is attached at.","$ref":"#/definitions/id"},"along":{"description":"Line item: the group it runs along and its height range.","type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"from":{"description":"Bottom of the run, m above z = 0.","type":"number"},"to":{"description":"Top of the run, m above z = 0.","type":"number"}}},"dragArea":{"description":"Drag area C_f · A: m² for a point item, m² per metre of height for a line item.","$ref":"#/definitions/nonNegative"},"mass":{"description":"Mass: kg for a point item, kg per metre of height for a line item.","$ref":"#/definitions/nonNegative"},"iceDragArea":{"description":"Drag area added per metre of radial ice, m²/m (line items per metre of height too); default 0: ice ignored.","$ref":"#/definitions/nonNegative"},"iceMass":{"description":"Ice mass per metre of radial ice, kg/m (line items per metre of height too); default 0: ice ignored.","$ref":"#/definitions/nonNegative"}}};
 
-function validate84(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate86(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema171.required,parentSchema:schema171,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -8439,7 +8870,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema171.required,parentSchema:schema171,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -8449,7 +8880,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.dragArea === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "dragArea"},message:"must have required property '"+"dragArea"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "dragArea"},message:"must have required property '"+"dragArea"+"'",schema:schema171.required,parentSchema:schema171,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -8459,7 +8890,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.mass === undefined){
-const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "mass"},message:"must have required property '"+"mass"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "mass"},message:"must have required property '"+"mass"+"'",schema:schema171.required,parentSchema:schema171,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -8469,8 +8900,8 @@ vErrors.push(err3);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema169.properties, key0))){
-const err4 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema169,data};
+if(!(func2.call(schema171.properties, key0))){
+const err4 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema171,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -8508,7 +8939,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err7 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema169.properties.label.type,parentSchema:schema169.properties.label,data:data1};
+const err7 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema171.properties.label.type,parentSchema:schema171.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -8521,7 +8952,7 @@ errors++;
 if(data.kind !== undefined){
 let data2 = data.kind;
 if(!((((((data2 === "antenna") || (data2 === "dish")) || (data2 === "feeder")) || (data2 === "ladder")) || (data2 === "platform")) || (data2 === "other"))){
-const err8 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema169.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema169.properties.kind.enum,parentSchema:schema169.properties.kind,data:data2};
+const err8 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema171.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema171.properties.kind.enum,parentSchema:schema171.properties.kind,data:data2};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -8560,7 +8991,7 @@ if(data.along !== undefined){
 let data4 = data.along;
 if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
 if(data4.group === undefined){
-const err11 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema169.properties.along.required,parentSchema:schema169.properties.along,data:data4};
+const err11 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema171.properties.along.required,parentSchema:schema171.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -8570,7 +9001,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data4.from === undefined){
-const err12 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema169.properties.along.required,parentSchema:schema169.properties.along,data:data4};
+const err12 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema171.properties.along.required,parentSchema:schema171.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -8580,7 +9011,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data4.to === undefined){
-const err13 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema169.properties.along.required,parentSchema:schema169.properties.along,data:data4};
+const err13 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema171.properties.along.required,parentSchema:schema171.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -8591,7 +9022,7 @@ errors++;
 }
 for(const key1 in data4){
 if(!(((key1 === "group") || (key1 === "from")) || (key1 === "to"))){
-const err14 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema169.properties.along,data:data4};
+const err14 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema171.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -8629,7 +9060,7 @@ errors++;
 if(data4.from !== undefined){
 let data6 = data4.from;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err17 = {instancePath:instancePath+"/along/from",schemaPath:"#/properties/along/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema169.properties.along.properties.from.type,parentSchema:schema169.properties.along.properties.from,data:data6};
+const err17 = {instancePath:instancePath+"/along/from",schemaPath:"#/properties/along/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema171.properties.along.properties.from.type,parentSchema:schema171.properties.along.properties.from,data:data6};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -8642,7 +9073,7 @@ errors++;
 if(data4.to !== undefined){
 let data7 = data4.to;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err18 = {instancePath:instancePath+"/along/to",schemaPath:"#/properties/along/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema169.properties.along.properties.to.type,parentSchema:schema169.properties.along.properties.to,data:data7};
+const err18 = {instancePath:instancePath+"/along/to",schemaPath:"#/properties/along/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema171.properties.along.properties.to.type,parentSchema:schema171.properties.along.properties.to,data:data7};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -8654,7 +9085,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema169.properties.along.type,parentSchema:schema169.properties.along,data:data4};
+const err19 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema171.properties.along.type,parentSchema:schema171.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -8766,7 +9197,7 @@ errors++;
 }
 }
 else {
-const err28 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema169.type,parentSchema:schema169,data};
+const err28 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema171.type,parentSchema:schema171,data};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -8775,7 +9206,59 @@ vErrors.push(err28);
 }
 errors++;
 }
-validate84.errors = vErrors;
+validate86.errors = vErrors;
+return errors === 0;
+}
+
+const schema179 = {"description":"What the tension schedule lists.","type":"object","additionalProperties":false,"properties":{"list":{"description":"cables (default): cables in full, other members summarised per group; groups: the chosen groups; all: every member.","enum":["cables","groups","all"],"x-message":"{field} must be one of cables, groups, all"},"groups":{"description":"Groups listed when list is \"groups\".","$ref":"#/definitions/idList"}}};
+
+function validate88(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+for(const key0 in data){
+if(!((key0 === "list") || (key0 === "groups"))){
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema179,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+}
+if(data.list !== undefined){
+let data0 = data.list;
+if(!(((data0 === "cables") || (data0 === "groups")) || (data0 === "all"))){
+const err1 = {instancePath:instancePath+"/list",schemaPath:"#/properties/list/enum",keyword:"enum",params:{allowedValues: schema179.properties.list.enum},message:"must be equal to one of the allowed values",schema:schema179.properties.list.enum,parentSchema:schema179.properties.list,data:data0};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+}
+if(data.groups !== undefined){
+if(!(validate20(data.groups, {instancePath:instancePath+"/groups",parentData:data,parentDataProperty:"groups",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema179.type,parentSchema:schema179,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+validate88.errors = vErrors;
 return errors === 0;
 }
 
@@ -9064,8 +9547,8 @@ errors = vErrors.length;
 }
 }
 if(data.installation !== undefined){
-if(!(validate60(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
-vErrors = vErrors === null ? validate60.errors : vErrors.concat(validate60.errors);
+if(!(validate62(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
+vErrors = vErrors === null ? validate62.errors : vErrors.concat(validate62.errors);
 errors = vErrors.length;
 }
 }
@@ -9074,8 +9557,8 @@ let data18 = data.generators;
 if(Array.isArray(data18)){
 const len6 = data18.length;
 for(let i6=0; i6<len6; i6++){
-if(!(validate62(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
-vErrors = vErrors === null ? validate62.errors : vErrors.concat(validate62.errors);
+if(!(validate64(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
+vErrors = vErrors === null ? validate64.errors : vErrors.concat(validate64.errors);
 errors = vErrors.length;
 }
 }
@@ -9092,14 +9575,14 @@ errors++;
 }
 }
 if(data.display !== undefined){
-if(!(validate64(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
-vErrors = vErrors === null ? validate64.errors : vErrors.concat(validate64.errors);
+if(!(validate66(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
+vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
 errors = vErrors.length;
 }
 }
 if(data.designBasis !== undefined){
-if(!(validate66(data.designBasis, {instancePath:instancePath+"/designBasis",parentData:data,parentDataProperty:"designBasis",rootData}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(!(validate68(data.designBasis, {instancePath:instancePath+"/designBasis",parentData:data,parentDataProperty:"designBasis",rootData}))){
+vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
 errors = vErrors.length;
 }
 }
@@ -9108,8 +9591,8 @@ let data22 = data.sequences;
 if(Array.isArray(data22)){
 const len7 = data22.length;
 for(let i7=0; i7<len7; i7++){
-if(!(validate68(data22[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data22,parentDataProperty:i7,rootData}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+if(!(validate70(data22[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data22,parentDataProperty:i7,rootData}))){
+vErrors = vErrors === null ? validate70.errors : vErrors.concat(validate70.errors);
 errors = vErrors.length;
 }
 }
@@ -9130,8 +9613,8 @@ let data24 = data.siteMeasurements;
 if(Array.isArray(data24)){
 const len8 = data24.length;
 for(let i8=0; i8<len8; i8++){
-if(!(validate73(data24[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data24,parentDataProperty:i8,rootData}))){
-vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+if(!(validate75(data24[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data24,parentDataProperty:i8,rootData}))){
+vErrors = vErrors === null ? validate75.errors : vErrors.concat(validate75.errors);
 errors = vErrors.length;
 }
 }
@@ -9152,7 +9635,7 @@ let data26 = data.report;
 if(data26 && typeof data26 == "object" && !Array.isArray(data26)){
 for(const key1 in data26){
 if(!((key1 === "documentNumber") || (key1 === "revisions"))){
-const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema154,data:data26};
+const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema156,data:data26};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -9165,7 +9648,7 @@ errors++;
 if(data26.documentNumber !== undefined){
 let data27 = data26.documentNumber;
 if(typeof data27 !== "string"){
-const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.documentNumber.type,parentSchema:schema154.properties.documentNumber,data:data27};
+const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema156.properties.documentNumber.type,parentSchema:schema156.properties.documentNumber,data:data27};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -9183,7 +9666,7 @@ for(let i9=0; i9<len9; i9++){
 let data29 = data28[i9];
 if(data29 && typeof data29 == "object" && !Array.isArray(data29)){
 if(data29.revision === undefined){
-const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema154.properties.revisions.items.required,parentSchema:schema154.properties.revisions.items,data:data29};
+const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema156.properties.revisions.items.required,parentSchema:schema156.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -9193,7 +9676,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data29.date === undefined){
-const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema154.properties.revisions.items.required,parentSchema:schema154.properties.revisions.items,data:data29};
+const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema156.properties.revisions.items.required,parentSchema:schema156.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -9203,7 +9686,7 @@ vErrors.push(err24);
 errors++;
 }
 if(data29.description === undefined){
-const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema154.properties.revisions.items.required,parentSchema:schema154.properties.revisions.items,data:data29};
+const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema156.properties.revisions.items.required,parentSchema:schema156.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -9214,7 +9697,7 @@ errors++;
 }
 for(const key2 in data29){
 if(!(((((key2 === "revision") || (key2 === "date")) || (key2 === "description")) || (key2 === "by")) || (key2 === "checkedBy"))){
-const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema154.properties.revisions.items,data:data29};
+const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema156.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -9227,7 +9710,7 @@ errors++;
 if(data29.revision !== undefined){
 let data30 = data29.revision;
 if(typeof data30 !== "string"){
-const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.revision.type,parentSchema:schema154.properties.revisions.items.properties.revision,data:data30};
+const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema156.properties.revisions.items.properties.revision.type,parentSchema:schema156.properties.revisions.items.properties.revision,data:data30};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -9240,7 +9723,7 @@ errors++;
 if(data29.date !== undefined){
 let data31 = data29.date;
 if(typeof data31 !== "string"){
-const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.date.type,parentSchema:schema154.properties.revisions.items.properties.date,data:data31};
+const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema156.properties.revisions.items.properties.date.type,parentSchema:schema156.properties.revisions.items.properties.date,data:data31};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -9253,7 +9736,7 @@ errors++;
 if(data29.description !== undefined){
 let data32 = data29.description;
 if(typeof data32 !== "string"){
-const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.description.type,parentSchema:schema154.properties.revisions.items.properties.description,data:data32};
+const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema156.properties.revisions.items.properties.description.type,parentSchema:schema156.properties.revisions.items.properties.description,data:data32};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -9266,7 +9749,7 @@ errors++;
 if(data29.by !== undefined){
 let data33 = data29.by;
 if(typeof data33 !== "string"){
-const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.by.type,parentSchema:schema154.properties.revisions.items.properties.by,data:data33};
+const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema156.properties.revisions.items.properties.by.type,parentSchema:schema156.properties.revisions.items.properties.by,data:data33};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -9279,7 +9762,7 @@ errors++;
 if(data29.checkedBy !== undefined){
 let data34 = data29.checkedBy;
 if(typeof data34 !== "string"){
-const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.checkedBy.type,parentSchema:schema154.properties.revisions.items.properties.checkedBy,data:data34};
+const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema156.properties.revisions.items.properties.checkedBy.type,parentSchema:schema156.properties.revisions.items.properties.checkedBy,data:data34};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -9291,7 +9774,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema154.properties.revisions.items.type,parentSchema:schema154.properties.revisions.items,data:data29};
+const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema156.properties.revisions.items.type,parentSchema:schema156.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -9303,7 +9786,7 @@ errors++;
 }
 }
 else {
-const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema154.properties.revisions.type,parentSchema:schema154.properties.revisions,data:data28};
+const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema156.properties.revisions.type,parentSchema:schema156.properties.revisions,data:data28};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -9315,7 +9798,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema154.type,parentSchema:schema154,data:data26};
+const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema156.type,parentSchema:schema156,data:data26};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -9330,8 +9813,8 @@ let data35 = data.panels;
 if(Array.isArray(data35)){
 const len10 = data35.length;
 for(let i10=0; i10<len10; i10++){
-if(!(validate75(data35[i10], {instancePath:instancePath+"/panels/" + i10,parentData:data35,parentDataProperty:i10,rootData}))){
-vErrors = vErrors === null ? validate75.errors : vErrors.concat(validate75.errors);
+if(!(validate77(data35[i10], {instancePath:instancePath+"/panels/" + i10,parentData:data35,parentDataProperty:i10,rootData}))){
+vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
 errors = vErrors.length;
 }
 }
@@ -9352,8 +9835,8 @@ let data37 = data.patchWind;
 if(Array.isArray(data37)){
 const len11 = data37.length;
 for(let i11=0; i11<len11; i11++){
-if(!(validate77(data37[i11], {instancePath:instancePath+"/patchWind/" + i11,parentData:data37,parentDataProperty:i11,rootData}))){
-vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
+if(!(validate79(data37[i11], {instancePath:instancePath+"/patchWind/" + i11,parentData:data37,parentDataProperty:i11,rootData}))){
+vErrors = vErrors === null ? validate79.errors : vErrors.concat(validate79.errors);
 errors = vErrors.length;
 }
 }
@@ -9374,8 +9857,8 @@ let data39 = data.memberLoss;
 if(Array.isArray(data39)){
 const len12 = data39.length;
 for(let i12=0; i12<len12; i12++){
-if(!(validate79(data39[i12], {instancePath:instancePath+"/memberLoss/" + i12,parentData:data39,parentDataProperty:i12,rootData}))){
-vErrors = vErrors === null ? validate79.errors : vErrors.concat(validate79.errors);
+if(!(validate81(data39[i12], {instancePath:instancePath+"/memberLoss/" + i12,parentData:data39,parentDataProperty:i12,rootData}))){
+vErrors = vErrors === null ? validate81.errors : vErrors.concat(validate81.errors);
 errors = vErrors.length;
 }
 }
@@ -9396,8 +9879,8 @@ let data41 = data.windDirections;
 if(Array.isArray(data41)){
 const len13 = data41.length;
 for(let i13=0; i13<len13; i13++){
-if(!(validate82(data41[i13], {instancePath:instancePath+"/windDirections/" + i13,parentData:data41,parentDataProperty:i13,rootData}))){
-vErrors = vErrors === null ? validate82.errors : vErrors.concat(validate82.errors);
+if(!(validate84(data41[i13], {instancePath:instancePath+"/windDirections/" + i13,parentData:data41,parentDataProperty:i13,rootData}))){
+vErrors = vErrors === null ? validate84.errors : vErrors.concat(validate84.errors);
 errors = vErrors.length;
 }
 }
@@ -9418,8 +9901,8 @@ let data43 = data.ancillaries;
 if(Array.isArray(data43)){
 const len14 = data43.length;
 for(let i14=0; i14<len14; i14++){
-if(!(validate84(data43[i14], {instancePath:instancePath+"/ancillaries/" + i14,parentData:data43,parentDataProperty:i14,rootData}))){
-vErrors = vErrors === null ? validate84.errors : vErrors.concat(validate84.errors);
+if(!(validate86(data43[i14], {instancePath:instancePath+"/ancillaries/" + i14,parentData:data43,parentDataProperty:i14,rootData}))){
+vErrors = vErrors === null ? validate86.errors : vErrors.concat(validate86.errors);
 errors = vErrors.length;
 }
 }
@@ -9433,6 +9916,12 @@ else {
 vErrors.push(err39);
 }
 errors++;
+}
+}
+if(data.schedule !== undefined){
+if(!(validate88(data.schedule, {instancePath:instancePath+"/schedule",parentData:data,parentDataProperty:"schedule",rootData}))){
+vErrors = vErrors === null ? validate88.errors : vErrors.concat(validate88.errors);
+errors = vErrors.length;
 }
 }
 }
