@@ -3,8 +3,8 @@
 "use strict";
 export const validate = validate10;
 export default validate10;
-const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 2","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":2,"x-message":"{field} must be 2"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"designBasis":{"$ref":"#/definitions/designBasis"},"sequences":{"type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"$ref":"#/definitions/report"},"panels":{"type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"type":"array","items":{"$ref":"#/definitions/memberLoss"}},"windDirections":{"type":"array","items":{"$ref":"#/definitions/windDirections"}},"ancillaries":{"type":"array","items":{"$ref":"#/definitions/ancillary"}}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"},"mass":{"$ref":"#/definitions/nonNegative"}}},"springs":{"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"shape":{"enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"$ref":"#/definitions/positive"},"termination":{"enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"$ref":"#/definitions/positive"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"},"basis":{"$ref":"#/definitions/windBasis"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"purpose":{"$ref":"#/definitions/casePurpose"},"action":{"enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"sequenceStep":{"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}},"sequence":{"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}},"report":{"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}},"casePurpose":{"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"},"designBasis":{"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}},"panel":{"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}},"pressureCoefficient":{"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}},"areaLoad":{"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}},"memberLoss":{"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}},"windBasis":{"type":"object","additionalProperties":false,"required":["velocity","averagingPeriod"],"properties":{"velocity":{"enum":["mean","peak"]},"averagingPeriod":{"$ref":"#/definitions/positive"},"gustFactor":{"$ref":"#/definitions/positive"},"structuralFactor":{"$ref":"#/definitions/positive"}}},"windDirections":{"type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"case":{"$ref":"#/definitions/id"},"count":{"type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"type":"number"}}},"ancillary":{"type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"kind":{"enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"$ref":"#/definitions/id"},"along":{"type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"$ref":"#/definitions/id"},"from":{"type":"number"},"to":{"type":"number"}}},"dragArea":{"$ref":"#/definitions/nonNegative"},"mass":{"$ref":"#/definitions/nonNegative"},"iceDragArea":{"$ref":"#/definitions/nonNegative"},"iceMass":{"$ref":"#/definitions/nonNegative"}}}}};
-const schema154 = {"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}};
+const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 2","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":2,"x-message":"{field} must be 2"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"designBasis":{"$ref":"#/definitions/designBasis"},"sequences":{"type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"$ref":"#/definitions/report"},"panels":{"type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"type":"array","items":{"$ref":"#/definitions/memberLoss"}},"windDirections":{"type":"array","items":{"$ref":"#/definitions/windDirections"}},"ancillaries":{"type":"array","items":{"$ref":"#/definitions/ancillary"}}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"},"mass":{"$ref":"#/definitions/nonNegative"}}},"springs":{"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"plan":{"enum":["triangular","square"],"x-message":"{field} must be triangular or square"},"members":{"enum":["flat","round"],"x-message":"{field} must be flat or round"},"memberWidth":{"$ref":"#/definitions/positive"}}},"label":{"type":"string"},"shape":{"enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"$ref":"#/definitions/positive"},"termination":{"enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"$ref":"#/definitions/positive"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"},"basis":{"$ref":"#/definitions/windBasis"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"},"bareMembers":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"purpose":{"$ref":"#/definitions/casePurpose"},"action":{"enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"sequenceStep":{"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}},"sequence":{"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}},"report":{"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}},"casePurpose":{"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"},"designBasis":{"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}},"panel":{"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}},"pressureCoefficient":{"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}},"areaLoad":{"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}},"memberLoss":{"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}},"windBasis":{"type":"object","additionalProperties":false,"required":["velocity","averagingPeriod"],"properties":{"velocity":{"enum":["mean","peak"]},"averagingPeriod":{"$ref":"#/definitions/positive"},"gustFactor":{"$ref":"#/definitions/positive"},"structuralFactor":{"$ref":"#/definitions/positive"}}},"windDirections":{"type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"case":{"$ref":"#/definitions/id"},"count":{"type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"type":"number"}}},"ancillary":{"type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"kind":{"enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"$ref":"#/definitions/id"},"along":{"type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"$ref":"#/definitions/id"},"from":{"type":"number"},"to":{"type":"number"}}},"dragArea":{"$ref":"#/definitions/nonNegative"},"mass":{"$ref":"#/definitions/nonNegative"},"iceDragArea":{"$ref":"#/definitions/nonNegative"},"iceMass":{"$ref":"#/definitions/nonNegative"}}}}};
+const schema155 = {"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}};
 const func2 = Object.prototype.hasOwnProperty;
 const schema12 = {"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}};
 const schema13 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}};
@@ -501,7 +501,7 @@ validate13.errors = vErrors;
 return errors === 0;
 }
 
-const schema25 = {"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"shape":{"enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"$ref":"#/definitions/positive"},"termination":{"enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}};
+const schema25 = {"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"plan":{"enum":["triangular","square"],"x-message":"{field} must be triangular or square"},"members":{"enum":["flat","round"],"x-message":"{field} must be flat or round"},"memberWidth":{"$ref":"#/definitions/positive"}}},"label":{"type":"string"},"shape":{"enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"$ref":"#/definitions/positive"},"termination":{"enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}};
 const schema27 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}};
 
 function validate17(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
@@ -726,7 +726,7 @@ vErrors.push(err17);
 errors++;
 }
 for(const key1 in data8){
-if(!((((key1 === "faceWidth") || (key1 === "solidity")) || (key1 === "dragFactor")) || (key1 === "share"))){
+if(!(((((((key1 === "faceWidth") || (key1 === "solidity")) || (key1 === "dragFactor")) || (key1 === "share")) || (key1 === "plan")) || (key1 === "members")) || (key1 === "memberWidth"))){
 const err18 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema25.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err18];
@@ -835,8 +835,8 @@ vErrors.push(err26);
 }
 errors++;
 }
-if(data12 <= 0 || isNaN(data12)){
-const err27 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema25.properties.lattice.properties.share,data:data12};
+if(data12 < 0 || isNaN(data12)){
+const err27 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema25.properties.lattice.properties.share,data:data12};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -857,9 +857,10 @@ vErrors.push(err28);
 errors++;
 }
 }
-}
-else {
-const err29 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema25.properties.lattice.type,parentSchema:schema25.properties.lattice,data:data8};
+if(data8.plan !== undefined){
+let data13 = data8.plan;
+if(!((data13 === "triangular") || (data13 === "square"))){
+const err29 = {instancePath:instancePath+"/lattice/plan",schemaPath:"#/properties/lattice/properties/plan/enum",keyword:"enum",params:{allowedValues: schema25.properties.lattice.properties.plan.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.lattice.properties.plan.enum,parentSchema:schema25.properties.lattice.properties.plan,data:data13};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -869,10 +870,10 @@ vErrors.push(err29);
 errors++;
 }
 }
-if(data.label !== undefined){
-let data13 = data.label;
-if(typeof data13 !== "string"){
-const err30 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema25.properties.label.type,parentSchema:schema25.properties.label,data:data13};
+if(data8.members !== undefined){
+let data14 = data8.members;
+if(!((data14 === "flat") || (data14 === "round"))){
+const err30 = {instancePath:instancePath+"/lattice/members",schemaPath:"#/properties/lattice/properties/members/enum",keyword:"enum",params:{allowedValues: schema25.properties.lattice.properties.members.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.lattice.properties.members.enum,parentSchema:schema25.properties.lattice.properties.members,data:data14};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -882,10 +883,11 @@ vErrors.push(err30);
 errors++;
 }
 }
-if(data.shape !== undefined){
-let data14 = data.shape;
-if(!((((((data14 === "solidRound") || (data14 === "tubeHotFinished")) || (data14 === "tubeColdFormed")) || (data14 === "angle")) || (data14 === "rolledI")) || (data14 === "other"))){
-const err31 = {instancePath:instancePath+"/shape",schemaPath:"#/properties/shape/enum",keyword:"enum",params:{allowedValues: schema25.properties.shape.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.shape.enum,parentSchema:schema25.properties.shape,data:data14};
+if(data8.memberWidth !== undefined){
+let data15 = data8.memberWidth;
+if((typeof data15 == "number") && (isFinite(data15))){
+if(data15 <= 0 || isNaN(data15)){
+const err31 = {instancePath:instancePath+"/lattice/memberWidth",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data15};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -895,10 +897,8 @@ vErrors.push(err31);
 errors++;
 }
 }
-if(data.bucklingCurve !== undefined){
-let data15 = data.bucklingCurve;
-if(!(((((data15 === "a0") || (data15 === "a")) || (data15 === "b")) || (data15 === "c")) || (data15 === "d"))){
-const err32 = {instancePath:instancePath+"/bucklingCurve",schemaPath:"#/properties/bucklingCurve/enum",keyword:"enum",params:{allowedValues: schema25.properties.bucklingCurve.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.bucklingCurve.enum,parentSchema:schema25.properties.bucklingCurve,data:data15};
+else {
+const err32 = {instancePath:instancePath+"/lattice/memberWidth",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data15};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -908,11 +908,9 @@ vErrors.push(err32);
 errors++;
 }
 }
-if(data.radiusOfGyration !== undefined){
-let data16 = data.radiusOfGyration;
-if((typeof data16 == "number") && (isFinite(data16))){
-if(data16 <= 0 || isNaN(data16)){
-const err33 = {instancePath:instancePath+"/radiusOfGyration",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data16};
+}
+else {
+const err33 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema25.properties.lattice.type,parentSchema:schema25.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -922,8 +920,10 @@ vErrors.push(err33);
 errors++;
 }
 }
-else {
-const err34 = {instancePath:instancePath+"/radiusOfGyration",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data16};
+if(data.label !== undefined){
+let data16 = data.label;
+if(typeof data16 !== "string"){
+const err34 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema25.properties.label.type,parentSchema:schema25.properties.label,data:data16};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -933,10 +933,10 @@ vErrors.push(err34);
 errors++;
 }
 }
-if(data.termination !== undefined){
-let data17 = data.termination;
-if(!((((((data17 === "socketMetal") || (data17 === "socketResin")) || (data17 === "swaged")) || (data17 === "wedgeSocket")) || (data17 === "clips")) || (data17 === "preformedGrip"))){
-const err35 = {instancePath:instancePath+"/termination",schemaPath:"#/properties/termination/enum",keyword:"enum",params:{allowedValues: schema25.properties.termination.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.termination.enum,parentSchema:schema25.properties.termination,data:data17};
+if(data.shape !== undefined){
+let data17 = data.shape;
+if(!((((((data17 === "solidRound") || (data17 === "tubeHotFinished")) || (data17 === "tubeColdFormed")) || (data17 === "angle")) || (data17 === "rolledI")) || (data17 === "other"))){
+const err35 = {instancePath:instancePath+"/shape",schemaPath:"#/properties/shape/enum",keyword:"enum",params:{allowedValues: schema25.properties.shape.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.shape.enum,parentSchema:schema25.properties.shape,data:data17};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -946,11 +946,10 @@ vErrors.push(err35);
 errors++;
 }
 }
-if(data.terminationEfficiency !== undefined){
-let data18 = data.terminationEfficiency;
-if((typeof data18 == "number") && (isFinite(data18))){
-if(data18 > 1 || isNaN(data18)){
-const err36 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema25.properties.terminationEfficiency,data:data18};
+if(data.bucklingCurve !== undefined){
+let data18 = data.bucklingCurve;
+if(!(((((data18 === "a0") || (data18 === "a")) || (data18 === "b")) || (data18 === "c")) || (data18 === "d"))){
+const err36 = {instancePath:instancePath+"/bucklingCurve",schemaPath:"#/properties/bucklingCurve/enum",keyword:"enum",params:{allowedValues: schema25.properties.bucklingCurve.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.bucklingCurve.enum,parentSchema:schema25.properties.bucklingCurve,data:data18};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -959,8 +958,12 @@ vErrors.push(err36);
 }
 errors++;
 }
-if(data18 <= 0 || isNaN(data18)){
-const err37 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema25.properties.terminationEfficiency,data:data18};
+}
+if(data.radiusOfGyration !== undefined){
+let data19 = data.radiusOfGyration;
+if((typeof data19 == "number") && (isFinite(data19))){
+if(data19 <= 0 || isNaN(data19)){
+const err37 = {instancePath:instancePath+"/radiusOfGyration",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data19};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -971,7 +974,7 @@ errors++;
 }
 }
 else {
-const err38 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.terminationEfficiency.type,parentSchema:schema25.properties.terminationEfficiency,data:data18};
+const err38 = {instancePath:instancePath+"/radiusOfGyration",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data19};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -981,11 +984,10 @@ vErrors.push(err38);
 errors++;
 }
 }
-if(data.G !== undefined){
-let data19 = data.G;
-if((typeof data19 == "number") && (isFinite(data19))){
-if(data19 <= 0 || isNaN(data19)){
-const err39 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data19};
+if(data.termination !== undefined){
+let data20 = data.termination;
+if(!((((((data20 === "socketMetal") || (data20 === "socketResin")) || (data20 === "swaged")) || (data20 === "wedgeSocket")) || (data20 === "clips")) || (data20 === "preformedGrip"))){
+const err39 = {instancePath:instancePath+"/termination",schemaPath:"#/properties/termination/enum",keyword:"enum",params:{allowedValues: schema25.properties.termination.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.termination.enum,parentSchema:schema25.properties.termination,data:data20};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -995,8 +997,11 @@ vErrors.push(err39);
 errors++;
 }
 }
-else {
-const err40 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data19};
+if(data.terminationEfficiency !== undefined){
+let data21 = data.terminationEfficiency;
+if((typeof data21 == "number") && (isFinite(data21))){
+if(data21 > 1 || isNaN(data21)){
+const err40 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema25.properties.terminationEfficiency,data:data21};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -1005,12 +1010,8 @@ vErrors.push(err40);
 }
 errors++;
 }
-}
-if(data.Iy !== undefined){
-let data20 = data.Iy;
-if((typeof data20 == "number") && (isFinite(data20))){
-if(data20 <= 0 || isNaN(data20)){
-const err41 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data20};
+if(data21 <= 0 || isNaN(data21)){
+const err41 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema25.properties.terminationEfficiency,data:data21};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -1021,7 +1022,7 @@ errors++;
 }
 }
 else {
-const err42 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data20};
+const err42 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.terminationEfficiency.type,parentSchema:schema25.properties.terminationEfficiency,data:data21};
 if(vErrors === null){
 vErrors = [err42];
 }
@@ -1031,11 +1032,11 @@ vErrors.push(err42);
 errors++;
 }
 }
-if(data.Iz !== undefined){
-let data21 = data.Iz;
-if((typeof data21 == "number") && (isFinite(data21))){
-if(data21 <= 0 || isNaN(data21)){
-const err43 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data21};
+if(data.G !== undefined){
+let data22 = data.G;
+if((typeof data22 == "number") && (isFinite(data22))){
+if(data22 <= 0 || isNaN(data22)){
+const err43 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data22};
 if(vErrors === null){
 vErrors = [err43];
 }
@@ -1046,7 +1047,7 @@ errors++;
 }
 }
 else {
-const err44 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data21};
+const err44 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data22};
 if(vErrors === null){
 vErrors = [err44];
 }
@@ -1056,11 +1057,11 @@ vErrors.push(err44);
 errors++;
 }
 }
-if(data.J !== undefined){
-let data22 = data.J;
-if((typeof data22 == "number") && (isFinite(data22))){
-if(data22 <= 0 || isNaN(data22)){
-const err45 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data22};
+if(data.Iy !== undefined){
+let data23 = data.Iy;
+if((typeof data23 == "number") && (isFinite(data23))){
+if(data23 <= 0 || isNaN(data23)){
+const err45 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data23};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -1071,7 +1072,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data22};
+const err46 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data23};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -1081,11 +1082,11 @@ vErrors.push(err46);
 errors++;
 }
 }
-if(data.yieldStrength !== undefined){
-let data23 = data.yieldStrength;
-if((typeof data23 == "number") && (isFinite(data23))){
-if(data23 <= 0 || isNaN(data23)){
-const err47 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data23};
+if(data.Iz !== undefined){
+let data24 = data.Iz;
+if((typeof data24 == "number") && (isFinite(data24))){
+if(data24 <= 0 || isNaN(data24)){
+const err47 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data24};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -1096,7 +1097,7 @@ errors++;
 }
 }
 else {
-const err48 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data23};
+const err48 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data24};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -1106,9 +1107,11 @@ vErrors.push(err48);
 errors++;
 }
 }
-}
-else {
-const err49 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema25.type,parentSchema:schema25,data};
+if(data.J !== undefined){
+let data25 = data.J;
+if((typeof data25 == "number") && (isFinite(data25))){
+if(data25 <= 0 || isNaN(data25)){
+const err49 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data25};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -1117,14 +1120,62 @@ vErrors.push(err49);
 }
 errors++;
 }
+}
+else {
+const err50 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data25};
+if(vErrors === null){
+vErrors = [err50];
+}
+else {
+vErrors.push(err50);
+}
+errors++;
+}
+}
+if(data.yieldStrength !== undefined){
+let data26 = data.yieldStrength;
+if((typeof data26 == "number") && (isFinite(data26))){
+if(data26 <= 0 || isNaN(data26)){
+const err51 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data26};
+if(vErrors === null){
+vErrors = [err51];
+}
+else {
+vErrors.push(err51);
+}
+errors++;
+}
+}
+else {
+const err52 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data26};
+if(vErrors === null){
+vErrors = [err52];
+}
+else {
+vErrors.push(err52);
+}
+errors++;
+}
+}
+}
+else {
+const err53 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema25.type,parentSchema:schema25,data};
+if(vErrors === null){
+vErrors = [err53];
+}
+else {
+vErrors.push(err53);
+}
+errors++;
+}
 validate17.errors = vErrors;
 return errors === 0;
 }
 
-const schema38 = {"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"$ref":"#/definitions/positive"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
-const schema47 = {"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}};
+const schema39 = {"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"$ref":"#/definitions/positive"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
+const schema48 = {"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}};
 const pattern8 = new RegExp("^(?!.*(.).*\\1)[xyz]{0,3}$", "u");
-const schema43 = {"type":"array","items":{"$ref":"#/definitions/id"}};
+const schema44 = {"type":"array","items":{"$ref":"#/definitions/id"}};
 
 function validate20(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -1158,7 +1209,7 @@ errors++;
 }
 }
 else {
-const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema43.type,parentSchema:schema43,data};
+const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema44.type,parentSchema:schema44,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1192,7 +1243,7 @@ errors++;
 }
 var valid0 = _errs2 === errors;
 if(valid0){
-const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema38.not,parentSchema:schema38,data};
+const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema39.not,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1214,7 +1265,7 @@ vErrors = null;
 }
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema38.required,parentSchema:schema38,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema39.required,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1224,7 +1275,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.kind === undefined){
-const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.required,parentSchema:schema38,data};
+const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema39.required,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1234,7 +1285,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.from === undefined){
-const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema38.required,parentSchema:schema38,data};
+const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema39.required,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1244,7 +1295,7 @@ vErrors.push(err4);
 errors++;
 }
 if(data.to === undefined){
-const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema38.required,parentSchema:schema38,data};
+const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema39.required,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1254,7 +1305,7 @@ vErrors.push(err5);
 errors++;
 }
 if(data.section === undefined){
-const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema38.required,parentSchema:schema38,data};
+const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema39.required,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1264,8 +1315,8 @@ vErrors.push(err6);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema38.properties, key0))){
-const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema38,data};
+if(!(func2.call(schema39.properties, key0))){
+const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1303,7 +1354,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "cable") || (data1 === "bar")) || (data1 === "beam"))){
-const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema38.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema38.properties.kind.enum,parentSchema:schema38.properties.kind,data:data1};
+const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema39.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema39.properties.kind.enum,parentSchema:schema39.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -1391,7 +1442,7 @@ errors++;
 if(data.segments !== undefined){
 let data5 = data.segments;
 if(!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))){
-const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema38.properties.segments.type,parentSchema:schema38.properties.segments,data:data5};
+const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema39.properties.segments.type,parentSchema:schema39.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -1402,7 +1453,7 @@ errors++;
 }
 if((typeof data5 == "number") && (isFinite(data5))){
 if(data5 > 10000 || isNaN(data5)){
-const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/maximum",keyword:"maximum",params:{comparison: "<=", limit: 10000},message:"must be <= 10000",schema:10000,parentSchema:schema38.properties.segments,data:data5};
+const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/maximum",keyword:"maximum",params:{comparison: "<=", limit: 10000},message:"must be <= 10000",schema:10000,parentSchema:schema39.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -1412,7 +1463,7 @@ vErrors.push(err18);
 errors++;
 }
 if(data5 < 1 || isNaN(data5)){
-const err19 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema38.properties.segments,data:data5};
+const err19 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema39.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -1426,7 +1477,7 @@ errors++;
 if(data.pretension !== undefined){
 let data6 = data.pretension;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err20 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema38.properties.pretension.type,parentSchema:schema38.properties.pretension,data:data6};
+const err20 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema39.properties.pretension.type,parentSchema:schema39.properties.pretension,data:data6};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -1439,7 +1490,7 @@ errors++;
 if(data.unstressedLength !== undefined){
 let data7 = data.unstressedLength;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err21 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema38.properties.unstressedLength.type,parentSchema:schema38.properties.unstressedLength,data:data7};
+const err21 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema39.properties.unstressedLength.type,parentSchema:schema39.properties.unstressedLength,data:data7};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1458,7 +1509,7 @@ errors = vErrors.length;
 if(data.generatedBy !== undefined){
 let data9 = data.generatedBy;
 if(typeof data9 !== "string"){
-const err22 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema38.properties.generatedBy.type,parentSchema:schema38.properties.generatedBy,data:data9};
+const err22 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema39.properties.generatedBy.type,parentSchema:schema39.properties.generatedBy,data:data9};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -1472,7 +1523,7 @@ if(data.terminationEfficiency !== undefined){
 let data10 = data.terminationEfficiency;
 if((typeof data10 == "number") && (isFinite(data10))){
 if(data10 > 1 || isNaN(data10)){
-const err23 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema38.properties.terminationEfficiency,data:data10};
+const err23 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema39.properties.terminationEfficiency,data:data10};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -1482,7 +1533,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data10 <= 0 || isNaN(data10)){
-const err24 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema38.properties.terminationEfficiency,data:data10};
+const err24 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema39.properties.terminationEfficiency,data:data10};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -1493,7 +1544,7 @@ errors++;
 }
 }
 else {
-const err25 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema38.properties.terminationEfficiency.type,parentSchema:schema38.properties.terminationEfficiency,data:data10};
+const err25 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema39.properties.terminationEfficiency.type,parentSchema:schema39.properties.terminationEfficiency,data:data10};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -1582,7 +1633,7 @@ let data14 = data.releases;
 if(data14 && typeof data14 == "object" && !Array.isArray(data14)){
 for(const key1 in data14){
 if(!((key1 === "start") || (key1 === "end"))){
-const err32 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema38.properties.releases,data:data14};
+const err32 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema39.properties.releases,data:data14};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -1596,7 +1647,7 @@ if(data14.start !== undefined){
 let data15 = data14.start;
 if(typeof data15 === "string"){
 if(!pattern8.test(data15)){
-const err33 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema47,data:data15};
+const err33 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema48,data:data15};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -1607,7 +1658,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema47.type,parentSchema:schema47,data:data15};
+const err34 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema48.type,parentSchema:schema48,data:data15};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -1621,7 +1672,7 @@ if(data14.end !== undefined){
 let data16 = data14.end;
 if(typeof data16 === "string"){
 if(!pattern8.test(data16)){
-const err35 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema47,data:data16};
+const err35 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema48,data:data16};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -1632,7 +1683,7 @@ errors++;
 }
 }
 else {
-const err36 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema47.type,parentSchema:schema47,data:data16};
+const err36 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema48.type,parentSchema:schema48,data:data16};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -1644,7 +1695,7 @@ errors++;
 }
 }
 else {
-const err37 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.properties.releases.type,parentSchema:schema38.properties.releases,data:data14};
+const err37 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema39.properties.releases.type,parentSchema:schema39.properties.releases,data:data14};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -1656,7 +1707,7 @@ errors++;
 }
 }
 else {
-const err38 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.type,parentSchema:schema38,data};
+const err38 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema39.type,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -1669,16 +1720,16 @@ validate19.errors = vErrors;
 return errors === 0;
 }
 
-const schema49 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"purpose":{"$ref":"#/definitions/casePurpose"},"action":{"enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}};
-const schema68 = {"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"};
-const schema51 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}};
+const schema50 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"purpose":{"$ref":"#/definitions/casePurpose"},"action":{"enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}};
+const schema69 = {"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"};
+const schema52 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}};
 
 function validate24(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.node === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema51.required,parentSchema:schema51,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema52.required,parentSchema:schema52,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1688,7 +1739,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.force === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema51.required,parentSchema:schema51,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema52.required,parentSchema:schema52,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1699,7 +1750,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "node") || (key0 === "force")) || (key0 === "moment"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema51,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema52,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1834,7 +1885,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema51.type,parentSchema:schema51,data};
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.type,parentSchema:schema52,data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -1847,15 +1898,15 @@ validate24.errors = vErrors;
 return errors === 0;
 }
 
-const schema55 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"},"basis":{"$ref":"#/definitions/windBasis"}}};
-const schema57 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
+const schema56 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"},"basis":{"$ref":"#/definitions/windBasis"}}};
+const schema58 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
 
 function validate27(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema57.required,parentSchema:schema57,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema58.required,parentSchema:schema58,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1869,7 +1920,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "power"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema57.oneOf[0].required,parentSchema:schema57.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema58.oneOf[0].required,parentSchema:schema58.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1879,7 +1930,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.exponent === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema57.oneOf[0].required,parentSchema:schema57.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema58.oneOf[0].required,parentSchema:schema58.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1890,7 +1941,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((key0 === "kind") || (key0 === "exponent"))){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema57.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema58.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1903,7 +1954,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("power" !== data0){
-const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema57.oneOf[0].properties.kind,data:data0};
+const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema58.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1940,7 +1991,7 @@ errors++;
 }
 }
 else {
-const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema57.oneOf[0].type,parentSchema:schema57.oneOf[0],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema58.oneOf[0].type,parentSchema:schema58.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1953,7 +2004,7 @@ errors++;
 else if(tag0 === "log"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema57.oneOf[1].required,parentSchema:schema57.oneOf[1],data};
+const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema58.oneOf[1].required,parentSchema:schema58.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1963,7 +2014,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data.roughnessLength === undefined){
-const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema57.oneOf[1].required,parentSchema:schema57.oneOf[1],data};
+const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema58.oneOf[1].required,parentSchema:schema58.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -1974,7 +2025,7 @@ errors++;
 }
 for(const key1 in data){
 if(!((key1 === "kind") || (key1 === "roughnessLength"))){
-const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema57.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema58.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -1987,7 +2038,7 @@ errors++;
 if(data.kind !== undefined){
 let data2 = data.kind;
 if("log" !== data2){
-const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema57.oneOf[1].properties.kind,data:data2};
+const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema58.oneOf[1].properties.kind,data:data2};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2024,7 +2075,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema57.oneOf[1].type,parentSchema:schema57.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema58.oneOf[1].type,parentSchema:schema58.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2037,7 +2088,7 @@ errors++;
 else if(tag0 === "uniform"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema57.oneOf[2].required,parentSchema:schema57.oneOf[2],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema58.oneOf[2].required,parentSchema:schema58.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -2048,7 +2099,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(key2 === "kind")){
-const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema57.oneOf[2],data};
+const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema58.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -2061,7 +2112,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("uniform" !== data4){
-const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema57.oneOf[2].properties.kind,data:data4};
+const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema58.oneOf[2].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -2073,7 +2124,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema57.oneOf[2].type,parentSchema:schema57.oneOf[2],data};
+const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema58.oneOf[2].type,parentSchema:schema58.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -2084,7 +2135,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema57.discriminator,parentSchema:schema57,data};
+const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema58.discriminator,parentSchema:schema58,data};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -2095,7 +2146,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema57.discriminator,parentSchema:schema57,data};
+const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema58.discriminator,parentSchema:schema58,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -2106,7 +2157,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema57.type,parentSchema:schema57,data};
+const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema58.type,parentSchema:schema58,data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -2119,14 +2170,14 @@ validate27.errors = vErrors;
 return errors === 0;
 }
 
-const schema61 = {"type":"object","additionalProperties":false,"required":["velocity","averagingPeriod"],"properties":{"velocity":{"enum":["mean","peak"]},"averagingPeriod":{"$ref":"#/definitions/positive"},"gustFactor":{"$ref":"#/definitions/positive"},"structuralFactor":{"$ref":"#/definitions/positive"}}};
+const schema62 = {"type":"object","additionalProperties":false,"required":["velocity","averagingPeriod"],"properties":{"velocity":{"enum":["mean","peak"]},"averagingPeriod":{"$ref":"#/definitions/positive"},"gustFactor":{"$ref":"#/definitions/positive"},"structuralFactor":{"$ref":"#/definitions/positive"}}};
 
 function validate30(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.velocity === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "velocity"},message:"must have required property '"+"velocity"+"'",schema:schema61.required,parentSchema:schema61,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "velocity"},message:"must have required property '"+"velocity"+"'",schema:schema62.required,parentSchema:schema62,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2136,7 +2187,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.averagingPeriod === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "averagingPeriod"},message:"must have required property '"+"averagingPeriod"+"'",schema:schema61.required,parentSchema:schema61,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "averagingPeriod"},message:"must have required property '"+"averagingPeriod"+"'",schema:schema62.required,parentSchema:schema62,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2147,7 +2198,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "velocity") || (key0 === "averagingPeriod")) || (key0 === "gustFactor")) || (key0 === "structuralFactor"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema61,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema62,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2160,7 +2211,7 @@ errors++;
 if(data.velocity !== undefined){
 let data0 = data.velocity;
 if(!((data0 === "mean") || (data0 === "peak"))){
-const err3 = {instancePath:instancePath+"/velocity",schemaPath:"#/properties/velocity/enum",keyword:"enum",params:{allowedValues: schema61.properties.velocity.enum},message:"must be equal to one of the allowed values",schema:schema61.properties.velocity.enum,parentSchema:schema61.properties.velocity,data:data0};
+const err3 = {instancePath:instancePath+"/velocity",schemaPath:"#/properties/velocity/enum",keyword:"enum",params:{allowedValues: schema62.properties.velocity.enum},message:"must be equal to one of the allowed values",schema:schema62.properties.velocity.enum,parentSchema:schema62.properties.velocity,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2247,7 +2298,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema61.type,parentSchema:schema61,data};
+const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.type,parentSchema:schema62,data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2266,7 +2317,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.direction === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema55.required,parentSchema:schema55,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema56.required,parentSchema:schema56,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2276,7 +2327,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.speed === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema55.required,parentSchema:schema55,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema56.required,parentSchema:schema56,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2287,7 +2338,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((((key0 === "direction") || (key0 === "speed")) || (key0 === "profile")) || (key0 === "airDensity")) || (key0 === "groups")) || (key0 === "basis"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema55,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema56,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2300,7 +2351,7 @@ errors++;
 if(data.direction !== undefined){
 let data0 = data.direction;
 if(!((typeof data0 == "number") && (isFinite(data0)))){
-const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema55.properties.direction.type,parentSchema:schema55.properties.direction,data:data0};
+const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema56.properties.direction.type,parentSchema:schema56.properties.direction,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2380,7 +2431,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.type,parentSchema:schema55,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema56.type,parentSchema:schema56,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2393,14 +2444,14 @@ validate26.errors = vErrors;
 return errors === 0;
 }
 
-const schema65 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema66 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"},"bareMembers":{"$ref":"#/definitions/idList"}}};
 
 function validate33(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.thickness === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema65.required,parentSchema:schema65,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema66.required,parentSchema:schema66,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2410,8 +2461,8 @@ vErrors.push(err0);
 errors++;
 }
 for(const key0 in data){
-if(!(((key0 === "thickness") || (key0 === "density")) || (key0 === "groups"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema65,data};
+if(!((((key0 === "thickness") || (key0 === "density")) || (key0 === "groups")) || (key0 === "bareMembers"))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema66,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2477,9 +2528,15 @@ vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.error
 errors = vErrors.length;
 }
 }
+if(data.bareMembers !== undefined){
+if(!(validate20(data.bareMembers, {instancePath:instancePath+"/bareMembers",parentData:data,parentDataProperty:"bareMembers",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
+errors = vErrors.length;
+}
+}
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema65.type,parentSchema:schema65,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema66.type,parentSchema:schema66,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2492,14 +2549,14 @@ validate33.errors = vErrors;
 return errors === 0;
 }
 
-const schema69 = {"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}};
+const schema70 = {"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}};
 
-function validate36(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate37(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.node === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema69.required,parentSchema:schema69,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema70.required,parentSchema:schema70,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2510,7 +2567,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "node") || (key0 === "x")) || (key0 === "y")) || (key0 === "z")) || (key0 === "rx")) || (key0 === "ry")) || (key0 === "rz"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema69,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema70,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2548,7 +2605,7 @@ errors++;
 if(data.x !== undefined){
 let data1 = data.x;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err4 = {instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.x.type,parentSchema:schema69.properties.x,data:data1};
+const err4 = {instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema70.properties.x.type,parentSchema:schema70.properties.x,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2561,7 +2618,7 @@ errors++;
 if(data.y !== undefined){
 let data2 = data.y;
 if(!((typeof data2 == "number") && (isFinite(data2)))){
-const err5 = {instancePath:instancePath+"/y",schemaPath:"#/properties/y/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.y.type,parentSchema:schema69.properties.y,data:data2};
+const err5 = {instancePath:instancePath+"/y",schemaPath:"#/properties/y/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema70.properties.y.type,parentSchema:schema70.properties.y,data:data2};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2574,7 +2631,7 @@ errors++;
 if(data.z !== undefined){
 let data3 = data.z;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err6 = {instancePath:instancePath+"/z",schemaPath:"#/properties/z/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.z.type,parentSchema:schema69.properties.z,data:data3};
+const err6 = {instancePath:instancePath+"/z",schemaPath:"#/properties/z/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema70.properties.z.type,parentSchema:schema70.properties.z,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2587,7 +2644,7 @@ errors++;
 if(data.rx !== undefined){
 let data4 = data.rx;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err7 = {instancePath:instancePath+"/rx",schemaPath:"#/properties/rx/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.rx.type,parentSchema:schema69.properties.rx,data:data4};
+const err7 = {instancePath:instancePath+"/rx",schemaPath:"#/properties/rx/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema70.properties.rx.type,parentSchema:schema70.properties.rx,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2600,7 +2657,7 @@ errors++;
 if(data.ry !== undefined){
 let data5 = data.ry;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err8 = {instancePath:instancePath+"/ry",schemaPath:"#/properties/ry/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.ry.type,parentSchema:schema69.properties.ry,data:data5};
+const err8 = {instancePath:instancePath+"/ry",schemaPath:"#/properties/ry/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema70.properties.ry.type,parentSchema:schema70.properties.ry,data:data5};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2613,7 +2670,7 @@ errors++;
 if(data.rz !== undefined){
 let data6 = data.rz;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err9 = {instancePath:instancePath+"/rz",schemaPath:"#/properties/rz/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.rz.type,parentSchema:schema69.properties.rz,data:data6};
+const err9 = {instancePath:instancePath+"/rz",schemaPath:"#/properties/rz/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema70.properties.rz.type,parentSchema:schema70.properties.rz,data:data6};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2625,7 +2682,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema69.type,parentSchema:schema69,data};
+const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema70.type,parentSchema:schema70,data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2634,19 +2691,19 @@ vErrors.push(err10);
 }
 errors++;
 }
-validate36.errors = vErrors;
+validate37.errors = vErrors;
 return errors === 0;
 }
 
-const schema71 = {"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}};
-const schema72 = {"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}};
+const schema72 = {"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}};
+const schema73 = {"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}};
 
-function validate40(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate41(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.region === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "region"},message:"must have required property '"+"region"+"'",schema:schema72.required,parentSchema:schema72,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "region"},message:"must have required property '"+"region"+"'",schema:schema73.required,parentSchema:schema73,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2656,7 +2713,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.cp === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "cp"},message:"must have required property '"+"cp"+"'",schema:schema72.required,parentSchema:schema72,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "cp"},message:"must have required property '"+"cp"+"'",schema:schema73.required,parentSchema:schema73,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2667,7 +2724,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((key0 === "region") || (key0 === "cp"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema72,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema73,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2705,7 +2762,7 @@ errors++;
 if(data.cp !== undefined){
 let data1 = data.cp;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err5 = {instancePath:instancePath+"/cp",schemaPath:"#/properties/cp/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema72.properties.cp.type,parentSchema:schema72.properties.cp,data:data1};
+const err5 = {instancePath:instancePath+"/cp",schemaPath:"#/properties/cp/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema73.properties.cp.type,parentSchema:schema73.properties.cp,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2717,7 +2774,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.type,parentSchema:schema72,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema73.type,parentSchema:schema73,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2726,17 +2783,17 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate40.errors = vErrors;
+validate41.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate38(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate39(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema71.required,parentSchema:schema71,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema72.required,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2746,7 +2803,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.value === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema71.required,parentSchema:schema71,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema72.required,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2757,7 +2814,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "kind") || (key0 === "value")) || (key0 === "panels")) || (key0 === "coefficients"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema71,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2770,7 +2827,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if(!(((data0 === "snow") || (data0 === "cladding")) || (data0 === "pressure"))){
-const err3 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema71.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema71.properties.kind.enum,parentSchema:schema71.properties.kind,data:data0};
+const err3 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema72.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema72.properties.kind.enum,parentSchema:schema72.properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2783,7 +2840,7 @@ errors++;
 if(data.value !== undefined){
 let data1 = data.value;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err4 = {instancePath:instancePath+"/value",schemaPath:"#/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema71.properties.value.type,parentSchema:schema71.properties.value,data:data1};
+const err4 = {instancePath:instancePath+"/value",schemaPath:"#/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema72.properties.value.type,parentSchema:schema72.properties.value,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2804,14 +2861,14 @@ let data3 = data.coefficients;
 if(Array.isArray(data3)){
 const len0 = data3.length;
 for(let i0=0; i0<len0; i0++){
-if(!(validate40(data3[i0], {instancePath:instancePath+"/coefficients/" + i0,parentData:data3,parentDataProperty:i0,rootData}))){
-vErrors = vErrors === null ? validate40.errors : vErrors.concat(validate40.errors);
+if(!(validate41(data3[i0], {instancePath:instancePath+"/coefficients/" + i0,parentData:data3,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate41.errors : vErrors.concat(validate41.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err5 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema71.properties.coefficients.type,parentSchema:schema71.properties.coefficients,data:data3};
+const err5 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema72.properties.coefficients.type,parentSchema:schema72.properties.coefficients,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2823,7 +2880,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema71.type,parentSchema:schema71,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.type,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2832,7 +2889,7 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate38.errors = vErrors;
+validate39.errors = vErrors;
 return errors === 0;
 }
 
@@ -2842,7 +2899,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema49.required,parentSchema:schema49,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema50.required,parentSchema:schema50,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2852,8 +2909,8 @@ vErrors.push(err0);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema49.properties, key0))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema49,data};
+if(!(func2.call(schema50.properties, key0))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema50,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2891,7 +2948,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema49.properties.label.type,parentSchema:schema49.properties.label,data:data1};
+const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema50.properties.label.type,parentSchema:schema50.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2904,7 +2961,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data2 = data.selfWeight;
 if(typeof data2 !== "boolean"){
-const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema49.properties.selfWeight.type,parentSchema:schema49.properties.selfWeight,data:data2};
+const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema50.properties.selfWeight.type,parentSchema:schema50.properties.selfWeight,data:data2};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2917,7 +2974,7 @@ errors++;
 if(data.temperatureChange !== undefined){
 let data3 = data.temperatureChange;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema49.properties.temperatureChange.type,parentSchema:schema49.properties.temperatureChange,data:data3};
+const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema50.properties.temperatureChange.type,parentSchema:schema50.properties.temperatureChange,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2939,7 +2996,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema49.properties.nodalLoads.type,parentSchema:schema49.properties.nodalLoads,data:data4};
+const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.nodalLoads.type,parentSchema:schema50.properties.nodalLoads,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2964,7 +3021,7 @@ errors = vErrors.length;
 if(data.purpose !== undefined){
 let data8 = data.purpose;
 if(!((((data8 === "ultimate") || (data8 === "serviceability")) || (data8 === "accidental")) || (data8 === "componentOnly"))){
-const err8 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema68.enum},message:"must be equal to one of the allowed values",schema:schema68.enum,parentSchema:schema68,data:data8};
+const err8 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema69.enum},message:"must be equal to one of the allowed values",schema:schema69.enum,parentSchema:schema69,data:data8};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2977,7 +3034,7 @@ errors++;
 if(data.action !== undefined){
 let data9 = data.action;
 if(!((((((data9 === "permanent") || (data9 === "wind")) || (data9 === "ice")) || (data9 === "iceWithWind")) || (data9 === "temperature")) || (data9 === "accidental"))){
-const err9 = {instancePath:instancePath+"/action",schemaPath:"#/properties/action/enum",keyword:"enum",params:{allowedValues: schema49.properties.action.enum},message:"must be equal to one of the allowed values",schema:schema49.properties.action.enum,parentSchema:schema49.properties.action,data:data9};
+const err9 = {instancePath:instancePath+"/action",schemaPath:"#/properties/action/enum",keyword:"enum",params:{allowedValues: schema50.properties.action.enum},message:"must be equal to one of the allowed values",schema:schema50.properties.action.enum,parentSchema:schema50.properties.action,data:data9};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2992,14 +3049,14 @@ let data10 = data.displacements;
 if(Array.isArray(data10)){
 const len1 = data10.length;
 for(let i1=0; i1<len1; i1++){
-if(!(validate36(data10[i1], {instancePath:instancePath+"/displacements/" + i1,parentData:data10,parentDataProperty:i1,rootData}))){
-vErrors = vErrors === null ? validate36.errors : vErrors.concat(validate36.errors);
+if(!(validate37(data10[i1], {instancePath:instancePath+"/displacements/" + i1,parentData:data10,parentDataProperty:i1,rootData}))){
+vErrors = vErrors === null ? validate37.errors : vErrors.concat(validate37.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/displacements",schemaPath:"#/properties/displacements/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema49.properties.displacements.type,parentSchema:schema49.properties.displacements,data:data10};
+const err10 = {instancePath:instancePath+"/displacements",schemaPath:"#/properties/displacements/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.displacements.type,parentSchema:schema50.properties.displacements,data:data10};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3014,14 +3071,14 @@ let data12 = data.areaLoads;
 if(Array.isArray(data12)){
 const len2 = data12.length;
 for(let i2=0; i2<len2; i2++){
-if(!(validate38(data12[i2], {instancePath:instancePath+"/areaLoads/" + i2,parentData:data12,parentDataProperty:i2,rootData}))){
-vErrors = vErrors === null ? validate38.errors : vErrors.concat(validate38.errors);
+if(!(validate39(data12[i2], {instancePath:instancePath+"/areaLoads/" + i2,parentData:data12,parentDataProperty:i2,rootData}))){
+vErrors = vErrors === null ? validate39.errors : vErrors.concat(validate39.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err11 = {instancePath:instancePath+"/areaLoads",schemaPath:"#/properties/areaLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema49.properties.areaLoads.type,parentSchema:schema49.properties.areaLoads,data:data12};
+const err11 = {instancePath:instancePath+"/areaLoads",schemaPath:"#/properties/areaLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.areaLoads.type,parentSchema:schema50.properties.areaLoads,data:data12};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3033,7 +3090,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema49.type,parentSchema:schema49,data};
+const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.type,parentSchema:schema50,data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -3046,14 +3103,14 @@ validate23.errors = vErrors;
 return errors === 0;
 }
 
-const schema74 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
+const schema75 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
 
-function validate44(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate45(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema74.required,parentSchema:schema74,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema75.required,parentSchema:schema75,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3063,7 +3120,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.members === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema74.required,parentSchema:schema74,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema75.required,parentSchema:schema75,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3074,7 +3131,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "label")) || (key0 === "members"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema74,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema75,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3112,7 +3169,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema74.properties.label.type,parentSchema:schema74.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema75.properties.label.type,parentSchema:schema75.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3130,7 +3187,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema74.type,parentSchema:schema74,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema75.type,parentSchema:schema75,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3139,18 +3196,18 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate44.errors = vErrors;
+validate45.errors = vErrors;
 return errors === 0;
 }
 
-const schema76 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}};
+const schema77 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}};
 
-function validate47(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate48(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema76.required,parentSchema:schema76,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema77.required,parentSchema:schema77,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3160,7 +3217,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.factors === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema76.required,parentSchema:schema76,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema77.required,parentSchema:schema77,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3171,7 +3228,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "id") || (key0 === "label")) || (key0 === "factors")) || (key0 === "purpose"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema76,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema77,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3209,7 +3266,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema76.properties.label.type,parentSchema:schema76.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema77.properties.label.type,parentSchema:schema77.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3223,7 +3280,7 @@ if(data.factors !== undefined){
 let data2 = data.factors;
 if(Array.isArray(data2)){
 if(data2.length < 1){
-const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema76.properties.factors,data:data2};
+const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema77.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3237,7 +3294,7 @@ for(let i0=0; i0<len0; i0++){
 let data3 = data2[i0];
 if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
 if(data3.case === undefined){
-const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema76.properties.factors.items.required,parentSchema:schema76.properties.factors.items,data:data3};
+const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema77.properties.factors.items.required,parentSchema:schema77.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3247,7 +3304,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data3.factor === undefined){
-const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema76.properties.factors.items.required,parentSchema:schema76.properties.factors.items,data:data3};
+const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema77.properties.factors.items.required,parentSchema:schema77.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3258,7 +3315,7 @@ errors++;
 }
 for(const key1 in data3){
 if(!((key1 === "case") || (key1 === "factor"))){
-const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema76.properties.factors.items,data:data3};
+const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema77.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3296,7 +3353,7 @@ errors++;
 if(data3.factor !== undefined){
 let data5 = data3.factor;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema76.properties.factors.items.properties.factor.type,parentSchema:schema76.properties.factors.items.properties.factor,data:data5};
+const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema77.properties.factors.items.properties.factor.type,parentSchema:schema77.properties.factors.items.properties.factor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -3308,7 +3365,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.properties.factors.items.type,parentSchema:schema76.properties.factors.items,data:data3};
+const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema77.properties.factors.items.type,parentSchema:schema77.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -3320,7 +3377,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.factors.type,parentSchema:schema76.properties.factors,data:data2};
+const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema77.properties.factors.type,parentSchema:schema77.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -3333,7 +3390,7 @@ errors++;
 if(data.purpose !== undefined){
 let data6 = data.purpose;
 if(!((((data6 === "ultimate") || (data6 === "serviceability")) || (data6 === "accidental")) || (data6 === "componentOnly"))){
-const err15 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema68.enum},message:"must be equal to one of the allowed values",schema:schema68.enum,parentSchema:schema68,data:data6};
+const err15 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema69.enum},message:"must be equal to one of the allowed values",schema:schema69.enum,parentSchema:schema69,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3345,7 +3402,7 @@ errors++;
 }
 }
 else {
-const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.type,parentSchema:schema76,data};
+const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema77.type,parentSchema:schema77,data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -3354,18 +3411,18 @@ vErrors.push(err16);
 }
 errors++;
 }
-validate47.errors = vErrors;
+validate48.errors = vErrors;
 return errors === 0;
 }
 
-const schema80 = {"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}};
-const schema82 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
+const schema81 = {"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}};
+const schema83 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
 
-function validate51(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate52(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(!(data && typeof data == "object" && !Array.isArray(data))){
-const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.type,parentSchema:schema82,data};
+const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.type,parentSchema:schema83,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3380,7 +3437,7 @@ let passing0 = null;
 const _errs2 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.fractionOfSpan === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema82.oneOf[0].required,parentSchema:schema82.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema83.oneOf[0].required,parentSchema:schema83.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3391,7 +3448,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(key0 === "fractionOfSpan")){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema82.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema83.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3428,7 +3485,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.oneOf[0].type,parentSchema:schema82.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.oneOf[0].type,parentSchema:schema83.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3445,7 +3502,7 @@ passing0 = 0;
 const _errs9 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.absolute === undefined){
-const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema82.oneOf[1].required,parentSchema:schema82.oneOf[1],data};
+const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema83.oneOf[1].required,parentSchema:schema83.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3456,7 +3513,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(key1 === "absolute")){
-const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema82.oneOf[1],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema83.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3493,7 +3550,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.oneOf[1].type,parentSchema:schema82.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.oneOf[1].type,parentSchema:schema83.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3514,7 +3571,7 @@ passing0 = 1;
 }
 }
 if(!valid0){
-const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema82.oneOf,parentSchema:schema82,data};
+const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema83.oneOf,parentSchema:schema83,data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3534,18 +3591,18 @@ vErrors = null;
 }
 }
 }
-validate51.errors = vErrors;
+validate52.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate49(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate50(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((((((((key0 === "noSlackGroups") || (key0 === "sagLimits")) || (key0 === "displacementLimits")) || (key0 === "tiltLimits")) || (key0 === "upliftNodes")) || (key0 === "minimumTension")) || (key0 === "memberDesign")) || (key0 === "twistLimits"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema80,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema81,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3569,7 +3626,7 @@ for(let i0=0; i0<len0; i0++){
 let data2 = data1[i0];
 if(data2 && typeof data2 == "object" && !Array.isArray(data2)){
 if(data2.group === undefined){
-const err1 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema80.properties.sagLimits.items.required,parentSchema:schema80.properties.sagLimits.items,data:data2};
+const err1 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema81.properties.sagLimits.items.required,parentSchema:schema81.properties.sagLimits.items,data:data2};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3579,7 +3636,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data2.limit === undefined){
-const err2 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema80.properties.sagLimits.items.required,parentSchema:schema80.properties.sagLimits.items,data:data2};
+const err2 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema81.properties.sagLimits.items.required,parentSchema:schema81.properties.sagLimits.items,data:data2};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3590,7 +3647,7 @@ errors++;
 }
 for(const key1 in data2){
 if(!((key1 === "group") || (key1 === "limit"))){
-const err3 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.sagLimits.items,data:data2};
+const err3 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.sagLimits.items,data:data2};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3626,14 +3683,14 @@ errors++;
 }
 }
 if(data2.limit !== undefined){
-if(!(validate51(data2.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data2,parentDataProperty:"limit",rootData}))){
-vErrors = vErrors === null ? validate51.errors : vErrors.concat(validate51.errors);
+if(!(validate52(data2.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data2,parentDataProperty:"limit",rootData}))){
+vErrors = vErrors === null ? validate52.errors : vErrors.concat(validate52.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.sagLimits.items.type,parentSchema:schema80.properties.sagLimits.items,data:data2};
+const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.sagLimits.items.type,parentSchema:schema81.properties.sagLimits.items,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3645,7 +3702,7 @@ errors++;
 }
 }
 else {
-const err7 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.sagLimits.type,parentSchema:schema80.properties.sagLimits,data:data1};
+const err7 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.sagLimits.type,parentSchema:schema81.properties.sagLimits,data:data1};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3663,7 +3720,7 @@ for(let i1=0; i1<len1; i1++){
 let data6 = data5[i1];
 if(data6 && typeof data6 == "object" && !Array.isArray(data6)){
 if(data6.node === undefined){
-const err8 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema80.properties.displacementLimits.items.required,parentSchema:schema80.properties.displacementLimits.items,data:data6};
+const err8 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema81.properties.displacementLimits.items.required,parentSchema:schema81.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3673,7 +3730,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data6.limit === undefined){
-const err9 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema80.properties.displacementLimits.items.required,parentSchema:schema80.properties.displacementLimits.items,data:data6};
+const err9 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema81.properties.displacementLimits.items.required,parentSchema:schema81.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3684,7 +3741,7 @@ errors++;
 }
 for(const key2 in data6){
 if(!(((key2 === "node") || (key2 === "limit")) || (key2 === "direction"))){
-const err10 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.displacementLimits.items,data:data6};
+const err10 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3751,7 +3808,7 @@ let valid10 = false;
 let passing0 = null;
 const _errs28 = errors;
 if(!((data9 === "horizontal") || (data9 === "total"))){
-const err15 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf/0/enum",keyword:"enum",params:{allowedValues: schema80.properties.displacementLimits.items.properties.direction.oneOf[0].enum},message:"must be equal to one of the allowed values",schema:schema80.properties.displacementLimits.items.properties.direction.oneOf[0].enum,parentSchema:schema80.properties.displacementLimits.items.properties.direction.oneOf[0],data:data9};
+const err15 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf/0/enum",keyword:"enum",params:{allowedValues: schema81.properties.displacementLimits.items.properties.direction.oneOf[0].enum},message:"must be equal to one of the allowed values",schema:schema81.properties.displacementLimits.items.properties.direction.oneOf[0].enum,parentSchema:schema81.properties.displacementLimits.items.properties.direction.oneOf[0],data:data9};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3824,7 +3881,7 @@ passing0 = 1;
 }
 }
 if(!valid10){
-const err20 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema80.properties.displacementLimits.items.properties.direction.oneOf,parentSchema:schema80.properties.displacementLimits.items.properties.direction,data:data9};
+const err20 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema81.properties.displacementLimits.items.properties.direction.oneOf,parentSchema:schema81.properties.displacementLimits.items.properties.direction,data:data9};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -3847,7 +3904,7 @@ vErrors = null;
 }
 }
 else {
-const err21 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.displacementLimits.items.type,parentSchema:schema80.properties.displacementLimits.items,data:data6};
+const err21 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.displacementLimits.items.type,parentSchema:schema81.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -3859,7 +3916,7 @@ errors++;
 }
 }
 else {
-const err22 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.displacementLimits.type,parentSchema:schema80.properties.displacementLimits,data:data5};
+const err22 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.displacementLimits.type,parentSchema:schema81.properties.displacementLimits,data:data5};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -3877,7 +3934,7 @@ for(let i3=0; i3<len3; i3++){
 let data12 = data11[i3];
 if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
 if(data12.base === undefined){
-const err23 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema80.properties.tiltLimits.items.required,parentSchema:schema80.properties.tiltLimits.items,data:data12};
+const err23 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema81.properties.tiltLimits.items.required,parentSchema:schema81.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -3887,7 +3944,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data12.top === undefined){
-const err24 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema80.properties.tiltLimits.items.required,parentSchema:schema80.properties.tiltLimits.items,data:data12};
+const err24 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema81.properties.tiltLimits.items.required,parentSchema:schema81.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -3897,7 +3954,7 @@ vErrors.push(err24);
 errors++;
 }
 if(data12.limit === undefined){
-const err25 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema80.properties.tiltLimits.items.required,parentSchema:schema80.properties.tiltLimits.items,data:data12};
+const err25 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema81.properties.tiltLimits.items.required,parentSchema:schema81.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -3908,7 +3965,7 @@ errors++;
 }
 for(const key3 in data12){
 if(!(((key3 === "base") || (key3 === "top")) || (key3 === "limit"))){
-const err26 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.tiltLimits.items,data:data12};
+const err26 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -3995,7 +4052,7 @@ errors++;
 }
 }
 else {
-const err33 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.tiltLimits.items.type,parentSchema:schema80.properties.tiltLimits.items,data:data12};
+const err33 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.tiltLimits.items.type,parentSchema:schema81.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -4007,7 +4064,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.tiltLimits.type,parentSchema:schema80.properties.tiltLimits,data:data11};
+const err34 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.tiltLimits.type,parentSchema:schema81.properties.tiltLimits,data:data11};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -4031,7 +4088,7 @@ for(let i4=0; i4<len4; i4++){
 let data18 = data17[i4];
 if(data18 && typeof data18 == "object" && !Array.isArray(data18)){
 if(data18.group === undefined){
-const err35 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema80.properties.minimumTension.items.required,parentSchema:schema80.properties.minimumTension.items,data:data18};
+const err35 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema81.properties.minimumTension.items.required,parentSchema:schema81.properties.minimumTension.items,data:data18};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -4042,7 +4099,7 @@ errors++;
 }
 for(const key4 in data18){
 if(!(((key4 === "group") || (key4 === "shareOfInstallation")) || (key4 === "shareOfBreaking"))){
-const err36 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.minimumTension.items,data:data18};
+const err36 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.minimumTension.items,data:data18};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -4081,7 +4138,7 @@ if(data18.shareOfInstallation !== undefined){
 let data20 = data18.shareOfInstallation;
 if((typeof data20 == "number") && (isFinite(data20))){
 if(data20 > 1 || isNaN(data20)){
-const err39 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema80.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
+const err39 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema81.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -4091,7 +4148,7 @@ vErrors.push(err39);
 errors++;
 }
 if(data20 <= 0 || isNaN(data20)){
-const err40 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema80.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
+const err40 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema81.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -4102,7 +4159,7 @@ errors++;
 }
 }
 else {
-const err41 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema80.properties.minimumTension.items.properties.shareOfInstallation.type,parentSchema:schema80.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
+const err41 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema81.properties.minimumTension.items.properties.shareOfInstallation.type,parentSchema:schema81.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -4116,7 +4173,7 @@ if(data18.shareOfBreaking !== undefined){
 let data21 = data18.shareOfBreaking;
 if((typeof data21 == "number") && (isFinite(data21))){
 if(data21 > 1 || isNaN(data21)){
-const err42 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema80.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
+const err42 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema81.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
 if(vErrors === null){
 vErrors = [err42];
 }
@@ -4126,7 +4183,7 @@ vErrors.push(err42);
 errors++;
 }
 if(data21 <= 0 || isNaN(data21)){
-const err43 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema80.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
+const err43 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema81.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
 if(vErrors === null){
 vErrors = [err43];
 }
@@ -4137,7 +4194,7 @@ errors++;
 }
 }
 else {
-const err44 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema80.properties.minimumTension.items.properties.shareOfBreaking.type,parentSchema:schema80.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
+const err44 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema81.properties.minimumTension.items.properties.shareOfBreaking.type,parentSchema:schema81.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
 if(vErrors === null){
 vErrors = [err44];
 }
@@ -4149,7 +4206,7 @@ errors++;
 }
 }
 else {
-const err45 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.minimumTension.items.type,parentSchema:schema80.properties.minimumTension.items,data:data18};
+const err45 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.minimumTension.items.type,parentSchema:schema81.properties.minimumTension.items,data:data18};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -4161,7 +4218,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath:instancePath+"/minimumTension",schemaPath:"#/properties/minimumTension/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.minimumTension.type,parentSchema:schema80.properties.minimumTension,data:data17};
+const err46 = {instancePath:instancePath+"/minimumTension",schemaPath:"#/properties/minimumTension/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.minimumTension.type,parentSchema:schema81.properties.minimumTension,data:data17};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -4179,7 +4236,7 @@ for(let i5=0; i5<len5; i5++){
 let data23 = data22[i5];
 if(data23 && typeof data23 == "object" && !Array.isArray(data23)){
 if(data23.group === undefined){
-const err47 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema80.properties.memberDesign.items.required,parentSchema:schema80.properties.memberDesign.items,data:data23};
+const err47 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema81.properties.memberDesign.items.required,parentSchema:schema81.properties.memberDesign.items,data:data23};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -4190,7 +4247,7 @@ errors++;
 }
 for(const key5 in data23){
 if(!(((((key5 === "group") || (key5 === "role")) || (key5 === "bucklingLengthFactor")) || (key5 === "bucklingLength")) || (key5 === "slendernessLimit"))){
-const err48 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.memberDesign.items,data:data23};
+const err48 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.memberDesign.items,data:data23};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -4228,7 +4285,7 @@ errors++;
 if(data23.role !== undefined){
 let data25 = data23.role;
 if(!((((data25 === "leg") || (data25 === "bracing")) || (data25 === "redundant")) || (data25 === "other"))){
-const err51 = {instancePath:instancePath+"/memberDesign/" + i5+"/role",schemaPath:"#/properties/memberDesign/items/properties/role/enum",keyword:"enum",params:{allowedValues: schema80.properties.memberDesign.items.properties.role.enum},message:"must be equal to one of the allowed values",schema:schema80.properties.memberDesign.items.properties.role.enum,parentSchema:schema80.properties.memberDesign.items.properties.role,data:data25};
+const err51 = {instancePath:instancePath+"/memberDesign/" + i5+"/role",schemaPath:"#/properties/memberDesign/items/properties/role/enum",keyword:"enum",params:{allowedValues: schema81.properties.memberDesign.items.properties.role.enum},message:"must be equal to one of the allowed values",schema:schema81.properties.memberDesign.items.properties.role.enum,parentSchema:schema81.properties.memberDesign.items.properties.role,data:data25};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -4315,7 +4372,7 @@ errors++;
 }
 }
 else {
-const err58 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.memberDesign.items.type,parentSchema:schema80.properties.memberDesign.items,data:data23};
+const err58 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.memberDesign.items.type,parentSchema:schema81.properties.memberDesign.items,data:data23};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -4327,7 +4384,7 @@ errors++;
 }
 }
 else {
-const err59 = {instancePath:instancePath+"/memberDesign",schemaPath:"#/properties/memberDesign/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.memberDesign.type,parentSchema:schema80.properties.memberDesign,data:data22};
+const err59 = {instancePath:instancePath+"/memberDesign",schemaPath:"#/properties/memberDesign/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.memberDesign.type,parentSchema:schema81.properties.memberDesign,data:data22};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -4345,7 +4402,7 @@ for(let i6=0; i6<len6; i6++){
 let data30 = data29[i6];
 if(data30 && typeof data30 == "object" && !Array.isArray(data30)){
 if(data30.nodes === undefined){
-const err60 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema80.properties.twistLimits.items.required,parentSchema:schema80.properties.twistLimits.items,data:data30};
+const err60 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema81.properties.twistLimits.items.required,parentSchema:schema81.properties.twistLimits.items,data:data30};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -4355,7 +4412,7 @@ vErrors.push(err60);
 errors++;
 }
 if(data30.limit === undefined){
-const err61 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema80.properties.twistLimits.items.required,parentSchema:schema80.properties.twistLimits.items,data:data30};
+const err61 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema81.properties.twistLimits.items.required,parentSchema:schema81.properties.twistLimits.items,data:data30};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -4366,7 +4423,7 @@ errors++;
 }
 for(const key6 in data30){
 if(!((key6 === "nodes") || (key6 === "limit"))){
-const err62 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key6},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.twistLimits.items,data:data30};
+const err62 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key6},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.twistLimits.items,data:data30};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -4380,7 +4437,7 @@ if(data30.nodes !== undefined){
 let data31 = data30.nodes;
 if(Array.isArray(data31)){
 if(data31.length < 2){
-const err63 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema80.properties.twistLimits.items.properties.nodes,data:data31};
+const err63 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema81.properties.twistLimits.items.properties.nodes,data:data31};
 if(vErrors === null){
 vErrors = [err63];
 }
@@ -4417,7 +4474,7 @@ errors++;
 }
 }
 else {
-const err66 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.twistLimits.items.properties.nodes.type,parentSchema:schema80.properties.twistLimits.items.properties.nodes,data:data31};
+const err66 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.twistLimits.items.properties.nodes.type,parentSchema:schema81.properties.twistLimits.items.properties.nodes,data:data31};
 if(vErrors === null){
 vErrors = [err66];
 }
@@ -4454,7 +4511,7 @@ errors++;
 }
 }
 else {
-const err69 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.twistLimits.items.type,parentSchema:schema80.properties.twistLimits.items,data:data30};
+const err69 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.twistLimits.items.type,parentSchema:schema81.properties.twistLimits.items,data:data30};
 if(vErrors === null){
 vErrors = [err69];
 }
@@ -4466,7 +4523,7 @@ errors++;
 }
 }
 else {
-const err70 = {instancePath:instancePath+"/twistLimits",schemaPath:"#/properties/twistLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.twistLimits.type,parentSchema:schema80.properties.twistLimits,data:data29};
+const err70 = {instancePath:instancePath+"/twistLimits",schemaPath:"#/properties/twistLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.twistLimits.type,parentSchema:schema81.properties.twistLimits,data:data29};
 if(vErrors === null){
 vErrors = [err70];
 }
@@ -4478,7 +4535,7 @@ errors++;
 }
 }
 else {
-const err71 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.type,parentSchema:schema80,data};
+const err71 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.type,parentSchema:schema81,data};
 if(vErrors === null){
 vErrors = [err71];
 }
@@ -4487,19 +4544,19 @@ vErrors.push(err71);
 }
 errors++;
 }
-validate49.errors = vErrors;
+validate50.errors = vErrors;
 return errors === 0;
 }
 
-const schema98 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
-const schema100 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
+const schema99 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
+const schema101 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
 
-function validate56(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate57(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.required,parentSchema:schema100,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema101.required,parentSchema:schema101,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4513,7 +4570,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "sag"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.oneOf[0].required,parentSchema:schema100.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema101.oneOf[0].required,parentSchema:schema101.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -4523,7 +4580,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.group === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema100.oneOf[0].required,parentSchema:schema100.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema101.oneOf[0].required,parentSchema:schema101.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -4533,7 +4590,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.case === undefined){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema100.oneOf[0].required,parentSchema:schema100.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema101.oneOf[0].required,parentSchema:schema101.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -4543,7 +4600,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.limit === undefined){
-const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema100.oneOf[0].required,parentSchema:schema100.oneOf[0],data};
+const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema101.oneOf[0].required,parentSchema:schema101.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -4554,7 +4611,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "kind") || (key0 === "group")) || (key0 === "case")) || (key0 === "limit"))){
-const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema100.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema101.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -4567,7 +4624,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("sag" !== data0){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema100.oneOf[0].properties.kind,data:data0};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema101.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -4628,14 +4685,14 @@ errors++;
 }
 }
 if(data.limit !== undefined){
-if(!(validate51(data.limit, {instancePath:instancePath+"/limit",parentData:data,parentDataProperty:"limit",rootData}))){
-vErrors = vErrors === null ? validate51.errors : vErrors.concat(validate51.errors);
+if(!(validate52(data.limit, {instancePath:instancePath+"/limit",parentData:data,parentDataProperty:"limit",rootData}))){
+vErrors = vErrors === null ? validate52.errors : vErrors.concat(validate52.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.oneOf[0].type,parentSchema:schema100.oneOf[0],data};
+const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema101.oneOf[0].type,parentSchema:schema101.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -4648,7 +4705,7 @@ errors++;
 else if(tag0 === "tensionShare"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.oneOf[1].required,parentSchema:schema100.oneOf[1],data};
+const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema101.oneOf[1].required,parentSchema:schema101.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -4658,7 +4715,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data.group === undefined){
-const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema100.oneOf[1].required,parentSchema:schema100.oneOf[1],data};
+const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema101.oneOf[1].required,parentSchema:schema101.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -4668,7 +4725,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data.share === undefined){
-const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema100.oneOf[1].required,parentSchema:schema100.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema101.oneOf[1].required,parentSchema:schema101.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -4679,7 +4736,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(((key1 === "kind") || (key1 === "group")) || (key1 === "share"))){
-const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema100.oneOf[1],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema101.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -4692,7 +4749,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("tensionShare" !== data4){
-const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema100.oneOf[1].properties.kind,data:data4};
+const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema101.oneOf[1].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -4754,7 +4811,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.oneOf[1].type,parentSchema:schema100.oneOf[1],data};
+const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema101.oneOf[1].type,parentSchema:schema101.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -4767,7 +4824,7 @@ errors++;
 else if(tag0 === "noSlack"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.oneOf[2].required,parentSchema:schema100.oneOf[2],data};
+const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema101.oneOf[2].required,parentSchema:schema101.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -4777,7 +4834,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data.group === undefined){
-const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema100.oneOf[2].required,parentSchema:schema100.oneOf[2],data};
+const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema101.oneOf[2].required,parentSchema:schema101.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -4787,7 +4844,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data.case === undefined){
-const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema100.oneOf[2].required,parentSchema:schema100.oneOf[2],data};
+const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema101.oneOf[2].required,parentSchema:schema101.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -4798,7 +4855,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(((key2 === "kind") || (key2 === "group")) || (key2 === "case"))){
-const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema100.oneOf[2],data};
+const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema101.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -4811,7 +4868,7 @@ errors++;
 if(data.kind !== undefined){
 let data7 = data.kind;
 if("noSlack" !== data7){
-const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema100.oneOf[2].properties.kind,data:data7};
+const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema101.oneOf[2].properties.kind,data:data7};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -4873,7 +4930,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.oneOf[2].type,parentSchema:schema100.oneOf[2],data};
+const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema101.oneOf[2].type,parentSchema:schema101.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -4886,7 +4943,7 @@ errors++;
 else if(tag0 === "plumb"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.oneOf[3].required,parentSchema:schema100.oneOf[3],data};
+const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema101.oneOf[3].required,parentSchema:schema101.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -4896,7 +4953,7 @@ vErrors.push(err32);
 errors++;
 }
 if(data.base === undefined){
-const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema100.oneOf[3].required,parentSchema:schema100.oneOf[3],data};
+const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema101.oneOf[3].required,parentSchema:schema101.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -4906,7 +4963,7 @@ vErrors.push(err33);
 errors++;
 }
 if(data.top === undefined){
-const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema100.oneOf[3].required,parentSchema:schema100.oneOf[3],data};
+const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema101.oneOf[3].required,parentSchema:schema101.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -4916,7 +4973,7 @@ vErrors.push(err34);
 errors++;
 }
 if(data.case === undefined){
-const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema100.oneOf[3].required,parentSchema:schema100.oneOf[3],data};
+const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema101.oneOf[3].required,parentSchema:schema101.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -4926,7 +4983,7 @@ vErrors.push(err35);
 errors++;
 }
 if(data.tolerance === undefined){
-const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema100.oneOf[3].required,parentSchema:schema100.oneOf[3],data};
+const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema101.oneOf[3].required,parentSchema:schema101.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -4937,7 +4994,7 @@ errors++;
 }
 for(const key3 in data){
 if(!(((((key3 === "kind") || (key3 === "base")) || (key3 === "top")) || (key3 === "case")) || (key3 === "tolerance"))){
-const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema100.oneOf[3],data};
+const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema101.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -4950,7 +5007,7 @@ errors++;
 if(data.kind !== undefined){
 let data10 = data.kind;
 if("plumb" !== data10){
-const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema100.oneOf[3].properties.kind,data:data10};
+const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema101.oneOf[3].properties.kind,data:data10};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -5062,7 +5119,7 @@ errors++;
 }
 }
 else {
-const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.oneOf[3].type,parentSchema:schema100.oneOf[3],data};
+const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema101.oneOf[3].type,parentSchema:schema101.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -5075,7 +5132,7 @@ errors++;
 else if(tag0 === "reaction"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.oneOf[4].required,parentSchema:schema100.oneOf[4],data};
+const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema101.oneOf[4].required,parentSchema:schema101.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -5085,7 +5142,7 @@ vErrors.push(err48);
 errors++;
 }
 if(data.node === undefined){
-const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema100.oneOf[4].required,parentSchema:schema100.oneOf[4],data};
+const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema101.oneOf[4].required,parentSchema:schema101.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -5095,7 +5152,7 @@ vErrors.push(err49);
 errors++;
 }
 if(data.case === undefined){
-const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema100.oneOf[4].required,parentSchema:schema100.oneOf[4],data};
+const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema101.oneOf[4].required,parentSchema:schema101.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -5105,7 +5162,7 @@ vErrors.push(err50);
 errors++;
 }
 if(data.limit === undefined){
-const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema100.oneOf[4].required,parentSchema:schema100.oneOf[4],data};
+const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema101.oneOf[4].required,parentSchema:schema101.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -5116,7 +5173,7 @@ errors++;
 }
 for(const key4 in data){
 if(!((((key4 === "kind") || (key4 === "node")) || (key4 === "case")) || (key4 === "limit"))){
-const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema100.oneOf[4],data};
+const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema101.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -5129,7 +5186,7 @@ errors++;
 if(data.kind !== undefined){
 let data15 = data.kind;
 if("reaction" !== data15){
-const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema100.oneOf[4].properties.kind,data:data15};
+const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema101.oneOf[4].properties.kind,data:data15};
 if(vErrors === null){
 vErrors = [err53];
 }
@@ -5192,7 +5249,7 @@ errors++;
 if(data.limit !== undefined){
 let data18 = data.limit;
 if(!((typeof data18 == "number") && (isFinite(data18)))){
-const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema100.oneOf[4].properties.limit.type,parentSchema:schema100.oneOf[4].properties.limit,data:data18};
+const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema101.oneOf[4].properties.limit.type,parentSchema:schema101.oneOf[4].properties.limit,data:data18};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -5204,7 +5261,7 @@ errors++;
 }
 }
 else {
-const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.oneOf[4].type,parentSchema:schema100.oneOf[4],data};
+const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema101.oneOf[4].type,parentSchema:schema101.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -5215,7 +5272,7 @@ errors++;
 }
 }
 else {
-const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema100.discriminator,parentSchema:schema100,data};
+const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema101.discriminator,parentSchema:schema101,data};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -5226,7 +5283,7 @@ errors++;
 }
 }
 else {
-const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema100.discriminator,parentSchema:schema100,data};
+const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema101.discriminator,parentSchema:schema101,data};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -5237,7 +5294,7 @@ errors++;
 }
 }
 else {
-const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.type,parentSchema:schema100,data};
+const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema101.type,parentSchema:schema101,data};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -5246,17 +5303,17 @@ vErrors.push(err62);
 }
 errors++;
 }
-validate56.errors = vErrors;
+validate57.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate55(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate56(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.variables === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema98.required,parentSchema:schema98,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema99.required,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5266,7 +5323,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.targets === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema98.required,parentSchema:schema98,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema99.required,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5277,7 +5334,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "variables") || (key0 === "targets")) || (key0 === "lastRun"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema98,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5295,7 +5352,7 @@ for(let i0=0; i0<len0; i0++){
 let data1 = data0[i0];
 if(data1 && typeof data1 == "object" && !Array.isArray(data1)){
 if(data1.group === undefined){
-const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema98.properties.variables.items.required,parentSchema:schema98.properties.variables.items,data:data1};
+const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema99.properties.variables.items.required,parentSchema:schema99.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5305,7 +5362,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data1.by === undefined){
-const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema98.properties.variables.items.required,parentSchema:schema98.properties.variables.items,data:data1};
+const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema99.properties.variables.items.required,parentSchema:schema99.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -5316,7 +5373,7 @@ errors++;
 }
 for(const key1 in data1){
 if(!((((key1 === "group") || (key1 === "by")) || (key1 === "min")) || (key1 === "max"))){
-const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema98.properties.variables.items,data:data1};
+const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema99.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -5354,7 +5411,7 @@ errors++;
 if(data1.by !== undefined){
 let data3 = data1.by;
 if(!((data3 === "pretension") || (data3 === "unstressedLength"))){
-const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema98.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema98.properties.variables.items.properties.by.enum,parentSchema:schema98.properties.variables.items.properties.by,data:data3};
+const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema99.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema99.properties.variables.items.properties.by.enum,parentSchema:schema99.properties.variables.items.properties.by,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -5367,7 +5424,7 @@ errors++;
 if(data1.min !== undefined){
 let data4 = data1.min;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema98.properties.variables.items.properties.min.type,parentSchema:schema98.properties.variables.items.properties.min,data:data4};
+const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema99.properties.variables.items.properties.min.type,parentSchema:schema99.properties.variables.items.properties.min,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -5380,7 +5437,7 @@ errors++;
 if(data1.max !== undefined){
 let data5 = data1.max;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema98.properties.variables.items.properties.max.type,parentSchema:schema98.properties.variables.items.properties.max,data:data5};
+const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema99.properties.variables.items.properties.max.type,parentSchema:schema99.properties.variables.items.properties.max,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -5392,7 +5449,7 @@ errors++;
 }
 }
 else {
-const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.properties.variables.items.type,parentSchema:schema98.properties.variables.items,data:data1};
+const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema99.properties.variables.items.type,parentSchema:schema99.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -5404,7 +5461,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema98.properties.variables.type,parentSchema:schema98.properties.variables,data:data0};
+const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema99.properties.variables.type,parentSchema:schema99.properties.variables,data:data0};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -5419,14 +5476,14 @@ let data6 = data.targets;
 if(Array.isArray(data6)){
 const len1 = data6.length;
 for(let i1=0; i1<len1; i1++){
-if(!(validate56(data6[i1], {instancePath:instancePath+"/targets/" + i1,parentData:data6,parentDataProperty:i1,rootData}))){
-vErrors = vErrors === null ? validate56.errors : vErrors.concat(validate56.errors);
+if(!(validate57(data6[i1], {instancePath:instancePath+"/targets/" + i1,parentData:data6,parentDataProperty:i1,rootData}))){
+vErrors = vErrors === null ? validate57.errors : vErrors.concat(validate57.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema98.properties.targets.type,parentSchema:schema98.properties.targets,data:data6};
+const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema99.properties.targets.type,parentSchema:schema99.properties.targets,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -5440,7 +5497,7 @@ if(data.lastRun !== undefined){
 let data8 = data.lastRun;
 if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
 if(data8.date === undefined){
-const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema98.properties.lastRun.required,parentSchema:schema98.properties.lastRun,data:data8};
+const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema99.properties.lastRun.required,parentSchema:schema99.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -5450,7 +5507,7 @@ vErrors.push(err14);
 errors++;
 }
 if(data8.summary === undefined){
-const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema98.properties.lastRun.required,parentSchema:schema98.properties.lastRun,data:data8};
+const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema99.properties.lastRun.required,parentSchema:schema99.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -5461,7 +5518,7 @@ errors++;
 }
 for(const key2 in data8){
 if(!((key2 === "date") || (key2 === "summary"))){
-const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema98.properties.lastRun,data:data8};
+const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema99.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -5474,7 +5531,7 @@ errors++;
 if(data8.date !== undefined){
 let data9 = data8.date;
 if(typeof data9 !== "string"){
-const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema98.properties.lastRun.properties.date.type,parentSchema:schema98.properties.lastRun.properties.date,data:data9};
+const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema99.properties.lastRun.properties.date.type,parentSchema:schema99.properties.lastRun.properties.date,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -5487,7 +5544,7 @@ errors++;
 if(data8.summary !== undefined){
 let data10 = data8.summary;
 if(typeof data10 !== "string"){
-const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema98.properties.lastRun.properties.summary.type,parentSchema:schema98.properties.lastRun.properties.summary,data:data10};
+const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema99.properties.lastRun.properties.summary.type,parentSchema:schema99.properties.lastRun.properties.summary,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -5499,7 +5556,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.properties.lastRun.type,parentSchema:schema98.properties.lastRun,data:data8};
+const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema99.properties.lastRun.type,parentSchema:schema99.properties.lastRun,data:data8};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -5511,7 +5568,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.type,parentSchema:schema98,data};
+const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema99.type,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -5520,19 +5577,19 @@ vErrors.push(err20);
 }
 errors++;
 }
-validate55.errors = vErrors;
+validate56.errors = vErrors;
 return errors === 0;
 }
 
-const schema113 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
+const schema114 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
 
-function validate60(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate61(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!(key0 === "temperatures")){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema113,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema114,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5573,7 +5630,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema113.properties.temperatures.type,parentSchema:schema113.properties.temperatures,data:data0};
+const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema114.properties.temperatures.type,parentSchema:schema114.properties.temperatures,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5585,7 +5642,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.type,parentSchema:schema113,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema114.type,parentSchema:schema114,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -5594,18 +5651,18 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate60.errors = vErrors;
+validate61.errors = vErrors;
 return errors === 0;
 }
 
-const schema115 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
+const schema116 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
 
-function validate62(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate63(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema115.required,parentSchema:schema115,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema116.required,parentSchema:schema116,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5615,7 +5672,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema115.required,parentSchema:schema115,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema116.required,parentSchema:schema116,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5625,7 +5682,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.params === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema115.required,parentSchema:schema115,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema116.required,parentSchema:schema116,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5636,7 +5693,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "kind")) || (key0 === "params"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema115,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema116,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5674,7 +5731,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "guyedMast") || (data1 === "saddleNet")) || (data1 === "radialNet"))){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema115.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema115.properties.kind.enum,parentSchema:schema115.properties.kind,data:data1};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema116.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema116.properties.kind.enum,parentSchema:schema116.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -5687,7 +5744,7 @@ errors++;
 if(data.params !== undefined){
 let data2 = data.params;
 if(!(data2 && typeof data2 == "object" && !Array.isArray(data2))){
-const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.properties.params.type,parentSchema:schema115.properties.params,data:data2};
+const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema116.properties.params.type,parentSchema:schema116.properties.params,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -5699,7 +5756,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.type,parentSchema:schema115,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema116.type,parentSchema:schema116,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -5708,19 +5765,19 @@ vErrors.push(err8);
 }
 errors++;
 }
-validate62.errors = vErrors;
+validate63.errors = vErrors;
 return errors === 0;
 }
 
-const schema117 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
+const schema118 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
 
-function validate64(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate65(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((key0 === "units") || (key0 === "deformationScale"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema117,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema118,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5733,7 +5790,7 @@ errors++;
 if(data.units !== undefined){
 let data0 = data.units;
 if(!((data0 === "SI") || (data0 === "US"))){
-const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema117.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema117.properties.units.enum,parentSchema:schema117.properties.units,data:data0};
+const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema118.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema118.properties.units.enum,parentSchema:schema118.properties.units,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5770,7 +5827,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema117.type,parentSchema:schema117,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema118.type,parentSchema:schema118,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -5779,18 +5836,18 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate64.errors = vErrors;
+validate65.errors = vErrors;
 return errors === 0;
 }
 
-const schema119 = {"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}};
+const schema120 = {"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}};
 
-function validate66(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate67(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.format === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "format"},message:"must have required property '"+"format"+"'",schema:schema119.required,parentSchema:schema119,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "format"},message:"must have required property '"+"format"+"'",schema:schema120.required,parentSchema:schema120,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5801,7 +5858,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "format") || (key0 === "label")) || (key0 === "actionFactors")) || (key0 === "combinationFactors")) || (key0 === "cable")) || (key0 === "steel")) || (key0 === "allowable"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema119,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema120,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5814,7 +5871,7 @@ errors++;
 if(data.format !== undefined){
 let data0 = data.format;
 if(!((data0 === "limitState") || (data0 === "allowable"))){
-const err2 = {instancePath:instancePath+"/format",schemaPath:"#/properties/format/enum",keyword:"enum",params:{allowedValues: schema119.properties.format.enum},message:"must be equal to one of the allowed values",schema:schema119.properties.format.enum,parentSchema:schema119.properties.format,data:data0};
+const err2 = {instancePath:instancePath+"/format",schemaPath:"#/properties/format/enum",keyword:"enum",params:{allowedValues: schema120.properties.format.enum},message:"must be equal to one of the allowed values",schema:schema120.properties.format.enum,parentSchema:schema120.properties.format,data:data0};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5827,7 +5884,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err3 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema119.properties.label.type,parentSchema:schema119.properties.label,data:data1};
+const err3 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema120.properties.label.type,parentSchema:schema120.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5842,7 +5899,7 @@ let data2 = data.actionFactors;
 if(data2 && typeof data2 == "object" && !Array.isArray(data2)){
 for(const key1 in data2){
 if(!(((((((key1 === "permanent") || (key1 === "permanentFavourable")) || (key1 === "prestress")) || (key1 === "wind")) || (key1 === "ice")) || (key1 === "temperature")) || (key1 === "accidental"))){
-const err4 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.actionFactors,data:data2};
+const err4 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema120.properties.actionFactors,data:data2};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -6029,7 +6086,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.actionFactors.type,parentSchema:schema119.properties.actionFactors,data:data2};
+const err19 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema120.properties.actionFactors.type,parentSchema:schema120.properties.actionFactors,data:data2};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -6044,7 +6101,7 @@ let data10 = data.combinationFactors;
 if(data10 && typeof data10 == "object" && !Array.isArray(data10)){
 for(const key2 in data10){
 if(!(((key2 === "wind") || (key2 === "ice")) || (key2 === "temperature"))){
-const err20 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.combinationFactors,data:data10};
+const err20 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema120.properties.combinationFactors,data:data10};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -6058,7 +6115,7 @@ if(data10.wind !== undefined){
 let data11 = data10.wind;
 if((typeof data11 == "number") && (isFinite(data11))){
 if(data11 > 1 || isNaN(data11)){
-const err21 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.combinationFactors.properties.wind,data:data11};
+const err21 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema120.properties.combinationFactors.properties.wind,data:data11};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -6068,7 +6125,7 @@ vErrors.push(err21);
 errors++;
 }
 if(data11 < 0 || isNaN(data11)){
-const err22 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema119.properties.combinationFactors.properties.wind,data:data11};
+const err22 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema120.properties.combinationFactors.properties.wind,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -6079,7 +6136,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.combinationFactors.properties.wind.type,parentSchema:schema119.properties.combinationFactors.properties.wind,data:data11};
+const err23 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema120.properties.combinationFactors.properties.wind.type,parentSchema:schema120.properties.combinationFactors.properties.wind,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -6093,7 +6150,7 @@ if(data10.ice !== undefined){
 let data12 = data10.ice;
 if((typeof data12 == "number") && (isFinite(data12))){
 if(data12 > 1 || isNaN(data12)){
-const err24 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.combinationFactors.properties.ice,data:data12};
+const err24 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema120.properties.combinationFactors.properties.ice,data:data12};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -6103,7 +6160,7 @@ vErrors.push(err24);
 errors++;
 }
 if(data12 < 0 || isNaN(data12)){
-const err25 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema119.properties.combinationFactors.properties.ice,data:data12};
+const err25 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema120.properties.combinationFactors.properties.ice,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -6114,7 +6171,7 @@ errors++;
 }
 }
 else {
-const err26 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.combinationFactors.properties.ice.type,parentSchema:schema119.properties.combinationFactors.properties.ice,data:data12};
+const err26 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema120.properties.combinationFactors.properties.ice.type,parentSchema:schema120.properties.combinationFactors.properties.ice,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -6128,7 +6185,7 @@ if(data10.temperature !== undefined){
 let data13 = data10.temperature;
 if((typeof data13 == "number") && (isFinite(data13))){
 if(data13 > 1 || isNaN(data13)){
-const err27 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.combinationFactors.properties.temperature,data:data13};
+const err27 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema120.properties.combinationFactors.properties.temperature,data:data13};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -6138,7 +6195,7 @@ vErrors.push(err27);
 errors++;
 }
 if(data13 < 0 || isNaN(data13)){
-const err28 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema119.properties.combinationFactors.properties.temperature,data:data13};
+const err28 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema120.properties.combinationFactors.properties.temperature,data:data13};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -6149,7 +6206,7 @@ errors++;
 }
 }
 else {
-const err29 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.combinationFactors.properties.temperature.type,parentSchema:schema119.properties.combinationFactors.properties.temperature,data:data13};
+const err29 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema120.properties.combinationFactors.properties.temperature.type,parentSchema:schema120.properties.combinationFactors.properties.temperature,data:data13};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -6161,7 +6218,7 @@ errors++;
 }
 }
 else {
-const err30 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.combinationFactors.type,parentSchema:schema119.properties.combinationFactors,data:data10};
+const err30 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema120.properties.combinationFactors.type,parentSchema:schema120.properties.combinationFactors,data:data10};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -6176,7 +6233,7 @@ let data14 = data.cable;
 if(data14 && typeof data14 == "object" && !Array.isArray(data14)){
 for(const key3 in data14){
 if(!(((key3 === "breakingFactor") || (key3 === "partialFactor")) || (key3 === "serviceabilityShare"))){
-const err31 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.cable,data:data14};
+const err31 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema120.properties.cable,data:data14};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -6240,7 +6297,7 @@ if(data14.serviceabilityShare !== undefined){
 let data17 = data14.serviceabilityShare;
 if((typeof data17 == "number") && (isFinite(data17))){
 if(data17 > 1 || isNaN(data17)){
-const err36 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.cable.properties.serviceabilityShare,data:data17};
+const err36 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema120.properties.cable.properties.serviceabilityShare,data:data17};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -6250,7 +6307,7 @@ vErrors.push(err36);
 errors++;
 }
 if(data17 <= 0 || isNaN(data17)){
-const err37 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema119.properties.cable.properties.serviceabilityShare,data:data17};
+const err37 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema120.properties.cable.properties.serviceabilityShare,data:data17};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -6261,7 +6318,7 @@ errors++;
 }
 }
 else {
-const err38 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.cable.properties.serviceabilityShare.type,parentSchema:schema119.properties.cable.properties.serviceabilityShare,data:data17};
+const err38 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema120.properties.cable.properties.serviceabilityShare.type,parentSchema:schema120.properties.cable.properties.serviceabilityShare,data:data17};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -6273,7 +6330,7 @@ errors++;
 }
 }
 else {
-const err39 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.cable.type,parentSchema:schema119.properties.cable,data:data14};
+const err39 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema120.properties.cable.type,parentSchema:schema120.properties.cable,data:data14};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -6288,7 +6345,7 @@ let data18 = data.steel;
 if(data18 && typeof data18 == "object" && !Array.isArray(data18)){
 for(const key4 in data18){
 if(!((key4 === "gammaM0") || (key4 === "gammaM1"))){
-const err40 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.steel,data:data18};
+const err40 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema120.properties.steel,data:data18};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -6350,7 +6407,7 @@ errors++;
 }
 }
 else {
-const err45 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.steel.type,parentSchema:schema119.properties.steel,data:data18};
+const err45 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema120.properties.steel.type,parentSchema:schema120.properties.steel,data:data18};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -6365,7 +6422,7 @@ let data21 = data.allowable;
 if(data21 && typeof data21 == "object" && !Array.isArray(data21)){
 for(const key5 in data21){
 if(!((key5 === "cableSafetyFactor") || (key5 === "memberSafetyFactor"))){
-const err46 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.allowable,data:data21};
+const err46 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema120.properties.allowable,data:data21};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -6379,7 +6436,7 @@ if(data21.cableSafetyFactor !== undefined){
 let data22 = data21.cableSafetyFactor;
 if((typeof data22 == "number") && (isFinite(data22))){
 if(data22 < 1 || isNaN(data22)){
-const err47 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema119.properties.allowable.properties.cableSafetyFactor,data:data22};
+const err47 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema120.properties.allowable.properties.cableSafetyFactor,data:data22};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -6390,7 +6447,7 @@ errors++;
 }
 }
 else {
-const err48 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.allowable.properties.cableSafetyFactor.type,parentSchema:schema119.properties.allowable.properties.cableSafetyFactor,data:data22};
+const err48 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema120.properties.allowable.properties.cableSafetyFactor.type,parentSchema:schema120.properties.allowable.properties.cableSafetyFactor,data:data22};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -6404,7 +6461,7 @@ if(data21.memberSafetyFactor !== undefined){
 let data23 = data21.memberSafetyFactor;
 if((typeof data23 == "number") && (isFinite(data23))){
 if(data23 < 1 || isNaN(data23)){
-const err49 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema119.properties.allowable.properties.memberSafetyFactor,data:data23};
+const err49 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema120.properties.allowable.properties.memberSafetyFactor,data:data23};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -6415,7 +6472,7 @@ errors++;
 }
 }
 else {
-const err50 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.allowable.properties.memberSafetyFactor.type,parentSchema:schema119.properties.allowable.properties.memberSafetyFactor,data:data23};
+const err50 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema120.properties.allowable.properties.memberSafetyFactor.type,parentSchema:schema120.properties.allowable.properties.memberSafetyFactor,data:data23};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -6427,7 +6484,7 @@ errors++;
 }
 }
 else {
-const err51 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.allowable.type,parentSchema:schema119.properties.allowable,data:data21};
+const err51 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema120.properties.allowable.type,parentSchema:schema120.properties.allowable,data:data21};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -6439,7 +6496,7 @@ errors++;
 }
 }
 else {
-const err52 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.type,parentSchema:schema119,data};
+const err52 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema120.type,parentSchema:schema120,data};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -6448,20 +6505,20 @@ vErrors.push(err52);
 }
 errors++;
 }
-validate66.errors = vErrors;
+validate67.errors = vErrors;
 return errors === 0;
 }
 
-const schema131 = {"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}};
+const schema132 = {"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}};
 const pattern39 = new RegExp("^[xyz]{1,3}$", "u");
-const schema134 = {"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}};
+const schema135 = {"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}};
 
-function validate69(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate70(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.setBy === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema134.required,parentSchema:schema134,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema135.required,parentSchema:schema135,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6472,7 +6529,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "members") || (key0 === "group")) || (key0 === "setBy")) || (key0 === "label"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema134,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema135,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6516,7 +6573,7 @@ errors++;
 if(data.setBy !== undefined){
 let data2 = data.setBy;
 if(!((data2 === "force") || (data2 === "length"))){
-const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema134.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema134.properties.setBy.enum,parentSchema:schema134.properties.setBy,data:data2};
+const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema135.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema135.properties.setBy.enum,parentSchema:schema135.properties.setBy,data:data2};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -6529,7 +6586,7 @@ errors++;
 if(data.label !== undefined){
 let data3 = data.label;
 if(typeof data3 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema134.properties.label.type,parentSchema:schema134.properties.label,data:data3};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema135.properties.label.type,parentSchema:schema135.properties.label,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -6541,7 +6598,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema134.type,parentSchema:schema134,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema135.type,parentSchema:schema135,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -6550,17 +6607,17 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate69.errors = vErrors;
+validate70.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate68(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate69(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema131.required,parentSchema:schema131,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema132.required,parentSchema:schema132,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6570,7 +6627,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.steps === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema131.required,parentSchema:schema131,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema132.required,parentSchema:schema132,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6580,8 +6637,8 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema131.properties, key0))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema131,data};
+if(!(func2.call(schema132.properties, key0))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema132,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -6619,7 +6676,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema131.properties.label.type,parentSchema:schema131.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema132.properties.label.type,parentSchema:schema132.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -6657,7 +6714,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data3 = data.selfWeight;
 if(typeof data3 !== "boolean"){
-const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema131.properties.selfWeight.type,parentSchema:schema131.properties.selfWeight,data:data3};
+const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema132.properties.selfWeight.type,parentSchema:schema132.properties.selfWeight,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -6671,7 +6728,7 @@ if(data.steps !== undefined){
 let data4 = data.steps;
 if(Array.isArray(data4)){
 if(data4.length < 1){
-const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema131.properties.steps,data:data4};
+const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema132.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -6682,14 +6739,14 @@ errors++;
 }
 const len0 = data4.length;
 for(let i0=0; i0<len0; i0++){
-if(!(validate69(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
-vErrors = vErrors === null ? validate69.errors : vErrors.concat(validate69.errors);
+if(!(validate70(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate70.errors : vErrors.concat(validate70.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema131.properties.steps.type,parentSchema:schema131.properties.steps,data:data4};
+const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema132.properties.steps.type,parentSchema:schema132.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -6707,7 +6764,7 @@ for(let i1=0; i1<len1; i1++){
 let data7 = data6[i1];
 if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 if(data7.node === undefined){
-const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema131.properties.temporaryRestraints.items.required,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema132.properties.temporaryRestraints.items.required,parentSchema:schema132.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -6717,7 +6774,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data7.fixed === undefined){
-const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema131.properties.temporaryRestraints.items.required,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema132.properties.temporaryRestraints.items.required,parentSchema:schema132.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -6728,7 +6785,7 @@ errors++;
 }
 for(const key1 in data7){
 if(!(((key1 === "node") || (key1 === "fixed")) || (key1 === "releaseAfterStep"))){
-const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema132.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -6767,7 +6824,7 @@ if(data7.fixed !== undefined){
 let data9 = data7.fixed;
 if(typeof data9 === "string"){
 if(!pattern39.test(data9)){
-const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema131.properties.temporaryRestraints.items.properties.fixed,data:data9};
+const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema132.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -6778,7 +6835,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema131.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema131.properties.temporaryRestraints.items.properties.fixed,data:data9};
+const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema132.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema132.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -6791,7 +6848,7 @@ errors++;
 if(data7.releaseAfterStep !== undefined){
 let data10 = data7.releaseAfterStep;
 if(!(((typeof data10 == "number") && (!(data10 % 1) && !isNaN(data10))) && (isFinite(data10)))){
-const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema131.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema131.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema132.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema132.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -6802,7 +6859,7 @@ errors++;
 }
 if((typeof data10 == "number") && (isFinite(data10))){
 if(data10 < 1 || isNaN(data10)){
-const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema131.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema132.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -6815,7 +6872,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.properties.temporaryRestraints.items.type,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema132.properties.temporaryRestraints.items.type,parentSchema:schema132.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -6827,7 +6884,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema131.properties.temporaryRestraints.type,parentSchema:schema131.properties.temporaryRestraints,data:data6};
+const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema132.properties.temporaryRestraints.type,parentSchema:schema132.properties.temporaryRestraints,data:data6};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -6841,7 +6898,7 @@ if(data.plumb !== undefined){
 let data11 = data.plumb;
 if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
 if(data11.base === undefined){
-const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema131.properties.plumb.required,parentSchema:schema131.properties.plumb,data:data11};
+const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema132.properties.plumb.required,parentSchema:schema132.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -6851,7 +6908,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data11.top === undefined){
-const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema131.properties.plumb.required,parentSchema:schema131.properties.plumb,data:data11};
+const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema132.properties.plumb.required,parentSchema:schema132.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -6861,7 +6918,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data11.limit === undefined){
-const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema131.properties.plumb.required,parentSchema:schema131.properties.plumb,data:data11};
+const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema132.properties.plumb.required,parentSchema:schema132.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -6872,7 +6929,7 @@ errors++;
 }
 for(const key2 in data11){
 if(!(((key2 === "base") || (key2 === "top")) || (key2 === "limit"))){
-const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema131.properties.plumb,data:data11};
+const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema132.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -6959,7 +7016,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.properties.plumb.type,parentSchema:schema131.properties.plumb,data:data11};
+const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema132.properties.plumb.type,parentSchema:schema132.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -7021,7 +7078,7 @@ errors++;
 }
 }
 else {
-const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.type,parentSchema:schema131,data};
+const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema132.type,parentSchema:schema132,data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -7030,18 +7087,18 @@ vErrors.push(err37);
 }
 errors++;
 }
-validate68.errors = vErrors;
+validate69.errors = vErrors;
 return errors === 0;
 }
 
-const schema142 = {"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}};
+const schema143 = {"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}};
 
-function validate73(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate74(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema142.required,parentSchema:schema142,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema143.required,parentSchema:schema143,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -7051,7 +7108,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.tensions === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema142.required,parentSchema:schema142,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema143.required,parentSchema:schema143,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -7062,7 +7119,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "date")) || (key0 === "tensions")) || (key0 === "positions")) || (key0 === "tolerance")) || (key0 === "lengthUncertainty"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema142,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema143,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -7100,7 +7157,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema142.properties.label.type,parentSchema:schema142.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema143.properties.label.type,parentSchema:schema143.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -7113,7 +7170,7 @@ errors++;
 if(data.date !== undefined){
 let data2 = data.date;
 if(typeof data2 !== "string"){
-const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema142.properties.date.type,parentSchema:schema142.properties.date,data:data2};
+const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema143.properties.date.type,parentSchema:schema143.properties.date,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -7131,7 +7188,7 @@ for(let i0=0; i0<len0; i0++){
 let data4 = data3[i0];
 if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
 if(data4.member === undefined){
-const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema143.properties.tensions.items.required,parentSchema:schema143.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -7141,7 +7198,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data4.method === undefined){
-const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema143.properties.tensions.items.required,parentSchema:schema143.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -7151,7 +7208,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data4.value === undefined){
-const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema143.properties.tensions.items.required,parentSchema:schema143.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -7161,7 +7218,7 @@ vErrors.push(err9);
 errors++;
 }
 if(data4.accuracy === undefined){
-const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema143.properties.tensions.items.required,parentSchema:schema143.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -7171,7 +7228,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data4.temperature === undefined){
-const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema143.properties.tensions.items.required,parentSchema:schema143.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -7182,7 +7239,7 @@ errors++;
 }
 for(const key1 in data4){
 if(!((((((key1 === "member") || (key1 === "method")) || (key1 === "value")) || (key1 === "accuracy")) || (key1 === "temperature")) || (key1 === "mode"))){
-const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema142.properties.tensions.items,data:data4};
+const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema143.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -7220,7 +7277,7 @@ errors++;
 if(data4.method !== undefined){
 let data6 = data4.method;
 if(!(((data6 === "dynamometer") || (data6 === "frequency")) || (data6 === "sag"))){
-const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema142.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema142.properties.tensions.items.properties.method.enum,parentSchema:schema142.properties.tensions.items.properties.method,data:data6};
+const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema143.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema143.properties.tensions.items.properties.method.enum,parentSchema:schema143.properties.tensions.items.properties.method,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -7308,7 +7365,7 @@ errors++;
 if(data4.mode !== undefined){
 let data10 = data4.mode;
 if(!((((data10 === "tautString") || (data10 === "inPlaneSymmetric")) || (data10 === "inPlaneAntisymmetric")) || (data10 === "lowestInPlane"))){
-const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema142.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema142.properties.tensions.items.properties.mode.enum,parentSchema:schema142.properties.tensions.items.properties.mode,data:data10};
+const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema143.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema143.properties.tensions.items.properties.mode.enum,parentSchema:schema143.properties.tensions.items.properties.mode,data:data10};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -7320,7 +7377,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema142.properties.tensions.items.type,parentSchema:schema142.properties.tensions.items,data:data4};
+const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema143.properties.tensions.items.type,parentSchema:schema143.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -7332,7 +7389,7 @@ errors++;
 }
 }
 else {
-const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema142.properties.tensions.type,parentSchema:schema142.properties.tensions,data:data3};
+const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema143.properties.tensions.type,parentSchema:schema143.properties.tensions,data:data3};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -7350,7 +7407,7 @@ for(let i1=0; i1<len1; i1++){
 let data12 = data11[i1];
 if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
 if(data12.node === undefined){
-const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema143.properties.positions.items.required,parentSchema:schema143.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -7360,7 +7417,7 @@ vErrors.push(err25);
 errors++;
 }
 if(data12.at === undefined){
-const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema143.properties.positions.items.required,parentSchema:schema143.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -7370,7 +7427,7 @@ vErrors.push(err26);
 errors++;
 }
 if(data12.accuracy === undefined){
-const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema143.properties.positions.items.required,parentSchema:schema143.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -7380,7 +7437,7 @@ vErrors.push(err27);
 errors++;
 }
 if(data12.temperature === undefined){
-const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema143.properties.positions.items.required,parentSchema:schema143.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -7391,7 +7448,7 @@ errors++;
 }
 for(const key2 in data12){
 if(!((((key2 === "node") || (key2 === "at")) || (key2 === "accuracy")) || (key2 === "temperature"))){
-const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema142.properties.positions.items,data:data12};
+const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema143.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -7527,7 +7584,7 @@ errors++;
 }
 }
 else {
-const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema142.properties.positions.items.type,parentSchema:schema142.properties.positions.items,data:data12};
+const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema143.properties.positions.items.type,parentSchema:schema143.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -7539,7 +7596,7 @@ errors++;
 }
 }
 else {
-const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema142.properties.positions.type,parentSchema:schema142.properties.positions,data:data11};
+const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema143.properties.positions.type,parentSchema:schema143.properties.positions,data:data11};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -7601,7 +7658,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema142.type,parentSchema:schema142,data};
+const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema143.type,parentSchema:schema143,data};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -7610,18 +7667,18 @@ vErrors.push(err46);
 }
 errors++;
 }
-validate73.errors = vErrors;
+validate74.errors = vErrors;
 return errors === 0;
 }
 
-const schema155 = {"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}};
+const schema156 = {"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}};
 
-function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate76(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema155.required,parentSchema:schema155,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema156.required,parentSchema:schema156,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -7631,7 +7688,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.nodes === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema155.required,parentSchema:schema155,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema156.required,parentSchema:schema156,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -7642,7 +7699,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "id") || (key0 === "nodes")) || (key0 === "region")) || (key0 === "label"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema155,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema156,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -7681,7 +7738,7 @@ if(data.nodes !== undefined){
 let data1 = data.nodes;
 if(Array.isArray(data1)){
 if(data1.length < 3){
-const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema155.properties.nodes,data:data1};
+const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema156.properties.nodes,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -7718,7 +7775,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema155.properties.nodes.type,parentSchema:schema155.properties.nodes,data:data1};
+const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema156.properties.nodes.type,parentSchema:schema156.properties.nodes,data:data1};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -7756,7 +7813,7 @@ errors++;
 if(data.label !== undefined){
 let data4 = data.label;
 if(typeof data4 !== "string"){
-const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema155.properties.label.type,parentSchema:schema155.properties.label,data:data4};
+const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema156.properties.label.type,parentSchema:schema156.properties.label,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -7768,7 +7825,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema155.type,parentSchema:schema155,data};
+const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema156.type,parentSchema:schema156,data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -7777,18 +7834,18 @@ vErrors.push(err12);
 }
 errors++;
 }
-validate75.errors = vErrors;
+validate76.errors = vErrors;
 return errors === 0;
 }
 
-const schema159 = {"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}};
+const schema160 = {"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}};
 
-function validate77(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate78(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema159.required,parentSchema:schema159,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema160.required,parentSchema:schema160,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -7798,7 +7855,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.meanCase === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema159.required,parentSchema:schema159,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema160.required,parentSchema:schema160,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -7808,7 +7865,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.patchFactor === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema159.required,parentSchema:schema159,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema160.required,parentSchema:schema160,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -7819,7 +7876,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "id") || (key0 === "label")) || (key0 === "meanCase")) || (key0 === "patchFactor")) || (key0 === "patches"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema159,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema160,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -7857,7 +7914,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema159.properties.label.type,parentSchema:schema159.properties.label,data:data1};
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema160.properties.label.type,parentSchema:schema160.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -7896,7 +7953,7 @@ if(data.patchFactor !== undefined){
 let data3 = data.patchFactor;
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 <= 1 || isNaN(data3)){
-const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema159.properties.patchFactor,data:data3};
+const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema160.properties.patchFactor,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -7907,7 +7964,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema159.properties.patchFactor.type,parentSchema:schema159.properties.patchFactor,data:data3};
+const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema160.properties.patchFactor.type,parentSchema:schema160.properties.patchFactor,data:data3};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -7921,7 +7978,7 @@ if(data.patches !== undefined){
 let data4 = data.patches;
 if(Array.isArray(data4)){
 if(data4.length < 1){
-const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema159.properties.patches,data:data4};
+const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema160.properties.patches,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -7935,7 +7992,7 @@ for(let i0=0; i0<len0; i0++){
 let data5 = data4[i0];
 if(data5 && typeof data5 == "object" && !Array.isArray(data5)){
 if(data5.from === undefined){
-const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema159.properties.patches.items.required,parentSchema:schema159.properties.patches.items,data:data5};
+const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema160.properties.patches.items.required,parentSchema:schema160.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -7945,7 +8002,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data5.to === undefined){
-const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema159.properties.patches.items.required,parentSchema:schema159.properties.patches.items,data:data5};
+const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema160.properties.patches.items.required,parentSchema:schema160.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -7956,7 +8013,7 @@ errors++;
 }
 for(const key1 in data5){
 if(!((key1 === "from") || (key1 === "to"))){
-const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema159.properties.patches.items,data:data5};
+const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema160.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -7969,7 +8026,7 @@ errors++;
 if(data5.from !== undefined){
 let data6 = data5.from;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema159.properties.patches.items.properties.from.type,parentSchema:schema159.properties.patches.items.properties.from,data:data6};
+const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema160.properties.patches.items.properties.from.type,parentSchema:schema160.properties.patches.items.properties.from,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -7982,7 +8039,7 @@ errors++;
 if(data5.to !== undefined){
 let data7 = data5.to;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema159.properties.patches.items.properties.to.type,parentSchema:schema159.properties.patches.items.properties.to,data:data7};
+const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema160.properties.patches.items.properties.to.type,parentSchema:schema160.properties.patches.items.properties.to,data:data7};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -7994,7 +8051,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema159.properties.patches.items.type,parentSchema:schema159.properties.patches.items,data:data5};
+const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema160.properties.patches.items.type,parentSchema:schema160.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -8006,7 +8063,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema159.properties.patches.type,parentSchema:schema159.properties.patches,data:data4};
+const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema160.properties.patches.type,parentSchema:schema160.properties.patches,data:data4};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -8018,7 +8075,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema159.type,parentSchema:schema159,data};
+const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema160.type,parentSchema:schema160,data};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -8027,18 +8084,18 @@ vErrors.push(err19);
 }
 errors++;
 }
-validate77.errors = vErrors;
+validate78.errors = vErrors;
 return errors === 0;
 }
 
-const schema162 = {"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
+const schema163 = {"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
 
-function validate79(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate80(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema162.required,parentSchema:schema162,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema163.required,parentSchema:schema163,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -8048,7 +8105,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.fromCase === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema162.required,parentSchema:schema162,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema163.required,parentSchema:schema163,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -8059,7 +8116,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "fromCase")) || (key0 === "members")) || (key0 === "group")) || (key0 === "dynamicFactor")) || (key0 === "dampingRatio"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema162,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema163,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -8097,7 +8154,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema162.properties.label.type,parentSchema:schema162.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema163.properties.label.type,parentSchema:schema163.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -8167,7 +8224,7 @@ if(data.dynamicFactor !== undefined){
 let data5 = data.dynamicFactor;
 if((typeof data5 == "number") && (isFinite(data5))){
 if(data5 > 2 || isNaN(data5)){
-const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema162.properties.dynamicFactor,data:data5};
+const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema163.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -8177,7 +8234,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data5 < 1 || isNaN(data5)){
-const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema162.properties.dynamicFactor,data:data5};
+const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema163.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -8188,7 +8245,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema162.properties.dynamicFactor.type,parentSchema:schema162.properties.dynamicFactor,data:data5};
+const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema163.properties.dynamicFactor.type,parentSchema:schema163.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -8202,7 +8259,7 @@ if(data.dampingRatio !== undefined){
 let data6 = data.dampingRatio;
 if((typeof data6 == "number") && (isFinite(data6))){
 if(data6 < 0 || isNaN(data6)){
-const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema162.properties.dampingRatio,data:data6};
+const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema163.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -8212,7 +8269,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data6 >= 1 || isNaN(data6)){
-const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema162.properties.dampingRatio,data:data6};
+const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema163.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -8223,7 +8280,7 @@ errors++;
 }
 }
 else {
-const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema162.properties.dampingRatio.type,parentSchema:schema162.properties.dampingRatio,data:data6};
+const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema163.properties.dampingRatio.type,parentSchema:schema163.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -8235,7 +8292,7 @@ errors++;
 }
 }
 else {
-const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema162.type,parentSchema:schema162,data};
+const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema163.type,parentSchema:schema163,data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -8244,18 +8301,18 @@ vErrors.push(err16);
 }
 errors++;
 }
-validate79.errors = vErrors;
+validate80.errors = vErrors;
 return errors === 0;
 }
 
-const schema166 = {"type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"case":{"$ref":"#/definitions/id"},"count":{"type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"type":"number"}}};
+const schema167 = {"type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"case":{"$ref":"#/definitions/id"},"count":{"type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"type":"number"}}};
 
-function validate82(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate83(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema166.required,parentSchema:schema166,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema167.required,parentSchema:schema167,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -8265,7 +8322,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.case === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema166.required,parentSchema:schema166,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema167.required,parentSchema:schema167,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -8275,7 +8332,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.count === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema166.required,parentSchema:schema166,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema167.required,parentSchema:schema167,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -8286,7 +8343,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "id") || (key0 === "label")) || (key0 === "case")) || (key0 === "count")) || (key0 === "azimuth"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema166,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema167,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -8324,7 +8381,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema166.properties.label.type,parentSchema:schema166.properties.label,data:data1};
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema167.properties.label.type,parentSchema:schema167.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -8362,7 +8419,7 @@ errors++;
 if(data.count !== undefined){
 let data3 = data.count;
 if(!(((typeof data3 == "number") && (!(data3 % 1) && !isNaN(data3))) && (isFinite(data3)))){
-const err9 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema166.properties.count.type,parentSchema:schema166.properties.count,data:data3};
+const err9 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema167.properties.count.type,parentSchema:schema167.properties.count,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -8373,7 +8430,7 @@ errors++;
 }
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 > 72 || isNaN(data3)){
-const err10 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 72},message:"must be <= 72",schema:72,parentSchema:schema166.properties.count,data:data3};
+const err10 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 72},message:"must be <= 72",schema:72,parentSchema:schema167.properties.count,data:data3};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -8383,7 +8440,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data3 < 1 || isNaN(data3)){
-const err11 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema166.properties.count,data:data3};
+const err11 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema167.properties.count,data:data3};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -8397,7 +8454,7 @@ errors++;
 if(data.azimuth !== undefined){
 let data4 = data.azimuth;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err12 = {instancePath:instancePath+"/azimuth",schemaPath:"#/properties/azimuth/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema166.properties.azimuth.type,parentSchema:schema166.properties.azimuth,data:data4};
+const err12 = {instancePath:instancePath+"/azimuth",schemaPath:"#/properties/azimuth/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema167.properties.azimuth.type,parentSchema:schema167.properties.azimuth,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -8409,7 +8466,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema166.type,parentSchema:schema166,data};
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema167.type,parentSchema:schema167,data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -8418,18 +8475,18 @@ vErrors.push(err13);
 }
 errors++;
 }
-validate82.errors = vErrors;
+validate83.errors = vErrors;
 return errors === 0;
 }
 
-const schema169 = {"type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"kind":{"enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"$ref":"#/definitions/id"},"along":{"type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"$ref":"#/definitions/id"},"from":{"type":"number"},"to":{"type":"number"}}},"dragArea":{"$ref":"#/definitions/nonNegative"},"mass":{"$ref":"#/definitions/nonNegative"},"iceDragArea":{"$ref":"#/definitions/nonNegative"},"iceMass":{"$ref":"#/definitions/nonNegative"}}};
+const schema170 = {"type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"kind":{"enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"$ref":"#/definitions/id"},"along":{"type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"$ref":"#/definitions/id"},"from":{"type":"number"},"to":{"type":"number"}}},"dragArea":{"$ref":"#/definitions/nonNegative"},"mass":{"$ref":"#/definitions/nonNegative"},"iceDragArea":{"$ref":"#/definitions/nonNegative"},"iceMass":{"$ref":"#/definitions/nonNegative"}}};
 
-function validate84(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate85(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema170.required,parentSchema:schema170,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -8439,7 +8496,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema170.required,parentSchema:schema170,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -8449,7 +8506,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.dragArea === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "dragArea"},message:"must have required property '"+"dragArea"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "dragArea"},message:"must have required property '"+"dragArea"+"'",schema:schema170.required,parentSchema:schema170,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -8459,7 +8516,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.mass === undefined){
-const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "mass"},message:"must have required property '"+"mass"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "mass"},message:"must have required property '"+"mass"+"'",schema:schema170.required,parentSchema:schema170,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -8469,8 +8526,8 @@ vErrors.push(err3);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema169.properties, key0))){
-const err4 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema169,data};
+if(!(func2.call(schema170.properties, key0))){
+const err4 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema170,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -8508,7 +8565,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err7 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema169.properties.label.type,parentSchema:schema169.properties.label,data:data1};
+const err7 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema170.properties.label.type,parentSchema:schema170.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -8521,7 +8578,7 @@ errors++;
 if(data.kind !== undefined){
 let data2 = data.kind;
 if(!((((((data2 === "antenna") || (data2 === "dish")) || (data2 === "feeder")) || (data2 === "ladder")) || (data2 === "platform")) || (data2 === "other"))){
-const err8 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema169.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema169.properties.kind.enum,parentSchema:schema169.properties.kind,data:data2};
+const err8 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema170.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema170.properties.kind.enum,parentSchema:schema170.properties.kind,data:data2};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -8560,7 +8617,7 @@ if(data.along !== undefined){
 let data4 = data.along;
 if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
 if(data4.group === undefined){
-const err11 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema169.properties.along.required,parentSchema:schema169.properties.along,data:data4};
+const err11 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema170.properties.along.required,parentSchema:schema170.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -8570,7 +8627,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data4.from === undefined){
-const err12 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema169.properties.along.required,parentSchema:schema169.properties.along,data:data4};
+const err12 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema170.properties.along.required,parentSchema:schema170.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -8580,7 +8637,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data4.to === undefined){
-const err13 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema169.properties.along.required,parentSchema:schema169.properties.along,data:data4};
+const err13 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema170.properties.along.required,parentSchema:schema170.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -8591,7 +8648,7 @@ errors++;
 }
 for(const key1 in data4){
 if(!(((key1 === "group") || (key1 === "from")) || (key1 === "to"))){
-const err14 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema169.properties.along,data:data4};
+const err14 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema170.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -8629,7 +8686,7 @@ errors++;
 if(data4.from !== undefined){
 let data6 = data4.from;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err17 = {instancePath:instancePath+"/along/from",schemaPath:"#/properties/along/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema169.properties.along.properties.from.type,parentSchema:schema169.properties.along.properties.from,data:data6};
+const err17 = {instancePath:instancePath+"/along/from",schemaPath:"#/properties/along/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema170.properties.along.properties.from.type,parentSchema:schema170.properties.along.properties.from,data:data6};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -8642,7 +8699,7 @@ errors++;
 if(data4.to !== undefined){
 let data7 = data4.to;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err18 = {instancePath:instancePath+"/along/to",schemaPath:"#/properties/along/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema169.properties.along.properties.to.type,parentSchema:schema169.properties.along.properties.to,data:data7};
+const err18 = {instancePath:instancePath+"/along/to",schemaPath:"#/properties/along/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema170.properties.along.properties.to.type,parentSchema:schema170.properties.along.properties.to,data:data7};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -8654,7 +8711,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema169.properties.along.type,parentSchema:schema169.properties.along,data:data4};
+const err19 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema170.properties.along.type,parentSchema:schema170.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -8766,7 +8823,7 @@ errors++;
 }
 }
 else {
-const err28 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema169.type,parentSchema:schema169,data};
+const err28 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema170.type,parentSchema:schema170,data};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -8775,7 +8832,7 @@ vErrors.push(err28);
 }
 errors++;
 }
-validate84.errors = vErrors;
+validate85.errors = vErrors;
 return errors === 0;
 }
 
@@ -9012,8 +9069,8 @@ let data11 = data.groups;
 if(Array.isArray(data11)){
 const len4 = data11.length;
 for(let i4=0; i4<len4; i4++){
-if(!(validate44(data11[i4], {instancePath:instancePath+"/groups/" + i4,parentData:data11,parentDataProperty:i4,rootData}))){
-vErrors = vErrors === null ? validate44.errors : vErrors.concat(validate44.errors);
+if(!(validate45(data11[i4], {instancePath:instancePath+"/groups/" + i4,parentData:data11,parentDataProperty:i4,rootData}))){
+vErrors = vErrors === null ? validate45.errors : vErrors.concat(validate45.errors);
 errors = vErrors.length;
 }
 }
@@ -9034,8 +9091,8 @@ let data13 = data.combinations;
 if(Array.isArray(data13)){
 const len5 = data13.length;
 for(let i5=0; i5<len5; i5++){
-if(!(validate47(data13[i5], {instancePath:instancePath+"/combinations/" + i5,parentData:data13,parentDataProperty:i5,rootData}))){
-vErrors = vErrors === null ? validate47.errors : vErrors.concat(validate47.errors);
+if(!(validate48(data13[i5], {instancePath:instancePath+"/combinations/" + i5,parentData:data13,parentDataProperty:i5,rootData}))){
+vErrors = vErrors === null ? validate48.errors : vErrors.concat(validate48.errors);
 errors = vErrors.length;
 }
 }
@@ -9052,20 +9109,20 @@ errors++;
 }
 }
 if(data.checks !== undefined){
-if(!(validate49(data.checks, {instancePath:instancePath+"/checks",parentData:data,parentDataProperty:"checks",rootData}))){
-vErrors = vErrors === null ? validate49.errors : vErrors.concat(validate49.errors);
+if(!(validate50(data.checks, {instancePath:instancePath+"/checks",parentData:data,parentDataProperty:"checks",rootData}))){
+vErrors = vErrors === null ? validate50.errors : vErrors.concat(validate50.errors);
 errors = vErrors.length;
 }
 }
 if(data.tuning !== undefined){
-if(!(validate55(data.tuning, {instancePath:instancePath+"/tuning",parentData:data,parentDataProperty:"tuning",rootData}))){
-vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+if(!(validate56(data.tuning, {instancePath:instancePath+"/tuning",parentData:data,parentDataProperty:"tuning",rootData}))){
+vErrors = vErrors === null ? validate56.errors : vErrors.concat(validate56.errors);
 errors = vErrors.length;
 }
 }
 if(data.installation !== undefined){
-if(!(validate60(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
-vErrors = vErrors === null ? validate60.errors : vErrors.concat(validate60.errors);
+if(!(validate61(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
+vErrors = vErrors === null ? validate61.errors : vErrors.concat(validate61.errors);
 errors = vErrors.length;
 }
 }
@@ -9074,8 +9131,8 @@ let data18 = data.generators;
 if(Array.isArray(data18)){
 const len6 = data18.length;
 for(let i6=0; i6<len6; i6++){
-if(!(validate62(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
-vErrors = vErrors === null ? validate62.errors : vErrors.concat(validate62.errors);
+if(!(validate63(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
+vErrors = vErrors === null ? validate63.errors : vErrors.concat(validate63.errors);
 errors = vErrors.length;
 }
 }
@@ -9092,14 +9149,14 @@ errors++;
 }
 }
 if(data.display !== undefined){
-if(!(validate64(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
-vErrors = vErrors === null ? validate64.errors : vErrors.concat(validate64.errors);
+if(!(validate65(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
+vErrors = vErrors === null ? validate65.errors : vErrors.concat(validate65.errors);
 errors = vErrors.length;
 }
 }
 if(data.designBasis !== undefined){
-if(!(validate66(data.designBasis, {instancePath:instancePath+"/designBasis",parentData:data,parentDataProperty:"designBasis",rootData}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(!(validate67(data.designBasis, {instancePath:instancePath+"/designBasis",parentData:data,parentDataProperty:"designBasis",rootData}))){
+vErrors = vErrors === null ? validate67.errors : vErrors.concat(validate67.errors);
 errors = vErrors.length;
 }
 }
@@ -9108,8 +9165,8 @@ let data22 = data.sequences;
 if(Array.isArray(data22)){
 const len7 = data22.length;
 for(let i7=0; i7<len7; i7++){
-if(!(validate68(data22[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data22,parentDataProperty:i7,rootData}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+if(!(validate69(data22[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data22,parentDataProperty:i7,rootData}))){
+vErrors = vErrors === null ? validate69.errors : vErrors.concat(validate69.errors);
 errors = vErrors.length;
 }
 }
@@ -9130,8 +9187,8 @@ let data24 = data.siteMeasurements;
 if(Array.isArray(data24)){
 const len8 = data24.length;
 for(let i8=0; i8<len8; i8++){
-if(!(validate73(data24[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data24,parentDataProperty:i8,rootData}))){
-vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+if(!(validate74(data24[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data24,parentDataProperty:i8,rootData}))){
+vErrors = vErrors === null ? validate74.errors : vErrors.concat(validate74.errors);
 errors = vErrors.length;
 }
 }
@@ -9152,7 +9209,7 @@ let data26 = data.report;
 if(data26 && typeof data26 == "object" && !Array.isArray(data26)){
 for(const key1 in data26){
 if(!((key1 === "documentNumber") || (key1 === "revisions"))){
-const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema154,data:data26};
+const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema155,data:data26};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -9165,7 +9222,7 @@ errors++;
 if(data26.documentNumber !== undefined){
 let data27 = data26.documentNumber;
 if(typeof data27 !== "string"){
-const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.documentNumber.type,parentSchema:schema154.properties.documentNumber,data:data27};
+const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema155.properties.documentNumber.type,parentSchema:schema155.properties.documentNumber,data:data27};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -9183,7 +9240,7 @@ for(let i9=0; i9<len9; i9++){
 let data29 = data28[i9];
 if(data29 && typeof data29 == "object" && !Array.isArray(data29)){
 if(data29.revision === undefined){
-const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema154.properties.revisions.items.required,parentSchema:schema154.properties.revisions.items,data:data29};
+const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema155.properties.revisions.items.required,parentSchema:schema155.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -9193,7 +9250,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data29.date === undefined){
-const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema154.properties.revisions.items.required,parentSchema:schema154.properties.revisions.items,data:data29};
+const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema155.properties.revisions.items.required,parentSchema:schema155.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -9203,7 +9260,7 @@ vErrors.push(err24);
 errors++;
 }
 if(data29.description === undefined){
-const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema154.properties.revisions.items.required,parentSchema:schema154.properties.revisions.items,data:data29};
+const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema155.properties.revisions.items.required,parentSchema:schema155.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -9214,7 +9271,7 @@ errors++;
 }
 for(const key2 in data29){
 if(!(((((key2 === "revision") || (key2 === "date")) || (key2 === "description")) || (key2 === "by")) || (key2 === "checkedBy"))){
-const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema154.properties.revisions.items,data:data29};
+const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema155.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -9227,7 +9284,7 @@ errors++;
 if(data29.revision !== undefined){
 let data30 = data29.revision;
 if(typeof data30 !== "string"){
-const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.revision.type,parentSchema:schema154.properties.revisions.items.properties.revision,data:data30};
+const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema155.properties.revisions.items.properties.revision.type,parentSchema:schema155.properties.revisions.items.properties.revision,data:data30};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -9240,7 +9297,7 @@ errors++;
 if(data29.date !== undefined){
 let data31 = data29.date;
 if(typeof data31 !== "string"){
-const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.date.type,parentSchema:schema154.properties.revisions.items.properties.date,data:data31};
+const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema155.properties.revisions.items.properties.date.type,parentSchema:schema155.properties.revisions.items.properties.date,data:data31};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -9253,7 +9310,7 @@ errors++;
 if(data29.description !== undefined){
 let data32 = data29.description;
 if(typeof data32 !== "string"){
-const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.description.type,parentSchema:schema154.properties.revisions.items.properties.description,data:data32};
+const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema155.properties.revisions.items.properties.description.type,parentSchema:schema155.properties.revisions.items.properties.description,data:data32};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -9266,7 +9323,7 @@ errors++;
 if(data29.by !== undefined){
 let data33 = data29.by;
 if(typeof data33 !== "string"){
-const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.by.type,parentSchema:schema154.properties.revisions.items.properties.by,data:data33};
+const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema155.properties.revisions.items.properties.by.type,parentSchema:schema155.properties.revisions.items.properties.by,data:data33};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -9279,7 +9336,7 @@ errors++;
 if(data29.checkedBy !== undefined){
 let data34 = data29.checkedBy;
 if(typeof data34 !== "string"){
-const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.checkedBy.type,parentSchema:schema154.properties.revisions.items.properties.checkedBy,data:data34};
+const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema155.properties.revisions.items.properties.checkedBy.type,parentSchema:schema155.properties.revisions.items.properties.checkedBy,data:data34};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -9291,7 +9348,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema154.properties.revisions.items.type,parentSchema:schema154.properties.revisions.items,data:data29};
+const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema155.properties.revisions.items.type,parentSchema:schema155.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -9303,7 +9360,7 @@ errors++;
 }
 }
 else {
-const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema154.properties.revisions.type,parentSchema:schema154.properties.revisions,data:data28};
+const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema155.properties.revisions.type,parentSchema:schema155.properties.revisions,data:data28};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -9315,7 +9372,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema154.type,parentSchema:schema154,data:data26};
+const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema155.type,parentSchema:schema155,data:data26};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -9330,8 +9387,8 @@ let data35 = data.panels;
 if(Array.isArray(data35)){
 const len10 = data35.length;
 for(let i10=0; i10<len10; i10++){
-if(!(validate75(data35[i10], {instancePath:instancePath+"/panels/" + i10,parentData:data35,parentDataProperty:i10,rootData}))){
-vErrors = vErrors === null ? validate75.errors : vErrors.concat(validate75.errors);
+if(!(validate76(data35[i10], {instancePath:instancePath+"/panels/" + i10,parentData:data35,parentDataProperty:i10,rootData}))){
+vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
 errors = vErrors.length;
 }
 }
@@ -9352,8 +9409,8 @@ let data37 = data.patchWind;
 if(Array.isArray(data37)){
 const len11 = data37.length;
 for(let i11=0; i11<len11; i11++){
-if(!(validate77(data37[i11], {instancePath:instancePath+"/patchWind/" + i11,parentData:data37,parentDataProperty:i11,rootData}))){
-vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
+if(!(validate78(data37[i11], {instancePath:instancePath+"/patchWind/" + i11,parentData:data37,parentDataProperty:i11,rootData}))){
+vErrors = vErrors === null ? validate78.errors : vErrors.concat(validate78.errors);
 errors = vErrors.length;
 }
 }
@@ -9374,8 +9431,8 @@ let data39 = data.memberLoss;
 if(Array.isArray(data39)){
 const len12 = data39.length;
 for(let i12=0; i12<len12; i12++){
-if(!(validate79(data39[i12], {instancePath:instancePath+"/memberLoss/" + i12,parentData:data39,parentDataProperty:i12,rootData}))){
-vErrors = vErrors === null ? validate79.errors : vErrors.concat(validate79.errors);
+if(!(validate80(data39[i12], {instancePath:instancePath+"/memberLoss/" + i12,parentData:data39,parentDataProperty:i12,rootData}))){
+vErrors = vErrors === null ? validate80.errors : vErrors.concat(validate80.errors);
 errors = vErrors.length;
 }
 }
@@ -9396,8 +9453,8 @@ let data41 = data.windDirections;
 if(Array.isArray(data41)){
 const len13 = data41.length;
 for(let i13=0; i13<len13; i13++){
-if(!(validate82(data41[i13], {instancePath:instancePath+"/windDirections/" + i13,parentData:data41,parentDataProperty:i13,rootData}))){
-vErrors = vErrors === null ? validate82.errors : vErrors.concat(validate82.errors);
+if(!(validate83(data41[i13], {instancePath:instancePath+"/windDirections/" + i13,parentData:data41,parentDataProperty:i13,rootData}))){
+vErrors = vErrors === null ? validate83.errors : vErrors.concat(validate83.errors);
 errors = vErrors.length;
 }
 }
@@ -9418,8 +9475,8 @@ let data43 = data.ancillaries;
 if(Array.isArray(data43)){
 const len14 = data43.length;
 for(let i14=0; i14<len14; i14++){
-if(!(validate84(data43[i14], {instancePath:instancePath+"/ancillaries/" + i14,parentData:data43,parentDataProperty:i14,rootData}))){
-vErrors = vErrors === null ? validate84.errors : vErrors.concat(validate84.errors);
+if(!(validate85(data43[i14], {instancePath:instancePath+"/ancillaries/" + i14,parentData:data43,parentDataProperty:i14,rootData}))){
+vErrors = vErrors === null ? validate85.errors : vErrors.concat(validate85.errors);
 errors = vErrors.length;
 }
 }
