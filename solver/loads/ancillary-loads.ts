@@ -8,7 +8,8 @@
  * A line item is spread over the nodes of its group's members between `from` and `to`: each
  * distinct node height gets the tributary height (half way to its neighbours, clipped to the
  * range), shared equally by the nodes at that height.
- * `ancillaryNodalMass` gives the same masses per node (kg) for a modal analysis.
+ * `ancillaryNodalMass` gives the same masses per node (kg) without ice; the case loads carry them
+ * with the case's ice (CaseLoads.ancillaryMass), which the modal analysis adds to the lumped mass.
  */
 import type { AnalysisModel } from '../model/analysis-model.ts';
 import type { AncillarySpec, LoadCaseSpec, ProjectFile } from '../project/types.ts';
@@ -50,10 +51,13 @@ export function withAncillaryLoads(model: AnalysisModel, project: ProjectFile, s
   if (list.length === 0) return loads;
   const t = spec.ice?.thickness ?? 0;
   const wind = spec.wind;
+  const vibrating = new Float64Array(model.nodeCount);
   for (const a of list) {
-    const mass = (loads.selfWeight ? a.mass : 0) + (a.iceMass ?? 0) * t;
+    const iceMass = (a.iceMass ?? 0) * t;
+    const mass = (loads.selfWeight ? a.mass : 0) + iceMass;
     const drag = a.dragArea + (a.iceDragArea ?? 0) * t;
     for (const { node, share } of ancillaryShares(model, project, a)) {
+      vibrating[node] += (a.mass + iceMass) * share;
       loads.nodal[3 * node + 2] -= STANDARD_GRAVITY * mass * share;
       if (!wind || !(drag > 0)) continue;
       const q = windForceFactor(wind) * dynamicPressure(wind.airDensity ?? DEFAULT_AIR_DENSITY, windSpeedAt(model.coords[3 * node + 2], wind.speed, wind.profile));
@@ -62,6 +66,7 @@ export function withAncillaryLoads(model: AnalysisModel, project: ProjectFile, s
       loads.nodal[3 * node + 1] += q * drag * share * cy;
     }
   }
+  loads.ancillaryMass = vibrating;
   return loads;
 }
 
