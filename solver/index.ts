@@ -47,4 +47,4 @@ export { windDirectionCases } from './loads/wind-directions.ts';
 export { windForceFactor, windProfileRows } from './loads/wind-basis.ts';
 export type { WindProfileRow } from './loads/wind-basis.ts';
 export { latticeForceCoefficient, icedLattice } from './loads/lattice-force-coefficient.ts';
-export { ancillaryNodalMass, ancillaryShares } from './loads/ancillary-loads.ts';
+export { ancillaryIce, ancillaryNodalMass, ancillaryShares } from './loads/ancillary-loads.ts';

@@ -6,8 +6,8 @@ import {
   DEFAULT_AIR_DENSITY,
   DEFAULT_CABLE_DRAG_COEFFICIENT,
   DEFAULT_ICED_DRAG_COEFFICIENT,
-  DEFAULT_LATTICE_DRAG_FACTOR,
 } from './defaults.ts';
+import { latticeDragWidth } from './lattice-force-coefficient.ts';
 import { iceThicknessPerElement } from './ice.ts';
 import { windSpeedAt } from './wind-profile.ts';
 import { windForceFactor } from './wind-basis.ts';
@@ -16,8 +16,8 @@ import { resolveWindCase, windSpeedAtHeight } from './wind-case.ts';
 /**
  * Drag area per unit length, m²/m (= m), of every element: Cd · D for round sections
  * (D + 2t when iced, Cd from the section or DEFAULT_(ICED_)CABLE_DRAG_COEFFICIENT), and
- * Cf · solidity · faceWidth · share for lattice mast sections (Cf = lattice.dragFactor or
- * DEFAULT_LATTICE_DRAG_FACTOR; ice on lattice sections is not modelled). 0 = no wind on it.
+ * C_f · φ · faceWidth · share for lattice mast sections (latticeDragWidth: C_f = lattice.dragFactor
+ * or C_f(φ) of lattice-force-coefficient.ts; ice raises φ to φ(d + 2t)/d). 0 = no wind on it.
  */
 export function windDragWidths(model: AnalysisModel, project: ProjectFile, caseSpec: LoadCaseSpec): Float64Array {
   const cdD = new Float64Array(model.elementCount);
@@ -31,8 +31,7 @@ export function windDragWidths(model: AnalysisModel, project: ProjectFile, caseS
     for (let k = 0; k < mt.elementCount; k++) {
       const e = mt.firstElement + k;
       if (section?.lattice) {
-        const lat = section.lattice;
-        cdD[e] = (lat.dragFactor ?? DEFAULT_LATTICE_DRAG_FACTOR) * lat.solidity * lat.faceWidth * (lat.share ?? 1);
+        cdD[e] = latticeDragWidth(section.lattice, iceT[e], section.diameter, section.id);
       } else if (model.elemDiameter[e] > 0) {
         const iced = iceT[e] > 0;
         const cd = section?.dragCoefficient ?? (iced ? DEFAULT_ICED_DRAG_COEFFICIENT : DEFAULT_CABLE_DRAG_COEFFICIENT);

@@ -145,4 +145,17 @@ export interface AncillarySpec {
   iceDragArea?: number;
   /** Ice mass per metre of radial ice (kg/m; line items per metre of height too); default 0: ice ignored. */
   iceMass?: number;
+  /**
+   * How ice forms on the item under a case's radial ice t:
+   * - 'perThickness' (default): drag area + iceDragArea · t, mass iceMass · t (both default 0);
+   * - 'coat': a uniform coat on a round body of outer width coatWidth (w): the drag area grows by
+   *   (w + 2t)/w (same force coefficient) and the ice mass is ρ π t (w + t) per metre of the body —
+   *   coatLength metres for a point item, per metre of height for a line item;
+   * - 'none': no ice (shielded, e.g. inside a heated radome).
+   */
+  iceBehaviour?: 'perThickness' | 'coat' | 'none';
+  /** 'coat': outer width of the iced body, m. */
+  coatWidth?: number;
+  /** 'coat', point items: length of the iced body, m. */
+  coatLength?: number;
 }

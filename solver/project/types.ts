@@ -118,12 +118,21 @@ export interface SectionSpec {
   lattice?: {
     faceWidth: number;
     solidity: number;
+    /** Force coefficient C_f on the face area; absent = C_f(φ) of solver/loads/lattice-force-coefficient.ts. */
     dragFactor?: number;
     /**
-     * Share (0..1] of the whole-mast lattice drag this member line carries; default 1. A
-     * triangular mast modelled leg by leg gives each leg 1/3 so the mast drag is counted once.
+     * Share [0..1] of the whole-mast lattice drag this member line carries; default 1. A
+     * triangular mast modelled leg by leg gives each leg 1/3 so the mast drag is counted once;
+     * 0 = a member of the lattice (bracing) whose drag the other lines carry: no wind of its own,
+     * ice on its diameter.
      */
     share?: number;
+    /** Plan of the lattice for the force coefficient C_f(φ); default 'triangular' (solver/loads/lattice-force-coefficient.ts). */
+    plan?: 'triangular' | 'square';
+    /** Face members flat-sided or round, for C_f(φ) when dragFactor is absent; default 'flat' (the larger C_f). */
+    members?: 'flat' | 'round';
+    /** Mean width of the face members across the wind, m, for the iced solidity; default the section's diameter. */
+    memberWidth?: number;
   };
   label?: string;
   /** Shape, for the buckling-curve and radius-of-gyration defaults. */
@@ -214,6 +223,8 @@ export interface IceSpec {
   density?: number;
   /** Only ice these groups (default: every member with a diameter). */
   groups?: string[];
+  /** Members left bare although in the iced groups (unbalanced ice on guys). */
+  bareMembers?: string[];
 }
 
 export interface LoadCaseSpec {

@@ -155,6 +155,14 @@ function ancillaryErrors(root: unknown, errors: string[]): void {
       const from = num(along, 'from'), to = num(along, 'to');
       if (from !== undefined && to !== undefined && !(to > from)) errors.push(`${label}: along: "to" (${to} m) must be above "from" (${from} m)`);
     }
+    const behaviour = str(entry, 'iceBehaviour') ?? 'perThickness';
+    if (behaviour === 'coat') {
+      if (entry.coatWidth === undefined) errors.push(`${label}: iceBehaviour "coat" needs coatWidth (outer width of the iced body, m)`);
+      if (node !== undefined && entry.coatLength === undefined) errors.push(`${label}: iceBehaviour "coat" on a point item needs coatLength (length of the iced body, m)`);
+      if (along && entry.coatLength !== undefined) errors.push(`${label}: coatLength applies to point items only (a line item ices per metre of height)`);
+    }
+    if (behaviour !== 'coat' && (entry.coatWidth !== undefined || entry.coatLength !== undefined)) errors.push(`${label}: coatWidth and coatLength need iceBehaviour "coat"`);
+    if (behaviour !== 'perThickness' && (entry.iceDragArea !== undefined || entry.iceMass !== undefined)) errors.push(`${label}: iceDragArea and iceMass apply to iceBehaviour "perThickness" only`);
   }
 }
 

@@ -70,6 +70,7 @@ export function referenceErrors(root: unknown): string[] {
     for (const l of entries(entry, 'nodalLoads')) need(at, 'node', str(l.entry, 'node'), `nodalLoads[${l.index}]: `);
     if (isRec(entry.wind)) needAll(at, 'group', entry.wind, 'groups', 'wind: ');
     if (isRec(entry.ice)) needAll(at, 'group', entry.ice, 'groups', 'ice: ');
+    if (isRec(entry.ice)) needAll(at, 'member', entry.ice, 'bareMembers', 'ice.bareMembers: ');
   }
   for (const { index, entry } of entries(root, 'groups')) needAll(entryLabel(root, 'groups', index), 'member', entry, 'members');
   for (const { index, entry } of entries(root, 'combinations')) {
