@@ -11,6 +11,7 @@ import { createPinia, setActivePinia } from 'pinia';
 import type { ProjectFile } from '../../solver/index.ts';
 import { applyBuiltCombinations, buildCombinations, resolveDesignBasis } from '../../solver/index.ts';
 import { useProjectStore } from '../../renderer/stores/project.ts';
+import { useResultsStore } from '../../renderer/stores/results.ts';
 import { addActionEntry, editAreaLoad, replaceActionEntry, setPath } from '../../renderer/model/action-edits.ts';
 import { ACTION_FIELDS, AREA_LOAD_FIELDS, MEMBER_LOSS_FIELDS, newActionEntry } from '../../renderer/model/action-fields.ts';
 import { applyFieldText, fieldText, otherFields, type Entry, type FieldContext, type FieldSpec } from '../../renderer/model/field-spec.ts';
@@ -112,6 +113,19 @@ describe('action edits through the project store', () => {
     s.undo();
     expect(s.project!.ancillaries).toBeUndefined();
     expect(s.project).toBe(mast);
+  });
+
+  it('makes the results stale: the cases an action adds change with it; the design basis does not', () => {
+    const s = loaded(mast);
+    const r = useResultsStore();
+    r.started(1, mast);
+    r.assignRunId('a');
+    r.onFinished({ runId: 'a', status: 'done', report: { cases: [] } });
+    expect(r.isStaleFor(s.project)).toBe(false);
+    s.edit('Basis', (p) => setBasisFormat(p, 'allowable'));
+    expect(r.isStaleFor(s.project)).toBe(false);
+    s.edit('Add', (p) => addActionEntry(p, 'ancillaries', { id: 'A1', kind: 'dish', node: top, dragArea: 0.8, mass: 30 }));
+    expect(r.isStaleFor(s.project)).toBe(true);
   });
 
   it('refuses an entry the validator rejects, naming it, and changes nothing', () => {
