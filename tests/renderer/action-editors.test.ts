@@ -40,6 +40,9 @@ describe('field text of the action editors', () => {
     expect(a.ok && a.entry.dragArea).toBeCloseTo(10 * FT * FT, 12);
     const withUnit = applyFieldText(field(anc, 'dragArea'), point, '2500 cm^2', ctxOf(mast), 'x');
     expect(withUnit.ok && withUnit.entry.dragArea).toBeCloseTo(0.25, 12);
+    // Area × force coefficient typed as a product.
+    const product = applyFieldText(field(anc, 'dragArea'), point, '1.2 * 0.8 m^2', ctxOf(mast), 'x');
+    expect(product.ok && product.entry.dragArea).toBeCloseTo(0.96, 12);
     expect(parseQuantity('1 psf', 'pressure', 'SI', 'p')).toEqual({ ok: true, value: expect.closeTo(LBF / (FT * FT), 9) });
     // A line item's drag area is per metre of height, mass per metre.
     const line: Entry = { ...point, node: undefined, along: { group: 'mast/mast legs', from: 10, to: 50 } };
