@@ -135,6 +135,13 @@ describe('design actions and design basis in the app', () => {
     for (const id of added) expect(offered).toContain(id);
     await page.getByTestId('case-select').selectOption(added.find((id) => id.startsWith('guy loss / '))!);
     await shot('62-guy-loss-case.png');
+    // In US units the ancillary's mass reads in lb (80 kg / 0.45359237 kg/lb, NIST SP 811).
+    await page.getByTestId('units-us').click();
+    await page.getByTestId('right-tab-actions').click();
+    await page.getByTestId('ancillaries-open-0').click();
+    expect(await page.locator('[data-testid="ancillaries"] [data-entry="0"] [data-field="mass"]').inputValue()).toBe(String(Number((80 / 0.45359237).toPrecision(6))));
+    await shot('64-ancillary-us-units.png');
+    await page.getByTestId('units-si').click();
     expect(pageErrors).toEqual([]);
   }, 360_000);
 

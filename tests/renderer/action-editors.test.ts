@@ -131,6 +131,18 @@ describe('action edits through the project store', () => {
     expect(r.isStaleFor(s.project)).toBe(true);
   });
 
+  it('"+ Add" makes an entry the validator accepts in every list, on both demos', () => {
+    for (const demo of [mast, canopy]) {
+      for (const list of ['ancillaries', 'patchWind', 'memberLoss', 'windDirections', 'panels'] as const) {
+        setActivePinia(createPinia());
+        const s = loaded(demo);
+        const entry = newActionEntry(list, ctxOf(demo));
+        expect(s.edit('Add', (p) => addActionEntry(p, list, entry as never)), `${list} on ${demo.meta?.name}`).toEqual({ ok: true });
+        expect(s.project![list]!.length).toBe((demo[list]?.length ?? 0) + 1);
+      }
+    }
+  });
+
   it('refuses an entry the validator rejects, naming it, and changes nothing', () => {
     const s = loaded(mast);
     const r = s.edit('Add', (p) => addActionEntry(p, 'memberLoss', { id: 'loss', fromCase: 'nope', group: 'mast/guys level 1' }));
