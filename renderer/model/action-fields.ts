@@ -50,10 +50,10 @@ export const ANCILLARY_FIELDS: FieldSpec[] = [
   { path: 'along.group', label: 'group', type: 'ref', ref: 'group', required: true, show: isLine },
   { path: 'along.from', label: 'from height', type: 'number', kind: 'length', required: true, show: isLine },
   { path: 'along.to', label: 'to height', type: 'number', kind: 'length', required: true, show: isLine },
-  { path: 'dragArea', label: 'drag area C_f·A', type: 'number', kind: (e) => (isLine(e) ? 'dragAreaPerLength' : 'dragArea'), required: true, rule: nonNegative, title: 'Force coefficient × reference area; a line item per metre of height' },
+  { path: 'dragArea', label: 'drag area C_f·A', type: 'number', kind: (e) => (isLine(e) ? 'dragAreaPerLength' : 'dragArea'), required: true, rule: nonNegative, title: 'Force coefficient × reference area (type the product, e.g. "1.2 * 0.8 m^2"); a line item per metre of height' },
   { path: 'mass', label: 'mass', type: 'number', kind: (e) => (isLine(e) ? 'massPerLength' : 'mass'), required: true, rule: nonNegative, title: 'A line item per metre of height' },
-  { path: 'iceDragArea', label: 'ice drag area', type: 'number', unit: (e) => (isLine(e) ? 'm²/m per m of ice' : 'm² per m of ice'), rule: nonNegative, placeholder: '0: ice ignored', title: 'Drag area added per metre of radial ice thickness (SI)' },
-  { path: 'iceMass', label: 'ice mass', type: 'number', unit: (e) => (isLine(e) ? 'kg/m per m of ice' : 'kg per m of ice'), rule: nonNegative, placeholder: '0: ice ignored', title: 'Ice mass per metre of radial ice thickness (SI)' },
+  { path: 'iceDragArea', label: 'ice drag area', type: 'number', unit: (e) => (isLine(e) ? '(m²/m)/m ice' : 'm²/m ice'), rule: nonNegative, placeholder: '0: ice ignored', title: 'Drag area added per metre of radial ice thickness (SI)' },
+  { path: 'iceMass', label: 'ice mass', type: 'number', unit: (e) => (isLine(e) ? '(kg/m)/m ice' : 'kg/m ice'), rule: nonNegative, placeholder: '0: ice ignored', title: 'Ice mass per metre of radial ice thickness (SI)' },
 ];
 
 export const PATCH_WIND_FIELDS: FieldSpec[] = [

@@ -86,6 +86,7 @@ describe('design actions and design basis in the app', () => {
     expect(await page.locator('[data-testid="ancillaries"] [data-entry="0"] [data-field="node"]').inputValue()).toBe(top);
     await setField('ancillaries', 0, 'mass', 'heavy');
     expect(await page.getByTestId('ancillaries-errors').textContent()).toContain('ancillaries[0] "A1" mass: "heavy"');
+    await shot('59-ancillary.png');
 
     // Patch wind on "wind 60" (the demo has one on "wind 0"), patch factor 1.4.
     await page.getByTestId('patch-wind-add').click();
@@ -126,7 +127,7 @@ describe('design actions and design basis in the app', () => {
 
     // Run: the cases the actions add are in the results, as the solver names them.
     await page.getByTestId('run').click();
-    await expect.poll(async () => (await page.getByTestId('analysis-state').textContent()) ?? '', { timeout: 150_000 }).toMatch(/cases converged|not converged/);
+    await expect.poll(async () => (await page.getByTestId('analysis-state').textContent()) ?? '', { timeout: 240_000 }).toMatch(/cases converged|not converged/);
     const offered = await page.getByTestId('case-select').locator('option').evaluateAll((os) => os.map((o) => (o as HTMLOptionElement).value));
     const added = actionCaseIds(expected);
     expect(added).toContain('patch 60 max');
@@ -134,8 +135,15 @@ describe('design actions and design basis in the app', () => {
     for (const id of added) expect(offered).toContain(id);
     await page.getByTestId('case-select').selectOption(added.find((id) => id.startsWith('guy loss / '))!);
     await shot('62-guy-loss-case.png');
+    // In US units the ancillary's mass reads in lb (80 kg / 0.45359237 kg/lb, NIST SP 811).
+    await page.getByTestId('units-us').click();
+    await page.getByTestId('right-tab-actions').click();
+    await page.getByTestId('ancillaries-open-0').click();
+    expect(await page.locator('[data-testid="ancillaries"] [data-entry="0"] [data-field="mass"]').inputValue()).toBe(String(Number((80 / 0.45359237).toPrecision(6))));
+    await shot('64-ancillary-us-units.png');
+    await page.getByTestId('units-si').click();
     expect(pageErrors).toEqual([]);
-  }, 240_000);
+  }, 360_000);
 
   it('switches the check format and builds the combinations of the design basis with the button', async () => {
     await page.getByTestId('right-tab-project').click();

@@ -11,6 +11,7 @@ import { createPinia, setActivePinia } from 'pinia';
 import type { ProjectFile } from '../../solver/index.ts';
 import { applyBuiltCombinations, buildCombinations, resolveDesignBasis } from '../../solver/index.ts';
 import { useProjectStore } from '../../renderer/stores/project.ts';
+import { useResultsStore } from '../../renderer/stores/results.ts';
 import { addActionEntry, editAreaLoad, replaceActionEntry, setPath } from '../../renderer/model/action-edits.ts';
 import { ACTION_FIELDS, AREA_LOAD_FIELDS, MEMBER_LOSS_FIELDS, newActionEntry } from '../../renderer/model/action-fields.ts';
 import { applyFieldText, fieldText, otherFields, type Entry, type FieldContext, type FieldSpec } from '../../renderer/model/field-spec.ts';
@@ -39,6 +40,9 @@ describe('field text of the action editors', () => {
     expect(a.ok && a.entry.dragArea).toBeCloseTo(10 * FT * FT, 12);
     const withUnit = applyFieldText(field(anc, 'dragArea'), point, '2500 cm^2', ctxOf(mast), 'x');
     expect(withUnit.ok && withUnit.entry.dragArea).toBeCloseTo(0.25, 12);
+    // Area × force coefficient typed as a product.
+    const product = applyFieldText(field(anc, 'dragArea'), point, '1.2 * 0.8 m^2', ctxOf(mast), 'x');
+    expect(product.ok && product.entry.dragArea).toBeCloseTo(0.96, 12);
     expect(parseQuantity('1 psf', 'pressure', 'SI', 'p')).toEqual({ ok: true, value: expect.closeTo(LBF / (FT * FT), 9) });
     // A line item's drag area is per metre of height, mass per metre.
     const line: Entry = { ...point, node: undefined, along: { group: 'mast/mast legs', from: 10, to: 50 } };
@@ -112,6 +116,31 @@ describe('action edits through the project store', () => {
     s.undo();
     expect(s.project!.ancillaries).toBeUndefined();
     expect(s.project).toBe(mast);
+  });
+
+  it('makes the results stale: the cases an action adds change with it; the design basis does not', () => {
+    const s = loaded(mast);
+    const r = useResultsStore();
+    r.started(1, mast);
+    r.assignRunId('a');
+    r.onFinished({ runId: 'a', status: 'done', report: { cases: [] } });
+    expect(r.isStaleFor(s.project)).toBe(false);
+    s.edit('Basis', (p) => setBasisFormat(p, 'allowable'));
+    expect(r.isStaleFor(s.project)).toBe(false);
+    s.edit('Add', (p) => addActionEntry(p, 'ancillaries', { id: 'A1', kind: 'dish', node: top, dragArea: 0.8, mass: 30 }));
+    expect(r.isStaleFor(s.project)).toBe(true);
+  });
+
+  it('"+ Add" makes an entry the validator accepts in every list, on both demos', () => {
+    for (const demo of [mast, canopy]) {
+      for (const list of ['ancillaries', 'patchWind', 'memberLoss', 'windDirections', 'panels'] as const) {
+        setActivePinia(createPinia());
+        const s = loaded(demo);
+        const entry = newActionEntry(list, ctxOf(demo));
+        expect(s.edit('Add', (p) => addActionEntry(p, list, entry as never)), `${list} on ${demo.meta?.name}`).toEqual({ ok: true });
+        expect(s.project![list]!.length).toBe((demo[list]?.length ?? 0) + 1);
+      }
+    }
   });
 
   it('refuses an entry the validator rejects, naming it, and changes nothing', () => {
