@@ -6,7 +6,7 @@
  * beside it, synced, renamed), so a partial file is never left behind.
  */
 import { resolve } from 'node:path';
-import { CheckInputError, installationData, runChecks, solveProject } from '../../../solver/index.ts';
+import { CheckInputError, installationData, runChecks } from '../../../solver/index.ts';
 import type { CheckReport, InstallationData, SolveReport } from '../../../solver/index.ts';
 import { buildSchedule, scheduleCsv, scheduleHtml } from '../../common/schedule/index.ts';
 import type { PaperSize, ScheduleUnits } from '../../common/schedule/index.ts';
@@ -16,6 +16,7 @@ import type { CliIO } from '../cli-io.ts';
 import { parseOptions } from '../options.ts';
 import { readProjectOrReport } from '../read-project-file.ts';
 import { writeFileAtomic } from '../../store/atomic-write.ts';
+import { solveOnWorkers } from '../solve-on-workers.ts';
 
 const HELP = `Writes the member tension schedule: project header and caution, per member the cut
 length, installation tension at the reference temperature, cable frequencies, tension per case
@@ -82,7 +83,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   let installation: InstallationData | null = null;
   const notes: string[] = [];
   try {
-    report = solveProject(project).report;
+    report = (await solveOnWorkers(project)).report;
   } catch (e) {
     io.err(`${file}: the analysis failed: ${(e as Error).message}\n`);
     return EXIT.notConverged;
