@@ -5,7 +5,7 @@
  * PDF printed through headless Chromium. Outputs are written atomically.
  */
 import { resolve } from 'node:path';
-import { CheckInputError, installationData, referenceCaseId, runChecks, runSequence, solveModes, solveProject } from '../../../solver/index.ts';
+import { CheckInputError, installationData, referenceCaseId, runChecks, runSequence, solveModes } from '../../../solver/index.ts';
 import type { CheckReport, InstallationData, ModalOutcome, SequenceResult, SolveReport } from '../../../solver/index.ts';
 import { buildReport } from '../../common/report/build-report.ts';
 import { reportHtml } from '../../common/report/report-html.ts';
@@ -18,6 +18,7 @@ import { readProjectOrReport } from '../read-project-file.ts';
 import { writeFileAtomic } from '../../store/atomic-write.ts';
 import { printPdf } from '../print-pdf.ts';
 import { isoToday, singleOption } from './option-helpers.ts';
+import { solveOnWorkers } from '../solve-on-workers.ts';
 
 const HELP = `Writes the calculation report an engineer submits: title and revision block
 (project "report"), design basis and check settings, model summary with elevation and plan,
@@ -58,7 +59,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   const notes: string[] = [];
   let report: SolveReport;
   try {
-    report = solveProject(project).report;
+    report = (await solveOnWorkers(project)).report;
   } catch (e) {
     io.err(`${file}: the analysis failed: ${(e as Error).message}\n`);
     return EXIT.notConverged;

@@ -7,7 +7,7 @@
  * file beside it, synced, renamed), so a partial file is never left behind.
  */
 import { resolve } from 'node:path';
-import { CheckInputError, installationData, referenceCaseId, runChecks, solveModes, solveProject } from '../../../solver/index.ts';
+import { CheckInputError, installationData, referenceCaseId, runChecks, solveModes } from '../../../solver/index.ts';
 import type { CheckReport, InstallationData, ModalOutcome, ScheduleSpec, SolveReport } from '../../../solver/index.ts';
 import { buildSchedule, scheduleCsv, scheduleHtml } from '../../common/schedule/index.ts';
 import type { PaperSize, ScheduleUnits } from '../../common/schedule/index.ts';
@@ -19,6 +19,7 @@ import { readProjectOrReport } from '../read-project-file.ts';
 import { writeFileAtomic } from '../../store/atomic-write.ts';
 import { printPdf } from '../print-pdf.ts';
 import { SCHEDULE_MODE_COUNT } from '../../common/schedule/schedule-frequencies.ts';
+import { solveOnWorkers } from '../solve-on-workers.ts';
 
 const HELP = `Writes the member tension schedule: project header and caution, per member the cut
 length, installation tension at the reference temperature, cable frequencies, tension per case
@@ -110,7 +111,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   let installation: InstallationData | null = null;
   const notes: string[] = [];
   try {
-    report = solveProject(project).report;
+    report = (await solveOnWorkers(project)).report;
   } catch (e) {
     io.err(`${file}: the analysis failed: ${(e as Error).message}\n`);
     return EXIT.notConverged;

@@ -32,6 +32,7 @@ function duplicateIds(root: unknown, list: string, errors: string[]): void {
 }
 
 function panelErrors(root: unknown, errors: string[]): void {
+  if (entries(root, 'panels').length === 0) return; // no node tables to build for a file without panels
   const at = nodePositions(root);
   const nodes = idSet(root, 'nodes');
   for (const { index, entry } of entries(root, 'panels')) {
