@@ -242,6 +242,9 @@ describe('results that can be trusted', () => {
     await page.getByTestId('path-input').press('Enter');
     await expect.poll(() => page.getByTestId('project-name').textContent(), { timeout: 20_000 }).toContain('melt');
     expect(await runAnalysis()).toBe('1 of 3 cases not converged');
+    // Slack members are counted over the converged cases only (a case that did not converge has no valid ones).
+    const slackConverged = reference.cases.filter((c) => c.converged).reduce((n, c) => n + c.slackMembers.length, 0);
+    expect(await statusText()).toContain(slackConverged ? `${slackConverged} slack member-cases` : 'no slack members');
     await page.getByTestId('case-select').selectOption('melt');
     const state = page.getByTestId('not-converged');
     await state.waitFor();
