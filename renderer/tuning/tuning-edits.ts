@@ -78,3 +78,22 @@ export function removeTarget(project: ProjectFile, index: number): ProjectFile {
   const spec = emptySpec(project);
   return withTuning(project, { ...spec, targets: spec.targets.filter((_, i) => i !== index) });
 }
+
+/**
+ * Set or clear (undefined) the bounds of tuning variable `index`: N for a pretension variable, a
+ * factor on the unstressed lengths for a length variable. Throws naming the entry when a bound
+ * is not positive or min ≥ max.
+ */
+export function setVariableBounds(project: ProjectFile, index: number, min: number | undefined, max: number | undefined): ProjectFile {
+  const spec = emptySpec(project);
+  const v = spec.variables[index];
+  if (!v) throw new RangeError(`tuning.variables[${index}] does not exist`);
+  for (const [name, b] of [['min', min], ['max', max]] as const) {
+    if (b !== undefined && !(b > 0 && Number.isFinite(b))) throw new Error(`tuning.variables[${index}] "${v.group}": ${name} ${b} must be a positive number`);
+  }
+  if (min !== undefined && max !== undefined && !(min < max)) throw new Error(`tuning.variables[${index}] "${v.group}": min ${min} must be below max ${max}`);
+  const next: TuningSpec['variables'][number] = { group: v.group, by: v.by };
+  if (min !== undefined) next.min = min;
+  if (max !== undefined) next.max = max;
+  return withTuning(project, { ...spec, variables: spec.variables.map((x, i) => (i === index ? next : x)) });
+}

@@ -183,6 +183,12 @@ describe('a new project, edited without a text editor', () => {
     await page.getByTestId('sag-group').selectOption(`${rid}/guys`);
     await page.getByTestId('add-sag').click();
     await expect.poll(() => checks.textContent()).toContain(`${rid}/guys: sag ≤ 2 % of span`);
+    // Minimum tension of the guys (the installation share is prefilled with 10 %), one undo step.
+    await page.getByTestId('min-tension-group').selectOption(`${rid}/guys`);
+    await page.getByTestId('min-tension-breaking').fill('5');
+    await page.getByTestId('add-min-tension').click();
+    await expect.poll(() => checks.textContent()).toContain(`${rid}/guys: T ≥ 10 % of installation and 5 % of breaking load`);
+    expect(await page.getByTestId('undo').getAttribute('title')).toContain(`Minimum tension of ${rid}/guys`);
     await page.getByTestId('uplift-node').fill('no such node');
     await page.getByTestId('add-uplift').click();
     expect(await page.getByTestId('checks-editor-errors').textContent()).toMatch(/no such node/);
@@ -199,6 +205,12 @@ describe('a new project, edited without a text editor', () => {
     await page.getByTestId('tuning-target-node').fill(base);
     await page.getByTestId('tuning-target-value').fill('60');
     await page.getByTestId('tuning-add-target').click();
+    // A tuning variable with a lower bound typed in kN.
+    await page.getByTestId('tuning-new-variable').selectOption(`${rid}/guys`);
+    await page.getByTestId('tuning-add-variable').click();
+    await page.getByTestId('tuning-min-0').fill('5');
+    await page.getByTestId('tuning-min-0').press('Enter');
+    await expect.poll(() => page.getByTestId('undo').getAttribute('title')).toContain(`Lower bound of ${rid}/guys`);
     const setup = (await page.getByTestId('tuning-setup').textContent()) ?? '';
     expect(setup).toMatch(/plumb|top/i);
     expect(setup).toMatch(/reaction/i);
@@ -242,6 +254,9 @@ describe('results that can be trusted', () => {
     await page.getByTestId('path-input').press('Enter');
     await expect.poll(() => page.getByTestId('project-name').textContent(), { timeout: 20_000 }).toContain('melt');
     expect(await runAnalysis()).toBe('1 of 3 cases not converged');
+    // Slack members are counted over the converged cases only (a case that did not converge has no valid ones).
+    const slackConverged = reference.cases.filter((c) => c.converged).reduce((n, c) => n + c.slackMembers.length, 0);
+    expect(await statusText()).toContain(slackConverged ? `${slackConverged} slack member-cases` : 'no slack members');
     await page.getByTestId('case-select').selectOption('melt');
     const state = page.getByTestId('not-converged');
     await state.waitFor();

@@ -44,7 +44,7 @@ function casesList(ids: string[], shown = 3): string {
   return ids.length > shown ? `${head} +${ids.length - shown} more` : head;
 }
 
-function groupLine(g: GroupRow, env: Map<string, MemberEnvelope>, checks: Map<string, MemberCheck> | null): string[] {
+function groupLine(g: GroupRow, env: Map<string, MemberEnvelope>, checks: Map<string, MemberCheck> | null, allConverged: boolean): string[] {
   const members = g.members.map((id) => env.get(id)).filter((m): m is MemberEnvelope => m !== undefined);
   const count = `${g.members.length} ${g.kind}`;
   if (members.length === 0) return [g.label, count, '—', '', '', '—', '', '—', '', 'no result'];
@@ -63,7 +63,8 @@ function groupLine(g: GroupRow, env: Map<string, MemberEnvelope>, checks: Map<st
       utilCase = top.utilisationCase;
     }
     const failing = mc.filter((m) => m.status === 'fail').length;
-    verdict = failing > 0 ? `FAIL (${failing})` : mc.some((m) => m.status === 'pass') ? 'pass' : 'not checked';
+    // With a case that did not converge, nothing passes: the checks are incomplete.
+    verdict = failing > 0 ? `FAIL (${failing})` : !mc.some((m) => m.status === 'pass') ? 'not checked' : allConverged ? 'pass' : 'incomplete';
   }
   return [g.label, count, kN(hi.tensionMax), hi.id, hi.tensionMaxCase, kN(lo.tensionMin), lo.tensionMinCase, util, utilCase, verdict, casesList(slack)];
 }
@@ -108,9 +109,12 @@ export function solveSummaryText(project: ProjectFile, report: SolveReport, disc
         { title: 'util.', align: r }, { title: 'case' }, { title: 'checks' },
         { title: 'slack in' },
       ],
-      groupRows(project).map((g) => groupLine(g, envById, checkById)),
+      groupRows(project).map((g) => groupLine(g, envById, checkById, checks?.allConverged ?? false)),
     ));
     if (env.skipped.length > 0) out.push(`Left out (did not converge): ${env.skipped.join(', ')}.`);
+    if (checks && !checks.members.some((m) => m.utilisation !== null)) {
+      out.push('No utilisation: no ultimate or accidental case was checked, or no section gives a breaking load or yield strength.');
+    }
   }
   if (note) out.push(note);
   out.push('');

@@ -89,6 +89,9 @@ export function referenceErrors(root: unknown): string[] {
       need('checks', 'node', str(t.entry, 'top'), `tiltLimits[${t.index}]: `);
     }
     needAll('checks', 'node', checks, 'upliftNodes', 'upliftNodes: ');
+    for (const r of entries(checks, 'minimumTension')) need('checks', 'group', str(r.entry, 'group'), `minimumTension[${r.index}]: `);
+    for (const r of entries(checks, 'memberDesign')) need('checks', 'group', str(r.entry, 'group'), `memberDesign[${r.index}]: `);
+    for (const t of entries(checks, 'twistLimits')) needAll('checks', 'node', t.entry, 'nodes', `twistLimits[${t.index}]: `);
   }
   const tuning = isRec(root) ? root.tuning : undefined;
   if (isRec(tuning)) {
