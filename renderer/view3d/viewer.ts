@@ -61,6 +61,7 @@ export class Viewer3D {
     this.drawing.update(data);
     this.drawExtras();
     if (first || !keepView) this.fit();
+    if (first) this.warmUp();
     this.requestRender();
   }
 
@@ -135,6 +136,43 @@ export class Viewer3D {
       this.loads.add(mesh);
     }
     this.requestRender();
+  }
+
+  /**
+   * Compile every shader program the view can need (members, overlay, supports, loads, wind,
+   * panels, ancillaries) once, with the first scene: stand-ins for the objects not drawn yet are
+   * added, compiled with the real lights and removed. Programs live as long as their materials
+   * (the viewer's), so no interaction compiles or links one later.
+   */
+  private warmUp(): void {
+    const line = new THREE.BufferGeometry();
+    line.setAttribute('position', new THREE.BufferAttribute(new Float32Array(6), 3));
+    const tri = new THREE.BufferGeometry();
+    tri.setAttribute('position', new THREE.BufferAttribute(new Float32Array(9), 3));
+    const cone = new THREE.ConeGeometry(1, 1, 4);
+    const box = new THREE.BoxGeometry(1, 1, 1);
+    const standIns = [
+      new THREE.LineSegments(line, this.loadLineMaterial),
+      new THREE.InstancedMesh(cone, this.loadHeadMaterial, 1),
+      new THREE.Mesh(tri, this.windMaterial),
+      new THREE.Mesh(tri, this.extras.panelMaterial),
+      new THREE.InstancedMesh(box, this.extras.ancillaryMaterial, 1),
+      new THREE.InstancedMesh(cone, this.drawing.materials.pinned, 1),
+      new THREE.InstancedMesh(box, this.drawing.materials.partial, 1),
+    ];
+    const holder = new THREE.Group();
+    holder.add(...standIns);
+    this.scene.add(holder);
+    const extrasVisible = this.extras.group.visible;
+    this.extras.group.visible = true;
+    try {
+      this.renderer.compile(this.scene, this.camera);
+    } finally {
+      this.extras.group.visible = extrasVisible;
+      this.scene.remove(holder);
+      for (const g of [line, tri, cone, box]) g.dispose();
+      for (const o of standIns) if (o instanceof THREE.InstancedMesh) o.dispose();
+    }
   }
 
   /** Frame the whole model (its nodes and member polylines; the ground grid does not count). */
