@@ -13,6 +13,10 @@
  * (x, y, z restrained) as pyramids under the node, partly restrained ones as flat rings. In colour
  * mode 'checks' nodes that fail a check are large red points drawn over everything. Coordinates
  * are relative to `origin` (the model centre when the topology was built), z up.
+ *
+ * Objects with nothing to draw stay visible with an empty draw range, so their shader programs
+ * are compiled with the first frame (or Viewer3D's warm-up), not at the first selection or the
+ * first slack member.
  */
 import * as THREE from 'three';
 import { allocateLineBuffers, fillLineBuffers, modelCentre, segmentCounts, type LineBuffers, type SegmentBuffer } from './line-buffers.ts';
@@ -131,7 +135,6 @@ export class ModelDrawing {
       }
     }
     this.selectedLines.geometry.setDrawRange(0, 2 * n);
-    this.selectedLines.visible = n > 0;
     lineAttr.needsUpdate = n > 0;
     const nodeAttr = this.selectedNodes.geometry.getAttribute('position') as THREE.BufferAttribute;
     const p = nodeAttr.array as Float32Array;
@@ -145,7 +148,6 @@ export class ModelDrawing {
       k++;
     }
     this.selectedNodes.geometry.setDrawRange(0, k);
-    this.selectedNodes.visible = k > 0;
     nodeAttr.needsUpdate = k > 0;
   }
 
@@ -225,7 +227,6 @@ export class ModelDrawing {
     const buffers = this.buffers!;
     for (const [obj, buf] of [[this.taut!, buffers.taut], [this.slack!, buffers.slack]] as const) {
       obj.geometry.setDrawRange(0, 2 * buf.segmentCount);
-      obj.visible = buf.segmentCount > 0;
       (obj.geometry.getAttribute('position') as THREE.BufferAttribute).needsUpdate = true;
       (obj.geometry.getAttribute('color') as THREE.BufferAttribute).needsUpdate = true;
     }
@@ -256,7 +257,6 @@ export class ModelDrawing {
       mesh.setColorAt(i, c.setRGB(buf.colours[6 * i], buf.colours[6 * i + 1], buf.colours[6 * i + 2]));
     }
     mesh.count = buf.segmentCount;
-    mesh.visible = buf.segmentCount > 0;
     mesh.instanceMatrix.needsUpdate = true;
     if (mesh.instanceColor) mesh.instanceColor.needsUpdate = true;
   }
@@ -274,7 +274,6 @@ export class ModelDrawing {
       out[3 * k + 2] = positions[3 * i + 2] - oz;
     }
     points.geometry.setDrawRange(0, count);
-    points.visible = count > 0;
     attr.needsUpdate = true;
   }
 

@@ -10,6 +10,8 @@ import { pickAt, type PickHit } from './pick.ts';
 import type { SceneData } from './scene-data.ts';
 import type { LoadArrows } from './load-arrows.ts';
 import { ModelDrawing } from './model-drawing.ts';
+import { ExtrasDrawing } from './extras-drawing.ts';
+import type { ExtrasData } from './extras-data.ts';
 
 const LOAD_COLOUR = 0xff9f43;
 const WIND_COLOUR = 0x7fd4ff;
@@ -22,6 +24,9 @@ export class Viewer3D {
   private readonly camera = new THREE.PerspectiveCamera(40, 1, 0.1, 1e5);
   private readonly controls: OrbitControls;
   private readonly drawing = new ModelDrawing();
+  /** Panels and ancillaries. */
+  private readonly extras = new ExtrasDrawing();
+  private extrasData: ExtrasData | null = null;
   /** Load arrows and the wind arrow; their materials live as long as the viewer. */
   private readonly loads = new THREE.Group();
   private readonly loadLineMaterial = new THREE.LineBasicMaterial({ color: LOAD_COLOUR, depthTest: false, transparent: true });
@@ -40,7 +45,7 @@ export class Viewer3D {
     const sun = new THREE.DirectionalLight(0xffffff, 0.9);
     sun.position.set(1, -2, 3);
     this.scene.add(sun);
-    this.scene.add(this.drawing.content, this.drawing.overlay, this.loads);
+    this.scene.add(this.drawing.content, this.extras.group, this.drawing.overlay, this.loads);
     this.controls = new OrbitControls(this.camera, canvas);
     this.controls.enableDamping = false;
     this.controls.screenSpacePanning = true;
@@ -54,8 +59,23 @@ export class Viewer3D {
   setScene(data: SceneData, keepView = true): void {
     const first = this.drawing.data === null;
     this.drawing.update(data);
+    this.drawExtras();
     if (first || !keepView) this.fit();
+    if (first) this.warmUp();
     this.requestRender();
+  }
+
+  /** Panels and ancillaries of the project (drawn at the positions of the scene). */
+  setExtras(extras: ExtrasData | null): void {
+    this.extrasData = extras;
+    this.drawExtras();
+    this.requestRender();
+  }
+
+  private drawExtras(): void {
+    const { data, buffers, extent } = this.drawing;
+    this.extras.group.visible = Boolean(this.extrasData && data && buffers);
+    if (this.extrasData && data && buffers) this.extras.update(this.extrasData, data, buffers.origin, extent);
   }
 
   /** Counters of the drawing: geometry builds and in-place updates. */
@@ -118,6 +138,43 @@ export class Viewer3D {
     this.requestRender();
   }
 
+  /**
+   * Compile every shader program the view can need (members, overlay, supports, loads, wind,
+   * panels, ancillaries) once, with the first scene: stand-ins for the objects not drawn yet are
+   * added, compiled with the real lights and removed. Programs live as long as their materials
+   * (the viewer's), so no interaction compiles or links one later.
+   */
+  private warmUp(): void {
+    const line = new THREE.BufferGeometry();
+    line.setAttribute('position', new THREE.BufferAttribute(new Float32Array(6), 3));
+    const tri = new THREE.BufferGeometry();
+    tri.setAttribute('position', new THREE.BufferAttribute(new Float32Array(9), 3));
+    const cone = new THREE.ConeGeometry(1, 1, 4);
+    const box = new THREE.BoxGeometry(1, 1, 1);
+    const standIns = [
+      new THREE.LineSegments(line, this.loadLineMaterial),
+      new THREE.InstancedMesh(cone, this.loadHeadMaterial, 1),
+      new THREE.Mesh(tri, this.windMaterial),
+      new THREE.Mesh(tri, this.extras.panelMaterial),
+      new THREE.InstancedMesh(box, this.extras.ancillaryMaterial, 1),
+      new THREE.InstancedMesh(cone, this.drawing.materials.pinned, 1),
+      new THREE.InstancedMesh(box, this.drawing.materials.partial, 1),
+    ];
+    const holder = new THREE.Group();
+    holder.add(...standIns);
+    this.scene.add(holder);
+    const extrasVisible = this.extras.group.visible;
+    this.extras.group.visible = true;
+    try {
+      this.renderer.compile(this.scene, this.camera);
+    } finally {
+      this.extras.group.visible = extrasVisible;
+      this.scene.remove(holder);
+      for (const g of [line, tri, cone, box]) g.dispose();
+      for (const o of standIns) if (o instanceof THREE.InstancedMesh) o.dispose();
+    }
+  }
+
   /** Frame the whole model (its nodes and member polylines; the ground grid does not count). */
   fit(): void {
     const box = new THREE.Box3();
@@ -175,6 +232,7 @@ export class Viewer3D {
     this.resizeObserver.disconnect();
     this.controls.dispose();
     this.drawing.dispose();
+    this.extras.dispose();
     this.clearGroup(this.loads);
     for (const m of [this.loadLineMaterial, this.loadHeadMaterial, this.windMaterial]) m.dispose();
     this.renderer.dispose();
