@@ -52,6 +52,7 @@ describe.skipIf(SKIP_BROWSER_TESTS)('site screens in the browser edition', () =>
     const expected: SequenceResult = JSON.parse(cli.stdout).sequences[0];
     await page.goto(rig.host.url);
     await expect.poll(() => page.getByTestId('project-name').textContent(), { timeout: 30_000 }).toContain('demo-mast');
+    await shot('29-top-bar-site-buttons.png');
     await page.getByTestId('open-sequence').click();
     await page.getByTestId('sequence-choice').selectOption('top down');
     await page.getByTestId('sequence-run').click();
@@ -107,6 +108,23 @@ describe.skipIf(SKIP_BROWSER_TESTS)('site screens in the browser edition', () =>
     const unidentified = expected.cables.filter((c) => !c.identified);
     expect(await page.getByTestId('asbuilt-unidentified').count()).toBe(unidentified.length ? 1 : 0);
     await shot('32-site-asbuilt.png');
+    expect(pageErrors).toEqual([]);
+  }, 300_000);
+
+  it('Report: the calculation report is built by the host and shown for printing', async () => {
+    await page.getByTestId('report-show').click();
+    const frame = page.getByTestId('document-frame');
+    await frame.waitFor({ timeout: 180_000 });
+    const html = (await frame.getAttribute('srcdoc')) ?? '';
+    expect(html).toContain('Calculation report');
+    expect(html).toContain('Governing results per check');
+    expect(html).toContain('Tensioning sequence top down');
+    expect(html).toContain('qualified engineer');
+    await page.waitForTimeout(300);
+    await shot('33-site-report.png');
+    await page.getByTestId('document-close').click();
+    await page.getByTestId('site-close').click();
+    expect(await page.getByTestId('site-view').count()).toBe(0);
     expect(pageErrors).toEqual([]);
   }, 300_000);
 });

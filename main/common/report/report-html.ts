@@ -11,7 +11,7 @@ import { escapeHtml as e } from '../schedule/schedule-html.ts';
 import { formatForce, formatLength, formatNumber, formatTemperature, unitLabels } from '../schedule/schedule-units.ts';
 import type { ReportDocument } from './report-types.ts';
 import { printCss } from './print-css.ts';
-import { modelSvg } from './model-svg.ts';
+import { modelSvg, type DeformedShape } from './model-svg.ts';
 import { crewSheetBody } from './crew-sheet.ts';
 import { checkRow } from '../checks/check-text.ts';
 import { designBasisHtml, actionsHtml, sectionsHtml } from './report-input-sections.ts';
@@ -37,6 +37,14 @@ function governingHtml(d: ReportDocument): string {
   return (rows.length ? table('Governing value of each check over every case and combination (the results of the design checks on this solve)', ['Check', 'Item', 'Case', 'Value', 'Limit', 'Ratio', 'Result'], rows) : '<p>No check settings in the project.</p>')
     + `<p><b>Overall: ${d.checks.pass ? 'every check passes in every case' : `${d.checks.failures.length} failure(s)`}</b> (design basis: ${e(d.checks.basis.label)}).</p>`
     + (failures.length ? table('Failures (worst case of each)', ['Check', 'Item', 'Case', 'Description'], failures) : '');
+}
+
+/** The deformed shape drawn in the model pictures: the case of the first failing governing row, else of the highest utilisation, else the first converged case. */
+function governingShape(d: ReportDocument): DeformedShape | null {
+  const converged = d.report.cases.filter((c) => c.converged);
+  const wanted = d.governing.find((g) => !g.pass && g.case)?.case ?? d.governing.find((g) => g.check === 'utilisation')?.case ?? d.governing.find((g) => g.case)?.case;
+  const c = converged.find((x) => x.id === wanted) ?? converged[0];
+  return c ? { caseId: c.id, nodes: c.nodes } : null;
 }
 
 function envelopeHtml(d: ReportDocument): string {
@@ -86,7 +94,7 @@ export function reportHtml(d: ReportDocument): string {
   const rev = d.revisions.at(-1)?.revision ?? '—';
   const sections: [string, string][] = [
     ['Design basis', designBasisHtml(d)],
-    ['Model', `<p>${d.model.nodes} nodes (${d.model.supports} with supports), ${d.model.members} members (${d.model.cables} cables, ${d.model.bars} bars) in ${d.model.elements} elements, ${d.model.dofs} free degrees of freedom, ${d.model.sections} sections, ${d.model.groups} groups.</p>${modelSvg(p)}`],
+    ['Model', `<p>${d.model.nodes} nodes (${d.model.supports} with supports), ${d.model.members} members (${d.model.cables} cables, ${d.model.bars} bars) in ${d.model.elements} elements, ${d.model.dofs} free degrees of freedom, ${d.model.sections} sections, ${d.model.groups} groups.</p>${modelSvg(p, 300, governingShape(d))}`],
     ['Materials and sections', sectionsHtml(d)],
     ['Actions and combinations', actionsHtml(d)],
     ['Analysis', analysisHtml(d)],
@@ -106,7 +114,7 @@ export function reportHtml(d: ReportDocument): string {
 <title>Calculation report — ${e(name)}</title>
 <style>
 ${printCss({ paper: d.paper, caution: d.caution, header: `${name} — calculation report ${d.documentNumber} rev. ${rev}`, footer: `${name} — issued ${d.issueDate}` })}
-.views { display: flex; gap: 6mm; } .views svg { border: 0.6pt solid #000; }
+.views { display: flex; gap: 6mm; } .views svg { border: 0.6pt solid #000; } p.fig { font-size: 8pt; margin-top: 1mm; }
 </style>
 </head>
 <body>
