@@ -16,6 +16,7 @@ import { crewSheetBody } from './crew-sheet.ts';
 import { checkRow } from '../checks/check-text.ts';
 import { designBasisHtml, actionsHtml, sectionsHtml } from './report-input-sections.ts';
 import { modesHtml } from './report-modes.ts';
+import { scheduleTuning } from '../schedule/schedule-tuning.ts';
 
 const table = (caption: string, head: string[], rows: string[][]) =>
   `<table><caption>${caption}</caption><thead><tr>${head.map((h) => `<th>${h}</th>`).join('')}</tr></thead><tbody>${rows.map((r) => `<tr>${r.map((c) => `<td>${c}</td>`).join('')}</tr>`).join('\n')}</tbody></table>`;
@@ -79,7 +80,12 @@ function tuningHtml(d: ReportDocument): string {
   if (!t) return '<p>No tuning is recorded in the project.</p>';
   const vars = t.variables.map((v) => [e(v.group), e(v.by), v.min === undefined ? '—' : String(v.min), v.max === undefined ? '—' : String(v.max)]);
   const targets = t.targets.map((x) => [e(x.kind), e(JSON.stringify(x).replace(/^\{|\}$/g, ''))]);
+  // The run's targets and final values as the schedule prints them (schedule-tuning.ts).
+  const run = t.lastRun ? scheduleTuning(d.project, t.lastRun, d.units, (g) => d.project.groups?.find((x) => x.id === g)?.label ?? g, []) : null;
+  const reached = run?.targets.length ? table('Targets reached in the last run', ['Target', 'Value reached', 'Met'], run.targets.map((x) => [e(x.label), e(x.value), x.met ? 'yes' : '<b class="fail">NO</b>'])) : '';
+  const finals = run?.variables.length ? table('Values left by the last run', ['Group', 'Variable', 'Final value'], run.variables.map((v) => [e(v.group), e(v.by), e(v.value)])) : '';
   return (t.lastRun ? `<p><b>Last run ${e(t.lastRun.date)}:</b> ${e(t.lastRun.summary)}</p>` : '<p>The tuner has not been run on this file (no record).</p>')
+    + reached + finals
     + table('Tuning variables', ['Group', 'By', 'Min', 'Max'], vars) + table('Tuning targets', ['Kind', 'Definition'], targets);
 }
 

@@ -8,6 +8,8 @@ import { membersOfGroup, purposeOf, referenceCaseId, runChecks, solveModes, solv
 import type { CheckReport, ModalOutcome, ProjectFile, SolveReport } from '../../../../solver/index.ts';
 import { buildSchedule, scheduleCsv, scheduleHtml } from '../../../../main/common/schedule/index.ts';
 import { validateProject } from '../../../../main/common/project/index.ts';
+import { buildReport } from '../../../../main/common/report/build-report.ts';
+import { reportHtml } from '../../../../main/common/report/report-html.ts';
 import { mastProject } from './mast-fixture.ts';
 
 let project: ProjectFile;
@@ -153,6 +155,11 @@ describe('the tuning run kept in the project', () => {
     expect(html).not.toContain('No tuning run is recorded');
     expect(html).toContain('every target met');
     expect(doc.notes.join(' ')).not.toContain('tuning record is not the current state');
+    // The calculation report prints the same run from the same record.
+    const tunedReport = solveProject(tuned).report;
+    const calc = reportHtml(buildReport({ project: tuned, report: tunedReport, checks: runChecks(tuned, tunedReport), installation: null, sequences: [] }, date));
+    expect(calc).toContain(`<td>${doc.tuning!.targets[0].value}</td><td>yes</td>`);
+    expect(calc).toContain(`<td>guys level 1</td><td>pretension</td><td>${doc.tuning!.variables[0].value}</td>`);
     // A later edit of the pretension: the record stays, and the schedule says it is not the current state.
     const edited: ProjectFile = { ...tuned, members: tuned.members.map((m) => (membersOfGroup(tuned, 'mast/guys level 1').has(m.id) ? { ...m, pretension: 12e3 } : m)) };
     const later = buildSchedule({ project: edited, report: solveProject(edited).report }, date);
