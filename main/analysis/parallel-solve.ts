@@ -14,6 +14,7 @@ import { spawnWorker } from './analysis-runner.ts';
 import { analysisWorkerUrl } from './worker-location.ts';
 import type { AnalysisWorkerData, WorkerMessage } from './worker-messages.ts';
 import { caseIds, defaultWorkerCount, splitCases } from './case-shares.ts';
+import { hasActionCases } from '../../solver/index.ts';
 
 export interface ParallelSolveOptions {
   /** Threads; default defaultWorkerCount. */
@@ -38,7 +39,7 @@ export async function solveProjectInWorkers(project: ProjectFile, options: Paral
   const t0 = performance.now();
   // Cases derived from actions (patch wind, member loss, wind directions) need their base cases in
   // the same solve: such projects run as one share, in solveProject's own order.
-  const derived = Boolean(project.patchWind?.length || project.memberLoss?.length || project.windDirections?.length);
+  const derived = hasActionCases(project);
   const ids = caseIds(project, options.only);
   const parts: (string[] | undefined)[] = derived ? [options.only] : splitCases(ids, options.workers ?? defaultWorkerCount(ids.length));
   const indexOf = new Map(ids.map((id, i) => [id, i] as const));

@@ -17,7 +17,7 @@ import type { ActionKind, BucklingCurve, CasePurpose, DesignBasis, MemberDesignR
 export type * from './design-basis-types.ts';
 import type { ReportSpec, SiteMeasurementSetSpec, TensioningSequenceSpec } from './site-types.ts';
 import type { BeamReleases, NodeSprings, PrescribedDisplacement, NodalMoment } from './structure-types.ts';
-import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec, WindBasisSpec, WindDirectionsSpec, AncillarySpec } from './actions-types.ts';
+import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec, WindBasisSpec, WindDirectionsSpec, AncillarySpec, IceWithWindSpec, UnbalancedIceSpec } from './actions-types.ts';
 
 export type * from './actions-types.ts';
 
@@ -64,6 +64,10 @@ export interface ProjectFile {
   windDirections?: WindDirectionsSpec[];
   /** Antennas, feeders, ladders, platforms: wind, weight and ice (actions-types.ts). */
   ancillaries?: AncillarySpec[];
+  /** Ice-with-wind pairings (actions-types.ts). */
+  iceWithWind?: IceWithWindSpec[];
+  /** Unbalanced ice on guys (actions-types.ts). */
+  unbalancedIce?: UnbalancedIceSpec[];
 }
 
 export interface ProjectMeta {
