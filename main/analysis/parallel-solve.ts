@@ -21,6 +21,7 @@ import { spawnWorker } from './analysis-runner.ts';
 import { analysisWorkerUrl } from './worker-location.ts';
 import { CANCEL_REQUESTED, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
 import { caseClaimer, caseIds, claimedBy, createClaims, defaultWorkerCount } from './case-shares.ts';
+import { hasActionCases } from '../../solver/index.ts';
 
 export interface ParallelSolveOptions {
   /** Threads, the calling one included; default defaultWorkerCount. */
@@ -79,7 +80,7 @@ export async function solveProjectInWorkers(project: ProjectFile, options: Paral
     isCancelled: () => Atomics.load(flag, 0) === CANCEL_REQUESTED,
     ...(options.onProgress ? { onProgress: progress } : {}),
   };
-  const derived = Boolean(project.patchWind?.length || project.memberLoss?.length || project.windDirections?.length);
+  const derived = hasActionCases(project);
   const threads = derived ? 1 : Math.max(1, Math.min(options.workers ?? defaultWorkerCount(ids.length), ids.length));
   if (threads <= 1) return solveProject(project, control, options.only ? { only: options.only } : {});
 

@@ -18,7 +18,7 @@ export type * from './design-basis-types.ts';
 import type { ReportSpec, SiteMeasurementSetSpec, TensioningSequenceSpec } from './site-types.ts';
 import type { BeamReleases, NodeSprings, PrescribedDisplacement, NodalMoment } from './structure-types.ts';
 import type { ScheduleSpec, TuningRunRecord } from './schedule-types.ts';
-import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec, WindBasisSpec, WindDirectionsSpec, AncillarySpec } from './actions-types.ts';
+import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec, WindBasisSpec, WindDirectionsSpec, AncillarySpec, IceWithWindSpec, UnbalancedIceSpec } from './actions-types.ts';
 
 export type * from './actions-types.ts';
 export type * from './schedule-types.ts';
@@ -68,6 +68,10 @@ export interface ProjectFile {
   ancillaries?: AncillarySpec[];
   /** What the printed schedule lists (schedule-types.ts); absent = cables only. */
   schedule?: ScheduleSpec;
+  /** Ice-with-wind pairings (actions-types.ts). */
+  iceWithWind?: IceWithWindSpec[];
+  /** Unbalanced ice on guys (actions-types.ts). */
+  unbalancedIce?: UnbalancedIceSpec[];
 }
 
 export interface ProjectMeta {
