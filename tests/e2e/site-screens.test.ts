@@ -108,6 +108,14 @@ describe.skipIf(SKIP_BROWSER_TESTS)('site screens in the browser edition', () =>
     const unidentified = expected.cables.filter((c) => !c.identified);
     expect(await page.getByTestId('asbuilt-unidentified').count()).toBe(unidentified.length ? 1 : 0);
     await shot('32-site-asbuilt.png');
+    // The same result in US units (kip, in), reformatted without a new run.
+    await page.getByTestId('site-units-us').click();
+    const first = expected.adjustments[0];
+    const inches = smallLength('US', Math.abs(first.lengthChange));
+    expect(await page.locator(`tr[data-adjustment="${first.member}"] td[data-col="target"]`).textContent()).toBe(formatForce('US', first.targetTension));
+    expect(await page.locator(`tr[data-adjustment="${first.member}"] td[data-col="change"]`).textContent()).toBe(`${first.lengthChange > 0 ? '+' : '−'}${inches.text} ${inches.unit}`);
+    await shot('32b-site-asbuilt-us.png');
+    await page.getByTestId('site-units-si').click();
     expect(pageErrors).toEqual([]);
   }, 300_000);
 
