@@ -135,8 +135,11 @@ export function newDesignEntry(list: DesignList, ctx: FieldContext): Entry {
     case 'memberDesign':
       return { group: barGroup(p), role: 'leg' };
     case 'twistLimits': {
-      const top = p.nodes.reduce((a, b) => (b.at[2] > a.at[2] ? b : a), p.nodes[0]);
-      return { nodes: ctx.selectedNodes.length ? [...ctx.selectedNodes] : top ? [top.id] : [], limit: 0.5 };
+      // The picked nodes (two or more), else the nodes at the level of the highest (at least the two highest).
+      if (ctx.selectedNodes.length >= 2) return { nodes: [...ctx.selectedNodes], limit: 0.5 };
+      const byHeight = [...p.nodes].sort((a, b) => b.at[2] - a.at[2]);
+      const level = byHeight.filter((n) => Math.abs(n.at[2] - byHeight[0].at[2]) < 1e-3).map((n) => n.id);
+      return { nodes: level.length >= 2 ? level : byHeight.slice(0, 2).map((n) => n.id), limit: 0.5 };
     }
     case 'sections':
       return { id: freshId('S', p.sections.map((s) => s.id)), E: 200e9, area: 1e-4 };
