@@ -18,8 +18,8 @@ const opts = (values: readonly string[]) => [DEFAULT, ...values.map((v) => ({ va
 
 export const MINIMUM_TENSION_FIELDS: FieldSpec[] = [
   { path: 'group', label: 'group', type: 'ref', ref: 'group', required: true },
-  { path: 'shareOfInstallation', label: 'share of installation tension', type: 'number', rule: share, placeholder: 'not checked', title: 'Minimum tension as a share of the member’s installation tension (0.1 = 10 %)' },
-  { path: 'shareOfBreaking', label: 'share of breaking load', type: 'number', rule: share, placeholder: 'not checked', title: 'Minimum tension as a share of the section’s breaking load (0.02 = 2 %)' },
+  { path: 'shareOfInstallation', label: 'share of T_install', type: 'number', rule: share, placeholder: 'not checked', title: 'Minimum tension as a share of the member’s installation tension (0.1 = 10 %)' },
+  { path: 'shareOfBreaking', label: 'share of MBL', type: 'number', rule: share, placeholder: 'not checked', title: 'Minimum tension as a share of the section’s minimum breaking load (0.02 = 2 %)' },
 ];
 
 export const MEMBER_DESIGN_FIELDS: FieldSpec[] = [

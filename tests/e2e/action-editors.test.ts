@@ -183,7 +183,7 @@ describe('design actions and design basis in the app', () => {
     const n = demo.checks?.minimumTension?.length ?? 0;
     await page.getByTestId('minimum-tension-add').click();
     await setField('minimum-tension', n, 'shareOfBreaking', '2');
-    expect(await page.getByTestId('minimum-tension-errors').textContent()).toContain(`checks.minimumTension[${n}] share of breaking load: "2" must be a share from 0 to 1`);
+    expect(await page.getByTestId('minimum-tension-errors').textContent()).toContain(`checks.minimumTension[${n}] share of MBL: "2" must be a share from 0 to 1`);
     await setField('minimum-tension', n, 'shareOfBreaking', '0.02');
     await expect.poll(undoTitle).toContain('Minimum tension');
     await shot('65-check-rules.png');
@@ -202,12 +202,15 @@ describe('design actions and design basis in the app', () => {
     await setField('displacement', 0, 'z', '-15');
     await setField('displacement', 0, 'rz', '0.01');
     expect(await page.getByTestId('displacement-errors').textContent()).toContain('displacements[0]: node "mast/base" is not restrained in rz');
+    await page.getByTestId('displacements').scrollIntoViewIfNeeded();
+    await shot('67-support-displacement.png');
     await page.getByTestId('load-case-select').selectOption('ice + wind');
     const bare = demo.groups!.find((g) => g.id === 'mast/guys level 1')!.members.slice(0, 3);
     const input = page.locator('[data-testid="ice-editor"] [data-field="ice.bareMembers"]');
     await input.fill(bare.join(', '));
     await input.press('Enter');
-    await shot('67-case-loads.png');
+    await page.getByTestId('ice-editor').scrollIntoViewIfNeeded();
+    await shot('68-ice-bare-guys.png');
 
     await page.getByTestId('save').click();
     await expect.poll(() => page.getByTestId('dirty-mark').count()).toBe(0);

@@ -74,7 +74,7 @@ describe('field text of the design-data editors', () => {
   it('names the entry and the field in every refusal', () => {
     const rule = { group: 'mast/guys', shareOfInstallation: 0.1 };
     expect(applyFieldText(field(MINIMUM_TENSION_FIELDS, 'shareOfBreaking'), rule, '1.5', ctxOf(mast), 'checks.minimumTension[0]'))
-      .toEqual({ ok: false, error: 'checks.minimumTension[0] share of breaking load: "1.5" must be a share from 0 to 1' });
+      .toEqual({ ok: false, error: 'checks.minimumTension[0] share of MBL: "1.5" must be a share from 0 to 1' });
     expect(applyFieldText(field(TWIST_LIMIT_FIELDS, 'limit'), { nodes: ['a'], limit: 1 }, '0', ctxOf(mast), 'checks.twistLimits[0]'))
       .toEqual({ ok: false, error: 'checks.twistLimits[0] twist limit: "0" must be > 0' });
     expect(applyFieldText(field(MEMBER_DESIGN_FIELDS, 'group'), { group: 'g' }, '', ctxOf(mast), 'checks.memberDesign[1]'))
