@@ -212,9 +212,19 @@ describe('design actions and design basis in the app', () => {
     await page.getByTestId('ice-editor').scrollIntoViewIfNeeded();
     await shot('68-ice-bare-guys.png');
 
+    // An ancillary iced as a coat on a round body: the per-thickness fields give way to the coat's.
+    await page.getByTestId('right-tab-actions').click();
+    const k = (await saved()).ancillaries?.length ?? 0;
+    await page.getByTestId('ancillaries-add').click();
+    await setField('ancillaries', k, 'iceBehaviour', 'coat');
+    await setField('ancillaries', k, 'coatWidth', '0.3');
+    expect(await page.locator(`[data-testid="ancillaries"] [data-entry="${k}"] [data-field="iceMass"]`).count()).toBe(0);
+    await shot('69-ancillary-ice-coat.png');
+
     await page.getByTestId('save').click();
     await expect.poll(() => page.getByTestId('dirty-mark').count()).toBe(0);
     const file3 = await saved();
+    expect(file3.ancillaries?.[k]).toMatchObject({ iceBehaviour: 'coat', coatWidth: 0.3, coatLength: 1 });
     expect(file3.checks?.minimumTension?.[n]).toEqual({ group: 'mast/guys level 1', shareOfInstallation: 0.1, shareOfBreaking: 0.02 });
     expect(file3.sections[0]).toEqual({ ...demo.sections[0], yieldStrength: 235e6 });
     expect(file3.loadCases.find((c) => c.id === 'dead')?.displacements).toEqual([{ node: 'mast/base', z: -0.015 }]);
