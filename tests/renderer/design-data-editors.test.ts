@@ -105,8 +105,6 @@ describe('design-data edits through the project store', () => {
     expect(s.project!.checks!.minimumTension![n]).toEqual(entry);
     s.undo();
     expect(s.project).toBe(mast);
-    // "*" stands for every cable.
-    expect(s.edit('All', (p) => editCheckRule(p, 'memberDesign', 0, { group: '*', slendernessLimit: 200 }))).toEqual({ ok: true });
     const twist = s.edit('Twist', (p) => editCheckRule(p, 'twistLimits', 0, { nodes: ['mast/P10a', 'X9'], limit: 0.5 }));
     expect(twist).toEqual({ ok: false, errors: ['checks: twistLimits[0]: node "X9" does not exist'] });
     const level = newDesignEntry('twistLimits', ctxOf(mast));

@@ -90,10 +90,8 @@ export function referenceErrors(root: unknown): string[] {
       need('checks', 'node', str(t.entry, 'top'), `tiltLimits[${t.index}]: `);
     }
     needAll('checks', 'node', checks, 'upliftNodes', 'upliftNodes: ');
-    // "*" stands for every cable (solver/checks/groups.ts).
-    for (const key of ['minimumTension', 'memberDesign']) {
-      for (const r of entries(checks, key)) if (str(r.entry, 'group') !== '*') need('checks', 'group', str(r.entry, 'group'), `${key}[${r.index}]: `);
-    }
+    for (const r of entries(checks, 'minimumTension')) need('checks', 'group', str(r.entry, 'group'), `minimumTension[${r.index}]: `);
+    for (const r of entries(checks, 'memberDesign')) need('checks', 'group', str(r.entry, 'group'), `memberDesign[${r.index}]: `);
     for (const t of entries(checks, 'twistLimits')) needAll('checks', 'node', t.entry, 'nodes', `twistLimits[${t.index}]: `);
   }
   const tuning = isRec(root) ? root.tuning : undefined;
