@@ -16,6 +16,8 @@ const nonNegative = { test: (v: number) => v >= 0, words: 'must be ≥ 0' };
 const ID: FieldSpec = { path: 'id', label: 'id', type: 'text', required: true };
 const LABEL: FieldSpec = { path: 'label', label: 'label', type: 'text' };
 const isLine = (e: Entry) => e.along !== undefined;
+const isCoat = (e: Entry) => e.iceBehaviour === 'coat';
+const perThickness = (e: Entry) => e.iceBehaviour === undefined || e.iceBehaviour === 'perThickness';
 
 /** Highest node of the project, m (0 for none). */
 function topHeight(project: ProjectFile): number {
@@ -32,6 +34,24 @@ function mastGroup(project: ProjectFile): string {
   return groups.find((g) => /mast|leg/i.test(g) && !/guy/i.test(g)) ?? groups[0] ?? '';
 }
 
+/**
+ * An ancillary with its ice behaviour changed and the fields of the others dropped (the file
+ * allows iceDragArea/iceMass only per thickness, coatWidth/coatLength only for a coat). A new
+ * coat starts at 0.1 m wide and, on a point item, 1 m long: values to be edited.
+ */
+export function setIceBehaviour(e: Entry, v: string): Entry {
+  const next = { ...e };
+  if (v === '') delete next.iceBehaviour;
+  else next.iceBehaviour = v;
+  if (v !== '' && v !== 'perThickness') { delete next.iceDragArea; delete next.iceMass; }
+  if (v !== 'coat') { delete next.coatWidth; delete next.coatLength; }
+  else {
+    next.coatWidth ??= 0.1;
+    if (!isLine(e)) next.coatLength ??= 1;
+  }
+  return next;
+}
+
 export const ANCILLARY_FIELDS: FieldSpec[] = [
   ID, LABEL,
   { path: 'kind', label: 'kind', type: 'select', required: true, options: ['antenna', 'dish', 'feeder', 'ladder', 'platform', 'other'].map((v) => ({ value: v, label: v })) },
@@ -41,8 +61,8 @@ export const ANCILLARY_FIELDS: FieldSpec[] = [
     set: (e, v, ctx) => {
       if ((v === 'line') === isLine(e)) return e;
       const next = { ...e };
-      if (v === 'line') { delete next.node; next.along = { group: mastGroup(ctx.project), from: 0, to: topHeight(ctx.project) }; }
-      else { delete next.along; next.node = ctx.selectedNodes[0] ?? topNode(ctx.project); }
+      if (v === 'line') { delete next.node; delete next.coatLength; next.along = { group: mastGroup(ctx.project), from: 0, to: topHeight(ctx.project) }; }
+      else { delete next.along; next.node = ctx.selectedNodes[0] ?? topNode(ctx.project); if (next.iceBehaviour === 'coat') next.coatLength ??= 1; }
       return next;
     },
   },
@@ -52,8 +72,17 @@ export const ANCILLARY_FIELDS: FieldSpec[] = [
   { path: 'along.to', label: 'to height', type: 'number', kind: 'length', required: true, show: isLine },
   { path: 'dragArea', label: 'drag area C_f·A', type: 'number', kind: (e) => (isLine(e) ? 'dragAreaPerLength' : 'dragArea'), required: true, rule: nonNegative, title: 'Force coefficient × reference area (type the product, e.g. "1.2 * 0.8 m^2"); a line item per metre of height' },
   { path: 'mass', label: 'mass', type: 'number', kind: (e) => (isLine(e) ? 'massPerLength' : 'mass'), required: true, rule: nonNegative, title: 'A line item per metre of height' },
-  { path: 'iceDragArea', label: 'ice drag area', type: 'number', unit: (e) => (isLine(e) ? '(m²/m)/m ice' : 'm²/m ice'), rule: nonNegative, placeholder: '0: ice ignored', title: 'Drag area added per metre of radial ice thickness (SI)' },
-  { path: 'iceMass', label: 'ice mass', type: 'number', unit: (e) => (isLine(e) ? '(kg/m)/m ice' : 'kg/m ice'), rule: nonNegative, placeholder: '0: ice ignored', title: 'Ice mass per metre of radial ice thickness (SI)' },
+  { path: 'iceDragArea', show: perThickness, label: 'ice drag area', type: 'number', unit: (e) => (isLine(e) ? '(m²/m)/m ice' : 'm²/m ice'), rule: nonNegative, placeholder: '0: ice ignored', title: 'Drag area added per metre of radial ice thickness (SI)' },
+  { path: 'iceMass', label: 'ice mass', type: 'number', unit: (e) => (isLine(e) ? '(kg/m)/m ice' : 'kg/m ice'), rule: nonNegative, placeholder: '0: ice ignored', title: 'Ice mass per metre of radial ice thickness (SI)', show: perThickness },
+  {
+    path: 'iceBehaviour', label: 'ice', type: 'select',
+    options: [{ value: '', label: 'per ice thickness (default)' }, { value: 'perThickness', label: 'per ice thickness' }, { value: 'coat', label: 'a coat on a round body' }, { value: 'none', label: 'none (shielded)' }],
+    title: 'How ice forms on the item: drag area and mass per metre of ice; a uniform coat on a round body of the coat width; or none',
+    get: (e) => (typeof e.iceBehaviour === 'string' ? e.iceBehaviour : ''),
+    set: (e, v) => setIceBehaviour(e, v),
+  },
+  { path: 'coatWidth', label: 'coat width', type: 'number', kind: 'length', required: true, rule: { test: (v) => v > 0, words: 'must be > 0' }, show: isCoat, title: 'Outer width of the iced round body: the drag area grows by (w + 2t)/w' },
+  { path: 'coatLength', label: 'coat length', type: 'number', kind: 'length', required: true, rule: { test: (v) => v > 0, words: 'must be > 0' }, show: (e) => isCoat(e) && !isLine(e), title: 'Length of the iced body (a line item is iced per metre of height)' },
 ];
 
 export const PATCH_WIND_FIELDS: FieldSpec[] = [

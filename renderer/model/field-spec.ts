@@ -30,9 +30,10 @@ export interface FieldSpec {
   /**
    * text: a string; number: a number (a quantity when `kind` is set); select: one of `options`;
    * ref: an id of `ref`; list: comma-separated ids; ranges: height ranges "0 … 20; 20 … 40"
-   * (length unit); pairs: "name: number, name: number" as [{ region, cp }].
+   * (length unit); pairs: "name: number, name: number" as [{ region, cp }]; vector: three
+   * numbers "x, y, z" (each a quantity of `kind` when set) as [x, y, z].
    */
-  type: 'text' | 'number' | 'select' | 'ref' | 'list' | 'ranges' | 'pairs';
+  type: 'text' | 'number' | 'select' | 'ref' | 'list' | 'ranges' | 'pairs' | 'vector';
   required?: boolean;
   /** Quantity kind of a number (display unit, unit-aware entry); may depend on the entry. */
   kind?: QuantityKind | ((e: Entry) => QuantityKind);
@@ -101,6 +102,18 @@ export function applyFieldText(f: FieldSpec, entry: Entry, text: string, ctx: Fi
     case 'list':
       value = t.split(',').map((s) => s.trim()).filter(Boolean);
       break;
+    case 'vector': {
+      const parts = t.split(/[,;]/).map((s) => s.trim());
+      if (parts.length !== 3 || parts.some((s) => s === '')) return { ok: false, error: `${at}: "${t}" is not three components "x, y, z"` };
+      const out: number[] = [];
+      for (const [k, part] of parts.entries()) {
+        const r = num(part, f, entry, ctx.units, `${at} ${'xyz'[k]}`);
+        if (!r.ok) return r;
+        out.push(r.value);
+      }
+      value = out;
+      break;
+    }
     case 'ranges': {
       const out: { from: number; to: number }[] = [];
       for (const part of t.split(';').map((s) => s.trim()).filter(Boolean)) {
@@ -144,6 +157,10 @@ export function fieldText(f: FieldSpec, entry: Entry, units: UnitSystem): string
     }
     case 'list':
       return (v as string[]).join(', ');
+    case 'vector': {
+      const k = kindOf(f, entry);
+      return (v as number[]).map((x) => (k ? formatQuantity(x, k, units, 6) : String(Number(x.toPrecision(10))))).join(', ');
+    }
     case 'ranges':
       return (v as { from: number; to: number }[]).map((r) => `${formatQuantity(r.from, 'length', units, 6)} … ${formatQuantity(r.to, 'length', units, 6)}`).join('; ');
     case 'pairs':

@@ -21,7 +21,11 @@ export type QuantityKind =
   | 'mass'
   | 'dragArea'
   | 'dragAreaPerLength'
-  | 'pressure';
+  | 'pressure'
+  | 'moment'
+  | 'strength'
+  | 'secondMoment'
+  | 'shearModulus';
 
 export interface DisplayUnit {
   /** Label shown in column headers and after values. */
@@ -100,6 +104,26 @@ export const KINDS: Record<QuantityKind, KindInfo> = {
   pressure: {
     siUnit: 'Pa', noun: 'a pressure',
     units: { SI: { label: 'Pa', mathUnit: 'Pa', toSI: 1 }, US: { label: 'psf', mathUnit: 'psf', toSI: LBF / (FT * FT) } },
+  },
+  /** Nodal moments (N·m in the file); kip·ft = 1000 lbf × 0.3048 m. */
+  moment: {
+    siUnit: 'N m', noun: 'a moment',
+    units: { SI: { label: 'kN·m', mathUnit: 'kN m', toSI: 1e3 }, US: { label: 'kip·ft', mathUnit: 'kip ft', toSI: 1000 * LBF * FT } },
+  },
+  /** Yield strength (Pa in the file); ksi = 1000 lbf/in². */
+  strength: {
+    siUnit: 'Pa', noun: 'a stress',
+    units: { SI: { label: 'MPa', mathUnit: 'MPa', toSI: 1e6 }, US: { label: 'ksi', mathUnit: 'ksi', toSI: (1000 * LBF) / (IN * IN) } },
+  },
+  /** Second moments of area and torsion constants (m⁴ in the file). */
+  secondMoment: {
+    siUnit: 'm^4', noun: 'a second moment of area',
+    units: { SI: { label: 'cm⁴', mathUnit: 'cm^4', toSI: 1e-8 }, US: { label: 'in⁴', mathUnit: 'in^4', toSI: IN ** 4 } },
+  },
+  /** Shear modulus G (Pa in the file), shown as the Young's modulus is. */
+  shearModulus: {
+    siUnit: 'Pa', noun: 'a stress (modulus)',
+    units: { SI: { label: 'GPa', mathUnit: 'GPa', toSI: 1e9 }, US: { label: 'ksi', mathUnit: 'ksi', toSI: (1000 * LBF) / (IN * IN) } },
   },
 };
 

@@ -177,4 +177,58 @@ describe('design actions and design basis in the app', () => {
     expect((await page.getByTestId('undo').getAttribute('title')) ?? '').toContain('Action of ice + wind');
     expect(pageErrors).toEqual([]);
   }, 120_000);
+  it('edits check rules, section design data, support displacements and bare guys in the app', async () => {
+    // Check rules: a minimum tension on the guys, refused share named by entry, then 2 % of breaking.
+    await page.getByTestId('right-tab-checks').click();
+    const n = demo.checks?.minimumTension?.length ?? 0;
+    await page.getByTestId('minimum-tension-add').click();
+    await setField('minimum-tension', n, 'shareOfBreaking', '2');
+    expect(await page.getByTestId('minimum-tension-errors').textContent()).toContain(`checks.minimumTension[${n}] share of MBL: "2" must be a share from 0 to 1`);
+    await setField('minimum-tension', n, 'shareOfBreaking', '0.02');
+    await expect.poll(undoTitle).toContain('Minimum tension');
+    await shot('65-check-rules.png');
+
+    // Section data under the sections table: yield strength of the leg tube in MPa.
+    await page.getByTestId('tab-sections').click();
+    await page.getByTestId('section-open-0').click();
+    await setField('section', 0, 'yieldStrength', '235');
+    await shot('66-section-data.png');
+
+    // Case loads: a settlement of the base in the dead case, the guys of level 1 bare of ice.
+    await page.getByTestId('right-tab-loads').click();
+    expect(await page.getByTestId('right-tab-loads').textContent()).toBe('Case loads');
+    await page.getByTestId('load-case-select').selectOption('dead');
+    await page.getByTestId('displacement-add').click();
+    await setField('displacement', 0, 'z', '-15');
+    await setField('displacement', 0, 'rz', '0.01');
+    expect(await page.getByTestId('displacement-errors').textContent()).toContain('displacements[0]: node "mast/base" is not restrained in rz');
+    await page.getByTestId('displacements').scrollIntoViewIfNeeded();
+    await shot('67-support-displacement.png');
+    await page.getByTestId('load-case-select').selectOption('ice + wind');
+    const bare = demo.groups!.find((g) => g.id === 'mast/guys level 1')!.members.slice(0, 3);
+    const input = page.locator('[data-testid="ice-editor"] [data-field="ice.bareMembers"]');
+    await input.fill(bare.join(', '));
+    await input.press('Enter');
+    await page.getByTestId('ice-editor').scrollIntoViewIfNeeded();
+    await shot('68-ice-bare-guys.png');
+
+    // An ancillary iced as a coat on a round body: the per-thickness fields give way to the coat's.
+    await page.getByTestId('right-tab-actions').click();
+    const k = (await saved()).ancillaries?.length ?? 0;
+    await page.getByTestId('ancillaries-add').click();
+    await setField('ancillaries', k, 'iceBehaviour', 'coat');
+    await setField('ancillaries', k, 'coatWidth', '0.3');
+    expect(await page.locator(`[data-testid="ancillaries"] [data-entry="${k}"] [data-field="iceMass"]`).count()).toBe(0);
+    await shot('69-ancillary-ice-coat.png');
+
+    await page.getByTestId('save').click();
+    await expect.poll(() => page.getByTestId('dirty-mark').count()).toBe(0);
+    const file3 = await saved();
+    expect(file3.ancillaries?.[k]).toMatchObject({ iceBehaviour: 'coat', coatWidth: 0.3, coatLength: 1 });
+    expect(file3.checks?.minimumTension?.[n]).toEqual({ group: 'mast/guys level 1', shareOfInstallation: 0.1, shareOfBreaking: 0.02 });
+    expect(file3.sections[0]).toEqual({ ...demo.sections[0], yieldStrength: 235e6 });
+    expect(file3.loadCases.find((c) => c.id === 'dead')?.displacements).toEqual([{ node: 'mast/base', z: -0.015 }]);
+    expect(file3.loadCases.find((c) => c.id === 'ice + wind')?.ice).toEqual({ ...demo.loadCases.find((c) => c.id === 'ice + wind')!.ice, bareMembers: bare });
+    expect(pageErrors).toEqual([]);
+  }, 120_000);
 });

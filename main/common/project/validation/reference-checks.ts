@@ -68,6 +68,7 @@ export function referenceErrors(root: unknown): string[] {
   for (const { index, entry } of entries(root, 'loadCases')) {
     const at = entryLabel(root, 'loadCases', index);
     for (const l of entries(entry, 'nodalLoads')) need(at, 'node', str(l.entry, 'node'), `nodalLoads[${l.index}]: `);
+    for (const d of entries(entry, 'displacements')) need(at, 'node', str(d.entry, 'node'), `displacements[${d.index}]: `);
     if (isRec(entry.wind)) needAll(at, 'group', entry.wind, 'groups', 'wind: ');
     if (isRec(entry.ice)) needAll(at, 'group', entry.ice, 'groups', 'ice: ');
     if (isRec(entry.ice)) needAll(at, 'member', entry.ice, 'bareMembers', 'ice.bareMembers: ');
