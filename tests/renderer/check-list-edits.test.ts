@@ -54,6 +54,11 @@ describe('check-setting lists: minimum tension, bar design, twist', () => {
     expect(s.project).toBe(before);
   });
 
+  it('accepts "*" (every cable) as the group of a rule, as the design checks do (solver/checks/groups.ts)', () => {
+    const s = loaded(demo);
+    expect(s.edit('Minimum tension', (p) => addCheckEntry(p, 'minimumTension', { group: '*', shareOfBreaking: 0.02 })).ok).toBe(true);
+  });
+
   it('the design checks use an added minimum-tension rule: T_min ≥ share × breaking load (definition of the rule)', () => {
     const p = addCheckEntry({ ...demo, checks: { ...demo.checks, minimumTension: [] }, patchWind: [], combinations: [] }, 'minimumTension', { group: 'mast/guys level 1', shareOfBreaking: 0.05 });
     const report = solveProject({ ...p, loadCases: p.loadCases.slice(0, 2) }).report;

@@ -81,7 +81,9 @@ export function referenceErrors(root: unknown): string[] {
   const checks = isRec(root) ? root.checks : undefined;
   if (isRec(checks)) {
     for (const g of strings(checks, 'noSlackGroups')) if (g.value !== '*') need('checks', 'group', g.value, 'noSlackGroups: ');
-    for (const s of entries(checks, 'sagLimits')) need('checks', 'group', str(s.entry, 'group'), `sagLimits[${s.index}]: `);
+    // "*" stands for every cable wherever the checks take a group (solver/checks/groups.ts).
+    const needGroup = (g: string | undefined, prefix: string): void => { if (g !== '*') need('checks', 'group', g, prefix); };
+    for (const s of entries(checks, 'sagLimits')) needGroup(str(s.entry, 'group'), `sagLimits[${s.index}]: `);
     for (const d of entries(checks, 'displacementLimits')) {
       need('checks', 'node', str(d.entry, 'node'), `displacementLimits[${d.index}]: `);
     }
@@ -90,8 +92,8 @@ export function referenceErrors(root: unknown): string[] {
       need('checks', 'node', str(t.entry, 'top'), `tiltLimits[${t.index}]: `);
     }
     needAll('checks', 'node', checks, 'upliftNodes', 'upliftNodes: ');
-    for (const r of entries(checks, 'minimumTension')) need('checks', 'group', str(r.entry, 'group'), `minimumTension[${r.index}]: `);
-    for (const r of entries(checks, 'memberDesign')) need('checks', 'group', str(r.entry, 'group'), `memberDesign[${r.index}]: `);
+    for (const r of entries(checks, 'minimumTension')) needGroup(str(r.entry, 'group'), `minimumTension[${r.index}]: `);
+    for (const r of entries(checks, 'memberDesign')) needGroup(str(r.entry, 'group'), `memberDesign[${r.index}]: `);
     for (const t of entries(checks, 'twistLimits')) needAll('checks', 'node', t.entry, 'nodes', `twistLimits[${t.index}]: `);
   }
   const tuning = isRec(root) ? root.tuning : undefined;
