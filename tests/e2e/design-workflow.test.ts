@@ -102,8 +102,12 @@ describe.skipIf(SKIP_BROWSER_TESTS)('design, checks, tuning and generators in th
   it('drags the live pretension slider: the member table follows the worker re-solve; release writes the pretension', async () => {
     await page.getByTestId('results-tab-members').click();
     await page.getByTestId('right-tab-tuning').click();
+    // the demo has tuning targets of its own, so the set-up starts folded: open it
+    const setupBox = page.locator('details:has([data-testid="tuning-setup"])');
+    if (!(await setupBox.evaluate((d) => (d as HTMLDetailsElement).open))) await setupBox.locator('summary').click();
     await page.getByTestId('tuning-new-variable').selectOption(LEVEL);
     await page.getByTestId('tuning-add-variable').click();
+    await page.getByTestId('tuning-group').selectOption(LEVEL); // the demo's own variables come first
     const slider = page.getByTestId('pretension-slider');
     await slider.waitFor();
     const before = await tableTension(GUY);

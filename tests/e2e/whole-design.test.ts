@@ -196,6 +196,9 @@ describe('a new project, edited without a text editor', () => {
 
     // Tuning: a plumb target (base and top typed) and a reaction target.
     await page.getByTestId('right-tab-tuning').click();
+    // the set-up keeps the folding it had for the demo opened before (which has tuning targets)
+    const setupBox = page.locator('details:has([data-testid="tuning-setup"])');
+    if (!(await setupBox.evaluate((d) => (d as HTMLDetailsElement).open))) await setupBox.locator('summary').click();
     await page.getByTestId('tuning-target-kind').selectOption('plumb');
     await page.getByTestId('tuning-target-base').fill(base);
     await page.getByTestId('tuning-target-top').fill(top);

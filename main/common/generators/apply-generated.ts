@@ -169,6 +169,15 @@ export function applyGenerated(project: ProjectFile, record: GeneratorRecord, pa
   }
   const tuning = followTuning(ctx, project.tuning);
   if (tuning) out.tuning = tuning;
+  if (project.ancillaries) {
+    // point ancillaries follow their node like loads (role, same place, nearest node)
+    out.ancillaries = project.ancillaries.flatMap((a, i) => {
+      if (a.node === undefined) return [a];
+      const node = followNode(ctx, `ancillaries[${i}] "${a.id}"`, a.node, 'any');
+      if (node === null || lonely.has(node)) { notes.push(`ancillaries[${i}] "${a.id}": dropped (its node is gone)`); return []; }
+      return [node === a.node ? a : { ...a, node }];
+    });
+  }
   out = dropGroupReferences(out, gone, notes);
   if (!out.groups?.length) delete out.groups;
   const newPanels = followPanelRegions((project.panels ?? []).filter((pa) => ownedBy(rid, pa.id)), oldAt, parts.panels ?? [], newAt, notes);

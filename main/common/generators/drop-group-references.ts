@@ -3,7 +3,8 @@ import type { ProjectFile, TuningTarget } from '../../../solver/index.ts';
 /**
  * Remove every reference to the groups in `gone` (group ids that no longer exist): check settings
  * (no-slack groups, sag limits), tuning variables and group targets, wind and ice groups of load
- * cases, members' own `groups`. Each removal is described in `notes`. Returns a new project.
+ * cases, members' own `groups`, and design actions that name a group (member loss by group,
+ * unbalanced ice, line ancillaries). Each removal is described in `notes`. Returns a new project.
  */
 export function dropGroupReferences(p: ProjectFile, gone: ReadonlySet<string>, notes: string[]): ProjectFile {
   if (gone.size === 0) return p;
@@ -37,6 +38,21 @@ export function dropGroupReferences(p: ProjectFile, gone: ReadonlySet<string>, n
     }
     return next;
   });
+  // design actions: a member loss keeps its listed members; an action that needs the group goes
+  if (p.memberLoss) {
+    out.memberLoss = p.memberLoss.flatMap((m, i) => {
+      if (m.group === undefined || !gone.has(m.group)) return [m];
+      say(`memberLoss[${i}] "${m.id}"`, m.group);
+      const { group: _g, ...rest } = m;
+      return rest.members?.length ? [rest] : (notes.push(`memberLoss[${i}] "${m.id}": no member left to remove: dropped`), []);
+    });
+  }
+  if (p.unbalancedIce) {
+    out.unbalancedIce = p.unbalancedIce.filter((u, i) => (gone.has(u.group) ? (say(`unbalancedIce[${i}] "${u.id}"`, u.group), false) : true));
+  }
+  if (p.ancillaries) {
+    out.ancillaries = (out.ancillaries ?? p.ancillaries).filter((a, i) => (a.along && gone.has(a.along.group) ? (say(`ancillaries[${i}] "${a.id}"`, a.along.group), false) : true));
+  }
   out.members = p.members.map((m) => {
     if (!m.groups?.some((g) => gone.has(g))) return m;
     const groups = m.groups.filter((g) => !gone.has(g));
