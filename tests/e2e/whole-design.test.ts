@@ -196,7 +196,7 @@ describe('a new project, edited without a text editor', () => {
 
     // Tuning: a plumb target (base and top typed) and a reaction target.
     await page.getByTestId('right-tab-tuning').click();
-    // the set-up keeps the folding it had for the demo opened before (which has tuning targets)
+    // open the set-up if it is folded (it starts folded for a project that already has tuning variables)
     const setupBox = page.locator('details:has([data-testid="tuning-setup"])');
     if (!(await setupBox.evaluate((d) => (d as HTMLDetailsElement).open))) await setupBox.locator('summary').click();
     await page.getByTestId('tuning-target-kind').selectOption('plumb');
