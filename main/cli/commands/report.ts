@@ -9,7 +9,8 @@ import { CheckInputError, installationData, referenceCaseId, runChecks, runSeque
 import type { CheckReport, InstallationData, ModalOutcome, SequenceResult, SolveReport } from '../../../solver/index.ts';
 import { buildReport } from '../../common/report/build-report.ts';
 import { reportHtml } from '../../common/report/report-html.ts';
-import type { PaperSize, ScheduleUnits } from '../../common/schedule/index.ts';
+import type { PaperSize } from '../../common/schedule/index.ts';
+import type { UnitSystem } from '../../common/units/index.ts';
 import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
 import type { CliIO } from '../cli-io.ts';
@@ -91,7 +92,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   } catch (e) {
     notes.push(`Natural frequencies left out: ${(e as Error).message}.`);
   }
-  const html = reportHtml(buildReport({ project, report, checks, installation, sequences, modes, notes }, { issueDate: date, units: units as ScheduleUnits | undefined, paper: paper as PaperSize }));
+  const html = reportHtml(buildReport({ project, report, checks, installation, sequences, modes, notes }, { issueDate: date, units: units as UnitSystem | undefined, paper: paper as PaperSize }));
   try {
     if (htmlOut) await writeFileAtomic(resolve(io.cwd, htmlOut), html);
   } catch (e) {

@@ -9,7 +9,8 @@ import { resolve } from 'node:path';
 import { CheckInputError, installationData, runChecks, solveProject } from '../../../solver/index.ts';
 import type { CheckReport, InstallationData, SolveReport } from '../../../solver/index.ts';
 import { buildSchedule, scheduleCsv, scheduleHtml } from '../../common/schedule/index.ts';
-import type { PaperSize, ScheduleUnits } from '../../common/schedule/index.ts';
+import type { PaperSize } from '../../common/schedule/index.ts';
+import type { UnitSystem } from '../../common/units/index.ts';
 import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
 import type { CliIO } from '../cli-io.ts';
@@ -103,7 +104,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
     io.err(`${file}: installation data left out: ${(e as Error).message}\n`);
   }
   const doc = buildSchedule({ project, report, checks, installation, notes }, {
-    issueDate: date, paper: paper as PaperSize, units: units as ScheduleUnits | undefined,
+    issueDate: date, paper: paper as PaperSize, units: units as UnitSystem | undefined,
   });
   try {
     if (htmlOut) await writeFileAtomic(resolve(io.cwd, htmlOut), scheduleHtml(doc));

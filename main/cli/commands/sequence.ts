@@ -9,7 +9,7 @@ import { runSequence } from '../../../solver/index.ts';
 import type { ProjectFile, SequenceResult } from '../../../solver/index.ts';
 import { crewSheetHtml, stepLabel } from '../../common/report/crew-sheet.ts';
 import { sequenceIssueText, sequenceSuggestionText } from '../../common/report/sequence-text.ts';
-import type { ScheduleUnits } from '../../common/schedule/index.ts';
+import type { UnitSystem } from '../../common/units/index.ts';
 import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
 import type { CliIO } from '../cli-io.ts';
@@ -102,7 +102,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   else io.out(`${results.map((r) => sequenceText(project, r)).join('\n\n')}\n\n${RESULTS_DISCLAIMER}\n`);
   if (htmlOut) {
     try {
-      await writeFileAtomic(resolve(io.cwd, htmlOut), crewSheetHtml(project, results[0], { issueDate: date, units: units as ScheduleUnits | undefined }));
+      await writeFileAtomic(resolve(io.cwd, htmlOut), crewSheetHtml(project, results[0], { issueDate: date, units: units as UnitSystem | undefined }));
     } catch (e) {
       io.err(`${file}: writing the crew sheet failed (${(e as NodeJS.ErrnoException).code ?? (e as Error).message}); existing files are unchanged\n`);
       return EXIT.badInput;

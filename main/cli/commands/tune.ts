@@ -12,8 +12,7 @@ import { EXIT, UsageError } from '../cli-io.ts';
 import type { CliIO } from '../cli-io.ts';
 import { parseOptions } from '../options.ts';
 import { readProjectOrReport } from '../read-project-file.ts';
-import { fixed } from '../format/number-text.ts';
-import { forceIn, lengthIn, unitLabels, type ScheduleUnits } from '../../common/schedule/schedule-units.ts';
+import { fixedText, formatWithUnit, unitLabels, type UnitSystem } from '../../common/units/index.ts';
 import { textTable } from '../format/text-table.ts';
 import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
 import { writeTunedFile } from '../tune-write.ts';
@@ -45,17 +44,14 @@ Exit status:
   2  bad input: missing or invalid file, no tuning section, unknown groups, cases or nodes
   3  the cases converged but some target is not met`;
 
-function valueText(units: ScheduleUnits, unit: 'm' | 'N' | 'share', v: number): string {
-  const l = unitLabels(units);
-  if (unit === 'share') return `${fixed(v * 100, 2)} %`;
-  if (unit === 'm') return `${fixed(lengthIn(units, v), 3)} ${l.length}`;
-  return `${fixed(forceIn(units, v), 2)} ${l.force}`;
+function valueText(units: UnitSystem, unit: 'm' | 'N' | 'share', v: number): string {
+  return formatWithUnit(v, unit === 'share' ? 'share' : unit === 'm' ? 'length' : 'force', units);
 }
 
 /** Tuning result as text tables; forces in kN (SI) or kip (US), lengths in m or ft. */
-export function tuningText(r: TuningResult, units: ScheduleUnits = 'SI'): string {
+export function tuningText(r: TuningResult, units: UnitSystem = 'SI'): string {
   const variableText = (by: 'pretension' | 'unstressedLength', v: number): string =>
-    by === 'pretension' ? valueText(units, 'N', v) : `factor ${fixed(v, 6)}`;
+    by === 'pretension' ? valueText(units, 'N', v) : `factor ${fixedText(v, 6)}`;
   const targets = textTable(
     [{ title: 'target' }, { title: 'value', align: 'right' }, { title: 'limit', align: 'right' }, { title: 'governing' }, { title: 'met' }],
     r.targets.map((t) => [t.label, valueText(units, t.unit, t.value), t.target.kind === 'noSlack' ? `> 0 ${unitLabels(units).force}` : (t.sense === 'equal' ? '= ' : '≤ ') + valueText(units, t.unit, t.limit), t.governing, t.met ? 'yes' : 'NO']),

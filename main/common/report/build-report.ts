@@ -5,14 +5,14 @@
  */
 import { envelopeOf } from '../../../solver/index.ts';
 import { SCHEDULE_CAUTION, type PaperSize } from '../schedule/schedule-types.ts';
-import type { ScheduleUnits } from '../schedule/schedule-units.ts';
+import type { UnitSystem } from '../units/index.ts';
 import type { ReportDocument, ReportSource } from './report-types.ts';
 import { governingRows } from './governing.ts';
 import { warningText } from '../checks/check-text.ts';
 
 export interface ReportOptions {
   issueDate: string;
-  units?: ScheduleUnits;
+  units?: UnitSystem;
   paper?: PaperSize;
 }
 

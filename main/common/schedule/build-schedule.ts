@@ -7,7 +7,7 @@ import { envelopeOf, expectedStringFrequency, membersOfGroup, purposeOf } from '
 import { basisLines, checkRow, warningText } from '../checks/check-text.ts';
 import type { CheckReport, InstallationData, ProjectFile, SolveReport, TuningResult } from '../../../solver/index.ts';
 import { SCHEDULE_CAUTION, type PaperSize, type ScheduleDocument, type ScheduleMemberRow, type ScheduleTuning } from './schedule-types.ts';
-import { formatForce, formatLength, formatNumber, unitLabels, type ScheduleUnits } from './schedule-units.ts';
+import { fixedText, formatValue, unitLabels, type UnitSystem } from '../units/index.ts';
 
 export interface ScheduleSource {
   project: ProjectFile;
@@ -21,7 +21,7 @@ export interface ScheduleSource {
 }
 
 export interface ScheduleOptions {
-  units?: ScheduleUnits;
+  units?: UnitSystem;
   paper?: PaperSize;
   /** ISO date of issue (YYYY-MM-DD); the caller supplies it (pure builder, no clock). */
   issueDate: string;
@@ -91,10 +91,10 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
     tuning = {
       summary: t.summary,
       date: options.issueDate,
-      targets: t.targets.map((o) => ({ label: o.label, met: o.met, value: o.target.kind === 'noSlack' ? `least tension ${formatForce(units, o.value)} ${labels.force} (must stay above 0)` : targetValueText(units, o.value, o.limit, o.unit, o.sense) })),
+      targets: t.targets.map((o) => ({ label: o.label, met: o.met, value: o.target.kind === 'noSlack' ? `least tension ${formatValue(o.value, 'force', units)} ${labels.force} (must stay above 0)` : targetValueText(units, o.value, o.limit, o.unit, o.sense) })),
       variables: t.variables.map((v) => ({
         group: groupLabel(v.group), by: v.by,
-        value: v.by === 'pretension' ? `${formatForce(units, v.final)} ${labels.force}` : `length factor ${formatNumber(v.final, 5)}`,
+        value: v.by === 'pretension' ? `${formatValue(v.final, 'force', units)} ${labels.force}` : `length factor ${fixedText(v.final, 5)}`,
       })),
       diagnosis: t.diagnosis,
     };
@@ -145,10 +145,10 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
   };
 }
 
-function targetValueText(units: ScheduleUnits, value: number, limit: number, unit: 'm' | 'N' | 'share', sense: 'atMost' | 'equal'): string {
+function targetValueText(units: UnitSystem, value: number, limit: number, unit: 'm' | 'N' | 'share', sense: 'atMost' | 'equal'): string {
   const l = unitLabels(units);
   const op = sense === 'equal' ? 'target' : 'limit';
-  if (unit === 'share') return `${formatNumber(value * 100, 2)} % (${op} ${formatNumber(limit * 100, 2)} %)`;
-  if (unit === 'm') return `${formatLength(units, value)} ${l.length} (${op} ${formatLength(units, limit)} ${l.length})`;
-  return `${formatForce(units, value)} ${l.force} (${op} ${formatForce(units, limit)} ${l.force})`;
+  if (unit === 'share') return `${formatValue(value, 'share', units)} % (${op} ${formatValue(limit, 'share', units)} %)`;
+  if (unit === 'm') return `${formatValue(value, 'length', units)} ${l.length} (${op} ${formatValue(limit, 'length', units)} ${l.length})`;
+  return `${formatValue(value, 'force', units)} ${l.force} (${op} ${formatValue(limit, 'force', units)} ${l.force})`;
 }

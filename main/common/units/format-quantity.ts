@@ -28,8 +28,8 @@ export function decimalsOf(kind: QuantityKind, system: UnitSystem): number | nul
 }
 
 /** Fixed decimals; never "-0.00" (a value that rounds to zero prints unsigned). */
-export function fixedText(value: number, decimals: number): string {
-  if (!Number.isFinite(value)) return MISSING;
+export function fixedText(value: number | null | undefined, decimals: number): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return MISSING;
   const s = value.toFixed(decimals);
   return Number(s) === 0 ? (0).toFixed(decimals) : s;
 }

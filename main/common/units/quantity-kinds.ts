@@ -90,3 +90,8 @@ export function displayUnit(kind: QuantityKind, system: UnitSystem): DisplayUnit
 export function unitLabel(kind: QuantityKind, system: UnitSystem): string {
   return KINDS[kind].units[system].label;
 }
+
+/** Every kind's unit label in a system, e.g. `unitLabels('US').force === 'kip'`. */
+export function unitLabels(system: UnitSystem): Record<QuantityKind, string> {
+  return Object.fromEntries(Object.entries(KINDS).map(([k, info]) => [k, info.units[system].label])) as Record<QuantityKind, string>;
+}
