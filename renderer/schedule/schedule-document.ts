@@ -10,7 +10,7 @@ import { installationData, runChecks, solveProject } from '../../solver/index.ts
 // dependency needs Node's Buffer at load time.
 import { buildSchedule } from '../../main/common/schedule/build-schedule.ts';
 import type { ScheduleDocument } from '../../main/common/schedule/schedule-types.ts';
-import type { UnitSystem } from '../units/quantity-kinds.ts';
+import type { UnitSystem } from '../../main/common/units/index.ts';
 
 export interface SchedulePage {
   doc: ScheduleDocument;

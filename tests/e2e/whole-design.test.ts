@@ -174,14 +174,14 @@ describe('a new project, edited without a text editor', () => {
     await page.locator(`[data-testid="table-nodes"] tr[data-row-id="${top}"] td.rowhead`).click();
     await page.getByTestId('right-tab-checks').click();
     const checks = page.getByTestId('checks-editor');
-    await page.getByTestId('displacement-limit').fill('0.3');
+    await page.getByTestId('displacement-limit').fill('300'); // displacements in mm
     await page.getByTestId('add-displacement').click();
-    await expect.poll(() => checks.textContent()).toContain(`|Δ| of ${top} ≤ 0.3 m`);
+    await expect.poll(() => checks.textContent()).toContain(`|Δ| of ${top} ≤ 300.0 mm`);
     await page.getByTestId('uplift-node').fill(base);
     await page.getByTestId('add-uplift').click();
     await page.getByTestId('sag-group').selectOption(`${rid}/guys`);
     await page.getByTestId('add-sag').click();
-    await expect.poll(() => checks.textContent()).toContain(`${rid}/guys: sag ≤ 2 % of span`);
+    await expect.poll(() => checks.textContent()).toContain(`${rid}/guys: sag ≤ 2.0 % of span`);
     await page.getByTestId('uplift-node').fill('no such node');
     await page.getByTestId('add-uplift').click();
     expect(await page.getByTestId('checks-editor-errors').textContent()).toMatch(/no such node/);
