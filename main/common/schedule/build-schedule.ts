@@ -8,6 +8,7 @@ import { basisLines, checkRow, warningText } from '../checks/check-text.ts';
 import type { CheckReport, InstallationData, ProjectFile, SolveReport, TuningResult } from '../../../solver/index.ts';
 import { SCHEDULE_CAUTION, type PaperSize, type ScheduleDocument, type ScheduleMemberRow, type ScheduleTuning } from './schedule-types.ts';
 import { fixedText, formatValue, unitLabels, type UnitSystem } from '../units/index.ts';
+import { targetText, targetValueText, tuningDiagnosisText, tuningSummaryText } from '../tuning/tuning-text.ts';
 
 export interface ScheduleSource {
   project: ProjectFile;
@@ -89,14 +90,14 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
   if (src.tuning) {
     const t = src.tuning;
     tuning = {
-      summary: t.summary,
+      summary: tuningSummaryText(t, project, units),
       date: options.issueDate,
-      targets: t.targets.map((o) => ({ label: o.label, met: o.met, value: o.target.kind === 'noSlack' ? `least tension ${formatValue(o.value, 'force', units)} ${labels.force} (must stay above 0)` : targetValueText(units, o.value, o.limit, o.unit, o.sense) })),
+      targets: t.targets.map((o) => ({ label: targetText(project, o.target, units), met: o.met, value: o.target.kind === 'noSlack' ? `least tension ${formatValue(o.value, 'force', units)} ${labels.force} (must stay above 0)` : `${targetValueText(o, o.value, units)} (${o.sense === 'equal' ? 'target' : 'limit'} ${targetValueText(o, o.limit, units)})` })),
       variables: t.variables.map((v) => ({
         group: groupLabel(v.group), by: v.by,
         value: v.by === 'pretension' ? `${formatValue(v.final, 'force', units)} ${labels.force}` : `length factor ${fixedText(v.final, 5)}`,
       })),
-      diagnosis: t.diagnosis,
+      diagnosis: tuningDiagnosisText(t, project, units),
     };
   } else if (project.tuning?.lastRun) {
     tuning = { summary: project.tuning.lastRun.summary, date: project.tuning.lastRun.date, targets: [], variables: [], diagnosis: [] };
@@ -143,12 +144,4 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
     checkRows: src.checks ? src.checks.results.map((r) => checkRow(r, units)) : null,
     notes,
   };
-}
-
-function targetValueText(units: UnitSystem, value: number, limit: number, unit: 'm' | 'N' | 'share', sense: 'atMost' | 'equal'): string {
-  const l = unitLabels(units);
-  const op = sense === 'equal' ? 'target' : 'limit';
-  if (unit === 'share') return `${formatValue(value, 'share', units)} % (${op} ${formatValue(limit, 'share', units)} %)`;
-  if (unit === 'm') return `${formatValue(value, 'length', units)} ${l.length} (${op} ${formatValue(limit, 'length', units)} ${l.length})`;
-  return `${formatValue(value, 'force', units)} ${l.force} (${op} ${formatValue(limit, 'force', units)} ${l.force})`;
 }

@@ -7,3 +7,4 @@
 export * from './unit-factors.ts';
 export * from './quantity-kinds.ts';
 export * from './format-quantity.ts';
+export * from './message-quantity.ts';

@@ -44,7 +44,7 @@ describe('stayset tune', () => {
     const { file } = copyOfMast((p) => { p.tuning.targets = [{ kind: 'sag', group: 'guys', case: 'dead', limit: { absolute: 0.01 } }]; });
     const r = runStayset(['tune', file]);
     expect(r.code).toBe(3);
-    expect(r.stdout).toMatch(/above its upper bound 40\.0 kN/);
+    expect(r.stdout).toMatch(/above its upper bound 40\.00 kN/);
     expect(r.stdout).toMatch(/NO/);
   });
 
