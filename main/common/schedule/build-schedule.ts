@@ -8,6 +8,7 @@ import { basisLines, checkRow, warningText } from '../checks/check-text.ts';
 import type { CheckReport, InstallationData, ProjectFile, SolveReport, TuningResult } from '../../../solver/index.ts';
 import { SCHEDULE_CAUTION, type PaperSize, type ScheduleDocument, type ScheduleMemberRow, type ScheduleTuning } from './schedule-types.ts';
 import { fixedText, formatValue, unitLabels, type UnitSystem } from '../units/index.ts';
+import { installationNoteText } from '../report/installation-text.ts';
 import { targetText, targetValueText, tuningDiagnosisText, tuningSummaryText } from '../tuning/tuning-text.ts';
 
 export interface ScheduleSource {
@@ -104,7 +105,7 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
   }
 
   const inst = src.installation;
-  if (inst) notes.push(...inst.warnings);
+  if (inst) notes.push(...inst.warnings.map((w) => installationNoteText(w, units)));
   else notes.push('Installation data (cut lengths, frequencies, temperature table) was not computed.');
   if (!src.checks) notes.push('Design checks were not run: utilisation and check columns are empty.');
   else notes.push(...src.checks.warnings.map(warningText));
