@@ -41,11 +41,12 @@ export type { ModelBudget, ModelSizeEstimate, BudgetVerdict, BudgetItem, SizeDri
 export * from './asbuilt/index.ts';
 export * from './modes/index.ts';
 // design actions: panels and area loads, patch wind, member loss
-export { actionCaseIds } from './analysis/solve-actions.ts';
+export { actionCaseIds, derivedLoadCase, hasActionCases } from './analysis/solve-actions.ts';
 export { dynamicFactorOf, stepResponsePeak, lostMembers } from './loads/member-loss.ts';
 export { defaultPatches } from './loads/patch-wind.ts';
 export { windDirectionCases } from './loads/wind-directions.ts';
+export { DEFAULT_ICE_WIND_PAIRS, iceWithWindCases, unbalancedIceCases, unbalancedIceUnits } from './loads/ice-cases.ts';
 export { windForceFactor, windProfileRows } from './loads/wind-basis.ts';
 export type { WindProfileRow } from './loads/wind-basis.ts';
 export { latticeForceCoefficient, icedLattice } from './loads/lattice-force-coefficient.ts';
-export { ancillaryNodalMass, ancillaryShares } from './loads/ancillary-loads.ts';
+export { ancillaryIce, ancillaryNodalMass, ancillaryShares } from './loads/ancillary-loads.ts';

@@ -150,7 +150,7 @@ export class AnalysisRunner {
     } else if (m.type === 'done') {
       const status = run.cancelRequested ? 'cancelled' : 'done';
       this.finish(runId, run, { runId, status, report: m.report }, m.fields);
-    } else {
+    } else if (m.type === 'failed') {
       this.finish(runId, run, { runId, status: run.cancelRequested ? 'cancelled' : 'failed', error: m.error });
     }
   }

@@ -9,22 +9,32 @@
  * as transferred ArrayBuffers (no copy).
  */
 import type { CaseFields, ProjectFile, SolveProgress, SolveReport } from '../../solver/index.ts';
+import type { SiteOutcome, SiteRequest } from '../common/site/site-run.ts';
 
 export interface AnalysisWorkerData {
   project: ProjectFile;
   cancelFlag: SharedArrayBuffer;
   /** Shortest time between two progress messages, ms (the last iteration of a case is always sent). */
   progressIntervalMs: number;
-  /** Only these case ids (a share of a parallel run; parallel-solve.ts). */
+  /** Only these case ids (default all). */
   only?: string[];
+  /**
+   * A helper of a parallel run (parallel-solve.ts): the claim buffer (case-shares.ts) and this
+   * worker's slot in it; the worker solves the cases it claims, one at a time, until none is left.
+   */
+  claims?: SharedArrayBuffer;
+  claimSlot?: number;
   /** Threads for this run: above 1 the worker deals the cases out to that many workers of its own. */
   workers?: number;
+  /** Instead of solving every case: this site request (site-runner.ts), answered with 'site-done'. */
+  site?: SiteRequest;
 }
 
 export type WorkerMessage =
   | { type: 'progress'; progress: SolveProgress }
   | { type: 'done'; report: SolveReport; fields: CaseFields[] }
-  | { type: 'failed'; error: string };
+  | { type: 'failed'; error: string }
+  | { type: 'site-done'; outcome: SiteOutcome };
 
 export const CANCEL_REQUESTED = 1;
 

@@ -3,13 +3,13 @@
  * (the solver is then asked for those only), and keeps the report to the requested ids.
  */
 import type { ProjectFile, SolveReport } from '../../solver/index.ts';
-import { actionCaseIds } from '../../solver/index.ts';
+import { actionCaseIds, hasActionCases } from '../../solver/index.ts';
 import { UsageError } from './cli-io.ts';
 
 /** Throws UsageError naming every unknown id and listing the cases the file has. */
 export function checkCaseIds(project: ProjectFile, requested: readonly string[]): void {
   const ids = [...project.loadCases.map((c) => c.id), ...(project.combinations ?? []).map((c) => c.id)];
-  if (project.patchWind?.length || project.memberLoss?.length || project.windDirections?.length) ids.push(...actionCaseIds(project));
+  if (hasActionCases(project)) ids.push(...actionCaseIds(project));
   const unknown = requested.filter((id) => !ids.includes(id));
   if (unknown.length > 0) {
     const names = unknown.map((id) => JSON.stringify(id)).join(', ');

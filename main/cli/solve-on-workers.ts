@@ -1,7 +1,8 @@
 /**
- * The solver entry of `stayset solve`: a project with several cases is solved on worker threads,
- * one per core (main/analysis/parallel-solve.ts; the report is the serial one's, case for case);
- * a single case, or STAYSET_WORKERS=1, is solved in this process.
+ * The solver entry of the CLI's solving commands (`solve`, `check`, `schedule`, `report`): a
+ * project with several cases is solved on one thread per core (this one and worker threads,
+ * main/analysis/parallel-solve.ts; the report is the serial one's, case for case); a single case,
+ * or STAYSET_WORKERS=1, is solved in this process.
  */
 import { solveProject } from '../../solver/index.ts';
 import type { ProjectFile, ProjectSolution, SolveControl, SolveProjectOptions } from '../../solver/index.ts';

@@ -43,8 +43,16 @@
  *   openInitial() returns the project to print; the renderer calls `printReady()` there when the
  *   schedule is laid out (added), then the host writes the PDF. Web: returns ok:false with a hint
  *   to use the browser's own Print on the schedule view.
+ * - added: runSite runs a tensioning sequence, an as-built back-analysis or builds a printable
+ *   document (crew sheet, calculation report) in a worker (main/common/site/site-run.ts); one at a
+ *   time per host: a new runSite or cancelSite ends the previous one, whose promise then resolves
+ *   ok:false saying it was cancelled. Bad input (an unknown sequence, …) resolves ok:false naming it.
+ * - added: printSiteDocument (desktop) builds the crew sheet or report the same way and prints it
+ *   to a PDF chosen in a save dialog. Web: ok:false with a hint to print the shown document with
+ *   the browser.
  */
 import type { CaseFields, ProjectFile, SolveReport } from '../../solver/index.ts';
+import type { SiteOutcome, SiteRequest } from './site/site-run.ts';
 
 /** A project as the host hands it over: the validated document plus where it lives. */
 export interface OpenedProject {
@@ -138,6 +146,12 @@ export interface StaysetHost {
   onDidRequestOpen(listener: (path: string) => void): () => void;
   /** added: in the hidden print window, the schedule is laid out and may be printed now. */
   printReady(): Promise<void>;
+  /** added: a sequence, an as-built fit or a printable document, computed off the UI thread. */
+  runSite(project: ProjectFile, request: SiteRequest): Promise<HostResult<SiteOutcome>>;
+  /** added: end the running runSite, if any. */
+  cancelSite(): Promise<void>;
+  /** added: print a crew sheet or the report to PDF (desktop: save dialog; null when cancelled). */
+  printSiteDocument(project: ProjectFile, request: SiteRequest, path?: string): Promise<HostResult<{ path: string }> | null>;
 }
 
 export type MenuCommand =

@@ -9,6 +9,7 @@
 import type { ProjectFile } from '../../solver/index.ts';
 import type { HostMethodName } from './web-protocol.ts';
 import { validateProject } from './project/index.ts';
+import { checkSiteRequest, type SiteRequest } from './site/site-run.ts';
 
 export type Checked<T> = { ok: true; value: T } | { ok: false; error: string };
 
@@ -34,6 +35,9 @@ export interface HostArgs {
   printSchedule: [project: ProjectFile, path: string | undefined];
   setDirty: [dirty: boolean, title: string];
   printReady: [];
+  runSite: [project: ProjectFile, request: SiteRequest];
+  cancelSite: [];
+  printSiteDocument: [project: ProjectFile, request: SiteRequest, path: string | undefined];
 }
 
 class ArgError extends Error {}
@@ -76,6 +80,13 @@ export function checkProject(method: string, index: number, value: unknown): Pro
   return value as ProjectFile;
 }
 
+function siteRequest(method: string, index: number, value: unknown, documentOnly = false): SiteRequest {
+  const r = checkSiteRequest(value);
+  if (!r.ok) fail(method, index, 'request', r.error);
+  if (documentOnly && r.value.kind !== 'crewSheet' && r.value.kind !== 'report') fail(method, index, 'request', 'must be a crewSheet or report request');
+  return r.value;
+}
+
 function checkCount(method: string, args: unknown[], max: number): void {
   if (args.length > max) throw new ArgError(`${method}: expected at most ${max} argument(s), got ${args.length}`);
 }
@@ -110,6 +121,10 @@ const checkers: Checkers = {
     return [a[0], a[1]];
   },
   printReady: (a) => (checkCount('printReady', a, 0), []),
+  runSite: (a) => (checkCount('runSite', a, 2), [checkProject('runSite', 0, a[0]), siteRequest('runSite', 1, a[1])]),
+  cancelSite: (a) => (checkCount('cancelSite', a, 0), []),
+  printSiteDocument: (a) => (checkCount('printSiteDocument', a, 3),
+    [checkProject('printSiteDocument', 0, a[0]), siteRequest('printSiteDocument', 1, a[1], true), optionalPath('printSiteDocument', 2, a[2])]),
 };
 
 /** Validate the raw arguments of one method call. `args` must be an array. */

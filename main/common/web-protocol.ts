@@ -41,6 +41,9 @@ export const HOST_METHODS = [
   'printSchedule',
   'setDirty',
   'printReady',
+  'runSite',
+  'cancelSite',
+  'printSiteDocument',
 ] as const satisfies readonly HostMethodName[];
 
 // Compile-time check that HOST_METHODS lists every method (fails to type-check if one is missing).

@@ -5,6 +5,7 @@
 import path from 'node:path';
 import type { CaseFields, ProjectFile } from '../../solver/index.ts';
 import type { HostResult, OpenedProject } from '../common/host-contract.ts';
+import type { SiteOutcome, SiteRequest } from '../common/site/site-run.ts';
 import type { HostHandlers } from '../common/host-validation.ts';
 import type { ProjectService } from '../store/project-service.ts';
 import { hasProjectExtension } from '../store/project-files.ts';
@@ -30,9 +31,15 @@ export interface DesktopHostDeps {
   /** Bundled demo folder: its files open read-only (save goes to Save As). */
   assetsDir: string | null;
   printPdf: (project: ProjectFile, pdfPath: string) => Promise<HostResult<{ path: string }>>;
+  /** Site requests in a worker (main/analysis/site-runner.ts). */
+  site?: { run(project: ProjectFile, request: SiteRequest): Promise<HostResult<SiteOutcome>>; cancel(): void };
+  /** Print a standalone HTML document to a PDF file. */
+  printHtml?: (html: string, pdfPath: string) => Promise<HostResult<{ path: string }>>;
   /** Window title and close decisions follow setDirty; may close the window. */
   onDirtyChanged: (dirty: boolean, title: string) => void;
 }
+
+const NO_SITE = 'This host has no worker for sequences, as-built fits and printed documents.';
 
 function isInAssets(deps: DesktopHostDeps, file: string): boolean {
   if (!deps.assetsDir) return false;
@@ -130,5 +137,15 @@ export function createDesktopHandlers(deps: DesktopHostDeps): HostHandlers {
     },
     setDirty: async (dirty, title) => deps.onDirtyChanged(dirty, title),
     printReady: async () => undefined,
+    runSite: async (project, request) => (deps.site ? deps.site.run(project, request) : { ok: false, error: NO_SITE }),
+    cancelSite: async () => deps.site?.cancel(),
+    printSiteDocument: async (project, request, suggested) => {
+      if (!deps.site || !deps.printHtml) return { ok: false, error: NO_SITE };
+      const built = await deps.site.run(project, request);
+      if (!built.ok) return built;
+      if (built.value.kind !== 'document') return { ok: false, error: 'printSiteDocument: the request did not make a document' };
+      const pdf = await deps.dialogs.choosePdfPath(suggested ? path.basename(suggested) : `${built.value.title}.pdf`);
+      return pdf === null ? null : deps.printHtml(built.value.html, pdf);
+    },
   };
 }

@@ -10,6 +10,7 @@ import { app, BrowserWindow, dialog, Menu, session } from 'electron';
 import type { MenuCommand } from '../common/host-contract.ts';
 import type { WebEventName } from '../common/web-protocol.ts';
 import { AnalysisRunner } from '../analysis/analysis-runner.ts';
+import { SiteRunner } from '../analysis/site-runner.ts';
 import { ProjectService } from '../store/project-service.ts';
 import { defaultUserDataDir } from '../store/user-dirs.ts';
 import { registerAppScheme, serveAppScheme } from './app-protocol.ts';
@@ -24,6 +25,7 @@ import { toElectronTemplate } from './menu-build.ts';
 import { menuTemplate } from './menu-template.ts';
 import { PrintJobs } from './print-jobs.ts';
 import { printScheduleToPdf } from './print-window.ts';
+import { printHtmlToPdf } from './print-site-document.ts';
 import { CLOSE_PROMPT, QuitGuard } from './quit-guard.ts';
 import { mainWindowOptions } from './window-options.ts';
 import { windowTitle } from './window-title.ts';
@@ -60,6 +62,8 @@ const runner = new AnalysisRunner({
   onProgress: (p) => send('progress', p),
   onDone: (d) => send('analysisDone', d),
 });
+
+const siteRunner = new SiteRunner({ workerUrl });
 
 function requestOpen(file: string): void {
   granted.offer(file);
@@ -106,6 +110,8 @@ const handlers = createDesktopHandlers({
   assetsDir,
   initialPath: () => startFile ?? path.join(assetsDir, 'demo-mast.stayset'),
   printPdf: (project, pdfPath) => printScheduleToPdf(project, pdfPath, { preloadPath, printJobs, allowedSenders }),
+  site: siteRunner,
+  printHtml: printHtmlToPdf,
   onDirtyChanged: (dirty, title) => {
     win?.setTitle(windowTitle(title, dirty));
     if (process.platform === 'darwin') win?.setDocumentEdited(dirty);

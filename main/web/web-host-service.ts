@@ -6,12 +6,14 @@ import path from 'node:path';
 import type { HostResult, OpenedProject } from '../common/host-contract.ts';
 import type { HostHandlers } from '../common/host-validation.ts';
 import type { AnalysisRunner } from '../analysis/analysis-runner.ts';
+import type { SiteRunner } from '../analysis/site-runner.ts';
 import type { ProjectService } from '../store/project-service.ts';
 import type { PathPolicy } from './path-policy.ts';
 
 export interface WebHostServiceOptions {
   projects: ProjectService;
   runner: AnalysisRunner;
+  site: SiteRunner;
   paths: PathPolicy;
   /** Project opened by openInitial() (a demo or a path from the command line), or null. */
   initialPath: string | null;
@@ -53,5 +55,8 @@ export function createWebHostHandlers(o: WebHostServiceOptions): HostHandlers {
     printSchedule: async () => ({ ok: false, error: "The browser edition prints with the browser: open the Schedule view and use the browser's Print (Ctrl+P), choosing \"Save as PDF\"." }),
     setDirty: async () => undefined,
     printReady: async () => undefined,
+    runSite: (project, request) => o.site.run(project, request),
+    cancelSite: async () => o.site.cancel(),
+    printSiteDocument: async () => ({ ok: false, error: "The browser edition prints with the browser: show the document and use its Print button or the browser's Print (Ctrl+P), choosing \"Save as PDF\"." }),
   };
 }

@@ -17,6 +17,7 @@ import { PathPolicy } from './path-policy.ts';
 import { checkApiRequest, checkOrigin, type GuardInput } from './request-guard.ts';
 import { contentTypeFor, resolveStaticFile } from './static-files.ts';
 import { createWebHostHandlers } from './web-host-service.ts';
+import { SiteRunner } from '../analysis/site-runner.ts';
 import { CASE_FIELDS_MIME, encodeCaseFields } from '../common/case-fields-wire.ts';
 import type { CaseFields } from '../../solver/index.ts';
 
@@ -105,9 +106,10 @@ export async function startWebHost(options: WebHostOptions): Promise<WebHost> {
     onProgress: (p) => hub.broadcast('progress', p),
     onDone: (d) => hub.broadcast('analysisDone', d),
   });
+  const site = new SiteRunner({ workerUrl: options.runner?.workerUrl, execArgv: options.runner?.execArgv, resourceLimits: options.runner?.resourceLimits, budget: options.runner?.budget });
   const projects = new ProjectService({ userDataDir: options.userDataDir, recoveryDir: options.recoveryDir });
   const paths = await PathPolicy.create(options.root, options.assetsDir);
-  const handlers: HostHandlers = createWebHostHandlers({ projects, runner, paths, initialPath: options.initialPath ?? null });
+  const handlers: HostHandlers = createWebHostHandlers({ projects, runner, site, paths, initialPath: options.initialPath ?? null });
   let port = 0;
 
   const guardInput = (req: IncomingMessage, url: URL): GuardInput => ({
@@ -191,6 +193,7 @@ export async function startWebHost(options: WebHostOptions): Promise<WebHost> {
     async close() {
       hub.close();
       await runner.dispose();
+      await site.dispose();
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));
     },

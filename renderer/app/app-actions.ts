@@ -3,7 +3,7 @@
  * cancel the analysis, autosave. Talks to the host through renderer/host/client.ts and to the
  * stores; no three.js here.
  */
-import { ref, shallowRef } from 'vue';
+import { ref, shallowRef, watch } from 'vue';
 import type { CaseFields, ProjectFile, SolveReport } from '../../solver/index.ts';
 import type { HostResult, OpenedProject, RecentEntry, RecoveryEntry, StaysetHost } from '../../main/common/host-contract.ts';
 import { getHost } from '../host/client.ts';
@@ -11,7 +11,7 @@ import { useProjectStore } from '../stores/project.ts';
 import { useResultsStore } from '../stores/results.ts';
 import { useSelectionStore } from '../stores/selection.ts';
 import { useSettingsStore } from '../stores/settings.ts';
-import { buildSchedulePage, isoDate, type SchedulePage } from '../schedule/schedule-document.ts';
+import { isoDate, scheduleParts, schedulePageFrom, type ScheduleParts, type SchedulePage } from '../schedule/schedule-document.ts';
 import { blankProject } from '../model/new-project.ts';
 import type { GeneratorKind } from '../generators/generator-defaults.ts';
 
@@ -322,11 +322,35 @@ export function createAppActions(hostOverride?: StaysetHost) {
       return;
     }
     try {
-      schedule.value = buildSchedulePage({ project: p, report: results.report, units: settings.units, paper: settings.units === 'US' ? 'letter' : 'a4', withInstallation: true, issueDate: isoDate(new Date()) });
+      scheduleFrom = { report: results.report, parts: scheduleParts(p, results.report, true) };
+      layOutSchedule(p);
     } catch (e) {
       say('error', `The schedule could not be built: ${(e as Error).message}`);
     }
   }
+
+  /** Solver parts of the shown schedule, for the results they were made from. */
+  let scheduleFrom: { report: SolveReport; parts: ScheduleParts } | null = null;
+  function layOutSchedule(p: ProjectFile): void {
+    if (!scheduleFrom) return;
+    schedule.value = schedulePageFrom(p, scheduleFrom.parts, { units: settings.units, paper: settings.units === 'US' ? 'letter' : 'a4', issueDate: isoDate(new Date()) });
+  }
+  // Print settings edited while the schedule is shown (listing, revisions): lay it out again from
+  // the same results; an edit that changes the analysis closes it (the results no longer apply).
+  watch(() => projectStore.project, (p) => {
+    if (!schedule.value) { scheduleFrom = null; return; }
+    if (!p || !scheduleFrom || results.report !== scheduleFrom.report || results.isStaleFor(p)) {
+      schedule.value = null;
+      scheduleFrom = null;
+      if (p) say('info', 'The schedule was closed: the model changed since the analysis. Run it again, then print.');
+      return;
+    }
+    try {
+      layOutSchedule(p);
+    } catch (e) {
+      say('error', `The schedule could not be laid out: ${(e as Error).message}`);
+    }
+  });
 
   async function print(): Promise<void> {
     const p = projectStore.project;

@@ -77,7 +77,9 @@ export function removeNodalLoads(project: ProjectFile, caseId: string, indices: 
   return withLoads(project, i, (project.loadCases[i].nodalLoads ?? []).filter((_, k) => !drop.has(k)));
 }
 
-type ListKey = 'noSlackGroups' | 'sagLimits' | 'displacementLimits' | 'tiltLimits' | 'upliftNodes';
+/** The lists of project.checks that the check editor adds to and removes from. */
+export type CheckListKey = 'noSlackGroups' | 'sagLimits' | 'displacementLimits' | 'tiltLimits' | 'upliftNodes' | 'minimumTension' | 'memberDesign' | 'twistLimits';
+type ListKey = CheckListKey;
 type Item<K extends ListKey> = NonNullable<CheckSettings[K]>[number];
 
 /** Append an entry to one list of the check settings. */

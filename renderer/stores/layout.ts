@@ -1,8 +1,8 @@
-/** Which tab of the right panel is shown (inspector, wind and ice, checks, tuning, project); display only. */
+/** Which tab of the right panel is shown (inspector, wind and ice, checks, tuning, project, design actions); display only. */
 import { defineStore } from 'pinia';
 import { ref } from 'vue';
 
-export type RightTab = 'inspector' | 'loads' | 'checks' | 'tuning' | 'project';
+export type RightTab = 'inspector' | 'loads' | 'checks' | 'tuning' | 'project' | 'actions';
 
 export const useLayoutStore = defineStore('layout', () => {
   const rightTab = ref<RightTab>('inspector');

@@ -87,14 +87,16 @@ export const useResultsStore = defineStore('results', () => {
 
   /**
    * True when `project` differs from the analysed one in anything the analysis reads (nodes,
-   * members, sections, load cases, combinations, groups). Edits are immutable and share unchanged
+   * members, sections, load cases, combinations, groups, design actions). Edits are immutable and share unchanged
    * parts, so this compares references. Check settings, tuning set-up and display do not count.
    */
   function isStaleFor(project: ProjectFile | null): boolean {
     const a = resultProject.value;
     if (!a || !project || !report.value) return false;
     return a.nodes !== project.nodes || a.members !== project.members || a.sections !== project.sections
-      || a.loadCases !== project.loadCases || a.combinations !== project.combinations || a.groups !== project.groups;
+      || a.loadCases !== project.loadCases || a.combinations !== project.combinations || a.groups !== project.groups
+      || a.panels !== project.panels || a.ancillaries !== project.ancillaries || a.patchWind !== project.patchWind
+      || a.memberLoss !== project.memberLoss || a.windDirections !== project.windDirections;
   }
 
   /** The run was requested; its id follows in assignRunId (events may arrive before it). */

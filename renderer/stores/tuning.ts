@@ -178,7 +178,7 @@ export const useTuningStore = defineStore('tuning', () => {
     const r = lastResult.value;
     if (best) {
       if (edit('Tuned pretensions (best so far)', (p) => applyVariableValues(p, best.x))) cancelledBest.value = null;
-    } else if (r && edit('Tuned pretensions', (p) => applyTuningResult(p, r))) {
+    } else if (r && edit('Tuned pretensions', (p) => applyTuningResult(p, r, new Date().toISOString(), units.value))) {
       message.value = { kind: 'info', text: 'Tuned pretensions written; run the analysis to update every case.' };
     }
   }

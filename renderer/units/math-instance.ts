@@ -17,6 +17,7 @@ export function unitMath(): MathJsInstance {
   const m = create(all, {});
   m.createUnit('kip', { definition: '1000 lbf' }, { override: true });
   m.createUnit('ksi', { definition: '1000 lbf/in^2' }, { override: true });
+  m.createUnit('psf', { definition: '1 lbf/ft^2' }, { override: true });
   instance = m;
   return m;
 }

@@ -5,7 +5,8 @@
  * and the member index of every segment (for picking and highlighting).
  *
  * Positions are Float32 relative to the model centre (`origin`) to keep precision for sites with
- * large coordinates.
+ * large coordinates. A buffer may be longer than it is used: only the first `segmentCount`
+ * segments count (the view keeps its arrays while the model's topology stays the same).
  */
 import {
   CHECK_FAIL_COLOUR, CHECK_PASS_COLOUR, CHECK_UNCHECKED_COLOUR, COMPRESSION_COLOUR, CheckState, MemberState, SLACK_COLOUR,
@@ -88,15 +89,32 @@ export function memberColour(data: SceneData, j: number, out: Rgb): Rgb {
   return scaleColour(hi > lo ? (data.memberValue[j] - lo) / (hi - lo) : 1, out);
 }
 
-export function buildLineBuffers(data: SceneData, origin: [number, number, number] = modelCentre(data)): LineBuffers {
+/** Segments per buffer (taut, slack, bars) that `data` needs. */
+export function segmentCounts(data: SceneData): [number, number, number] {
+  const counts: [number, number, number] = [0, 0, 0];
+  for (let j = 0; j < data.memberIds.length; j++) counts[bucketOf(data, j)] += data.polyOffsets[j + 1] - data.polyOffsets[j] - 1;
+  return counts;
+}
+
+/** Empty buffers with room for `capacity` segments each (so any split into taut, slack and bars fits). */
+export function allocateLineBuffers(capacity: number, origin: [number, number, number]): LineBuffers {
+  const empty = () => ({ ...allocate(capacity), segmentCount: 0 });
+  return { taut: empty(), slack: empty(), bars: empty(), origin };
+}
+
+/**
+ * Write `data` into existing buffers (their arrays are kept: the 3D view's BufferAttributes hold
+ * them). Returns false, writing nothing, when a buffer has too little room.
+ */
+export function fillLineBuffers(data: SceneData, out: LineBuffers): boolean {
+  const counts = segmentCounts(data);
+  const buffers = [out.taut, out.slack, out.bars];
+  for (let b = 0; b < 3; b++) if (6 * counts[b] > buffers[b].positions.length) return false;
   const m = data.memberIds.length;
-  const counts = [0, 0, 0];
-  for (let j = 0; j < m; j++) counts[bucketOf(data, j)] += data.polyOffsets[j + 1] - data.polyOffsets[j] - 1;
-  const buffers = [allocate(counts[0]), allocate(counts[1]), allocate(counts[2])];
   const fill = [0, 0, 0];
   const colour: Rgb = [0, 0, 0];
   const pts = data.polyPoints;
-  const [ox, oy, oz] = origin;
+  const [ox, oy, oz] = out.origin;
   for (let j = 0; j < m; j++) {
     const bucket = bucketOf(data, j);
     const buf = buffers[bucket];
@@ -119,5 +137,14 @@ export function buildLineBuffers(data: SceneData, origin: [number, number, numbe
       buf.segmentMember[s] = j;
     }
   }
-  return { taut: buffers[0], slack: buffers[1], bars: buffers[2], origin };
+  for (let b = 0; b < 3; b++) buffers[b].segmentCount = counts[b];
+  return true;
+}
+
+/** Buffers of exactly the size `data` needs. */
+export function buildLineBuffers(data: SceneData, origin: [number, number, number] = modelCentre(data)): LineBuffers {
+  const counts = segmentCounts(data);
+  const out: LineBuffers = { taut: allocate(counts[0]), slack: allocate(counts[1]), bars: allocate(counts[2]), origin };
+  fillLineBuffers(data, out);
+  return out;
 }

@@ -4,7 +4,8 @@
  * `maxLength` m long), and the wind as its direction of flow (degrees counter-clockwise from +x in
  * plan, toward which the air flows) and speed. Plain arrays; knows nothing of three.js.
  */
-import type { ProjectFile } from '../../solver/index.ts';
+import type { LoadCaseSpec, ProjectFile } from '../../solver/index.ts';
+import { windDirectionCases } from '../../solver/index.ts';
 
 export interface LoadArrows {
   /** Arrow k runs from tails[3k..] to tips[3k..] (m, world coordinates). */
@@ -17,14 +18,38 @@ export interface LoadArrows {
   wind: { direction: number; speed: number } | null;
 }
 
-/** Nodal forces of `caseId` (a load case or a combination) summed per node, N. */
+/**
+ * The load case behind `caseId`: a load case, or for the cases the design actions add (solver
+ * solve-actions) the case they are made from — a wind direction's copy of its case with the wind
+ * turned, a patch-wind case's mean-wind case, a member-loss case's starting case.
+ */
+export function caseSpecOf(project: ProjectFile, caseId: string): LoadCaseSpec | undefined {
+  const own = project.loadCases.find((lc) => lc.id === caseId);
+  if (own) return own;
+  for (const spec of project.windDirections ?? []) {
+    if (!caseId.startsWith(`${spec.id} `)) continue;
+    try {
+      const found = windDirectionCases(project, spec).find((c) => c.id === caseId);
+      if (found) return found;
+    } catch { /* the validator names a windDirections entry without a wind case */ }
+  }
+  for (const spec of project.patchWind ?? []) {
+    if (caseId.startsWith(`${spec.id} `)) return project.loadCases.find((lc) => lc.id === spec.meanCase);
+  }
+  for (const spec of project.memberLoss ?? []) {
+    if (caseId.startsWith(`${spec.id} `)) return project.loadCases.find((lc) => lc.id === spec.fromCase);
+  }
+  return undefined;
+}
+
+/** Nodal forces of `caseId` (a load case, a combination or a case of the design actions) summed per node, N. */
 export function caseNodalForces(project: ProjectFile, caseId: string): { forces: Map<string, [number, number, number]>; wind: LoadArrows['wind'] } {
   const forces = new Map<string, [number, number, number]>();
   let wind: LoadArrows['wind'] = null;
   const combo = project.combinations?.find((c) => c.id === caseId);
   const parts = combo ? combo.factors : [{ case: caseId, factor: 1 }];
   for (const { case: id, factor } of parts) {
-    const c = project.loadCases.find((lc) => lc.id === id);
+    const c = caseSpecOf(project, id);
     if (!c || factor === 0) continue;
     if (c.wind && !wind) wind = { direction: c.wind.direction, speed: c.wind.speed * Math.sqrt(Math.abs(factor)) };
     for (const l of c.nodalLoads ?? []) {

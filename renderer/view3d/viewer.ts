@@ -1,20 +1,17 @@
 /**
- * The 3D view: owns the WebGLRenderer, scene and camera, draws SceneData with a handful of merged
- * objects (never one mesh per member) and renders on demand. Knows nothing of Vue or Pinia.
- *
- * Axes: z up (as the project file). Drawing: cables as 1-px line segments coloured per vertex,
- * slack members dashed in their own colour, bars as instanced cylinders, nodes as screen-size
- * points, pinned supports (x, y, z restrained) as cones under the node, partly restrained supports
- * as flat rings. Selection is an overlay drawn on top. In colour mode 'checks' nodes that fail a
- * check are large red points drawn over everything (one Points object for all of them).
+ * The 3D view: owns the WebGLRenderer, scene and camera, draws SceneData through a ModelDrawing
+ * (a handful of merged objects, never one mesh per member, updated in place while the topology
+ * stays the same) and renders on demand. Knows nothing of Vue or Pinia. Axes: z up (as the
+ * project file).
  */
 import * as THREE from 'three';
 import { OrbitControls } from 'three/examples/jsm/controls/OrbitControls.js';
-import { buildLineBuffers, type LineBuffers, type SegmentBuffer } from './line-buffers.ts';
 import { pickAt, type PickHit } from './pick.ts';
 import type { SceneData } from './scene-data.ts';
-import { CHECK_FAIL_COLOUR, SELECTED_COLOUR } from './colour-scale.ts';
 import type { LoadArrows } from './load-arrows.ts';
+import { ModelDrawing } from './model-drawing.ts';
+import { ExtrasDrawing } from './extras-drawing.ts';
+import type { ExtrasData } from './extras-data.ts';
 
 const LOAD_COLOUR = 0xff9f43;
 const WIND_COLOUR = 0x7fd4ff;
@@ -26,16 +23,15 @@ export class Viewer3D {
   private readonly scene = new THREE.Scene();
   private readonly camera = new THREE.PerspectiveCamera(40, 1, 0.1, 1e5);
   private readonly controls: OrbitControls;
-  private readonly content = new THREE.Group();
-  private readonly overlay = new THREE.Group();
+  private readonly drawing = new ModelDrawing();
+  /** Panels and ancillaries. */
+  private readonly extras = new ExtrasDrawing();
+  private extrasData: ExtrasData | null = null;
   /** Load arrows and the wind arrow; their materials live as long as the viewer. */
   private readonly loads = new THREE.Group();
   private readonly loadLineMaterial = new THREE.LineBasicMaterial({ color: LOAD_COLOUR, depthTest: false, transparent: true });
   private readonly loadHeadMaterial = new THREE.MeshBasicMaterial({ color: LOAD_COLOUR, depthTest: false, transparent: true });
   private readonly windMaterial = new THREE.MeshBasicMaterial({ color: WIND_COLOUR, transparent: true, opacity: 0.85 });
-  private data: SceneData | null = null;
-  private buffers: LineBuffers | null = null;
-  private extent = 10;
   private frame = 0;
   private readonly resizeObserver: ResizeObserver;
 
@@ -49,7 +45,7 @@ export class Viewer3D {
     const sun = new THREE.DirectionalLight(0xffffff, 0.9);
     sun.position.set(1, -2, 3);
     this.scene.add(sun);
-    this.scene.add(this.content, this.overlay, this.loads);
+    this.scene.add(this.drawing.content, this.extras.group, this.drawing.overlay, this.loads);
     this.controls = new OrbitControls(this.camera, canvas);
     this.controls.enableDamping = false;
     this.controls.screenSpacePanning = true;
@@ -59,62 +55,37 @@ export class Viewer3D {
     this.resize();
   }
 
-  /** Replace what is drawn. `keepView` keeps the camera (re-colouring after a run). */
+  /** Draw `data`: in place while the topology is the same. `keepView` keeps the camera. */
   setScene(data: SceneData, keepView = true): void {
-    const first = this.data === null;
-    this.data = data;
-    this.clearGroup(this.content);
-    this.buffers = buildLineBuffers(data);
-    this.extent = this.computeExtent(data);
-    this.content.add(this.makeLines(this.buffers.taut, false));
-    this.content.add(this.makeLines(this.buffers.slack, true));
-    const bars = this.makeBars(this.buffers.bars);
-    if (bars) this.content.add(bars);
-    this.content.add(this.makeNodes(data));
-    const failed = this.makeFailedNodes(data);
-    if (failed) this.content.add(failed);
-    for (const s of this.makeSupports(data)) this.content.add(s);
-    this.content.add(this.makeGround(data));
+    const first = this.drawing.data === null;
+    this.drawing.update(data);
+    this.drawExtras();
     if (first || !keepView) this.fit();
+    if (first) this.warmUp();
     this.requestRender();
+  }
+
+  /** Panels and ancillaries of the project (drawn at the positions of the scene). */
+  setExtras(extras: ExtrasData | null): void {
+    this.extrasData = extras;
+    this.drawExtras();
+    this.requestRender();
+  }
+
+  private drawExtras(): void {
+    const { data, buffers, extent } = this.drawing;
+    this.extras.group.visible = Boolean(this.extrasData && data && buffers);
+    if (this.extrasData && data && buffers) this.extras.update(this.extrasData, data, buffers.origin, extent);
+  }
+
+  /** Counters of the drawing: geometry builds and in-place updates. */
+  get drawingStats(): { rebuilds: number; inPlaceUpdates: number } {
+    return { ...this.drawing.stats };
   }
 
   /** Highlight selected nodes and members (indices into SceneData). */
   setSelection(nodes: readonly number[], members: readonly number[]): void {
-    this.clearGroup(this.overlay);
-    const data = this.data;
-    const buffers = this.buffers;
-    if (!data || !buffers) return;
-    const selected = new Set(members);
-    const pts: number[] = [];
-    for (const buf of [buffers.taut, buffers.slack, buffers.bars]) {
-      for (let s = 0; s < buf.segmentCount; s++) {
-        if (selected.has(buf.segmentMember[s])) for (let k = 0; k < 6; k++) pts.push(buf.positions[6 * s + k]);
-      }
-    }
-    if (pts.length) {
-      const g = new THREE.BufferGeometry();
-      g.setAttribute('position', new THREE.Float32BufferAttribute(pts, 3));
-      const mat = new THREE.LineBasicMaterial({ color: new THREE.Color(...SELECTED_COLOUR), depthTest: false, transparent: true });
-      const lines = new THREE.LineSegments(g, mat);
-      lines.renderOrder = 10;
-      this.overlay.add(lines);
-    }
-    if (nodes.length) {
-      const [ox, oy, oz] = buffers.origin;
-      const p = new Float32Array(3 * nodes.length);
-      nodes.forEach((i, k) => {
-        p[3 * k] = data.nodePositions[3 * i] - ox;
-        p[3 * k + 1] = data.nodePositions[3 * i + 1] - oy;
-        p[3 * k + 2] = data.nodePositions[3 * i + 2] - oz;
-      });
-      const g = new THREE.BufferGeometry();
-      g.setAttribute('position', new THREE.BufferAttribute(p, 3));
-      const mat = new THREE.PointsMaterial({ color: 0xffffff, size: 11, sizeAttenuation: false, depthTest: false, transparent: true });
-      const points = new THREE.Points(g, mat);
-      points.renderOrder = 11;
-      this.overlay.add(points);
-    }
+    this.drawing.setSelection(nodes, members);
     this.requestRender();
   }
 
@@ -123,13 +94,13 @@ export class Viewer3D {
    * head), the wind as a flat arrow on the ground on the upwind side pointing where the air flows.
    */
   setLoads(arrows: LoadArrows | null): void {
-    this.clearGroup(this.loads, false);
-    const origin = this.buffers?.origin;
+    this.clearGroup(this.loads);
+    const origin = this.drawing.buffers?.origin;
     if (!arrows || !origin) { this.requestRender(); return; }
     const [ox, oy, oz] = origin;
     if (arrows.count) {
       const pts = new Float32Array(6 * arrows.count);
-      const head = this.extent * 0.012;
+      const head = this.drawing.extent * 0.012;
       const heads = new THREE.InstancedMesh(new THREE.ConeGeometry(head * 0.45, head, 8), this.loadHeadMaterial, arrows.count);
       const up = new THREE.Vector3(0, 1, 0), dir = new THREE.Vector3(), q = new THREE.Quaternion(), m = new THREE.Matrix4(), at = new THREE.Vector3(), one = new THREE.Vector3(1, 1, 1);
       for (let k = 0; k < arrows.count; k++) {
@@ -150,18 +121,16 @@ export class Viewer3D {
       heads.frustumCulled = false;
       this.loads.add(shafts, heads);
     }
-    if (arrows.wind && this.data) {
+    if (arrows.wind && this.drawing.data) {
       const a = (arrows.wind.direction * Math.PI) / 180;
       const d = new THREE.Vector2(Math.cos(a), Math.sin(a));
-      const r = this.extent * 0.55;
-      let zMin = Infinity;
-      for (let i = 2; i < this.data.nodePositions.length; i += 3) zMin = Math.min(zMin, this.data.nodePositions[i]);
-      const len = this.extent * 0.22, w = len * 0.18;
+      const r = this.drawing.extent * 0.55;
+      const len = this.drawing.extent * 0.22, w = len * 0.18;
       const shape = new THREE.Shape();
       shape.moveTo(0, -w / 2); shape.lineTo(len * 0.65, -w / 2); shape.lineTo(len * 0.65, -w * 1.2); shape.lineTo(len, 0);
       shape.lineTo(len * 0.65, w * 1.2); shape.lineTo(len * 0.65, w / 2); shape.lineTo(0, w / 2); shape.closePath();
       const mesh = new THREE.Mesh(new THREE.ShapeGeometry(shape), this.windMaterial);
-      mesh.position.set(-d.x * (r + len), -d.y * (r + len), (Number.isFinite(zMin) ? zMin : 0) - oz + this.extent * 0.002);
+      mesh.position.set(-d.x * (r + len), -d.y * (r + len), this.drawing.groundLevel() + this.drawing.extent * 0.002);
       mesh.rotation.z = a;
       mesh.frustumCulled = false;
       this.loads.add(mesh);
@@ -169,16 +138,54 @@ export class Viewer3D {
     this.requestRender();
   }
 
+  /**
+   * Compile every shader program the view can need (members, overlay, supports, loads, wind,
+   * panels, ancillaries) once, with the first scene: stand-ins for the objects not drawn yet are
+   * added, compiled with the real lights and removed. Programs live as long as their materials
+   * (the viewer's), so no interaction compiles or links one later.
+   */
+  private warmUp(): void {
+    const line = new THREE.BufferGeometry();
+    line.setAttribute('position', new THREE.BufferAttribute(new Float32Array(6), 3));
+    const tri = new THREE.BufferGeometry();
+    tri.setAttribute('position', new THREE.BufferAttribute(new Float32Array(9), 3));
+    const cone = new THREE.ConeGeometry(1, 1, 4);
+    const box = new THREE.BoxGeometry(1, 1, 1);
+    const standIns = [
+      new THREE.LineSegments(line, this.loadLineMaterial),
+      new THREE.InstancedMesh(cone, this.loadHeadMaterial, 1),
+      new THREE.Mesh(tri, this.windMaterial),
+      new THREE.Mesh(tri, this.extras.panelMaterial),
+      new THREE.InstancedMesh(box, this.extras.ancillaryMaterial, 1),
+      new THREE.InstancedMesh(cone, this.drawing.materials.pinned, 1),
+      new THREE.InstancedMesh(box, this.drawing.materials.partial, 1),
+    ];
+    const holder = new THREE.Group();
+    holder.add(...standIns);
+    this.scene.add(holder);
+    const extrasVisible = this.extras.group.visible;
+    this.extras.group.visible = true;
+    try {
+      this.renderer.compile(this.scene, this.camera);
+    } finally {
+      this.extras.group.visible = extrasVisible;
+      this.scene.remove(holder);
+      for (const g of [line, tri, cone, box]) g.dispose();
+      for (const o of standIns) if (o instanceof THREE.InstancedMesh) o.dispose();
+    }
+  }
+
   /** Frame the whole model (its nodes and member polylines; the ground grid does not count). */
   fit(): void {
     const box = new THREE.Box3();
     const v = new THREE.Vector3();
-    for (const buf of this.buffers ? [this.buffers.taut, this.buffers.slack, this.buffers.bars] : []) {
-      for (let i = 0; i < buf.positions.length; i += 3) box.expandByPoint(v.set(buf.positions[i], buf.positions[i + 1], buf.positions[i + 2]));
+    const { buffers, data } = this.drawing;
+    for (const buf of buffers ? [buffers.taut, buffers.slack, buffers.bars] : []) {
+      for (let i = 0; i < 6 * buf.segmentCount; i += 3) box.expandByPoint(v.set(buf.positions[i], buf.positions[i + 1], buf.positions[i + 2]));
     }
-    if (this.data && this.buffers) {
-      const [ox, oy, oz] = this.buffers.origin;
-      const p = this.data.nodePositions;
+    if (data && buffers) {
+      const [ox, oy, oz] = buffers.origin;
+      const p = data.nodePositions;
       for (let i = 0; i < p.length; i += 3) box.expandByPoint(v.set(p[i] - ox, p[i + 1] - oy, p[i + 2] - oz));
     }
     if (box.isEmpty()) return;
@@ -197,18 +204,19 @@ export class Viewer3D {
 
   /** What is under the pixel (x, y) of the canvas (CSS px from its top-left), or null. */
   pick(x: number, y: number): PickHit | null {
-    if (!this.data || !this.buffers) return null;
+    const { buffers, data } = this.drawing;
+    if (!data || !buffers) return null;
     this.camera.updateMatrixWorld();
     const vp = new THREE.Matrix4().multiplyMatrices(this.camera.projectionMatrix, this.camera.matrixWorldInverse);
-    const [ox, oy, oz] = this.buffers.origin;
-    const nodes = new Float32Array(this.data.nodePositions.length);
+    const [ox, oy, oz] = buffers.origin;
+    const nodes = new Float32Array(data.nodePositions.length);
     for (let i = 0; i < nodes.length; i += 3) {
-      nodes[i] = this.data.nodePositions[i] - ox;
-      nodes[i + 1] = this.data.nodePositions[i + 1] - oy;
-      nodes[i + 2] = this.data.nodePositions[i + 2] - oz;
+      nodes[i] = data.nodePositions[i] - ox;
+      nodes[i + 1] = data.nodePositions[i + 1] - oy;
+      nodes[i + 2] = data.nodePositions[i + 2] - oz;
     }
     const rect = this.canvas.getBoundingClientRect();
-    return pickAt({ viewProjection: vp.elements, width: rect.width, height: rect.height, nodes, segments: [this.buffers.taut, this.buffers.slack, this.buffers.bars] }, x, y);
+    return pickAt({ viewProjection: vp.elements, width: rect.width, height: rect.height, nodes, segments: [buffers.taut, buffers.slack, buffers.bars] }, x, y);
   }
 
   requestRender(): void {
@@ -223,9 +231,9 @@ export class Viewer3D {
     cancelAnimationFrame(this.frame);
     this.resizeObserver.disconnect();
     this.controls.dispose();
-    this.clearGroup(this.content);
-    this.clearGroup(this.overlay);
-    this.clearGroup(this.loads, false);
+    this.drawing.dispose();
+    this.extras.dispose();
+    this.clearGroup(this.loads);
     for (const m of [this.loadLineMaterial, this.loadHeadMaterial, this.windMaterial]) m.dispose();
     this.renderer.dispose();
   }
@@ -240,137 +248,12 @@ export class Viewer3D {
     this.requestRender();
   }
 
-  private computeExtent(data: SceneData): number {
-    const box = new THREE.Box3();
-    const v = new THREE.Vector3();
-    for (let i = 0; i < data.nodePositions.length; i += 3) box.expandByPoint(v.set(data.nodePositions[i], data.nodePositions[i + 1], data.nodePositions[i + 2]));
-    return box.isEmpty() ? 10 : Math.max(1, box.getSize(v).length());
-  }
-
-  private makeLines(buf: SegmentBuffer, dashed: boolean): THREE.LineSegments {
-    const g = new THREE.BufferGeometry();
-    g.setAttribute('position', new THREE.BufferAttribute(buf.positions, 3));
-    g.setAttribute('color', new THREE.BufferAttribute(buf.colours, 3));
-    const mat = dashed
-      ? new THREE.LineDashedMaterial({ vertexColors: true, dashSize: this.extent / 120, gapSize: this.extent / 160 })
-      : new THREE.LineBasicMaterial({ vertexColors: true });
-    const lines = new THREE.LineSegments(g, mat);
-    if (dashed) lines.computeLineDistances();
-    lines.frustumCulled = false;
-    return lines;
-  }
-
-  private makeBars(buf: SegmentBuffer): THREE.InstancedMesh | null {
-    if (buf.segmentCount === 0) return null;
-    const radius = this.extent * 0.0022;
-    const geom = new THREE.CylinderGeometry(1, 1, 1, 6, 1, true);
-    const mat = new THREE.MeshLambertMaterial({ color: 0xffffff });
-    const mesh = new THREE.InstancedMesh(geom, mat, buf.segmentCount);
-    const a = new THREE.Vector3();
-    const b = new THREE.Vector3();
-    const up = new THREE.Vector3(0, 1, 0);
-    const q = new THREE.Quaternion();
-    const s = new THREE.Vector3();
-    const mtx = new THREE.Matrix4();
-    const c = new THREE.Color();
-    for (let i = 0; i < buf.segmentCount; i++) {
-      const p = buf.positions;
-      a.set(p[6 * i], p[6 * i + 1], p[6 * i + 2]);
-      b.set(p[6 * i + 3], p[6 * i + 4], p[6 * i + 5]);
-      const len = a.distanceTo(b);
-      q.setFromUnitVectors(up, b.clone().sub(a).normalize());
-      s.set(radius, len, radius);
-      mtx.compose(a.add(b).multiplyScalar(0.5), q, s);
-      mesh.setMatrixAt(i, mtx);
-      mesh.setColorAt(i, c.setRGB(buf.colours[6 * i], buf.colours[6 * i + 1], buf.colours[6 * i + 2]));
-    }
-    mesh.frustumCulled = false;
-    return mesh;
-  }
-
-  private makeNodes(data: SceneData): THREE.Points {
-    const [ox, oy, oz] = this.buffers!.origin;
-    const p = new Float32Array(data.nodePositions.length);
-    for (let i = 0; i < p.length; i += 3) {
-      p[i] = data.nodePositions[i] - ox;
-      p[i + 1] = data.nodePositions[i + 1] - oy;
-      p[i + 2] = data.nodePositions[i + 2] - oz;
-    }
-    const g = new THREE.BufferGeometry();
-    g.setAttribute('position', new THREE.BufferAttribute(p, 3));
-    const size = data.nodeIds.length > 5000 ? 2 : data.nodeIds.length > 100 ? 3 : 5;
-    return new THREE.Points(g, new THREE.PointsMaterial({ color: 0xaab4c4, size, sizeAttenuation: false }));
-  }
-
-  private makeFailedNodes(data: SceneData): THREE.Points | null {
-    if (data.colour !== 'checks' || data.failedNodes.length === 0) return null;
-    const [ox, oy, oz] = this.buffers!.origin;
-    const p = new Float32Array(3 * data.failedNodes.length);
-    data.failedNodes.forEach((i, k) => {
-      p[3 * k] = data.nodePositions[3 * i] - ox;
-      p[3 * k + 1] = data.nodePositions[3 * i + 1] - oy;
-      p[3 * k + 2] = data.nodePositions[3 * i + 2] - oz;
-    });
-    const g = new THREE.BufferGeometry();
-    g.setAttribute('position', new THREE.BufferAttribute(p, 3));
-    const mat = new THREE.PointsMaterial({ color: new THREE.Color(...CHECK_FAIL_COLOUR), size: 14, sizeAttenuation: false, depthTest: false, transparent: true });
-    const points = new THREE.Points(g, mat);
-    points.renderOrder = 9;
-    points.frustumCulled = false;
-    return points;
-  }
-
-  private makeSupports(data: SceneData): THREE.Object3D[] {
-    const [ox, oy, oz] = this.buffers!.origin;
-    const pinned: number[] = [];
-    const partial: number[] = [];
-    data.nodeSupport.forEach((level, i) => (level === 2 ? pinned : level === 1 ? partial : null)?.push(i));
-    const size = this.extent * 0.018;
-    const out: THREE.Object3D[] = [];
-    const place = (indices: number[], geom: THREE.BufferGeometry, colour: number, dz: number) => {
-      if (!indices.length) return;
-      const mesh = new THREE.InstancedMesh(geom, new THREE.MeshLambertMaterial({ color: colour }), indices.length);
-      const m = new THREE.Matrix4();
-      indices.forEach((i, k) => {
-        m.makeTranslation(data.nodePositions[3 * i] - ox, data.nodePositions[3 * i + 1] - oy, data.nodePositions[3 * i + 2] - oz - dz);
-        mesh.setMatrixAt(k, m);
-      });
-      mesh.frustumCulled = false;
-      out.push(mesh);
-    };
-    // Pinned: a four-sided pyramid with its tip at the node (the cone axis is y; turn it to z).
-    const cone = new THREE.ConeGeometry(size * 0.6, size, 4).rotateX(Math.PI / 2).rotateX(Math.PI);
-    place(pinned, cone, 0x5fc48a, size / 2);
-    // Partly restrained: a flat ring in the x–y plane under the node.
-    const ring = new THREE.TorusGeometry(size * 0.45, size * 0.12, 6, 16);
-    place(partial, ring, 0xf0a35c, size * 0.2);
-    return out;
-  }
-
-  private makeGround(data: SceneData): THREE.GridHelper {
-    const [ox, oy, oz] = this.buffers!.origin;
-    let zMin = Infinity;
-    for (let i = 2; i < data.nodePositions.length; i += 3) zMin = Math.min(zMin, data.nodePositions[i]);
-    if (!Number.isFinite(zMin)) zMin = 0;
-    const step = Math.pow(10, Math.floor(Math.log10(this.extent / 4)));
-    const divisions = Math.min(200, Math.max(4, Math.round((this.extent * 1.2) / step)));
-    const grid = new THREE.GridHelper(divisions * step, divisions, 0x3a4658, 0x2a3444);
-    grid.rotateX(Math.PI / 2);
-    grid.position.set(0, 0, zMin - oz);
-    void ox; void oy;
-    return grid;
-  }
-
-  /** Remove and dispose a group's objects (their geometry; their materials too unless `materials` is false: shared ones). */
-  private clearGroup(group: THREE.Group, materials = true): void {
+  /** Remove a group's objects and dispose their geometry (materials are shared and live with the viewer). */
+  private clearGroup(group: THREE.Group): void {
     for (const child of [...group.children]) {
       group.remove(child);
-      const obj = child as THREE.Mesh;
-      obj.geometry?.dispose();
-      if (!materials) continue;
-      const mat = obj.material as THREE.Material | THREE.Material[] | undefined;
-      if (Array.isArray(mat)) mat.forEach((mm) => mm.dispose());
-      else mat?.dispose();
+      (child as THREE.Mesh).geometry?.dispose();
+      if (child instanceof THREE.InstancedMesh) child.dispose();
     }
   }
 }

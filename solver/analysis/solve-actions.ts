@@ -3,7 +3,8 @@
  * appended to the same report (so envelopes, checks and the app take them like any case):
  * - wind from N directions (WindDirectionsSpec): "<id> <direction>°";
  * - patch wind (PatchWindSpec): "<id> / patch k", then "<id> max" and "<id> min";
- * - member loss (MemberLossSpec): "<id> / <member>" per removed member.
+ * - member loss (MemberLossSpec): "<id> / <member>" per removed member;
+ * - ice with wind (IceWithWindSpec) and unbalanced ice (UnbalancedIceSpec): load cases of ice-cases.ts.
  * An action whose case is not in the project is skipped: projects derived for tuning, sequences
  * or as-built fitting keep only their own cases (a validated file always has the cases).
  * Fields of every appended case have the full model's layout (a removed member's elements are
@@ -20,19 +21,28 @@ import { buildModel } from '../model/build-model.ts';
 import { resolveCaseLoads, resolveCombinationLoads } from '../loads/resolve-case-loads.ts';
 import { patchCases } from '../loads/patch-wind.ts';
 import { windDirectionCases } from '../loads/wind-directions.ts';
+import { iceWithWindCases, unbalancedIceCases } from '../loads/ice-cases.ts';
 import { dynamicFactorOf, lostMembers, memberEndForces, projectWithout } from '../loads/member-loss.ts';
 import { combinePatchResults } from '../results/patch-combination.ts';
 import { createWorkspace } from './workspace.ts';
 import { solveCase } from './solve-case.ts';
 
+/** True when the project has any action that adds cases (see the file comment). */
+export function hasActionCases(project: ProjectFile): boolean {
+  return Boolean(project.patchWind?.length || project.memberLoss?.length || project.windDirections?.length || project.iceWithWind?.length || project.unbalancedIce?.length);
+}
+
 /** The actions whose cases exist in the project (see the file comment). */
 function activeActions(project: ProjectFile) {
   const hasWindCase = (id: string) => Boolean(project.loadCases.find((c) => c.id === id)?.wind);
+  const hasIceCase = (id: string) => Boolean(project.loadCases.find((c) => c.id === id)?.ice);
   const hasCase = (id: string) => project.loadCases.some((c) => c.id === id) || (project.combinations ?? []).some((c) => c.id === id);
   return {
     directions: (project.windDirections ?? []).filter((s) => hasWindCase(s.case)),
     patches: (project.patchWind ?? []).filter((s) => hasWindCase(s.meanCase)),
     losses: (project.memberLoss ?? []).filter((s) => hasCase(s.fromCase)),
+    iceWinds: (project.iceWithWind ?? []).filter((s) => hasIceCase(s.iceCase) && hasWindCase(s.windCase)),
+    unbalanced: (project.unbalancedIce ?? []).filter((s) => hasIceCase(s.case)),
   };
 }
 
@@ -43,7 +53,26 @@ export function actionCaseIds(project: ProjectFile, model: AnalysisModel = build
   for (const spec of act.directions) ids.push(...windDirectionCases(project, spec).map((c) => c.id));
   for (const spec of act.patches) ids.push(...patchCases(model, project, spec).map((p) => p.id), `${spec.id} max`, `${spec.id} min`);
   for (const spec of act.losses) ids.push(...lostMembers(project, spec).map((m) => `${spec.id} / ${m}`));
+  for (const c of derivedIceCases(project, act)) ids.push(c.id);
   return ids;
+}
+
+/** The load cases of the ice actions (ice with wind, then unbalanced ice), each with its spec id. */
+function derivedIceCases(project: ProjectFile, act: ReturnType<typeof activeActions>): (LoadCaseSpec & { specId: string })[] {
+  return [
+    ...act.iceWinds.flatMap((s) => iceWithWindCases(project, s).map((c) => ({ ...c, specId: s.id }))),
+    ...act.unbalanced.flatMap((s) => unbalancedIceCases(project, s).map((c) => ({ ...c, specId: s.id }))),
+  ];
+}
+
+/**
+ * The load case behind an action case id (wind directions, ice with wind, unbalanced ice), for
+ * its purpose; undefined for other ids.
+ */
+export function derivedLoadCase(project: ProjectFile, id: string): LoadCaseSpec | undefined {
+  const act = activeActions(project);
+  for (const spec of act.directions) { const c = windDirectionCases(project, spec).find((x) => x.id === id); if (c) return c; }
+  return derivedIceCases(project, act).find((c) => c.id === id);
 }
 
 function caseLoadsOf(model: AnalysisModel, project: ProjectFile, id: string): CaseLoads {
@@ -58,7 +87,7 @@ export function appendActionCases(
   project: ProjectFile, model: AnalysisModel, ws: Workspace, solution: ProjectSolution,
   control: SolveControl, wanted: (id: string) => boolean,
 ): void {
-  if (!project.patchWind?.length && !project.memberLoss?.length && !project.windDirections?.length) return;
+  if (!hasActionCases(project)) return;
   const act = activeActions(project);
   const solved = (id: string): CaseSolution => {
     const k = solution.report.cases.findIndex((c) => c.id === id);
@@ -84,6 +113,11 @@ export function appendActionCases(
     patches.forEach(push);
     push(combinePatchResults(model, `${spec.id} max`, 1, mean, patches));
     push(combinePatchResults(model, `${spec.id} min`, -1, mean, patches));
+  }
+
+  for (const c of derivedIceCases(project, act)) {
+    if (!wanted(c.id) && !wanted(c.specId)) continue;
+    push(solveCase(ws, c.id, resolveCaseLoads(model, project, c), { control, tag: tag(c.id) }));
   }
 
   for (const spec of act.losses) {

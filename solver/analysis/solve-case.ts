@@ -34,7 +34,9 @@ export function solveCase(ws: Workspace, id: string, loads: CaseLoads, options: 
   if (untensioned >= 0) Object.assign(out, { status: 'singular', singularDofs: [untensioned] });
   const model = ws.model;
   const converged = out.status === 'converged';
-  const residual = evaluateState(ws, loads, out.u);
+  // A converged solve ends on an evaluation at out.u and λ = 1, so ws already holds that state
+  // (forces, element state, residual); any other outcome restored u and is evaluated again.
+  const residual = converged ? out.residual : evaluateState(ws, loads, out.u);
   const positions = new Float64Array(model.coords);
   for (let d = 0; d < positions.length; d++) positions[d] += out.u[d];
   const fields: CaseFields = {

@@ -15,6 +15,14 @@ import { nowMs } from './clock.ts';
 export interface SolveProjectOptions {
   /** Only these case / combination ids (default: all). */
   only?: string[];
+  /**
+   * Dynamic sharing of the cases among several solvers (main/analysis/parallel-solve.ts): when
+   * given, the load cases and combinations solved are those this returns, one call per case,
+   * until it returns undefined (ids it does not know are skipped); the report lists them in the
+   * order taken. Action-derived cases are then not appended (they need their base cases in the
+   * same solve).
+   */
+  nextCase?: () => string | undefined;
 }
 
 export function solveProject(project: ProjectFile, control: SolveControl = {}, options: SolveProjectOptions = {}): ProjectSolution {
@@ -28,14 +36,23 @@ export function solveProject(project: ProjectFile, control: SolveControl = {}, o
     ...(project.combinations ?? []).filter((c) => wanted(c.id)).map((c) => ({ id: c.id, loads: () => resolveCombinationLoads(model, project, c) })),
   ];
   const solution: ProjectSolution = { report: { cases: [] }, fields: [] };
-  jobs.forEach((job, caseIndex) => {
+  const solve = (job: (typeof jobs)[number], caseIndex: number): void => {
     const { result, fields } = solveCase(ws, job.id, job.loads(), {
       control, tag: { caseIndex, caseCount: jobs.length, caseId: job.id },
     });
     solution.report.cases.push(result);
     solution.fields.push(fields);
-  });
-  appendActionCases(project, model, ws, solution, control, wanted);
+  };
+  if (options.nextCase) {
+    const indexOf = new Map(jobs.map((job, i) => [job.id, i] as const));
+    for (let id = options.nextCase(); id !== undefined; id = options.nextCase()) {
+      const i = indexOf.get(id);
+      if (i !== undefined) solve(jobs[i], i);
+    }
+  } else {
+    jobs.forEach(solve);
+    appendActionCases(project, model, ws, solution, control, wanted);
+  }
   const t2 = nowMs();
   solution.report.stats = { analysisSeconds: (t1 - t0) / 1000, newtonSeconds: (t2 - t1) / 1000, seconds: (t2 - t0) / 1000 };
   return solution;

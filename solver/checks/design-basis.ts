@@ -8,6 +8,7 @@ import {
   ALLOWABLE_DEFAULTS, CABLE_DEFAULTS, COMBINATION_DEFAULTS, LIMIT_STATE_DEFAULTS, STEEL_DEFAULTS,
 } from './basis-defaults.ts';
 import type { Sourced } from './basis-defaults.ts';
+import { actionCasePurpose } from '../analysis/action-purpose.ts';
 
 /** Source text of a value the project file sets. */
 export const FROM_PROJECT = 'project file (designBasis)';
@@ -65,12 +66,12 @@ export function purposeOfCombination(spec: CombinationSpec): CasePurpose {
   return spec.purpose ?? 'ultimate';
 }
 
-/** Purpose of a case or combination id of the project (undefined for an unknown id). */
+/** Purpose of a case, combination or design-action case id of the project (undefined for an unknown id). */
 export function purposeOf(project: ProjectFile, id: string): CasePurpose | undefined {
   const c = project.loadCases.find((x) => x.id === id);
   if (c) return purposeOfCase(c);
   const k = project.combinations?.find((x) => x.id === id);
-  return k ? purposeOfCombination(k) : undefined;
+  return k ? purposeOfCombination(k) : actionCasePurpose(project, id);
 }
 
 /**

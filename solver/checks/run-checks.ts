@@ -13,8 +13,7 @@ import { referenceCaseId } from '../tuning/reference-case.ts';
 import { minimumTensionRules } from './minimum-tension.ts';
 import { beamColumnInteraction } from './beam-column.ts';
 
-const STRENGTH_CODES: readonly CheckCode[] = ['cableResistance', 'barTension', 'barBuckling', 'beamColumn'];
-const MEMBER_CODES: readonly CheckCode[] = [...STRENGTH_CODES, 'cableServiceTension', 'minimumTension', 'slack', 'sag', 'slenderness'];
+import { failedCodesByItem, MEMBER_CODES } from './failed-items.ts';
 
 /**
  * Design checks of every case and combination of a solved report under the project's design
@@ -176,9 +175,10 @@ function assemble(
   const results = [...worst.values()].sort((a, b) => Number(a.pass) - Number(b.pass) || (b.ratio ?? Infinity) - (a.ratio ?? Infinity));
   const failures = results.filter((r) => !r.pass);
   const checkedMembers = new Set(results.filter((r) => MEMBER_CODES.includes(r.code)).map((r) => r.item));
+  const failedItems = failedCodesByItem(failures);
   const members: MemberCheck[] = project.members.map((m) => {
     const u = use.get(m.id);
-    const failed = failures.filter((f) => f.item === m.id && MEMBER_CODES.includes(f.code)).map((f) => f.code);
+    const failed = failedItems.members.get(m.id) ?? [];
     const status: ItemStatus = failed.length ? 'fail' : checkedMembers.has(m.id) ? 'pass' : 'unchecked';
     return { id: m.id, status, utilisation: u && Number.isFinite(u.u) ? u.u : null, utilisationCase: u?.c ?? '', tensionMax: u?.t ?? 0, failed };
   });
@@ -188,11 +188,7 @@ function assemble(
     ...(s.upliftNodes ?? []), ...(s.twistLimits ?? []).flatMap((l) => l.nodes),
   ]);
   const nodes: NodeCheck[] = project.nodes.map((n) => {
-    const failed: CheckCode[] = failures.filter((f) => (f.code === 'displacement' || f.code === 'uplift') && f.item === n.id).map((f) => f.code);
-    for (const f of failures) {
-      if (f.code === 'tilt' && f.item.split('→').includes(n.id)) failed.push('tilt');
-      if (f.code === 'twist' && f.item.split('+').includes(n.id)) failed.push('twist');
-    }
+    const failed: CheckCode[] = failedItems.nodes.get(n.id) ?? [];
     return { id: n.id, status: failed.length ? 'fail' : checkedNodes.has(n.id) ? 'pass' : 'unchecked', failed };
   });
   const allConverged = cases.every((c) => !c.checked || c.converged) && report.cases.length === cases.length;

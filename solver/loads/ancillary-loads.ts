@@ -1,21 +1,24 @@
 /**
  * Ancillaries (AncillarySpec) → fixed nodal loads of a case, at the modelled geometry:
- * - weight g · (mass + iceMass · t), downward; the mass when the case has self-weight, the ice
- *   mass when it has ice of radial thickness t (like ice on members, with or without self-weight);
- * - wind k · q(z) · (dragArea + iceDragArea · t) along the wind direction (horizontal), q = ½ρV(z)²
+ * - weight g · (mass + ice mass), downward; the mass when the case has self-weight, the ice
+ *   mass (ancillaryIce, by the item's iceBehaviour) when it has ice of radial thickness t (like
+ *   ice on members, with or without self-weight);
+ * - wind k · q(z) · (drag area with its ice) along the wind direction (horizontal), q = ½ρV(z)²
  *   at the node's height, k the wind basis factor (wind-basis.ts). Ancillary drag does not follow
  *   the deformation (small items; common practice).
  * A line item is spread over the nodes of its group's members between `from` and `to`: each
  * distinct node height gets the tributary height (half way to its neighbours, clipped to the
  * range), shared equally by the nodes at that height.
- * `ancillaryNodalMass` gives the same masses per node (kg) for a modal analysis.
+ * `ancillaryNodalMass` gives the same masses per node (kg) without ice; the case loads carry them
+ * with the case's ice (CaseLoads.ancillaryMass), which the modal analysis adds to the lumped mass.
  */
 import type { AnalysisModel } from '../model/analysis-model.ts';
 import type { AncillarySpec, LoadCaseSpec, ProjectFile } from '../project/types.ts';
 import type { CaseLoads } from './case-loads.ts';
 import { membersOfGroup } from '../checks/groups.ts';
 import { STANDARD_GRAVITY } from '../model/constants.ts';
-import { DEFAULT_AIR_DENSITY } from './defaults.ts';
+import { DEFAULT_AIR_DENSITY, DEFAULT_ICE_DENSITY } from './defaults.ts';
+import { iceAnnulusMass } from './ice.ts';
 import { dynamicPressure, windSpeedAt } from './wind-profile.ts';
 import { windDirectionVector } from './wind.ts';
 import { windForceFactor } from './wind-basis.ts';
@@ -44,16 +47,41 @@ export function ancillaryShares(model: AnalysisModel, project: ProjectFile, a: A
   return out;
 }
 
+/**
+ * Ice on one ancillary under radial ice t (m) of density ρ (kg/m³), per item (point) or per metre
+ * of height (line item): its ice mass, kg (or kg/m), and its drag area with the ice, m² (or m²/m),
+ * by its iceBehaviour (AncillarySpec): perThickness dragArea + iceDragArea·t, iceMass·t; coat
+ * dragArea·(w + 2t)/w, ρπt(w + t)·(coatLength or 1 m); none: no ice.
+ */
+export function ancillaryIce(a: AncillarySpec, t: number, rho: number): { mass: number; dragArea: number } {
+  if (!(t > 0)) return { mass: 0, dragArea: a.dragArea };
+  switch (a.iceBehaviour ?? 'perThickness') {
+    case 'none': return { mass: 0, dragArea: a.dragArea };
+    case 'coat': {
+      const w = a.coatWidth ?? 0;
+      if (!(w > 0)) throw new Error(`ancillaries "${a.id}": iceBehaviour "coat" needs coatWidth`);
+      const length = a.node !== undefined ? (a.coatLength ?? 0) : 1;
+      return { mass: iceAnnulusMass(w, t, rho) * length, dragArea: (a.dragArea * (w + 2 * t)) / w };
+    }
+    default: return { mass: (a.iceMass ?? 0) * t, dragArea: a.dragArea + (a.iceDragArea ?? 0) * t };
+  }
+}
+
 /** The case's loads with its ancillaries' weight, ice and wind added (the input object is changed and returned). */
 export function withAncillaryLoads(model: AnalysisModel, project: ProjectFile, spec: LoadCaseSpec, loads: CaseLoads): CaseLoads {
   const list = project.ancillaries ?? [];
   if (list.length === 0) return loads;
   const t = spec.ice?.thickness ?? 0;
+  const rho = spec.ice?.density ?? DEFAULT_ICE_DENSITY;
   const wind = spec.wind;
+  const vibrating = new Float64Array(model.nodeCount);
   for (const a of list) {
-    const mass = (loads.selfWeight ? a.mass : 0) + (a.iceMass ?? 0) * t;
-    const drag = a.dragArea + (a.iceDragArea ?? 0) * t;
+    const iced = ancillaryIce(a, t, rho);
+    const iceMass = iced.mass;
+    const mass = (loads.selfWeight ? a.mass : 0) + iceMass;
+    const drag = iced.dragArea;
     for (const { node, share } of ancillaryShares(model, project, a)) {
+      vibrating[node] += (a.mass + iceMass) * share;
       loads.nodal[3 * node + 2] -= STANDARD_GRAVITY * mass * share;
       if (!wind || !(drag > 0)) continue;
       const q = windForceFactor(wind) * dynamicPressure(wind.airDensity ?? DEFAULT_AIR_DENSITY, windSpeedAt(model.coords[3 * node + 2], wind.speed, wind.profile));
@@ -62,6 +90,7 @@ export function withAncillaryLoads(model: AnalysisModel, project: ProjectFile, s
       loads.nodal[3 * node + 1] += q * drag * share * cy;
     }
   }
+  loads.ancillaryMass = vibrating;
   return loads;
 }
 

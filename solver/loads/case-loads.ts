@@ -24,6 +24,11 @@ export interface CaseLoads {
   follower: FollowerLoad | null;
   /** Nodal moments (3 × nodeCount, N·m) on nodes with rotations, or absent. */
   moments?: Float64Array | null;
+  /**
+   * Mass of the ancillaries per node with the case's ice on them, kg (nodeCount), for the modal
+   * mass (their weight is already in `nodal`), or absent when the project has none.
+   */
+  ancillaryMass?: Float64Array | null;
   /** Prescribed displacements of restrained DOFs (m, rad), reached at λ = 1, or absent. */
   prescribed?: { dofs: Int32Array; values: Float64Array } | null;
 }

@@ -25,10 +25,10 @@ export const DEFAULT_CABLE_DRAG_COEFFICIENT = 1.2;
 export const DEFAULT_ICED_DRAG_COEFFICIENT = 1.2;
 
 /**
- * Drag (force) factor of a lattice mast on its face area solidity · faceWidth per unit height,
- * dimensionless. Common practice order of magnitude for a triangular lattice of round members at
- * low solidity (recalled: EN 1993-3-1 Annex B force coefficients of this order). Override per
- * section with `lattice.dragFactor`.
+ * Former fixed drag (force) factor of a lattice mast on its face area, dimensionless; no longer
+ * used by the drag (which takes C_f(φ) from lattice-force-coefficient.ts unless the section sets
+ * `lattice.dragFactor`). Kept for files and callers that name it. Common practice order of
+ * magnitude for a triangular lattice of round members at low solidity.
  */
 export const DEFAULT_LATTICE_DRAG_FACTOR = 2.0;
 

@@ -33,3 +33,41 @@ export function icedLattice(solidity: number, memberWidth: number, iceThickness:
   const phi = Math.min(1, (solidity * (memberWidth + 2 * iceThickness)) / memberWidth);
   return { solidity: phi, forceCoefficient: latticeForceCoefficient(phi, plan, 'round') };
 }
+
+/** The lattice data of a section (SectionSpec.lattice) that the drag needs. */
+export interface LatticeFace {
+  faceWidth: number;
+  solidity: number;
+  dragFactor?: number;
+  share?: number;
+  plan?: LatticePlan;
+  members?: LatticeMembers;
+  memberWidth?: number;
+}
+
+/**
+ * Drag width of a lattice member line, m (drag force per unit length = q × this):
+ *   C_f · φ · b · share,
+ * b the face width, φ the face solidity (φ_iced under ice, see icedLattice) and C_f the section's
+ * dragFactor when given, else latticeForceCoefficient(φ, plan, members) — plan default
+ * 'triangular', members default 'flat' (the larger coefficient; common practice when the member
+ * shape is not stated); iced members count as round. Under ice the member width d is
+ * `memberWidth`, else `diameter` (the section's); without either the ice cannot be placed and
+ * an error names the section. φ = 0 or share = 0 gives 0.
+ */
+export function latticeDragWidth(lat: LatticeFace, iceThickness: number, diameter: number | undefined, sectionId: string): number {
+  const share = lat.share ?? 1;
+  if (!(lat.solidity > 0) || !(share > 0)) return 0;
+  const plan = lat.plan ?? 'triangular';
+  let phi = lat.solidity, cf: number;
+  if (iceThickness > 0) {
+    const d = lat.memberWidth ?? diameter;
+    if (!(d !== undefined && d > 0)) throw new Error(`sections "${sectionId}": lattice.memberWidth (or diameter) is needed to place ice on the lattice`);
+    const iced = icedLattice(phi, d, iceThickness, plan);
+    phi = iced.solidity;
+    cf = lat.dragFactor ?? iced.forceCoefficient;
+  } else {
+    cf = lat.dragFactor ?? latticeForceCoefficient(phi, plan, lat.members ?? 'flat');
+  }
+  return cf * phi * lat.faceWidth * share;
+}

@@ -10,7 +10,7 @@ import { createWindLoad } from './wind.ts';
 import { iceMassPerLength } from './ice.ts';
 import { prescribedDisplacements } from '../model/supports.ts';
 import { withAreaLoads } from './panel-loads.ts';
-import { withAncillaryLoads } from './ancillary-loads.ts';
+import { ancillaryNodalMass, withAncillaryLoads } from './ancillary-loads.ts';
 import { addNodeMassWeight } from './node-mass.ts';
 
 export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spec: LoadCaseSpec): CaseLoads {
@@ -57,6 +57,9 @@ export function resolveCombinationLoads(
   let extra: Float64Array | null = null;
   let temperatureChange = 0;
   const followers: { load: FollowerLoad; factor: number }[] = [];
+  // ancillary mass once, plus each case's ancillary ice × its factor (as member ice mass)
+  const bareAncillaries = (project.ancillaries ?? []).length > 0 ? ancillaryNodalMass(model, project) : null;
+  const ancillaryMass = bareAncillaries ? Float64Array.from(bareAncillaries) : null;
   for (const { case: caseId, factor } of combination.factors) {
     const spec = project.loadCases.find((c) => c.id === caseId);
     if (!spec) throw new Error(`combination "${combination.id}": load case "${caseId}" does not exist`);
@@ -76,13 +79,16 @@ export function resolveCombinationLoads(
     }
     temperatureChange += factor * loads.temperatureChange;
     if (loads.follower) followers.push({ load: loads.follower, factor });
+    if (ancillaryMass && bareAncillaries && loads.ancillaryMass) {
+      for (let i = 0; i < ancillaryMass.length; i++) ancillaryMass[i] += factor * (loads.ancillaryMass[i] - bareAncillaries[i]);
+    }
   }
   const follower: FollowerLoad | null = followers.length === 0 ? null : {
     accumulate(x, f, out) { for (const p of followers) p.load.accumulate(x, f * p.factor, out); },
   };
   return {
     nodal, selfWeight: gravityFactor !== 0, gravityFactor: gravityFactor === 0 ? 1 : gravityFactor, extraMassPerLength: extra,
-    temperatureChange, follower, moments,
+    temperatureChange, follower, moments, ancillaryMass,
     prescribed: prescribed.size === 0 ? null : { dofs: Int32Array.from(prescribed.keys()), values: Float64Array.from(prescribed.values()) },
   };
 }

@@ -6,8 +6,8 @@ import {
   DEFAULT_AIR_DENSITY,
   DEFAULT_CABLE_DRAG_COEFFICIENT,
   DEFAULT_ICED_DRAG_COEFFICIENT,
-  DEFAULT_LATTICE_DRAG_FACTOR,
 } from './defaults.ts';
+import { latticeDragWidth } from './lattice-force-coefficient.ts';
 import { iceThicknessPerElement } from './ice.ts';
 import { windSpeedAt } from './wind-profile.ts';
 import { windForceFactor } from './wind-basis.ts';
@@ -16,8 +16,8 @@ import { resolveWindCase, windSpeedAtHeight } from './wind-case.ts';
 /**
  * Drag area per unit length, m²/m (= m), of every element: Cd · D for round sections
  * (D + 2t when iced, Cd from the section or DEFAULT_(ICED_)CABLE_DRAG_COEFFICIENT), and
- * Cf · solidity · faceWidth · share for lattice mast sections (Cf = lattice.dragFactor or
- * DEFAULT_LATTICE_DRAG_FACTOR; ice on lattice sections is not modelled). 0 = no wind on it.
+ * C_f · φ · faceWidth · share for lattice mast sections (latticeDragWidth: C_f = lattice.dragFactor
+ * or C_f(φ) of lattice-force-coefficient.ts; ice raises φ to φ(d + 2t)/d). 0 = no wind on it.
  */
 export function windDragWidths(model: AnalysisModel, project: ProjectFile, caseSpec: LoadCaseSpec): Float64Array {
   const cdD = new Float64Array(model.elementCount);
@@ -31,8 +31,7 @@ export function windDragWidths(model: AnalysisModel, project: ProjectFile, caseS
     for (let k = 0; k < mt.elementCount; k++) {
       const e = mt.firstElement + k;
       if (section?.lattice) {
-        const lat = section.lattice;
-        cdD[e] = (lat.dragFactor ?? DEFAULT_LATTICE_DRAG_FACTOR) * lat.solidity * lat.faceWidth * (lat.share ?? 1);
+        cdD[e] = latticeDragWidth(section.lattice, iceT[e], section.diameter, section.id);
       } else if (model.elemDiameter[e] > 0) {
         const iced = iceT[e] > 0;
         const cd = section?.dragCoefficient ?? (iced ? DEFAULT_ICED_DRAG_COEFFICIENT : DEFAULT_CABLE_DRAG_COEFFICIENT);
@@ -59,7 +58,7 @@ export function elementDragForce(
   a: ArrayLike<number>, b: ArrayLike<number>, dragWidth: number, wind: WindSpec, out: Float64Array,
 ): void {
   const dx = b[0] - a[0], dy = b[1] - a[1], dz = b[2] - a[2];
-  const l = Math.hypot(dx, dy, dz);
+  const l = Math.sqrt(dx * dx + dy * dy + dz * dz);
   out[0] = 0; out[1] = 0; out[2] = 0;
   if (!(l > 0) || !(dragWidth > 0)) return;
   const tx = dx / l, ty = dy / l, tz = dz / l;
@@ -68,7 +67,7 @@ export function elementDragForce(
   const vx = v * cx, vy = v * cy;
   const vt = vx * tx + vy * ty;
   const nx = vx - vt * tx, ny = vy - vt * ty, nz = -vt * tz;
-  const vn = Math.hypot(nx, ny, nz);
+  const vn = Math.sqrt(nx * nx + ny * ny + nz * nz);
   const c = 0.5 * (wind.airDensity ?? DEFAULT_AIR_DENSITY) * windForceFactor(wind) * dragWidth * vn * l;
   out[0] = c * nx; out[1] = c * ny; out[2] = c * nz;
 }
@@ -99,7 +98,7 @@ export function createWindLoad(model: AnalysisModel, project: ProjectFile, caseS
         const i3 = 3 * nodeA[k], j3 = 3 * nodeB[k];
         const az = x[i3 + 2], bz = x[j3 + 2];
         const dx = x[j3] - x[i3], dy = x[j3 + 1] - x[i3 + 1], dz = bz - az;
-        const l = Math.hypot(dx, dy, dz);
+        const l = Math.sqrt(dx * dx + dy * dy + dz * dz);
         if (!(l > 0)) continue;
         // elementDragForce, term by term.
         const tx = dx / l, ty = dy / l, tz = dz / l;
@@ -107,7 +106,7 @@ export function createWindLoad(model: AnalysisModel, project: ProjectFile, caseS
         const vx = v * cx, vy = v * cy;
         const vt = vx * tx + vy * ty;
         const nx = vx - vt * tx, ny = vy - vt * ty, nz = -vt * tz;
-        const vn = Math.hypot(nx, ny, nz);
+        const vn = Math.sqrt(nx * nx + ny * ny + nz * nz);
         const c = halfRho * width[k] * vn * l;
         const h = 0.5 * factor;
         const fx = h * (c * nx), fy = h * (c * ny), fz = h * (c * nz);

@@ -3,14 +3,19 @@
  * it is checked against. Pure and cheap: O(members + nodes) plus an ordering of the graph of the
  * user's nodes only (each member condensed to one edge), never of the split model.
  *
- * Estimate (3 DOFs per node, every DOF kept, see DEVELOPERS.md "Linear algebra"):
- * - nodes = user nodes + Σ (segments − 1); elements = Σ segments; DOFs = 3 · nodes.
+ * Estimate (every DOF kept, see DEVELOPERS.md "Linear algebra" and solver/model/dof-map.ts):
+ * - nodes = user nodes + Σ (segments − 1); elements = Σ segments; DOFs = 3 · nodes + 3 · rotating
+ *   nodes, where a node rotates (6 DOFs) when a beam member ends there without a full pin
+ *   ("xyz" released), lies inside a beam member (every interior node of a split beam), or its
+ *   supports restrain or spring a rotation — the rule of buildModel's DOF map.
  * - factor L in 3×3 node blocks: the interior nodes of a member chain have degree 2 and are
  *   eliminated first by minimum degree, each leaving 2 off-diagonal blocks in L (its chain
  *   neighbour and the far end node), and the edge between the member's end nodes as fill; the
  *   remaining graph of user nodes is ordered by the solver's own AMD and its column counts taken
  *   (Davis, Direct Methods for Sparse Linear Systems, SIAM 2006, ch. 4). Scalar nnz(L) including
- *   the diagonal = 9 · off-diagonal blocks + 6 · nodes (lower triangle of each diagonal block).
+ *   the diagonal = Σ over off-diagonal blocks of d_col · d_row + Σ over nodes of d(d + 1)/2 (the
+ *   lower triangle of each diagonal block), d = 3 or 6 DOFs of the node; the row node of a user
+ *   graph block is taken with 6 DOFs when the column node or any of its neighbours rotates.
  * - memory (bytes): per node, per element and per factor entry, with the coefficients below
  *   (typed arrays of the model, pattern, workspace and per-case results; JS object overhead of the
  *   project itself is not counted).
@@ -18,6 +23,7 @@
 import type { ProjectFile } from '../project/types.ts';
 import { approximateMinimumDegree } from '../linalg/amd.ts';
 import { columnCounts, eliminationTreeOfPermuted } from '../linalg/elimination-tree.ts';
+import { supportsTouchRotations } from './supports.ts';
 
 export interface ModelBudget {
   /** Largest number of degrees of freedom solved. */
@@ -54,7 +60,7 @@ export interface SizeDriver {
   member: number;
   id: string;
   segments: number;
-  /** DOFs this member adds (3 per interior node). */
+  /** DOFs this member adds (3 per interior node, 6 for a beam's). */
   dofs: number;
 }
 
@@ -80,11 +86,34 @@ function segmentCount(s: number | undefined): number {
   return Number.isFinite(s) ? Math.max(1, Math.floor(s as number)) : 1;
 }
 
-/** Off-diagonal node blocks of L for the graph of user nodes with one edge per connected pair. */
-function userGraphFactorBlocks(project: ProjectFile): number {
+/** Letters x, y and z all released: a full pin, so the beam does not use that end's rotations. */
+function fullPin(text: string | undefined): boolean {
+  return !!text && ['x', 'y', 'z'].every((c) => text.includes(c));
+}
+
+/** 1 for every user node that carries rotations (see the module comment). */
+function rotatingUserNodes(project: ProjectFile, index: Map<string, number>): Uint8Array {
+  const mark = new Uint8Array(project.nodes.length);
+  for (const m of project.members) {
+    if (m.kind !== 'beam') continue;
+    const a = index.get(m.from), b = index.get(m.to);
+    if (a !== undefined && !fullPin(m.releases?.start)) mark[a] = 1;
+    if (b !== undefined && !fullPin(m.releases?.end)) mark[b] = 1;
+  }
+  project.nodes.forEach((node, i) => {
+    try {
+      if (supportsTouchRotations(node)) mark[i] = 1;
+    } catch { /* a malformed `fixed` is refused by buildModel with its own message */ }
+  });
+  return mark;
+}
+
+/**
+ * Scalar entries of the off-diagonal blocks of L for the graph of user nodes with one edge per
+ * connected pair (node DOFs 3 or 6 from `rotating`).
+ */
+function userGraphFactorEntries(project: ProjectFile, index: Map<string, number>, rotating: Uint8Array): number {
   const n = project.nodes.length;
-  const index = new Map<string, number>();
-  project.nodes.forEach((node, i) => index.set(node.id, i));
   const edges = new Set<number>();
   const pairs: number[] = [];
   for (const m of project.members) {
@@ -121,34 +150,49 @@ function userGraphFactorBlocks(project: ProjectFile): number {
     uptr[k + 1] = uidx.length;
   }
   const counts = columnCounts(n, uptr, Int32Array.from(uidx), parent);
-  let blocks = 0;
-  for (let k = 0; k < n; k++) blocks += counts[k];
-  return blocks;
+  let entries = 0;
+  for (let k = 0; k < n; k++) {
+    const v = perm[k];
+    let rowDofs = rotating[v] ? 6 : 3;
+    for (let q = ptr[v]; q < ptr[v + 1] && rowDofs === 3; q++) if (rotating[idx[q]]) rowDofs = 6;
+    entries += counts[k] * (rotating[v] ? 6 : 3) * rowDofs;
+  }
+  return entries;
 }
 
 /** Estimate the size of the model `project` makes (see the module comment). */
 export function estimateModelSize(project: ProjectFile, budget: ModelBudget = DEFAULT_MODEL_BUDGET): ModelSizeEstimate {
+  const index = new Map<string, number>();
+  project.nodes.forEach((node, i) => index.set(node.id, i));
+  const rotating = rotatingUserNodes(project, index);
   let nodes = project.nodes.length;
+  let rotatingNodes = 0;
+  for (let i = 0; i < rotating.length; i++) rotatingNodes += rotating[i];
   let elements = 0;
-  let chainBlocks = 0;
+  let chainEntries = 0;
   const split: SizeDriver[] = [];
   project.members.forEach((m, i) => {
     const s = segmentCount(m.segments);
+    const d = m.kind === 'beam' ? 6 : 3;
     elements += s;
     nodes += s - 1;
-    chainBlocks += 2 * (s - 1);
-    if (s > 1) split.push({ member: i, id: m.id, segments: s, dofs: 3 * (s - 1) });
+    if (d === 6) rotatingNodes += s - 1;
+    // Each interior node leaves 2 off-diagonal blocks (d × d) and its diagonal block.
+    chainEntries += (s - 1) * (2 * d * d + (d * (d + 1)) / 2);
+    if (s > 1) split.push({ member: i, id: m.id, segments: s, dofs: d * (s - 1) });
   });
   split.sort((a, b) => b.dofs - a.dofs || a.member - b.member);
   // The ordering of the user graph is skipped when the user nodes alone exceed the budget (the
   // verdict is then decided by the DOFs; the factor figure is a lower bound).
-  const userBlocks = 3 * project.nodes.length <= budget.maxDofs ? userGraphFactorBlocks(project) : project.members.length;
-  const factorNonzeros = 9 * (chainBlocks + userBlocks) + 6 * nodes;
+  const userEntries = 3 * project.nodes.length <= budget.maxDofs ? userGraphFactorEntries(project, index, rotating) : 9 * project.members.length;
+  let userDiagonal = 0;
+  for (let i = 0; i < rotating.length; i++) userDiagonal += rotating[i] ? 21 : 6;
+  const factorNonzeros = chainEntries + userEntries + userDiagonal;
   const cases = project.loadCases.length + (project.combinations?.length ?? 0);
   const bytes = nodes * (BYTES_PER_NODE + RESULT_BYTES_PER_NODE_CASE * cases)
     + elements * (BYTES_PER_ELEMENT + RESULT_BYTES_PER_ELEMENT_CASE * cases)
     + BYTES_PER_FACTOR_ENTRY * factorNonzeros;
-  return { nodes, elements, dofs: 3 * nodes, factorNonzeros, bytes, cases, drivers: split.slice(0, 3) };
+  return { nodes, elements, dofs: 3 * nodes + 3 * rotatingNodes, factorNonzeros, bytes, cases, drivers: split.slice(0, 3) };
 }
 
 /** Check a project against a budget before building its model. */

@@ -4,7 +4,7 @@
  *   the case's temperature, assembled as Newton does (assembly/assemble.ts). Members slack at that
  *   state (any element slack) add no stiffness: their elements are assembled with zero area.
  * - M: the families' lumped mass (assembly/lumped-mass.ts: member mass + the case's ice), plus added
- *   node masses; a slack member's mass is lumped to its two end nodes (half each), its interior
+ *   node masses and the ancillaries with the case's ice on them (CaseLoads.ancillaryMass); a slack member's mass is lumped to its two end nodes (half each), its interior
  *   nodes carry none and leave the problem.
  * - free: every DOF not restrained, minus the interior nodes of slack members.
  * Member mass is present whether or not the case applies self-weight (mass is not a load).
@@ -68,6 +68,9 @@ export function modalModel(
   const mass = lumpedMass(model, loads.extraMassPerLength);
   const added = nodeMassPerDof(model, project);
   for (let d = 0; d < added.length; d++) mass[d] += added[d];
+  if (loads.ancillaryMass) {
+    for (let i = 0; i < model.nodeCount; i++) for (let q = 0; q < 3; q++) mass[3 * i + q] += loads.ancillaryMass[i];
+  }
   for (const k of massOnly) {
     const chain = model.members[k].nodeChain;
     const a = chain[0], b = chain[chain.length - 1];

@@ -92,6 +92,8 @@ export interface MemberLossSpec {
   dynamicFactor?: number;
   /** Critical damping ratio ζ (0 ≤ ζ < 1) for the default factor 1 + exp(−πζ/√(1−ζ²)); default 0 (factor 2). */
   dampingRatio?: number;
+  /** What the cases are checked for; default 'accidental' (checked with the accidental factors). */
+  purpose?: 'accidental' | 'ultimate' | 'serviceability';
 }
 
 /**
@@ -145,4 +147,62 @@ export interface AncillarySpec {
   iceDragArea?: number;
   /** Ice mass per metre of radial ice (kg/m; line items per metre of height too); default 0: ice ignored. */
   iceMass?: number;
+  /**
+   * How ice forms on the item under a case's radial ice t:
+   * - 'perThickness' (default): drag area + iceDragArea · t, mass iceMass · t (both default 0);
+   * - 'coat': a uniform coat on a round body of outer width coatWidth (w): the drag area grows by
+   *   (w + 2t)/w (same force coefficient) and the ice mass is ρ π t (w + t) per metre of the body —
+   *   coatLength metres for a point item, per metre of height for a line item;
+   * - 'none': no ice (shielded, e.g. inside a heated radome).
+   */
+  iceBehaviour?: 'perThickness' | 'coat' | 'none';
+  /** 'coat': outer width of the iced body, m. */
+  coatWidth?: number;
+  /** 'coat', point items: length of the iced body, m. */
+  coatLength?: number;
+}
+
+/**
+ * Ice with wind, as codes pair them: for each pair (ice factor, wind factor), the load case
+ * `iceCase` (its self-weight, loads and ice) with the wind of `windCase`, solved as the case
+ * "<id> / ice <ice> + wind <wind>". The ice factor scales the radial ice thickness (so the ice
+ * weight and the iced wind areas follow it); the wind factor scales the wind pressure (the speed
+ * by its square root). The wind acts on the iced areas (cables, lattice faces, ancillaries).
+ */
+export interface IceWithWindSpec {
+  id: string;
+  label?: string;
+  /** Load case with ice (its wind, if any, is replaced). */
+  iceCase: string;
+  /** Load case whose wind is taken. */
+  windCase: string;
+  /**
+   * Factor pairs; default [{ ice: 1, wind: 0.5 }, { ice: 0.5, wind: 1 }] — common practice (a
+   * dominant action at full value with the other reduced), placeholders: set the factors of the
+   * code in force.
+   */
+  pairs?: { ice: number; wind: number }[];
+  /** What the cases are checked for (default: the purpose of iceCase). */
+  purpose?: 'ultimate' | 'serviceability' | 'accidental';
+}
+
+/**
+ * Unbalanced ice on guys: copies of the load case `case` (which has ice) with the guys of `group`
+ * iced on some and bare on the others — common practice for guyed masts (the concept of iced and
+ * bare spans is recalled from ISO 12494, not read here). Units are single guys (`by: 'guy'`) or
+ * guy levels (`by: 'level'`: the guys whose upper end is at one height); for each unit in turn,
+ * 'eachBare' leaves that unit bare and the rest iced, 'eachIced' ices that unit only. Cases
+ * "<id> / <guy> bare", "<id> / level <z> m iced", …; other members keep the case's ice.
+ */
+export interface UnbalancedIceSpec {
+  id: string;
+  label?: string;
+  /** Load case with ice. */
+  case: string;
+  /** Group of the guys. */
+  group: string;
+  /** Unit taken in turn; default 'guy'. */
+  by?: 'guy' | 'level';
+  /** Default 'eachBare'. */
+  pattern?: 'eachBare' | 'eachIced';
 }

@@ -17,9 +17,11 @@ import type { ActionKind, BucklingCurve, CasePurpose, DesignBasis, MemberDesignR
 export type * from './design-basis-types.ts';
 import type { ReportSpec, SiteMeasurementSetSpec, TensioningSequenceSpec } from './site-types.ts';
 import type { BeamReleases, NodeSprings, PrescribedDisplacement, NodalMoment } from './structure-types.ts';
-import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec, WindBasisSpec, WindDirectionsSpec, AncillarySpec } from './actions-types.ts';
+import type { ScheduleSpec, TuningRunRecord } from './schedule-types.ts';
+import type { AreaLoadSpec, MemberLossSpec, PanelSpec, PatchWindSpec, WindBasisSpec, WindDirectionsSpec, AncillarySpec, IceWithWindSpec, UnbalancedIceSpec } from './actions-types.ts';
 
 export type * from './actions-types.ts';
+export type * from './schedule-types.ts';
 
 export type Vec3 = [number, number, number];
 export type * from './structure-types.ts';
@@ -64,6 +66,12 @@ export interface ProjectFile {
   windDirections?: WindDirectionsSpec[];
   /** Antennas, feeders, ladders, platforms: wind, weight and ice (actions-types.ts). */
   ancillaries?: AncillarySpec[];
+  /** What the printed schedule lists (schedule-types.ts); absent = cables only. */
+  schedule?: ScheduleSpec;
+  /** Ice-with-wind pairings (actions-types.ts). */
+  iceWithWind?: IceWithWindSpec[];
+  /** Unbalanced ice on guys (actions-types.ts). */
+  unbalancedIce?: UnbalancedIceSpec[];
 }
 
 export interface ProjectMeta {
@@ -114,12 +122,21 @@ export interface SectionSpec {
   lattice?: {
     faceWidth: number;
     solidity: number;
+    /** Force coefficient C_f on the face area; absent = C_f(φ) of solver/loads/lattice-force-coefficient.ts. */
     dragFactor?: number;
     /**
-     * Share (0..1] of the whole-mast lattice drag this member line carries; default 1. A
-     * triangular mast modelled leg by leg gives each leg 1/3 so the mast drag is counted once.
+     * Share [0..1] of the whole-mast lattice drag this member line carries; default 1. A
+     * triangular mast modelled leg by leg gives each leg 1/3 so the mast drag is counted once;
+     * 0 = a member of the lattice (bracing) whose drag the other lines carry: no wind of its own,
+     * ice on its diameter.
      */
     share?: number;
+    /** Plan of the lattice for the force coefficient C_f(φ); default 'triangular' (solver/loads/lattice-force-coefficient.ts). */
+    plan?: 'triangular' | 'square';
+    /** Face members flat-sided or round, for C_f(φ) when dragFactor is absent; default 'flat' (the larger C_f). */
+    members?: 'flat' | 'round';
+    /** Mean width of the face members across the wind, m, for the iced solidity; default the section's diameter. */
+    memberWidth?: number;
   };
   label?: string;
   /** Shape, for the buckling-curve and radius-of-gyration defaults. */
@@ -210,6 +227,8 @@ export interface IceSpec {
   density?: number;
   /** Only ice these groups (default: every member with a diameter). */
   groups?: string[];
+  /** Members left bare although in the iced groups (unbalanced ice on guys). */
+  bareMembers?: string[];
 }
 
 export interface LoadCaseSpec {
@@ -290,7 +309,7 @@ export interface TuningSpec {
   variables: { group: string; by: 'pretension' | 'unstressedLength'; min?: number; max?: number }[];
   targets: TuningTarget[];
   /** Result of the last tuning run, written by `stayset tune --write`. */
-  lastRun?: { date: string; summary: string };
+  lastRun?: TuningRunRecord;
 }
 
 export interface InstallationSpec {

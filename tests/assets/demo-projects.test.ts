@@ -55,18 +55,19 @@ describe('demo projects in assets/', () => {
   it('demo mast: key numbers (locked from a converged run; regression, not a reference)', () => {
     const f = 'demo-mast.stayset';
     // The mast stands on three pinned leg feet (before: one pivot node, ~4° dead-load twist).
+    // Lattice drag from C_f(φ) of round members (1.479 at φ = 0.2; before a fixed 2.0); bracing iced on its diameter.
     expect(maxTension(caseOf(f, 'dead'))).toBeCloseTo(18370.5, 0);
-    expect(maxTension(caseOf(f, 'wind 0'))).toBeCloseTo(22735.6, 0);
-    expect(maxTension(caseOf(f, 'ice + wind'))).toBeCloseTo(24034.5, 0);
-    expect(maxTension(caseOf(f, 'cold + wind 90'))).toBeCloseTo(23462.6, 0);
+    expect(maxTension(caseOf(f, 'wind 0'))).toBeCloseTo(22265.8, 0);
+    expect(maxTension(caseOf(f, 'ice + wind'))).toBeCloseTo(24007.2, 0);
+    expect(maxTension(caseOf(f, 'cold + wind 90'))).toBeCloseTo(23210.3, 0);
     const base = caseOf(f, 'dead').reactions.find((r) => r.node === 'mast/base')!;
     expect(base.force[2]).toBeGreaterThan(0);
     // Under the design basis (limit state): governing bracing buckling and guy resistance in the ultimate combination.
     const check = runChecks(read(f), solved.get(f)!);
     const gov = (code: string) => check.results.filter((r) => r.code === code).reduce((a, b) => ((b.ratio ?? 0) > (a.ratio ?? 0) ? b : a));
     expect([gov('barBuckling').item, gov('barBuckling').case]).toEqual(['mast/diag 16c', 'ULS wind 90']);
-    expect(gov('barBuckling').ratio).toBeCloseTo(0.5498, 3);
-    expect(gov('cableResistance').ratio).toBeCloseTo(0.1781, 3);
+    expect(gov('barBuckling').ratio).toBeCloseTo(0.5136, 3);
+    expect(gov('cableResistance').ratio).toBeCloseTo(0.1722, 3);
     expect(check.cases.find((c) => c.id === 'gust 90 only')!.checked).toBe(false);
   });
 

@@ -132,6 +132,39 @@ describe.skipIf(SKIP_BROWSER_TESTS)('main screen in the browser edition', () => 
     await page.getByTestId('schedule-close').click();
   });
 
+  it('chooses what the schedule lists and edits its revision block; the printed pages are numbered', async () => {
+    await page.getByTestId('schedule').click();
+    const view = page.getByTestId('schedule-view');
+    const cables = project.members.filter((m) => m.kind === 'cable').length;
+    await expect.poll(() => view.textContent()).toContain(`cables: ${cables} cables in full`);
+    expect(await view.textContent()).not.toContain('Other members listed');
+    await page.getByTestId('schedule-list-all').check();
+    await expect.poll(() => view.textContent()).toContain('Other members listed, summarised per group');
+    const before = project.report?.revisions?.length ?? 0;
+    await page.getByTestId('revision-add').click();
+    const checker = page.getByTestId(`revision-${before}-checkedBy`);
+    await checker.fill('C. Hecker');
+    await checker.press('Enter');
+    await expect.poll(() => page.locator('.meta').textContent()).toContain('C. Hecker');
+    await shot('07b-schedule-settings.png');
+    // Printed from the app page: settings and tool bar hidden, every page numbered.
+    const { execFileSync } = await import('node:child_process');
+    const pdf = path.join(SCREENSHOTS, '07c-schedule-print.pdf');
+    await page.pdf({ path: pdf, printBackground: true, preferCSSPageSize: true });
+    const pages = Number(/Pages:\s+(\d+)/.exec(execFileSync('pdfinfo', [pdf], { encoding: 'utf8' }))![1]);
+    for (let k = 1; k <= pages; k++) {
+      expect(execFileSync('pdftotext', ['-f', String(k), '-l', String(k), '-layout', pdf, '-'], { encoding: 'utf8' })).toContain(`page ${k} of ${pages}`);
+    }
+    const text = execFileSync('pdftotext', ['-layout', pdf, '-'], { encoding: 'utf8' });
+    expect(text).toContain('C. Hecker');
+    expect(text).not.toContain('Add revision');
+    // Three undo steps take the settings back (the later tests start from the demo as opened).
+    await page.locator('[data-testid="schedule-view"] h1').click();
+    for (let i = 0; i < 3; i++) await page.keyboard.press('Control+z');
+    await expect.poll(() => view.textContent()).toContain(`cables: ${cables} cables in full`);
+    await page.getByTestId('schedule-close').click();
+  });
+
   it('edits a pretension, saves with Ctrl+S, and finds it after a reload and on disk', async () => {
     const next = Math.round(guy.pretension! / 1000 + 1);
     await typeInto(guy.id, 'pretension', `${next} kN`);

@@ -10,7 +10,7 @@ import { execFileSync } from 'node:child_process';
 import { mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync, existsSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { installationData, runChecks, solveProject, tuneProject, solveNamedCases } from '../../solver/index.ts';
+import { installationData, referenceCaseId, runChecks, solveModes, solveProject, tuneProject, solveNamedCases } from '../../solver/index.ts';
 import { buildSchedule, scheduleHtml, SCHEDULE_CAUTION } from '../../main/common/schedule/index.ts';
 import { mastProject } from '../main/common/schedule/mast-fixture.ts';
 import { build } from 'vite';
@@ -39,7 +39,9 @@ beforeAll(async () => {
   const tuning = tuneProject(project, { solveCases: solveNamedCases });
   const tuned = tuning.project;
   const report = solveProject(tuned).report;
-  const src = { project: tuned, report, checks: runChecks(tuned, report), installation: installationData(tuned), tuning };
+  const modes = solveModes(tuned, referenceCaseId(tuned), { count: 6 }).modal;
+  const revised = { ...tuned, report: { documentNumber: 'HF-CALC-7', revisions: [{ revision: 'A', date: '2026-11-30', description: 'For review', by: 'A. N. Engineer', checkedBy: 'C. Hecker' }] } };
+  const src = { project: revised, report, checks: runChecks(tuned, report), installation: installationData(tuned), tuning, modes };
   docA4 = buildSchedule(src, { issueDate: '2026-12-01', paper: 'a4' });
   html = {
     a4: scheduleHtml(docA4),
@@ -78,6 +80,26 @@ function inkShare(pgm: Buffer): number {
 }
 
 describe.skipIf(SKIP_BROWSER_TESTS)('printed member tension schedule', () => {
+  it('prints the demo mast (9 guys, 441 mast bars) in a few numbered pages through `stayset schedule --pdf`', () => {
+    const bin = resolve('dist/cli/stayset.mjs');
+    const pdf = join(ARTIFACTS, 'demo-mast-schedule.pdf');
+    const all = join(ARTIFACTS, 'demo-mast-schedule-all.pdf');
+    for (const [out, extra] of [[pdf, []], [all, ['--all']]] as const) {
+      execFileSync(process.execPath, [bin, 'schedule', 'assets/demo-mast.stayset', '--pdf', out, '--date', '2026-12-02', ...extra], { env: { ...process.env, STAYSET_CHROMIUM: CHROMIUM }, stdio: 'pipe' });
+    }
+    // Before the listing choice the same schedule printed all 450 members in full (105 A4 pages,
+    // measured when this test was written); cables in full and the bars summarised fit in a few.
+    const pages = pdfInfo(pdf).pages;
+    expect(pages).toBeLessThanOrEqual(12);
+    expect(pdfInfo(all).pages).toBeLessThanOrEqual(12);
+    expectPageNumbers(pdf, pages);
+    const text = execFileSync('pdftotext', ['-layout', all, '-'], { encoding: 'utf8' });
+    expect(text).toContain('Other members listed, summarised per group');
+    expect(text).toContain('SR-CALC-001');
+    for (const f of readdirSync(ARTIFACTS)) if (f.startsWith('demo-mast-schedule-') && f.endsWith('.png')) rmSync(join(ARTIFACTS, f));
+    execFileSync('pdftoppm', ['-r', '60', '-png', pdf, join(ARTIFACTS, 'demo-mast-schedule')]);
+  });
+
   for (const [paper, format, w, h] of [['a4', 'A4', 595.28, 841.89], ['letter', 'Letter', 612, 792]] as const) {
     it(`prints on ${format} with the caution, readable pages and repeating headers`, async () => {
       const page = await context.newPage();
@@ -95,6 +117,8 @@ describe.skipIf(SKIP_BROWSER_TESTS)('printed member tension schedule', () => {
 
       const text = execFileSync('pdftotext', ['-layout', pdf, '-'], { encoding: 'utf8' });
       expect(text.replace(/\s+/g, ' ')).toContain(SCHEDULE_CAUTION);
+      expectPageNumbers(pdf, info.pages);
+      expect(text).toContain('C. Hecker');
       expect(text).toContain('Harrow Fell relay mast');
       expect(text).toContain('Installation temperature table');
       expect(text).toContain(paper === 'letter' ? 'kip' : 'kN');
@@ -114,6 +138,14 @@ describe.skipIf(SKIP_BROWSER_TESTS)('printed member tension schedule', () => {
     });
   }
 });
+
+/** "page k of n" on every page k of the PDF (pdftotext page by page). */
+function expectPageNumbers(pdf: string, pages: number): void {
+  for (let k = 1; k <= pages; k++) {
+    const text = execFileSync('pdftotext', ['-f', String(k), '-l', String(k), '-layout', pdf, '-'], { encoding: 'utf8' });
+    expect(text, `page ${k}`).toContain(`page ${k} of ${pages}`);
+  }
+}
 
 /** Numbers as printed (e.g. 22.7, -167.5, 0.253), as a set. */
 function numberTokens(text: string): Set<string> {
@@ -176,9 +208,11 @@ describe.skipIf(SKIP_BROWSER_TESTS)('the renderer schedule components', () => {
     await page.goto(base);
     await page.waitForSelector('[data-testid="schedule-print"]');
     const pdf = join(ARTIFACTS, 'schedule-vue-a4.pdf');
-    await page.pdf({ path: pdf, format: 'A4', printBackground: true });
+    await page.pdf({ path: pdf, printBackground: true, preferCSSPageSize: true });
     await page.close();
     expect(pdfInfo(pdf).pages).toBeGreaterThanOrEqual(1);
+    // The app's print route numbers its pages as the standalone HTML does.
+    expectPageNumbers(pdf, pdfInfo(pdf).pages);
     const vueText = execFileSync('pdftotext', ['-layout', pdf, '-'], { encoding: 'utf8' });
     expect(vueText.replace(/\s+/g, ' ')).toContain(SCHEDULE_CAUTION);
     const htmlText = execFileSync('pdftotext', ['-layout', join(ARTIFACTS, 'schedule-a4.pdf'), '-'], { encoding: 'utf8' });
@@ -187,7 +221,9 @@ describe.skipIf(SKIP_BROWSER_TESTS)('the renderer schedule components', () => {
     expect(a.size).toBeGreaterThan(50);
     expect([...b].filter((x) => !a.has(x))).toEqual([]);
     expect([...a].filter((x) => !b.has(x))).toEqual([]);
-    execFileSync('pdftoppm', ['-r', '60', '-png', '-f', '1', '-l', '1', pdf, join(ARTIFACTS, 'schedule-vue-a4')]);
+    expect(vueText).toContain('Natural frequencies of the structure');
+    expect(vueText).toContain('C. Hecker');
+    execFileSync('pdftoppm', ['-r', '60', '-png', pdf, join(ARTIFACTS, 'schedule-vue-a4')]);
   });
 
   it('TuningPanel.vue emits drag while sliding, commit on release, and group changes', async () => {

@@ -3,7 +3,7 @@
  * under the project's design basis and `checks` settings, print the basis with its sources, the
  * governing result of every check and a pass/fail line.
  */
-import { CheckInputError, envelopeOf, runChecks, solveProject } from '../../../solver/index.ts';
+import { CheckInputError, envelopeOf, runChecks } from '../../../solver/index.ts';
 import type { CheckReport, Envelope, ProjectFile, SolveReport } from '../../../solver/index.ts';
 import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
@@ -19,6 +19,7 @@ const force = (n: number): string => formatValue(n, 'force', 'SI');
 import { basisLines, checkRow, PURPOSE_NAMES, warningText } from '../../common/checks/check-text.ts';
 import { textTable } from '../format/text-table.ts';
 import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
+import { solveOnWorkers } from '../solve-on-workers.ts';
 
 /** Exit status when every case converged but a design check failed. */
 export const EXIT_CHECK_FAILED = 3;
@@ -101,7 +102,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   const project = read.project;
   let report: SolveReport;
   try {
-    report = solveProject(project).report;
+    report = (await solveOnWorkers(project)).report;
   } catch (e) {
     io.err(`${file}: the analysis failed: ${(e as Error).message}${failureHint(project)}\n`);
     return EXIT.notConverged;

@@ -5,10 +5,10 @@
  * PDF printed through headless Chromium. Outputs are written atomically.
  */
 import { resolve } from 'node:path';
-import { CheckInputError, installationData, referenceCaseId, runChecks, runSequence, solveModes, solveProject } from '../../../solver/index.ts';
-import type { CheckReport, InstallationData, ModalOutcome, SequenceResult, SolveReport } from '../../../solver/index.ts';
 import { buildReport } from '../../common/report/build-report.ts';
 import { reportHtml } from '../../common/report/report-html.ts';
+import { collectReportSource, ReportInputError } from '../../common/report/report-source.ts';
+import type { ReportSource } from '../../common/report/report-types.ts';
 import type { PaperSize } from '../../common/schedule/index.ts';
 import type { UnitSystem } from '../../common/units/index.ts';
 import type { CliCommand } from '../command.ts';
@@ -19,6 +19,7 @@ import { readProjectOrReport } from '../read-project-file.ts';
 import { writeFileAtomic } from '../../store/atomic-write.ts';
 import { printPdf } from '../print-pdf.ts';
 import { isoToday, singleOption } from './option-helpers.ts';
+import { solveOnWorkers } from '../solve-on-workers.ts';
 
 const HELP = `Writes the calculation report an engineer submits: title and revision block
 (project "report"), design basis and check settings, model summary with elevation and plan,
@@ -56,43 +57,16 @@ async function run(args: string[], io: CliIO): Promise<number> {
   const read = readProjectOrReport(file, io);
   if (!read) return EXIT.badInput;
   const project = read.project;
-  const notes: string[] = [];
-  let report: SolveReport;
+  let source: ReportSource;
   try {
-    report = solveProject(project).report;
+    source = collectReportSource(project, (await solveOnWorkers(project)).report);
   } catch (e) {
+    if (e instanceof ReportInputError) { for (const p of e.problems) io.err(`${file}: ${p}\n`); return EXIT.badInput; }
     io.err(`${file}: the analysis failed: ${(e as Error).message}\n`);
     return EXIT.notConverged;
   }
-  let checks: CheckReport;
-  try {
-    checks = runChecks(project, report);
-  } catch (e) {
-    if (e instanceof CheckInputError) { for (const p of e.problems) io.err(`${file}: ${p}\n`); return EXIT.badInput; }
-    throw e;
-  }
-  let installation: InstallationData | null = null;
-  try {
-    installation = installationData(project);
-  } catch (e) {
-    notes.push(`Installation data left out: ${(e as Error).message}.`);
-  }
-  const sequences: SequenceResult[] = [];
-  for (const s of project.sequences ?? []) {
-    try {
-      sequences.push(runSequence(project, s.id));
-    } catch (e) {
-      io.err(`${file}: ${(e as Error).message}\n`);
-      return EXIT.badInput;
-    }
-  }
-  let modes: ModalOutcome | null = null;
-  try {
-    modes = solveModes(project, referenceCaseId(project)).modal;
-  } catch (e) {
-    notes.push(`Natural frequencies left out: ${(e as Error).message}.`);
-  }
-  const html = reportHtml(buildReport({ project, report, checks, installation, sequences, modes, notes }, { issueDate: date, units: units as UnitSystem | undefined, paper: paper as PaperSize }));
+  const report = source.report;
+  const html = reportHtml(buildReport(source, { issueDate: date, units: units as UnitSystem | undefined, paper: paper as PaperSize }));
   try {
     if (htmlOut) await writeFileAtomic(resolve(io.cwd, htmlOut), html);
   } catch (e) {

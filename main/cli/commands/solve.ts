@@ -1,6 +1,8 @@
 /**
- * `stayset solve FILE [--json] [--case ID ...]`: validate a project, run the nonlinear analysis
- * of every load case and combination (or the chosen ones) and print the results.
+ * `stayset solve FILE [--full] [--json] [--case ID ...]`: validate a project, run the nonlinear
+ * analysis of every load case and combination (or the chosen ones) and print the results: a
+ * summary per member group when the project has groups, the per-member tables with `--full` (or
+ * when it has none), or JSON.
  */
 import { solveOnWorkers } from '../solve-on-workers.ts';
 import type { ProjectFile, ProjectSolution, SolveControl, SolveProjectOptions, SolveReport } from '../../../solver/index.ts';
@@ -12,15 +14,21 @@ import { readProjectOrReport } from '../read-project-file.ts';
 import { checkCaseIds, filterReport } from '../case-selection.ts';
 import { replaceNonFinite } from '../format/finite-guard.ts';
 import { solveReportText } from '../format/solve-report-text.ts';
+import { solveSummaryText } from '../format/solve-summary-text.ts';
 import { jsonOutput } from '../format/json-output.ts';
 import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
 import { runTimes, runTimesLine, withStatsProperty } from '../format/run-times.ts';
 
 const HELP = `Solves every load case and combination of a project file (geometrically nonlinear,
-tension-only cables, beam-columns) and prints, per case: status, member forces, beam end actions,
-node displacements and support reactions (with moments where rotations are restrained).
+tension-only cables, beam-columns). When the project has member groups it prints a summary: the
+status of each case, then per group (guys first) the governing tension with its member and case,
+the smallest tension, the highest utilisation under the design basis and the cases in which a
+member goes slack. With --full (or without groups) it prints, per case: status, member forces,
+beam end actions, node displacements and support reactions (with moments where rotations are
+restrained).
 
 Options:
+  --full        Print the per-member tables of every case instead of the group summary.
   --json        Print {"cases": [...], "disclaimer": "...", "stats": {...}} instead of tables.
                 Numbers are SI (N, m, N·m); tension is positive; reactions are forces and moments
                 the supports exert; members[].beam holds beam end actions (node on member end,
@@ -38,7 +46,7 @@ Exit status:
 export type ProjectSolver = (project: ProjectFile, control?: SolveControl, options?: SolveProjectOptions) => ProjectSolution | Promise<ProjectSolution>;
 
 async function run(solver: ProjectSolver, args: string[], io: CliIO): Promise<number> {
-  const opts = parseOptions(args, { json: { type: 'boolean' }, case: { type: 'string', multiple: true } });
+  const opts = parseOptions(args, { json: { type: 'boolean' }, full: { type: 'boolean' }, case: { type: 'string', multiple: true } });
   if (opts.positionals.length !== 1) {
     throw new UsageError(opts.positionals.length === 0 ? 'solve needs a project FILE' : `solve takes one FILE (got ${opts.positionals.length})`);
   }
@@ -65,7 +73,10 @@ async function run(solver: ProjectSolver, args: string[], io: CliIO): Promise<nu
   const t1 = performance.now();
   const guarded = replaceNonFinite(report);
   const json = opts.flags.has('json');
-  const text = json ? jsonOutput({ cases: guarded.value.cases, disclaimer: RESULTS_DISCLAIMER }) : solveReportText(project, guarded.value, RESULTS_DISCLAIMER);
+  const summary = !opts.flags.has('full') && (project.groups?.length ?? 0) > 0;
+  const text = json ? jsonOutput({ cases: guarded.value.cases, disclaimer: RESULTS_DISCLAIMER })
+    : summary ? solveSummaryText(project, guarded.value, RESULTS_DISCLAIMER, file)
+      : solveReportText(project, guarded.value, RESULTS_DISCLAIMER);
   const times = runTimes(report, inputSeconds, (performance.now() - t1) / 1000);
   // Tables: the time line goes before the closing caution, which stays the last line.
   const tail = `${RESULTS_DISCLAIMER}\n`;
@@ -83,8 +94,8 @@ async function run(solver: ProjectSolver, args: string[], io: CliIO): Promise<nu
 export function makeSolveCommand(solver: ProjectSolver): CliCommand {
   return {
     name: 'solve',
-    summary: 'analyse a project file and print member forces, displacements and reactions',
-    usage: 'stayset solve FILE [--json] [--case ID ...]',
+    summary: 'analyse a project file and print a summary per member group, or member forces, displacements and reactions (--full)',
+    usage: 'stayset solve FILE [--full] [--json] [--case ID ...]',
     help: HELP,
     run: (args, io) => run(solver, args, io),
   };

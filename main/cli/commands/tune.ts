@@ -6,6 +6,7 @@
  */
 import { serializeProject } from '../../common/project/index.ts';
 import { tuneProject } from '../../../solver/index.ts';
+import { tuningRunRecord } from '../../common/tuning/tuning-record.ts';
 import type { ProjectFile, TuningResult } from '../../../solver/index.ts';
 import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
@@ -30,7 +31,8 @@ load), no slack, mast plumb, reaction limits. Each step re-solves the cases the 
 conflict or cannot be met are explained.
 
 Options:
-  --write       Save the tuned pretensions (and tuning.lastRun) into FILE: written to a temp file
+  --write       Save the tuned pretensions and the run (tuning.lastRun: targets,
+                values, variables, date) into FILE: written to a temp file
                 beside it, synced, then renamed over it; the previous file is kept as FILE.bak.
                 Not done when a case did not converge, nor when FILE changed on disk while
                 tune ran (the other version is kept; exit 1).
@@ -93,7 +95,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   if (opts.flags.has('write')) {
     const tuned: ProjectFile = {
       ...result.project,
-      tuning: { ...result.project.tuning!, lastRun: { date: new Date().toISOString(), summary: tuningSummaryText(result, project, units) } },
+      tuning: { ...result.project.tuning!, lastRun: tuningRunRecord(result, project, units, new Date().toISOString()) },
     };
     const failed = await writeTunedFile(resolve(io.cwd, file), file, serializeProject(tuned), read.stamp);
     if (failed !== null) {

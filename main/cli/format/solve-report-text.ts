@@ -14,7 +14,8 @@ import { textTable } from './text-table.ts';
 import { actionCaseTitle } from './action-case-title.ts';
 import { beamTable, supportMomentTable } from './beam-report-text.ts';
 
-function caseTitle(project: ProjectFile, id: string): string {
+/** "Load case \"id\" (label)", "Combination …" or the title of a case a design action adds. */
+export function caseTitle(project: ProjectFile, id: string): string {
   const action = actionCaseTitle(project, id);
   if (action) return action;
   const lc = project.loadCases.find((c) => c.id === id);

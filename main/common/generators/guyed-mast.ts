@@ -1,5 +1,5 @@
 import type { GroupSpec, MemberSpec, NodeSpec, SectionSpec, Vec3 } from '../../../solver/index.ts';
-import { DEFAULT_GUY_PRETENSION_SHARE, DEFAULT_LATTICE_DRAG_FACTOR } from '../../../solver/index.ts';
+import { DEFAULT_GUY_PRETENSION_SHARE } from '../../../solver/index.ts';
 import type { GeneratedParts, SectionInput } from './types.ts';
 import { ParamCheck, roundCoord, sectionSpec } from './types.ts';
 import { stickMastParts, stickMembers } from './guyed-mast-stick.ts';
@@ -38,10 +38,10 @@ export interface GuyedMastParams {
   panelHeight?: number;
   /** Solidity ratio of one face (wind), default 0.2. */
   solidity?: number;
-  /** Lattice drag factor on the face area (default from solver/loads/defaults). */
+  /** Lattice force coefficient on the face area (default: C_f(φ), solver/loads/lattice-force-coefficient.ts). */
   latticeDragFactor?: number;
   leg: SectionInput;
-  /** Horizontals and diagonals (lattice model only; no wind area of their own: the lattice drag covers them). */
+  /** Horizontals and diagonals (lattice model only; no wind area of their own: the lattice drag covers them; iced on their diameter). */
   bracing?: SectionInput;
   /** Guy section (or one per level). */
   guy: SectionInput | SectionInput[];
@@ -155,13 +155,17 @@ export function generateGuyedMast(recordId: string, p: GuyedMastParams): Generat
     });
     topId = ids[ids.length - 1];
   } else if (lattice) {
-    // Each of the 3 leg lines carries a third of the whole-mast lattice drag (lattice.share).
-    const cf = p.latticeDragFactor ?? DEFAULT_LATTICE_DRAG_FACTOR;
+    // Each of the 3 leg lines carries a third of the whole-mast lattice drag (lattice.share; C_f
+    // from the solidity unless latticeDragFactor is given); the bracing is part of the same
+    // lattice (share 0: no drag of its own) and keeps its diameter for ice.
     sections.push(sectionSpec(id('leg'), p.leg, {
-      lattice: { faceWidth: p.faceWidth, solidity: latticeInfo.solidity, dragFactor: cf, share: 1 / 3 },
+      lattice: { ...latticeInfo, share: 1 / 3 },
       label: p.leg.label ?? 'mast leg (a third of the lattice drag per leg)',
     }));
-    sections.push(sectionSpec(id('bracing'), { ...p.bracing!, diameter: undefined, dragCoefficient: undefined }, { label: p.bracing!.label ?? 'mast bracing' }));
+    sections.push(sectionSpec(id('bracing'), { ...p.bracing!, dragCoefficient: undefined }, {
+      ...(p.bracing!.diameter ? { lattice: { ...latticeInfo, share: 0 } } : {}),
+      label: p.bracing!.label ?? 'mast bracing',
+    }));
     const levels = panelLevels(p);
     // Base: the three leg feet, each pinned on the foundation ("<id>/base", "<id>/base b", "… c").
     const ring: string[][] = [[baseId, node(id('base b'), footAt(1), 'xyz'), node(id('base c'), footAt(2), 'xyz')]];

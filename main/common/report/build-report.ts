@@ -38,7 +38,7 @@ export function buildReport(src: ReportSource, options: ReportOptions): ReportDo
       elements: project.members.reduce((s, m) => s + Math.max(1, Math.floor(m.segments ?? 1)), 0),
       dofs: report.cases[0]?.stats.dofs ?? 0, sections: project.sections.length, groups: project.groups?.length ?? 0,
     },
-    report, checks, envelope: env, governing: governingRows(project, report, checks, env),
+    report, checks, envelope: env, governing: governingRows(project, checks, env),
     installation: src.installation, sequences: src.sequences, modes: src.modes ?? null, notes,
   };
 }

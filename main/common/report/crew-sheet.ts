@@ -6,7 +6,7 @@
  */
 import type { ProjectFile, SequenceResult } from '../../../solver/index.ts';
 import { escapeHtml } from '../schedule/schedule-html.ts';
-import { formatValue, formatWithUnit, significantText, toDisplay, unitLabels, type UnitSystem } from '../units/index.ts';
+import { fixedText, formatValue, formatWithUnit, significantText, toDisplay, unitLabels, type UnitSystem } from '../units/index.ts';
 import { tiltText } from '../checks/check-text.ts';
 import { SCHEDULE_CAUTION, type PaperSize } from '../schedule/schedule-types.ts';
 import { sequenceIssueText, sequenceSuggestionText } from './sequence-text.ts';
@@ -67,7 +67,7 @@ export function crewSheetBody(project: ProjectFile, r: SequenceResult, units: Un
     ['Sequence', `${spec?.label ?? r.id} (${r.id})`],
     ['Day\'s temperature', `${formatValue(r.temperature, 'temperature', units)} ${l.temperature}`],
     ['Reference temperature', `${formatValue(r.referenceTemperature, 'temperature', units)} ${l.temperature}${r.referenceTemperatureAssumed ? ' (assumed: not set in the project)' : ''}`],
-    ['Stage checks', `φ = ${r.resistanceFactor} on breaking load; no slack cable; ${r.plumbLimit ? `tilt ≤ ${tiltText(r.plumbLimit)}` : 'no plumb tolerance set'}`],
+    ['Stage checks', `φ = ${fixedText(r.resistanceFactor, 3)} on breaking load; no slack cable; ${r.plumbLimit ? `tilt ≤ ${tiltText(r.plumbLimit)}` : 'no plumb tolerance set'}`],
     ['Result', r.ok ? 'every stage passes; the final state equals the design state' : 'SOME STAGE FAILS — do not use this order as it stands'],
   ];
   const metaHtml = `<table class="meta"><tbody>${meta.map(([k, v]) => `<tr><th scope="row">${e(k)}</th><td>${e(v)}</td></tr>`).join('')}</tbody></table>`;

@@ -11,35 +11,41 @@ import { escapeHtml as e } from '../schedule/schedule-html.ts';
 import { fixedText, formatValue, unitLabels } from '../units/index.ts';
 import type { ReportDocument } from './report-types.ts';
 import { printCss } from './print-css.ts';
-import { modelSvg } from './model-svg.ts';
+import { modelSvg, type DeformedShape } from './model-svg.ts';
 import { crewSheetBody } from './crew-sheet.ts';
-import { checkRow, tiltText } from '../checks/check-text.ts';
+import { checkRow } from '../checks/check-text.ts';
 import { designBasisHtml, actionsHtml, sectionsHtml } from './report-input-sections.ts';
 import { modesHtml } from './report-modes.ts';
+import { scheduleTuning } from '../schedule/schedule-tuning.ts';
 
 const table = (caption: string, head: string[], rows: string[][]) =>
   `<table><caption>${caption}</caption><thead><tr>${head.map((h) => `<th>${h}</th>`).join('')}</tr></thead><tbody>${rows.map((r) => `<tr>${r.map((c) => `<td>${c}</td>`).join('')}</tr>`).join('\n')}</tbody></table>`;
 const num = (key: string, text: string) => `<span class="num" data-n="${e(key)}">${text}</span>`;
 
-const CHECK_NAMES: Record<string, string> = {
-  utilisation: 'Utilisation T/(φ·MBL)', minimumTension: 'Least tension of no-slack members', sag: 'Sag', displacement: 'Node displacement', tilt: 'Mast tilt', uplift: 'Support uplift (Fz)',
-};
-
 function governingHtml(d: ReportDocument): string {
   const u = d.units, l = unitLabels(u);
-  const v = (check: string, x: number) => {
-    if (check === 'utilisation') return formatValue(x, 'ratio', u);
-    if (check === 'minimumTension' || check === 'uplift') return `${formatValue(x, 'force', u)} ${l.force}`;
-    if (check === 'tilt') return tiltText(x);
-    if (check === 'displacement') return `${formatValue(x, 'displacement', u)} ${l.displacement}`;
-    return `${formatValue(x, 'length', u)} ${l.length}`;
-  };
-  const rows = d.governing.map((g) => [CHECK_NAMES[g.check], e(g.item), e(g.case), num(`gov-${g.check}|${g.item}`, v(g.check, g.value)),
-    g.limit === null ? '—' : v(g.check, g.limit), g.ratio === null ? '—' : formatValue(g.ratio, 'ratio', u), g.pass ? 'PASS' : '<b class="fail">FAIL</b>']);
+  const rows = d.governing.map((g) => {
+    const key = `gov-${g.check}|${g.item}`;
+    if (g.result) {
+      const r = checkRow(g.result, u);
+      return [e(r.check), e(r.item), e(r.case), num(key, e(r.value)), e(r.limit || '—'), num(`${key}|ratio`, r.ratio), g.pass ? 'PASS' : '<b class="fail">FAIL</b>'];
+    }
+    const value = g.check === 'utilisation' ? formatValue(g.value, 'ratio', u) : `${formatValue(g.value, 'force', u)} ${l.force}`;
+    const name = g.check === 'utilisation' ? 'highest utilisation (design force / resistance)' : 'least tension of the no-slack members';
+    return [name, e(g.item), e(g.case), num(key, value), g.limit === null ? 'no slack' : formatValue(g.limit, 'ratio', u), g.ratio === null ? '—' : formatValue(g.ratio, 'ratio', u), g.pass ? 'PASS' : '<b class="fail">FAIL</b>'];
+  });
   const failures = d.checks.failures.map((f) => checkRow(f, u)).map((r) => [e(r.check), e(r.item), e(r.case), e(`${r.value} against ${r.limit}${r.ratio === '—' ? '' : ` (ratio ${r.ratio})`} — ${r.source}`)]);
-  return (rows.length ? table('Governing value of each check over every case and combination', ['Check', 'Item', 'Case', 'Value', 'Limit', 'Ratio', 'Result'], rows) : '<p>No check settings in the project.</p>')
+  return (rows.length ? table('Governing value of each check over every case and combination (the results of the design checks on this solve)', ['Check', 'Item', 'Case', 'Value', 'Limit', 'Ratio', 'Result'], rows) : '<p>No check settings in the project.</p>')
     + `<p><b>Overall: ${d.checks.pass ? 'every check passes in every case' : `${d.checks.failures.length} failure(s)`}</b> (design basis: ${e(d.checks.basis.label)}).</p>`
     + (failures.length ? table('Failures (worst case of each)', ['Check', 'Item', 'Case', 'Description'], failures) : '');
+}
+
+/** The deformed shape drawn in the model pictures: the case of the first failing governing row, else of the highest utilisation, else the first converged case. */
+function governingShape(d: ReportDocument): DeformedShape | null {
+  const converged = d.report.cases.filter((c) => c.converged);
+  const wanted = d.governing.find((g) => !g.pass && g.case)?.case ?? d.governing.find((g) => g.check === 'utilisation')?.case ?? d.governing.find((g) => g.case)?.case;
+  const c = converged.find((x) => x.id === wanted) ?? converged[0];
+  return c ? { caseId: c.id, nodes: c.nodes } : null;
 }
 
 function envelopeHtml(d: ReportDocument): string {
@@ -74,7 +80,12 @@ function tuningHtml(d: ReportDocument): string {
   if (!t) return '<p>No tuning is recorded in the project.</p>';
   const vars = t.variables.map((v) => [e(v.group), e(v.by), v.min === undefined ? '—' : String(v.min), v.max === undefined ? '—' : String(v.max)]);
   const targets = t.targets.map((x) => [e(x.kind), e(JSON.stringify(x).replace(/^\{|\}$/g, ''))]);
+  // The run's targets and final values as the schedule prints them (schedule-tuning.ts).
+  const run = t.lastRun ? scheduleTuning(d.project, t.lastRun, d.units, (g) => d.project.groups?.find((x) => x.id === g)?.label ?? g, []) : null;
+  const reached = run?.targets.length ? table('Targets reached in the last run', ['Target', 'Value reached', 'Met'], run.targets.map((x) => [e(x.label), e(x.value), x.met ? 'yes' : '<b class="fail">NO</b>'])) : '';
+  const finals = run?.variables.length ? table('Values left by the last run', ['Group', 'Variable', 'Final value'], run.variables.map((v) => [e(v.group), e(v.by), e(v.value)])) : '';
   return (t.lastRun ? `<p><b>Last run ${e(t.lastRun.date)}:</b> ${e(t.lastRun.summary)}</p>` : '<p>The tuner has not been run on this file (no record).</p>')
+    + reached + finals
     + table('Tuning variables', ['Group', 'By', 'Min', 'Max'], vars) + table('Tuning targets', ['Kind', 'Definition'], targets);
 }
 
@@ -89,7 +100,7 @@ export function reportHtml(d: ReportDocument): string {
   const rev = d.revisions.at(-1)?.revision ?? '—';
   const sections: [string, string][] = [
     ['Design basis', designBasisHtml(d)],
-    ['Model', `<p>${d.model.nodes} nodes (${d.model.supports} with supports), ${d.model.members} members (${d.model.cables} cables, ${d.model.bars} bars) in ${d.model.elements} elements, ${d.model.dofs} free degrees of freedom, ${d.model.sections} sections, ${d.model.groups} groups.</p>${modelSvg(p)}`],
+    ['Model', `<p>${d.model.nodes} nodes (${d.model.supports} with supports), ${d.model.members} members (${d.model.cables} cables, ${d.model.bars} bars) in ${d.model.elements} elements, ${d.model.dofs} free degrees of freedom, ${d.model.sections} sections, ${d.model.groups} groups.</p>${modelSvg(p, 300, governingShape(d))}`],
     ['Materials and sections', sectionsHtml(d)],
     ['Actions and combinations', actionsHtml(d)],
     ['Analysis', analysisHtml(d)],
@@ -109,7 +120,7 @@ export function reportHtml(d: ReportDocument): string {
 <title>Calculation report — ${e(name)}</title>
 <style>
 ${printCss({ paper: d.paper, caution: d.caution, header: `${name} — calculation report ${d.documentNumber} rev. ${rev}`, footer: `${name} — issued ${d.issueDate}` })}
-.views { display: flex; gap: 6mm; } .views svg { border: 0.6pt solid #000; }
+.views { display: flex; gap: 6mm; } .views svg { border: 0.6pt solid #000; } p.fig { font-size: 8pt; margin-top: 1mm; }
 </style>
 </head>
 <body>

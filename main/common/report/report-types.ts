@@ -4,24 +4,31 @@
  * tensioning sequences — the same solver functions the app and the CLI call.
  */
 import type {
-  CheckReport, Envelope, InstallationData, ModalOutcome, ProjectFile, ReportRevision, SequenceResult, SolveReport,
+  CheckCode, CheckQuantity, CheckReport, CheckResult, Envelope, InstallationData, ModalOutcome, ProjectFile, ReportRevision, SequenceResult, SolveReport,
 } from '../../../solver/index.ts';
 import type { PaperSize } from '../schedule/schedule-types.ts';
 import type { UnitSystem } from '../units/index.ts';
 
-/** The governing value of one check over every case and combination. */
+/** The governing value of one check over every case and combination (governing.ts). */
 export interface GoverningRow {
-  /** Check name code: utilisation | minimumTension | sag | displacement | tilt | uplift. */
-  check: 'utilisation' | 'minimumTension' | 'sag' | 'displacement' | 'tilt' | 'uplift';
-  /** Member, node or "base→top". */
+  /**
+   * A check code of `checks.results`; 'utilisation': the highest member utilisation
+   * (`checks.members`); 'leastTension': the least tension of the no-slack members (envelope).
+   */
+  check: CheckCode | 'utilisation' | 'leastTension';
+  /** Member, node, "base→top" or node-set label. */
   item: string;
   case: string;
-  /** Value (ratio, N or m by check) and its limit (same unit; null when not limited). */
+  quantity: CheckQuantity;
+  /** Value in SI (N, m, ratio, degrees by quantity) and its limit (same unit; null for yes/no checks or none). */
   value: number;
   limit: number | null;
-  /** value / limit, or null. */
+  /** As the check defines it (> 1 fails), or null. */
   ratio: number | null;
   pass: boolean;
+  source: string;
+  /** The check result the row reads, for rows taken from `checks.results`. */
+  result?: CheckResult;
 }
 
 export interface ReportSource {

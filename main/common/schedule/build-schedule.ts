@@ -5,11 +5,14 @@
  */
 import { envelopeOf, expectedStringFrequency, membersOfGroup, purposeOf } from '../../../solver/index.ts';
 import { basisLines, checkRow, warningText } from '../checks/check-text.ts';
-import type { CheckReport, InstallationData, ProjectFile, SolveReport, TuningResult } from '../../../solver/index.ts';
-import { SCHEDULE_CAUTION, type PaperSize, type ScheduleDocument, type ScheduleMemberRow, type ScheduleTuning } from './schedule-types.ts';
-import { fixedText, formatValue, unitLabels, type UnitSystem } from '../units/index.ts';
+import type { CheckReport, InstallationData, ModalOutcome, ProjectFile, ScheduleSpec, SolveReport, TuningResult } from '../../../solver/index.ts';
+import { SCHEDULE_CAUTION, type PaperSize, type ScheduleDocument, type ScheduleMemberRow } from './schedule-types.ts';
+import type { UnitSystem } from '../units/index.ts';
 import { installationNoteText } from '../report/installation-text.ts';
-import { targetText, targetValueText, tuningDiagnosisText, tuningSummaryText } from '../tuning/tuning-text.ts';
+import { tuningRunRecord } from '../tuning/tuning-record.ts';
+import { scheduleListing, summariseMembers } from './schedule-listing.ts';
+import { scheduleTuning } from './schedule-tuning.ts';
+import { scheduleFrequencies } from './schedule-frequencies.ts';
 
 export interface ScheduleSource {
   project: ProjectFile;
@@ -18,6 +21,8 @@ export interface ScheduleSource {
   installation?: InstallationData | null;
   /** A tuning run to summarise; without it project.tuning.lastRun is used when present. */
   tuning?: TuningResult | null;
+  /** Modes about the reference case (solver/modes: solveModes), null when not computed. */
+  modes?: ModalOutcome | null;
   /** Further notes for the reader (e.g. why installation data is missing). */
   notes?: string[];
 }
@@ -27,6 +32,8 @@ export interface ScheduleOptions {
   paper?: PaperSize;
   /** ISO date of issue (YYYY-MM-DD); the caller supplies it (pure builder, no clock). */
   issueDate: string;
+  /** What to list, over the project's `schedule` field (CLI --groups / --all). */
+  listing?: ScheduleSpec;
 }
 
 export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): ScheduleDocument {
@@ -35,7 +42,6 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
   if (units !== 'SI' && units !== 'US') throw new Error(`units must be SI or US, got ${JSON.stringify(units)}`);
   const paper = options.paper ?? 'a4';
   if (paper !== 'a4' && paper !== 'letter') throw new Error(`paper must be a4 or letter, got ${JSON.stringify(paper)}`);
-  const labels = unitLabels(units);
   const notes: string[] = [];
   const caseLabel = new Map<string, string>([
     ...project.loadCases.map((c) => [c.id, c.label ?? c.id] as const),
@@ -56,7 +62,8 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
   const instById = new Map((src.installation?.members ?? []).map((m) => [m.id, m]));
   const caseMembers = report.cases.map((c) => (c.converged ? new Map(c.members.map((m) => [m.id, m])) : null));
 
-  const members: ScheduleMemberRow[] = project.members.map((m) => {
+  const listing = scheduleListing(project, options.listing ?? project.schedule ?? {}, groupLabel);
+  const members: ScheduleMemberRow[] = project.members.filter((m) => listing.inFull.has(m.id)).map((m) => {
     const e = envById.get(m.id);
     const chk = checkById.get(m.id);
     const inst = instById.get(m.id);
@@ -87,22 +94,8 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
   })));
   reactions.sort((a, b) => (a.node < b.node ? -1 : a.node > b.node ? 1 : 0));
 
-  let tuning: ScheduleTuning | null = null;
-  if (src.tuning) {
-    const t = src.tuning;
-    tuning = {
-      summary: tuningSummaryText(t, project, units),
-      date: options.issueDate,
-      targets: t.targets.map((o) => ({ label: targetText(project, o.target, units), met: o.met, value: o.target.kind === 'noSlack' ? `least tension ${formatValue(o.value, 'force', units)} ${labels.force} (must stay above 0)` : `${targetValueText(o, o.value, units)} (${o.sense === 'equal' ? 'target' : 'limit'} ${targetValueText(o, o.limit, units)})` })),
-      variables: t.variables.map((v) => ({
-        group: groupLabel(v.group), by: v.by,
-        value: v.by === 'pretension' ? `${formatValue(v.final, 'force', units)} ${labels.force}` : `length factor ${fixedText(v.final, 5)}`,
-      })),
-      diagnosis: tuningDiagnosisText(t, project, units),
-    };
-  } else if (project.tuning?.lastRun) {
-    tuning = { summary: project.tuning.lastRun.summary, date: project.tuning.lastRun.date, targets: [], variables: [], diagnosis: [] };
-  }
+  const record = src.tuning ? tuningRunRecord(src.tuning, project, units, options.issueDate) : project.tuning?.lastRun ?? null;
+  const tuning = record ? scheduleTuning(project, record, units, groupLabel, notes) : null;
 
   const inst = src.installation;
   if (inst) notes.push(...inst.warnings.map((w) => installationNoteText(w, units)));
@@ -116,7 +109,7 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
       member: m.id, kind: m.kind,
       tensions: inst.table.map((r) => (r.converged ? r.tensions[k] : null)),
       frequencies: inst.table.map((r) => (r.converged ? expectedStringFrequency(m, r.tensions[k]) : null)),
-    })).filter((r) => r.kind === 'cable').map(({ member, tensions, frequencies }) => ({ member, tensions, frequencies })),
+    })).filter((r) => r.kind === 'cable' && listing.inFull.has(r.member)).map(({ member, tensions, frequencies }) => ({ member, tensions, frequencies })),
   } : null;
 
   const meta = project.meta ?? {};
@@ -135,14 +128,32 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
       referenceTemperatureAssumed: inst?.referenceTemperatureAssumed ?? meta.referenceTemperature === undefined,
       referenceCase: inst?.referenceCase ?? '',
     },
+    documentNumber: project.report?.documentNumber ?? '',
+    revisions: (project.report?.revisions ?? []).map((r) => ({ ...r })),
+    listing: listing.info,
     cases,
     members,
+    memberSummary: summariseMembers(project, listing.summarised, env, src.checks ?? null),
+    frequencies: src.modes ? scheduleFrequencies(src.modes) : null,
     reactions,
     tuning,
     temperatureTable,
     checksPass: src.checks ? src.checks.pass : null,
     basis: src.checks ? basisLines(src.checks.basis) : null,
-    checkRows: src.checks ? src.checks.results.map((r) => checkRow(r, units)) : null,
+    checkRows: src.checks ? listedCheckRows(src.checks, units, listing.inFull, notes) : null,
     notes,
   };
+}
+
+/**
+ * Check rows of the schedule: every row about a member printed in full or about something other
+ * than a member (nodes, sets), and every failing row; passing rows of summarised or unlisted
+ * members are left out (their summary row carries the worst utilisation), with a note.
+ */
+function listedCheckRows(checks: CheckReport, units: UnitSystem, inFull: Set<string>, notes: string[]) {
+  const memberIds = new Set(checks.members.map((m) => m.id));
+  const rows = checks.results.map((r) => checkRow(r, units));
+  const kept = rows.filter((r) => r.verdict === 'FAIL' || !memberIds.has(r.item) || inFull.has(r.item));
+  if (kept.length < rows.length) notes.push(`${rows.length - kept.length} passing check rows of members not printed in full are left out (\`stayset check\` lists every row).`);
+  return kept;
 }

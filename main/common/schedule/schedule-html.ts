@@ -7,6 +7,7 @@
  */
 import type { ScheduleDocument } from './schedule-types.ts';
 import { formatValue, unitLabel, unitLabels } from '../units/index.ts';
+import { FREQUENCY_HEAD, REVISION_HEAD, frequencyCells, frequencyIntro, headerRows, revisionCells, summaryCells, summaryHead } from './schedule-cells.ts';
 
 export function escapeHtml(s: string): string {
   return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
@@ -33,17 +34,8 @@ function scheduleMarkup(doc: ScheduleDocument): { title: string; body: string } 
   const l = unitLabels(u);
   const h = doc.header;
   const e = escapeHtml;
-  const tRef = Number.isFinite(h.referenceTemperature)
-    ? `${formatValue(h.referenceTemperature, 'temperature', u)} ${l.temperature}${h.referenceTemperatureAssumed ? ' (assumed: not set in the project)' : ''}`
-    : 'not set';
-
-  const headerRows: [string, string][] = [
-    ['Project', h.projectName], ['Site', h.site], ['Client', h.client], ['Engineer', h.engineer],
-    ['Date of issue', h.issueDate], ['Units', u === 'US' ? 'US customary (kip, ft, °F)' : 'SI (kN, m, °C)'],
-    ['Reference temperature', tRef], ['Installation (reference) case', h.referenceCase || '—'],
-    ['Design checks', doc.checksPass === null ? 'NOT RUN' : doc.checksPass ? 'ALL PASS' : 'SOME FAIL — see the Checks column'],
-  ];
-  const headerHtml = `<table class="meta"><tbody>${headerRows.map(([k, v]) => `<tr><th scope="row">${e(k)}</th><td>${e(v)}</td></tr>`).join('')}</tbody></table>`;
+  const headerHtml = `<table class="meta"><tbody>${headerRows(doc).map(([k, v]) => `<tr><th scope="row">${e(k)}</th><td>${e(v)}</td></tr>`).join('')}</tbody></table>`;
+  const revisionsHtml = table('Revisions', REVISION_HEAD, revisionCells(doc).map((r) => r.map(e)), 99);
 
   const memberRows = doc.members.map((m) => [
     `<b>${e(m.id)}</b>`, e(m.groups.join(', ')), e(m.section), m.kind,
@@ -56,7 +48,13 @@ function scheduleMarkup(doc: ScheduleDocument): { title: string; body: string } 
   ]);
   const membersHtml = table(`Members — cut lengths, installation tension at the reference temperature, frequencies, envelope and checks`,
     ['Member', 'Groups', 'Section', 'Kind', `Cut length (${l.length})`, `Install. tension (${l.force})`, 'f₁ string (Hz)', 'f in-plane (Hz)',
-      `Max tension (${l.force})`, `Min tension (${l.force})`, 'Utilisation', 'Checks'], memberRows, 4, 11)
+      `Max tension (${l.force})`, `Min tension (${l.force})`, 'Utilisation', 'Checks'], memberRows, 4, 11);
+  const summaryHtml = doc.memberSummary.length
+    ? table('Other members listed, summarised per group (envelope over the checked cases)', summaryHead(doc), summaryCells(doc).map((r) => r.map(e)), 2, 8)
+    : '';
+  const frequenciesHtml = `<p>${e(frequencyIntro(doc))}</p>`
+    + (doc.frequencies?.modes.length ? table('Natural frequencies of the structure', FREQUENCY_HEAD, frequencyCells(doc)) : '')
+    + (doc.frequencies?.modes.length && doc.frequencies.notes.length ? `<ul>${doc.frequencies.notes.map((n) => `<li>${e(n)}</li>`).join('')}</ul>` : '');
 
   const caseTables: string[] = [];
   for (let start = 0; start < doc.cases.length; start += CASES_PER_TABLE) {
@@ -78,7 +76,7 @@ function scheduleMarkup(doc: ScheduleDocument): { title: string; body: string } 
   let tuningHtml = '<p>No tuning run is recorded for this project.</p>';
   if (doc.tuning) {
     const t = doc.tuning;
-    tuningHtml = `<p><b>${e(t.summary)}</b> (${e(t.date)})</p>`;
+    tuningHtml = `<p><b>${e(t.summary)}</b> (run of ${e(t.date)}${t.status ? `; ${e(t.status === 'met' ? 'every target met' : t.status === 'unmet' ? 'SOME TARGET NOT MET' : 'A CASE DID NOT CONVERGE')}` : ''})</p>`;
     if (t.targets.length) tuningHtml += table('Tuning targets', ['Target', 'Value reached', 'Met'], t.targets.map((x) => [e(x.label), e(x.value), x.met ? 'yes' : '<b class="fail">NO</b>']), 99);
     if (t.variables.length) tuningHtml += table('Tuned variables', ['Group', 'Variable', 'Final value'], t.variables.map((v) => [e(v.group), e(v.by), e(v.value)]), 99);
     if (t.diagnosis.length) tuningHtml += `<ul class="diagnosis">${t.diagnosis.map((d) => `<li>${e(d)}</li>`).join('')}</ul>`;
@@ -105,18 +103,22 @@ function scheduleMarkup(doc: ScheduleDocument): { title: string; body: string } 
   return { title: `${e(doc.title)} — ${e(h.projectName)}`, body: `<header>
 <h1>${e(doc.title)}</h1>
 ${headerHtml}
+${revisionsHtml}
 <p class="caution" role="note">${e(doc.caution)}</p>
 </header>
 <main>
 <h2>Design basis</h2>
 ${basisHtml}
 <h2>Members</h2>
-${membersHtml}
+${doc.members.length ? membersHtml : '<p>No cable is listed.</p>'}
+${summaryHtml}
 ${checkRowsHtml}
 <h2>Tension per case</h2>
-${caseTables.join('\n')}
+${doc.members.length ? caseTables.join('\n') : '<p>No cable is listed.</p>'}
 <h2>Reactions</h2>
 ${reactionsHtml}
+<h2>Natural frequencies</h2>
+${frequenciesHtml}
 <h2>Tuning summary</h2>
 ${tuningHtml}
 <h2>Installation temperature table</h2>

@@ -5,7 +5,7 @@
  */
 import type { UnitSystem } from '../units/index.ts';
 import type { CheckRow } from '../checks/check-text.ts';
-import type { MemberKind } from '../../../solver/index.ts';
+import type { MemberKind, ReportRevision, ScheduleListing } from '../../../solver/index.ts';
 
 export const SCHEDULE_CAUTION = 'Results are for review by a qualified engineer; local codes and licensed practice govern.';
 
@@ -72,6 +72,8 @@ export interface ScheduleReactionRow {
 
 export interface ScheduleTuning {
   summary: string;
+  /** 'met' | 'unmet' | 'notConverged', or '' for a record without status. */
+  status: string;
   /** Date of the tuning run (ISO), when known. */
   date: string;
   targets: { label: string; value: string; met: boolean }[];
@@ -89,14 +91,67 @@ export interface ScheduleTemperatureTable {
   rows: { member: string; tensions: (number | null)[]; frequencies: (number | null)[] }[];
 }
 
+/**
+ * Members other than cables that the listing includes, summarised per group (or per section when
+ * in no group): how many, the governing axial forces and the highest utilisation, with where.
+ */
+export interface ScheduleMemberSummary {
+  /** Group label, or "section <id>". */
+  label: string;
+  /** Member kinds in the row, e.g. ["bar"]. */
+  kinds: MemberKind[];
+  count: number;
+  /** Largest tension over the enveloped cases, N, and the member and case. */
+  maxTension: number | null;
+  maxTensionAt: string;
+  /** Smallest axial force (negative = compression), N, and the member and case. */
+  minForce: number | null;
+  minForceAt: string;
+  utilisation: number | null;
+  utilisationAt: string;
+  /** Members whose checks fail / that were not checked. */
+  failing: number;
+  unchecked: number;
+}
+
+/** What the schedule lists (ScheduleSpec resolved): shown in the header. */
+export interface ScheduleListingInfo {
+  list: ScheduleListing;
+  /** Labels of the chosen groups (list 'groups'). */
+  groups: string[];
+  /** Members in the project, and how many are printed in full / summarised / left out. */
+  total: number;
+  inFull: number;
+  summarised: number;
+}
+
+/** First natural frequencies of the structure (solver/modes) about the reference case. */
+export interface ScheduleFrequencies {
+  /** Case the modes are about. */
+  case: string;
+  modes: { number: number; frequency: number; period: number }[];
+  /** Modal notes in words (report-modes.ts), or the reason there are no modes. */
+  notes: string[];
+}
+
 export interface ScheduleDocument {
   title: string;
   caution: string;
   units: UnitSystem;
   paper: PaperSize;
   header: ScheduleHeader;
+  /** Document number (project report.documentNumber; '' when not set). */
+  documentNumber: string;
+  /** Revision block: the calculation report's revisions (project report.revisions), oldest first. */
+  revisions: ReportRevision[];
+  listing: ScheduleListingInfo;
   cases: ScheduleCase[];
+  /** Members printed in full (cables of the listing), project order. */
   members: ScheduleMemberRow[];
+  /** Other members of the listing, one row per group or section. */
+  memberSummary: ScheduleMemberSummary[];
+  /** First natural frequencies, null when not computed. */
+  frequencies: ScheduleFrequencies | null;
   reactions: ScheduleReactionRow[];
   tuning: ScheduleTuning | null;
   temperatureTable: ScheduleTemperatureTable | null;

@@ -24,7 +24,8 @@ export const UNIT_SYSTEMS: readonly UnitSystem[] = ['SI', 'US'];
 
 export type QuantityKind =
   | 'force' | 'moment' | 'length' | 'displacement' | 'smallLength' | 'area'
-  | 'stress' | 'modulus' | 'pressure' | 'massPerLength' | 'mass'
+  | 'stress' | 'strength' | 'modulus' | 'shearModulus' | 'secondMoment' | 'dragArea' | 'dragAreaPerLength'
+  | 'pressure' | 'massPerLength' | 'mass' | 'period'
   | 'temperature' | 'temperatureChange' | 'thermalExpansion'
   | 'frequency' | 'angle' | 'speed' | 'ratio' | 'share' | 'slenderness' | 'count';
 
@@ -61,6 +62,17 @@ export const KINDS: Record<QuantityKind, KindInfo> = {
   area: { noun: 'an area', precision: { resolution: 1e-7 }, units: { SI: { label: 'mm²', toBase: 1e-6 }, US: { label: 'in²', toBase: IN * IN } } },
   stress: { noun: 'a stress', precision: { resolution: 1e5 }, units: { SI: { label: 'MPa', toBase: 1e6 }, US: { label: 'ksi', toBase: KSI } } },
   modulus: { noun: 'a stress (modulus)', precision: { resolution: 1e8 }, units: { SI: { label: 'GPa', toBase: 1e9 }, US: { label: 'ksi', toBase: KSI } } },
+  /** Yield strength; ksi = 1000 lbf/in². */
+  strength: { noun: 'a stress', precision: { resolution: 1e5 }, units: { SI: { label: 'MPa', toBase: 1e6 }, US: { label: 'ksi', toBase: KSI } } },
+  /** Shear modulus G, shown as the Young's modulus is. */
+  shearModulus: { noun: 'a stress (modulus)', precision: { resolution: 1e8 }, units: { SI: { label: 'GPa', toBase: 1e9 }, US: { label: 'ksi', toBase: KSI } } },
+  /** Second moments of area and torsion constants (m⁴); they span decades, so significant digits. */
+  secondMoment: { noun: 'a second moment of area', precision: { significant: 4 }, units: { SI: { label: 'cm⁴', toBase: 1e-8 }, US: { label: 'in⁴', toBase: IN ** 4 } } },
+  /** Drag area C_f·A of a point ancillary (m²). */
+  dragArea: { noun: 'an area', precision: { resolution: 1e-3 }, units: { SI: { label: 'm²', toBase: 1 }, US: { label: 'ft²', toBase: FT * FT } } },
+  /** Drag area per length of a line ancillary (m²/m = m). */
+  dragAreaPerLength: { noun: 'an area per length', precision: { resolution: 1e-4 }, units: { SI: { label: 'm²/m', toBase: 1 }, US: { label: 'ft²/ft', toBase: FT } } },
+  /** Area loads and velocity pressure; psf = lbf/ft². */
   pressure: { noun: 'a pressure', precision: { resolution: 1 }, units: { SI: { label: 'Pa', toBase: 1 }, US: { label: 'psf', toBase: NEWTONS_PER_POUND_FORCE / (FT * FT) } } },
   massPerLength: { noun: 'a mass per length', precision: { resolution: 1e-3 }, units: { SI: { label: 'kg/m', toBase: 1 }, US: { label: 'lb/ft', toBase: KILOGRAMS_PER_POUND / FT } } },
   mass: { noun: 'a mass', precision: { resolution: 0.1 }, units: { SI: { label: 'kg', toBase: 1 }, US: { label: 'lb', toBase: KILOGRAMS_PER_POUND } } },
@@ -73,6 +85,7 @@ export const KINDS: Record<QuantityKind, KindInfo> = {
   },
   temperatureChange: { noun: 'a temperature change', precision: { resolution: 0.1 }, units: { SI: { label: 'K', toBase: 1 }, US: { label: '°F', toBase: KELVIN_PER_FAHRENHEIT_DEGREE } } },
   thermalExpansion: { noun: 'a thermal expansion coefficient', precision: { significant: 3 }, units: { SI: { label: '1/K', toBase: 1 }, US: { label: '1/°F', toBase: 1 / KELVIN_PER_FAHRENHEIT_DEGREE } } },
+  period: { noun: 'a period', precision: { resolution: 1e-3 }, units: same({ label: 's', toBase: 1 }) },
   frequency: { noun: 'a frequency', precision: { resolution: 0.01 }, units: same({ label: 'Hz', toBase: 1 }) },
   angle: { noun: 'an angle', precision: { resolution: 0.001 }, units: same({ label: '°', toBase: 1 }) },
   speed: { noun: 'a speed', precision: { resolution: 0.01 }, units: { SI: { label: 'm/s', toBase: 1 }, US: { label: 'mph', toBase: METRES_PER_SECOND_PER_MPH } } },

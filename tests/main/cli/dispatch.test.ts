@@ -16,7 +16,7 @@ describe('stayset dispatcher', () => {
     for (const args of [['help', 'solve'], ['solve', '--help']]) {
       const r = runStayset(args);
       expect(r.code).toBe(0);
-      expect(r.stdout.startsWith('Usage: stayset solve FILE [--json] [--case ID ...]')).toBe(true);
+      expect(r.stdout.startsWith('Usage: stayset solve FILE [--full] [--json] [--case ID ...]')).toBe(true);
       expect(r.stdout).toContain('Exit status:');
     }
   });

@@ -11,6 +11,8 @@ import { join } from 'node:path';
 import { runStayset } from './run-stayset.ts';
 import { smallMast } from '../../solver/sequence/small-mast.ts';
 import { formatValue } from '../../../main/common/units/index.ts';
+import { checkRow } from '../../../main/common/checks/check-text.ts';
+import type { CheckResult } from '../../../solver/index.ts';
 import { serializeProject } from '../../../main/common/project/index.ts';
 
 interface CaseJson { id: string; converged: boolean; members: { id: string; tensionMax: number; tensionMin: number }[]; reactions: { node: string; force: number[] }[] }
@@ -62,6 +64,17 @@ describe('stayset report', () => {
       const govUtil = [...n].find(([k]) => k.startsWith('gov-utilisation|'));
       if (utils.length) expect(govUtil![1]).toBe(formatValue(Math.max(...utils), 'ratio', 'SI'));
       else expect(govUtil).toBeUndefined();
+      // Every other governing row is the first result of its check code in `check --json` (worst first), printed by the shared formatter.
+      const results: CheckResult[] = checkJson.results;
+      const codes = [...new Set(results.map((r) => r.code))];
+      expect(codes.length).toBeGreaterThan(1);
+      for (const code of codes) {
+        const first = results.find((r) => r.code === code)!;
+        const row = checkRow(first, 'SI');
+        expect(n.get(`gov-${code}|${first.item}`), code).toBe(row.value);
+        expect(n.get(`gov-${code}|${first.item}|ratio`), code).toBe(row.ratio);
+      }
+      expect([...n.keys()].filter((k) => k.startsWith('gov-') && !k.endsWith('|ratio') && !/^gov-(utilisation|leastTension)\|/.test(k))).toHaveLength(codes.length);
       const rMax = Math.max(...cases.map((c) => Math.hypot(...c.reactions.find((r) => r.node === 'm/base')!.force)));
       expect(n.get('react|m/base')).toBe(formatValue(rMax, 'force', 'SI'));
       expect(compared).toBeGreaterThan(100);

@@ -6,7 +6,7 @@ import { fixture, runStayset } from './run-stayset.ts';
 
 describe('stayset solve (tables)', () => {
   it('prints each case with status, member, node and reaction tables, and the caution', () => {
-    const text = runStayset(['solve', fixture('kestrel-moor-mast.stayset.json')]);
+    const text = runStayset(['solve', fixture('kestrel-moor-mast.stayset.json'), '--full']);
     const json = runStayset(['solve', fixture('kestrel-moor-mast.stayset.json'), '--json']);
     expect(text.code).toBe(0);
     expect(text.stderr).toBe('');

@@ -16,14 +16,15 @@ import { oversizedMast } from './oversized.ts';
 const demo = (name: string): ProjectFile => JSON.parse(readFileSync(new URL(`../../../assets/${name}`, import.meta.url), 'utf8')) as ProjectFile;
 
 describe('model-size estimate', () => {
-  it.each(['demo-mast.stayset', 'demo-canopy.stayset'])('%s: DOFs exact, factor entries bounded above within 2× of the real factor', (name) => {
+  it.each(['demo-mast.stayset', 'demo-canopy.stayset', 'demo-tube-mast.stayset'])('%s: DOFs exact, factor entries bounded above within 2× of the real factor', (name) => {
     for (const scale of [1, 3]) {
       const p = demo(name);
       for (const m of p.members) m.segments = (m.segments ?? 1) * scale;
       const e = estimateModelSize(p);
       const model = buildModel(p);
       const ws = createWorkspace(model);
-      expect(e.dofs).toBe(3 * model.nodeCount);
+      // The reference is the DOF map buildModel makes (3 per node, 6 where rotations are used).
+      expect(e.dofs).toBe(model.dofs.count);
       expect(e.elements).toBe(model.elementCount);
       expect(e.factorNonzeros).toBeGreaterThanOrEqual(ws.ldl.factorNonzeros);
       expect(e.factorNonzeros).toBeLessThanOrEqual(2 * ws.ldl.factorNonzeros);
@@ -36,6 +37,17 @@ describe('model-size estimate', () => {
     const e = estimateModelSize(p);
     expect(e.dofs).toBe(3 * (5 + 2 * 7 + (1e8 - 1))); // 5 user nodes, G2 and G3 at 8 segments
     expect(e.drivers[0]).toMatchObject({ member: 1, id: 'G1', segments: 1e8 });
+  });
+
+  it('counts 6 DOFs at beam nodes: interior nodes, unpinned ends and rotational supports', () => {
+    const p = sampleMast();
+    const beam = { ...p.members[0], id: 'B', kind: 'beam' as const, segments: 4 };
+    p.members.push(beam);
+    const truss = estimateModelSize(sampleMast());
+    const rotating = new Set([beam.from, beam.to]).size + 3; // both ends and 3 interior nodes
+    expect(estimateModelSize(p).dofs).toBe(truss.dofs + 3 * 3 + 3 * rotating);
+    beam.releases = { start: 'xyz' };
+    expect(estimateModelSize(p).dofs).toBe(truss.dofs + 3 * 3 + 3 * (rotating - 1));
   });
 });
 

@@ -1,8 +1,13 @@
 /**
  * Crash safety of atomic saves: a child process saves a several-MB project in a loop,
- * alternating two versions; it is killed with SIGKILL at random moments, many times. After every
- * kill the target must be exactly the complete old or the complete new version (never missing,
- * truncated or mixed), and so must the backup.
+ * alternating two versions; it is killed with SIGKILL the moment it announces save k (k = 1, 2 in
+ * turn, so saves of both versions are hit), many times. After every kill the target must be exactly the complete old or the complete
+ * new version (never missing, truncated or mixed), and so must the backup.
+ * Kills are counted by where they landed, not by the clock: one whose save k never reported
+ * "done" was a kill during a save, and the test goes on until MID_SAVE_KILLS of those happened
+ * (a loaded machine only takes more attempts), within MAX_ATTEMPTS. The time limit of the test
+ * is a generous guard for a saturated machine (each attempt starts a Node process), not a
+ * measure.
  * Method: write-temp + fsync + rename, the POSIX rename(2) atomic-replacement guarantee.
  */
 import { spawn } from 'node:child_process';
@@ -17,22 +22,25 @@ import { writeFileAtomic } from '../../../main/store/atomic-write.ts';
 import { largeGrid } from './sample-project.ts';
 
 const writerSource = path.join(path.dirname(fileURLToPath(import.meta.url)), 'crash-writer.ts');
-const KILLS = 45;
+const MID_SAVE_KILLS = 40;
+const MAX_ATTEMPTS = 400;
 
-function runAndKill(writer: string, args: string[], delayMs: number): Promise<void> {
+/** Starts the writer, kills it when it begins save k; true when save k had not finished. */
+function runAndKill(writer: string, args: string[], k: number): Promise<boolean> {
   return new Promise((resolve, reject) => {
     const child = spawn(process.execPath, [writer, ...args], { stdio: ['ignore', 'pipe', 'pipe'] });
-    let err = '';
+    let err = '', out = '', killed = false;
     child.stderr.on('data', (d) => (err += String(d)));
     child.stdout.on('data', (d) => {
-      if (String(d).includes('ready')) setTimeout(() => child.kill('SIGKILL'), delayMs);
+      out += String(d);
+      if (!killed && out.includes(`begin ${k}\n`)) { killed = true; child.kill('SIGKILL'); }
     });
-    child.on('exit', (code, signal) => (signal === 'SIGKILL' ? resolve() : reject(new Error(`writer exited ${code}: ${err}`))));
+    child.on('exit', (code, signal) => (signal === 'SIGKILL' ? resolve(!out.includes(`done ${k}\n`)) : reject(new Error(`writer exited ${code}: ${err}`))));
   });
 }
 
 describe('atomic save under SIGKILL', () => {
-  it('leaves the target and its backup as one complete version after every kill', async () => {
+  it('leaves the target and its backup as one complete version after every kill', { timeout: 900_000 }, async () => {
     const dir = mkdtempSync(path.join(os.tmpdir(), 'stayset-crash-'));
     // The writer is bundled to plain JavaScript first so each start takes milliseconds, not a
     // TypeScript loader's start-up; it runs the store's own writeFileAtomic.
@@ -49,10 +57,10 @@ describe('atomic save under SIGKILL', () => {
     const target = path.join(dir, 'grid.stayset');
     // A previous version exists from the start, so every save has something to back up.
     await writeFileAtomic(target, b);
-    let kills = 0;
+    let kills = 0, midSave = 0;
     const seen = new Set<string>();
-    while (kills < KILLS) {
-      await runAndKill(writer, [target, fileA, fileB], Math.random() * 120);
+    while (midSave < MID_SAVE_KILLS && kills < MAX_ATTEMPTS) {
+      if (await runAndKill(writer, [target, fileA, fileB], 1 + (kills % 2))) midSave++;
       kills++;
       const text = readFileSync(target, 'utf8');
       expect(text === a || text === b, `kill ${kills}: target is neither complete version (${text.length} chars)`).toBe(true);
@@ -60,7 +68,8 @@ describe('atomic save under SIGKILL', () => {
       const backup = readFileSync(target + '.bak', 'utf8');
       expect(backup === a || backup === b, `kill ${kills}: backup incomplete`).toBe(true);
     }
-    expect(seen.size).toBe(2); // kills landed at different points of the loop
+    expect(midSave, `${midSave} of ${kills} kills landed during a save`).toBe(MID_SAVE_KILLS);
+    expect(seen.size).toBe(2); // saves of both parities were interrupted or completed
     // Leftover temp files of killed writers are removed by the next save.
     await writeFileAtomic(target, a, { backup: true });
     expect(readdirSync(dir).sort()).toEqual(['a.txt', 'b.txt', 'crash-writer.mjs', 'grid.stayset', 'grid.stayset.bak']);

@@ -1,6 +1,7 @@
 /**
  * Child process for the crash test: saves two versions of a project alternately to one target,
- * forever, through the store's atomic write. Prints "ready" after the first complete save.
+ * forever, through the store's atomic write. Before save i it prints "begin i", after it
+ * "done i" (stdout is a pipe, written synchronously), so the test knows where each kill landed.
  * Usage: node --import tsx crash-writer.ts TARGET VERSION_A_FILE VERSION_B_FILE
  * (the crash test runs it bundled to one .mjs file for a fast start).
  */
@@ -12,8 +13,9 @@ const versions = [readFileSync(fileA, 'utf8'), readFileSync(fileB, 'utf8')];
 
 async function loop(): Promise<void> {
   for (let i = 0; ; i++) {
+    process.stdout.write(`begin ${i}\n`);
     await writeFileAtomic(target, versions[i % 2], { backup: true });
-    if (i === 0) process.stdout.write('ready\n');
+    process.stdout.write(`done ${i}\n`);
   }
 }
 

@@ -90,7 +90,7 @@ describe('wind drag', () => {
     const c: LoadCaseSpec = { ...uniform(30), ice: { thickness: 0.015 } };
     const w = windDragWidths(handModel(p), p, c);
     expect(w[0]).toBeCloseTo(1.2 * (0.02 + 0.03), 12);
-    expect(w[3]).toBeCloseTo(2 * 0.25 * 0.6 * 0.5, 12); // lattice: ice not modelled on the face area
+    expect(w[3]).toBeCloseTo(2 * 0.25 * 0.6 * 0.5, 12); // lattice without diameter or memberWidth: no ice on the face
   });
 });
 

@@ -1,6 +1,6 @@
 /**
  * Semantic checks of the design actions (solver/project/actions-types.ts): panels, area loads,
- * patch wind and member loss. Messages name the entry: `panels[2] "P3": node "N9" does not exist`.
+ * patch wind, member loss, wind directions, ancillaries, ice with wind and unbalanced ice. Messages name the entry: `panels[2] "P3": node "N9" does not exist`.
  * Runs on partly invalid documents; values of the wrong type are left to the schema.
  */
 import { entryLabel } from './error-path.ts';
@@ -32,6 +32,7 @@ function duplicateIds(root: unknown, list: string, errors: string[]): void {
 }
 
 function panelErrors(root: unknown, errors: string[]): void {
+  if (entries(root, 'panels').length === 0) return; // no node tables to build for a file without panels
   const at = nodePositions(root);
   const nodes = idSet(root, 'nodes');
   for (const { index, entry } of entries(root, 'panels')) {
@@ -155,12 +156,54 @@ function ancillaryErrors(root: unknown, errors: string[]): void {
       const from = num(along, 'from'), to = num(along, 'to');
       if (from !== undefined && to !== undefined && !(to > from)) errors.push(`${label}: along: "to" (${to} m) must be above "from" (${from} m)`);
     }
+    const behaviour = str(entry, 'iceBehaviour') ?? 'perThickness';
+    if (behaviour === 'coat') {
+      if (entry.coatWidth === undefined) errors.push(`${label}: iceBehaviour "coat" needs coatWidth (outer width of the iced body, m)`);
+      if (node !== undefined && entry.coatLength === undefined) errors.push(`${label}: iceBehaviour "coat" on a point item needs coatLength (length of the iced body, m)`);
+      if (along && entry.coatLength !== undefined) errors.push(`${label}: coatLength applies to point items only (a line item ices per metre of height)`);
+    }
+    if (behaviour !== 'coat' && (entry.coatWidth !== undefined || entry.coatLength !== undefined)) errors.push(`${label}: coatWidth and coatLength need iceBehaviour "coat"`);
+    if (behaviour !== 'perThickness' && (entry.iceDragArea !== undefined || entry.iceMass !== undefined)) errors.push(`${label}: iceDragArea and iceMass apply to iceBehaviour "perThickness" only`);
+  }
+}
+
+function iceActionErrors(root: unknown, errors: string[]): void {
+  const cases = caseById(root);
+  const taken = new Set([...cases.keys(), ...idSet(root, 'combinations')]);
+  const groups = idSet(root, 'groups');
+  for (const { entry } of entries(root, 'members')) for (const g of strings(entry, 'groups')) groups.add(g.value);
+  const needCase = (label: string, field: string, id: string | undefined, what: 'ice' | 'wind') => {
+    const spec = id === undefined ? undefined : cases.get(id);
+    if (id !== undefined && !spec) errors.push(`${label}: ${field}: load case ${JSON.stringify(id)} does not exist`);
+    else if (spec && !isRec(spec[what])) errors.push(`${label}: ${field}: load case ${JSON.stringify(id)} has no ${what}`);
+  };
+  for (const { index, entry } of entries(root, 'iceWithWind')) {
+    const label = entryLabel(root, 'iceWithWind', index);
+    const id = str(entry, 'id');
+    if (id !== undefined && taken.has(id)) errors.push(`${label}: id ${JSON.stringify(id)} is already used by a load case or combination`);
+    needCase(label, 'iceCase', str(entry, 'iceCase'), 'ice');
+    needCase(label, 'windCase', str(entry, 'windCase'), 'wind');
+    const seen = new Set<string>();
+    for (const p of entries(entry, 'pairs')) {
+      const key = `${num(p.entry, 'ice')} ${num(p.entry, 'wind')}`;
+      if (seen.has(key)) errors.push(`${label}: pairs[${p.index}]: the same pair is listed twice`);
+      seen.add(key);
+    }
+  }
+  for (const { index, entry } of entries(root, 'unbalancedIce')) {
+    const label = entryLabel(root, 'unbalancedIce', index);
+    const id = str(entry, 'id');
+    if (id !== undefined && taken.has(id)) errors.push(`${label}: id ${JSON.stringify(id)} is already used by a load case or combination`);
+    needCase(label, 'case', str(entry, 'case'), 'ice');
+    const g = str(entry, 'group');
+    if (g !== undefined && !groups.has(g)) errors.push(`${label}: group ${JSON.stringify(g)} does not exist`);
   }
 }
 
 export function actionErrors(root: unknown): string[] {
   const errors: string[] = [];
-  for (const list of ['panels', 'patchWind', 'memberLoss', 'windDirections', 'ancillaries']) duplicateIds(root, list, errors);
+  for (const list of ['panels', 'patchWind', 'memberLoss', 'windDirections', 'ancillaries', 'iceWithWind', 'unbalancedIce']) duplicateIds(root, list, errors);
+  iceActionErrors(root, errors);
   ancillaryErrors(root, errors);
   windDirectionErrors(root, errors);
   panelErrors(root, errors);

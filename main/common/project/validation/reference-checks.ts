@@ -68,8 +68,10 @@ export function referenceErrors(root: unknown): string[] {
   for (const { index, entry } of entries(root, 'loadCases')) {
     const at = entryLabel(root, 'loadCases', index);
     for (const l of entries(entry, 'nodalLoads')) need(at, 'node', str(l.entry, 'node'), `nodalLoads[${l.index}]: `);
+    for (const d of entries(entry, 'displacements')) need(at, 'node', str(d.entry, 'node'), `displacements[${d.index}]: `);
     if (isRec(entry.wind)) needAll(at, 'group', entry.wind, 'groups', 'wind: ');
     if (isRec(entry.ice)) needAll(at, 'group', entry.ice, 'groups', 'ice: ');
+    if (isRec(entry.ice)) needAll(at, 'member', entry.ice, 'bareMembers', 'ice.bareMembers: ');
   }
   for (const { index, entry } of entries(root, 'groups')) needAll(entryLabel(root, 'groups', index), 'member', entry, 'members');
   for (const { index, entry } of entries(root, 'combinations')) {
@@ -79,7 +81,9 @@ export function referenceErrors(root: unknown): string[] {
   const checks = isRec(root) ? root.checks : undefined;
   if (isRec(checks)) {
     for (const g of strings(checks, 'noSlackGroups')) if (g.value !== '*') need('checks', 'group', g.value, 'noSlackGroups: ');
-    for (const s of entries(checks, 'sagLimits')) need('checks', 'group', str(s.entry, 'group'), `sagLimits[${s.index}]: `);
+    // "*" stands for every cable wherever the checks take a group (solver/checks/groups.ts).
+    const needGroup = (g: string | undefined, prefix: string): void => { if (g !== '*') need('checks', 'group', g, prefix); };
+    for (const s of entries(checks, 'sagLimits')) needGroup(str(s.entry, 'group'), `sagLimits[${s.index}]: `);
     for (const d of entries(checks, 'displacementLimits')) {
       need('checks', 'node', str(d.entry, 'node'), `displacementLimits[${d.index}]: `);
     }
@@ -88,6 +92,9 @@ export function referenceErrors(root: unknown): string[] {
       need('checks', 'node', str(t.entry, 'top'), `tiltLimits[${t.index}]: `);
     }
     needAll('checks', 'node', checks, 'upliftNodes', 'upliftNodes: ');
+    for (const r of entries(checks, 'minimumTension')) needGroup(str(r.entry, 'group'), `minimumTension[${r.index}]: `);
+    for (const r of entries(checks, 'memberDesign')) needGroup(str(r.entry, 'group'), `memberDesign[${r.index}]: `);
+    for (const t of entries(checks, 'twistLimits')) needAll('checks', 'node', t.entry, 'nodes', `twistLimits[${t.index}]: `);
   }
   const tuning = isRec(root) ? root.tuning : undefined;
   if (isRec(tuning)) {
@@ -100,6 +107,11 @@ export function referenceErrors(root: unknown): string[] {
       need('tuning', 'node', str(t.entry, 'base'), prefix);
       need('tuning', 'node', str(t.entry, 'top'), prefix);
     }
+  }
+  const schedule = isRec(root) ? root.schedule : undefined;
+  if (isRec(schedule)) {
+    needAll('schedule', 'group', schedule, 'groups', 'groups: ');
+    if (schedule.list === 'groups' && strings(schedule, 'groups').length === 0) errors.push('schedule: list "groups" needs at least one group in "groups"');
   }
   return errors;
 }

@@ -129,6 +129,7 @@ describe('schema matches solver/project/actions-types.ts', () => {
     ['PanelSpec', defs.panel], ['PressureCoefficientSpec', defs.pressureCoefficient], ['AreaLoadSpec', defs.areaLoad],
     ['PatchWindSpec', defs.patchWind], ['MemberLossSpec', defs.memberLoss],
     ['WindBasisSpec', defs.windBasis], ['WindDirectionsSpec', defs.windDirections], ['AncillarySpec', defs.ancillary],
+    ['IceWithWindSpec', defs.iceWithWind], ['UnbalancedIceSpec', defs.unbalancedIce],
   ];
   it.each(pairs)('%s: same fields, optionality and order', (name, schema) => {
     expect(schemaFields(schema)).toEqual(interfaceFields(name));

@@ -3,11 +3,11 @@
 "use strict";
 export const validate = validate10;
 export default validate10;
-const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 2","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"const":2,"x-message":"{field} must be 2"},"meta":{"$ref":"#/definitions/meta"},"nodes":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"type":"array","items":{"$ref":"#/definitions/section"}},"members":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"$ref":"#/definitions/checks"},"tuning":{"$ref":"#/definitions/tuning"},"installation":{"$ref":"#/definitions/installation"},"generators":{"type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"$ref":"#/definitions/display"},"designBasis":{"$ref":"#/definitions/designBasis"},"sequences":{"type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"$ref":"#/definitions/report"},"panels":{"type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"type":"array","items":{"$ref":"#/definitions/memberLoss"}},"windDirections":{"type":"array","items":{"$ref":"#/definitions/windDirections"}},"ancillaries":{"type":"array","items":{"$ref":"#/definitions/ancillary"}}},"definitions":{"id":{"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}},"node":{"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"},"mass":{"$ref":"#/definitions/nonNegative"}}},"springs":{"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}},"section":{"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"shape":{"enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"$ref":"#/definitions/positive"},"termination":{"enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}},"member":{"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"$ref":"#/definitions/positive"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}},"windProfile":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"},"basis":{"$ref":"#/definitions/windBasis"}}},"ice":{"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}},"loadCase":{"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"purpose":{"$ref":"#/definitions/casePurpose"},"action":{"enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}},"combination":{"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}},"sagLimit":{"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}},"tuningTarget":{"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}},"installation":{"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}},"sequenceStep":{"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}},"sequence":{"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}},"report":{"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}},"display":{"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}},"casePurpose":{"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"},"designBasis":{"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}},"panel":{"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}},"pressureCoefficient":{"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}},"areaLoad":{"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}},"memberLoss":{"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}},"windBasis":{"type":"object","additionalProperties":false,"required":["velocity","averagingPeriod"],"properties":{"velocity":{"enum":["mean","peak"]},"averagingPeriod":{"$ref":"#/definitions/positive"},"gustFactor":{"$ref":"#/definitions/positive"},"structuralFactor":{"$ref":"#/definitions/positive"}}},"windDirections":{"type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"case":{"$ref":"#/definitions/id"},"count":{"type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"type":"number"}}},"ancillary":{"type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"kind":{"enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"$ref":"#/definitions/id"},"along":{"type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"$ref":"#/definitions/id"},"from":{"type":"number"},"to":{"type":"number"}}},"dragArea":{"$ref":"#/definitions/nonNegative"},"mass":{"$ref":"#/definitions/nonNegative"},"iceDragArea":{"$ref":"#/definitions/nonNegative"},"iceMass":{"$ref":"#/definitions/nonNegative"}}}}};
-const schema154 = {"type":"object","additionalProperties":false,"properties":{"documentNumber":{"type":"string"},"revisions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"type":"string"},"date":{"type":"string"},"description":{"type":"string"},"by":{"type":"string"},"checkedBy":{"type":"string"}}}}}};
+const schema11 = {"$schema":"http://json-schema.org/draft-07/schema#","$id":"https://stayset.invalid/schema/stayset-project.v1.schema.json","title":"Stayset project file, format version 2","description":"Mirrors solver/project/types.ts. SI units (m, N, kg, Pa, 1/K, K); angles in degrees. 'x-message' holds the text shown for an error (template {field} = the quoted property path), keyed by ajv keyword or for every keyword; 'x-field-up' names the error after the parent property (for array items). Reference and uniqueness checks live in semantic-checks.ts.","type":"object","additionalProperties":false,"required":["format","version","nodes","sections","members","loadCases"],"properties":{"format":{"description":"File format marker; always \"stayset-project\".","const":"stayset-project","x-message":"{field} must be \"stayset-project\""},"version":{"description":"Format version of the file; 2 (version-1 files are migrated on load).","const":2,"x-message":"{field} must be 2"},"meta":{"description":"Project information: name, site, client, engineer, notes, reference temperature.","$ref":"#/definitions/meta"},"nodes":{"description":"Points of the model: position, supports, springs, added mass.","type":"array","minItems":1,"items":{"$ref":"#/definitions/node"}},"sections":{"description":"Cross-sections and materials the members use.","type":"array","items":{"$ref":"#/definitions/section"}},"members":{"description":"Cables, bars and beams between two nodes.","type":"array","minItems":1,"items":{"$ref":"#/definitions/member"}},"loadCases":{"description":"Load cases, each solved as its own nonlinear analysis from the pretensioned state.","type":"array","minItems":1,"items":{"$ref":"#/definitions/loadCase"}},"groups":{"description":"Named sets of members, used by loads, checks, tuning and the schedule.","type":"array","items":{"$ref":"#/definitions/group"}},"combinations":{"description":"Factored sums of load cases; each is solved as its own nonlinear case.","type":"array","items":{"$ref":"#/definitions/combination"}},"checks":{"description":"Design-check settings and limits.","$ref":"#/definitions/checks"},"tuning":{"description":"Pretension tuning: the variables the tuner may change and the targets it must meet.","$ref":"#/definitions/tuning"},"installation":{"description":"Settings of the installation data (temperature table).","$ref":"#/definitions/installation"},"generators":{"description":"Parameters of the generators that made parts of this model, for re-running them.","type":"array","items":{"$ref":"#/definitions/generator"}},"display":{"description":"Display preferences; never affect results.","$ref":"#/definitions/display"},"designBasis":{"description":"Check format (limit state or allowable) and its factors; absent = the limit-state defaults.","$ref":"#/definitions/designBasis"},"sequences":{"description":"Tensioning sequences for the crew.","type":"array","items":{"$ref":"#/definitions/sequence"}},"siteMeasurements":{"description":"Tensions and positions measured on site, for the as-built back-analysis.","type":"array","items":{"$ref":"#/definitions/siteMeasurementSet"}},"report":{"description":"Calculation report and schedule: document number and revision block.","$ref":"#/definitions/report"},"panels":{"description":"Panels (loops of nodes) that carry area loads: snow, cladding, wind pressure.","type":"array","items":{"$ref":"#/definitions/panel"}},"patchWind":{"description":"Patch wind on guyed masts: a mean-wind case plus patch cases, combined per result.","type":"array","items":{"$ref":"#/definitions/patchWind"}},"memberLoss":{"description":"Sudden loss of a member (guy rupture): one accidental case per member removed.","type":"array","items":{"$ref":"#/definitions/memberLoss"}},"windDirections":{"description":"Wind cases from N directions made from one load case with wind.","type":"array","items":{"$ref":"#/definitions/windDirections"}},"ancillaries":{"description":"Antennas, dishes, feeders, ladders, platforms: their wind drag, weight and ice.","type":"array","items":{"$ref":"#/definitions/ancillary"}},"schedule":{"description":"What the tension schedule lists: cables only (default), chosen groups, or all members.","$ref":"#/definitions/schedule"},"iceWithWind":{"description":"Ice-with-wind pairings: cases where wind acts on the iced structure, with their factor pairs.","type":"array","items":{"$ref":"#/definitions/iceWithWind"}},"unbalancedIce":{"description":"Unbalanced ice on guys: cases with some guys iced and the others bare, per guy or per level.","type":"array","items":{"$ref":"#/definitions/unbalancedIce"}}},"definitions":{"id":{"description":"An identifier: any text without leading or trailing spaces.","type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}},"idList":{"description":"A list of identifiers.","type":"array","items":{"$ref":"#/definitions/id"}},"vec3":{"description":"Three numbers [x, y, z] along the global axes (z up).","type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"},"positive":{"description":"A number greater than 0.","type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}},"nonNegative":{"description":"A number not below 0.","type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}},"absoluteTemperature":{"description":"An absolute temperature, K (above 0; 15 °C = 288.15 K).","type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}},"meta":{"description":"Project information, printed on the schedule and the report.","type":"object","additionalProperties":false,"properties":{"name":{"description":"Project name.","type":"string"},"site":{"description":"Site (location) of the structure.","type":"string"},"client":{"description":"Client.","type":"string"},"engineer":{"description":"Engineer responsible for the design.","type":"string"},"notes":{"description":"Free notes.","type":"string"},"referenceTemperature":{"description":"Design reference temperature, K: the state the model and its pretensions describe (default 288.15 K = 15 °C).","$ref":"#/definitions/absoluteTemperature"}}},"node":{"description":"A point of the model.","type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"description":"Node id, unique among nodes.","$ref":"#/definitions/id"},"at":{"description":"Position [x, y, z], m (z up).","$ref":"#/definitions/vec3"},"fixed":{"description":"Restrained directions: translations x, y, z and rotations rx, ry, rz (global axes), each at most once, written together (\"xyz\" pinned, \"xyzrxryrz\" clamped). Absent = free.","type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"description":"Elastic supports (springs to ground) of the node.","$ref":"#/definitions/springs"},"mass":{"description":"Added lumped mass at the node (equipment, antennas, fittings), kg: weighs with self-weight, vibrates in modes.","$ref":"#/definitions/nonNegative"}}},"springs":{"description":"Springs to ground: translational along x, y, z (N/m), rotational about x, y, z (N·m/rad), global axes. A spring on a restrained direction is refused.","type":"object","additionalProperties":false,"properties":{"x":{"description":"Translational stiffness along x, N/m.","$ref":"#/definitions/nonNegative"},"y":{"description":"Translational stiffness along y, N/m.","$ref":"#/definitions/nonNegative"},"z":{"description":"Translational stiffness along z, N/m.","$ref":"#/definitions/nonNegative"},"rx":{"description":"Rotational stiffness about x, N·m/rad.","$ref":"#/definitions/nonNegative"},"ry":{"description":"Rotational stiffness about y, N·m/rad.","$ref":"#/definitions/nonNegative"},"rz":{"description":"Rotational stiffness about z, N·m/rad.","$ref":"#/definitions/nonNegative"}}},"prescribedDisplacement":{"description":"Prescribed movement of a support in one load case (anchor movement, settlement); every direction given must be restrained in the node's \"fixed\".","type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"description":"Support node id.","$ref":"#/definitions/id"},"x":{"description":"Displacement along x, m.","type":"number"},"y":{"description":"Displacement along y, m.","type":"number"},"z":{"description":"Displacement along z, m.","type":"number"},"rx":{"description":"Rotation about x, rad.","type":"number"},"ry":{"description":"Rotation about y, rad.","type":"number"},"rz":{"description":"Rotation about z, rad.","type":"number"}}},"section":{"description":"A cross-section and its material.","type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"description":"Section id, unique among sections.","$ref":"#/definitions/id"},"E":{"description":"Young's modulus, Pa (for strands, the effective modulus of the strand).","type":"number"},"area":{"description":"Metallic cross-section area, m².","type":"number"},"massPerLength":{"description":"Mass per unit unstressed length, kg/m (default 0).","type":"number"},"breakingLoad":{"description":"Minimum breaking load, N; needed for the cable utilisation checks.","$ref":"#/definitions/positive"},"thermalExpansion":{"description":"Coefficient of thermal expansion, 1/K (default 0).","type":"number"},"diameter":{"description":"Outer diameter, m; used for wind and ice.","$ref":"#/definitions/positive"},"dragCoefficient":{"description":"Drag coefficient on the diameter, dimensionless (default 1.2, common practice for stranded cables).","$ref":"#/definitions/nonNegative"},"lattice":{"description":"For members that stand for a lattice mast segment: the wind model uses a lattice drag factor on solidity × face width instead of the round-section drag.","type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"description":"Face width of the lattice mast, m.","$ref":"#/definitions/positive"},"solidity":{"description":"Solidity ratio of a face (0..1), dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"description":"Force coefficient C_f on the face area (solidity × face width), dimensionless; absent = C_f(φ) from the solidity (solver/loads/lattice-force-coefficient.ts).","$ref":"#/definitions/nonNegative"},"share":{"description":"Share (0..1] of the whole-mast lattice drag this member line carries (default 1; a triangular mast modelled leg by leg gives each leg 1/3).","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"plan":{"description":"Plan of the lattice for the force coefficient C_f(φ): triangular (default) or square.","enum":["triangular","square"],"x-message":"{field} must be triangular or square"},"members":{"description":"Face members flat-sided (default, the larger C_f) or round, for C_f(φ).","enum":["flat","round"],"x-message":"{field} must be flat or round"},"memberWidth":{"description":"Mean width of the face members across the wind, for the iced solidity, m; default the section's diameter.","$ref":"#/definitions/positive"}}},"label":{"description":"Name shown in tables and on the schedule.","type":"string"},"shape":{"description":"Shape, for the buckling-curve and radius-of-gyration defaults.","enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"description":"Buckling curve of EN 1993-1-1 Table 6.2 (default from \"shape\").","enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"description":"Least radius of gyration, m (default for solid rounds: diameter / 4).","$ref":"#/definitions/positive"},"termination":{"description":"Cable end termination, for its efficiency factor k_e.","enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"description":"End-termination efficiency k_e (0..1], dimensionless; overrides \"termination\".","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"description":"Shear modulus, Pa (beams).","$ref":"#/definitions/positive"},"Iy":{"description":"Second moment of area about the local y axis, m⁴ (beams).","$ref":"#/definitions/positive"},"Iz":{"description":"Second moment of area about the local z axis, m⁴ (beams).","$ref":"#/definitions/positive"},"J":{"description":"Torsion constant, m⁴ (beams).","$ref":"#/definitions/positive"},"yieldStrength":{"description":"Yield strength, Pa (bar and beam checks).","$ref":"#/definitions/positive"}}},"member":{"description":"A cable, bar or beam between two nodes.","type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"description":"Member id, unique among members.","$ref":"#/definitions/id"},"kind":{"description":"cable: tension-only; bar: tension and compression; beam: beam-column (axial force, bending, torsion).","enum":["cable","bar","beam"]},"from":{"description":"Start node id.","$ref":"#/definitions/id"},"to":{"description":"End node id.","$ref":"#/definitions/id"},"section":{"description":"Section id.","$ref":"#/definitions/id"},"segments":{"description":"Number of elements the solver splits the member into, 1 to 10,000 (default 1).","type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"description":"Axial force at the modelled geometry, N (tension positive). Give this or \"unstressedLength\", not both.","type":"number"},"unstressedLength":{"description":"Stress-free length of the whole member, m. Give this or \"pretension\", not both.","type":"number"},"groups":{"description":"Group ids this member belongs to (in addition to the groups' member lists).","$ref":"#/definitions/idList"},"generatedBy":{"description":"Id of the generator record that made this member.","type":"string"},"terminationEfficiency":{"description":"End-termination efficiency k_e (0..1], dimensionless; overrides the section's.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"description":"Buckling length, m; overrides the member design rules.","$ref":"#/definitions/positive"},"orientation":{"description":"Beams: reference vector [x, y, z] fixing the local y axis (its part normal to the member), dimensionless.","$ref":"#/definitions/vec3"},"releases":{"description":"Beams: end releases (pins), as letters of the local rotation axes.","type":"object","additionalProperties":false,"properties":{"start":{"description":"Local rotations released at the start (\"x\" torsion, \"y\" and \"z\" bending; \"xyz\" full pin).","$ref":"#/definitions/releaseLetters"},"end":{"description":"Local rotations released at the end (\"x\" torsion, \"y\" and \"z\" bending; \"xyz\" full pin).","$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}},"releaseLetters":{"description":"Letters of the local rotation axes: x (torsion), y, z (bending), each at most once.","type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}},"nodalLoad":{"description":"A force (and moment) on a node.","type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"force":{"description":"Force [Fx, Fy, Fz], N, global axes.","$ref":"#/definitions/vec3"},"moment":{"description":"Moment [Mx, My, Mz], N·m, global axes (nodes with rotations only).","$ref":"#/definitions/vec3"}}},"windProfile":{"description":"Height profile of the mean wind speed.","type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"description":"power: V(z) = V10 · (z/10)^exponent.","const":"power"},"exponent":{"description":"Power-law exponent α, dimensionless (1/7 is common practice for open country).","$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"description":"log: V(z) = V10 · ln(z/z0) / ln(10/z0).","const":"log"},"roughnessLength":{"description":"Roughness length z0, m.","$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"description":"uniform: the same speed at every height.","const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}},"wind":{"description":"Wind on the members of a load case.","type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"description":"Direction the air flows toward, degrees, counter-clockwise from +x in the x–y plane (0 = toward +x, 90 = toward +y).","type":"number"},"speed":{"description":"Wind speed at 10 m above z = 0, m/s (a mean speed unless \"basis\" says otherwise).","$ref":"#/definitions/nonNegative"},"profile":{"description":"Height profile (default: power law with exponent 1/7).","$ref":"#/definitions/windProfile"},"airDensity":{"description":"Air density, kg/m³ (default 1.225).","$ref":"#/definitions/positive"},"groups":{"description":"Only load these groups (default: every member).","$ref":"#/definitions/idList"},"basis":{"description":"What \"speed\" stands for (mean or peak, averaging period) and the factors on the wind forces.","$ref":"#/definitions/windBasis"}}},"ice":{"description":"Radial ice on the members of a load case.","type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"description":"Radial ice thickness, m.","$ref":"#/definitions/nonNegative"},"density":{"description":"Ice density, kg/m³ (default 900, glaze ice).","$ref":"#/definitions/positive"},"groups":{"description":"Only ice these groups (default: every member with a diameter).","$ref":"#/definitions/idList"},"bareMembers":{"description":"Members left bare although in the iced groups (unbalanced ice on guys).","$ref":"#/definitions/idList"}}},"loadCase":{"description":"A load case.","type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"description":"Load case id, unique among cases and combinations.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"selfWeight":{"description":"Include the self-weight of every member (default true).","type":"boolean"},"temperatureChange":{"description":"Uniform temperature change from the reference temperature, K (default 0).","type":"number"},"nodalLoads":{"description":"Forces and moments on nodes.","type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"description":"Wind on the members.","$ref":"#/definitions/wind"},"ice":{"description":"Ice on the members.","$ref":"#/definitions/ice"},"purpose":{"description":"What the case is checked for (default serviceability).","$ref":"#/definitions/casePurpose"},"action":{"description":"Which action the case represents, for the combination builder.","enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"description":"Prescribed support movements in this case.","type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"description":"Area loads on panels.","type":"array","items":{"$ref":"#/definitions/areaLoad"}}}},"group":{"description":"A named set of members.","type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"description":"Group id, unique among groups.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables and on the schedule.","type":"string"},"members":{"description":"Member ids in the group.","$ref":"#/definitions/idList"}}},"combination":{"description":"A factored sum of load cases, solved as its own nonlinear case.","type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"description":"Combination id, unique among cases and combinations.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"factors":{"description":"Factor × load case terms; self-weight, nodal loads, wind pressure and temperature change are all scaled.","type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"description":"Load case id.","$ref":"#/definitions/id"},"factor":{"description":"Factor on that case, dimensionless.","type":"number"}}}},"purpose":{"description":"What the combination is checked for (default ultimate).","$ref":"#/definitions/casePurpose"}}},"sagLimit":{"description":"A sag limit: a fraction of the chord length, or an absolute length.","type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"description":"Largest sag as a fraction of the chord length, dimensionless (e.g. 0.02).","$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"description":"Largest sag, m.","$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}},"checks":{"description":"Design-check settings and limits.","type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"description":"Groups (or \"*\" for all cables) that must not go slack in any case.","$ref":"#/definitions/idList"},"sagLimits":{"description":"Sag limits per group.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"limit":{"description":"Sag limit of every member of the group.","$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"description":"Limits on the displacement of named nodes.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"limit":{"description":"Largest displacement, m.","$ref":"#/definitions/positive"},"direction":{"description":"\"horizontal\" (default), \"total\", or a direction vector [x, y, z] along which the displacement is measured.","oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"description":"Mast tilt limits.","type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"description":"Node at the foot of the mast.","$ref":"#/definitions/id"},"top":{"description":"Node at the top of the mast.","$ref":"#/definitions/id"},"limit":{"description":"Largest horizontal offset of top relative to base over their height difference, dimensionless ratio (e.g. 0.01).","$ref":"#/definitions/positive"}}}},"upliftNodes":{"description":"Supports at which uplift (reaction Fz < 0: the support holds the structure down) is flagged.","$ref":"#/definitions/idList"},"minimumTension":{"description":"Minimum tension of cables per group in serviceability cases.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"shareOfInstallation":{"description":"Least tension as a share of the member's installation tension, dimensionless.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"description":"Least tension as a share of the member's breaking load, dimensionless.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"description":"Design data of bars per group: role, buckling length, slenderness limit.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"role":{"description":"Role of the bars (sets the default slenderness limit).","enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"description":"Buckling length as a factor on the system length (between the end nodes), dimensionless.","$ref":"#/definitions/positive"},"bucklingLength":{"description":"Buckling length, m.","$ref":"#/definitions/positive"},"slendernessLimit":{"description":"Largest slenderness (buckling length / radius of gyration), dimensionless.","$ref":"#/definitions/positive"}}}},"twistLimits":{"description":"Limits on twist (rotation about the vertical) of node sets at one level.","type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"description":"Node ids at one level; their plan centroid is the centre of rotation.","type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"description":"Largest twist, degrees.","$ref":"#/definitions/positive"}}}}}},"tuningTarget":{"description":"A tuning target, by \"kind\".","type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"description":"sag: the sag of every member of the group stays within the limit in the case.","const":"sag"},"group":{"description":"Group id.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"},"limit":{"description":"Sag limit.","$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"description":"tensionShare: tension / breaking load at installation (the reference case) equals the share.","const":"tensionShare"},"group":{"description":"Group id.","$ref":"#/definitions/id"},"share":{"description":"Tension as a share of the breaking load, dimensionless (0..1).","$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"description":"noSlack: no member of the group is slack in the case.","const":"noSlack"},"group":{"description":"Group id.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"description":"plumb: the horizontal offset of top relative to base stays within the tolerance in the case.","const":"plumb"},"base":{"description":"Node at the foot of the mast.","$ref":"#/definitions/id"},"top":{"description":"Node at the top of the mast.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"},"tolerance":{"description":"Largest horizontal offset, m.","$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"description":"reaction: the magnitude of the support reaction at the node stays within the limit in the case.","const":"reaction"},"node":{"description":"Support node id.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"},"limit":{"description":"Largest reaction magnitude, N.","type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}},"tuning":{"description":"Pretension tuning settings.","type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"description":"Groups whose pretension the tuner may change, and how.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"by":{"description":"pretension: one force for every member of the group (N); unstressedLength: one factor on the members' unstressed lengths (dimensionless).","enum":["pretension","unstressedLength"]},"min":{"description":"Lower bound: N for \"pretension\", a factor for \"unstressedLength\".","type":"number"},"max":{"description":"Upper bound: N for \"pretension\", a factor for \"unstressedLength\".","type":"number"}}}},"targets":{"description":"Targets the tuned design must meet.","type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"description":"Record of the last tuning run (kept in the project, printed on the schedule).","$ref":"#/definitions/tuningRunRecord"}}},"tuningRunRecord":{"description":"Record of a tuning run: when, outcome, targets and variables.","type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"description":"Date and time of the run (ISO 8601).","type":"string"},"summary":{"description":"Summary of the run as printed.","type":"string"},"status":{"description":"Outcome: all targets met, some unmet, or a case did not converge.","enum":["met","unmet","notConverged"]},"targets":{"description":"Each target at the end of the run.","type":"array","items":{"type":"object","additionalProperties":false,"required":["kind","label","value","limit","unit","sense","met"],"properties":{"kind":{"description":"Target kind.","type":"string"},"label":{"description":"What the target concerns, as printed.","type":"string"},"value":{"description":"Value reached, in the target's unit (m, N, or a share: dimensionless).","type":"number"},"limit":{"description":"Limit or goal, in the target's unit (m, N, or a share: dimensionless).","type":"number"},"unit":{"description":"Unit of value and limit: m, N, or a share (dimensionless).","enum":["m","N","share"]},"sense":{"description":"atMost: value ≤ limit; equal: value = goal within tolerance.","enum":["atMost","equal"]},"met":{"description":"True when the target is met.","type":"boolean"},"governing":{"description":"Case or member that governs the value.","type":"string"}}}},"variables":{"description":"Each tuning variable: start and end values.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by","initial","final"],"properties":{"group":{"description":"Group the variable acts on.","$ref":"#/definitions/id"},"by":{"description":"pretension (N) or unstressedLength (factor).","enum":["pretension","unstressedLength"]},"initial":{"description":"Value before the run (N or factor).","type":"number"},"final":{"description":"Value after the run (N or factor).","type":"number"},"atBound":{"description":"The bound the variable ended on, if any.","enum":["lower","upper"]}}}},"diagnosis":{"description":"Why targets were not met, as printed.","type":"array","items":{"type":"string"}}}},"schedule":{"description":"What the tension schedule lists.","type":"object","additionalProperties":false,"properties":{"list":{"description":"cables (default): cables in full, other members summarised per group; groups: the chosen groups; all: every member.","enum":["cables","groups","all"],"x-message":"{field} must be one of cables, groups, all"},"groups":{"description":"Groups listed when list is \"groups\".","$ref":"#/definitions/idList"}}},"installation":{"description":"Installation data settings.","type":"object","additionalProperties":false,"properties":{"temperatures":{"description":"Installation temperatures for the table, K (default −20 °C to +40 °C in 5 °C steps).","type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}},"generator":{"description":"A record of a generator run, for re-running it.","type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"description":"Generator record id; generated parts carry it as \"generatedBy\" and as an id prefix.","$ref":"#/definitions/id"},"kind":{"description":"Which generator: guyed lattice mast, saddle net or radial net.","enum":["guyedMast","saddleNet","radialNet"]},"params":{"description":"The generator's parameters, in SI units, as its form shows them.","type":"object"}}},"sequenceStep":{"description":"One step of a tensioning sequence.","type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"description":"Members tensioned together in this step (give \"members\" or \"group\", not both).","$ref":"#/definitions/idList"},"group":{"description":"A group tensioned together in this step.","$ref":"#/definitions/id"},"setBy":{"description":"How the crew sets the members: by a force reading or by a length.","enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"description":"Name of the step on the crew sheet.","type":"string"}}},"sequence":{"description":"A tensioning sequence for the crew.","type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"description":"Sequence id.","$ref":"#/definitions/id"},"label":{"description":"Name printed on the crew sheet.","type":"string"},"temperature":{"description":"Air temperature on the day of tensioning, K (default: the reference temperature).","$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"description":"Self-weight acts during erection (default true).","type":"boolean"},"steps":{"description":"Ordered steps; members in no step are in place before the first step.","type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"description":"Restraints in place during erection only.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"fixed":{"description":"Restrained translations while in place (letters of \"xyz\").","type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"description":"Number of the step after which the restraint is released (1-based; default: after the last step).","type":"integer","minimum":1}}}},"plumb":{"description":"Mast plumb tolerance during erection.","type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"description":"Node at the foot of the mast.","$ref":"#/definitions/id"},"top":{"description":"Node at the top of the mast.","$ref":"#/definitions/id"},"limit":{"description":"Largest horizontal offset of top over height, dimensionless ratio.","$ref":"#/definitions/positive"}}},"forceTolerance":{"description":"Tolerance band on a force setting, fraction of the value (default 0.05, common practice).","$ref":"#/definitions/positive"},"lengthTolerance":{"description":"Tolerance band on a length setting, m (default 0.005, common practice).","$ref":"#/definitions/positive"}}},"siteMeasurementSet":{"description":"Readings taken on site on one occasion.","type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"description":"Measurement set id.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"date":{"description":"Date of the measurements (ISO 8601).","type":"string"},"tensions":{"description":"Tension readings.","type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"description":"Member id.","$ref":"#/definitions/id"},"method":{"description":"How the tension was read: dynamometer, vibration frequency or sag.","enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"description":"The reading: dynamometer tension at the lower end, N; frequency, Hz; largest vertical sag, m.","$ref":"#/definitions/positive"},"accuracy":{"description":"Standard uncertainty of the reading as a fraction of the value, dimensionless (0.03 = 3 %).","$ref":"#/definitions/positive"},"temperature":{"description":"Air temperature at the measurement, K.","$ref":"#/definitions/absoluteTemperature"},"mode":{"description":"Frequency readings: which mode was measured (default the taut-string mode).","enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"description":"Surveyed node positions.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"at":{"description":"Measured position [x, y, z], m.","$ref":"#/definitions/vec3"},"accuracy":{"description":"Standard uncertainty of each horizontal coordinate, m.","$ref":"#/definitions/positive"},"temperature":{"description":"Air temperature at the survey, K.","$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"description":"Acceptance band on the tension at the reference state, fraction of the design tension (default 0.1, common practice).","$ref":"#/definitions/positive"},"lengthUncertainty":{"description":"Prior uncertainty of each cable's unstressed length, m (default 0.02, common practice).","$ref":"#/definitions/positive"}}},"report":{"description":"Document data of the printed report and schedule.","type":"object","additionalProperties":false,"properties":{"documentNumber":{"description":"Document number printed in the page header.","type":"string"},"revisions":{"description":"Revision block, oldest first.","type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"description":"Revision mark, e.g. \"A\", \"P01\".","type":"string"},"date":{"description":"Date of the revision (ISO 8601).","type":"string"},"description":{"description":"What changed.","type":"string"},"by":{"description":"Prepared by.","type":"string"},"checkedBy":{"description":"Checked by.","type":"string"}}}}}},"display":{"description":"Display preferences; never affect results.","type":"object","additionalProperties":false,"properties":{"units":{"description":"Display units: SI or US customary.","enum":["SI","US"]},"deformationScale":{"description":"Scale factor on displacements in the 3D view, dimensionless.","$ref":"#/definitions/positive"}}},"casePurpose":{"description":"ultimate: strength checks with factored actions; serviceability: deformation, sag, slack and tension limits, unfactored; accidental: strength with the accidental factors; componentOnly: used inside combinations only, never checked.","enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"},"designBasis":{"description":"Check format and its factors; every default is listed with its source in the design-check report.","type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"description":"limitState: partial factors on actions and resistances; allowable: safety factors on service states.","enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"description":"Name of the basis as printed on reports.","type":"string"},"actionFactors":{"description":"Limit state: partial factors γ_F on actions (unfavourable unless named favourable), dimensionless.","type":"object","additionalProperties":false,"properties":{"permanent":{"description":"γ_G on unfavourable permanent actions, dimensionless.","$ref":"#/definitions/positive"},"permanentFavourable":{"description":"γ_G on favourable permanent actions, dimensionless.","$ref":"#/definitions/positive"},"prestress":{"description":"Factor on the pretension; only 1 is supported (every case starts from the installed pretension).","$ref":"#/definitions/positive"},"wind":{"description":"γ_Q on wind, dimensionless.","$ref":"#/definitions/positive"},"ice":{"description":"γ_Q on ice, dimensionless.","$ref":"#/definitions/positive"},"temperature":{"description":"γ_Q on temperature, dimensionless.","$ref":"#/definitions/positive"},"accidental":{"description":"Factor on accidental actions, dimensionless.","$ref":"#/definitions/positive"}}},"combinationFactors":{"description":"Combination factors ψ0 of accompanying variable actions (both formats), dimensionless.","type":"object","additionalProperties":false,"properties":{"wind":{"description":"ψ0 of wind, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"description":"ψ0 of ice, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"description":"ψ0 of temperature, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"description":"Limit state: cable resistance F_Rd = k_e · MBL / (breakingFactor · γ_R); serviceability T ≤ serviceabilityShare · k_e · MBL.","type":"object","additionalProperties":false,"properties":{"breakingFactor":{"description":"Factor on the minimum breaking load in F_Rd, dimensionless.","$ref":"#/definitions/positive"},"partialFactor":{"description":"Partial factor γ_R of the cable resistance, dimensionless.","$ref":"#/definitions/positive"},"serviceabilityShare":{"description":"Largest service tension as a share of k_e · MBL, dimensionless.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"description":"Limit state: partial factors of steel members, dimensionless.","type":"object","additionalProperties":false,"properties":{"gammaM0":{"description":"γ_M0: resistance of cross-sections (yield), dimensionless.","$ref":"#/definitions/positive"},"gammaM1":{"description":"γ_M1: resistance of members to instability (buckling), dimensionless.","$ref":"#/definitions/positive"}}},"allowable":{"description":"Allowable format: safety factors, dimensionless.","type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"description":"Cable tension ≤ k_e · MBL / cableSafetyFactor.","type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"description":"Member force ≤ resistance (yield or χ · yield) / memberSafetyFactor.","type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}},"panel":{"description":"A loop of three or more nodes bounding a piece of surface that carries area loads; its normal follows the right-hand rule on the node order.","type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"description":"Panel id.","$ref":"#/definitions/id"},"nodes":{"description":"Corner node ids in order around the loop (3 or more, no repeats).","type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"description":"Region name: pressure coefficients may be given per region instead of per panel.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"}}},"pressureCoefficient":{"description":"Pressure coefficient of the panels of one region or of one panel.","type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"description":"A panel region or a panel id.","$ref":"#/definitions/id"},"cp":{"description":"Net pressure coefficient c_p, dimensionless.","type":"number"}}},"areaLoad":{"description":"An area load on panels.","type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"description":"snow: per plan area, downward; cladding: weight per true (sloping) area, downward; pressure: net pressure normal to the deformed panel (a follower load).","enum":["snow","cladding","pressure"]},"value":{"description":"Load per area, Pa; for pressure, positive acts against the panel normal, negative is suction.","type":"number"},"panels":{"description":"Only these panels or regions (default: every panel).","$ref":"#/definitions/idList"},"coefficients":{"description":"Pressure only: c_p per region or panel id (a panel id wins over its region; default c_p = 1).","type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}},"patchWind":{"description":"Patch wind on a guyed mast (EN 1993-3-1 Annex B, B.4.3.2): S = S_m ± √Σ(S_i − S_m)² per result.","type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"description":"Patch wind id; its cases are \"<id> / patch k\", \"<id> max\" and \"<id> min\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"meanCase":{"description":"Load case with the mean wind on the whole structure.","$ref":"#/definitions/id"},"patchFactor":{"description":"Wind force inside a patch as a multiple of the mean wind force there (> 1), dimensionless.","type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"description":"Height ranges of the patches (default: the spans between guy levels).","type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"description":"Bottom of the patch, m above z = 0.","type":"number"},"to":{"description":"Top of the patch, m above z = 0.","type":"number"}}}}}},"memberLoss":{"description":"Sudden loss of members: from the solved state of a case, each member is removed in turn and its released force amplified.","type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"description":"Member loss id; its cases are \"<id> / <member>\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"fromCase":{"description":"Load case or combination whose solved state the loss starts from.","$ref":"#/definitions/id"},"members":{"description":"Members removed, one case each.","$ref":"#/definitions/idList"},"group":{"description":"Or every member of this group in turn.","$ref":"#/definitions/id"},"dynamicFactor":{"description":"Dynamic amplification factor on the released force (1 = static, at most 2), dimensionless; default from dampingRatio.","type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"description":"Critical damping ratio ζ (0 ≤ ζ < 1) for the default factor 1 + exp(−πζ/√(1−ζ²)), dimensionless (default 0: factor 2).","type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"},"purpose":{"description":"What the loss cases are checked for; default accidental (the accidental factors of the design basis).","enum":["accidental","ultimate","serviceability"],"x-message":"{field} must be one of accidental, ultimate, serviceability"}}},"windBasis":{"description":"What a wind speed stands for; velocity pressure q = ½ ρ V(z)², wind forces × gustFactor × structuralFactor.","type":"object","additionalProperties":false,"required":["velocity","averagingPeriod"],"properties":{"velocity":{"description":"mean: \"speed\" is a mean wind speed; peak: a gust (peak) speed.","enum":["mean","peak"]},"averagingPeriod":{"description":"Averaging period of the speed, s (600 = 10-minute mean, 3 = 3-second gust).","$ref":"#/definitions/positive"},"gustFactor":{"description":"Factor on the forces from a mean-velocity pressure to a peak pressure, dimensionless (default 1).","$ref":"#/definitions/positive"},"structuralFactor":{"description":"Structural factor (e.g. c_s c_d of EN 1991-1-4 §6) on the forces, dimensionless (default 1).","$ref":"#/definitions/positive"}}},"windDirections":{"description":"Wind from \"count\" directions: the case is solved once per direction azimuth + k · 360°/count.","type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"description":"Id; its cases are \"<id> <direction>°\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"case":{"description":"Load case with wind whose direction is replaced.","$ref":"#/definitions/id"},"count":{"description":"Number of directions (1 to 72).","type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"description":"First direction, degrees, same convention as the wind direction (default 0).","type":"number"}}},"ancillary":{"description":"An item on the structure: point items hang on a node; line items run along a group between two heights.","type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"description":"Ancillary id.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"kind":{"description":"What the item is: antenna, dish, feeder, ladder, platform or other.","enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"description":"Point item: the node it is attached at.","$ref":"#/definitions/id"},"along":{"description":"Line item: the group it runs along and its height range.","type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"from":{"description":"Bottom of the run, m above z = 0.","type":"number"},"to":{"description":"Top of the run, m above z = 0.","type":"number"}}},"dragArea":{"description":"Drag area C_f · A: m² for a point item, m² per metre of height for a line item.","$ref":"#/definitions/nonNegative"},"mass":{"description":"Mass: kg for a point item, kg per metre of height for a line item.","$ref":"#/definitions/nonNegative"},"iceDragArea":{"description":"Drag area added per metre of radial ice, m²/m (line items per metre of height too); default 0: ice ignored.","$ref":"#/definitions/nonNegative"},"iceMass":{"description":"Ice mass per metre of radial ice, kg/m (line items per metre of height too); default 0: ice ignored.","$ref":"#/definitions/nonNegative"},"iceBehaviour":{"description":"How ice forms on the item: perThickness (default; iceDragArea and iceMass per metre of ice), coat (a uniform coat on a round body of width coatWidth), none (shielded).","enum":["perThickness","coat","none"],"x-message":"{field} must be one of perThickness, coat, none"},"coatWidth":{"description":"coat: outer width of the iced body, m.","$ref":"#/definitions/positive"},"coatLength":{"description":"coat, point items: length of the iced body, m.","$ref":"#/definitions/positive"}}},"iceWithWind":{"description":"Ice with wind: cases with the ice of one load case and the wind of another, each factor pair one case (wind acts on the iced areas).","type":"object","additionalProperties":false,"required":["id","iceCase","windCase"],"properties":{"id":{"description":"Pairing id; its cases are named after it.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"iceCase":{"description":"Load case with ice (its own wind, if any, is replaced).","$ref":"#/definitions/id"},"windCase":{"description":"Load case whose wind is taken.","$ref":"#/definitions/id"},"pairs":{"description":"Factor pairs (ice, wind), one case each; default (1, 0.5) and (0.5, 1) — common practice placeholders: set the factors of the code in force.","type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["ice","wind"],"properties":{"ice":{"description":"Factor on the ice (thickness and mass), dimensionless.","$ref":"#/definitions/nonNegative"},"wind":{"description":"Factor on the wind force, dimensionless.","$ref":"#/definitions/nonNegative"}}}},"purpose":{"description":"What the cases are checked for (default: the purpose of iceCase).","enum":["ultimate","serviceability","accidental"],"x-message":"{field} must be one of ultimate, serviceability, accidental"}}},"unbalancedIce":{"description":"Unbalanced ice on guys: copies of an iced load case with the guys of a group iced on some and bare on the others, each unit in turn.","type":"object","additionalProperties":false,"required":["id","case","group"],"properties":{"id":{"description":"Id; its cases are \"<id> / <guy> bare\", \"<id> / level <z> m iced\", ….","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"case":{"description":"Load case with ice.","$ref":"#/definitions/id"},"group":{"description":"Group of the guys.","$ref":"#/definitions/id"},"by":{"description":"Unit taken in turn: a single guy (default) or a guy level (the guys whose upper end is at one height).","enum":["guy","level"],"x-message":"{field} must be guy or level"},"pattern":{"description":"eachBare (default): that unit bare, the rest iced; eachIced: that unit iced only.","enum":["eachBare","eachIced"],"x-message":"{field} must be eachBare or eachIced"}}}}};
+const schema157 = {"description":"Document data of the printed report and schedule.","type":"object","additionalProperties":false,"properties":{"documentNumber":{"description":"Document number printed in the page header.","type":"string"},"revisions":{"description":"Revision block, oldest first.","type":"array","items":{"type":"object","additionalProperties":false,"required":["revision","date","description"],"properties":{"revision":{"description":"Revision mark, e.g. \"A\", \"P01\".","type":"string"},"date":{"description":"Date of the revision (ISO 8601).","type":"string"},"description":{"description":"What changed.","type":"string"},"by":{"description":"Prepared by.","type":"string"},"checkedBy":{"description":"Checked by.","type":"string"}}}}}};
 const func2 = Object.prototype.hasOwnProperty;
-const schema12 = {"type":"object","additionalProperties":false,"properties":{"name":{"type":"string"},"site":{"type":"string"},"client":{"type":"string"},"engineer":{"type":"string"},"notes":{"type":"string"},"referenceTemperature":{"$ref":"#/definitions/absoluteTemperature"}}};
-const schema13 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}};
+const schema12 = {"description":"Project information, printed on the schedule and the report.","type":"object","additionalProperties":false,"properties":{"name":{"description":"Project name.","type":"string"},"site":{"description":"Site (location) of the structure.","type":"string"},"client":{"description":"Client.","type":"string"},"engineer":{"description":"Engineer responsible for the design.","type":"string"},"notes":{"description":"Free notes.","type":"string"},"referenceTemperature":{"description":"Design reference temperature, K: the state the model and its pretensions describe (default 288.15 K = 15 °C).","$ref":"#/definitions/absoluteTemperature"}}};
+const schema13 = {"description":"An absolute temperature, K (above 0; 15 °C = 288.15 K).","type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be an absolute temperature in K (above 0)"}};
 
 function validate11(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -130,13 +130,13 @@ validate11.errors = vErrors;
 return errors === 0;
 }
 
-const schema14 = {"type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"fixed":{"type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"$ref":"#/definitions/springs"},"mass":{"$ref":"#/definitions/nonNegative"}}};
-const schema15 = {"type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}};
-const schema16 = {"type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"};
-const schema18 = {"type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}};
+const schema14 = {"description":"A point of the model.","type":"object","additionalProperties":false,"required":["id","at"],"properties":{"id":{"description":"Node id, unique among nodes.","$ref":"#/definitions/id"},"at":{"description":"Position [x, y, z], m (z up).","$ref":"#/definitions/vec3"},"fixed":{"description":"Restrained directions: translations x, y, z and rotations rx, ry, rz (global axes), each at most once, written together (\"xyz\" pinned, \"xyzrxryrz\" clamped). Absent = free.","type":"string","pattern":"^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$","x-message":{"pattern":"{field} must be made of the letters x, y, z (translations) and rx, ry, rz (rotations), each at most once"}},"springs":{"description":"Elastic supports (springs to ground) of the node.","$ref":"#/definitions/springs"},"mass":{"description":"Added lumped mass at the node (equipment, antennas, fittings), kg: weighs with self-weight, vibrates in modes.","$ref":"#/definitions/nonNegative"}}};
+const schema15 = {"description":"An identifier: any text without leading or trailing spaces.","type":"string","pattern":"^\\S(.*\\S)?$","x-message":{"pattern":"{field} must not be empty or start or end with spaces"}};
+const schema16 = {"description":"Three numbers [x, y, z] along the global axes (z up).","type":"array","minItems":3,"maxItems":3,"items":{"type":"number","x-message":"{field} must be 3 finite numbers","x-field-up":1},"x-message":"{field} must be 3 finite numbers"};
+const schema18 = {"description":"A number not below 0.","type":"number","minimum":0,"x-message":{"minimum":"{field} must not be negative"}};
 const pattern0 = new RegExp("^\\S(.*\\S)?$", "u");
 const pattern1 = new RegExp("^(?!.*(?:^|[^r])([xyz])(?:.*[^r]|)\\1)(?!.*(r[xyz]).*\\2)(?:r?[xyz])*$", "u");
-const schema17 = {"type":"object","additionalProperties":false,"properties":{"x":{"$ref":"#/definitions/nonNegative"},"y":{"$ref":"#/definitions/nonNegative"},"z":{"$ref":"#/definitions/nonNegative"},"rx":{"$ref":"#/definitions/nonNegative"},"ry":{"$ref":"#/definitions/nonNegative"},"rz":{"$ref":"#/definitions/nonNegative"}}};
+const schema17 = {"description":"Springs to ground: translational along x, y, z (N/m), rotational about x, y, z (N·m/rad), global axes. A spring on a restrained direction is refused.","type":"object","additionalProperties":false,"properties":{"x":{"description":"Translational stiffness along x, N/m.","$ref":"#/definitions/nonNegative"},"y":{"description":"Translational stiffness along y, N/m.","$ref":"#/definitions/nonNegative"},"z":{"description":"Translational stiffness along z, N/m.","$ref":"#/definitions/nonNegative"},"rx":{"description":"Rotational stiffness about x, N·m/rad.","$ref":"#/definitions/nonNegative"},"ry":{"description":"Rotational stiffness about y, N·m/rad.","$ref":"#/definitions/nonNegative"},"rz":{"description":"Rotational stiffness about z, N·m/rad.","$ref":"#/definitions/nonNegative"}}};
 
 function validate14(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -501,8 +501,8 @@ validate13.errors = vErrors;
 return errors === 0;
 }
 
-const schema25 = {"type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"$ref":"#/definitions/id"},"E":{"type":"number"},"area":{"type":"number"},"massPerLength":{"type":"number"},"breakingLoad":{"$ref":"#/definitions/positive"},"thermalExpansion":{"type":"number"},"diameter":{"$ref":"#/definitions/positive"},"dragCoefficient":{"$ref":"#/definitions/nonNegative"},"lattice":{"type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"$ref":"#/definitions/positive"},"solidity":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"$ref":"#/definitions/nonNegative"},"share":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 0 and at most 1","maximum":"{field} must be greater than 0 and at most 1"}}}},"label":{"type":"string"},"shape":{"enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"$ref":"#/definitions/positive"},"termination":{"enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"$ref":"#/definitions/positive"},"Iy":{"$ref":"#/definitions/positive"},"Iz":{"$ref":"#/definitions/positive"},"J":{"$ref":"#/definitions/positive"},"yieldStrength":{"$ref":"#/definitions/positive"}}};
-const schema27 = {"type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}};
+const schema25 = {"description":"A cross-section and its material.","type":"object","additionalProperties":false,"required":["id","E","area"],"properties":{"id":{"description":"Section id, unique among sections.","$ref":"#/definitions/id"},"E":{"description":"Young's modulus, Pa (for strands, the effective modulus of the strand).","type":"number"},"area":{"description":"Metallic cross-section area, m².","type":"number"},"massPerLength":{"description":"Mass per unit unstressed length, kg/m (default 0).","type":"number"},"breakingLoad":{"description":"Minimum breaking load, N; needed for the cable utilisation checks.","$ref":"#/definitions/positive"},"thermalExpansion":{"description":"Coefficient of thermal expansion, 1/K (default 0).","type":"number"},"diameter":{"description":"Outer diameter, m; used for wind and ice.","$ref":"#/definitions/positive"},"dragCoefficient":{"description":"Drag coefficient on the diameter, dimensionless (default 1.2, common practice for stranded cables).","$ref":"#/definitions/nonNegative"},"lattice":{"description":"For members that stand for a lattice mast segment: the wind model uses a lattice drag factor on solidity × face width instead of the round-section drag.","type":"object","additionalProperties":false,"required":["faceWidth","solidity"],"properties":{"faceWidth":{"description":"Face width of the lattice mast, m.","$ref":"#/definitions/positive"},"solidity":{"description":"Solidity ratio of a face (0..1), dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"dragFactor":{"description":"Force coefficient C_f on the face area (solidity × face width), dimensionless; absent = C_f(φ) from the solidity (solver/loads/lattice-force-coefficient.ts).","$ref":"#/definitions/nonNegative"},"share":{"description":"Share (0..1] of the whole-mast lattice drag this member line carries (default 1; a triangular mast modelled leg by leg gives each leg 1/3).","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"plan":{"description":"Plan of the lattice for the force coefficient C_f(φ): triangular (default) or square.","enum":["triangular","square"],"x-message":"{field} must be triangular or square"},"members":{"description":"Face members flat-sided (default, the larger C_f) or round, for C_f(φ).","enum":["flat","round"],"x-message":"{field} must be flat or round"},"memberWidth":{"description":"Mean width of the face members across the wind, for the iced solidity, m; default the section's diameter.","$ref":"#/definitions/positive"}}},"label":{"description":"Name shown in tables and on the schedule.","type":"string"},"shape":{"description":"Shape, for the buckling-curve and radius-of-gyration defaults.","enum":["solidRound","tubeHotFinished","tubeColdFormed","angle","rolledI","other"],"x-message":"{field} must be one of solidRound, tubeHotFinished, tubeColdFormed, angle, rolledI, other"},"bucklingCurve":{"description":"Buckling curve of EN 1993-1-1 Table 6.2 (default from \"shape\").","enum":["a0","a","b","c","d"],"x-message":"{field} must be one of a0, a, b, c, d"},"radiusOfGyration":{"description":"Least radius of gyration, m (default for solid rounds: diameter / 4).","$ref":"#/definitions/positive"},"termination":{"description":"Cable end termination, for its efficiency factor k_e.","enum":["socketMetal","socketResin","swaged","wedgeSocket","clips","preformedGrip"],"x-message":"{field} must be one of socketMetal, socketResin, swaged, wedgeSocket, clips, preformedGrip"},"terminationEfficiency":{"description":"End-termination efficiency k_e (0..1], dimensionless; overrides \"termination\".","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"G":{"description":"Shear modulus, Pa (beams).","$ref":"#/definitions/positive"},"Iy":{"description":"Second moment of area about the local y axis, m⁴ (beams).","$ref":"#/definitions/positive"},"Iz":{"description":"Second moment of area about the local z axis, m⁴ (beams).","$ref":"#/definitions/positive"},"J":{"description":"Torsion constant, m⁴ (beams).","$ref":"#/definitions/positive"},"yieldStrength":{"description":"Yield strength, Pa (bar and beam checks).","$ref":"#/definitions/positive"}}};
+const schema27 = {"description":"A number greater than 0.","type":"number","exclusiveMinimum":0,"x-message":{"exclusiveMinimum":"{field} must be positive"}};
 
 function validate17(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -726,7 +726,7 @@ vErrors.push(err17);
 errors++;
 }
 for(const key1 in data8){
-if(!((((key1 === "faceWidth") || (key1 === "solidity")) || (key1 === "dragFactor")) || (key1 === "share"))){
+if(!(((((((key1 === "faceWidth") || (key1 === "solidity")) || (key1 === "dragFactor")) || (key1 === "share")) || (key1 === "plan")) || (key1 === "members")) || (key1 === "memberWidth"))){
 const err18 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema25.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err18];
@@ -835,8 +835,8 @@ vErrors.push(err26);
 }
 errors++;
 }
-if(data12 <= 0 || isNaN(data12)){
-const err27 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema25.properties.lattice.properties.share,data:data12};
+if(data12 < 0 || isNaN(data12)){
+const err27 = {instancePath:instancePath+"/lattice/share",schemaPath:"#/properties/lattice/properties/share/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema25.properties.lattice.properties.share,data:data12};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -857,9 +857,10 @@ vErrors.push(err28);
 errors++;
 }
 }
-}
-else {
-const err29 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema25.properties.lattice.type,parentSchema:schema25.properties.lattice,data:data8};
+if(data8.plan !== undefined){
+let data13 = data8.plan;
+if(!((data13 === "triangular") || (data13 === "square"))){
+const err29 = {instancePath:instancePath+"/lattice/plan",schemaPath:"#/properties/lattice/properties/plan/enum",keyword:"enum",params:{allowedValues: schema25.properties.lattice.properties.plan.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.lattice.properties.plan.enum,parentSchema:schema25.properties.lattice.properties.plan,data:data13};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -869,10 +870,10 @@ vErrors.push(err29);
 errors++;
 }
 }
-if(data.label !== undefined){
-let data13 = data.label;
-if(typeof data13 !== "string"){
-const err30 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema25.properties.label.type,parentSchema:schema25.properties.label,data:data13};
+if(data8.members !== undefined){
+let data14 = data8.members;
+if(!((data14 === "flat") || (data14 === "round"))){
+const err30 = {instancePath:instancePath+"/lattice/members",schemaPath:"#/properties/lattice/properties/members/enum",keyword:"enum",params:{allowedValues: schema25.properties.lattice.properties.members.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.lattice.properties.members.enum,parentSchema:schema25.properties.lattice.properties.members,data:data14};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -882,10 +883,11 @@ vErrors.push(err30);
 errors++;
 }
 }
-if(data.shape !== undefined){
-let data14 = data.shape;
-if(!((((((data14 === "solidRound") || (data14 === "tubeHotFinished")) || (data14 === "tubeColdFormed")) || (data14 === "angle")) || (data14 === "rolledI")) || (data14 === "other"))){
-const err31 = {instancePath:instancePath+"/shape",schemaPath:"#/properties/shape/enum",keyword:"enum",params:{allowedValues: schema25.properties.shape.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.shape.enum,parentSchema:schema25.properties.shape,data:data14};
+if(data8.memberWidth !== undefined){
+let data15 = data8.memberWidth;
+if((typeof data15 == "number") && (isFinite(data15))){
+if(data15 <= 0 || isNaN(data15)){
+const err31 = {instancePath:instancePath+"/lattice/memberWidth",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data15};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -895,10 +897,8 @@ vErrors.push(err31);
 errors++;
 }
 }
-if(data.bucklingCurve !== undefined){
-let data15 = data.bucklingCurve;
-if(!(((((data15 === "a0") || (data15 === "a")) || (data15 === "b")) || (data15 === "c")) || (data15 === "d"))){
-const err32 = {instancePath:instancePath+"/bucklingCurve",schemaPath:"#/properties/bucklingCurve/enum",keyword:"enum",params:{allowedValues: schema25.properties.bucklingCurve.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.bucklingCurve.enum,parentSchema:schema25.properties.bucklingCurve,data:data15};
+else {
+const err32 = {instancePath:instancePath+"/lattice/memberWidth",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data15};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -908,11 +908,9 @@ vErrors.push(err32);
 errors++;
 }
 }
-if(data.radiusOfGyration !== undefined){
-let data16 = data.radiusOfGyration;
-if((typeof data16 == "number") && (isFinite(data16))){
-if(data16 <= 0 || isNaN(data16)){
-const err33 = {instancePath:instancePath+"/radiusOfGyration",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data16};
+}
+else {
+const err33 = {instancePath:instancePath+"/lattice",schemaPath:"#/properties/lattice/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema25.properties.lattice.type,parentSchema:schema25.properties.lattice,data:data8};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -922,8 +920,10 @@ vErrors.push(err33);
 errors++;
 }
 }
-else {
-const err34 = {instancePath:instancePath+"/radiusOfGyration",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data16};
+if(data.label !== undefined){
+let data16 = data.label;
+if(typeof data16 !== "string"){
+const err34 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema25.properties.label.type,parentSchema:schema25.properties.label,data:data16};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -933,10 +933,10 @@ vErrors.push(err34);
 errors++;
 }
 }
-if(data.termination !== undefined){
-let data17 = data.termination;
-if(!((((((data17 === "socketMetal") || (data17 === "socketResin")) || (data17 === "swaged")) || (data17 === "wedgeSocket")) || (data17 === "clips")) || (data17 === "preformedGrip"))){
-const err35 = {instancePath:instancePath+"/termination",schemaPath:"#/properties/termination/enum",keyword:"enum",params:{allowedValues: schema25.properties.termination.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.termination.enum,parentSchema:schema25.properties.termination,data:data17};
+if(data.shape !== undefined){
+let data17 = data.shape;
+if(!((((((data17 === "solidRound") || (data17 === "tubeHotFinished")) || (data17 === "tubeColdFormed")) || (data17 === "angle")) || (data17 === "rolledI")) || (data17 === "other"))){
+const err35 = {instancePath:instancePath+"/shape",schemaPath:"#/properties/shape/enum",keyword:"enum",params:{allowedValues: schema25.properties.shape.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.shape.enum,parentSchema:schema25.properties.shape,data:data17};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -946,11 +946,10 @@ vErrors.push(err35);
 errors++;
 }
 }
-if(data.terminationEfficiency !== undefined){
-let data18 = data.terminationEfficiency;
-if((typeof data18 == "number") && (isFinite(data18))){
-if(data18 > 1 || isNaN(data18)){
-const err36 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema25.properties.terminationEfficiency,data:data18};
+if(data.bucklingCurve !== undefined){
+let data18 = data.bucklingCurve;
+if(!(((((data18 === "a0") || (data18 === "a")) || (data18 === "b")) || (data18 === "c")) || (data18 === "d"))){
+const err36 = {instancePath:instancePath+"/bucklingCurve",schemaPath:"#/properties/bucklingCurve/enum",keyword:"enum",params:{allowedValues: schema25.properties.bucklingCurve.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.bucklingCurve.enum,parentSchema:schema25.properties.bucklingCurve,data:data18};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -959,8 +958,12 @@ vErrors.push(err36);
 }
 errors++;
 }
-if(data18 <= 0 || isNaN(data18)){
-const err37 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema25.properties.terminationEfficiency,data:data18};
+}
+if(data.radiusOfGyration !== undefined){
+let data19 = data.radiusOfGyration;
+if((typeof data19 == "number") && (isFinite(data19))){
+if(data19 <= 0 || isNaN(data19)){
+const err37 = {instancePath:instancePath+"/radiusOfGyration",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data19};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -971,7 +974,7 @@ errors++;
 }
 }
 else {
-const err38 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.terminationEfficiency.type,parentSchema:schema25.properties.terminationEfficiency,data:data18};
+const err38 = {instancePath:instancePath+"/radiusOfGyration",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data19};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -981,11 +984,10 @@ vErrors.push(err38);
 errors++;
 }
 }
-if(data.G !== undefined){
-let data19 = data.G;
-if((typeof data19 == "number") && (isFinite(data19))){
-if(data19 <= 0 || isNaN(data19)){
-const err39 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data19};
+if(data.termination !== undefined){
+let data20 = data.termination;
+if(!((((((data20 === "socketMetal") || (data20 === "socketResin")) || (data20 === "swaged")) || (data20 === "wedgeSocket")) || (data20 === "clips")) || (data20 === "preformedGrip"))){
+const err39 = {instancePath:instancePath+"/termination",schemaPath:"#/properties/termination/enum",keyword:"enum",params:{allowedValues: schema25.properties.termination.enum},message:"must be equal to one of the allowed values",schema:schema25.properties.termination.enum,parentSchema:schema25.properties.termination,data:data20};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -995,8 +997,11 @@ vErrors.push(err39);
 errors++;
 }
 }
-else {
-const err40 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data19};
+if(data.terminationEfficiency !== undefined){
+let data21 = data.terminationEfficiency;
+if((typeof data21 == "number") && (isFinite(data21))){
+if(data21 > 1 || isNaN(data21)){
+const err40 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema25.properties.terminationEfficiency,data:data21};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -1005,12 +1010,8 @@ vErrors.push(err40);
 }
 errors++;
 }
-}
-if(data.Iy !== undefined){
-let data20 = data.Iy;
-if((typeof data20 == "number") && (isFinite(data20))){
-if(data20 <= 0 || isNaN(data20)){
-const err41 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data20};
+if(data21 <= 0 || isNaN(data21)){
+const err41 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema25.properties.terminationEfficiency,data:data21};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -1021,7 +1022,7 @@ errors++;
 }
 }
 else {
-const err42 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data20};
+const err42 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema25.properties.terminationEfficiency.type,parentSchema:schema25.properties.terminationEfficiency,data:data21};
 if(vErrors === null){
 vErrors = [err42];
 }
@@ -1031,11 +1032,11 @@ vErrors.push(err42);
 errors++;
 }
 }
-if(data.Iz !== undefined){
-let data21 = data.Iz;
-if((typeof data21 == "number") && (isFinite(data21))){
-if(data21 <= 0 || isNaN(data21)){
-const err43 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data21};
+if(data.G !== undefined){
+let data22 = data.G;
+if((typeof data22 == "number") && (isFinite(data22))){
+if(data22 <= 0 || isNaN(data22)){
+const err43 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data22};
 if(vErrors === null){
 vErrors = [err43];
 }
@@ -1046,7 +1047,7 @@ errors++;
 }
 }
 else {
-const err44 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data21};
+const err44 = {instancePath:instancePath+"/G",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data22};
 if(vErrors === null){
 vErrors = [err44];
 }
@@ -1056,11 +1057,11 @@ vErrors.push(err44);
 errors++;
 }
 }
-if(data.J !== undefined){
-let data22 = data.J;
-if((typeof data22 == "number") && (isFinite(data22))){
-if(data22 <= 0 || isNaN(data22)){
-const err45 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data22};
+if(data.Iy !== undefined){
+let data23 = data.Iy;
+if((typeof data23 == "number") && (isFinite(data23))){
+if(data23 <= 0 || isNaN(data23)){
+const err45 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data23};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -1071,7 +1072,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data22};
+const err46 = {instancePath:instancePath+"/Iy",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data23};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -1081,11 +1082,11 @@ vErrors.push(err46);
 errors++;
 }
 }
-if(data.yieldStrength !== undefined){
-let data23 = data.yieldStrength;
-if((typeof data23 == "number") && (isFinite(data23))){
-if(data23 <= 0 || isNaN(data23)){
-const err47 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data23};
+if(data.Iz !== undefined){
+let data24 = data.Iz;
+if((typeof data24 == "number") && (isFinite(data24))){
+if(data24 <= 0 || isNaN(data24)){
+const err47 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data24};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -1096,7 +1097,7 @@ errors++;
 }
 }
 else {
-const err48 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data23};
+const err48 = {instancePath:instancePath+"/Iz",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data24};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -1106,9 +1107,11 @@ vErrors.push(err48);
 errors++;
 }
 }
-}
-else {
-const err49 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema25.type,parentSchema:schema25,data};
+if(data.J !== undefined){
+let data25 = data.J;
+if((typeof data25 == "number") && (isFinite(data25))){
+if(data25 <= 0 || isNaN(data25)){
+const err49 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data25};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -1117,14 +1120,62 @@ vErrors.push(err49);
 }
 errors++;
 }
+}
+else {
+const err50 = {instancePath:instancePath+"/J",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data25};
+if(vErrors === null){
+vErrors = [err50];
+}
+else {
+vErrors.push(err50);
+}
+errors++;
+}
+}
+if(data.yieldStrength !== undefined){
+let data26 = data.yieldStrength;
+if((typeof data26 == "number") && (isFinite(data26))){
+if(data26 <= 0 || isNaN(data26)){
+const err51 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data26};
+if(vErrors === null){
+vErrors = [err51];
+}
+else {
+vErrors.push(err51);
+}
+errors++;
+}
+}
+else {
+const err52 = {instancePath:instancePath+"/yieldStrength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data26};
+if(vErrors === null){
+vErrors = [err52];
+}
+else {
+vErrors.push(err52);
+}
+errors++;
+}
+}
+}
+else {
+const err53 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema25.type,parentSchema:schema25,data};
+if(vErrors === null){
+vErrors = [err53];
+}
+else {
+vErrors.push(err53);
+}
+errors++;
+}
 validate17.errors = vErrors;
 return errors === 0;
 }
 
-const schema38 = {"type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["cable","bar","beam"]},"from":{"$ref":"#/definitions/id"},"to":{"$ref":"#/definitions/id"},"section":{"$ref":"#/definitions/id"},"segments":{"type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"type":"number"},"unstressedLength":{"type":"number"},"groups":{"$ref":"#/definitions/idList"},"generatedBy":{"type":"string"},"terminationEfficiency":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"$ref":"#/definitions/positive"},"orientation":{"$ref":"#/definitions/vec3"},"releases":{"type":"object","additionalProperties":false,"properties":{"start":{"$ref":"#/definitions/releaseLetters"},"end":{"$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
-const schema47 = {"type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}};
+const schema39 = {"description":"A cable, bar or beam between two nodes.","type":"object","additionalProperties":false,"required":["id","kind","from","to","section"],"properties":{"id":{"description":"Member id, unique among members.","$ref":"#/definitions/id"},"kind":{"description":"cable: tension-only; bar: tension and compression; beam: beam-column (axial force, bending, torsion).","enum":["cable","bar","beam"]},"from":{"description":"Start node id.","$ref":"#/definitions/id"},"to":{"description":"End node id.","$ref":"#/definitions/id"},"section":{"description":"Section id.","$ref":"#/definitions/id"},"segments":{"description":"Number of elements the solver splits the member into, 1 to 10,000 (default 1).","type":"integer","minimum":1,"maximum":10000,"x-message":{"type":"{field} must be a whole number of at least 1","minimum":"{field} must be a whole number of at least 1","maximum":"{field} must be at most 10000 (more segments do not change the result in a useful way and may exhaust memory)"}},"pretension":{"description":"Axial force at the modelled geometry, N (tension positive). Give this or \"unstressedLength\", not both.","type":"number"},"unstressedLength":{"description":"Stress-free length of the whole member, m. Give this or \"pretension\", not both.","type":"number"},"groups":{"description":"Group ids this member belongs to (in addition to the groups' member lists).","$ref":"#/definitions/idList"},"generatedBy":{"description":"Id of the generator record that made this member.","type":"string"},"terminationEfficiency":{"description":"End-termination efficiency k_e (0..1], dimensionless; overrides the section's.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"bucklingLength":{"description":"Buckling length, m; overrides the member design rules.","$ref":"#/definitions/positive"},"orientation":{"description":"Beams: reference vector [x, y, z] fixing the local y axis (its part normal to the member), dimensionless.","$ref":"#/definitions/vec3"},"releases":{"description":"Beams: end releases (pins), as letters of the local rotation axes.","type":"object","additionalProperties":false,"properties":{"start":{"description":"Local rotations released at the start (\"x\" torsion, \"y\" and \"z\" bending; \"xyz\" full pin).","$ref":"#/definitions/releaseLetters"},"end":{"description":"Local rotations released at the end (\"x\" torsion, \"y\" and \"z\" bending; \"xyz\" full pin).","$ref":"#/definitions/releaseLetters"}}}},"not":{"required":["pretension","unstressedLength"]},"x-message":{"not":"give either \"pretension\" or \"unstressedLength\", not both"}};
+const schema48 = {"description":"Letters of the local rotation axes: x (torsion), y, z (bending), each at most once.","type":"string","pattern":"^(?!.*(.).*\\1)[xyz]{0,3}$","x-message":{"pattern":"{field} must be made of the letters x, y, z (local axes), each at most once"}};
 const pattern8 = new RegExp("^(?!.*(.).*\\1)[xyz]{0,3}$", "u");
-const schema43 = {"type":"array","items":{"$ref":"#/definitions/id"}};
+const schema44 = {"description":"A list of identifiers.","type":"array","items":{"$ref":"#/definitions/id"}};
 
 function validate20(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
@@ -1158,7 +1209,7 @@ errors++;
 }
 }
 else {
-const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema43.type,parentSchema:schema43,data};
+const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema44.type,parentSchema:schema44,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1192,7 +1243,7 @@ errors++;
 }
 var valid0 = _errs2 === errors;
 if(valid0){
-const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema38.not,parentSchema:schema38,data};
+const err1 = {instancePath,schemaPath:"#/not",keyword:"not",params:{},message:"must NOT be valid",schema:schema39.not,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1214,7 +1265,7 @@ vErrors = null;
 }
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema38.required,parentSchema:schema38,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema39.required,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1224,7 +1275,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.kind === undefined){
-const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema38.required,parentSchema:schema38,data};
+const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema39.required,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1234,7 +1285,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.from === undefined){
-const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema38.required,parentSchema:schema38,data};
+const err4 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema39.required,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1244,7 +1295,7 @@ vErrors.push(err4);
 errors++;
 }
 if(data.to === undefined){
-const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema38.required,parentSchema:schema38,data};
+const err5 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema39.required,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1254,7 +1305,7 @@ vErrors.push(err5);
 errors++;
 }
 if(data.section === undefined){
-const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema38.required,parentSchema:schema38,data};
+const err6 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "section"},message:"must have required property '"+"section"+"'",schema:schema39.required,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1264,8 +1315,8 @@ vErrors.push(err6);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema38.properties, key0))){
-const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema38,data};
+if(!(func2.call(schema39.properties, key0))){
+const err7 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1303,7 +1354,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "cable") || (data1 === "bar")) || (data1 === "beam"))){
-const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema38.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema38.properties.kind.enum,parentSchema:schema38.properties.kind,data:data1};
+const err10 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema39.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema39.properties.kind.enum,parentSchema:schema39.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -1391,7 +1442,7 @@ errors++;
 if(data.segments !== undefined){
 let data5 = data.segments;
 if(!(((typeof data5 == "number") && (!(data5 % 1) && !isNaN(data5))) && (isFinite(data5)))){
-const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema38.properties.segments.type,parentSchema:schema38.properties.segments,data:data5};
+const err17 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema39.properties.segments.type,parentSchema:schema39.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -1402,7 +1453,7 @@ errors++;
 }
 if((typeof data5 == "number") && (isFinite(data5))){
 if(data5 > 10000 || isNaN(data5)){
-const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/maximum",keyword:"maximum",params:{comparison: "<=", limit: 10000},message:"must be <= 10000",schema:10000,parentSchema:schema38.properties.segments,data:data5};
+const err18 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/maximum",keyword:"maximum",params:{comparison: "<=", limit: 10000},message:"must be <= 10000",schema:10000,parentSchema:schema39.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -1412,7 +1463,7 @@ vErrors.push(err18);
 errors++;
 }
 if(data5 < 1 || isNaN(data5)){
-const err19 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema38.properties.segments,data:data5};
+const err19 = {instancePath:instancePath+"/segments",schemaPath:"#/properties/segments/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema39.properties.segments,data:data5};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -1426,7 +1477,7 @@ errors++;
 if(data.pretension !== undefined){
 let data6 = data.pretension;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err20 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema38.properties.pretension.type,parentSchema:schema38.properties.pretension,data:data6};
+const err20 = {instancePath:instancePath+"/pretension",schemaPath:"#/properties/pretension/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema39.properties.pretension.type,parentSchema:schema39.properties.pretension,data:data6};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -1439,7 +1490,7 @@ errors++;
 if(data.unstressedLength !== undefined){
 let data7 = data.unstressedLength;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err21 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema38.properties.unstressedLength.type,parentSchema:schema38.properties.unstressedLength,data:data7};
+const err21 = {instancePath:instancePath+"/unstressedLength",schemaPath:"#/properties/unstressedLength/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema39.properties.unstressedLength.type,parentSchema:schema39.properties.unstressedLength,data:data7};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -1458,7 +1509,7 @@ errors = vErrors.length;
 if(data.generatedBy !== undefined){
 let data9 = data.generatedBy;
 if(typeof data9 !== "string"){
-const err22 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema38.properties.generatedBy.type,parentSchema:schema38.properties.generatedBy,data:data9};
+const err22 = {instancePath:instancePath+"/generatedBy",schemaPath:"#/properties/generatedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema39.properties.generatedBy.type,parentSchema:schema39.properties.generatedBy,data:data9};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -1472,7 +1523,7 @@ if(data.terminationEfficiency !== undefined){
 let data10 = data.terminationEfficiency;
 if((typeof data10 == "number") && (isFinite(data10))){
 if(data10 > 1 || isNaN(data10)){
-const err23 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema38.properties.terminationEfficiency,data:data10};
+const err23 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema39.properties.terminationEfficiency,data:data10};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -1482,7 +1533,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data10 <= 0 || isNaN(data10)){
-const err24 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema38.properties.terminationEfficiency,data:data10};
+const err24 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema39.properties.terminationEfficiency,data:data10};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -1493,7 +1544,7 @@ errors++;
 }
 }
 else {
-const err25 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema38.properties.terminationEfficiency.type,parentSchema:schema38.properties.terminationEfficiency,data:data10};
+const err25 = {instancePath:instancePath+"/terminationEfficiency",schemaPath:"#/properties/terminationEfficiency/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema39.properties.terminationEfficiency.type,parentSchema:schema39.properties.terminationEfficiency,data:data10};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -1582,7 +1633,7 @@ let data14 = data.releases;
 if(data14 && typeof data14 == "object" && !Array.isArray(data14)){
 for(const key1 in data14){
 if(!((key1 === "start") || (key1 === "end"))){
-const err32 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema38.properties.releases,data:data14};
+const err32 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema39.properties.releases,data:data14};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -1596,7 +1647,7 @@ if(data14.start !== undefined){
 let data15 = data14.start;
 if(typeof data15 === "string"){
 if(!pattern8.test(data15)){
-const err33 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema47,data:data15};
+const err33 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema48,data:data15};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -1607,7 +1658,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema47.type,parentSchema:schema47,data:data15};
+const err34 = {instancePath:instancePath+"/releases/start",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema48.type,parentSchema:schema48,data:data15};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -1621,7 +1672,7 @@ if(data14.end !== undefined){
 let data16 = data14.end;
 if(typeof data16 === "string"){
 if(!pattern8.test(data16)){
-const err35 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema47,data:data16};
+const err35 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/pattern",keyword:"pattern",params:{pattern: "^(?!.*(.).*\\1)[xyz]{0,3}$"},message:"must match pattern \""+"^(?!.*(.).*\\1)[xyz]{0,3}$"+"\"",schema:"^(?!.*(.).*\\1)[xyz]{0,3}$",parentSchema:schema48,data:data16};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -1632,7 +1683,7 @@ errors++;
 }
 }
 else {
-const err36 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema47.type,parentSchema:schema47,data:data16};
+const err36 = {instancePath:instancePath+"/releases/end",schemaPath:"#/definitions/releaseLetters/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema48.type,parentSchema:schema48,data:data16};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -1644,7 +1695,7 @@ errors++;
 }
 }
 else {
-const err37 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.properties.releases.type,parentSchema:schema38.properties.releases,data:data14};
+const err37 = {instancePath:instancePath+"/releases",schemaPath:"#/properties/releases/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema39.properties.releases.type,parentSchema:schema39.properties.releases,data:data14};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -1656,7 +1707,7 @@ errors++;
 }
 }
 else {
-const err38 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema38.type,parentSchema:schema38,data};
+const err38 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema39.type,parentSchema:schema39,data};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -1669,16 +1720,16 @@ validate19.errors = vErrors;
 return errors === 0;
 }
 
-const schema49 = {"type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"selfWeight":{"type":"boolean"},"temperatureChange":{"type":"number"},"nodalLoads":{"type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"$ref":"#/definitions/wind"},"ice":{"$ref":"#/definitions/ice"},"purpose":{"$ref":"#/definitions/casePurpose"},"action":{"enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"type":"array","items":{"$ref":"#/definitions/areaLoad"}}}};
-const schema68 = {"enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"};
-const schema51 = {"type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"$ref":"#/definitions/id"},"force":{"$ref":"#/definitions/vec3"},"moment":{"$ref":"#/definitions/vec3"}}};
+const schema50 = {"description":"A load case.","type":"object","additionalProperties":false,"required":["id"],"properties":{"id":{"description":"Load case id, unique among cases and combinations.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"selfWeight":{"description":"Include the self-weight of every member (default true).","type":"boolean"},"temperatureChange":{"description":"Uniform temperature change from the reference temperature, K (default 0).","type":"number"},"nodalLoads":{"description":"Forces and moments on nodes.","type":"array","items":{"$ref":"#/definitions/nodalLoad"}},"wind":{"description":"Wind on the members.","$ref":"#/definitions/wind"},"ice":{"description":"Ice on the members.","$ref":"#/definitions/ice"},"purpose":{"description":"What the case is checked for (default serviceability).","$ref":"#/definitions/casePurpose"},"action":{"description":"Which action the case represents, for the combination builder.","enum":["permanent","wind","ice","iceWithWind","temperature","accidental"],"x-message":"{field} must be one of permanent, wind, ice, iceWithWind, temperature, accidental"},"displacements":{"description":"Prescribed support movements in this case.","type":"array","items":{"$ref":"#/definitions/prescribedDisplacement"}},"areaLoads":{"description":"Area loads on panels.","type":"array","items":{"$ref":"#/definitions/areaLoad"}}}};
+const schema69 = {"description":"ultimate: strength checks with factored actions; serviceability: deformation, sag, slack and tension limits, unfactored; accidental: strength with the accidental factors; componentOnly: used inside combinations only, never checked.","enum":["ultimate","serviceability","accidental","componentOnly"],"x-message":"{field} must be one of ultimate, serviceability, accidental, componentOnly"};
+const schema52 = {"description":"A force (and moment) on a node.","type":"object","additionalProperties":false,"required":["node","force"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"force":{"description":"Force [Fx, Fy, Fz], N, global axes.","$ref":"#/definitions/vec3"},"moment":{"description":"Moment [Mx, My, Mz], N·m, global axes (nodes with rotations only).","$ref":"#/definitions/vec3"}}};
 
 function validate24(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.node === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema51.required,parentSchema:schema51,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema52.required,parentSchema:schema52,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1688,7 +1739,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.force === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema51.required,parentSchema:schema51,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "force"},message:"must have required property '"+"force"+"'",schema:schema52.required,parentSchema:schema52,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1699,7 +1750,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "node") || (key0 === "force")) || (key0 === "moment"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema51,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema52,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1834,7 +1885,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema51.type,parentSchema:schema51,data};
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema52.type,parentSchema:schema52,data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -1847,15 +1898,15 @@ validate24.errors = vErrors;
 return errors === 0;
 }
 
-const schema55 = {"type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"type":"number"},"speed":{"$ref":"#/definitions/nonNegative"},"profile":{"$ref":"#/definitions/windProfile"},"airDensity":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"},"basis":{"$ref":"#/definitions/windBasis"}}};
-const schema57 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"const":"power"},"exponent":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"const":"log"},"roughnessLength":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
+const schema56 = {"description":"Wind on the members of a load case.","type":"object","additionalProperties":false,"required":["direction","speed"],"properties":{"direction":{"description":"Direction the air flows toward, degrees, counter-clockwise from +x in the x–y plane (0 = toward +x, 90 = toward +y).","type":"number"},"speed":{"description":"Wind speed at 10 m above z = 0, m/s (a mean speed unless \"basis\" says otherwise).","$ref":"#/definitions/nonNegative"},"profile":{"description":"Height profile (default: power law with exponent 1/7).","$ref":"#/definitions/windProfile"},"airDensity":{"description":"Air density, kg/m³ (default 1.225).","$ref":"#/definitions/positive"},"groups":{"description":"Only load these groups (default: every member).","$ref":"#/definitions/idList"},"basis":{"description":"What \"speed\" stands for (mean or peak, averaging period) and the factors on the wind forces.","$ref":"#/definitions/windBasis"}}};
+const schema58 = {"description":"Height profile of the mean wind speed.","type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","exponent"],"properties":{"kind":{"description":"power: V(z) = V10 · (z/10)^exponent.","const":"power"},"exponent":{"description":"Power-law exponent α, dimensionless (1/7 is common practice for open country).","$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","roughnessLength"],"properties":{"kind":{"description":"log: V(z) = V10 · ln(z/z0) / ln(10/z0).","const":"log"},"roughnessLength":{"description":"Roughness length z0, m.","$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind"],"properties":{"kind":{"description":"uniform: the same speed at every height.","const":"uniform"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of power, log, uniform"}};
 
 function validate27(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema57.required,parentSchema:schema57,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema58.required,parentSchema:schema58,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -1869,7 +1920,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "power"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema57.oneOf[0].required,parentSchema:schema57.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema58.oneOf[0].required,parentSchema:schema58.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -1879,7 +1930,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.exponent === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema57.oneOf[0].required,parentSchema:schema57.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "exponent"},message:"must have required property '"+"exponent"+"'",schema:schema58.oneOf[0].required,parentSchema:schema58.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -1890,7 +1941,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((key0 === "kind") || (key0 === "exponent"))){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema57.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema58.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -1903,7 +1954,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("power" !== data0){
-const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema57.oneOf[0].properties.kind,data:data0};
+const err4 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "power"},message:"must be equal to constant",schema:"power",parentSchema:schema58.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -1940,7 +1991,7 @@ errors++;
 }
 }
 else {
-const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema57.oneOf[0].type,parentSchema:schema57.oneOf[0],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema58.oneOf[0].type,parentSchema:schema58.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -1953,7 +2004,7 @@ errors++;
 else if(tag0 === "log"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema57.oneOf[1].required,parentSchema:schema57.oneOf[1],data};
+const err8 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema58.oneOf[1].required,parentSchema:schema58.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -1963,7 +2014,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data.roughnessLength === undefined){
-const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema57.oneOf[1].required,parentSchema:schema57.oneOf[1],data};
+const err9 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "roughnessLength"},message:"must have required property '"+"roughnessLength"+"'",schema:schema58.oneOf[1].required,parentSchema:schema58.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -1974,7 +2025,7 @@ errors++;
 }
 for(const key1 in data){
 if(!((key1 === "kind") || (key1 === "roughnessLength"))){
-const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema57.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema58.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -1987,7 +2038,7 @@ errors++;
 if(data.kind !== undefined){
 let data2 = data.kind;
 if("log" !== data2){
-const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema57.oneOf[1].properties.kind,data:data2};
+const err11 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "log"},message:"must be equal to constant",schema:"log",parentSchema:schema58.oneOf[1].properties.kind,data:data2};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -2024,7 +2075,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema57.oneOf[1].type,parentSchema:schema57.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema58.oneOf[1].type,parentSchema:schema58.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -2037,7 +2088,7 @@ errors++;
 else if(tag0 === "uniform"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema57.oneOf[2].required,parentSchema:schema57.oneOf[2],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema58.oneOf[2].required,parentSchema:schema58.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -2048,7 +2099,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(key2 === "kind")){
-const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema57.oneOf[2],data};
+const err16 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema58.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -2061,7 +2112,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("uniform" !== data4){
-const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema57.oneOf[2].properties.kind,data:data4};
+const err17 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "uniform"},message:"must be equal to constant",schema:"uniform",parentSchema:schema58.oneOf[2].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -2073,7 +2124,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema57.oneOf[2].type,parentSchema:schema57.oneOf[2],data};
+const err18 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema58.oneOf[2].type,parentSchema:schema58.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -2084,7 +2135,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema57.discriminator,parentSchema:schema57,data};
+const err19 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema58.discriminator,parentSchema:schema58,data};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -2095,7 +2146,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema57.discriminator,parentSchema:schema57,data};
+const err20 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema58.discriminator,parentSchema:schema58,data};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -2106,7 +2157,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema57.type,parentSchema:schema57,data};
+const err21 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema58.type,parentSchema:schema58,data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -2119,14 +2170,14 @@ validate27.errors = vErrors;
 return errors === 0;
 }
 
-const schema61 = {"type":"object","additionalProperties":false,"required":["velocity","averagingPeriod"],"properties":{"velocity":{"enum":["mean","peak"]},"averagingPeriod":{"$ref":"#/definitions/positive"},"gustFactor":{"$ref":"#/definitions/positive"},"structuralFactor":{"$ref":"#/definitions/positive"}}};
+const schema62 = {"description":"What a wind speed stands for; velocity pressure q = ½ ρ V(z)², wind forces × gustFactor × structuralFactor.","type":"object","additionalProperties":false,"required":["velocity","averagingPeriod"],"properties":{"velocity":{"description":"mean: \"speed\" is a mean wind speed; peak: a gust (peak) speed.","enum":["mean","peak"]},"averagingPeriod":{"description":"Averaging period of the speed, s (600 = 10-minute mean, 3 = 3-second gust).","$ref":"#/definitions/positive"},"gustFactor":{"description":"Factor on the forces from a mean-velocity pressure to a peak pressure, dimensionless (default 1).","$ref":"#/definitions/positive"},"structuralFactor":{"description":"Structural factor (e.g. c_s c_d of EN 1991-1-4 §6) on the forces, dimensionless (default 1).","$ref":"#/definitions/positive"}}};
 
 function validate30(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.velocity === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "velocity"},message:"must have required property '"+"velocity"+"'",schema:schema61.required,parentSchema:schema61,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "velocity"},message:"must have required property '"+"velocity"+"'",schema:schema62.required,parentSchema:schema62,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2136,7 +2187,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.averagingPeriod === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "averagingPeriod"},message:"must have required property '"+"averagingPeriod"+"'",schema:schema61.required,parentSchema:schema61,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "averagingPeriod"},message:"must have required property '"+"averagingPeriod"+"'",schema:schema62.required,parentSchema:schema62,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2147,7 +2198,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "velocity") || (key0 === "averagingPeriod")) || (key0 === "gustFactor")) || (key0 === "structuralFactor"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema61,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema62,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2160,7 +2211,7 @@ errors++;
 if(data.velocity !== undefined){
 let data0 = data.velocity;
 if(!((data0 === "mean") || (data0 === "peak"))){
-const err3 = {instancePath:instancePath+"/velocity",schemaPath:"#/properties/velocity/enum",keyword:"enum",params:{allowedValues: schema61.properties.velocity.enum},message:"must be equal to one of the allowed values",schema:schema61.properties.velocity.enum,parentSchema:schema61.properties.velocity,data:data0};
+const err3 = {instancePath:instancePath+"/velocity",schemaPath:"#/properties/velocity/enum",keyword:"enum",params:{allowedValues: schema62.properties.velocity.enum},message:"must be equal to one of the allowed values",schema:schema62.properties.velocity.enum,parentSchema:schema62.properties.velocity,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2247,7 +2298,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema61.type,parentSchema:schema61,data};
+const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema62.type,parentSchema:schema62,data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2266,7 +2317,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.direction === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema55.required,parentSchema:schema55,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "direction"},message:"must have required property '"+"direction"+"'",schema:schema56.required,parentSchema:schema56,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2276,7 +2327,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.speed === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema55.required,parentSchema:schema55,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "speed"},message:"must have required property '"+"speed"+"'",schema:schema56.required,parentSchema:schema56,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2287,7 +2338,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((((key0 === "direction") || (key0 === "speed")) || (key0 === "profile")) || (key0 === "airDensity")) || (key0 === "groups")) || (key0 === "basis"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema55,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema56,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2300,7 +2351,7 @@ errors++;
 if(data.direction !== undefined){
 let data0 = data.direction;
 if(!((typeof data0 == "number") && (isFinite(data0)))){
-const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema55.properties.direction.type,parentSchema:schema55.properties.direction,data:data0};
+const err3 = {instancePath:instancePath+"/direction",schemaPath:"#/properties/direction/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema56.properties.direction.type,parentSchema:schema56.properties.direction,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2380,7 +2431,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema55.type,parentSchema:schema55,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema56.type,parentSchema:schema56,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2393,14 +2444,14 @@ validate26.errors = vErrors;
 return errors === 0;
 }
 
-const schema65 = {"type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"$ref":"#/definitions/nonNegative"},"density":{"$ref":"#/definitions/positive"},"groups":{"$ref":"#/definitions/idList"}}};
+const schema66 = {"description":"Radial ice on the members of a load case.","type":"object","additionalProperties":false,"required":["thickness"],"properties":{"thickness":{"description":"Radial ice thickness, m.","$ref":"#/definitions/nonNegative"},"density":{"description":"Ice density, kg/m³ (default 900, glaze ice).","$ref":"#/definitions/positive"},"groups":{"description":"Only ice these groups (default: every member with a diameter).","$ref":"#/definitions/idList"},"bareMembers":{"description":"Members left bare although in the iced groups (unbalanced ice on guys).","$ref":"#/definitions/idList"}}};
 
 function validate33(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.thickness === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema65.required,parentSchema:schema65,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "thickness"},message:"must have required property '"+"thickness"+"'",schema:schema66.required,parentSchema:schema66,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2410,8 +2461,8 @@ vErrors.push(err0);
 errors++;
 }
 for(const key0 in data){
-if(!(((key0 === "thickness") || (key0 === "density")) || (key0 === "groups"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema65,data};
+if(!((((key0 === "thickness") || (key0 === "density")) || (key0 === "groups")) || (key0 === "bareMembers"))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema66,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2477,9 +2528,15 @@ vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.error
 errors = vErrors.length;
 }
 }
+if(data.bareMembers !== undefined){
+if(!(validate20(data.bareMembers, {instancePath:instancePath+"/bareMembers",parentData:data,parentDataProperty:"bareMembers",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
+errors = vErrors.length;
+}
+}
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema65.type,parentSchema:schema65,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema66.type,parentSchema:schema66,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2492,14 +2549,14 @@ validate33.errors = vErrors;
 return errors === 0;
 }
 
-const schema69 = {"type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"$ref":"#/definitions/id"},"x":{"type":"number"},"y":{"type":"number"},"z":{"type":"number"},"rx":{"type":"number"},"ry":{"type":"number"},"rz":{"type":"number"}}};
+const schema70 = {"description":"Prescribed movement of a support in one load case (anchor movement, settlement); every direction given must be restrained in the node's \"fixed\".","type":"object","additionalProperties":false,"required":["node"],"properties":{"node":{"description":"Support node id.","$ref":"#/definitions/id"},"x":{"description":"Displacement along x, m.","type":"number"},"y":{"description":"Displacement along y, m.","type":"number"},"z":{"description":"Displacement along z, m.","type":"number"},"rx":{"description":"Rotation about x, rad.","type":"number"},"ry":{"description":"Rotation about y, rad.","type":"number"},"rz":{"description":"Rotation about z, rad.","type":"number"}}};
 
-function validate36(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate37(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.node === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema69.required,parentSchema:schema69,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema70.required,parentSchema:schema70,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2510,7 +2567,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "node") || (key0 === "x")) || (key0 === "y")) || (key0 === "z")) || (key0 === "rx")) || (key0 === "ry")) || (key0 === "rz"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema69,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema70,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2548,7 +2605,7 @@ errors++;
 if(data.x !== undefined){
 let data1 = data.x;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err4 = {instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.x.type,parentSchema:schema69.properties.x,data:data1};
+const err4 = {instancePath:instancePath+"/x",schemaPath:"#/properties/x/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema70.properties.x.type,parentSchema:schema70.properties.x,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2561,7 +2618,7 @@ errors++;
 if(data.y !== undefined){
 let data2 = data.y;
 if(!((typeof data2 == "number") && (isFinite(data2)))){
-const err5 = {instancePath:instancePath+"/y",schemaPath:"#/properties/y/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.y.type,parentSchema:schema69.properties.y,data:data2};
+const err5 = {instancePath:instancePath+"/y",schemaPath:"#/properties/y/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema70.properties.y.type,parentSchema:schema70.properties.y,data:data2};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2574,7 +2631,7 @@ errors++;
 if(data.z !== undefined){
 let data3 = data.z;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err6 = {instancePath:instancePath+"/z",schemaPath:"#/properties/z/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.z.type,parentSchema:schema69.properties.z,data:data3};
+const err6 = {instancePath:instancePath+"/z",schemaPath:"#/properties/z/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema70.properties.z.type,parentSchema:schema70.properties.z,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2587,7 +2644,7 @@ errors++;
 if(data.rx !== undefined){
 let data4 = data.rx;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err7 = {instancePath:instancePath+"/rx",schemaPath:"#/properties/rx/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.rx.type,parentSchema:schema69.properties.rx,data:data4};
+const err7 = {instancePath:instancePath+"/rx",schemaPath:"#/properties/rx/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema70.properties.rx.type,parentSchema:schema70.properties.rx,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2600,7 +2657,7 @@ errors++;
 if(data.ry !== undefined){
 let data5 = data.ry;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err8 = {instancePath:instancePath+"/ry",schemaPath:"#/properties/ry/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.ry.type,parentSchema:schema69.properties.ry,data:data5};
+const err8 = {instancePath:instancePath+"/ry",schemaPath:"#/properties/ry/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema70.properties.ry.type,parentSchema:schema70.properties.ry,data:data5};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2613,7 +2670,7 @@ errors++;
 if(data.rz !== undefined){
 let data6 = data.rz;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err9 = {instancePath:instancePath+"/rz",schemaPath:"#/properties/rz/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema69.properties.rz.type,parentSchema:schema69.properties.rz,data:data6};
+const err9 = {instancePath:instancePath+"/rz",schemaPath:"#/properties/rz/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema70.properties.rz.type,parentSchema:schema70.properties.rz,data:data6};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2625,7 +2682,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema69.type,parentSchema:schema69,data};
+const err10 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema70.type,parentSchema:schema70,data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -2634,19 +2691,19 @@ vErrors.push(err10);
 }
 errors++;
 }
-validate36.errors = vErrors;
+validate37.errors = vErrors;
 return errors === 0;
 }
 
-const schema71 = {"type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"enum":["snow","cladding","pressure"]},"value":{"type":"number"},"panels":{"$ref":"#/definitions/idList"},"coefficients":{"type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}};
-const schema72 = {"type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"$ref":"#/definitions/id"},"cp":{"type":"number"}}};
+const schema72 = {"description":"An area load on panels.","type":"object","additionalProperties":false,"required":["kind","value"],"properties":{"kind":{"description":"snow: per plan area, downward; cladding: weight per true (sloping) area, downward; pressure: net pressure normal to the deformed panel (a follower load).","enum":["snow","cladding","pressure"]},"value":{"description":"Load per area, Pa; for pressure, positive acts against the panel normal, negative is suction.","type":"number"},"panels":{"description":"Only these panels or regions (default: every panel).","$ref":"#/definitions/idList"},"coefficients":{"description":"Pressure only: c_p per region or panel id (a panel id wins over its region; default c_p = 1).","type":"array","items":{"$ref":"#/definitions/pressureCoefficient"}}}};
+const schema73 = {"description":"Pressure coefficient of the panels of one region or of one panel.","type":"object","additionalProperties":false,"required":["region","cp"],"properties":{"region":{"description":"A panel region or a panel id.","$ref":"#/definitions/id"},"cp":{"description":"Net pressure coefficient c_p, dimensionless.","type":"number"}}};
 
-function validate40(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate41(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.region === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "region"},message:"must have required property '"+"region"+"'",schema:schema72.required,parentSchema:schema72,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "region"},message:"must have required property '"+"region"+"'",schema:schema73.required,parentSchema:schema73,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2656,7 +2713,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.cp === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "cp"},message:"must have required property '"+"cp"+"'",schema:schema72.required,parentSchema:schema72,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "cp"},message:"must have required property '"+"cp"+"'",schema:schema73.required,parentSchema:schema73,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2667,7 +2724,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((key0 === "region") || (key0 === "cp"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema72,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema73,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2705,7 +2762,7 @@ errors++;
 if(data.cp !== undefined){
 let data1 = data.cp;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err5 = {instancePath:instancePath+"/cp",schemaPath:"#/properties/cp/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema72.properties.cp.type,parentSchema:schema72.properties.cp,data:data1};
+const err5 = {instancePath:instancePath+"/cp",schemaPath:"#/properties/cp/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema73.properties.cp.type,parentSchema:schema73.properties.cp,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2717,7 +2774,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.type,parentSchema:schema72,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema73.type,parentSchema:schema73,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2726,17 +2783,17 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate40.errors = vErrors;
+validate41.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate38(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate39(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema71.required,parentSchema:schema71,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema72.required,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2746,7 +2803,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.value === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema71.required,parentSchema:schema71,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema72.required,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2757,7 +2814,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "kind") || (key0 === "value")) || (key0 === "panels")) || (key0 === "coefficients"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema71,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -2770,7 +2827,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if(!(((data0 === "snow") || (data0 === "cladding")) || (data0 === "pressure"))){
-const err3 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema71.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema71.properties.kind.enum,parentSchema:schema71.properties.kind,data:data0};
+const err3 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema72.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema72.properties.kind.enum,parentSchema:schema72.properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -2783,7 +2840,7 @@ errors++;
 if(data.value !== undefined){
 let data1 = data.value;
 if(!((typeof data1 == "number") && (isFinite(data1)))){
-const err4 = {instancePath:instancePath+"/value",schemaPath:"#/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema71.properties.value.type,parentSchema:schema71.properties.value,data:data1};
+const err4 = {instancePath:instancePath+"/value",schemaPath:"#/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema72.properties.value.type,parentSchema:schema72.properties.value,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2804,14 +2861,14 @@ let data3 = data.coefficients;
 if(Array.isArray(data3)){
 const len0 = data3.length;
 for(let i0=0; i0<len0; i0++){
-if(!(validate40(data3[i0], {instancePath:instancePath+"/coefficients/" + i0,parentData:data3,parentDataProperty:i0,rootData}))){
-vErrors = vErrors === null ? validate40.errors : vErrors.concat(validate40.errors);
+if(!(validate41(data3[i0], {instancePath:instancePath+"/coefficients/" + i0,parentData:data3,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate41.errors : vErrors.concat(validate41.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err5 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema71.properties.coefficients.type,parentSchema:schema71.properties.coefficients,data:data3};
+const err5 = {instancePath:instancePath+"/coefficients",schemaPath:"#/properties/coefficients/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema72.properties.coefficients.type,parentSchema:schema72.properties.coefficients,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2823,7 +2880,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema71.type,parentSchema:schema71,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema72.type,parentSchema:schema72,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2832,7 +2889,7 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate38.errors = vErrors;
+validate39.errors = vErrors;
 return errors === 0;
 }
 
@@ -2842,7 +2899,7 @@ let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema49.required,parentSchema:schema49,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema50.required,parentSchema:schema50,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -2852,8 +2909,8 @@ vErrors.push(err0);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema49.properties, key0))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema49,data};
+if(!(func2.call(schema50.properties, key0))){
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema50,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -2891,7 +2948,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema49.properties.label.type,parentSchema:schema49.properties.label,data:data1};
+const err4 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema50.properties.label.type,parentSchema:schema50.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -2904,7 +2961,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data2 = data.selfWeight;
 if(typeof data2 !== "boolean"){
-const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema49.properties.selfWeight.type,parentSchema:schema49.properties.selfWeight,data:data2};
+const err5 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema50.properties.selfWeight.type,parentSchema:schema50.properties.selfWeight,data:data2};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -2917,7 +2974,7 @@ errors++;
 if(data.temperatureChange !== undefined){
 let data3 = data.temperatureChange;
 if(!((typeof data3 == "number") && (isFinite(data3)))){
-const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema49.properties.temperatureChange.type,parentSchema:schema49.properties.temperatureChange,data:data3};
+const err6 = {instancePath:instancePath+"/temperatureChange",schemaPath:"#/properties/temperatureChange/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema50.properties.temperatureChange.type,parentSchema:schema50.properties.temperatureChange,data:data3};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -2939,7 +2996,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema49.properties.nodalLoads.type,parentSchema:schema49.properties.nodalLoads,data:data4};
+const err7 = {instancePath:instancePath+"/nodalLoads",schemaPath:"#/properties/nodalLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.nodalLoads.type,parentSchema:schema50.properties.nodalLoads,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -2964,7 +3021,7 @@ errors = vErrors.length;
 if(data.purpose !== undefined){
 let data8 = data.purpose;
 if(!((((data8 === "ultimate") || (data8 === "serviceability")) || (data8 === "accidental")) || (data8 === "componentOnly"))){
-const err8 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema68.enum},message:"must be equal to one of the allowed values",schema:schema68.enum,parentSchema:schema68,data:data8};
+const err8 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema69.enum},message:"must be equal to one of the allowed values",schema:schema69.enum,parentSchema:schema69,data:data8};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -2977,7 +3034,7 @@ errors++;
 if(data.action !== undefined){
 let data9 = data.action;
 if(!((((((data9 === "permanent") || (data9 === "wind")) || (data9 === "ice")) || (data9 === "iceWithWind")) || (data9 === "temperature")) || (data9 === "accidental"))){
-const err9 = {instancePath:instancePath+"/action",schemaPath:"#/properties/action/enum",keyword:"enum",params:{allowedValues: schema49.properties.action.enum},message:"must be equal to one of the allowed values",schema:schema49.properties.action.enum,parentSchema:schema49.properties.action,data:data9};
+const err9 = {instancePath:instancePath+"/action",schemaPath:"#/properties/action/enum",keyword:"enum",params:{allowedValues: schema50.properties.action.enum},message:"must be equal to one of the allowed values",schema:schema50.properties.action.enum,parentSchema:schema50.properties.action,data:data9};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -2992,14 +3049,14 @@ let data10 = data.displacements;
 if(Array.isArray(data10)){
 const len1 = data10.length;
 for(let i1=0; i1<len1; i1++){
-if(!(validate36(data10[i1], {instancePath:instancePath+"/displacements/" + i1,parentData:data10,parentDataProperty:i1,rootData}))){
-vErrors = vErrors === null ? validate36.errors : vErrors.concat(validate36.errors);
+if(!(validate37(data10[i1], {instancePath:instancePath+"/displacements/" + i1,parentData:data10,parentDataProperty:i1,rootData}))){
+vErrors = vErrors === null ? validate37.errors : vErrors.concat(validate37.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/displacements",schemaPath:"#/properties/displacements/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema49.properties.displacements.type,parentSchema:schema49.properties.displacements,data:data10};
+const err10 = {instancePath:instancePath+"/displacements",schemaPath:"#/properties/displacements/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.displacements.type,parentSchema:schema50.properties.displacements,data:data10};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3014,14 +3071,14 @@ let data12 = data.areaLoads;
 if(Array.isArray(data12)){
 const len2 = data12.length;
 for(let i2=0; i2<len2; i2++){
-if(!(validate38(data12[i2], {instancePath:instancePath+"/areaLoads/" + i2,parentData:data12,parentDataProperty:i2,rootData}))){
-vErrors = vErrors === null ? validate38.errors : vErrors.concat(validate38.errors);
+if(!(validate39(data12[i2], {instancePath:instancePath+"/areaLoads/" + i2,parentData:data12,parentDataProperty:i2,rootData}))){
+vErrors = vErrors === null ? validate39.errors : vErrors.concat(validate39.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err11 = {instancePath:instancePath+"/areaLoads",schemaPath:"#/properties/areaLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema49.properties.areaLoads.type,parentSchema:schema49.properties.areaLoads,data:data12};
+const err11 = {instancePath:instancePath+"/areaLoads",schemaPath:"#/properties/areaLoads/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema50.properties.areaLoads.type,parentSchema:schema50.properties.areaLoads,data:data12};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3033,7 +3090,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema49.type,parentSchema:schema49,data};
+const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema50.type,parentSchema:schema50,data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -3046,14 +3103,14 @@ validate23.errors = vErrors;
 return errors === 0;
 }
 
-const schema74 = {"type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"members":{"$ref":"#/definitions/idList"}}};
+const schema75 = {"description":"A named set of members.","type":"object","additionalProperties":false,"required":["id","members"],"properties":{"id":{"description":"Group id, unique among groups.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables and on the schedule.","type":"string"},"members":{"description":"Member ids in the group.","$ref":"#/definitions/idList"}}};
 
-function validate44(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate45(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema74.required,parentSchema:schema74,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema75.required,parentSchema:schema75,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3063,7 +3120,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.members === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema74.required,parentSchema:schema74,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "members"},message:"must have required property '"+"members"+"'",schema:schema75.required,parentSchema:schema75,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3074,7 +3131,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "label")) || (key0 === "members"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema74,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema75,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3112,7 +3169,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema74.properties.label.type,parentSchema:schema74.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema75.properties.label.type,parentSchema:schema75.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3130,7 +3187,7 @@ errors = vErrors.length;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema74.type,parentSchema:schema74,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema75.type,parentSchema:schema75,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3139,18 +3196,18 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate44.errors = vErrors;
+validate45.errors = vErrors;
 return errors === 0;
 }
 
-const schema76 = {"type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"factors":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"$ref":"#/definitions/id"},"factor":{"type":"number"}}}},"purpose":{"$ref":"#/definitions/casePurpose"}}};
+const schema77 = {"description":"A factored sum of load cases, solved as its own nonlinear case.","type":"object","additionalProperties":false,"required":["id","factors"],"properties":{"id":{"description":"Combination id, unique among cases and combinations.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"factors":{"description":"Factor × load case terms; self-weight, nodal loads, wind pressure and temperature change are all scaled.","type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["case","factor"],"properties":{"case":{"description":"Load case id.","$ref":"#/definitions/id"},"factor":{"description":"Factor on that case, dimensionless.","type":"number"}}}},"purpose":{"description":"What the combination is checked for (default ultimate).","$ref":"#/definitions/casePurpose"}}};
 
-function validate47(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate48(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema76.required,parentSchema:schema76,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema77.required,parentSchema:schema77,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3160,7 +3217,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.factors === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema76.required,parentSchema:schema76,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "factors"},message:"must have required property '"+"factors"+"'",schema:schema77.required,parentSchema:schema77,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3171,7 +3228,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "id") || (key0 === "label")) || (key0 === "factors")) || (key0 === "purpose"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema76,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema77,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3209,7 +3266,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema76.properties.label.type,parentSchema:schema76.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema77.properties.label.type,parentSchema:schema77.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3223,7 +3280,7 @@ if(data.factors !== undefined){
 let data2 = data.factors;
 if(Array.isArray(data2)){
 if(data2.length < 1){
-const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema76.properties.factors,data:data2};
+const err6 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema77.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3237,7 +3294,7 @@ for(let i0=0; i0<len0; i0++){
 let data3 = data2[i0];
 if(data3 && typeof data3 == "object" && !Array.isArray(data3)){
 if(data3.case === undefined){
-const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema76.properties.factors.items.required,parentSchema:schema76.properties.factors.items,data:data3};
+const err7 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema77.properties.factors.items.required,parentSchema:schema77.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3247,7 +3304,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data3.factor === undefined){
-const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema76.properties.factors.items.required,parentSchema:schema76.properties.factors.items,data:data3};
+const err8 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/required",keyword:"required",params:{missingProperty: "factor"},message:"must have required property '"+"factor"+"'",schema:schema77.properties.factors.items.required,parentSchema:schema77.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3258,7 +3315,7 @@ errors++;
 }
 for(const key1 in data3){
 if(!((key1 === "case") || (key1 === "factor"))){
-const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema76.properties.factors.items,data:data3};
+const err9 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema77.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3296,7 +3353,7 @@ errors++;
 if(data3.factor !== undefined){
 let data5 = data3.factor;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema76.properties.factors.items.properties.factor.type,parentSchema:schema76.properties.factors.items.properties.factor,data:data5};
+const err12 = {instancePath:instancePath+"/factors/" + i0+"/factor",schemaPath:"#/properties/factors/items/properties/factor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema77.properties.factors.items.properties.factor.type,parentSchema:schema77.properties.factors.items.properties.factor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -3308,7 +3365,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.properties.factors.items.type,parentSchema:schema76.properties.factors.items,data:data3};
+const err13 = {instancePath:instancePath+"/factors/" + i0,schemaPath:"#/properties/factors/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema77.properties.factors.items.type,parentSchema:schema77.properties.factors.items,data:data3};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -3320,7 +3377,7 @@ errors++;
 }
 }
 else {
-const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema76.properties.factors.type,parentSchema:schema76.properties.factors,data:data2};
+const err14 = {instancePath:instancePath+"/factors",schemaPath:"#/properties/factors/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema77.properties.factors.type,parentSchema:schema77.properties.factors,data:data2};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -3333,7 +3390,7 @@ errors++;
 if(data.purpose !== undefined){
 let data6 = data.purpose;
 if(!((((data6 === "ultimate") || (data6 === "serviceability")) || (data6 === "accidental")) || (data6 === "componentOnly"))){
-const err15 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema68.enum},message:"must be equal to one of the allowed values",schema:schema68.enum,parentSchema:schema68,data:data6};
+const err15 = {instancePath:instancePath+"/purpose",schemaPath:"#/definitions/casePurpose/enum",keyword:"enum",params:{allowedValues: schema69.enum},message:"must be equal to one of the allowed values",schema:schema69.enum,parentSchema:schema69,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3345,7 +3402,7 @@ errors++;
 }
 }
 else {
-const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema76.type,parentSchema:schema76,data};
+const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema77.type,parentSchema:schema77,data};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -3354,18 +3411,18 @@ vErrors.push(err16);
 }
 errors++;
 }
-validate47.errors = vErrors;
+validate48.errors = vErrors;
 return errors === 0;
 }
 
-const schema80 = {"type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"$ref":"#/definitions/idList"},"sagLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"},"direction":{"oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}}},"upliftNodes":{"$ref":"#/definitions/idList"},"minimumTension":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"shareOfInstallation":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"$ref":"#/definitions/id"},"role":{"enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"$ref":"#/definitions/positive"},"bucklingLength":{"$ref":"#/definitions/positive"},"slendernessLimit":{"$ref":"#/definitions/positive"}}}},"twistLimits":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"$ref":"#/definitions/positive"}}}}}};
-const schema82 = {"type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
+const schema81 = {"description":"Design-check settings and limits.","type":"object","additionalProperties":false,"properties":{"noSlackGroups":{"description":"Groups (or \"*\" for all cables) that must not go slack in any case.","$ref":"#/definitions/idList"},"sagLimits":{"description":"Sag limits per group.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group","limit"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"limit":{"description":"Sag limit of every member of the group.","$ref":"#/definitions/sagLimit"}}}},"displacementLimits":{"description":"Limits on the displacement of named nodes.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","limit"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"limit":{"description":"Largest displacement, m.","$ref":"#/definitions/positive"},"direction":{"description":"\"horizontal\" (default), \"total\", or a direction vector [x, y, z] along which the displacement is measured.","oneOf":[{"enum":["horizontal","total"],"x-message":"{field} must be one of horizontal, total"},{"$ref":"#/definitions/vec3"}],"x-message":"{field} must be \"horizontal\", \"total\" or a vector [x, y, z]"}}}},"tiltLimits":{"description":"Mast tilt limits.","type":"array","items":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"description":"Node at the foot of the mast.","$ref":"#/definitions/id"},"top":{"description":"Node at the top of the mast.","$ref":"#/definitions/id"},"limit":{"description":"Largest horizontal offset of top relative to base over their height difference, dimensionless ratio (e.g. 0.01).","$ref":"#/definitions/positive"}}}},"upliftNodes":{"description":"Supports at which uplift (reaction Fz < 0: the support holds the structure down) is flagged.","$ref":"#/definitions/idList"},"minimumTension":{"description":"Minimum tension of cables per group in serviceability cases.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"shareOfInstallation":{"description":"Least tension as a share of the member's installation tension, dimensionless.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}},"shareOfBreaking":{"description":"Least tension as a share of the member's breaking load, dimensionless.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}}},"memberDesign":{"description":"Design data of bars per group: role, buckling length, slenderness limit.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"role":{"description":"Role of the bars (sets the default slenderness limit).","enum":["leg","bracing","redundant","other"],"x-message":"{field} must be one of leg, bracing, redundant, other"},"bucklingLengthFactor":{"description":"Buckling length as a factor on the system length (between the end nodes), dimensionless.","$ref":"#/definitions/positive"},"bucklingLength":{"description":"Buckling length, m.","$ref":"#/definitions/positive"},"slendernessLimit":{"description":"Largest slenderness (buckling length / radius of gyration), dimensionless.","$ref":"#/definitions/positive"}}}},"twistLimits":{"description":"Limits on twist (rotation about the vertical) of node sets at one level.","type":"array","items":{"type":"object","additionalProperties":false,"required":["nodes","limit"],"properties":{"nodes":{"description":"Node ids at one level; their plan centroid is the centre of rotation.","type":"array","minItems":2,"items":{"$ref":"#/definitions/id"}},"limit":{"description":"Largest twist, degrees.","$ref":"#/definitions/positive"}}}}}};
+const schema83 = {"description":"A sag limit: a fraction of the chord length, or an absolute length.","type":"object","oneOf":[{"type":"object","additionalProperties":false,"required":["fractionOfSpan"],"properties":{"fractionOfSpan":{"description":"Largest sag as a fraction of the chord length, dimensionless (e.g. 0.02).","$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["absolute"],"properties":{"absolute":{"description":"Largest sag, m.","$ref":"#/definitions/positive"}}}],"x-message":{"oneOf":"{field} must be either {\"fractionOfSpan\": number > 0} or {\"absolute\": metres > 0}"}};
 
-function validate51(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate52(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(!(data && typeof data == "object" && !Array.isArray(data))){
-const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.type,parentSchema:schema82,data};
+const err0 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.type,parentSchema:schema83,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3380,7 +3437,7 @@ let passing0 = null;
 const _errs2 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.fractionOfSpan === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema82.oneOf[0].required,parentSchema:schema82.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "fractionOfSpan"},message:"must have required property '"+"fractionOfSpan"+"'",schema:schema83.oneOf[0].required,parentSchema:schema83.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3391,7 +3448,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(key0 === "fractionOfSpan")){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema82.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema83.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3428,7 +3485,7 @@ errors++;
 }
 }
 else {
-const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.oneOf[0].type,parentSchema:schema82.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.oneOf[0].type,parentSchema:schema83.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -3445,7 +3502,7 @@ passing0 = 0;
 const _errs9 = errors;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.absolute === undefined){
-const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema82.oneOf[1].required,parentSchema:schema82.oneOf[1],data};
+const err6 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "absolute"},message:"must have required property '"+"absolute"+"'",schema:schema83.oneOf[1].required,parentSchema:schema83.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3456,7 +3513,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(key1 === "absolute")){
-const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema82.oneOf[1],data};
+const err7 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema83.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3493,7 +3550,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema82.oneOf[1].type,parentSchema:schema82.oneOf[1],data};
+const err10 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema83.oneOf[1].type,parentSchema:schema83.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3514,7 +3571,7 @@ passing0 = 1;
 }
 }
 if(!valid0){
-const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema82.oneOf,parentSchema:schema82,data};
+const err11 = {instancePath,schemaPath:"#/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema83.oneOf,parentSchema:schema83,data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -3534,18 +3591,18 @@ vErrors = null;
 }
 }
 }
-validate51.errors = vErrors;
+validate52.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate49(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate50(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((((((((key0 === "noSlackGroups") || (key0 === "sagLimits")) || (key0 === "displacementLimits")) || (key0 === "tiltLimits")) || (key0 === "upliftNodes")) || (key0 === "minimumTension")) || (key0 === "memberDesign")) || (key0 === "twistLimits"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema80,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema81,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -3569,7 +3626,7 @@ for(let i0=0; i0<len0; i0++){
 let data2 = data1[i0];
 if(data2 && typeof data2 == "object" && !Array.isArray(data2)){
 if(data2.group === undefined){
-const err1 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema80.properties.sagLimits.items.required,parentSchema:schema80.properties.sagLimits.items,data:data2};
+const err1 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema81.properties.sagLimits.items.required,parentSchema:schema81.properties.sagLimits.items,data:data2};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -3579,7 +3636,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data2.limit === undefined){
-const err2 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema80.properties.sagLimits.items.required,parentSchema:schema80.properties.sagLimits.items,data:data2};
+const err2 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema81.properties.sagLimits.items.required,parentSchema:schema81.properties.sagLimits.items,data:data2};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -3590,7 +3647,7 @@ errors++;
 }
 for(const key1 in data2){
 if(!((key1 === "group") || (key1 === "limit"))){
-const err3 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.sagLimits.items,data:data2};
+const err3 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.sagLimits.items,data:data2};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -3626,14 +3683,14 @@ errors++;
 }
 }
 if(data2.limit !== undefined){
-if(!(validate51(data2.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data2,parentDataProperty:"limit",rootData}))){
-vErrors = vErrors === null ? validate51.errors : vErrors.concat(validate51.errors);
+if(!(validate52(data2.limit, {instancePath:instancePath+"/sagLimits/" + i0+"/limit",parentData:data2,parentDataProperty:"limit",rootData}))){
+vErrors = vErrors === null ? validate52.errors : vErrors.concat(validate52.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.sagLimits.items.type,parentSchema:schema80.properties.sagLimits.items,data:data2};
+const err6 = {instancePath:instancePath+"/sagLimits/" + i0,schemaPath:"#/properties/sagLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.sagLimits.items.type,parentSchema:schema81.properties.sagLimits.items,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -3645,7 +3702,7 @@ errors++;
 }
 }
 else {
-const err7 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.sagLimits.type,parentSchema:schema80.properties.sagLimits,data:data1};
+const err7 = {instancePath:instancePath+"/sagLimits",schemaPath:"#/properties/sagLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.sagLimits.type,parentSchema:schema81.properties.sagLimits,data:data1};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -3663,7 +3720,7 @@ for(let i1=0; i1<len1; i1++){
 let data6 = data5[i1];
 if(data6 && typeof data6 == "object" && !Array.isArray(data6)){
 if(data6.node === undefined){
-const err8 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema80.properties.displacementLimits.items.required,parentSchema:schema80.properties.displacementLimits.items,data:data6};
+const err8 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema81.properties.displacementLimits.items.required,parentSchema:schema81.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -3673,7 +3730,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data6.limit === undefined){
-const err9 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema80.properties.displacementLimits.items.required,parentSchema:schema80.properties.displacementLimits.items,data:data6};
+const err9 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema81.properties.displacementLimits.items.required,parentSchema:schema81.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -3684,7 +3741,7 @@ errors++;
 }
 for(const key2 in data6){
 if(!(((key2 === "node") || (key2 === "limit")) || (key2 === "direction"))){
-const err10 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.displacementLimits.items,data:data6};
+const err10 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -3751,7 +3808,7 @@ let valid10 = false;
 let passing0 = null;
 const _errs28 = errors;
 if(!((data9 === "horizontal") || (data9 === "total"))){
-const err15 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf/0/enum",keyword:"enum",params:{allowedValues: schema80.properties.displacementLimits.items.properties.direction.oneOf[0].enum},message:"must be equal to one of the allowed values",schema:schema80.properties.displacementLimits.items.properties.direction.oneOf[0].enum,parentSchema:schema80.properties.displacementLimits.items.properties.direction.oneOf[0],data:data9};
+const err15 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf/0/enum",keyword:"enum",params:{allowedValues: schema81.properties.displacementLimits.items.properties.direction.oneOf[0].enum},message:"must be equal to one of the allowed values",schema:schema81.properties.displacementLimits.items.properties.direction.oneOf[0].enum,parentSchema:schema81.properties.displacementLimits.items.properties.direction.oneOf[0],data:data9};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -3824,7 +3881,7 @@ passing0 = 1;
 }
 }
 if(!valid10){
-const err20 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema80.properties.displacementLimits.items.properties.direction.oneOf,parentSchema:schema80.properties.displacementLimits.items.properties.direction,data:data9};
+const err20 = {instancePath:instancePath+"/displacementLimits/" + i1+"/direction",schemaPath:"#/properties/displacementLimits/items/properties/direction/oneOf",keyword:"oneOf",params:{passingSchemas: passing0},message:"must match exactly one schema in oneOf",schema:schema81.properties.displacementLimits.items.properties.direction.oneOf,parentSchema:schema81.properties.displacementLimits.items.properties.direction,data:data9};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -3847,7 +3904,7 @@ vErrors = null;
 }
 }
 else {
-const err21 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.displacementLimits.items.type,parentSchema:schema80.properties.displacementLimits.items,data:data6};
+const err21 = {instancePath:instancePath+"/displacementLimits/" + i1,schemaPath:"#/properties/displacementLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.displacementLimits.items.type,parentSchema:schema81.properties.displacementLimits.items,data:data6};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -3859,7 +3916,7 @@ errors++;
 }
 }
 else {
-const err22 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.displacementLimits.type,parentSchema:schema80.properties.displacementLimits,data:data5};
+const err22 = {instancePath:instancePath+"/displacementLimits",schemaPath:"#/properties/displacementLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.displacementLimits.type,parentSchema:schema81.properties.displacementLimits,data:data5};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -3877,7 +3934,7 @@ for(let i3=0; i3<len3; i3++){
 let data12 = data11[i3];
 if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
 if(data12.base === undefined){
-const err23 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema80.properties.tiltLimits.items.required,parentSchema:schema80.properties.tiltLimits.items,data:data12};
+const err23 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema81.properties.tiltLimits.items.required,parentSchema:schema81.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -3887,7 +3944,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data12.top === undefined){
-const err24 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema80.properties.tiltLimits.items.required,parentSchema:schema80.properties.tiltLimits.items,data:data12};
+const err24 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema81.properties.tiltLimits.items.required,parentSchema:schema81.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -3897,7 +3954,7 @@ vErrors.push(err24);
 errors++;
 }
 if(data12.limit === undefined){
-const err25 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema80.properties.tiltLimits.items.required,parentSchema:schema80.properties.tiltLimits.items,data:data12};
+const err25 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema81.properties.tiltLimits.items.required,parentSchema:schema81.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -3908,7 +3965,7 @@ errors++;
 }
 for(const key3 in data12){
 if(!(((key3 === "base") || (key3 === "top")) || (key3 === "limit"))){
-const err26 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.tiltLimits.items,data:data12};
+const err26 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -3995,7 +4052,7 @@ errors++;
 }
 }
 else {
-const err33 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.tiltLimits.items.type,parentSchema:schema80.properties.tiltLimits.items,data:data12};
+const err33 = {instancePath:instancePath+"/tiltLimits/" + i3,schemaPath:"#/properties/tiltLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.tiltLimits.items.type,parentSchema:schema81.properties.tiltLimits.items,data:data12};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -4007,7 +4064,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.tiltLimits.type,parentSchema:schema80.properties.tiltLimits,data:data11};
+const err34 = {instancePath:instancePath+"/tiltLimits",schemaPath:"#/properties/tiltLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.tiltLimits.type,parentSchema:schema81.properties.tiltLimits,data:data11};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -4031,7 +4088,7 @@ for(let i4=0; i4<len4; i4++){
 let data18 = data17[i4];
 if(data18 && typeof data18 == "object" && !Array.isArray(data18)){
 if(data18.group === undefined){
-const err35 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema80.properties.minimumTension.items.required,parentSchema:schema80.properties.minimumTension.items,data:data18};
+const err35 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema81.properties.minimumTension.items.required,parentSchema:schema81.properties.minimumTension.items,data:data18};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -4042,7 +4099,7 @@ errors++;
 }
 for(const key4 in data18){
 if(!(((key4 === "group") || (key4 === "shareOfInstallation")) || (key4 === "shareOfBreaking"))){
-const err36 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.minimumTension.items,data:data18};
+const err36 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.minimumTension.items,data:data18};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -4081,7 +4138,7 @@ if(data18.shareOfInstallation !== undefined){
 let data20 = data18.shareOfInstallation;
 if((typeof data20 == "number") && (isFinite(data20))){
 if(data20 > 1 || isNaN(data20)){
-const err39 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema80.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
+const err39 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema81.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -4091,7 +4148,7 @@ vErrors.push(err39);
 errors++;
 }
 if(data20 <= 0 || isNaN(data20)){
-const err40 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema80.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
+const err40 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema81.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -4102,7 +4159,7 @@ errors++;
 }
 }
 else {
-const err41 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema80.properties.minimumTension.items.properties.shareOfInstallation.type,parentSchema:schema80.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
+const err41 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfInstallation",schemaPath:"#/properties/minimumTension/items/properties/shareOfInstallation/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema81.properties.minimumTension.items.properties.shareOfInstallation.type,parentSchema:schema81.properties.minimumTension.items.properties.shareOfInstallation,data:data20};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -4116,7 +4173,7 @@ if(data18.shareOfBreaking !== undefined){
 let data21 = data18.shareOfBreaking;
 if((typeof data21 == "number") && (isFinite(data21))){
 if(data21 > 1 || isNaN(data21)){
-const err42 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema80.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
+const err42 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema81.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
 if(vErrors === null){
 vErrors = [err42];
 }
@@ -4126,7 +4183,7 @@ vErrors.push(err42);
 errors++;
 }
 if(data21 <= 0 || isNaN(data21)){
-const err43 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema80.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
+const err43 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema81.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
 if(vErrors === null){
 vErrors = [err43];
 }
@@ -4137,7 +4194,7 @@ errors++;
 }
 }
 else {
-const err44 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema80.properties.minimumTension.items.properties.shareOfBreaking.type,parentSchema:schema80.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
+const err44 = {instancePath:instancePath+"/minimumTension/" + i4+"/shareOfBreaking",schemaPath:"#/properties/minimumTension/items/properties/shareOfBreaking/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema81.properties.minimumTension.items.properties.shareOfBreaking.type,parentSchema:schema81.properties.minimumTension.items.properties.shareOfBreaking,data:data21};
 if(vErrors === null){
 vErrors = [err44];
 }
@@ -4149,7 +4206,7 @@ errors++;
 }
 }
 else {
-const err45 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.minimumTension.items.type,parentSchema:schema80.properties.minimumTension.items,data:data18};
+const err45 = {instancePath:instancePath+"/minimumTension/" + i4,schemaPath:"#/properties/minimumTension/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.minimumTension.items.type,parentSchema:schema81.properties.minimumTension.items,data:data18};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -4161,7 +4218,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath:instancePath+"/minimumTension",schemaPath:"#/properties/minimumTension/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.minimumTension.type,parentSchema:schema80.properties.minimumTension,data:data17};
+const err46 = {instancePath:instancePath+"/minimumTension",schemaPath:"#/properties/minimumTension/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.minimumTension.type,parentSchema:schema81.properties.minimumTension,data:data17};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -4179,7 +4236,7 @@ for(let i5=0; i5<len5; i5++){
 let data23 = data22[i5];
 if(data23 && typeof data23 == "object" && !Array.isArray(data23)){
 if(data23.group === undefined){
-const err47 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema80.properties.memberDesign.items.required,parentSchema:schema80.properties.memberDesign.items,data:data23};
+const err47 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema81.properties.memberDesign.items.required,parentSchema:schema81.properties.memberDesign.items,data:data23};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -4190,7 +4247,7 @@ errors++;
 }
 for(const key5 in data23){
 if(!(((((key5 === "group") || (key5 === "role")) || (key5 === "bucklingLengthFactor")) || (key5 === "bucklingLength")) || (key5 === "slendernessLimit"))){
-const err48 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.memberDesign.items,data:data23};
+const err48 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.memberDesign.items,data:data23};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -4228,7 +4285,7 @@ errors++;
 if(data23.role !== undefined){
 let data25 = data23.role;
 if(!((((data25 === "leg") || (data25 === "bracing")) || (data25 === "redundant")) || (data25 === "other"))){
-const err51 = {instancePath:instancePath+"/memberDesign/" + i5+"/role",schemaPath:"#/properties/memberDesign/items/properties/role/enum",keyword:"enum",params:{allowedValues: schema80.properties.memberDesign.items.properties.role.enum},message:"must be equal to one of the allowed values",schema:schema80.properties.memberDesign.items.properties.role.enum,parentSchema:schema80.properties.memberDesign.items.properties.role,data:data25};
+const err51 = {instancePath:instancePath+"/memberDesign/" + i5+"/role",schemaPath:"#/properties/memberDesign/items/properties/role/enum",keyword:"enum",params:{allowedValues: schema81.properties.memberDesign.items.properties.role.enum},message:"must be equal to one of the allowed values",schema:schema81.properties.memberDesign.items.properties.role.enum,parentSchema:schema81.properties.memberDesign.items.properties.role,data:data25};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -4315,7 +4372,7 @@ errors++;
 }
 }
 else {
-const err58 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.memberDesign.items.type,parentSchema:schema80.properties.memberDesign.items,data:data23};
+const err58 = {instancePath:instancePath+"/memberDesign/" + i5,schemaPath:"#/properties/memberDesign/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.memberDesign.items.type,parentSchema:schema81.properties.memberDesign.items,data:data23};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -4327,7 +4384,7 @@ errors++;
 }
 }
 else {
-const err59 = {instancePath:instancePath+"/memberDesign",schemaPath:"#/properties/memberDesign/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.memberDesign.type,parentSchema:schema80.properties.memberDesign,data:data22};
+const err59 = {instancePath:instancePath+"/memberDesign",schemaPath:"#/properties/memberDesign/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.memberDesign.type,parentSchema:schema81.properties.memberDesign,data:data22};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -4345,7 +4402,7 @@ for(let i6=0; i6<len6; i6++){
 let data30 = data29[i6];
 if(data30 && typeof data30 == "object" && !Array.isArray(data30)){
 if(data30.nodes === undefined){
-const err60 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema80.properties.twistLimits.items.required,parentSchema:schema80.properties.twistLimits.items,data:data30};
+const err60 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema81.properties.twistLimits.items.required,parentSchema:schema81.properties.twistLimits.items,data:data30};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -4355,7 +4412,7 @@ vErrors.push(err60);
 errors++;
 }
 if(data30.limit === undefined){
-const err61 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema80.properties.twistLimits.items.required,parentSchema:schema80.properties.twistLimits.items,data:data30};
+const err61 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema81.properties.twistLimits.items.required,parentSchema:schema81.properties.twistLimits.items,data:data30};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -4366,7 +4423,7 @@ errors++;
 }
 for(const key6 in data30){
 if(!((key6 === "nodes") || (key6 === "limit"))){
-const err62 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key6},message:"must NOT have additional properties",schema:false,parentSchema:schema80.properties.twistLimits.items,data:data30};
+const err62 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key6},message:"must NOT have additional properties",schema:false,parentSchema:schema81.properties.twistLimits.items,data:data30};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -4380,7 +4437,7 @@ if(data30.nodes !== undefined){
 let data31 = data30.nodes;
 if(Array.isArray(data31)){
 if(data31.length < 2){
-const err63 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema80.properties.twistLimits.items.properties.nodes,data:data31};
+const err63 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/minItems",keyword:"minItems",params:{limit: 2},message:"must NOT have fewer than 2 items",schema:2,parentSchema:schema81.properties.twistLimits.items.properties.nodes,data:data31};
 if(vErrors === null){
 vErrors = [err63];
 }
@@ -4417,7 +4474,7 @@ errors++;
 }
 }
 else {
-const err66 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.twistLimits.items.properties.nodes.type,parentSchema:schema80.properties.twistLimits.items.properties.nodes,data:data31};
+const err66 = {instancePath:instancePath+"/twistLimits/" + i6+"/nodes",schemaPath:"#/properties/twistLimits/items/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.twistLimits.items.properties.nodes.type,parentSchema:schema81.properties.twistLimits.items.properties.nodes,data:data31};
 if(vErrors === null){
 vErrors = [err66];
 }
@@ -4454,7 +4511,7 @@ errors++;
 }
 }
 else {
-const err69 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.properties.twistLimits.items.type,parentSchema:schema80.properties.twistLimits.items,data:data30};
+const err69 = {instancePath:instancePath+"/twistLimits/" + i6,schemaPath:"#/properties/twistLimits/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.properties.twistLimits.items.type,parentSchema:schema81.properties.twistLimits.items,data:data30};
 if(vErrors === null){
 vErrors = [err69];
 }
@@ -4466,7 +4523,7 @@ errors++;
 }
 }
 else {
-const err70 = {instancePath:instancePath+"/twistLimits",schemaPath:"#/properties/twistLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema80.properties.twistLimits.type,parentSchema:schema80.properties.twistLimits,data:data29};
+const err70 = {instancePath:instancePath+"/twistLimits",schemaPath:"#/properties/twistLimits/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema81.properties.twistLimits.type,parentSchema:schema81.properties.twistLimits,data:data29};
 if(vErrors === null){
 vErrors = [err70];
 }
@@ -4478,7 +4535,7 @@ errors++;
 }
 }
 else {
-const err71 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema80.type,parentSchema:schema80,data};
+const err71 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema81.type,parentSchema:schema81,data};
 if(vErrors === null){
 vErrors = [err71];
 }
@@ -4487,19 +4544,19 @@ vErrors.push(err71);
 }
 errors++;
 }
-validate49.errors = vErrors;
+validate50.errors = vErrors;
 return errors === 0;
 }
 
-const schema98 = {"type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"$ref":"#/definitions/id"},"by":{"enum":["pretension","unstressedLength"]},"min":{"type":"number"},"max":{"type":"number"}}}},"targets":{"type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"type":"string"},"summary":{"type":"string"}}}}};
-const schema100 = {"type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"const":"sag"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"const":"tensionShare"},"group":{"$ref":"#/definitions/id"},"share":{"$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"const":"noSlack"},"group":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"const":"plumb"},"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"tolerance":{"$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"const":"reaction"},"node":{"$ref":"#/definitions/id"},"case":{"$ref":"#/definitions/id"},"limit":{"type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
+const schema99 = {"description":"Pretension tuning settings.","type":"object","additionalProperties":false,"required":["variables","targets"],"properties":{"variables":{"description":"Groups whose pretension the tuner may change, and how.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"by":{"description":"pretension: one force for every member of the group (N); unstressedLength: one factor on the members' unstressed lengths (dimensionless).","enum":["pretension","unstressedLength"]},"min":{"description":"Lower bound: N for \"pretension\", a factor for \"unstressedLength\".","type":"number"},"max":{"description":"Upper bound: N for \"pretension\", a factor for \"unstressedLength\".","type":"number"}}}},"targets":{"description":"Targets the tuned design must meet.","type":"array","items":{"$ref":"#/definitions/tuningTarget"}},"lastRun":{"description":"Record of the last tuning run (kept in the project, printed on the schedule).","$ref":"#/definitions/tuningRunRecord"}}};
+const schema101 = {"description":"A tuning target, by \"kind\".","type":"object","required":["kind"],"discriminator":{"propertyName":"kind"},"oneOf":[{"type":"object","additionalProperties":false,"required":["kind","group","case","limit"],"properties":{"kind":{"description":"sag: the sag of every member of the group stays within the limit in the case.","const":"sag"},"group":{"description":"Group id.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"},"limit":{"description":"Sag limit.","$ref":"#/definitions/sagLimit"}}},{"type":"object","additionalProperties":false,"required":["kind","group","share"],"properties":{"kind":{"description":"tensionShare: tension / breaking load at installation (the reference case) equals the share.","const":"tensionShare"},"group":{"description":"Group id.","$ref":"#/definitions/id"},"share":{"description":"Tension as a share of the breaking load, dimensionless (0..1).","$ref":"#/definitions/positive"}}},{"type":"object","additionalProperties":false,"required":["kind","group","case"],"properties":{"kind":{"description":"noSlack: no member of the group is slack in the case.","const":"noSlack"},"group":{"description":"Group id.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"}}},{"type":"object","additionalProperties":false,"required":["kind","base","top","case","tolerance"],"properties":{"kind":{"description":"plumb: the horizontal offset of top relative to base stays within the tolerance in the case.","const":"plumb"},"base":{"description":"Node at the foot of the mast.","$ref":"#/definitions/id"},"top":{"description":"Node at the top of the mast.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"},"tolerance":{"description":"Largest horizontal offset, m.","$ref":"#/definitions/nonNegative"}}},{"type":"object","additionalProperties":false,"required":["kind","node","case","limit"],"properties":{"kind":{"description":"reaction: the magnitude of the support reaction at the node stays within the limit in the case.","const":"reaction"},"node":{"description":"Support node id.","$ref":"#/definitions/id"},"case":{"description":"Load case or combination id.","$ref":"#/definitions/id"},"limit":{"description":"Largest reaction magnitude, N.","type":"number"}}}],"x-message":{"discriminator":"{field} needs \"kind\" to be one of sag, tensionShare, noSlack, plumb, reaction"}};
 
-function validate56(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate57(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.required,parentSchema:schema100,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema101.required,parentSchema:schema101,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -4513,7 +4570,7 @@ if(typeof tag0 == "string"){
 if(tag0 === "sag"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.oneOf[0].required,parentSchema:schema100.oneOf[0],data};
+const err1 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema101.oneOf[0].required,parentSchema:schema101.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -4523,7 +4580,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.group === undefined){
-const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema100.oneOf[0].required,parentSchema:schema100.oneOf[0],data};
+const err2 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema101.oneOf[0].required,parentSchema:schema101.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -4533,7 +4590,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.case === undefined){
-const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema100.oneOf[0].required,parentSchema:schema100.oneOf[0],data};
+const err3 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema101.oneOf[0].required,parentSchema:schema101.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -4543,7 +4600,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data.limit === undefined){
-const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema100.oneOf[0].required,parentSchema:schema100.oneOf[0],data};
+const err4 = {instancePath,schemaPath:"#/oneOf/0/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema101.oneOf[0].required,parentSchema:schema101.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -4554,7 +4611,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "kind") || (key0 === "group")) || (key0 === "case")) || (key0 === "limit"))){
-const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema100.oneOf[0],data};
+const err5 = {instancePath,schemaPath:"#/oneOf/0/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema101.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -4567,7 +4624,7 @@ errors++;
 if(data.kind !== undefined){
 let data0 = data.kind;
 if("sag" !== data0){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema100.oneOf[0].properties.kind,data:data0};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/0/properties/kind/const",keyword:"const",params:{allowedValue: "sag"},message:"must be equal to constant",schema:"sag",parentSchema:schema101.oneOf[0].properties.kind,data:data0};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -4628,14 +4685,14 @@ errors++;
 }
 }
 if(data.limit !== undefined){
-if(!(validate51(data.limit, {instancePath:instancePath+"/limit",parentData:data,parentDataProperty:"limit",rootData}))){
-vErrors = vErrors === null ? validate51.errors : vErrors.concat(validate51.errors);
+if(!(validate52(data.limit, {instancePath:instancePath+"/limit",parentData:data,parentDataProperty:"limit",rootData}))){
+vErrors = vErrors === null ? validate52.errors : vErrors.concat(validate52.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.oneOf[0].type,parentSchema:schema100.oneOf[0],data};
+const err11 = {instancePath,schemaPath:"#/oneOf/0/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema101.oneOf[0].type,parentSchema:schema101.oneOf[0],data};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -4648,7 +4705,7 @@ errors++;
 else if(tag0 === "tensionShare"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.oneOf[1].required,parentSchema:schema100.oneOf[1],data};
+const err12 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema101.oneOf[1].required,parentSchema:schema101.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -4658,7 +4715,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data.group === undefined){
-const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema100.oneOf[1].required,parentSchema:schema100.oneOf[1],data};
+const err13 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema101.oneOf[1].required,parentSchema:schema101.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -4668,7 +4725,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data.share === undefined){
-const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema100.oneOf[1].required,parentSchema:schema100.oneOf[1],data};
+const err14 = {instancePath,schemaPath:"#/oneOf/1/required",keyword:"required",params:{missingProperty: "share"},message:"must have required property '"+"share"+"'",schema:schema101.oneOf[1].required,parentSchema:schema101.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -4679,7 +4736,7 @@ errors++;
 }
 for(const key1 in data){
 if(!(((key1 === "kind") || (key1 === "group")) || (key1 === "share"))){
-const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema100.oneOf[1],data};
+const err15 = {instancePath,schemaPath:"#/oneOf/1/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema101.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -4692,7 +4749,7 @@ errors++;
 if(data.kind !== undefined){
 let data4 = data.kind;
 if("tensionShare" !== data4){
-const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema100.oneOf[1].properties.kind,data:data4};
+const err16 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/1/properties/kind/const",keyword:"const",params:{allowedValue: "tensionShare"},message:"must be equal to constant",schema:"tensionShare",parentSchema:schema101.oneOf[1].properties.kind,data:data4};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -4754,7 +4811,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.oneOf[1].type,parentSchema:schema100.oneOf[1],data};
+const err21 = {instancePath,schemaPath:"#/oneOf/1/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema101.oneOf[1].type,parentSchema:schema101.oneOf[1],data};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -4767,7 +4824,7 @@ errors++;
 else if(tag0 === "noSlack"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.oneOf[2].required,parentSchema:schema100.oneOf[2],data};
+const err22 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema101.oneOf[2].required,parentSchema:schema101.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -4777,7 +4834,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data.group === undefined){
-const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema100.oneOf[2].required,parentSchema:schema100.oneOf[2],data};
+const err23 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema101.oneOf[2].required,parentSchema:schema101.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -4787,7 +4844,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data.case === undefined){
-const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema100.oneOf[2].required,parentSchema:schema100.oneOf[2],data};
+const err24 = {instancePath,schemaPath:"#/oneOf/2/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema101.oneOf[2].required,parentSchema:schema101.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -4798,7 +4855,7 @@ errors++;
 }
 for(const key2 in data){
 if(!(((key2 === "kind") || (key2 === "group")) || (key2 === "case"))){
-const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema100.oneOf[2],data};
+const err25 = {instancePath,schemaPath:"#/oneOf/2/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema101.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -4811,7 +4868,7 @@ errors++;
 if(data.kind !== undefined){
 let data7 = data.kind;
 if("noSlack" !== data7){
-const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema100.oneOf[2].properties.kind,data:data7};
+const err26 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/2/properties/kind/const",keyword:"const",params:{allowedValue: "noSlack"},message:"must be equal to constant",schema:"noSlack",parentSchema:schema101.oneOf[2].properties.kind,data:data7};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -4873,7 +4930,7 @@ errors++;
 }
 }
 else {
-const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.oneOf[2].type,parentSchema:schema100.oneOf[2],data};
+const err31 = {instancePath,schemaPath:"#/oneOf/2/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema101.oneOf[2].type,parentSchema:schema101.oneOf[2],data};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -4886,7 +4943,7 @@ errors++;
 else if(tag0 === "plumb"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.oneOf[3].required,parentSchema:schema100.oneOf[3],data};
+const err32 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema101.oneOf[3].required,parentSchema:schema101.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -4896,7 +4953,7 @@ vErrors.push(err32);
 errors++;
 }
 if(data.base === undefined){
-const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema100.oneOf[3].required,parentSchema:schema100.oneOf[3],data};
+const err33 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema101.oneOf[3].required,parentSchema:schema101.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -4906,7 +4963,7 @@ vErrors.push(err33);
 errors++;
 }
 if(data.top === undefined){
-const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema100.oneOf[3].required,parentSchema:schema100.oneOf[3],data};
+const err34 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema101.oneOf[3].required,parentSchema:schema101.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -4916,7 +4973,7 @@ vErrors.push(err34);
 errors++;
 }
 if(data.case === undefined){
-const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema100.oneOf[3].required,parentSchema:schema100.oneOf[3],data};
+const err35 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema101.oneOf[3].required,parentSchema:schema101.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err35];
 }
@@ -4926,7 +4983,7 @@ vErrors.push(err35);
 errors++;
 }
 if(data.tolerance === undefined){
-const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema100.oneOf[3].required,parentSchema:schema100.oneOf[3],data};
+const err36 = {instancePath,schemaPath:"#/oneOf/3/required",keyword:"required",params:{missingProperty: "tolerance"},message:"must have required property '"+"tolerance"+"'",schema:schema101.oneOf[3].required,parentSchema:schema101.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -4937,7 +4994,7 @@ errors++;
 }
 for(const key3 in data){
 if(!(((((key3 === "kind") || (key3 === "base")) || (key3 === "top")) || (key3 === "case")) || (key3 === "tolerance"))){
-const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema100.oneOf[3],data};
+const err37 = {instancePath,schemaPath:"#/oneOf/3/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema101.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -4950,7 +5007,7 @@ errors++;
 if(data.kind !== undefined){
 let data10 = data.kind;
 if("plumb" !== data10){
-const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema100.oneOf[3].properties.kind,data:data10};
+const err38 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/3/properties/kind/const",keyword:"const",params:{allowedValue: "plumb"},message:"must be equal to constant",schema:"plumb",parentSchema:schema101.oneOf[3].properties.kind,data:data10};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -5062,7 +5119,7 @@ errors++;
 }
 }
 else {
-const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.oneOf[3].type,parentSchema:schema100.oneOf[3],data};
+const err47 = {instancePath,schemaPath:"#/oneOf/3/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema101.oneOf[3].type,parentSchema:schema101.oneOf[3],data};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -5075,7 +5132,7 @@ errors++;
 else if(tag0 === "reaction"){
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.kind === undefined){
-const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema100.oneOf[4].required,parentSchema:schema100.oneOf[4],data};
+const err48 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema101.oneOf[4].required,parentSchema:schema101.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -5085,7 +5142,7 @@ vErrors.push(err48);
 errors++;
 }
 if(data.node === undefined){
-const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema100.oneOf[4].required,parentSchema:schema100.oneOf[4],data};
+const err49 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema101.oneOf[4].required,parentSchema:schema101.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -5095,7 +5152,7 @@ vErrors.push(err49);
 errors++;
 }
 if(data.case === undefined){
-const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema100.oneOf[4].required,parentSchema:schema100.oneOf[4],data};
+const err50 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema101.oneOf[4].required,parentSchema:schema101.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -5105,7 +5162,7 @@ vErrors.push(err50);
 errors++;
 }
 if(data.limit === undefined){
-const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema100.oneOf[4].required,parentSchema:schema100.oneOf[4],data};
+const err51 = {instancePath,schemaPath:"#/oneOf/4/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema101.oneOf[4].required,parentSchema:schema101.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -5116,7 +5173,7 @@ errors++;
 }
 for(const key4 in data){
 if(!((((key4 === "kind") || (key4 === "node")) || (key4 === "case")) || (key4 === "limit"))){
-const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema100.oneOf[4],data};
+const err52 = {instancePath,schemaPath:"#/oneOf/4/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema101.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -5129,7 +5186,7 @@ errors++;
 if(data.kind !== undefined){
 let data15 = data.kind;
 if("reaction" !== data15){
-const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema100.oneOf[4].properties.kind,data:data15};
+const err53 = {instancePath:instancePath+"/kind",schemaPath:"#/oneOf/4/properties/kind/const",keyword:"const",params:{allowedValue: "reaction"},message:"must be equal to constant",schema:"reaction",parentSchema:schema101.oneOf[4].properties.kind,data:data15};
 if(vErrors === null){
 vErrors = [err53];
 }
@@ -5192,7 +5249,7 @@ errors++;
 if(data.limit !== undefined){
 let data18 = data.limit;
 if(!((typeof data18 == "number") && (isFinite(data18)))){
-const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema100.oneOf[4].properties.limit.type,parentSchema:schema100.oneOf[4].properties.limit,data:data18};
+const err58 = {instancePath:instancePath+"/limit",schemaPath:"#/oneOf/4/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema101.oneOf[4].properties.limit.type,parentSchema:schema101.oneOf[4].properties.limit,data:data18};
 if(vErrors === null){
 vErrors = [err58];
 }
@@ -5204,7 +5261,7 @@ errors++;
 }
 }
 else {
-const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.oneOf[4].type,parentSchema:schema100.oneOf[4],data};
+const err59 = {instancePath,schemaPath:"#/oneOf/4/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema101.oneOf[4].type,parentSchema:schema101.oneOf[4],data};
 if(vErrors === null){
 vErrors = [err59];
 }
@@ -5215,7 +5272,7 @@ errors++;
 }
 }
 else {
-const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema100.discriminator,parentSchema:schema100,data};
+const err60 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "mapping", tag: "kind", tagValue: tag0},message:"value of tag \"kind\" must be in oneOf",schema:schema101.discriminator,parentSchema:schema101,data};
 if(vErrors === null){
 vErrors = [err60];
 }
@@ -5226,7 +5283,7 @@ errors++;
 }
 }
 else {
-const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema100.discriminator,parentSchema:schema100,data};
+const err61 = {instancePath,schemaPath:"#/discriminator",keyword:"discriminator",params:{error: "tag", tag: "kind", tagValue: tag0},message:"tag \"kind\" must be string",schema:schema101.discriminator,parentSchema:schema101,data};
 if(vErrors === null){
 vErrors = [err61];
 }
@@ -5237,7 +5294,7 @@ errors++;
 }
 }
 else {
-const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema100.type,parentSchema:schema100,data};
+const err62 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema101.type,parentSchema:schema101,data};
 if(vErrors === null){
 vErrors = [err62];
 }
@@ -5246,17 +5303,515 @@ vErrors.push(err62);
 }
 errors++;
 }
-validate56.errors = vErrors;
+validate57.errors = vErrors;
+return errors === 0;
+}
+
+const schema114 = {"description":"Record of a tuning run: when, outcome, targets and variables.","type":"object","additionalProperties":false,"required":["date","summary"],"properties":{"date":{"description":"Date and time of the run (ISO 8601).","type":"string"},"summary":{"description":"Summary of the run as printed.","type":"string"},"status":{"description":"Outcome: all targets met, some unmet, or a case did not converge.","enum":["met","unmet","notConverged"]},"targets":{"description":"Each target at the end of the run.","type":"array","items":{"type":"object","additionalProperties":false,"required":["kind","label","value","limit","unit","sense","met"],"properties":{"kind":{"description":"Target kind.","type":"string"},"label":{"description":"What the target concerns, as printed.","type":"string"},"value":{"description":"Value reached, in the target's unit (m, N, or a share: dimensionless).","type":"number"},"limit":{"description":"Limit or goal, in the target's unit (m, N, or a share: dimensionless).","type":"number"},"unit":{"description":"Unit of value and limit: m, N, or a share (dimensionless).","enum":["m","N","share"]},"sense":{"description":"atMost: value ≤ limit; equal: value = goal within tolerance.","enum":["atMost","equal"]},"met":{"description":"True when the target is met.","type":"boolean"},"governing":{"description":"Case or member that governs the value.","type":"string"}}}},"variables":{"description":"Each tuning variable: start and end values.","type":"array","items":{"type":"object","additionalProperties":false,"required":["group","by","initial","final"],"properties":{"group":{"description":"Group the variable acts on.","$ref":"#/definitions/id"},"by":{"description":"pretension (N) or unstressedLength (factor).","enum":["pretension","unstressedLength"]},"initial":{"description":"Value before the run (N or factor).","type":"number"},"final":{"description":"Value after the run (N or factor).","type":"number"},"atBound":{"description":"The bound the variable ended on, if any.","enum":["lower","upper"]}}}},"diagnosis":{"description":"Why targets were not met, as printed.","type":"array","items":{"type":"string"}}}};
+
+function validate60(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.date === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema114.required,parentSchema:schema114,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.summary === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema114.required,parentSchema:schema114,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((((((key0 === "date") || (key0 === "summary")) || (key0 === "status")) || (key0 === "targets")) || (key0 === "variables")) || (key0 === "diagnosis"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema114,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+}
+if(data.date !== undefined){
+let data0 = data.date;
+if(typeof data0 !== "string"){
+const err3 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema114.properties.date.type,parentSchema:schema114.properties.date,data:data0};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.summary !== undefined){
+let data1 = data.summary;
+if(typeof data1 !== "string"){
+const err4 = {instancePath:instancePath+"/summary",schemaPath:"#/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema114.properties.summary.type,parentSchema:schema114.properties.summary,data:data1};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+if(data.status !== undefined){
+let data2 = data.status;
+if(!(((data2 === "met") || (data2 === "unmet")) || (data2 === "notConverged"))){
+const err5 = {instancePath:instancePath+"/status",schemaPath:"#/properties/status/enum",keyword:"enum",params:{allowedValues: schema114.properties.status.enum},message:"must be equal to one of the allowed values",schema:schema114.properties.status.enum,parentSchema:schema114.properties.status,data:data2};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.targets !== undefined){
+let data3 = data.targets;
+if(Array.isArray(data3)){
+const len0 = data3.length;
+for(let i0=0; i0<len0; i0++){
+let data4 = data3[i0];
+if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
+if(data4.kind === undefined){
+const err6 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema114.properties.targets.items.required,parentSchema:schema114.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+if(data4.label === undefined){
+const err7 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "label"},message:"must have required property '"+"label"+"'",schema:schema114.properties.targets.items.required,parentSchema:schema114.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+if(data4.value === undefined){
+const err8 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema114.properties.targets.items.required,parentSchema:schema114.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+if(data4.limit === undefined){
+const err9 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema114.properties.targets.items.required,parentSchema:schema114.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+if(data4.unit === undefined){
+const err10 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "unit"},message:"must have required property '"+"unit"+"'",schema:schema114.properties.targets.items.required,parentSchema:schema114.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+if(data4.sense === undefined){
+const err11 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "sense"},message:"must have required property '"+"sense"+"'",schema:schema114.properties.targets.items.required,parentSchema:schema114.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+if(data4.met === undefined){
+const err12 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/required",keyword:"required",params:{missingProperty: "met"},message:"must have required property '"+"met"+"'",schema:schema114.properties.targets.items.required,parentSchema:schema114.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+for(const key1 in data4){
+if(!((((((((key1 === "kind") || (key1 === "label")) || (key1 === "value")) || (key1 === "limit")) || (key1 === "unit")) || (key1 === "sense")) || (key1 === "met")) || (key1 === "governing"))){
+const err13 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema114.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+}
+if(data4.kind !== undefined){
+let data5 = data4.kind;
+if(typeof data5 !== "string"){
+const err14 = {instancePath:instancePath+"/targets/" + i0+"/kind",schemaPath:"#/properties/targets/items/properties/kind/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema114.properties.targets.items.properties.kind.type,parentSchema:schema114.properties.targets.items.properties.kind,data:data5};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+if(data4.label !== undefined){
+let data6 = data4.label;
+if(typeof data6 !== "string"){
+const err15 = {instancePath:instancePath+"/targets/" + i0+"/label",schemaPath:"#/properties/targets/items/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema114.properties.targets.items.properties.label.type,parentSchema:schema114.properties.targets.items.properties.label,data:data6};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+if(data4.value !== undefined){
+let data7 = data4.value;
+if(!((typeof data7 == "number") && (isFinite(data7)))){
+const err16 = {instancePath:instancePath+"/targets/" + i0+"/value",schemaPath:"#/properties/targets/items/properties/value/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema114.properties.targets.items.properties.value.type,parentSchema:schema114.properties.targets.items.properties.value,data:data7};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+}
+if(data4.limit !== undefined){
+let data8 = data4.limit;
+if(!((typeof data8 == "number") && (isFinite(data8)))){
+const err17 = {instancePath:instancePath+"/targets/" + i0+"/limit",schemaPath:"#/properties/targets/items/properties/limit/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema114.properties.targets.items.properties.limit.type,parentSchema:schema114.properties.targets.items.properties.limit,data:data8};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+}
+if(data4.unit !== undefined){
+let data9 = data4.unit;
+if(!(((data9 === "m") || (data9 === "N")) || (data9 === "share"))){
+const err18 = {instancePath:instancePath+"/targets/" + i0+"/unit",schemaPath:"#/properties/targets/items/properties/unit/enum",keyword:"enum",params:{allowedValues: schema114.properties.targets.items.properties.unit.enum},message:"must be equal to one of the allowed values",schema:schema114.properties.targets.items.properties.unit.enum,parentSchema:schema114.properties.targets.items.properties.unit,data:data9};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+}
+if(data4.sense !== undefined){
+let data10 = data4.sense;
+if(!((data10 === "atMost") || (data10 === "equal"))){
+const err19 = {instancePath:instancePath+"/targets/" + i0+"/sense",schemaPath:"#/properties/targets/items/properties/sense/enum",keyword:"enum",params:{allowedValues: schema114.properties.targets.items.properties.sense.enum},message:"must be equal to one of the allowed values",schema:schema114.properties.targets.items.properties.sense.enum,parentSchema:schema114.properties.targets.items.properties.sense,data:data10};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+}
+if(data4.met !== undefined){
+let data11 = data4.met;
+if(typeof data11 !== "boolean"){
+const err20 = {instancePath:instancePath+"/targets/" + i0+"/met",schemaPath:"#/properties/targets/items/properties/met/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema114.properties.targets.items.properties.met.type,parentSchema:schema114.properties.targets.items.properties.met,data:data11};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
+}
+errors++;
+}
+}
+if(data4.governing !== undefined){
+let data12 = data4.governing;
+if(typeof data12 !== "string"){
+const err21 = {instancePath:instancePath+"/targets/" + i0+"/governing",schemaPath:"#/properties/targets/items/properties/governing/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema114.properties.targets.items.properties.governing.type,parentSchema:schema114.properties.targets.items.properties.governing,data:data12};
+if(vErrors === null){
+vErrors = [err21];
+}
+else {
+vErrors.push(err21);
+}
+errors++;
+}
+}
+}
+else {
+const err22 = {instancePath:instancePath+"/targets/" + i0,schemaPath:"#/properties/targets/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema114.properties.targets.items.type,parentSchema:schema114.properties.targets.items,data:data4};
+if(vErrors === null){
+vErrors = [err22];
+}
+else {
+vErrors.push(err22);
+}
+errors++;
+}
+}
+}
+else {
+const err23 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema114.properties.targets.type,parentSchema:schema114.properties.targets,data:data3};
+if(vErrors === null){
+vErrors = [err23];
+}
+else {
+vErrors.push(err23);
+}
+errors++;
+}
+}
+if(data.variables !== undefined){
+let data13 = data.variables;
+if(Array.isArray(data13)){
+const len1 = data13.length;
+for(let i1=0; i1<len1; i1++){
+let data14 = data13[i1];
+if(data14 && typeof data14 == "object" && !Array.isArray(data14)){
+if(data14.group === undefined){
+const err24 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema114.properties.variables.items.required,parentSchema:schema114.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err24];
+}
+else {
+vErrors.push(err24);
+}
+errors++;
+}
+if(data14.by === undefined){
+const err25 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema114.properties.variables.items.required,parentSchema:schema114.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err25];
+}
+else {
+vErrors.push(err25);
+}
+errors++;
+}
+if(data14.initial === undefined){
+const err26 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "initial"},message:"must have required property '"+"initial"+"'",schema:schema114.properties.variables.items.required,parentSchema:schema114.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err26];
+}
+else {
+vErrors.push(err26);
+}
+errors++;
+}
+if(data14.final === undefined){
+const err27 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "final"},message:"must have required property '"+"final"+"'",schema:schema114.properties.variables.items.required,parentSchema:schema114.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err27];
+}
+else {
+vErrors.push(err27);
+}
+errors++;
+}
+for(const key2 in data14){
+if(!(((((key2 === "group") || (key2 === "by")) || (key2 === "initial")) || (key2 === "final")) || (key2 === "atBound"))){
+const err28 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema114.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err28];
+}
+else {
+vErrors.push(err28);
+}
+errors++;
+}
+}
+if(data14.group !== undefined){
+let data15 = data14.group;
+if(typeof data15 === "string"){
+if(!pattern0.test(data15)){
+const err29 = {instancePath:instancePath+"/variables/" + i1+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data15};
+if(vErrors === null){
+vErrors = [err29];
+}
+else {
+vErrors.push(err29);
+}
+errors++;
+}
+}
+else {
+const err30 = {instancePath:instancePath+"/variables/" + i1+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data15};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+}
+if(data14.by !== undefined){
+let data16 = data14.by;
+if(!((data16 === "pretension") || (data16 === "unstressedLength"))){
+const err31 = {instancePath:instancePath+"/variables/" + i1+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema114.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema114.properties.variables.items.properties.by.enum,parentSchema:schema114.properties.variables.items.properties.by,data:data16};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+}
+if(data14.initial !== undefined){
+let data17 = data14.initial;
+if(!((typeof data17 == "number") && (isFinite(data17)))){
+const err32 = {instancePath:instancePath+"/variables/" + i1+"/initial",schemaPath:"#/properties/variables/items/properties/initial/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema114.properties.variables.items.properties.initial.type,parentSchema:schema114.properties.variables.items.properties.initial,data:data17};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+if(data14.final !== undefined){
+let data18 = data14.final;
+if(!((typeof data18 == "number") && (isFinite(data18)))){
+const err33 = {instancePath:instancePath+"/variables/" + i1+"/final",schemaPath:"#/properties/variables/items/properties/final/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema114.properties.variables.items.properties.final.type,parentSchema:schema114.properties.variables.items.properties.final,data:data18};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+}
+if(data14.atBound !== undefined){
+let data19 = data14.atBound;
+if(!((data19 === "lower") || (data19 === "upper"))){
+const err34 = {instancePath:instancePath+"/variables/" + i1+"/atBound",schemaPath:"#/properties/variables/items/properties/atBound/enum",keyword:"enum",params:{allowedValues: schema114.properties.variables.items.properties.atBound.enum},message:"must be equal to one of the allowed values",schema:schema114.properties.variables.items.properties.atBound.enum,parentSchema:schema114.properties.variables.items.properties.atBound,data:data19};
+if(vErrors === null){
+vErrors = [err34];
+}
+else {
+vErrors.push(err34);
+}
+errors++;
+}
+}
+}
+else {
+const err35 = {instancePath:instancePath+"/variables/" + i1,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema114.properties.variables.items.type,parentSchema:schema114.properties.variables.items,data:data14};
+if(vErrors === null){
+vErrors = [err35];
+}
+else {
+vErrors.push(err35);
+}
+errors++;
+}
+}
+}
+else {
+const err36 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema114.properties.variables.type,parentSchema:schema114.properties.variables,data:data13};
+if(vErrors === null){
+vErrors = [err36];
+}
+else {
+vErrors.push(err36);
+}
+errors++;
+}
+}
+if(data.diagnosis !== undefined){
+let data20 = data.diagnosis;
+if(Array.isArray(data20)){
+const len2 = data20.length;
+for(let i2=0; i2<len2; i2++){
+let data21 = data20[i2];
+if(typeof data21 !== "string"){
+const err37 = {instancePath:instancePath+"/diagnosis/" + i2,schemaPath:"#/properties/diagnosis/items/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema114.properties.diagnosis.items.type,parentSchema:schema114.properties.diagnosis.items,data:data21};
+if(vErrors === null){
+vErrors = [err37];
+}
+else {
+vErrors.push(err37);
+}
+errors++;
+}
+}
+}
+else {
+const err38 = {instancePath:instancePath+"/diagnosis",schemaPath:"#/properties/diagnosis/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema114.properties.diagnosis.type,parentSchema:schema114.properties.diagnosis,data:data20};
+if(vErrors === null){
+vErrors = [err38];
+}
+else {
+vErrors.push(err38);
+}
+errors++;
+}
+}
+}
+else {
+const err39 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema114.type,parentSchema:schema114,data};
+if(vErrors === null){
+vErrors = [err39];
+}
+else {
+vErrors.push(err39);
+}
+errors++;
+}
+validate60.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate55(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate56(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.variables === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema98.required,parentSchema:schema98,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "variables"},message:"must have required property '"+"variables"+"'",schema:schema99.required,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5266,7 +5821,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.targets === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema98.required,parentSchema:schema98,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "targets"},message:"must have required property '"+"targets"+"'",schema:schema99.required,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5277,7 +5832,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "variables") || (key0 === "targets")) || (key0 === "lastRun"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema98,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5295,7 +5850,7 @@ for(let i0=0; i0<len0; i0++){
 let data1 = data0[i0];
 if(data1 && typeof data1 == "object" && !Array.isArray(data1)){
 if(data1.group === undefined){
-const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema98.properties.variables.items.required,parentSchema:schema98.properties.variables.items,data:data1};
+const err3 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema99.properties.variables.items.required,parentSchema:schema99.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5305,7 +5860,7 @@ vErrors.push(err3);
 errors++;
 }
 if(data1.by === undefined){
-const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema98.properties.variables.items.required,parentSchema:schema98.properties.variables.items,data:data1};
+const err4 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/required",keyword:"required",params:{missingProperty: "by"},message:"must have required property '"+"by"+"'",schema:schema99.properties.variables.items.required,parentSchema:schema99.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -5316,7 +5871,7 @@ errors++;
 }
 for(const key1 in data1){
 if(!((((key1 === "group") || (key1 === "by")) || (key1 === "min")) || (key1 === "max"))){
-const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema98.properties.variables.items,data:data1};
+const err5 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema99.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -5354,7 +5909,7 @@ errors++;
 if(data1.by !== undefined){
 let data3 = data1.by;
 if(!((data3 === "pretension") || (data3 === "unstressedLength"))){
-const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema98.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema98.properties.variables.items.properties.by.enum,parentSchema:schema98.properties.variables.items.properties.by,data:data3};
+const err8 = {instancePath:instancePath+"/variables/" + i0+"/by",schemaPath:"#/properties/variables/items/properties/by/enum",keyword:"enum",params:{allowedValues: schema99.properties.variables.items.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema99.properties.variables.items.properties.by.enum,parentSchema:schema99.properties.variables.items.properties.by,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -5367,7 +5922,7 @@ errors++;
 if(data1.min !== undefined){
 let data4 = data1.min;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema98.properties.variables.items.properties.min.type,parentSchema:schema98.properties.variables.items.properties.min,data:data4};
+const err9 = {instancePath:instancePath+"/variables/" + i0+"/min",schemaPath:"#/properties/variables/items/properties/min/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema99.properties.variables.items.properties.min.type,parentSchema:schema99.properties.variables.items.properties.min,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -5380,7 +5935,7 @@ errors++;
 if(data1.max !== undefined){
 let data5 = data1.max;
 if(!((typeof data5 == "number") && (isFinite(data5)))){
-const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema98.properties.variables.items.properties.max.type,parentSchema:schema98.properties.variables.items.properties.max,data:data5};
+const err10 = {instancePath:instancePath+"/variables/" + i0+"/max",schemaPath:"#/properties/variables/items/properties/max/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema99.properties.variables.items.properties.max.type,parentSchema:schema99.properties.variables.items.properties.max,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -5392,7 +5947,7 @@ errors++;
 }
 }
 else {
-const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.properties.variables.items.type,parentSchema:schema98.properties.variables.items,data:data1};
+const err11 = {instancePath:instancePath+"/variables/" + i0,schemaPath:"#/properties/variables/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema99.properties.variables.items.type,parentSchema:schema99.properties.variables.items,data:data1};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -5404,7 +5959,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema98.properties.variables.type,parentSchema:schema98.properties.variables,data:data0};
+const err12 = {instancePath:instancePath+"/variables",schemaPath:"#/properties/variables/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema99.properties.variables.type,parentSchema:schema99.properties.variables,data:data0};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -5419,14 +5974,14 @@ let data6 = data.targets;
 if(Array.isArray(data6)){
 const len1 = data6.length;
 for(let i1=0; i1<len1; i1++){
-if(!(validate56(data6[i1], {instancePath:instancePath+"/targets/" + i1,parentData:data6,parentDataProperty:i1,rootData}))){
-vErrors = vErrors === null ? validate56.errors : vErrors.concat(validate56.errors);
+if(!(validate57(data6[i1], {instancePath:instancePath+"/targets/" + i1,parentData:data6,parentDataProperty:i1,rootData}))){
+vErrors = vErrors === null ? validate57.errors : vErrors.concat(validate57.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema98.properties.targets.type,parentSchema:schema98.properties.targets,data:data6};
+const err13 = {instancePath:instancePath+"/targets",schemaPath:"#/properties/targets/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema99.properties.targets.type,parentSchema:schema99.properties.targets,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -5437,10 +5992,14 @@ errors++;
 }
 }
 if(data.lastRun !== undefined){
-let data8 = data.lastRun;
-if(data8 && typeof data8 == "object" && !Array.isArray(data8)){
-if(data8.date === undefined){
-const err14 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema98.properties.lastRun.required,parentSchema:schema98.properties.lastRun,data:data8};
+if(!(validate60(data.lastRun, {instancePath:instancePath+"/lastRun",parentData:data,parentDataProperty:"lastRun",rootData}))){
+vErrors = vErrors === null ? validate60.errors : vErrors.concat(validate60.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err14 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema99.type,parentSchema:schema99,data};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -5449,90 +6008,19 @@ vErrors.push(err14);
 }
 errors++;
 }
-if(data8.summary === undefined){
-const err15 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/required",keyword:"required",params:{missingProperty: "summary"},message:"must have required property '"+"summary"+"'",schema:schema98.properties.lastRun.required,parentSchema:schema98.properties.lastRun,data:data8};
-if(vErrors === null){
-vErrors = [err15];
-}
-else {
-vErrors.push(err15);
-}
-errors++;
-}
-for(const key2 in data8){
-if(!((key2 === "date") || (key2 === "summary"))){
-const err16 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema98.properties.lastRun,data:data8};
-if(vErrors === null){
-vErrors = [err16];
-}
-else {
-vErrors.push(err16);
-}
-errors++;
-}
-}
-if(data8.date !== undefined){
-let data9 = data8.date;
-if(typeof data9 !== "string"){
-const err17 = {instancePath:instancePath+"/lastRun/date",schemaPath:"#/properties/lastRun/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema98.properties.lastRun.properties.date.type,parentSchema:schema98.properties.lastRun.properties.date,data:data9};
-if(vErrors === null){
-vErrors = [err17];
-}
-else {
-vErrors.push(err17);
-}
-errors++;
-}
-}
-if(data8.summary !== undefined){
-let data10 = data8.summary;
-if(typeof data10 !== "string"){
-const err18 = {instancePath:instancePath+"/lastRun/summary",schemaPath:"#/properties/lastRun/properties/summary/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema98.properties.lastRun.properties.summary.type,parentSchema:schema98.properties.lastRun.properties.summary,data:data10};
-if(vErrors === null){
-vErrors = [err18];
-}
-else {
-vErrors.push(err18);
-}
-errors++;
-}
-}
-}
-else {
-const err19 = {instancePath:instancePath+"/lastRun",schemaPath:"#/properties/lastRun/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.properties.lastRun.type,parentSchema:schema98.properties.lastRun,data:data8};
-if(vErrors === null){
-vErrors = [err19];
-}
-else {
-vErrors.push(err19);
-}
-errors++;
-}
-}
-}
-else {
-const err20 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema98.type,parentSchema:schema98,data};
-if(vErrors === null){
-vErrors = [err20];
-}
-else {
-vErrors.push(err20);
-}
-errors++;
-}
-validate55.errors = vErrors;
+validate56.errors = vErrors;
 return errors === 0;
 }
 
-const schema113 = {"type":"object","additionalProperties":false,"properties":{"temperatures":{"type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
+const schema116 = {"description":"Installation data settings.","type":"object","additionalProperties":false,"properties":{"temperatures":{"description":"Installation temperatures for the table, K (default −20 °C to +40 °C in 5 °C steps).","type":"array","items":{"$ref":"#/definitions/absoluteTemperature"}}}};
 
-function validate60(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate63(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!(key0 === "temperatures")){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema113,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema116,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5573,7 +6061,7 @@ errors++;
 }
 }
 else {
-const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema113.properties.temperatures.type,parentSchema:schema113.properties.temperatures,data:data0};
+const err3 = {instancePath:instancePath+"/temperatures",schemaPath:"#/properties/temperatures/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema116.properties.temperatures.type,parentSchema:schema116.properties.temperatures,data:data0};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5585,7 +6073,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema113.type,parentSchema:schema113,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema116.type,parentSchema:schema116,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -5594,18 +6082,18 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate60.errors = vErrors;
+validate63.errors = vErrors;
 return errors === 0;
 }
 
-const schema115 = {"type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"$ref":"#/definitions/id"},"kind":{"enum":["guyedMast","saddleNet","radialNet"]},"params":{"type":"object"}}};
+const schema118 = {"description":"A record of a generator run, for re-running it.","type":"object","additionalProperties":false,"required":["id","kind","params"],"properties":{"id":{"description":"Generator record id; generated parts carry it as \"generatedBy\" and as an id prefix.","$ref":"#/definitions/id"},"kind":{"description":"Which generator: guyed lattice mast, saddle net or radial net.","enum":["guyedMast","saddleNet","radialNet"]},"params":{"description":"The generator's parameters, in SI units, as its form shows them.","type":"object"}}};
 
-function validate62(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate65(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema115.required,parentSchema:schema115,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema118.required,parentSchema:schema118,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5615,7 +6103,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema115.required,parentSchema:schema115,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema118.required,parentSchema:schema118,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5625,7 +6113,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.params === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema115.required,parentSchema:schema115,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "params"},message:"must have required property '"+"params"+"'",schema:schema118.required,parentSchema:schema118,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5636,7 +6124,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((key0 === "id") || (key0 === "kind")) || (key0 === "params"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema115,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema118,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5674,7 +6162,7 @@ errors++;
 if(data.kind !== undefined){
 let data1 = data.kind;
 if(!(((data1 === "guyedMast") || (data1 === "saddleNet")) || (data1 === "radialNet"))){
-const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema115.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema115.properties.kind.enum,parentSchema:schema115.properties.kind,data:data1};
+const err6 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema118.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema118.properties.kind.enum,parentSchema:schema118.properties.kind,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -5687,7 +6175,7 @@ errors++;
 if(data.params !== undefined){
 let data2 = data.params;
 if(!(data2 && typeof data2 == "object" && !Array.isArray(data2))){
-const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.properties.params.type,parentSchema:schema115.properties.params,data:data2};
+const err7 = {instancePath:instancePath+"/params",schemaPath:"#/properties/params/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema118.properties.params.type,parentSchema:schema118.properties.params,data:data2};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -5699,7 +6187,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema115.type,parentSchema:schema115,data};
+const err8 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema118.type,parentSchema:schema118,data};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -5708,19 +6196,19 @@ vErrors.push(err8);
 }
 errors++;
 }
-validate62.errors = vErrors;
+validate65.errors = vErrors;
 return errors === 0;
 }
 
-const schema117 = {"type":"object","additionalProperties":false,"properties":{"units":{"enum":["SI","US"]},"deformationScale":{"$ref":"#/definitions/positive"}}};
+const schema120 = {"description":"Display preferences; never affect results.","type":"object","additionalProperties":false,"properties":{"units":{"description":"Display units: SI or US customary.","enum":["SI","US"]},"deformationScale":{"description":"Scale factor on displacements in the 3D view, dimensionless.","$ref":"#/definitions/positive"}}};
 
-function validate64(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate67(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
 if(!((key0 === "units") || (key0 === "deformationScale"))){
-const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema117,data};
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema120,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5733,7 +6221,7 @@ errors++;
 if(data.units !== undefined){
 let data0 = data.units;
 if(!((data0 === "SI") || (data0 === "US"))){
-const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema117.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema117.properties.units.enum,parentSchema:schema117.properties.units,data:data0};
+const err1 = {instancePath:instancePath+"/units",schemaPath:"#/properties/units/enum",keyword:"enum",params:{allowedValues: schema120.properties.units.enum},message:"must be equal to one of the allowed values",schema:schema120.properties.units.enum,parentSchema:schema120.properties.units,data:data0};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5770,7 +6258,7 @@ errors++;
 }
 }
 else {
-const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema117.type,parentSchema:schema117,data};
+const err4 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema120.type,parentSchema:schema120,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -5779,18 +6267,18 @@ vErrors.push(err4);
 }
 errors++;
 }
-validate64.errors = vErrors;
+validate67.errors = vErrors;
 return errors === 0;
 }
 
-const schema119 = {"type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"type":"string"},"actionFactors":{"type":"object","additionalProperties":false,"properties":{"permanent":{"$ref":"#/definitions/positive"},"permanentFavourable":{"$ref":"#/definitions/positive"},"prestress":{"$ref":"#/definitions/positive"},"wind":{"$ref":"#/definitions/positive"},"ice":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/positive"},"accidental":{"$ref":"#/definitions/positive"}}},"combinationFactors":{"type":"object","additionalProperties":false,"properties":{"wind":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"type":"object","additionalProperties":false,"properties":{"breakingFactor":{"$ref":"#/definitions/positive"},"partialFactor":{"$ref":"#/definitions/positive"},"serviceabilityShare":{"type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"type":"object","additionalProperties":false,"properties":{"gammaM0":{"$ref":"#/definitions/positive"},"gammaM1":{"$ref":"#/definitions/positive"}}},"allowable":{"type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}};
+const schema122 = {"description":"Check format and its factors; every default is listed with its source in the design-check report.","type":"object","additionalProperties":false,"required":["format"],"properties":{"format":{"description":"limitState: partial factors on actions and resistances; allowable: safety factors on service states.","enum":["limitState","allowable"],"x-message":"{field} must be one of limitState, allowable"},"label":{"description":"Name of the basis as printed on reports.","type":"string"},"actionFactors":{"description":"Limit state: partial factors γ_F on actions (unfavourable unless named favourable), dimensionless.","type":"object","additionalProperties":false,"properties":{"permanent":{"description":"γ_G on unfavourable permanent actions, dimensionless.","$ref":"#/definitions/positive"},"permanentFavourable":{"description":"γ_G on favourable permanent actions, dimensionless.","$ref":"#/definitions/positive"},"prestress":{"description":"Factor on the pretension; only 1 is supported (every case starts from the installed pretension).","$ref":"#/definitions/positive"},"wind":{"description":"γ_Q on wind, dimensionless.","$ref":"#/definitions/positive"},"ice":{"description":"γ_Q on ice, dimensionless.","$ref":"#/definitions/positive"},"temperature":{"description":"γ_Q on temperature, dimensionless.","$ref":"#/definitions/positive"},"accidental":{"description":"Factor on accidental actions, dimensionless.","$ref":"#/definitions/positive"}}},"combinationFactors":{"description":"Combination factors ψ0 of accompanying variable actions (both formats), dimensionless.","type":"object","additionalProperties":false,"properties":{"wind":{"description":"ψ0 of wind, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"ice":{"description":"ψ0 of ice, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}},"temperature":{"description":"ψ0 of temperature, dimensionless.","type":"number","minimum":0,"maximum":1,"x-message":{"minimum":"{field} must be between 0 and 1","maximum":"{field} must be between 0 and 1"}}}},"cable":{"description":"Limit state: cable resistance F_Rd = k_e · MBL / (breakingFactor · γ_R); serviceability T ≤ serviceabilityShare · k_e · MBL.","type":"object","additionalProperties":false,"properties":{"breakingFactor":{"description":"Factor on the minimum breaking load in F_Rd, dimensionless.","$ref":"#/definitions/positive"},"partialFactor":{"description":"Partial factor γ_R of the cable resistance, dimensionless.","$ref":"#/definitions/positive"},"serviceabilityShare":{"description":"Largest service tension as a share of k_e · MBL, dimensionless.","type":"number","exclusiveMinimum":0,"maximum":1,"x-message":{"exclusiveMinimum":"{field} must be above 0 and at most 1","maximum":"{field} must be above 0 and at most 1"}}}},"steel":{"description":"Limit state: partial factors of steel members, dimensionless.","type":"object","additionalProperties":false,"properties":{"gammaM0":{"description":"γ_M0: resistance of cross-sections (yield), dimensionless.","$ref":"#/definitions/positive"},"gammaM1":{"description":"γ_M1: resistance of members to instability (buckling), dimensionless.","$ref":"#/definitions/positive"}}},"allowable":{"description":"Allowable format: safety factors, dimensionless.","type":"object","additionalProperties":false,"properties":{"cableSafetyFactor":{"description":"Cable tension ≤ k_e · MBL / cableSafetyFactor.","type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}},"memberSafetyFactor":{"description":"Member force ≤ resistance (yield or χ · yield) / memberSafetyFactor.","type":"number","minimum":1,"x-message":{"minimum":"{field} must be at least 1"}}}}}};
 
-function validate66(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate69(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.format === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "format"},message:"must have required property '"+"format"+"'",schema:schema119.required,parentSchema:schema119,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "format"},message:"must have required property '"+"format"+"'",schema:schema122.required,parentSchema:schema122,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -5801,7 +6289,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "format") || (key0 === "label")) || (key0 === "actionFactors")) || (key0 === "combinationFactors")) || (key0 === "cable")) || (key0 === "steel")) || (key0 === "allowable"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema119,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema122,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -5814,7 +6302,7 @@ errors++;
 if(data.format !== undefined){
 let data0 = data.format;
 if(!((data0 === "limitState") || (data0 === "allowable"))){
-const err2 = {instancePath:instancePath+"/format",schemaPath:"#/properties/format/enum",keyword:"enum",params:{allowedValues: schema119.properties.format.enum},message:"must be equal to one of the allowed values",schema:schema119.properties.format.enum,parentSchema:schema119.properties.format,data:data0};
+const err2 = {instancePath:instancePath+"/format",schemaPath:"#/properties/format/enum",keyword:"enum",params:{allowedValues: schema122.properties.format.enum},message:"must be equal to one of the allowed values",schema:schema122.properties.format.enum,parentSchema:schema122.properties.format,data:data0};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -5827,7 +6315,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err3 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema119.properties.label.type,parentSchema:schema119.properties.label,data:data1};
+const err3 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema122.properties.label.type,parentSchema:schema122.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -5842,7 +6330,7 @@ let data2 = data.actionFactors;
 if(data2 && typeof data2 == "object" && !Array.isArray(data2)){
 for(const key1 in data2){
 if(!(((((((key1 === "permanent") || (key1 === "permanentFavourable")) || (key1 === "prestress")) || (key1 === "wind")) || (key1 === "ice")) || (key1 === "temperature")) || (key1 === "accidental"))){
-const err4 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.actionFactors,data:data2};
+const err4 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema122.properties.actionFactors,data:data2};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -6029,7 +6517,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.actionFactors.type,parentSchema:schema119.properties.actionFactors,data:data2};
+const err19 = {instancePath:instancePath+"/actionFactors",schemaPath:"#/properties/actionFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema122.properties.actionFactors.type,parentSchema:schema122.properties.actionFactors,data:data2};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -6044,7 +6532,7 @@ let data10 = data.combinationFactors;
 if(data10 && typeof data10 == "object" && !Array.isArray(data10)){
 for(const key2 in data10){
 if(!(((key2 === "wind") || (key2 === "ice")) || (key2 === "temperature"))){
-const err20 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.combinationFactors,data:data10};
+const err20 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema122.properties.combinationFactors,data:data10};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -6058,7 +6546,7 @@ if(data10.wind !== undefined){
 let data11 = data10.wind;
 if((typeof data11 == "number") && (isFinite(data11))){
 if(data11 > 1 || isNaN(data11)){
-const err21 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.combinationFactors.properties.wind,data:data11};
+const err21 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema122.properties.combinationFactors.properties.wind,data:data11};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -6068,7 +6556,7 @@ vErrors.push(err21);
 errors++;
 }
 if(data11 < 0 || isNaN(data11)){
-const err22 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema119.properties.combinationFactors.properties.wind,data:data11};
+const err22 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema122.properties.combinationFactors.properties.wind,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -6079,7 +6567,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.combinationFactors.properties.wind.type,parentSchema:schema119.properties.combinationFactors.properties.wind,data:data11};
+const err23 = {instancePath:instancePath+"/combinationFactors/wind",schemaPath:"#/properties/combinationFactors/properties/wind/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema122.properties.combinationFactors.properties.wind.type,parentSchema:schema122.properties.combinationFactors.properties.wind,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -6093,7 +6581,7 @@ if(data10.ice !== undefined){
 let data12 = data10.ice;
 if((typeof data12 == "number") && (isFinite(data12))){
 if(data12 > 1 || isNaN(data12)){
-const err24 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.combinationFactors.properties.ice,data:data12};
+const err24 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema122.properties.combinationFactors.properties.ice,data:data12};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -6103,7 +6591,7 @@ vErrors.push(err24);
 errors++;
 }
 if(data12 < 0 || isNaN(data12)){
-const err25 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema119.properties.combinationFactors.properties.ice,data:data12};
+const err25 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema122.properties.combinationFactors.properties.ice,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -6114,7 +6602,7 @@ errors++;
 }
 }
 else {
-const err26 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.combinationFactors.properties.ice.type,parentSchema:schema119.properties.combinationFactors.properties.ice,data:data12};
+const err26 = {instancePath:instancePath+"/combinationFactors/ice",schemaPath:"#/properties/combinationFactors/properties/ice/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema122.properties.combinationFactors.properties.ice.type,parentSchema:schema122.properties.combinationFactors.properties.ice,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -6128,7 +6616,7 @@ if(data10.temperature !== undefined){
 let data13 = data10.temperature;
 if((typeof data13 == "number") && (isFinite(data13))){
 if(data13 > 1 || isNaN(data13)){
-const err27 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.combinationFactors.properties.temperature,data:data13};
+const err27 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema122.properties.combinationFactors.properties.temperature,data:data13};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -6138,7 +6626,7 @@ vErrors.push(err27);
 errors++;
 }
 if(data13 < 0 || isNaN(data13)){
-const err28 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema119.properties.combinationFactors.properties.temperature,data:data13};
+const err28 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema122.properties.combinationFactors.properties.temperature,data:data13};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -6149,7 +6637,7 @@ errors++;
 }
 }
 else {
-const err29 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.combinationFactors.properties.temperature.type,parentSchema:schema119.properties.combinationFactors.properties.temperature,data:data13};
+const err29 = {instancePath:instancePath+"/combinationFactors/temperature",schemaPath:"#/properties/combinationFactors/properties/temperature/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema122.properties.combinationFactors.properties.temperature.type,parentSchema:schema122.properties.combinationFactors.properties.temperature,data:data13};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -6161,7 +6649,7 @@ errors++;
 }
 }
 else {
-const err30 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.combinationFactors.type,parentSchema:schema119.properties.combinationFactors,data:data10};
+const err30 = {instancePath:instancePath+"/combinationFactors",schemaPath:"#/properties/combinationFactors/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema122.properties.combinationFactors.type,parentSchema:schema122.properties.combinationFactors,data:data10};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -6176,7 +6664,7 @@ let data14 = data.cable;
 if(data14 && typeof data14 == "object" && !Array.isArray(data14)){
 for(const key3 in data14){
 if(!(((key3 === "breakingFactor") || (key3 === "partialFactor")) || (key3 === "serviceabilityShare"))){
-const err31 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.cable,data:data14};
+const err31 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key3},message:"must NOT have additional properties",schema:false,parentSchema:schema122.properties.cable,data:data14};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -6240,7 +6728,7 @@ if(data14.serviceabilityShare !== undefined){
 let data17 = data14.serviceabilityShare;
 if((typeof data17 == "number") && (isFinite(data17))){
 if(data17 > 1 || isNaN(data17)){
-const err36 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema119.properties.cable.properties.serviceabilityShare,data:data17};
+const err36 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/maximum",keyword:"maximum",params:{comparison: "<=", limit: 1},message:"must be <= 1",schema:1,parentSchema:schema122.properties.cable.properties.serviceabilityShare,data:data17};
 if(vErrors === null){
 vErrors = [err36];
 }
@@ -6250,7 +6738,7 @@ vErrors.push(err36);
 errors++;
 }
 if(data17 <= 0 || isNaN(data17)){
-const err37 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema119.properties.cable.properties.serviceabilityShare,data:data17};
+const err37 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema122.properties.cable.properties.serviceabilityShare,data:data17};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -6261,7 +6749,7 @@ errors++;
 }
 }
 else {
-const err38 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.cable.properties.serviceabilityShare.type,parentSchema:schema119.properties.cable.properties.serviceabilityShare,data:data17};
+const err38 = {instancePath:instancePath+"/cable/serviceabilityShare",schemaPath:"#/properties/cable/properties/serviceabilityShare/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema122.properties.cable.properties.serviceabilityShare.type,parentSchema:schema122.properties.cable.properties.serviceabilityShare,data:data17};
 if(vErrors === null){
 vErrors = [err38];
 }
@@ -6273,7 +6761,7 @@ errors++;
 }
 }
 else {
-const err39 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.cable.type,parentSchema:schema119.properties.cable,data:data14};
+const err39 = {instancePath:instancePath+"/cable",schemaPath:"#/properties/cable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema122.properties.cable.type,parentSchema:schema122.properties.cable,data:data14};
 if(vErrors === null){
 vErrors = [err39];
 }
@@ -6288,7 +6776,7 @@ let data18 = data.steel;
 if(data18 && typeof data18 == "object" && !Array.isArray(data18)){
 for(const key4 in data18){
 if(!((key4 === "gammaM0") || (key4 === "gammaM1"))){
-const err40 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.steel,data:data18};
+const err40 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key4},message:"must NOT have additional properties",schema:false,parentSchema:schema122.properties.steel,data:data18};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -6350,7 +6838,7 @@ errors++;
 }
 }
 else {
-const err45 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.steel.type,parentSchema:schema119.properties.steel,data:data18};
+const err45 = {instancePath:instancePath+"/steel",schemaPath:"#/properties/steel/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema122.properties.steel.type,parentSchema:schema122.properties.steel,data:data18};
 if(vErrors === null){
 vErrors = [err45];
 }
@@ -6365,7 +6853,7 @@ let data21 = data.allowable;
 if(data21 && typeof data21 == "object" && !Array.isArray(data21)){
 for(const key5 in data21){
 if(!((key5 === "cableSafetyFactor") || (key5 === "memberSafetyFactor"))){
-const err46 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema119.properties.allowable,data:data21};
+const err46 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key5},message:"must NOT have additional properties",schema:false,parentSchema:schema122.properties.allowable,data:data21};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -6379,7 +6867,7 @@ if(data21.cableSafetyFactor !== undefined){
 let data22 = data21.cableSafetyFactor;
 if((typeof data22 == "number") && (isFinite(data22))){
 if(data22 < 1 || isNaN(data22)){
-const err47 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema119.properties.allowable.properties.cableSafetyFactor,data:data22};
+const err47 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema122.properties.allowable.properties.cableSafetyFactor,data:data22};
 if(vErrors === null){
 vErrors = [err47];
 }
@@ -6390,7 +6878,7 @@ errors++;
 }
 }
 else {
-const err48 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.allowable.properties.cableSafetyFactor.type,parentSchema:schema119.properties.allowable.properties.cableSafetyFactor,data:data22};
+const err48 = {instancePath:instancePath+"/allowable/cableSafetyFactor",schemaPath:"#/properties/allowable/properties/cableSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema122.properties.allowable.properties.cableSafetyFactor.type,parentSchema:schema122.properties.allowable.properties.cableSafetyFactor,data:data22};
 if(vErrors === null){
 vErrors = [err48];
 }
@@ -6404,7 +6892,7 @@ if(data21.memberSafetyFactor !== undefined){
 let data23 = data21.memberSafetyFactor;
 if((typeof data23 == "number") && (isFinite(data23))){
 if(data23 < 1 || isNaN(data23)){
-const err49 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema119.properties.allowable.properties.memberSafetyFactor,data:data23};
+const err49 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema122.properties.allowable.properties.memberSafetyFactor,data:data23};
 if(vErrors === null){
 vErrors = [err49];
 }
@@ -6415,7 +6903,7 @@ errors++;
 }
 }
 else {
-const err50 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema119.properties.allowable.properties.memberSafetyFactor.type,parentSchema:schema119.properties.allowable.properties.memberSafetyFactor,data:data23};
+const err50 = {instancePath:instancePath+"/allowable/memberSafetyFactor",schemaPath:"#/properties/allowable/properties/memberSafetyFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema122.properties.allowable.properties.memberSafetyFactor.type,parentSchema:schema122.properties.allowable.properties.memberSafetyFactor,data:data23};
 if(vErrors === null){
 vErrors = [err50];
 }
@@ -6427,7 +6915,7 @@ errors++;
 }
 }
 else {
-const err51 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.properties.allowable.type,parentSchema:schema119.properties.allowable,data:data21};
+const err51 = {instancePath:instancePath+"/allowable",schemaPath:"#/properties/allowable/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema122.properties.allowable.type,parentSchema:schema122.properties.allowable,data:data21};
 if(vErrors === null){
 vErrors = [err51];
 }
@@ -6439,7 +6927,7 @@ errors++;
 }
 }
 else {
-const err52 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema119.type,parentSchema:schema119,data};
+const err52 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema122.type,parentSchema:schema122,data};
 if(vErrors === null){
 vErrors = [err52];
 }
@@ -6448,20 +6936,20 @@ vErrors.push(err52);
 }
 errors++;
 }
-validate66.errors = vErrors;
+validate69.errors = vErrors;
 return errors === 0;
 }
 
-const schema131 = {"type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"type":"boolean"},"steps":{"type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"$ref":"#/definitions/id"},"fixed":{"type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"type":"integer","minimum":1}}}},"plumb":{"type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"$ref":"#/definitions/id"},"top":{"$ref":"#/definitions/id"},"limit":{"$ref":"#/definitions/positive"}}},"forceTolerance":{"$ref":"#/definitions/positive"},"lengthTolerance":{"$ref":"#/definitions/positive"}}};
-const pattern39 = new RegExp("^[xyz]{1,3}$", "u");
-const schema134 = {"type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"setBy":{"enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"type":"string"}}};
+const schema134 = {"description":"A tensioning sequence for the crew.","type":"object","additionalProperties":false,"required":["id","steps"],"properties":{"id":{"description":"Sequence id.","$ref":"#/definitions/id"},"label":{"description":"Name printed on the crew sheet.","type":"string"},"temperature":{"description":"Air temperature on the day of tensioning, K (default: the reference temperature).","$ref":"#/definitions/absoluteTemperature"},"selfWeight":{"description":"Self-weight acts during erection (default true).","type":"boolean"},"steps":{"description":"Ordered steps; members in no step are in place before the first step.","type":"array","minItems":1,"items":{"$ref":"#/definitions/sequenceStep"}},"temporaryRestraints":{"description":"Restraints in place during erection only.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","fixed"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"fixed":{"description":"Restrained translations while in place (letters of \"xyz\").","type":"string","pattern":"^[xyz]{1,3}$","x-message":{"pattern":"{field} must be letters of xyz"}},"releaseAfterStep":{"description":"Number of the step after which the restraint is released (1-based; default: after the last step).","type":"integer","minimum":1}}}},"plumb":{"description":"Mast plumb tolerance during erection.","type":"object","additionalProperties":false,"required":["base","top","limit"],"properties":{"base":{"description":"Node at the foot of the mast.","$ref":"#/definitions/id"},"top":{"description":"Node at the top of the mast.","$ref":"#/definitions/id"},"limit":{"description":"Largest horizontal offset of top over height, dimensionless ratio.","$ref":"#/definitions/positive"}}},"forceTolerance":{"description":"Tolerance band on a force setting, fraction of the value (default 0.05, common practice).","$ref":"#/definitions/positive"},"lengthTolerance":{"description":"Tolerance band on a length setting, m (default 0.005, common practice).","$ref":"#/definitions/positive"}}};
+const pattern40 = new RegExp("^[xyz]{1,3}$", "u");
+const schema137 = {"description":"One step of a tensioning sequence.","type":"object","additionalProperties":false,"required":["setBy"],"properties":{"members":{"description":"Members tensioned together in this step (give \"members\" or \"group\", not both).","$ref":"#/definitions/idList"},"group":{"description":"A group tensioned together in this step.","$ref":"#/definitions/id"},"setBy":{"description":"How the crew sets the members: by a force reading or by a length.","enum":["force","length"],"x-message":"{field} must be \"force\" or \"length\""},"label":{"description":"Name of the step on the crew sheet.","type":"string"}}};
 
-function validate69(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate72(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.setBy === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema134.required,parentSchema:schema134,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "setBy"},message:"must have required property '"+"setBy"+"'",schema:schema137.required,parentSchema:schema137,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6472,7 +6960,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "members") || (key0 === "group")) || (key0 === "setBy")) || (key0 === "label"))){
-const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema134,data};
+const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema137,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6516,7 +7004,7 @@ errors++;
 if(data.setBy !== undefined){
 let data2 = data.setBy;
 if(!((data2 === "force") || (data2 === "length"))){
-const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema134.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema134.properties.setBy.enum,parentSchema:schema134.properties.setBy,data:data2};
+const err4 = {instancePath:instancePath+"/setBy",schemaPath:"#/properties/setBy/enum",keyword:"enum",params:{allowedValues: schema137.properties.setBy.enum},message:"must be equal to one of the allowed values",schema:schema137.properties.setBy.enum,parentSchema:schema137.properties.setBy,data:data2};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -6529,7 +7017,7 @@ errors++;
 if(data.label !== undefined){
 let data3 = data.label;
 if(typeof data3 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema134.properties.label.type,parentSchema:schema134.properties.label,data:data3};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema137.properties.label.type,parentSchema:schema137.properties.label,data:data3};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -6541,7 +7029,7 @@ errors++;
 }
 }
 else {
-const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema134.type,parentSchema:schema134,data};
+const err6 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema137.type,parentSchema:schema137,data};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -6550,17 +7038,17 @@ vErrors.push(err6);
 }
 errors++;
 }
-validate69.errors = vErrors;
+validate72.errors = vErrors;
 return errors === 0;
 }
 
 
-function validate68(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate71(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema131.required,parentSchema:schema131,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema134.required,parentSchema:schema134,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -6570,7 +7058,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.steps === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema131.required,parentSchema:schema131,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "steps"},message:"must have required property '"+"steps"+"'",schema:schema134.required,parentSchema:schema134,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -6580,8 +7068,8 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema131.properties, key0))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema131,data};
+if(!(func2.call(schema134.properties, key0))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema134,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -6619,7 +7107,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema131.properties.label.type,parentSchema:schema131.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema134.properties.label.type,parentSchema:schema134.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -6657,7 +7145,7 @@ errors++;
 if(data.selfWeight !== undefined){
 let data3 = data.selfWeight;
 if(typeof data3 !== "boolean"){
-const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema131.properties.selfWeight.type,parentSchema:schema131.properties.selfWeight,data:data3};
+const err8 = {instancePath:instancePath+"/selfWeight",schemaPath:"#/properties/selfWeight/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema134.properties.selfWeight.type,parentSchema:schema134.properties.selfWeight,data:data3};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -6671,7 +7159,7 @@ if(data.steps !== undefined){
 let data4 = data.steps;
 if(Array.isArray(data4)){
 if(data4.length < 1){
-const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema131.properties.steps,data:data4};
+const err9 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema134.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -6682,14 +7170,14 @@ errors++;
 }
 const len0 = data4.length;
 for(let i0=0; i0<len0; i0++){
-if(!(validate69(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
-vErrors = vErrors === null ? validate69.errors : vErrors.concat(validate69.errors);
+if(!(validate72(data4[i0], {instancePath:instancePath+"/steps/" + i0,parentData:data4,parentDataProperty:i0,rootData}))){
+vErrors = vErrors === null ? validate72.errors : vErrors.concat(validate72.errors);
 errors = vErrors.length;
 }
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema131.properties.steps.type,parentSchema:schema131.properties.steps,data:data4};
+const err10 = {instancePath:instancePath+"/steps",schemaPath:"#/properties/steps/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema134.properties.steps.type,parentSchema:schema134.properties.steps,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -6707,7 +7195,7 @@ for(let i1=0; i1<len1; i1++){
 let data7 = data6[i1];
 if(data7 && typeof data7 == "object" && !Array.isArray(data7)){
 if(data7.node === undefined){
-const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema131.properties.temporaryRestraints.items.required,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err11 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema134.properties.temporaryRestraints.items.required,parentSchema:schema134.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -6717,7 +7205,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data7.fixed === undefined){
-const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema131.properties.temporaryRestraints.items.required,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err12 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/required",keyword:"required",params:{missingProperty: "fixed"},message:"must have required property '"+"fixed"+"'",schema:schema134.properties.temporaryRestraints.items.required,parentSchema:schema134.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -6728,7 +7216,7 @@ errors++;
 }
 for(const key1 in data7){
 if(!(((key1 === "node") || (key1 === "fixed")) || (key1 === "releaseAfterStep"))){
-const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err13 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema134.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -6766,8 +7254,8 @@ errors++;
 if(data7.fixed !== undefined){
 let data9 = data7.fixed;
 if(typeof data9 === "string"){
-if(!pattern39.test(data9)){
-const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema131.properties.temporaryRestraints.items.properties.fixed,data:data9};
+if(!pattern40.test(data9)){
+const err16 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/pattern",keyword:"pattern",params:{pattern: "^[xyz]{1,3}$"},message:"must match pattern \""+"^[xyz]{1,3}$"+"\"",schema:"^[xyz]{1,3}$",parentSchema:schema134.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -6778,7 +7266,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema131.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema131.properties.temporaryRestraints.items.properties.fixed,data:data9};
+const err17 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/fixed",schemaPath:"#/properties/temporaryRestraints/items/properties/fixed/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema134.properties.temporaryRestraints.items.properties.fixed.type,parentSchema:schema134.properties.temporaryRestraints.items.properties.fixed,data:data9};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -6791,7 +7279,7 @@ errors++;
 if(data7.releaseAfterStep !== undefined){
 let data10 = data7.releaseAfterStep;
 if(!(((typeof data10 == "number") && (!(data10 % 1) && !isNaN(data10))) && (isFinite(data10)))){
-const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema131.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema131.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err18 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema134.properties.temporaryRestraints.items.properties.releaseAfterStep.type,parentSchema:schema134.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -6802,7 +7290,7 @@ errors++;
 }
 if((typeof data10 == "number") && (isFinite(data10))){
 if(data10 < 1 || isNaN(data10)){
-const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema131.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
+const err19 = {instancePath:instancePath+"/temporaryRestraints/" + i1+"/releaseAfterStep",schemaPath:"#/properties/temporaryRestraints/items/properties/releaseAfterStep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema134.properties.temporaryRestraints.items.properties.releaseAfterStep,data:data10};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -6815,7 +7303,7 @@ errors++;
 }
 }
 else {
-const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.properties.temporaryRestraints.items.type,parentSchema:schema131.properties.temporaryRestraints.items,data:data7};
+const err20 = {instancePath:instancePath+"/temporaryRestraints/" + i1,schemaPath:"#/properties/temporaryRestraints/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema134.properties.temporaryRestraints.items.type,parentSchema:schema134.properties.temporaryRestraints.items,data:data7};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -6827,7 +7315,7 @@ errors++;
 }
 }
 else {
-const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema131.properties.temporaryRestraints.type,parentSchema:schema131.properties.temporaryRestraints,data:data6};
+const err21 = {instancePath:instancePath+"/temporaryRestraints",schemaPath:"#/properties/temporaryRestraints/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema134.properties.temporaryRestraints.type,parentSchema:schema134.properties.temporaryRestraints,data:data6};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -6841,7 +7329,7 @@ if(data.plumb !== undefined){
 let data11 = data.plumb;
 if(data11 && typeof data11 == "object" && !Array.isArray(data11)){
 if(data11.base === undefined){
-const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema131.properties.plumb.required,parentSchema:schema131.properties.plumb,data:data11};
+const err22 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "base"},message:"must have required property '"+"base"+"'",schema:schema134.properties.plumb.required,parentSchema:schema134.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -6851,7 +7339,7 @@ vErrors.push(err22);
 errors++;
 }
 if(data11.top === undefined){
-const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema131.properties.plumb.required,parentSchema:schema131.properties.plumb,data:data11};
+const err23 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "top"},message:"must have required property '"+"top"+"'",schema:schema134.properties.plumb.required,parentSchema:schema134.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -6861,7 +7349,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data11.limit === undefined){
-const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema131.properties.plumb.required,parentSchema:schema131.properties.plumb,data:data11};
+const err24 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/required",keyword:"required",params:{missingProperty: "limit"},message:"must have required property '"+"limit"+"'",schema:schema134.properties.plumb.required,parentSchema:schema134.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -6872,7 +7360,7 @@ errors++;
 }
 for(const key2 in data11){
 if(!(((key2 === "base") || (key2 === "top")) || (key2 === "limit"))){
-const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema131.properties.plumb,data:data11};
+const err25 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema134.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -6959,7 +7447,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.properties.plumb.type,parentSchema:schema131.properties.plumb,data:data11};
+const err32 = {instancePath:instancePath+"/plumb",schemaPath:"#/properties/plumb/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema134.properties.plumb.type,parentSchema:schema134.properties.plumb,data:data11};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -7021,7 +7509,7 @@ errors++;
 }
 }
 else {
-const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema131.type,parentSchema:schema131,data};
+const err37 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema134.type,parentSchema:schema134,data};
 if(vErrors === null){
 vErrors = [err37];
 }
@@ -7030,18 +7518,18 @@ vErrors.push(err37);
 }
 errors++;
 }
-validate68.errors = vErrors;
+validate71.errors = vErrors;
 return errors === 0;
 }
 
-const schema142 = {"type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"date":{"type":"string"},"tensions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"$ref":"#/definitions/id"},"method":{"enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"$ref":"#/definitions/positive"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"},"mode":{"enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"$ref":"#/definitions/id"},"at":{"$ref":"#/definitions/vec3"},"accuracy":{"$ref":"#/definitions/positive"},"temperature":{"$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"$ref":"#/definitions/positive"},"lengthUncertainty":{"$ref":"#/definitions/positive"}}};
+const schema145 = {"description":"Readings taken on site on one occasion.","type":"object","additionalProperties":false,"required":["id","tensions"],"properties":{"id":{"description":"Measurement set id.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"date":{"description":"Date of the measurements (ISO 8601).","type":"string"},"tensions":{"description":"Tension readings.","type":"array","items":{"type":"object","additionalProperties":false,"required":["member","method","value","accuracy","temperature"],"properties":{"member":{"description":"Member id.","$ref":"#/definitions/id"},"method":{"description":"How the tension was read: dynamometer, vibration frequency or sag.","enum":["dynamometer","frequency","sag"],"x-message":"{field} must be dynamometer, frequency or sag"},"value":{"description":"The reading: dynamometer tension at the lower end, N; frequency, Hz; largest vertical sag, m.","$ref":"#/definitions/positive"},"accuracy":{"description":"Standard uncertainty of the reading as a fraction of the value, dimensionless (0.03 = 3 %).","$ref":"#/definitions/positive"},"temperature":{"description":"Air temperature at the measurement, K.","$ref":"#/definitions/absoluteTemperature"},"mode":{"description":"Frequency readings: which mode was measured (default the taut-string mode).","enum":["tautString","inPlaneSymmetric","inPlaneAntisymmetric","lowestInPlane"]}}}},"positions":{"description":"Surveyed node positions.","type":"array","items":{"type":"object","additionalProperties":false,"required":["node","at","accuracy","temperature"],"properties":{"node":{"description":"Node id.","$ref":"#/definitions/id"},"at":{"description":"Measured position [x, y, z], m.","$ref":"#/definitions/vec3"},"accuracy":{"description":"Standard uncertainty of each horizontal coordinate, m.","$ref":"#/definitions/positive"},"temperature":{"description":"Air temperature at the survey, K.","$ref":"#/definitions/absoluteTemperature"}}}},"tolerance":{"description":"Acceptance band on the tension at the reference state, fraction of the design tension (default 0.1, common practice).","$ref":"#/definitions/positive"},"lengthUncertainty":{"description":"Prior uncertainty of each cable's unstressed length, m (default 0.02, common practice).","$ref":"#/definitions/positive"}}};
 
-function validate73(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate76(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema142.required,parentSchema:schema142,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema145.required,parentSchema:schema145,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -7051,7 +7539,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.tensions === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema142.required,parentSchema:schema142,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "tensions"},message:"must have required property '"+"tensions"+"'",schema:schema145.required,parentSchema:schema145,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -7062,7 +7550,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "date")) || (key0 === "tensions")) || (key0 === "positions")) || (key0 === "tolerance")) || (key0 === "lengthUncertainty"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema142,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema145,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -7100,7 +7588,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema142.properties.label.type,parentSchema:schema142.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema145.properties.label.type,parentSchema:schema145.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -7113,7 +7601,7 @@ errors++;
 if(data.date !== undefined){
 let data2 = data.date;
 if(typeof data2 !== "string"){
-const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema142.properties.date.type,parentSchema:schema142.properties.date,data:data2};
+const err6 = {instancePath:instancePath+"/date",schemaPath:"#/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema145.properties.date.type,parentSchema:schema145.properties.date,data:data2};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -7131,7 +7619,7 @@ for(let i0=0; i0<len0; i0++){
 let data4 = data3[i0];
 if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
 if(data4.member === undefined){
-const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err7 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "member"},message:"must have required property '"+"member"+"'",schema:schema145.properties.tensions.items.required,parentSchema:schema145.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -7141,7 +7629,7 @@ vErrors.push(err7);
 errors++;
 }
 if(data4.method === undefined){
-const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err8 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "method"},message:"must have required property '"+"method"+"'",schema:schema145.properties.tensions.items.required,parentSchema:schema145.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -7151,7 +7639,7 @@ vErrors.push(err8);
 errors++;
 }
 if(data4.value === undefined){
-const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err9 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "value"},message:"must have required property '"+"value"+"'",schema:schema145.properties.tensions.items.required,parentSchema:schema145.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -7161,7 +7649,7 @@ vErrors.push(err9);
 errors++;
 }
 if(data4.accuracy === undefined){
-const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err10 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema145.properties.tensions.items.required,parentSchema:schema145.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -7171,7 +7659,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data4.temperature === undefined){
-const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema142.properties.tensions.items.required,parentSchema:schema142.properties.tensions.items,data:data4};
+const err11 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema145.properties.tensions.items.required,parentSchema:schema145.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -7182,7 +7670,7 @@ errors++;
 }
 for(const key1 in data4){
 if(!((((((key1 === "member") || (key1 === "method")) || (key1 === "value")) || (key1 === "accuracy")) || (key1 === "temperature")) || (key1 === "mode"))){
-const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema142.properties.tensions.items,data:data4};
+const err12 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema145.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -7220,7 +7708,7 @@ errors++;
 if(data4.method !== undefined){
 let data6 = data4.method;
 if(!(((data6 === "dynamometer") || (data6 === "frequency")) || (data6 === "sag"))){
-const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema142.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema142.properties.tensions.items.properties.method.enum,parentSchema:schema142.properties.tensions.items.properties.method,data:data6};
+const err15 = {instancePath:instancePath+"/tensions/" + i0+"/method",schemaPath:"#/properties/tensions/items/properties/method/enum",keyword:"enum",params:{allowedValues: schema145.properties.tensions.items.properties.method.enum},message:"must be equal to one of the allowed values",schema:schema145.properties.tensions.items.properties.method.enum,parentSchema:schema145.properties.tensions.items.properties.method,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -7308,7 +7796,7 @@ errors++;
 if(data4.mode !== undefined){
 let data10 = data4.mode;
 if(!((((data10 === "tautString") || (data10 === "inPlaneSymmetric")) || (data10 === "inPlaneAntisymmetric")) || (data10 === "lowestInPlane"))){
-const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema142.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema142.properties.tensions.items.properties.mode.enum,parentSchema:schema142.properties.tensions.items.properties.mode,data:data10};
+const err22 = {instancePath:instancePath+"/tensions/" + i0+"/mode",schemaPath:"#/properties/tensions/items/properties/mode/enum",keyword:"enum",params:{allowedValues: schema145.properties.tensions.items.properties.mode.enum},message:"must be equal to one of the allowed values",schema:schema145.properties.tensions.items.properties.mode.enum,parentSchema:schema145.properties.tensions.items.properties.mode,data:data10};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -7320,7 +7808,7 @@ errors++;
 }
 }
 else {
-const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema142.properties.tensions.items.type,parentSchema:schema142.properties.tensions.items,data:data4};
+const err23 = {instancePath:instancePath+"/tensions/" + i0,schemaPath:"#/properties/tensions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema145.properties.tensions.items.type,parentSchema:schema145.properties.tensions.items,data:data4};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -7332,7 +7820,7 @@ errors++;
 }
 }
 else {
-const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema142.properties.tensions.type,parentSchema:schema142.properties.tensions,data:data3};
+const err24 = {instancePath:instancePath+"/tensions",schemaPath:"#/properties/tensions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema145.properties.tensions.type,parentSchema:schema145.properties.tensions,data:data3};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -7350,7 +7838,7 @@ for(let i1=0; i1<len1; i1++){
 let data12 = data11[i1];
 if(data12 && typeof data12 == "object" && !Array.isArray(data12)){
 if(data12.node === undefined){
-const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err25 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "node"},message:"must have required property '"+"node"+"'",schema:schema145.properties.positions.items.required,parentSchema:schema145.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -7360,7 +7848,7 @@ vErrors.push(err25);
 errors++;
 }
 if(data12.at === undefined){
-const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err26 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "at"},message:"must have required property '"+"at"+"'",schema:schema145.properties.positions.items.required,parentSchema:schema145.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -7370,7 +7858,7 @@ vErrors.push(err26);
 errors++;
 }
 if(data12.accuracy === undefined){
-const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err27 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "accuracy"},message:"must have required property '"+"accuracy"+"'",schema:schema145.properties.positions.items.required,parentSchema:schema145.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -7380,7 +7868,7 @@ vErrors.push(err27);
 errors++;
 }
 if(data12.temperature === undefined){
-const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema142.properties.positions.items.required,parentSchema:schema142.properties.positions.items,data:data12};
+const err28 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/required",keyword:"required",params:{missingProperty: "temperature"},message:"must have required property '"+"temperature"+"'",schema:schema145.properties.positions.items.required,parentSchema:schema145.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -7391,7 +7879,7 @@ errors++;
 }
 for(const key2 in data12){
 if(!((((key2 === "node") || (key2 === "at")) || (key2 === "accuracy")) || (key2 === "temperature"))){
-const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema142.properties.positions.items,data:data12};
+const err29 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema145.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -7527,7 +8015,7 @@ errors++;
 }
 }
 else {
-const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema142.properties.positions.items.type,parentSchema:schema142.properties.positions.items,data:data12};
+const err40 = {instancePath:instancePath+"/positions/" + i1,schemaPath:"#/properties/positions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema145.properties.positions.items.type,parentSchema:schema145.properties.positions.items,data:data12};
 if(vErrors === null){
 vErrors = [err40];
 }
@@ -7539,7 +8027,7 @@ errors++;
 }
 }
 else {
-const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema142.properties.positions.type,parentSchema:schema142.properties.positions,data:data11};
+const err41 = {instancePath:instancePath+"/positions",schemaPath:"#/properties/positions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema145.properties.positions.type,parentSchema:schema145.properties.positions,data:data11};
 if(vErrors === null){
 vErrors = [err41];
 }
@@ -7601,7 +8089,7 @@ errors++;
 }
 }
 else {
-const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema142.type,parentSchema:schema142,data};
+const err46 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema145.type,parentSchema:schema145,data};
 if(vErrors === null){
 vErrors = [err46];
 }
@@ -7610,18 +8098,18 @@ vErrors.push(err46);
 }
 errors++;
 }
-validate73.errors = vErrors;
+validate76.errors = vErrors;
 return errors === 0;
 }
 
-const schema155 = {"type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"$ref":"#/definitions/id"},"nodes":{"type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"$ref":"#/definitions/id"},"label":{"type":"string"}}};
+const schema158 = {"description":"A loop of three or more nodes bounding a piece of surface that carries area loads; its normal follows the right-hand rule on the node order.","type":"object","additionalProperties":false,"required":["id","nodes"],"properties":{"id":{"description":"Panel id.","$ref":"#/definitions/id"},"nodes":{"description":"Corner node ids in order around the loop (3 or more, no repeats).","type":"array","minItems":3,"items":{"$ref":"#/definitions/id"},"x-message":{"minItems":"{field} must list at least 3 corner nodes"}},"region":{"description":"Region name: pressure coefficients may be given per region instead of per panel.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"}}};
 
-function validate75(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate78(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema155.required,parentSchema:schema155,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema158.required,parentSchema:schema158,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -7631,7 +8119,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.nodes === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema155.required,parentSchema:schema155,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "nodes"},message:"must have required property '"+"nodes"+"'",schema:schema158.required,parentSchema:schema158,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -7642,7 +8130,7 @@ errors++;
 }
 for(const key0 in data){
 if(!((((key0 === "id") || (key0 === "nodes")) || (key0 === "region")) || (key0 === "label"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema155,data};
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema158,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -7681,7 +8169,7 @@ if(data.nodes !== undefined){
 let data1 = data.nodes;
 if(Array.isArray(data1)){
 if(data1.length < 3){
-const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema155.properties.nodes,data:data1};
+const err5 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/minItems",keyword:"minItems",params:{limit: 3},message:"must NOT have fewer than 3 items",schema:3,parentSchema:schema158.properties.nodes,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -7718,7 +8206,7 @@ errors++;
 }
 }
 else {
-const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema155.properties.nodes.type,parentSchema:schema155.properties.nodes,data:data1};
+const err8 = {instancePath:instancePath+"/nodes",schemaPath:"#/properties/nodes/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema158.properties.nodes.type,parentSchema:schema158.properties.nodes,data:data1};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -7756,7 +8244,7 @@ errors++;
 if(data.label !== undefined){
 let data4 = data.label;
 if(typeof data4 !== "string"){
-const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema155.properties.label.type,parentSchema:schema155.properties.label,data:data4};
+const err11 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema158.properties.label.type,parentSchema:schema158.properties.label,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -7768,7 +8256,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema155.type,parentSchema:schema155,data};
+const err12 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema158.type,parentSchema:schema158,data};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -7777,18 +8265,18 @@ vErrors.push(err12);
 }
 errors++;
 }
-validate75.errors = vErrors;
+validate78.errors = vErrors;
 return errors === 0;
 }
 
-const schema159 = {"type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"meanCase":{"$ref":"#/definitions/id"},"patchFactor":{"type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"type":"number"},"to":{"type":"number"}}}}}};
+const schema162 = {"description":"Patch wind on a guyed mast (EN 1993-3-1 Annex B, B.4.3.2): S = S_m ± √Σ(S_i − S_m)² per result.","type":"object","additionalProperties":false,"required":["id","meanCase","patchFactor"],"properties":{"id":{"description":"Patch wind id; its cases are \"<id> / patch k\", \"<id> max\" and \"<id> min\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"meanCase":{"description":"Load case with the mean wind on the whole structure.","$ref":"#/definitions/id"},"patchFactor":{"description":"Wind force inside a patch as a multiple of the mean wind force there (> 1), dimensionless.","type":"number","exclusiveMinimum":1,"x-message":{"exclusiveMinimum":"{field} must be greater than 1 (the patch increases the mean wind force)"}},"patches":{"description":"Height ranges of the patches (default: the spans between guy levels).","type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["from","to"],"properties":{"from":{"description":"Bottom of the patch, m above z = 0.","type":"number"},"to":{"description":"Top of the patch, m above z = 0.","type":"number"}}}}}};
 
-function validate77(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate80(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema159.required,parentSchema:schema159,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema162.required,parentSchema:schema162,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -7798,7 +8286,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.meanCase === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema159.required,parentSchema:schema159,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "meanCase"},message:"must have required property '"+"meanCase"+"'",schema:schema162.required,parentSchema:schema162,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -7808,7 +8296,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.patchFactor === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema159.required,parentSchema:schema159,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "patchFactor"},message:"must have required property '"+"patchFactor"+"'",schema:schema162.required,parentSchema:schema162,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -7819,7 +8307,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "id") || (key0 === "label")) || (key0 === "meanCase")) || (key0 === "patchFactor")) || (key0 === "patches"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema159,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema162,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -7857,7 +8345,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema159.properties.label.type,parentSchema:schema159.properties.label,data:data1};
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema162.properties.label.type,parentSchema:schema162.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -7896,7 +8384,7 @@ if(data.patchFactor !== undefined){
 let data3 = data.patchFactor;
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 <= 1 || isNaN(data3)){
-const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema159.properties.patchFactor,data:data3};
+const err9 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 1},message:"must be > 1",schema:1,parentSchema:schema162.properties.patchFactor,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -7907,7 +8395,7 @@ errors++;
 }
 }
 else {
-const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema159.properties.patchFactor.type,parentSchema:schema159.properties.patchFactor,data:data3};
+const err10 = {instancePath:instancePath+"/patchFactor",schemaPath:"#/properties/patchFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema162.properties.patchFactor.type,parentSchema:schema162.properties.patchFactor,data:data3};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -7921,7 +8409,7 @@ if(data.patches !== undefined){
 let data4 = data.patches;
 if(Array.isArray(data4)){
 if(data4.length < 1){
-const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema159.properties.patches,data:data4};
+const err11 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema162.properties.patches,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -7935,7 +8423,7 @@ for(let i0=0; i0<len0; i0++){
 let data5 = data4[i0];
 if(data5 && typeof data5 == "object" && !Array.isArray(data5)){
 if(data5.from === undefined){
-const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema159.properties.patches.items.required,parentSchema:schema159.properties.patches.items,data:data5};
+const err12 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema162.properties.patches.items.required,parentSchema:schema162.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -7945,7 +8433,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data5.to === undefined){
-const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema159.properties.patches.items.required,parentSchema:schema159.properties.patches.items,data:data5};
+const err13 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema162.properties.patches.items.required,parentSchema:schema162.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -7956,7 +8444,7 @@ errors++;
 }
 for(const key1 in data5){
 if(!((key1 === "from") || (key1 === "to"))){
-const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema159.properties.patches.items,data:data5};
+const err14 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema162.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -7969,7 +8457,7 @@ errors++;
 if(data5.from !== undefined){
 let data6 = data5.from;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema159.properties.patches.items.properties.from.type,parentSchema:schema159.properties.patches.items.properties.from,data:data6};
+const err15 = {instancePath:instancePath+"/patches/" + i0+"/from",schemaPath:"#/properties/patches/items/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema162.properties.patches.items.properties.from.type,parentSchema:schema162.properties.patches.items.properties.from,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -7982,7 +8470,7 @@ errors++;
 if(data5.to !== undefined){
 let data7 = data5.to;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema159.properties.patches.items.properties.to.type,parentSchema:schema159.properties.patches.items.properties.to,data:data7};
+const err16 = {instancePath:instancePath+"/patches/" + i0+"/to",schemaPath:"#/properties/patches/items/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema162.properties.patches.items.properties.to.type,parentSchema:schema162.properties.patches.items.properties.to,data:data7};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -7994,7 +8482,7 @@ errors++;
 }
 }
 else {
-const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema159.properties.patches.items.type,parentSchema:schema159.properties.patches.items,data:data5};
+const err17 = {instancePath:instancePath+"/patches/" + i0,schemaPath:"#/properties/patches/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema162.properties.patches.items.type,parentSchema:schema162.properties.patches.items,data:data5};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -8006,7 +8494,7 @@ errors++;
 }
 }
 else {
-const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema159.properties.patches.type,parentSchema:schema159.properties.patches,data:data4};
+const err18 = {instancePath:instancePath+"/patches",schemaPath:"#/properties/patches/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema162.properties.patches.type,parentSchema:schema162.properties.patches,data:data4};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -8018,7 +8506,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema159.type,parentSchema:schema159,data};
+const err19 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema162.type,parentSchema:schema162,data};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -8027,18 +8515,18 @@ vErrors.push(err19);
 }
 errors++;
 }
-validate77.errors = vErrors;
+validate80.errors = vErrors;
 return errors === 0;
 }
 
-const schema162 = {"type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"fromCase":{"$ref":"#/definitions/id"},"members":{"$ref":"#/definitions/idList"},"group":{"$ref":"#/definitions/id"},"dynamicFactor":{"type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"}}};
+const schema165 = {"description":"Sudden loss of members: from the solved state of a case, each member is removed in turn and its released force amplified.","type":"object","additionalProperties":false,"required":["id","fromCase"],"properties":{"id":{"description":"Member loss id; its cases are \"<id> / <member>\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"fromCase":{"description":"Load case or combination whose solved state the loss starts from.","$ref":"#/definitions/id"},"members":{"description":"Members removed, one case each.","$ref":"#/definitions/idList"},"group":{"description":"Or every member of this group in turn.","$ref":"#/definitions/id"},"dynamicFactor":{"description":"Dynamic amplification factor on the released force (1 = static, at most 2), dimensionless; default from dampingRatio.","type":"number","minimum":1,"maximum":2,"x-message":"{field} must be from 1 (static) to 2 (sudden release without damping)"},"dampingRatio":{"description":"Critical damping ratio ζ (0 ≤ ζ < 1) for the default factor 1 + exp(−πζ/√(1−ζ²)), dimensionless (default 0: factor 2).","type":"number","minimum":0,"exclusiveMaximum":1,"x-message":"{field} must be from 0 up to (not including) 1"},"purpose":{"description":"What the loss cases are checked for; default accidental (the accidental factors of the design basis).","enum":["accidental","ultimate","serviceability"],"x-message":"{field} must be one of accidental, ultimate, serviceability"}}};
 
-function validate79(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate82(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema162.required,parentSchema:schema162,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema165.required,parentSchema:schema165,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -8048,7 +8536,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.fromCase === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema162.required,parentSchema:schema162,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "fromCase"},message:"must have required property '"+"fromCase"+"'",schema:schema165.required,parentSchema:schema165,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -8058,8 +8546,8 @@ vErrors.push(err1);
 errors++;
 }
 for(const key0 in data){
-if(!(((((((key0 === "id") || (key0 === "label")) || (key0 === "fromCase")) || (key0 === "members")) || (key0 === "group")) || (key0 === "dynamicFactor")) || (key0 === "dampingRatio"))){
-const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema162,data};
+if(!((((((((key0 === "id") || (key0 === "label")) || (key0 === "fromCase")) || (key0 === "members")) || (key0 === "group")) || (key0 === "dynamicFactor")) || (key0 === "dampingRatio")) || (key0 === "purpose"))){
+const err2 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema165,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -8097,7 +8585,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema162.properties.label.type,parentSchema:schema162.properties.label,data:data1};
+const err5 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema165.properties.label.type,parentSchema:schema165.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -8167,7 +8655,7 @@ if(data.dynamicFactor !== undefined){
 let data5 = data.dynamicFactor;
 if((typeof data5 == "number") && (isFinite(data5))){
 if(data5 > 2 || isNaN(data5)){
-const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema162.properties.dynamicFactor,data:data5};
+const err10 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/maximum",keyword:"maximum",params:{comparison: "<=", limit: 2},message:"must be <= 2",schema:2,parentSchema:schema165.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -8177,7 +8665,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data5 < 1 || isNaN(data5)){
-const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema162.properties.dynamicFactor,data:data5};
+const err11 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema165.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -8188,7 +8676,7 @@ errors++;
 }
 }
 else {
-const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema162.properties.dynamicFactor.type,parentSchema:schema162.properties.dynamicFactor,data:data5};
+const err12 = {instancePath:instancePath+"/dynamicFactor",schemaPath:"#/properties/dynamicFactor/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema165.properties.dynamicFactor.type,parentSchema:schema165.properties.dynamicFactor,data:data5};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -8202,7 +8690,7 @@ if(data.dampingRatio !== undefined){
 let data6 = data.dampingRatio;
 if((typeof data6 == "number") && (isFinite(data6))){
 if(data6 < 0 || isNaN(data6)){
-const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema162.properties.dampingRatio,data:data6};
+const err13 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema165.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -8212,7 +8700,7 @@ vErrors.push(err13);
 errors++;
 }
 if(data6 >= 1 || isNaN(data6)){
-const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema162.properties.dampingRatio,data:data6};
+const err14 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/exclusiveMaximum",keyword:"exclusiveMaximum",params:{comparison: "<", limit: 1},message:"must be < 1",schema:1,parentSchema:schema165.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -8223,7 +8711,7 @@ errors++;
 }
 }
 else {
-const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema162.properties.dampingRatio.type,parentSchema:schema162.properties.dampingRatio,data:data6};
+const err15 = {instancePath:instancePath+"/dampingRatio",schemaPath:"#/properties/dampingRatio/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema165.properties.dampingRatio.type,parentSchema:schema165.properties.dampingRatio,data:data6};
 if(vErrors === null){
 vErrors = [err15];
 }
@@ -8233,9 +8721,10 @@ vErrors.push(err15);
 errors++;
 }
 }
-}
-else {
-const err16 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema162.type,parentSchema:schema162,data};
+if(data.purpose !== undefined){
+let data7 = data.purpose;
+if(!(((data7 === "accidental") || (data7 === "ultimate")) || (data7 === "serviceability"))){
+const err16 = {instancePath:instancePath+"/purpose",schemaPath:"#/properties/purpose/enum",keyword:"enum",params:{allowedValues: schema165.properties.purpose.enum},message:"must be equal to one of the allowed values",schema:schema165.properties.purpose.enum,parentSchema:schema165.properties.purpose,data:data7};
 if(vErrors === null){
 vErrors = [err16];
 }
@@ -8244,18 +8733,30 @@ vErrors.push(err16);
 }
 errors++;
 }
-validate79.errors = vErrors;
+}
+}
+else {
+const err17 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema165.type,parentSchema:schema165,data};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+validate82.errors = vErrors;
 return errors === 0;
 }
 
-const schema166 = {"type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"case":{"$ref":"#/definitions/id"},"count":{"type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"type":"number"}}};
+const schema169 = {"description":"Wind from \"count\" directions: the case is solved once per direction azimuth + k · 360°/count.","type":"object","additionalProperties":false,"required":["id","case","count"],"properties":{"id":{"description":"Id; its cases are \"<id> <direction>°\".","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"case":{"description":"Load case with wind whose direction is replaced.","$ref":"#/definitions/id"},"count":{"description":"Number of directions (1 to 72).","type":"integer","minimum":1,"maximum":72,"x-message":"{field} must be a whole number from 1 to 72"},"azimuth":{"description":"First direction, degrees, same convention as the wind direction (default 0).","type":"number"}}};
 
-function validate82(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate85(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema166.required,parentSchema:schema166,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema169.required,parentSchema:schema169,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -8265,7 +8766,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.case === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema166.required,parentSchema:schema166,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema169.required,parentSchema:schema169,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -8275,7 +8776,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.count === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema166.required,parentSchema:schema166,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "count"},message:"must have required property '"+"count"+"'",schema:schema169.required,parentSchema:schema169,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -8286,7 +8787,7 @@ errors++;
 }
 for(const key0 in data){
 if(!(((((key0 === "id") || (key0 === "label")) || (key0 === "case")) || (key0 === "count")) || (key0 === "azimuth"))){
-const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema166,data};
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema169,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -8324,7 +8825,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema166.properties.label.type,parentSchema:schema166.properties.label,data:data1};
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema169.properties.label.type,parentSchema:schema169.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -8362,7 +8863,7 @@ errors++;
 if(data.count !== undefined){
 let data3 = data.count;
 if(!(((typeof data3 == "number") && (!(data3 % 1) && !isNaN(data3))) && (isFinite(data3)))){
-const err9 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema166.properties.count.type,parentSchema:schema166.properties.count,data:data3};
+const err9 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema169.properties.count.type,parentSchema:schema169.properties.count,data:data3};
 if(vErrors === null){
 vErrors = [err9];
 }
@@ -8373,7 +8874,7 @@ errors++;
 }
 if((typeof data3 == "number") && (isFinite(data3))){
 if(data3 > 72 || isNaN(data3)){
-const err10 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 72},message:"must be <= 72",schema:72,parentSchema:schema166.properties.count,data:data3};
+const err10 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/maximum",keyword:"maximum",params:{comparison: "<=", limit: 72},message:"must be <= 72",schema:72,parentSchema:schema169.properties.count,data:data3};
 if(vErrors === null){
 vErrors = [err10];
 }
@@ -8383,7 +8884,7 @@ vErrors.push(err10);
 errors++;
 }
 if(data3 < 1 || isNaN(data3)){
-const err11 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema166.properties.count,data:data3};
+const err11 = {instancePath:instancePath+"/count",schemaPath:"#/properties/count/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema169.properties.count,data:data3};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -8397,7 +8898,7 @@ errors++;
 if(data.azimuth !== undefined){
 let data4 = data.azimuth;
 if(!((typeof data4 == "number") && (isFinite(data4)))){
-const err12 = {instancePath:instancePath+"/azimuth",schemaPath:"#/properties/azimuth/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema166.properties.azimuth.type,parentSchema:schema166.properties.azimuth,data:data4};
+const err12 = {instancePath:instancePath+"/azimuth",schemaPath:"#/properties/azimuth/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema169.properties.azimuth.type,parentSchema:schema169.properties.azimuth,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -8409,7 +8910,7 @@ errors++;
 }
 }
 else {
-const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema166.type,parentSchema:schema166,data};
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema169.type,parentSchema:schema169,data};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -8418,18 +8919,18 @@ vErrors.push(err13);
 }
 errors++;
 }
-validate82.errors = vErrors;
+validate85.errors = vErrors;
 return errors === 0;
 }
 
-const schema169 = {"type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"$ref":"#/definitions/id"},"label":{"type":"string"},"kind":{"enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"$ref":"#/definitions/id"},"along":{"type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"$ref":"#/definitions/id"},"from":{"type":"number"},"to":{"type":"number"}}},"dragArea":{"$ref":"#/definitions/nonNegative"},"mass":{"$ref":"#/definitions/nonNegative"},"iceDragArea":{"$ref":"#/definitions/nonNegative"},"iceMass":{"$ref":"#/definitions/nonNegative"}}};
+const schema172 = {"description":"An item on the structure: point items hang on a node; line items run along a group between two heights.","type":"object","additionalProperties":false,"required":["id","kind","dragArea","mass"],"properties":{"id":{"description":"Ancillary id.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"kind":{"description":"What the item is: antenna, dish, feeder, ladder, platform or other.","enum":["antenna","dish","feeder","ladder","platform","other"]},"node":{"description":"Point item: the node it is attached at.","$ref":"#/definitions/id"},"along":{"description":"Line item: the group it runs along and its height range.","type":"object","additionalProperties":false,"required":["group","from","to"],"properties":{"group":{"description":"Group id.","$ref":"#/definitions/id"},"from":{"description":"Bottom of the run, m above z = 0.","type":"number"},"to":{"description":"Top of the run, m above z = 0.","type":"number"}}},"dragArea":{"description":"Drag area C_f · A: m² for a point item, m² per metre of height for a line item.","$ref":"#/definitions/nonNegative"},"mass":{"description":"Mass: kg for a point item, kg per metre of height for a line item.","$ref":"#/definitions/nonNegative"},"iceDragArea":{"description":"Drag area added per metre of radial ice, m²/m (line items per metre of height too); default 0: ice ignored.","$ref":"#/definitions/nonNegative"},"iceMass":{"description":"Ice mass per metre of radial ice, kg/m (line items per metre of height too); default 0: ice ignored.","$ref":"#/definitions/nonNegative"},"iceBehaviour":{"description":"How ice forms on the item: perThickness (default; iceDragArea and iceMass per metre of ice), coat (a uniform coat on a round body of width coatWidth), none (shielded).","enum":["perThickness","coat","none"],"x-message":"{field} must be one of perThickness, coat, none"},"coatWidth":{"description":"coat: outer width of the iced body, m.","$ref":"#/definitions/positive"},"coatLength":{"description":"coat, point items: length of the iced body, m.","$ref":"#/definitions/positive"}}};
 
-function validate84(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+function validate87(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
 let vErrors = null;
 let errors = 0;
 if(data && typeof data == "object" && !Array.isArray(data)){
 if(data.id === undefined){
-const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema172.required,parentSchema:schema172,data};
 if(vErrors === null){
 vErrors = [err0];
 }
@@ -8439,7 +8940,7 @@ vErrors.push(err0);
 errors++;
 }
 if(data.kind === undefined){
-const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "kind"},message:"must have required property '"+"kind"+"'",schema:schema172.required,parentSchema:schema172,data};
 if(vErrors === null){
 vErrors = [err1];
 }
@@ -8449,7 +8950,7 @@ vErrors.push(err1);
 errors++;
 }
 if(data.dragArea === undefined){
-const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "dragArea"},message:"must have required property '"+"dragArea"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "dragArea"},message:"must have required property '"+"dragArea"+"'",schema:schema172.required,parentSchema:schema172,data};
 if(vErrors === null){
 vErrors = [err2];
 }
@@ -8459,7 +8960,7 @@ vErrors.push(err2);
 errors++;
 }
 if(data.mass === undefined){
-const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "mass"},message:"must have required property '"+"mass"+"'",schema:schema169.required,parentSchema:schema169,data};
+const err3 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "mass"},message:"must have required property '"+"mass"+"'",schema:schema172.required,parentSchema:schema172,data};
 if(vErrors === null){
 vErrors = [err3];
 }
@@ -8469,8 +8970,8 @@ vErrors.push(err3);
 errors++;
 }
 for(const key0 in data){
-if(!(func2.call(schema169.properties, key0))){
-const err4 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema169,data};
+if(!(func2.call(schema172.properties, key0))){
+const err4 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema172,data};
 if(vErrors === null){
 vErrors = [err4];
 }
@@ -8508,7 +9009,7 @@ errors++;
 if(data.label !== undefined){
 let data1 = data.label;
 if(typeof data1 !== "string"){
-const err7 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema169.properties.label.type,parentSchema:schema169.properties.label,data:data1};
+const err7 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema172.properties.label.type,parentSchema:schema172.properties.label,data:data1};
 if(vErrors === null){
 vErrors = [err7];
 }
@@ -8521,7 +9022,7 @@ errors++;
 if(data.kind !== undefined){
 let data2 = data.kind;
 if(!((((((data2 === "antenna") || (data2 === "dish")) || (data2 === "feeder")) || (data2 === "ladder")) || (data2 === "platform")) || (data2 === "other"))){
-const err8 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema169.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema169.properties.kind.enum,parentSchema:schema169.properties.kind,data:data2};
+const err8 = {instancePath:instancePath+"/kind",schemaPath:"#/properties/kind/enum",keyword:"enum",params:{allowedValues: schema172.properties.kind.enum},message:"must be equal to one of the allowed values",schema:schema172.properties.kind.enum,parentSchema:schema172.properties.kind,data:data2};
 if(vErrors === null){
 vErrors = [err8];
 }
@@ -8560,7 +9061,7 @@ if(data.along !== undefined){
 let data4 = data.along;
 if(data4 && typeof data4 == "object" && !Array.isArray(data4)){
 if(data4.group === undefined){
-const err11 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema169.properties.along.required,parentSchema:schema169.properties.along,data:data4};
+const err11 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema172.properties.along.required,parentSchema:schema172.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err11];
 }
@@ -8570,7 +9071,7 @@ vErrors.push(err11);
 errors++;
 }
 if(data4.from === undefined){
-const err12 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema169.properties.along.required,parentSchema:schema169.properties.along,data:data4};
+const err12 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "from"},message:"must have required property '"+"from"+"'",schema:schema172.properties.along.required,parentSchema:schema172.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err12];
 }
@@ -8580,7 +9081,7 @@ vErrors.push(err12);
 errors++;
 }
 if(data4.to === undefined){
-const err13 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema169.properties.along.required,parentSchema:schema169.properties.along,data:data4};
+const err13 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/required",keyword:"required",params:{missingProperty: "to"},message:"must have required property '"+"to"+"'",schema:schema172.properties.along.required,parentSchema:schema172.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err13];
 }
@@ -8591,7 +9092,7 @@ errors++;
 }
 for(const key1 in data4){
 if(!(((key1 === "group") || (key1 === "from")) || (key1 === "to"))){
-const err14 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema169.properties.along,data:data4};
+const err14 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema172.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err14];
 }
@@ -8629,7 +9130,7 @@ errors++;
 if(data4.from !== undefined){
 let data6 = data4.from;
 if(!((typeof data6 == "number") && (isFinite(data6)))){
-const err17 = {instancePath:instancePath+"/along/from",schemaPath:"#/properties/along/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema169.properties.along.properties.from.type,parentSchema:schema169.properties.along.properties.from,data:data6};
+const err17 = {instancePath:instancePath+"/along/from",schemaPath:"#/properties/along/properties/from/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema172.properties.along.properties.from.type,parentSchema:schema172.properties.along.properties.from,data:data6};
 if(vErrors === null){
 vErrors = [err17];
 }
@@ -8642,7 +9143,7 @@ errors++;
 if(data4.to !== undefined){
 let data7 = data4.to;
 if(!((typeof data7 == "number") && (isFinite(data7)))){
-const err18 = {instancePath:instancePath+"/along/to",schemaPath:"#/properties/along/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema169.properties.along.properties.to.type,parentSchema:schema169.properties.along.properties.to,data:data7};
+const err18 = {instancePath:instancePath+"/along/to",schemaPath:"#/properties/along/properties/to/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema172.properties.along.properties.to.type,parentSchema:schema172.properties.along.properties.to,data:data7};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -8654,7 +9155,7 @@ errors++;
 }
 }
 else {
-const err19 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema169.properties.along.type,parentSchema:schema169.properties.along,data:data4};
+const err19 = {instancePath:instancePath+"/along",schemaPath:"#/properties/along/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema172.properties.along.type,parentSchema:schema172.properties.along,data:data4};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -8764,9 +9265,10 @@ vErrors.push(err27);
 errors++;
 }
 }
-}
-else {
-const err28 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema169.type,parentSchema:schema169,data};
+if(data.iceBehaviour !== undefined){
+let data12 = data.iceBehaviour;
+if(!(((data12 === "perThickness") || (data12 === "coat")) || (data12 === "none"))){
+const err28 = {instancePath:instancePath+"/iceBehaviour",schemaPath:"#/properties/iceBehaviour/enum",keyword:"enum",params:{allowedValues: schema172.properties.iceBehaviour.enum},message:"must be equal to one of the allowed values",schema:schema172.properties.iceBehaviour.enum,parentSchema:schema172.properties.iceBehaviour,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -8775,7 +9277,585 @@ vErrors.push(err28);
 }
 errors++;
 }
-validate84.errors = vErrors;
+}
+if(data.coatWidth !== undefined){
+let data13 = data.coatWidth;
+if((typeof data13 == "number") && (isFinite(data13))){
+if(data13 <= 0 || isNaN(data13)){
+const err29 = {instancePath:instancePath+"/coatWidth",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data13};
+if(vErrors === null){
+vErrors = [err29];
+}
+else {
+vErrors.push(err29);
+}
+errors++;
+}
+}
+else {
+const err30 = {instancePath:instancePath+"/coatWidth",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data13};
+if(vErrors === null){
+vErrors = [err30];
+}
+else {
+vErrors.push(err30);
+}
+errors++;
+}
+}
+if(data.coatLength !== undefined){
+let data14 = data.coatLength;
+if((typeof data14 == "number") && (isFinite(data14))){
+if(data14 <= 0 || isNaN(data14)){
+const err31 = {instancePath:instancePath+"/coatLength",schemaPath:"#/definitions/positive/exclusiveMinimum",keyword:"exclusiveMinimum",params:{comparison: ">", limit: 0},message:"must be > 0",schema:0,parentSchema:schema27,data:data14};
+if(vErrors === null){
+vErrors = [err31];
+}
+else {
+vErrors.push(err31);
+}
+errors++;
+}
+}
+else {
+const err32 = {instancePath:instancePath+"/coatLength",schemaPath:"#/definitions/positive/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema27.type,parentSchema:schema27,data:data14};
+if(vErrors === null){
+vErrors = [err32];
+}
+else {
+vErrors.push(err32);
+}
+errors++;
+}
+}
+}
+else {
+const err33 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema172.type,parentSchema:schema172,data};
+if(vErrors === null){
+vErrors = [err33];
+}
+else {
+vErrors.push(err33);
+}
+errors++;
+}
+validate87.errors = vErrors;
+return errors === 0;
+}
+
+const schema182 = {"description":"What the tension schedule lists.","type":"object","additionalProperties":false,"properties":{"list":{"description":"cables (default): cables in full, other members summarised per group; groups: the chosen groups; all: every member.","enum":["cables","groups","all"],"x-message":"{field} must be one of cables, groups, all"},"groups":{"description":"Groups listed when list is \"groups\".","$ref":"#/definitions/idList"}}};
+
+function validate89(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+for(const key0 in data){
+if(!((key0 === "list") || (key0 === "groups"))){
+const err0 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema182,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+}
+if(data.list !== undefined){
+let data0 = data.list;
+if(!(((data0 === "cables") || (data0 === "groups")) || (data0 === "all"))){
+const err1 = {instancePath:instancePath+"/list",schemaPath:"#/properties/list/enum",keyword:"enum",params:{allowedValues: schema182.properties.list.enum},message:"must be equal to one of the allowed values",schema:schema182.properties.list.enum,parentSchema:schema182.properties.list,data:data0};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+}
+if(data.groups !== undefined){
+if(!(validate20(data.groups, {instancePath:instancePath+"/groups",parentData:data,parentDataProperty:"groups",rootData}))){
+vErrors = vErrors === null ? validate20.errors : vErrors.concat(validate20.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err2 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema182.type,parentSchema:schema182,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+validate89.errors = vErrors;
+return errors === 0;
+}
+
+const schema183 = {"description":"Ice with wind: cases with the ice of one load case and the wind of another, each factor pair one case (wind acts on the iced areas).","type":"object","additionalProperties":false,"required":["id","iceCase","windCase"],"properties":{"id":{"description":"Pairing id; its cases are named after it.","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"iceCase":{"description":"Load case with ice (its own wind, if any, is replaced).","$ref":"#/definitions/id"},"windCase":{"description":"Load case whose wind is taken.","$ref":"#/definitions/id"},"pairs":{"description":"Factor pairs (ice, wind), one case each; default (1, 0.5) and (0.5, 1) — common practice placeholders: set the factors of the code in force.","type":"array","minItems":1,"items":{"type":"object","additionalProperties":false,"required":["ice","wind"],"properties":{"ice":{"description":"Factor on the ice (thickness and mass), dimensionless.","$ref":"#/definitions/nonNegative"},"wind":{"description":"Factor on the wind force, dimensionless.","$ref":"#/definitions/nonNegative"}}}},"purpose":{"description":"What the cases are checked for (default: the purpose of iceCase).","enum":["ultimate","serviceability","accidental"],"x-message":"{field} must be one of ultimate, serviceability, accidental"}}};
+
+function validate92(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema183.required,parentSchema:schema183,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.iceCase === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "iceCase"},message:"must have required property '"+"iceCase"+"'",schema:schema183.required,parentSchema:schema183,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+if(data.windCase === undefined){
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "windCase"},message:"must have required property '"+"windCase"+"'",schema:schema183.required,parentSchema:schema183,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((((((key0 === "id") || (key0 === "label")) || (key0 === "iceCase")) || (key0 === "windCase")) || (key0 === "pairs")) || (key0 === "purpose"))){
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema183,data};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+else {
+const err5 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema183.properties.label.type,parentSchema:schema183.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+if(data.iceCase !== undefined){
+let data2 = data.iceCase;
+if(typeof data2 === "string"){
+if(!pattern0.test(data2)){
+const err7 = {instancePath:instancePath+"/iceCase",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+else {
+const err8 = {instancePath:instancePath+"/iceCase",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.windCase !== undefined){
+let data3 = data.windCase;
+if(typeof data3 === "string"){
+if(!pattern0.test(data3)){
+const err9 = {instancePath:instancePath+"/windCase",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data3};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+else {
+const err10 = {instancePath:instancePath+"/windCase",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data3};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+}
+if(data.pairs !== undefined){
+let data4 = data.pairs;
+if(Array.isArray(data4)){
+if(data4.length < 1){
+const err11 = {instancePath:instancePath+"/pairs",schemaPath:"#/properties/pairs/minItems",keyword:"minItems",params:{limit: 1},message:"must NOT have fewer than 1 items",schema:1,parentSchema:schema183.properties.pairs,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+const len0 = data4.length;
+for(let i0=0; i0<len0; i0++){
+let data5 = data4[i0];
+if(data5 && typeof data5 == "object" && !Array.isArray(data5)){
+if(data5.ice === undefined){
+const err12 = {instancePath:instancePath+"/pairs/" + i0,schemaPath:"#/properties/pairs/items/required",keyword:"required",params:{missingProperty: "ice"},message:"must have required property '"+"ice"+"'",schema:schema183.properties.pairs.items.required,parentSchema:schema183.properties.pairs.items,data:data5};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+if(data5.wind === undefined){
+const err13 = {instancePath:instancePath+"/pairs/" + i0,schemaPath:"#/properties/pairs/items/required",keyword:"required",params:{missingProperty: "wind"},message:"must have required property '"+"wind"+"'",schema:schema183.properties.pairs.items.required,parentSchema:schema183.properties.pairs.items,data:data5};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+for(const key1 in data5){
+if(!((key1 === "ice") || (key1 === "wind"))){
+const err14 = {instancePath:instancePath+"/pairs/" + i0,schemaPath:"#/properties/pairs/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema183.properties.pairs.items,data:data5};
+if(vErrors === null){
+vErrors = [err14];
+}
+else {
+vErrors.push(err14);
+}
+errors++;
+}
+}
+if(data5.ice !== undefined){
+let data6 = data5.ice;
+if((typeof data6 == "number") && (isFinite(data6))){
+if(data6 < 0 || isNaN(data6)){
+const err15 = {instancePath:instancePath+"/pairs/" + i0+"/ice",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data6};
+if(vErrors === null){
+vErrors = [err15];
+}
+else {
+vErrors.push(err15);
+}
+errors++;
+}
+}
+else {
+const err16 = {instancePath:instancePath+"/pairs/" + i0+"/ice",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data6};
+if(vErrors === null){
+vErrors = [err16];
+}
+else {
+vErrors.push(err16);
+}
+errors++;
+}
+}
+if(data5.wind !== undefined){
+let data7 = data5.wind;
+if((typeof data7 == "number") && (isFinite(data7))){
+if(data7 < 0 || isNaN(data7)){
+const err17 = {instancePath:instancePath+"/pairs/" + i0+"/wind",schemaPath:"#/definitions/nonNegative/minimum",keyword:"minimum",params:{comparison: ">=", limit: 0},message:"must be >= 0",schema:0,parentSchema:schema18,data:data7};
+if(vErrors === null){
+vErrors = [err17];
+}
+else {
+vErrors.push(err17);
+}
+errors++;
+}
+}
+else {
+const err18 = {instancePath:instancePath+"/pairs/" + i0+"/wind",schemaPath:"#/definitions/nonNegative/type",keyword:"type",params:{type: "number"},message:"must be number",schema:schema18.type,parentSchema:schema18,data:data7};
+if(vErrors === null){
+vErrors = [err18];
+}
+else {
+vErrors.push(err18);
+}
+errors++;
+}
+}
+}
+else {
+const err19 = {instancePath:instancePath+"/pairs/" + i0,schemaPath:"#/properties/pairs/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema183.properties.pairs.items.type,parentSchema:schema183.properties.pairs.items,data:data5};
+if(vErrors === null){
+vErrors = [err19];
+}
+else {
+vErrors.push(err19);
+}
+errors++;
+}
+}
+}
+else {
+const err20 = {instancePath:instancePath+"/pairs",schemaPath:"#/properties/pairs/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema183.properties.pairs.type,parentSchema:schema183.properties.pairs,data:data4};
+if(vErrors === null){
+vErrors = [err20];
+}
+else {
+vErrors.push(err20);
+}
+errors++;
+}
+}
+if(data.purpose !== undefined){
+let data8 = data.purpose;
+if(!(((data8 === "ultimate") || (data8 === "serviceability")) || (data8 === "accidental"))){
+const err21 = {instancePath:instancePath+"/purpose",schemaPath:"#/properties/purpose/enum",keyword:"enum",params:{allowedValues: schema183.properties.purpose.enum},message:"must be equal to one of the allowed values",schema:schema183.properties.purpose.enum,parentSchema:schema183.properties.purpose,data:data8};
+if(vErrors === null){
+vErrors = [err21];
+}
+else {
+vErrors.push(err21);
+}
+errors++;
+}
+}
+}
+else {
+const err22 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema183.type,parentSchema:schema183,data};
+if(vErrors === null){
+vErrors = [err22];
+}
+else {
+vErrors.push(err22);
+}
+errors++;
+}
+validate92.errors = vErrors;
+return errors === 0;
+}
+
+const schema189 = {"description":"Unbalanced ice on guys: copies of an iced load case with the guys of a group iced on some and bare on the others, each unit in turn.","type":"object","additionalProperties":false,"required":["id","case","group"],"properties":{"id":{"description":"Id; its cases are \"<id> / <guy> bare\", \"<id> / level <z> m iced\", ….","$ref":"#/definitions/id"},"label":{"description":"Name shown in tables.","type":"string"},"case":{"description":"Load case with ice.","$ref":"#/definitions/id"},"group":{"description":"Group of the guys.","$ref":"#/definitions/id"},"by":{"description":"Unit taken in turn: a single guy (default) or a guy level (the guys whose upper end is at one height).","enum":["guy","level"],"x-message":"{field} must be guy or level"},"pattern":{"description":"eachBare (default): that unit bare, the rest iced; eachIced: that unit iced only.","enum":["eachBare","eachIced"],"x-message":"{field} must be eachBare or eachIced"}}};
+
+function validate94(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
+let vErrors = null;
+let errors = 0;
+if(data && typeof data == "object" && !Array.isArray(data)){
+if(data.id === undefined){
+const err0 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "id"},message:"must have required property '"+"id"+"'",schema:schema189.required,parentSchema:schema189,data};
+if(vErrors === null){
+vErrors = [err0];
+}
+else {
+vErrors.push(err0);
+}
+errors++;
+}
+if(data.case === undefined){
+const err1 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "case"},message:"must have required property '"+"case"+"'",schema:schema189.required,parentSchema:schema189,data};
+if(vErrors === null){
+vErrors = [err1];
+}
+else {
+vErrors.push(err1);
+}
+errors++;
+}
+if(data.group === undefined){
+const err2 = {instancePath,schemaPath:"#/required",keyword:"required",params:{missingProperty: "group"},message:"must have required property '"+"group"+"'",schema:schema189.required,parentSchema:schema189,data};
+if(vErrors === null){
+vErrors = [err2];
+}
+else {
+vErrors.push(err2);
+}
+errors++;
+}
+for(const key0 in data){
+if(!((((((key0 === "id") || (key0 === "label")) || (key0 === "case")) || (key0 === "group")) || (key0 === "by")) || (key0 === "pattern"))){
+const err3 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema189,data};
+if(vErrors === null){
+vErrors = [err3];
+}
+else {
+vErrors.push(err3);
+}
+errors++;
+}
+}
+if(data.id !== undefined){
+let data0 = data.id;
+if(typeof data0 === "string"){
+if(!pattern0.test(data0)){
+const err4 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err4];
+}
+else {
+vErrors.push(err4);
+}
+errors++;
+}
+}
+else {
+const err5 = {instancePath:instancePath+"/id",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data0};
+if(vErrors === null){
+vErrors = [err5];
+}
+else {
+vErrors.push(err5);
+}
+errors++;
+}
+}
+if(data.label !== undefined){
+let data1 = data.label;
+if(typeof data1 !== "string"){
+const err6 = {instancePath:instancePath+"/label",schemaPath:"#/properties/label/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema189.properties.label.type,parentSchema:schema189.properties.label,data:data1};
+if(vErrors === null){
+vErrors = [err6];
+}
+else {
+vErrors.push(err6);
+}
+errors++;
+}
+}
+if(data.case !== undefined){
+let data2 = data.case;
+if(typeof data2 === "string"){
+if(!pattern0.test(data2)){
+const err7 = {instancePath:instancePath+"/case",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err7];
+}
+else {
+vErrors.push(err7);
+}
+errors++;
+}
+}
+else {
+const err8 = {instancePath:instancePath+"/case",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data2};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+}
+if(data.group !== undefined){
+let data3 = data.group;
+if(typeof data3 === "string"){
+if(!pattern0.test(data3)){
+const err9 = {instancePath:instancePath+"/group",schemaPath:"#/definitions/id/pattern",keyword:"pattern",params:{pattern: "^\\S(.*\\S)?$"},message:"must match pattern \""+"^\\S(.*\\S)?$"+"\"",schema:"^\\S(.*\\S)?$",parentSchema:schema15,data:data3};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+else {
+const err10 = {instancePath:instancePath+"/group",schemaPath:"#/definitions/id/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema15.type,parentSchema:schema15,data:data3};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
+}
+errors++;
+}
+}
+if(data.by !== undefined){
+let data4 = data.by;
+if(!((data4 === "guy") || (data4 === "level"))){
+const err11 = {instancePath:instancePath+"/by",schemaPath:"#/properties/by/enum",keyword:"enum",params:{allowedValues: schema189.properties.by.enum},message:"must be equal to one of the allowed values",schema:schema189.properties.by.enum,parentSchema:schema189.properties.by,data:data4};
+if(vErrors === null){
+vErrors = [err11];
+}
+else {
+vErrors.push(err11);
+}
+errors++;
+}
+}
+if(data.pattern !== undefined){
+let data5 = data.pattern;
+if(!((data5 === "eachBare") || (data5 === "eachIced"))){
+const err12 = {instancePath:instancePath+"/pattern",schemaPath:"#/properties/pattern/enum",keyword:"enum",params:{allowedValues: schema189.properties.pattern.enum},message:"must be equal to one of the allowed values",schema:schema189.properties.pattern.enum,parentSchema:schema189.properties.pattern,data:data5};
+if(vErrors === null){
+vErrors = [err12];
+}
+else {
+vErrors.push(err12);
+}
+errors++;
+}
+}
+}
+else {
+const err13 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema189.type,parentSchema:schema189,data};
+if(vErrors === null){
+vErrors = [err13];
+}
+else {
+vErrors.push(err13);
+}
+errors++;
+}
+validate94.errors = vErrors;
 return errors === 0;
 }
 
@@ -9012,8 +10092,8 @@ let data11 = data.groups;
 if(Array.isArray(data11)){
 const len4 = data11.length;
 for(let i4=0; i4<len4; i4++){
-if(!(validate44(data11[i4], {instancePath:instancePath+"/groups/" + i4,parentData:data11,parentDataProperty:i4,rootData}))){
-vErrors = vErrors === null ? validate44.errors : vErrors.concat(validate44.errors);
+if(!(validate45(data11[i4], {instancePath:instancePath+"/groups/" + i4,parentData:data11,parentDataProperty:i4,rootData}))){
+vErrors = vErrors === null ? validate45.errors : vErrors.concat(validate45.errors);
 errors = vErrors.length;
 }
 }
@@ -9034,8 +10114,8 @@ let data13 = data.combinations;
 if(Array.isArray(data13)){
 const len5 = data13.length;
 for(let i5=0; i5<len5; i5++){
-if(!(validate47(data13[i5], {instancePath:instancePath+"/combinations/" + i5,parentData:data13,parentDataProperty:i5,rootData}))){
-vErrors = vErrors === null ? validate47.errors : vErrors.concat(validate47.errors);
+if(!(validate48(data13[i5], {instancePath:instancePath+"/combinations/" + i5,parentData:data13,parentDataProperty:i5,rootData}))){
+vErrors = vErrors === null ? validate48.errors : vErrors.concat(validate48.errors);
 errors = vErrors.length;
 }
 }
@@ -9052,20 +10132,20 @@ errors++;
 }
 }
 if(data.checks !== undefined){
-if(!(validate49(data.checks, {instancePath:instancePath+"/checks",parentData:data,parentDataProperty:"checks",rootData}))){
-vErrors = vErrors === null ? validate49.errors : vErrors.concat(validate49.errors);
+if(!(validate50(data.checks, {instancePath:instancePath+"/checks",parentData:data,parentDataProperty:"checks",rootData}))){
+vErrors = vErrors === null ? validate50.errors : vErrors.concat(validate50.errors);
 errors = vErrors.length;
 }
 }
 if(data.tuning !== undefined){
-if(!(validate55(data.tuning, {instancePath:instancePath+"/tuning",parentData:data,parentDataProperty:"tuning",rootData}))){
-vErrors = vErrors === null ? validate55.errors : vErrors.concat(validate55.errors);
+if(!(validate56(data.tuning, {instancePath:instancePath+"/tuning",parentData:data,parentDataProperty:"tuning",rootData}))){
+vErrors = vErrors === null ? validate56.errors : vErrors.concat(validate56.errors);
 errors = vErrors.length;
 }
 }
 if(data.installation !== undefined){
-if(!(validate60(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
-vErrors = vErrors === null ? validate60.errors : vErrors.concat(validate60.errors);
+if(!(validate63(data.installation, {instancePath:instancePath+"/installation",parentData:data,parentDataProperty:"installation",rootData}))){
+vErrors = vErrors === null ? validate63.errors : vErrors.concat(validate63.errors);
 errors = vErrors.length;
 }
 }
@@ -9074,8 +10154,8 @@ let data18 = data.generators;
 if(Array.isArray(data18)){
 const len6 = data18.length;
 for(let i6=0; i6<len6; i6++){
-if(!(validate62(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
-vErrors = vErrors === null ? validate62.errors : vErrors.concat(validate62.errors);
+if(!(validate65(data18[i6], {instancePath:instancePath+"/generators/" + i6,parentData:data18,parentDataProperty:i6,rootData}))){
+vErrors = vErrors === null ? validate65.errors : vErrors.concat(validate65.errors);
 errors = vErrors.length;
 }
 }
@@ -9092,14 +10172,14 @@ errors++;
 }
 }
 if(data.display !== undefined){
-if(!(validate64(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
-vErrors = vErrors === null ? validate64.errors : vErrors.concat(validate64.errors);
+if(!(validate67(data.display, {instancePath:instancePath+"/display",parentData:data,parentDataProperty:"display",rootData}))){
+vErrors = vErrors === null ? validate67.errors : vErrors.concat(validate67.errors);
 errors = vErrors.length;
 }
 }
 if(data.designBasis !== undefined){
-if(!(validate66(data.designBasis, {instancePath:instancePath+"/designBasis",parentData:data,parentDataProperty:"designBasis",rootData}))){
-vErrors = vErrors === null ? validate66.errors : vErrors.concat(validate66.errors);
+if(!(validate69(data.designBasis, {instancePath:instancePath+"/designBasis",parentData:data,parentDataProperty:"designBasis",rootData}))){
+vErrors = vErrors === null ? validate69.errors : vErrors.concat(validate69.errors);
 errors = vErrors.length;
 }
 }
@@ -9108,8 +10188,8 @@ let data22 = data.sequences;
 if(Array.isArray(data22)){
 const len7 = data22.length;
 for(let i7=0; i7<len7; i7++){
-if(!(validate68(data22[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data22,parentDataProperty:i7,rootData}))){
-vErrors = vErrors === null ? validate68.errors : vErrors.concat(validate68.errors);
+if(!(validate71(data22[i7], {instancePath:instancePath+"/sequences/" + i7,parentData:data22,parentDataProperty:i7,rootData}))){
+vErrors = vErrors === null ? validate71.errors : vErrors.concat(validate71.errors);
 errors = vErrors.length;
 }
 }
@@ -9130,8 +10210,8 @@ let data24 = data.siteMeasurements;
 if(Array.isArray(data24)){
 const len8 = data24.length;
 for(let i8=0; i8<len8; i8++){
-if(!(validate73(data24[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data24,parentDataProperty:i8,rootData}))){
-vErrors = vErrors === null ? validate73.errors : vErrors.concat(validate73.errors);
+if(!(validate76(data24[i8], {instancePath:instancePath+"/siteMeasurements/" + i8,parentData:data24,parentDataProperty:i8,rootData}))){
+vErrors = vErrors === null ? validate76.errors : vErrors.concat(validate76.errors);
 errors = vErrors.length;
 }
 }
@@ -9152,7 +10232,7 @@ let data26 = data.report;
 if(data26 && typeof data26 == "object" && !Array.isArray(data26)){
 for(const key1 in data26){
 if(!((key1 === "documentNumber") || (key1 === "revisions"))){
-const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema154,data:data26};
+const err21 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key1},message:"must NOT have additional properties",schema:false,parentSchema:schema157,data:data26};
 if(vErrors === null){
 vErrors = [err21];
 }
@@ -9165,7 +10245,7 @@ errors++;
 if(data26.documentNumber !== undefined){
 let data27 = data26.documentNumber;
 if(typeof data27 !== "string"){
-const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.documentNumber.type,parentSchema:schema154.properties.documentNumber,data:data27};
+const err22 = {instancePath:instancePath+"/report/documentNumber",schemaPath:"#/definitions/report/properties/documentNumber/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema157.properties.documentNumber.type,parentSchema:schema157.properties.documentNumber,data:data27};
 if(vErrors === null){
 vErrors = [err22];
 }
@@ -9183,7 +10263,7 @@ for(let i9=0; i9<len9; i9++){
 let data29 = data28[i9];
 if(data29 && typeof data29 == "object" && !Array.isArray(data29)){
 if(data29.revision === undefined){
-const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema154.properties.revisions.items.required,parentSchema:schema154.properties.revisions.items,data:data29};
+const err23 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "revision"},message:"must have required property '"+"revision"+"'",schema:schema157.properties.revisions.items.required,parentSchema:schema157.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err23];
 }
@@ -9193,7 +10273,7 @@ vErrors.push(err23);
 errors++;
 }
 if(data29.date === undefined){
-const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema154.properties.revisions.items.required,parentSchema:schema154.properties.revisions.items,data:data29};
+const err24 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "date"},message:"must have required property '"+"date"+"'",schema:schema157.properties.revisions.items.required,parentSchema:schema157.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err24];
 }
@@ -9203,7 +10283,7 @@ vErrors.push(err24);
 errors++;
 }
 if(data29.description === undefined){
-const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema154.properties.revisions.items.required,parentSchema:schema154.properties.revisions.items,data:data29};
+const err25 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/required",keyword:"required",params:{missingProperty: "description"},message:"must have required property '"+"description"+"'",schema:schema157.properties.revisions.items.required,parentSchema:schema157.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -9214,7 +10294,7 @@ errors++;
 }
 for(const key2 in data29){
 if(!(((((key2 === "revision") || (key2 === "date")) || (key2 === "description")) || (key2 === "by")) || (key2 === "checkedBy"))){
-const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema154.properties.revisions.items,data:data29};
+const err26 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key2},message:"must NOT have additional properties",schema:false,parentSchema:schema157.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -9227,7 +10307,7 @@ errors++;
 if(data29.revision !== undefined){
 let data30 = data29.revision;
 if(typeof data30 !== "string"){
-const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.revision.type,parentSchema:schema154.properties.revisions.items.properties.revision,data:data30};
+const err27 = {instancePath:instancePath+"/report/revisions/" + i9+"/revision",schemaPath:"#/definitions/report/properties/revisions/items/properties/revision/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema157.properties.revisions.items.properties.revision.type,parentSchema:schema157.properties.revisions.items.properties.revision,data:data30};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -9240,7 +10320,7 @@ errors++;
 if(data29.date !== undefined){
 let data31 = data29.date;
 if(typeof data31 !== "string"){
-const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.date.type,parentSchema:schema154.properties.revisions.items.properties.date,data:data31};
+const err28 = {instancePath:instancePath+"/report/revisions/" + i9+"/date",schemaPath:"#/definitions/report/properties/revisions/items/properties/date/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema157.properties.revisions.items.properties.date.type,parentSchema:schema157.properties.revisions.items.properties.date,data:data31};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -9253,7 +10333,7 @@ errors++;
 if(data29.description !== undefined){
 let data32 = data29.description;
 if(typeof data32 !== "string"){
-const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.description.type,parentSchema:schema154.properties.revisions.items.properties.description,data:data32};
+const err29 = {instancePath:instancePath+"/report/revisions/" + i9+"/description",schemaPath:"#/definitions/report/properties/revisions/items/properties/description/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema157.properties.revisions.items.properties.description.type,parentSchema:schema157.properties.revisions.items.properties.description,data:data32};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -9266,7 +10346,7 @@ errors++;
 if(data29.by !== undefined){
 let data33 = data29.by;
 if(typeof data33 !== "string"){
-const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.by.type,parentSchema:schema154.properties.revisions.items.properties.by,data:data33};
+const err30 = {instancePath:instancePath+"/report/revisions/" + i9+"/by",schemaPath:"#/definitions/report/properties/revisions/items/properties/by/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema157.properties.revisions.items.properties.by.type,parentSchema:schema157.properties.revisions.items.properties.by,data:data33};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -9279,7 +10359,7 @@ errors++;
 if(data29.checkedBy !== undefined){
 let data34 = data29.checkedBy;
 if(typeof data34 !== "string"){
-const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema154.properties.revisions.items.properties.checkedBy.type,parentSchema:schema154.properties.revisions.items.properties.checkedBy,data:data34};
+const err31 = {instancePath:instancePath+"/report/revisions/" + i9+"/checkedBy",schemaPath:"#/definitions/report/properties/revisions/items/properties/checkedBy/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema157.properties.revisions.items.properties.checkedBy.type,parentSchema:schema157.properties.revisions.items.properties.checkedBy,data:data34};
 if(vErrors === null){
 vErrors = [err31];
 }
@@ -9291,7 +10371,7 @@ errors++;
 }
 }
 else {
-const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema154.properties.revisions.items.type,parentSchema:schema154.properties.revisions.items,data:data29};
+const err32 = {instancePath:instancePath+"/report/revisions/" + i9,schemaPath:"#/definitions/report/properties/revisions/items/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema157.properties.revisions.items.type,parentSchema:schema157.properties.revisions.items,data:data29};
 if(vErrors === null){
 vErrors = [err32];
 }
@@ -9303,7 +10383,7 @@ errors++;
 }
 }
 else {
-const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema154.properties.revisions.type,parentSchema:schema154.properties.revisions,data:data28};
+const err33 = {instancePath:instancePath+"/report/revisions",schemaPath:"#/definitions/report/properties/revisions/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema157.properties.revisions.type,parentSchema:schema157.properties.revisions,data:data28};
 if(vErrors === null){
 vErrors = [err33];
 }
@@ -9315,7 +10395,7 @@ errors++;
 }
 }
 else {
-const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema154.type,parentSchema:schema154,data:data26};
+const err34 = {instancePath:instancePath+"/report",schemaPath:"#/definitions/report/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema157.type,parentSchema:schema157,data:data26};
 if(vErrors === null){
 vErrors = [err34];
 }
@@ -9330,8 +10410,8 @@ let data35 = data.panels;
 if(Array.isArray(data35)){
 const len10 = data35.length;
 for(let i10=0; i10<len10; i10++){
-if(!(validate75(data35[i10], {instancePath:instancePath+"/panels/" + i10,parentData:data35,parentDataProperty:i10,rootData}))){
-vErrors = vErrors === null ? validate75.errors : vErrors.concat(validate75.errors);
+if(!(validate78(data35[i10], {instancePath:instancePath+"/panels/" + i10,parentData:data35,parentDataProperty:i10,rootData}))){
+vErrors = vErrors === null ? validate78.errors : vErrors.concat(validate78.errors);
 errors = vErrors.length;
 }
 }
@@ -9352,8 +10432,8 @@ let data37 = data.patchWind;
 if(Array.isArray(data37)){
 const len11 = data37.length;
 for(let i11=0; i11<len11; i11++){
-if(!(validate77(data37[i11], {instancePath:instancePath+"/patchWind/" + i11,parentData:data37,parentDataProperty:i11,rootData}))){
-vErrors = vErrors === null ? validate77.errors : vErrors.concat(validate77.errors);
+if(!(validate80(data37[i11], {instancePath:instancePath+"/patchWind/" + i11,parentData:data37,parentDataProperty:i11,rootData}))){
+vErrors = vErrors === null ? validate80.errors : vErrors.concat(validate80.errors);
 errors = vErrors.length;
 }
 }
@@ -9374,8 +10454,8 @@ let data39 = data.memberLoss;
 if(Array.isArray(data39)){
 const len12 = data39.length;
 for(let i12=0; i12<len12; i12++){
-if(!(validate79(data39[i12], {instancePath:instancePath+"/memberLoss/" + i12,parentData:data39,parentDataProperty:i12,rootData}))){
-vErrors = vErrors === null ? validate79.errors : vErrors.concat(validate79.errors);
+if(!(validate82(data39[i12], {instancePath:instancePath+"/memberLoss/" + i12,parentData:data39,parentDataProperty:i12,rootData}))){
+vErrors = vErrors === null ? validate82.errors : vErrors.concat(validate82.errors);
 errors = vErrors.length;
 }
 }
@@ -9396,8 +10476,8 @@ let data41 = data.windDirections;
 if(Array.isArray(data41)){
 const len13 = data41.length;
 for(let i13=0; i13<len13; i13++){
-if(!(validate82(data41[i13], {instancePath:instancePath+"/windDirections/" + i13,parentData:data41,parentDataProperty:i13,rootData}))){
-vErrors = vErrors === null ? validate82.errors : vErrors.concat(validate82.errors);
+if(!(validate85(data41[i13], {instancePath:instancePath+"/windDirections/" + i13,parentData:data41,parentDataProperty:i13,rootData}))){
+vErrors = vErrors === null ? validate85.errors : vErrors.concat(validate85.errors);
 errors = vErrors.length;
 }
 }
@@ -9418,8 +10498,8 @@ let data43 = data.ancillaries;
 if(Array.isArray(data43)){
 const len14 = data43.length;
 for(let i14=0; i14<len14; i14++){
-if(!(validate84(data43[i14], {instancePath:instancePath+"/ancillaries/" + i14,parentData:data43,parentDataProperty:i14,rootData}))){
-vErrors = vErrors === null ? validate84.errors : vErrors.concat(validate84.errors);
+if(!(validate87(data43[i14], {instancePath:instancePath+"/ancillaries/" + i14,parentData:data43,parentDataProperty:i14,rootData}))){
+vErrors = vErrors === null ? validate87.errors : vErrors.concat(validate87.errors);
 errors = vErrors.length;
 }
 }
@@ -9435,14 +10515,64 @@ vErrors.push(err39);
 errors++;
 }
 }
+if(data.schedule !== undefined){
+if(!(validate89(data.schedule, {instancePath:instancePath+"/schedule",parentData:data,parentDataProperty:"schedule",rootData}))){
+vErrors = vErrors === null ? validate89.errors : vErrors.concat(validate89.errors);
+errors = vErrors.length;
+}
+}
+if(data.iceWithWind !== undefined){
+let data46 = data.iceWithWind;
+if(Array.isArray(data46)){
+const len15 = data46.length;
+for(let i15=0; i15<len15; i15++){
+if(!(validate92(data46[i15], {instancePath:instancePath+"/iceWithWind/" + i15,parentData:data46,parentDataProperty:i15,rootData}))){
+vErrors = vErrors === null ? validate92.errors : vErrors.concat(validate92.errors);
+errors = vErrors.length;
+}
+}
 }
 else {
-const err40 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema11.type,parentSchema:schema11,data};
+const err40 = {instancePath:instancePath+"/iceWithWind",schemaPath:"#/properties/iceWithWind/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.iceWithWind.type,parentSchema:schema11.properties.iceWithWind,data:data46};
 if(vErrors === null){
 vErrors = [err40];
 }
 else {
 vErrors.push(err40);
+}
+errors++;
+}
+}
+if(data.unbalancedIce !== undefined){
+let data48 = data.unbalancedIce;
+if(Array.isArray(data48)){
+const len16 = data48.length;
+for(let i16=0; i16<len16; i16++){
+if(!(validate94(data48[i16], {instancePath:instancePath+"/unbalancedIce/" + i16,parentData:data48,parentDataProperty:i16,rootData}))){
+vErrors = vErrors === null ? validate94.errors : vErrors.concat(validate94.errors);
+errors = vErrors.length;
+}
+}
+}
+else {
+const err41 = {instancePath:instancePath+"/unbalancedIce",schemaPath:"#/properties/unbalancedIce/type",keyword:"type",params:{type: "array"},message:"must be array",schema:schema11.properties.unbalancedIce.type,parentSchema:schema11.properties.unbalancedIce,data:data48};
+if(vErrors === null){
+vErrors = [err41];
+}
+else {
+vErrors.push(err41);
+}
+errors++;
+}
+}
+}
+else {
+const err42 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema11.type,parentSchema:schema11,data};
+if(vErrors === null){
+vErrors = [err42];
+}
+else {
+vErrors.push(err42);
 }
 errors++;
 }
