@@ -86,7 +86,7 @@ export const KINDS: Record<QuantityKind, KindInfo> = {
   temperatureChange: { noun: 'a temperature change', precision: { resolution: 0.1 }, units: { SI: { label: 'K', toBase: 1 }, US: { label: '°F', toBase: KELVIN_PER_FAHRENHEIT_DEGREE } } },
   thermalExpansion: { noun: 'a thermal expansion coefficient', precision: { significant: 3 }, units: { SI: { label: '1/K', toBase: 1 }, US: { label: '1/°F', toBase: 1 / KELVIN_PER_FAHRENHEIT_DEGREE } } },
   period: { noun: 'a period', precision: { resolution: 1e-3 }, units: same({ label: 's', toBase: 1 }) },
-  frequency: { noun: 'a frequency', precision: { resolution: 0.01 }, units: same({ label: 'Hz', toBase: 1 }) },
+  frequency: { noun: 'a frequency', precision: { resolution: 0.001 }, units: same({ label: 'Hz', toBase: 1 }) },
   angle: { noun: 'an angle', precision: { resolution: 0.001 }, units: same({ label: '°', toBase: 1 }) },
   speed: { noun: 'a speed', precision: { resolution: 0.01 }, units: { SI: { label: 'm/s', toBase: 1 }, US: { label: 'mph', toBase: METRES_PER_SECOND_PER_MPH } } },
   ratio: { noun: 'a ratio', precision: { resolution: 0.001 }, units: same({ label: '', toBase: 1 }) },

@@ -67,7 +67,7 @@ describe('what the schedule lists', () => {
     expect(row.unchecked + row.failing).toBe(checks.members.filter((m) => ids.has(m.id) && m.status !== 'pass').length + ids.size - checks.members.filter((m) => ids.has(m.id)).length);
     const html = scheduleHtml(doc);
     expect(html).toContain('Other members listed, summarised per group');
-    expect(html).toContain(`${(min / 1000).toFixed(1)}</td>`);
+    expect(html).toContain(`${(min / 1000).toFixed(2)}</td>`);
     // The CSV carries the same summary.
     expect(scheduleCsv(doc)).toContain(`mast legs,bar,${ids.size},${(max / 1000).toFixed(2)}`);
   });
@@ -149,9 +149,9 @@ describe('the tuning run kept in the project', () => {
     expect(doc.tuning!.date).toBe('2026-12-01T10:00:00Z');
     expect(doc.tuning!.targets).toHaveLength(1);
     expect(doc.tuning!.targets[0].met).toBe(true);
-    // Tension share 0.1 of the breaking load (16 mm strand: 230 kN in the fixture) → 10.00 %.
-    expect(doc.tuning!.targets[0].value).toMatch(/^10\.00 % \(target 10\.00 %\)$/);
-    expect(doc.tuning!.variables[0]).toEqual({ group: 'guys level 1', by: 'pretension', value: `${(run.variables[0].final / 1000).toFixed(1)} kN` });
+    // Tension share 0.1 of the breaking load (16 mm strand: 230 kN in the fixture) → 10.0 % (a share prints to 0.1 %).
+    expect(doc.tuning!.targets[0].value).toMatch(/^10\.0 % \(target 10\.0 %\)$/);
+    expect(doc.tuning!.variables[0]).toEqual({ group: 'guys level 1', by: 'pretension', value: `${(run.variables[0].final / 1000).toFixed(2)} kN` });
     const html = scheduleHtml(doc);
     expect(html).not.toContain('No tuning run is recorded');
     expect(html).toContain('every target met');
@@ -164,7 +164,7 @@ describe('the tuning run kept in the project', () => {
     // A later edit of the pretension: the record stays, and the schedule says it is not the current state.
     const edited: ProjectFile = { ...tuned, members: tuned.members.map((m) => (membersOfGroup(tuned, 'mast/guys level 1').has(m.id) ? { ...m, pretension: 12e3 } : m)) };
     const later = buildSchedule({ project: edited, report: solveProject(edited).report }, date);
-    expect(later.notes.join(' ')).toContain('The pretension of guys level 1 is 12.0 kN; the tuning run of 2026-12-01T10:00:00Z left');
+    expect(later.notes.join(' ')).toContain('The pretension of guys level 1 is 12.00 kN; the tuning run of 2026-12-01T10:00:00Z left');
   });
 
   it('a record written before the detailed one (date and summary only) still prints', () => {
