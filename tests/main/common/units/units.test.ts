@@ -32,6 +32,21 @@ describe('conversion factors against their exact definitions', () => {
     expect(fromDisplay(1, 'moment', 'US')).toBeCloseTo(reference.evaluate('1000 lbf * ft').toNumber('N m'), 9);
   });
 
+  it('the editors\' kinds: strength and shear modulus in ksi, in⁴, cm⁴, ft², ft²/ft (exact from in, ft, lbf; mathjs as reference)', () => {
+    const ksi = reference.evaluate('1000 lbf / inch^2').toNumber('Pa');
+    expect(fromDisplay(1, 'strength', 'US')).toBeCloseTo(ksi, 6);
+    expect(fromDisplay(1, 'shearModulus', 'US')).toBeCloseTo(ksi, 6);
+    expect(fromDisplay(1, 'strength', 'SI')).toBe(1e6);
+    expect(fromDisplay(1, 'shearModulus', 'SI')).toBe(1e9);
+    // 1 in⁴ = 0.0254⁴ m⁴ = 41.62314256 cm⁴ (exact from 1 in = 2.54 cm).
+    expect(fromDisplay(1, 'secondMoment', 'US')).toBe(0.0254 ** 4);
+    expect(toDisplay(fromDisplay(1, 'secondMoment', 'US'), 'secondMoment', 'SI')).toBeCloseTo(41.62314256, 8);
+    expect(fromDisplay(1, 'dragArea', 'US')).toBeCloseTo(reference.unit(1, 'ft^2').toNumber('m^2'), 12);
+    expect(fromDisplay(1, 'dragAreaPerLength', 'US')).toBe(0.3048);
+    expect(KINDS.moment.units.US.label).toBe('kip·ft');
+    expect(KINDS.pressure.units.US.label).toBe('psf');
+  });
+
   it('temperatures: °C = K − 273.15, °F = °C × 9/5 + 32; a difference of 1 °F = 5/9 K (NIST SP 811 4.2.1.1, B.9)', () => {
     expect(toDisplay(273.15, 'temperature', 'SI')).toBe(0);
     expect(toDisplay(373.15, 'temperature', 'US')).toBeCloseTo(212, 12);
