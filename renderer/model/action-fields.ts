@@ -6,8 +6,7 @@
  */
 import type { AreaLoadSpec, ProjectFile } from '../../solver/index.ts';
 import { stepResponsePeak } from '../../solver/index.ts';
-import { formatQuantity } from '../units/format-quantity.ts';
-import { displayUnit } from '../units/quantity-kinds.ts';
+import { formatWithUnit } from '../../main/common/units/index.ts';
 import { freshId } from './project-edits.ts';
 import { refChoices, type Entry, type FieldContext, type FieldSpec } from './field-spec.ts';
 import type { ActionList } from './action-edits.ts';
@@ -165,7 +164,7 @@ export function newAreaLoad(): AreaLoadSpec {
 /** One line per entry for the collapsed list. */
 export function actionSummary(list: ActionList | 'areaLoads', e: Entry, ctx: FieldContext): string {
   const u = ctx.units;
-  const len = (v: unknown) => `${formatQuantity(v as number, 'length', u, 4)} ${displayUnit('length', u).label}`;
+  const len = (v: unknown) => formatWithUnit(v as number, 'length', u);
   switch (list) {
     case 'ancillaries': {
       const along = e.along as { group: string; from: number; to: number } | undefined;
@@ -175,7 +174,7 @@ export function actionSummary(list: ActionList | 'areaLoads', e: Entry, ctx: Fie
     case 'memberLoss': return `from ${e.fromCase}: ${e.group ? `each of ${e.group}` : ''}${e.group && e.members ? ' + ' : ''}${e.members ? (e.members as string[]).join(', ') : ''}`;
     case 'windDirections': return `${e.case} from ${e.count} directions`;
     case 'panels': return `${(e.nodes as string[]).length} corners${e.region ? `, ${e.region}` : ''}`;
-    case 'areaLoads': return `${e.kind} ${formatQuantity(e.value as number, 'pressure', u, 4)} ${displayUnit('pressure', u).label}${e.panels ? ` on ${(e.panels as string[]).join(', ')}` : ''}`;
+    case 'areaLoads': return `${e.kind} ${formatWithUnit(e.value as number, 'pressure', u)}${e.panels ? ` on ${(e.panels as string[]).join(', ')}` : ''}`;
   }
 }
 

@@ -6,8 +6,7 @@
  * renderer/units. Read and written by model/field-spec.ts, drawn by components/actions/EntryList.vue.
  */
 import type { ProjectFile } from '../../solver/index.ts';
-import { formatQuantity } from '../units/format-quantity.ts';
-import { displayUnit, type QuantityKind } from '../units/quantity-kinds.ts';
+import { formatWithUnit, type QuantityKind } from '../../main/common/units/index.ts';
 import { freshId } from './project-edits.ts';
 import { refChoices, type Entry, type FieldContext, type FieldSpec } from './field-spec.ts';
 
@@ -90,7 +89,7 @@ export const NODAL_MOMENT_FIELD: FieldSpec = {
 
 /** Number and unit for summaries. */
 function q(v: unknown, kind: QuantityKind, ctx: FieldContext): string {
-  return `${formatQuantity(v as number, kind, ctx.units, 4)} ${displayUnit(kind, ctx.units).label}`;
+  return formatWithUnit(v as number, kind, ctx.units);
 }
 
 export type DesignList = 'minimumTension' | 'memberDesign' | 'twistLimits' | 'sections' | 'displacements';

@@ -1,13 +1,12 @@
 /**
  * Field descriptors of the entry editors (design actions, area loads): what a field is, how its
- * text is read (SI in the file, display units at the edge through renderer/units) and written
+ * text is read (SI in the file, display units at the edge through main/common/units; typed units parsed by renderer/units) and written
  * back. One descriptor per field, so a new optional field of the file format is one line; fields
  * no descriptor names are kept by every edit and shown read-only.
  */
 import type { ProjectFile } from '../../solver/index.ts';
 import { parseQuantity } from '../units/parse-quantity.ts';
-import { displayUnit, type QuantityKind, type UnitSystem } from '../units/quantity-kinds.ts';
-import { formatQuantity } from '../units/format-quantity.ts';
+import { displayUnit, entryText, type QuantityKind, type UnitSystem } from '../../main/common/units/index.ts';
 import { getPath, setPath } from './action-edits.ts';
 
 /** What a reference field points at (its choices come from the project). */
@@ -153,16 +152,16 @@ export function fieldText(f: FieldSpec, entry: Entry, units: UnitSystem): string
   switch (f.type) {
     case 'number': {
       const k = kindOf(f, entry);
-      return k ? formatQuantity(v as number, k, units, 6) : String(Number((v as number).toPrecision(10)));
+      return k ? entryText(v as number, k, units) : String(Number((v as number).toPrecision(10)));
     }
     case 'list':
       return (v as string[]).join(', ');
     case 'vector': {
       const k = kindOf(f, entry);
-      return (v as number[]).map((x) => (k ? formatQuantity(x, k, units, 6) : String(Number(x.toPrecision(10))))).join(', ');
+      return (v as number[]).map((x) => (k ? entryText(x, k, units) : String(Number(x.toPrecision(10))))).join(', ');
     }
     case 'ranges':
-      return (v as { from: number; to: number }[]).map((r) => `${formatQuantity(r.from, 'length', units, 6)} … ${formatQuantity(r.to, 'length', units, 6)}`).join('; ');
+      return (v as { from: number; to: number }[]).map((r) => `${entryText(r.from, 'length', units)} … ${entryText(r.to, 'length', units)}`).join('; ');
     case 'pairs':
       return (v as { region: string; cp: number }[]).map((p) => `${p.region}: ${p.cp}`).join(', ');
     default:

@@ -14,7 +14,7 @@ import { installationData, referenceCaseId, runChecks, solveModes, solveProject 
 import { buildSchedule } from '../../main/common/schedule/build-schedule.ts';
 import { SCHEDULE_MODE_COUNT } from '../../main/common/schedule/schedule-frequencies.ts';
 import type { ScheduleDocument } from '../../main/common/schedule/schedule-types.ts';
-import type { UnitSystem } from '../units/quantity-kinds.ts';
+import type { UnitSystem } from '../../main/common/units/index.ts';
 
 export interface SchedulePage {
   doc: ScheduleDocument;

@@ -1,7 +1,7 @@
 /** Display settings: unit system, deformation scale, colour mode. Never affect results. */
 import { defineStore } from 'pinia';
 import { ref } from 'vue';
-import type { UnitSystem } from '../units/quantity-kinds.ts';
+import type { UnitSystem } from '../../main/common/units/index.ts';
 
 /**
  * tension: members coloured by axial force; utilisation: by design force / design resistance (solver memberUtilisation); kind: by member

@@ -11,6 +11,8 @@ import type { ProjectFile, TargetOutcome, TuningResult } from '../../solver/inde
 import { membersOfGroup, referenceCaseId } from '../../solver/index.ts';
 import { useProjectStore } from './project.ts';
 import { useResultsStore } from './results.ts';
+import { useSettingsStore } from './settings.ts';
+import { targetText, tuningDiagnosisText, tuningSummaryText } from '../../main/common/tuning/tuning-text.ts';
 import { LiveChannel, runTuning, type LiveStepOutcome, type TuningRun } from '../tuning/tuning-client.ts';
 import { applyTuningResult, applyVariableValues, commitPretension, sliderGroups, type SliderGroup } from '../tuning/tuning-edits.ts';
 
@@ -41,6 +43,7 @@ export function summariseStep(project: ProjectFile, step: LiveStepOutcome): Live
 export const useTuningStore = defineStore('tuning', () => {
   const projectStore = useProjectStore();
   const { project, revision } = storeToRefs(projectStore);
+  const { units } = storeToRefs(useSettingsStore());
   const results = useResultsStore();
 
   const selectedGroup = ref('');
@@ -96,12 +99,17 @@ export const useTuningStore = defineStore('tuning', () => {
       return { ...g, min: b.min, max: b.max, value: Math.min(b.max, Math.max(b.min, value)) };
     });
   });
-  const targets = computed<TargetOutcome[]>(() => lastResult.value?.targets ?? []);
+  /** The last run's targets with their words in the display units. */
+  const targets = computed<(TargetOutcome & { label: string })[]>(() => {
+    const r = lastResult.value;
+    return r ? r.targets.map((t) => ({ ...t, label: targetText(project.value ?? r.project, t.target, units.value) })) : [];
+  });
   const diagnosis = computed<string[]>(() => {
     const r = lastResult.value;
     if (cancelledBest.value) return [`Cancelled after ${cancelledBest.value.iterations} iteration(s): the best values so far can be applied.`];
     if (!r) return [];
-    return [r.summary, ...r.diagnosis];
+    const p = project.value ?? r.project;
+    return [tuningSummaryText(r, p, units.value), ...tuningDiagnosisText(r, p, units.value)];
   });
 
   function onStep(step: LiveStepOutcome): void {
@@ -151,7 +159,7 @@ export const useTuningStore = defineStore('tuning', () => {
     progress.value = '';
     if (out.kind === 'done') {
       lastResult.value = markRaw(out.result);
-      message.value = { kind: out.result.status === 'met' ? 'info' : 'error', text: out.result.summary };
+      message.value = { kind: out.result.status === 'met' ? 'info' : 'error', text: tuningSummaryText(out.result, p, units.value) };
     } else if (out.kind === 'cancelled') {
       cancelledBest.value = out.x ? { iterations: out.iterations, x: out.x } : null;
       message.value = { kind: 'info', text: out.x ? 'Tuning cancelled.' : 'Tuning cancelled before the first iteration finished: nothing to apply.' };
@@ -170,7 +178,7 @@ export const useTuningStore = defineStore('tuning', () => {
     const r = lastResult.value;
     if (best) {
       if (edit('Tuned pretensions (best so far)', (p) => applyVariableValues(p, best.x))) cancelledBest.value = null;
-    } else if (r && edit('Tuned pretensions', (p) => applyTuningResult(p, r, new Date().toISOString()))) {
+    } else if (r && edit('Tuned pretensions', (p) => applyTuningResult(p, r, new Date().toISOString(), units.value))) {
       message.value = { kind: 'info', text: 'Tuned pretensions written; run the analysis to update every case.' };
     }
   }

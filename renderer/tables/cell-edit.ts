@@ -2,8 +2,7 @@
  * Turning typed text into a cell value (unit-aware for quantities) and into a table edit.
  * A refused edit returns messages and changes nothing; the cell keeps the typed text visible.
  */
-import type { UnitSystem } from '../units/quantity-kinds.ts';
-import { formatQuantity } from '../units/format-quantity.ts';
+import { entryText, type UnitSystem } from '../../main/common/units/index.ts';
 import { parseQuantity } from '../units/parse-quantity.ts';
 import type { CellValue, Column } from './columns.ts';
 
@@ -37,6 +36,6 @@ export function parseCell<R>(column: Column<R>, text: string, units: UnitSystem,
 export function cellText<R>(column: Column<R>, row: R, units: UnitSystem): string {
   const v = column.get(row);
   if (v === undefined || v === null) return '';
-  if (column.type === 'quantity' && typeof v === 'number') return formatQuantity(v, column.kind ?? 'count', units);
+  if (column.type === 'quantity' && typeof v === 'number') return entryText(v, column.kind ?? 'count', units);
   return String(v);
 }

@@ -1,10 +1,10 @@
 /**
  * Column definitions of the model tables: how each cell reads from a row (SI) and writes back.
- * Numeric columns carry a QuantityKind and are entered unit-aware (renderer/units); the header
+ * Numeric columns carry a QuantityKind and are entered unit-aware (renderer/units/parse-quantity.ts; display through main/common/units); the header
  * shows the display unit. Optional columns accept an empty cell (field removed from the file).
  */
 import type { LoadCaseSpec, MemberSpec, NodeSpec, ProjectFile, SectionSpec } from '../../solver/index.ts';
-import type { QuantityKind } from '../units/quantity-kinds.ts';
+import type { QuantityKind } from '../../main/common/units/index.ts';
 import type { TableName, TableRow } from '../model/table-names.ts';
 import { withField } from '../model/project-edits.ts';
 

@@ -4,7 +4,9 @@
  * tuning variables and targets, and applying a tuning run's final values to the current project.
  */
 import type { ProjectFile, TuningResult, TuningSpec, TuningTarget } from '../../solver/index.ts';
-import { applyVariables, resolveVariables, tuningRunRecord } from '../../solver/index.ts';
+import { applyVariables, resolveVariables } from '../../solver/index.ts';
+import { tuningRunRecord } from '../../main/common/tuning/tuning-record.ts';
+import type { UnitSystem } from '../../main/common/units/index.ts';
 
 export interface SliderGroup {
   id: string;
@@ -35,14 +37,14 @@ export function commitPretension(project: ProjectFile, group: string, pretension
 /**
  * Put a tuning run's final values (matched by group) into `project`, which may have changed
  * since, and keep the run as `tuning.lastRun` (tuningRunRecord, dated `date`, ISO 8601) so the
- * schedule and the report print it.
+ * schedule and the report print it; the record's words are in `units` (default: the project's display units).
  */
-export function applyTuningResult(project: ProjectFile, result: Pick<TuningResult, 'variables' | 'status' | 'summary' | 'targets' | 'diagnosis'>, date: string): ProjectFile {
+export function applyTuningResult(project: ProjectFile, result: TuningResult, date: string, units: UnitSystem = project.display?.units === 'US' ? 'US' : 'SI'): ProjectFile {
   const finals = new Map(result.variables.map((v) => [`${v.group}\u0000${v.by}`, v.final]));
   const vars = resolveVariables(project).filter((v) => finals.has(`${v.group}\u0000${v.by}`));
   if (!vars.length) throw new Error('tuning: none of the tuned groups is a tuning variable of the project any more');
   const tuned = applyVariables(project, vars, vars.map((v) => finals.get(`${v.group}\u0000${v.by}`)!));
-  return { ...tuned, tuning: { ...(tuned.tuning ?? { variables: [], targets: [] }), lastRun: tuningRunRecord(result, date) } };
+  return { ...tuned, tuning: { ...(tuned.tuning ?? { variables: [], targets: [] }), lastRun: tuningRunRecord(result, project, units, date) } };
 }
 
 /** Values in the order of project.tuning.variables (a cancelled run's best x) → project. */

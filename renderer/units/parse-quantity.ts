@@ -10,7 +10,18 @@
  * Function calls and anything but numbers, unit names and + − × ÷ ^ ( ) are refused.
  */
 import { unitMath } from './math-instance.ts';
-import { KINDS, displayUnit, type QuantityKind, type UnitSystem } from './quantity-kinds.ts';
+import { KINDS, displayUnit, fromDisplay, type QuantityKind, type UnitSystem } from '../../main/common/units/index.ts';
+
+/**
+ * The SI unit of each kind as a mathjs expression, for typed quantities with units; '' for kinds
+ * entered as plain numbers only (temperatures, counts) or by the delta rule (parseDelta).
+ */
+const MATH_SI_UNIT: Record<QuantityKind, string> = {
+  force: 'N', moment: 'N m', length: 'm', displacement: 'm', smallLength: 'm', area: 'm^2',
+  stress: 'Pa', strength: 'Pa', modulus: 'Pa', shearModulus: 'Pa', secondMoment: 'm^4', dragArea: 'm^2', dragAreaPerLength: 'm',
+  period: 's', pressure: 'Pa', massPerLength: 'kg/m', mass: 'kg', speed: 'm/s', frequency: 'Hz',
+  temperature: '', temperatureChange: '', thermalExpansion: '', angle: '', ratio: '', share: '', slenderness: '', count: '',
+};
 
 export type ParseResult = { ok: true; value: number } | { ok: false; error: string };
 
@@ -25,8 +36,9 @@ function fail(field: string, message: string): ParseResult {
 /** The noun of the first known kind whose SI unit has the same dimension as `unit`. */
 function dimensionNoun(unit: { equalBase(u: unknown): boolean }): string {
   const m = unitMath();
-  for (const info of Object.values(KINDS)) {
-    if (info.siUnit && unit.equalBase(m.unit(info.siUnit))) return info.noun;
+  for (const [kind, info] of Object.entries(KINDS)) {
+    const si = MATH_SI_UNIT[kind as QuantityKind];
+    if (si && unit.equalBase(m.unit(si))) return info.noun;
   }
   return 'a quantity of another dimension';
 }
@@ -43,7 +55,7 @@ function parseDelta(text: string, kind: QuantityKind, system: UnitSystem, field:
     return fail(field, `"${text}" is not ${KINDS[kind].noun}: expected ${perUnit ? 'a unit like 1/K' : 'a unit like K'}`);
   }
   let kelvinPerUnit: number;
-  if (!suffix) kelvinPerUnit = kind === 'temperatureChange' ? displayUnit(kind, system).toSI : 1 / displayUnit(kind, system).toSI;
+  if (!suffix) kelvinPerUnit = kind === 'temperatureChange' ? displayUnit(kind, system).toBase : 1 / displayUnit(kind, system).toBase;
   else kelvinPerUnit = /F$/i.test(suffix) ? 5 / 9 : 1;
   // ΔT [K] = value × K-per-unit; α [1/K] = value / K-per-unit.
   return { ok: true, value: perUnit ? value / kelvinPerUnit : value * kelvinPerUnit };
@@ -58,7 +70,7 @@ export function parseQuantity(text: string, kind: QuantityKind, system: UnitSyst
   if (trimmed === '') return fail(field, 'a value is required');
   if (kind === 'temperatureChange' || kind === 'thermalExpansion') return parseDelta(trimmed, kind, system, field);
   if (PLAIN_NUMBER.test(trimmed)) {
-    return { ok: true, value: Number(trimmed) * displayUnit(kind, system).toSI };
+    return { ok: true, value: fromDisplay(Number(trimmed), kind, system) };
   }
   if (!ALLOWED.test(trimmed) || FUNCTION_CALL.test(trimmed)) {
     return fail(field, `"${trimmed}" is not a number or a quantity like "12 kN"`);
@@ -74,15 +86,16 @@ export function parseQuantity(text: string, kind: QuantityKind, system: UnitSyst
   const info = KINDS[kind];
   if (typeof result === 'number') {
     if (!Number.isFinite(result)) return fail(field, `"${trimmed}" is not a finite number`);
-    return { ok: true, value: result * displayUnit(kind, system).toSI };
+    return { ok: true, value: fromDisplay(result, kind, system) };
   }
   if (m.isUnit(result)) {
-    if (!info.siUnit) return fail(field, `"${trimmed}" has a unit, but this field is ${info.noun} without unit`);
-    const si = m.unit(info.siUnit);
+    const siUnit = MATH_SI_UNIT[kind];
+    if (!siUnit) return fail(field, `"${trimmed}" has a unit, but this field is ${info.noun} without unit`);
+    const si = m.unit(siUnit);
     if (!result.equalBase(si)) {
       return fail(field, `"${trimmed}" is ${dimensionNoun(result)}, not ${info.noun}`);
     }
-    const value = result.toNumber(info.siUnit);
+    const value = result.toNumber(siUnit);
     if (!Number.isFinite(value)) return fail(field, `"${trimmed}" is not a finite quantity`);
     return { ok: true, value };
   }

@@ -8,7 +8,7 @@ export { fixedEndTension, type FixedEndCable } from './thermal-tension.ts';
 export { memberCutLengths } from './cut-length.ts';
 export {
   installationData, defaultInstallationTemperatures, DEFAULT_REFERENCE_TEMPERATURE,
-  type InstallationData, type MemberInstallation, type TemperatureRow,
+  type InstallationData, type InstallationNote, type MemberInstallation, type TemperatureRow,
 } from './installation-data.ts';
 export { findBracketedRoot } from './bracketed-root.ts';
 export { targetTensionAt, checkMemberFrequency, checkMemberSag, expectedStringFrequency, type MemberSiteCheck } from './site-check-member.ts';

@@ -16,6 +16,7 @@
  */
 import type { MemberKind, ProjectFile } from '../project/types.ts';
 import type { CaseResult, MemberResult } from '../results/types.ts';
+import type { OutcomeMessage } from '../results/message-types.ts';
 import { buildModel } from '../model/build-model.ts';
 import { resolveCaseLoads } from '../loads/resolve-case-loads.ts';
 import { createWorkspace } from '../analysis/workspace.ts';
@@ -58,6 +59,13 @@ export interface MemberInstallation {
   axialStiffness: number;
 }
 
+/**
+ * A note on the installation data (words at the edge: main/common/report/installation-text.ts).
+ * - referenceTemperatureAssumed: meta.referenceTemperature is not set; quantities.temperature (K) used
+ * - rowNotConverged: the table row at quantities.temperature (K) did not converge; refs.status
+ */
+export type InstallationNote = OutcomeMessage<'referenceTemperatureAssumed' | 'rowNotConverged'>;
+
 export interface TemperatureRow {
   /** Installation temperature, K. */
   temperature: number;
@@ -78,7 +86,7 @@ export interface InstallationData {
   /** Member ids in table column order (same as members). */
   memberIds: string[];
   table: TemperatureRow[];
-  warnings: string[];
+  warnings: InstallationNote[];
 }
 
 /** Tension at the lower end of a member: tensionStart when `from` is lower, else tensionEnd. */
@@ -93,8 +101,8 @@ export function installationData(project: ProjectFile, options: { temperatures?:
   const spec = project.loadCases.find((c) => c.id === refId)!;
   const tRefGiven = project.meta?.referenceTemperature;
   const tRef = tRefGiven ?? DEFAULT_REFERENCE_TEMPERATURE;
-  const warnings: string[] = [];
-  if (tRefGiven === undefined) warnings.push(`meta.referenceTemperature is not set: ${(tRef - 273.15).toFixed(0)} °C assumed`);
+  const warnings: InstallationNote[] = [];
+  if (tRefGiven === undefined) warnings.push({ code: 'referenceTemperatureAssumed', quantities: { temperature: { value: tRef, kind: 'temperature' } }, refs: {} });
   const temps = options.temperatures ?? project.installation?.temperatures ?? defaultInstallationTemperatures();
   temps.forEach((t, i) => {
     if (!(t > 0) || !Number.isFinite(t)) throw new Error(`installation.temperatures[${i}]: ${t} is not an absolute temperature in K`);
@@ -137,7 +145,7 @@ export function installationData(project: ProjectFile, options: { temperatures?:
     const loads = { ...baseLoads, temperatureChange: baseLoads.temperatureChange + deltaT };
     const s = solveCase(ws, `${refId} at ${(temperature - 273.15).toFixed(1)} °C`, loads, { start });
     if (!s.result.converged) {
-      warnings.push(`installation at ${(temperature - 273.15).toFixed(1)} °C did not converge: ${s.result.message ?? s.result.status}`);
+      warnings.push({ code: 'rowNotConverged', quantities: { temperature: { value: temperature, kind: 'temperature' } }, refs: { status: s.result.status } });
       return { temperature, deltaT, converged: false, message: s.result.message, tensions: model.members.map(() => NaN) };
     }
     start = s.fields.positions;

@@ -20,30 +20,6 @@ import { membersOfGroup, groupExists } from '../checks/groups.ts';
 import { referenceCaseId } from './reference-case.ts';
 import type { TargetValue } from './tuning-types.ts';
 
-function groupLabel(project: ProjectFile, group: string): string {
-  return project.groups?.find((g) => g.id === group)?.label ?? group;
-}
-
-const fmt = (x: number, digits = 3): string => (Math.abs(x) >= 1000 ? x.toFixed(0) : x.toPrecision(digits));
-
-/** Plain description of a target, e.g. "sag ≤ 0.600 m in 'dead' for 'guys level 1'". */
-export function describeTarget(project: ProjectFile, t: TuningTarget): string {
-  switch (t.kind) {
-    case 'sag': {
-      const lim = 'absolute' in t.limit ? `${t.limit.absolute.toFixed(3)} m` : `span/${fmt(1 / t.limit.fractionOfSpan)}`;
-      return `sag ≤ ${lim} in '${t.case}' for '${groupLabel(project, t.group)}'`;
-    }
-    case 'tensionShare':
-      return `tension share ${fmt(t.share * 100)} % of breaking load at installation for '${groupLabel(project, t.group)}'`;
-    case 'noSlack':
-      return `no slack in '${t.case}' for '${groupLabel(project, t.group)}'`;
-    case 'plumb':
-      return `mast top '${t.top}' plumb over '${t.base}' within ${t.tolerance.toFixed(3)} m in '${t.case}'`;
-    case 'reaction':
-      return `reaction at '${t.node}' ≤ ${fmt(t.limit / 1000)} kN in '${t.case}'`;
-  }
-}
-
 /** Case ids a target needs solved. */
 export function targetCases(project: ProjectFile, t: TuningTarget): string[] {
   return t.kind === 'tensionShare' ? [referenceCaseId(project)] : [t.case];

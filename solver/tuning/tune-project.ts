@@ -9,11 +9,11 @@ import type { ProjectFile } from '../project/types.ts';
 import type { CaseResult } from '../results/types.ts';
 import { membersOfGroup } from '../checks/groups.ts';
 import { applyVariables, memberPretension, resolveVariables } from './tuning-variables.ts';
-import { describeTarget, evaluateTarget, targetCases, validateTarget } from './target-evaluation.ts';
+import { evaluateTarget, targetCases, validateTarget } from './target-evaluation.ts';
 import { finiteDifferenceJacobian, isMet, solveBoundedLeastSquares, type GapProblem, type LmOptions } from './levenberg-marquardt.ts';
 import { diagnoseTargets } from './conflict-diagnosis.ts';
 import { createWarmSession } from './warm-session.ts';
-import type { CaseSolveFn, TargetValue, TuningResult, VariableOutcome } from './tuning-types.ts';
+import type { CaseSolveFn, TargetValue, TuningNote, TuningResult, VariableOutcome } from './tuning-types.ts';
 
 export interface TuneOptions extends LmOptions {
   /**
@@ -50,7 +50,7 @@ export function tuneProject(project: ProjectFile, options: TuneOptions = {}): Tu
   const session = options.solveCases ? null : createWarmSession(project, vars, caseIds);
   const solveAt = (x: number[]): Map<string, CaseResult> =>
     session ? session(x) : options.solveCases!(applyVariables(project, vars, x), caseIds);
-  const cache = new Map<string, { values: TargetValue[] } | { failure: string }>();
+  const cache = new Map<string, { values: TargetValue[] } | { failure: { case: string; status: string } }>();
   const evaluateAt = (x: number[]) => {
     const key = x.map((v) => v.toPrecision(15)).join(',');
     let hit = cache.get(key);
@@ -58,13 +58,13 @@ export function tuneProject(project: ProjectFile, options: TuneOptions = {}): Tu
       const results = solveAt(x);
       const bad = [...results.values()].find((r) => !r.converged);
       hit = bad
-        ? { failure: `case '${bad.id}' did not converge (${bad.status}${bad.message ? `: ${bad.message}` : ''})` }
+        ? { failure: { case: bad.id, status: bad.status } }
         : { values: spec.targets.map((t) => evaluateTarget(project, t, results, tensionScale)) };
       cache.set(key, hit);
     }
     return hit;
   };
-  let lastFailure = '';
+  let lastFailure = { case: '', status: '' };
   const problem: GapProblem = {
     x0: vars.map((v) => v.initial),
     lower: vars.map((v) => v.lower),
@@ -78,46 +78,41 @@ export function tuneProject(project: ProjectFile, options: TuneOptions = {}): Tu
     },
   };
   const lm = solveBoundedLeastSquares(problem, options);
-  const labels = spec.targets.map((t) => describeTarget(project, t));
   const variables: VariableOutcome[] = vars.map((v, k) => ({
     group: v.group, by: v.by, initial: v.initial, final: lm.x[k], lower: v.lower, upper: v.upper,
     atBound: lm.x[k] <= v.lower ? 'lower' : lm.x[k] >= v.upper ? 'upper' : null,
   }));
   const tuned = applyVariables(project, vars, lm.x);
   if (!lm.gaps) {
-    const diagnosis = [`The starting state could not be solved: ${lastFailure}.`];
+    const diagnosis: TuningNote[] = [{ code: 'startUnsolved', quantities: {}, refs: { ...lastFailure } }];
     return {
       status: 'notConverged', targets: [], variables, iterations: 0, evaluations: lm.evaluations,
-      diagnosis, project: tuned, summary: `tuning stopped: ${lastFailure}`, cancelled: false,
+      diagnosis, project: tuned, summary: `tuning stopped: case '${lastFailure.case}' did not converge (${lastFailure.status})`, cancelled: false,
     };
   }
   const final = evaluateAt(lm.x) as { values: TargetValue[] };
   const met = final.values.map((v, i) => isMet(v.gap, problem.senses[i], eqTol));
   const targets = final.values.map((v, i) => ({
-    index: i, target: spec.targets[i], label: labels[i], value: v.value, limit: v.limit, unit: v.unit,
+    index: i, target: spec.targets[i], value: v.value, limit: v.limit, unit: v.unit,
     sense: v.sense, governing: v.governing, met: met[i],
   }));
-  const diagnosis: string[] = [];
+  const diagnosis: TuningNote[] = [];
   if (met.some((m) => !m)) {
     const J = finiteDifferenceJacobian(problem, lm.x, lm.gaps, options.fdStep ?? 1e-3) ?? lm.jacobian;
     if (J) {
       diagnosis.push(...diagnoseTargets({
-        targetLabels: labels, senses: problem.senses, gaps: lm.gaps, met, jacobian: J, margin,
-        variables: vars.map((v, k) => ({ label: groupLabel(project, v.group), by: v.by, value: lm.x[k], lower: v.lower, upper: v.upper })),
+        senses: problem.senses, gaps: lm.gaps, met, jacobian: J, margin,
+        variables: vars.map((v, k) => ({ group: v.group, by: v.by, value: lm.x[k], lower: v.lower, upper: v.upper })),
       }));
     }
-    if (lm.failedEvaluation) diagnosis.push(`A trial step could not be solved (${lastFailure}); the tuner stopped at the last state that solved.`);
+    if (lm.failedEvaluation) diagnosis.push({ code: 'trialUnsolved', quantities: {}, refs: { ...lastFailure } });
   }
   const metCount = met.filter(Boolean).length;
-  if (lm.cancelled) diagnosis.push('The tuning run was cancelled; the values shown are the best reached so far.');
+  if (lm.cancelled) diagnosis.push({ code: 'cancelled', quantities: {}, refs: {} });
   const summary = `${lm.cancelled ? 'cancelled: ' : ''}${metCount} of ${met.length} targets met after ${lm.iterations} iterations (${lm.evaluations} solves)` +
-    (metCount < met.length ? `; not met: ${labels.filter((_, i) => !met[i]).join('; ')}` : '');
+    (metCount < met.length ? `; not met: target${met.length - metCount === 1 ? '' : 's'} ${met.map((m, i) => (m ? '' : String(i + 1))).filter(Boolean).join(', ')}` : '');
   return {
     status: metCount === met.length ? 'met' : 'unmet', targets, variables, iterations: lm.iterations,
     evaluations: lm.evaluations, diagnosis, project: tuned, summary, cancelled: lm.cancelled,
   };
-}
-
-function groupLabel(project: ProjectFile, group: string): string {
-  return project.groups?.find((g) => g.id === group)?.label ?? group;
 }

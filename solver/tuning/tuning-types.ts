@@ -4,6 +4,7 @@
  */
 import type { ProjectFile, TuningTarget } from '../project/types.ts';
 import type { CaseResult } from '../results/types.ts';
+import type { OutcomeMessage } from '../results/message-types.ts';
 
 /**
  * Solves the named cases (load case or combination ids) of a project and returns their results
@@ -47,9 +48,8 @@ export interface TargetValue {
 
 export interface TargetOutcome {
   index: number;
+  /** The target as given (its words are made at the edge: main/common/tuning/tuning-text.ts). */
   target: TuningTarget;
-  /** Plain description, e.g. "sag ≤ 0.600 m in 'dead' for 'guys level 1'". */
-  label: string;
   value: number;
   limit: number;
   unit: 'm' | 'N' | 'share';
@@ -77,12 +77,30 @@ export interface TuningResult {
   iterations: number;
   /** Number of multi-case solves made. */
   evaluations: number;
-  /** Plain sentences: which targets conflict or cannot be met, and why. */
-  diagnosis: string[];
+  /** Which targets conflict or cannot be met, and why, as structured notes (words at the edge). */
+  diagnosis: TuningNote[];
   /** The project with the final pretensions written in (input untouched). */
   project: ProjectFile;
-  /** One-line summary (also stored as tuning.lastRun.summary by `stayset tune --write`). */
+  /** One-line summary without numbers in units (counts only), a fallback; the edge words it in full. */
   summary: string;
   /** True when the run was stopped by TuneOptions.isCancelled (state = best so far). */
   cancelled: boolean;
 }
+
+/**
+ * Why a target is not met, or why the run stopped. Refs: `target` / `other` (indices into
+ * TuningResult.targets), `group` (tuning variable's group id), `by` ('pretension' |
+ * 'unstressedLength'), `bound` ('upper' | 'lower'), `direction` ('up' | 'down': the variable would
+ * have to rise or fall), `groups` (every variable's group), `case` and `status` (a case that did
+ * not converge). Quantities: `bound` (N for pretension, a factor for lengths: kind 'ratio'), `gap`
+ * (share of the limit).
+ * - startUnsolved: the starting state could not be solved (case, status)
+ * - noInfluence: no variable changes the target (target, groups)
+ * - atBound: the target needs a variable past its bound (target, group, by, bound, direction)
+ * - conflict: the target needs a variable moved in a direction another binding target forbids
+ * - iterationLimit: not met within the iteration limit (target, gap)
+ * - trialUnsolved: a trial step could not be solved; stopped at the last state that solved
+ * - cancelled: the run was cancelled; the values are the best reached so far
+ */
+export type TuningNoteCode = 'startUnsolved' | 'noInfluence' | 'atBound' | 'conflict' | 'iterationLimit' | 'trialUnsolved' | 'cancelled';
+export type TuningNote = OutcomeMessage<TuningNoteCode>;

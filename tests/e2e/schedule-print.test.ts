@@ -239,7 +239,7 @@ describe.skipIf(SKIP_BROWSER_TESTS)('the renderer schedule components', () => {
     await page.goto(`${base}#tuning`);
     await page.waitForSelector('[data-testid="tuning-panel"]');
     const text = await page.textContent('[data-testid="tuning-panel"]');
-    expect(text).toContain('20.0 kN');
+    expect(text).toContain('20.00 kN'); // forces to 0.01 kN (main/common/units)
     expect(text).toContain('solved in 21 ms');
     expect(text).toContain('NO');
     expect(text).toContain('above its upper bound 45.0 kN');

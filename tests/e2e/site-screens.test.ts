@@ -4,7 +4,7 @@
  * open Sequence, run "top down" and read every value to set; open As built, run "handover" and
  * read every adjustment. Reference: the CLI on the same file (`stayset sequence --json`,
  * `stayset asbuilt --json`), formatted the way the screens and the crew sheet format them
- * (main/common/schedule/schedule-units.ts). The crew sheet shown in the app is printed to PDF and
+ * (main/common/units). The crew sheet shown in the app is printed to PDF and
  * rendered with pdftoppm for a look (test-artifacts/site/).
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -13,8 +13,7 @@ import { mkdir, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import type { AsBuiltResult, SequenceResult } from '../../solver/index.ts';
-import { formatForce, formatLength } from '../../main/common/schedule/schedule-units.ts';
-import { smallLength } from '../../main/common/report/print-css.ts';
+import { formatValue, formatWithUnit } from '../../main/common/units/index.ts';
 import { launchBrowser, type Browser } from './browser.ts';
 import { requireBrowserTools, SKIP_BROWSER_TESTS } from './browser-tools.ts';
 import { buildRenderer, REPO, SCREENSHOTS, startApp, type AppRig } from './serve-app.ts';
@@ -59,7 +58,7 @@ describe.skipIf(SKIP_BROWSER_TESTS)('site screens in the browser edition', () =>
     await page.getByTestId('sequence-results').waitFor({ timeout: 120_000 });
     let compared = 0;
     for (const st of expected.stages) for (const s of st.settings) {
-      const want = s.setBy === 'force' ? `${formatForce('SI', s.value)} kN` : `${formatLength('SI', s.value, 4)} m`;
+      const want = s.setBy === 'force' ? `${formatValue(s.value, 'force', 'SI')} kN` : `${formatValue(s.value, 'length', 'SI')} m`;
       const cell = page.locator(`tr[data-setting="${st.index}|${s.member}"] td[data-col="value"]`);
       expect(await cell.textContent(), `stage ${st.index} ${s.member}`).toBe(want);
       compared++;
@@ -74,7 +73,7 @@ describe.skipIf(SKIP_BROWSER_TESTS)('site screens in the browser edition', () =>
     await frame.waitFor({ timeout: 120_000 });
     const html = (await frame.getAttribute('srcdoc')) ?? '';
     expect(html).toContain('qualified engineer');
-    expect(html).toContain(`${formatForce('SI', expected.stages[0].settings[0].value)} kN`);
+    expect(html).toContain(`${formatValue(expected.stages[0].settings[0].value, 'force', 'SI')} kN`);
     await page.waitForTimeout(300);
     await shot('31-site-crew-sheet.png');
     // Print what the app shows, as the browser's Print would, and render page 1 for a look.
@@ -101,9 +100,9 @@ describe.skipIf(SKIP_BROWSER_TESTS)('site screens in the browser edition', () =>
     expect(await rows.count()).toBe(expected.adjustments.length);
     for (const a of expected.adjustments) {
       const row = page.locator(`tr[data-adjustment="${a.member}"]`);
-      const mm = smallLength('SI', Math.abs(a.lengthChange));
-      expect(await row.locator('td[data-col="change"]').textContent(), a.member).toBe(`${a.lengthChange > 0 ? '+' : '−'}${mm.text} ${mm.unit}`);
-      expect(await row.locator('td[data-col="target"]').textContent(), a.member).toBe(formatForce('SI', a.targetTension));
+      const mm = formatWithUnit(Math.abs(a.lengthChange), 'smallLength', 'SI');
+      expect(await row.locator('td[data-col="change"]').textContent(), a.member).toBe(`${a.lengthChange > 0 ? '+' : '−'}${mm}`);
+      expect(await row.locator('td[data-col="target"]').textContent(), a.member).toBe(formatValue(a.targetTension, 'force', 'SI'));
     }
     const unidentified = expected.cables.filter((c) => !c.identified);
     expect(await page.getByTestId('asbuilt-unidentified').count()).toBe(unidentified.length ? 1 : 0);
@@ -111,9 +110,9 @@ describe.skipIf(SKIP_BROWSER_TESTS)('site screens in the browser edition', () =>
     // The same result in US units (kip, in), reformatted without a new run.
     await page.getByTestId('site-units-us').click();
     const first = expected.adjustments[0];
-    const inches = smallLength('US', Math.abs(first.lengthChange));
-    expect(await page.locator(`tr[data-adjustment="${first.member}"] td[data-col="target"]`).textContent()).toBe(formatForce('US', first.targetTension));
-    expect(await page.locator(`tr[data-adjustment="${first.member}"] td[data-col="change"]`).textContent()).toBe(`${first.lengthChange > 0 ? '+' : '−'}${inches.text} ${inches.unit}`);
+    const inches = formatWithUnit(Math.abs(first.lengthChange), 'smallLength', 'US');
+    expect(await page.locator(`tr[data-adjustment="${first.member}"] td[data-col="target"]`).textContent()).toBe(formatValue(first.targetTension, 'force', 'US'));
+    expect(await page.locator(`tr[data-adjustment="${first.member}"] td[data-col="change"]`).textContent()).toBe(`${first.lengthChange > 0 ? '+' : '−'}${inches}`);
     await shot('32b-site-asbuilt-us.png');
     await page.getByTestId('site-units-si').click();
     expect(pageErrors).toEqual([]);

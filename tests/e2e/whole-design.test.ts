@@ -175,19 +175,19 @@ describe('a new project, edited without a text editor', () => {
     await page.locator(`[data-testid="table-nodes"] tr[data-row-id="${top}"] td.rowhead`).click();
     await page.getByTestId('right-tab-checks').click();
     const checks = page.getByTestId('checks-editor');
-    await page.getByTestId('displacement-limit').fill('0.3');
+    await page.getByTestId('displacement-limit').fill('300'); // displacements in mm
     await page.getByTestId('add-displacement').click();
-    await expect.poll(() => checks.textContent()).toContain(`|Δ| of ${top} ≤ 0.3 m`);
+    await expect.poll(() => checks.textContent()).toContain(`|Δ| of ${top} ≤ 300.0 mm`);
     await page.getByTestId('uplift-node').fill(base);
     await page.getByTestId('add-uplift').click();
     await page.getByTestId('sag-group').selectOption(`${rid}/guys`);
     await page.getByTestId('add-sag').click();
-    await expect.poll(() => checks.textContent()).toContain(`${rid}/guys: sag ≤ 2 % of span`);
+    await expect.poll(() => checks.textContent()).toContain(`${rid}/guys: sag ≤ 2.0 % of span`);
     // Minimum tension of the guys (the installation share is prefilled with 10 %), one undo step.
     await page.getByTestId('min-tension-group').selectOption(`${rid}/guys`);
     await page.getByTestId('min-tension-breaking').fill('5');
     await page.getByTestId('add-min-tension').click();
-    await expect.poll(() => checks.textContent()).toContain(`${rid}/guys: T ≥ 10 % of installation and 5 % of breaking load`);
+    await expect.poll(() => checks.textContent()).toContain(`${rid}/guys: T ≥ 10.0 % of installation and 5.0 % of breaking load`);
     expect(await page.getByTestId('undo').getAttribute('title')).toContain(`Minimum tension of ${rid}/guys`);
     await page.getByTestId('uplift-node').fill('no such node');
     await page.getByTestId('add-uplift').click();

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { create, all } from 'mathjs';
-import { parseQuantity, formatQuantity, KINDS, displayUnit } from '../../renderer/units/index.ts';
+import { parseQuantity } from '../../renderer/units/parse-quantity.ts';
+import { KINDS, entryText, fromDisplay, type QuantityKind } from '../../main/common/units/index.ts';
 
 // Exact factors: NIST SP 811 (2008), Appendix B.8/B.9 and the 1959 international yard and pound
 // agreement: 1 in = 0.0254 m, 1 ft = 0.3048 m, 1 lb = 0.45359237 kg, 1 lbf = 4.4482216152605 N.
@@ -68,11 +69,11 @@ describe('unit-aware entry', () => {
   });
 
   it('formats SI values back in the display unit and re-parses them unchanged', () => {
-    for (const kind of Object.keys(KINDS) as (keyof typeof KINDS)[]) {
+    for (const kind of Object.keys(KINDS) as QuantityKind[]) {
       if (kind === 'count') continue;
       for (const system of ['SI', 'US'] as const) {
-        const si = 3.7 * displayUnit(kind, system).toSI;
-        const text = formatQuantity(si, kind, system);
+        const si = fromDisplay(3.7, kind, system);
+        const text = entryText(si, kind, system);
         const back = parseQuantity(text, kind, system, 'f');
         expect(back.ok && back.value).toBeCloseTo(si, 9);
       }

@@ -12,7 +12,11 @@ import type { CliIO } from '../cli-io.ts';
 import { parseOptions } from '../options.ts';
 import { readProjectOrReport } from '../read-project-file.ts';
 import { replaceNonFinite } from '../format/finite-guard.ts';
-import { fixed, kN } from '../format/number-text.ts';
+import { fixedText, formatValue } from '../../common/units/index.ts';
+
+const force = (n: number): string => formatValue(n, 'force', 'SI');
+const mm = (m: number): string => formatValue(m, 'displacement', 'SI');
+const celsius = (k: number): string => formatValue(k, 'temperature', 'SI');
 import { textTable } from '../format/text-table.ts';
 import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
 import { asBuiltIssueText } from '../../common/report/asbuilt-text.ts';
@@ -38,23 +42,23 @@ Exit status:
   3  action needed: adjustments listed, a reading does not fit, or a check fails`;
 
 export function asBuiltText(r: AsBuiltResult): string {
-  const out: string[] = [`Measurement set "${r.id}" — tolerance ±${fixed(r.tolerance * 100, 1)} % of the design tension at ${fixed(r.referenceTemperature - 273.15, 1)} °C; length prior ±${fixed(r.lengthUncertainty * 1000, 0)} mm`];
+  const out: string[] = [`Measurement set "${r.id}" — tolerance ±${fixedText(r.tolerance * 100, 1)} % of the design tension at ${celsius(r.referenceTemperature)} °C; length prior ±${fixedText(r.lengthUncertainty * 1000, 0)} mm`];
   out.push(textTable(
     [{ title: 'cable' }, { title: 'ΔL mm', align: 'right' }, { title: '± mm', align: 'right' }, { title: 'identified' }, { title: 'design kN', align: 'right' }, { title: 'as built kN', align: 'right' }, { title: 'within tol.' }],
-    r.cables.map((c) => [c.member, fixed(c.lengthDifference * 1000, 1), fixed(c.lengthSigma * 1000, 1), c.identified ? 'yes' : 'NO', kN(c.designTension), kN(c.asBuiltTension), c.withinTolerance ? 'yes' : 'NO']),
+    r.cables.map((c) => [c.member, mm(c.lengthDifference), mm(c.lengthSigma), c.identified ? 'yes' : 'NO', force(c.designTension), force(c.asBuiltTension), c.withinTolerance ? 'yes' : 'NO']),
   ));
   out.push('', 'Readings (tension at the lower end)');
   out.push(textTable(
     [{ title: 'cable' }, { title: 'method' }, { title: 'reading', align: 'right' }, { title: '°C', align: 'right' }, { title: 'T kN', align: 'right' }, { title: '± kN', align: 'right' }, { title: 'fit kN', align: 'right' }, { title: 'residual σ', align: 'right' }],
-    r.observations.map((o) => [o.member, o.method, o.method === 'dynamometer' ? `${kN(o.reading)} kN` : o.method === 'frequency' ? `${fixed(o.reading, 3)} Hz` : `${fixed(o.reading, 3)} m`,
-      fixed(o.temperature - 273.15, 1), kN(o.tension), kN(o.sigma), kN(o.fitted), fixed(o.normalisedResidual, 2)]),
+    r.observations.map((o) => [o.member, o.method, o.method === 'dynamometer' ? `${force(o.reading)} kN` : o.method === 'frequency' ? `${formatValue(o.reading, 'frequency', 'SI')} Hz` : `${fixedText(o.reading, 3)} m`,
+      celsius(o.temperature), force(o.tension), force(o.sigma), force(o.fitted), fixedText(o.normalisedResidual, 2)]),
   ));
-  out.push(`  rms normalised residual ${fixed(r.rmsResidual, 2)} (about 1 when the stated accuracies are right); ${r.iterations} iteration(s)`);
+  out.push(`  rms normalised residual ${fixedText(r.rmsResidual, 2)} (about 1 when the stated accuracies are right); ${r.iterations} iteration(s)`);
   out.push('', r.adjustments.length ? 'Adjustments (fewest found; lengths at the reference temperature)' : 'No adjustment needed.');
   if (r.adjustments.length) {
     out.push(textTable(
       [{ title: 'cable' }, { title: 'change mm', align: 'right' }, { title: '' }, { title: 'tension after kN', align: 'right' }, { title: 'identified' }],
-      r.adjustments.map((a) => [a.member, fixed(a.lengthChange * 1000, 1), a.lengthChange < 0 ? 'shorten' : 'lengthen', kN(a.targetTension), a.identified ? 'yes' : 'NO — measure first']),
+      r.adjustments.map((a) => [a.member, mm(a.lengthChange), a.lengthChange < 0 ? 'shorten' : 'lengthen', force(a.targetTension), a.identified ? 'yes' : 'NO — measure first']),
     ));
   }
   const unidentified = r.cables.filter((c) => !c.identified).map((c) => c.member);

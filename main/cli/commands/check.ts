@@ -13,7 +13,9 @@ import { readProjectOrReport } from '../read-project-file.ts';
 import { plausibilityWarnings, resultWarnings } from '../../common/project/plausibility/plausibility-warnings.ts';
 import { failureHint } from '../../common/project/plausibility/failure-hint.ts';
 import { replaceNonFinite } from '../format/finite-guard.ts';
-import { fixed, kN } from '../format/number-text.ts';
+import { formatValue } from '../../common/units/index.ts';
+
+const force = (n: number): string => formatValue(n, 'force', 'SI');
 import { basisLines, checkRow, PURPOSE_NAMES, warningText } from '../../common/checks/check-text.ts';
 import { textTable } from '../format/text-table.ts';
 import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
@@ -49,21 +51,21 @@ export function checkReportText(project: ProjectFile, check: CheckReport, env: E
   out.push('Cases');
   out.push(textTable(
     [{ title: 'case' }, { title: 'purpose' }, { title: 'converged' }, { title: 'max util.', align: 'right' }, { title: 'member' }, { title: 'failures', align: 'right' }, { title: 'result' }],
-    check.cases.map((c) => [c.id, PURPOSE_NAMES[c.purpose], c.converged ? 'yes' : 'NO', c.checked && c.converged ? fixed(c.maxUtilisation, 3) : '—', c.maxUtilisationMember, String(c.failures), !c.checked ? 'not checked' : c.pass ? 'pass' : 'FAIL']),
+    check.cases.map((c) => [c.id, PURPOSE_NAMES[c.purpose], c.converged ? 'yes' : 'NO', c.checked && c.converged ? formatValue(c.maxUtilisation, 'ratio', 'SI') : '—', c.maxUtilisationMember, String(c.failures), !c.checked ? 'not checked' : c.pass ? 'pass' : 'FAIL']),
   ));
   const used = check.members.filter((m) => m.utilisation !== null).sort((a, b) => (b.utilisation ?? 0) - (a.utilisation ?? 0)).slice(0, 10);
   if (used.length) {
     out.push('', 'Highest utilisation (design force / design resistance, envelope)');
     out.push(textTable(
       [{ title: 'member' }, { title: 'T max kN', align: 'right' }, { title: 'util.', align: 'right' }, { title: 'case' }, { title: 'status' }],
-      used.map((m) => [m.id, kN(m.tensionMax), fixed(m.utilisation ?? 0, 3), m.utilisationCase, m.status]),
+      used.map((m) => [m.id, force(m.tensionMax), formatValue(m.utilisation ?? 0, 'ratio', 'SI'), m.utilisationCase, m.status]),
     ));
   }
   if (env.reactions.length) {
     out.push('', 'Support reactions (envelope of the checked cases; Fz < 0 = uplift: the support holds the structure down)');
     out.push(textTable(
       [{ title: 'support' }, { title: '|R| max kN', align: 'right' }, { title: 'case' }, { title: 'Fz min kN', align: 'right' }, { title: 'case' }, { title: '' }],
-      env.reactions.map((r) => [r.node, kN(r.magnitudeMax), r.magnitudeMaxCase, kN(r.min[2]), r.minCase[2], r.min[2] < 0 ? 'uplift' : '']),
+      env.reactions.map((r) => [r.node, force(r.magnitudeMax), r.magnitudeMaxCase, force(r.min[2]), r.minCase[2], r.min[2] < 0 ? 'uplift' : '']),
     ));
   }
   out.push('', 'Governing result of each check (worst first)');

@@ -9,7 +9,8 @@ import { buildReport } from '../../common/report/build-report.ts';
 import { reportHtml } from '../../common/report/report-html.ts';
 import { collectReportSource, ReportInputError } from '../../common/report/report-source.ts';
 import type { ReportSource } from '../../common/report/report-types.ts';
-import type { PaperSize, ScheduleUnits } from '../../common/schedule/index.ts';
+import type { PaperSize } from '../../common/schedule/index.ts';
+import type { UnitSystem } from '../../common/units/index.ts';
 import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
 import type { CliIO } from '../cli-io.ts';
@@ -65,7 +66,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
     return EXIT.notConverged;
   }
   const report = source.report;
-  const html = reportHtml(buildReport(source, { issueDate: date, units: units as ScheduleUnits | undefined, paper: paper as PaperSize }));
+  const html = reportHtml(buildReport(source, { issueDate: date, units: units as UnitSystem | undefined, paper: paper as PaperSize }));
   try {
     if (htmlOut) await writeFileAtomic(resolve(io.cwd, htmlOut), html);
   } catch (e) {

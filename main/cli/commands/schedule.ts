@@ -10,7 +10,8 @@ import { resolve } from 'node:path';
 import { CheckInputError, installationData, referenceCaseId, runChecks, solveModes } from '../../../solver/index.ts';
 import type { CheckReport, InstallationData, ModalOutcome, ScheduleSpec, SolveReport } from '../../../solver/index.ts';
 import { buildSchedule, scheduleCsv, scheduleHtml } from '../../common/schedule/index.ts';
-import type { PaperSize, ScheduleUnits } from '../../common/schedule/index.ts';
+import type { PaperSize } from '../../common/schedule/index.ts';
+import type { UnitSystem } from '../../common/units/index.ts';
 import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
 import type { CliIO } from '../cli-io.ts';
@@ -140,7 +141,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   let doc;
   try {
     doc = buildSchedule({ project, report, checks, installation, modes, notes }, {
-      issueDate: date, paper: paper as PaperSize, units: units as ScheduleUnits | undefined, ...(listing ? { listing } : {}),
+      issueDate: date, paper: paper as PaperSize, units: units as UnitSystem | undefined, ...(listing ? { listing } : {}),
     });
   } catch (e) {
     io.err(`${file}: ${(e as Error).message}\n`);

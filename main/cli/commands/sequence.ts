@@ -9,14 +9,18 @@ import { runSequence } from '../../../solver/index.ts';
 import type { ProjectFile, SequenceResult } from '../../../solver/index.ts';
 import { crewSheetHtml, stepLabel } from '../../common/report/crew-sheet.ts';
 import { sequenceIssueText, sequenceSuggestionText } from '../../common/report/sequence-text.ts';
-import type { ScheduleUnits } from '../../common/schedule/index.ts';
+import type { UnitSystem } from '../../common/units/index.ts';
 import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
 import type { CliIO } from '../cli-io.ts';
 import { parseOptions } from '../options.ts';
 import { readProjectOrReport } from '../read-project-file.ts';
 import { replaceNonFinite } from '../format/finite-guard.ts';
-import { fixed, kN } from '../format/number-text.ts';
+import { fixedText, formatValue, significantText } from '../../common/units/index.ts';
+import { tiltText } from '../../common/checks/check-text.ts';
+
+const kN = (n: number): string => formatValue(n, 'force', 'SI');
+const celsius = (k: number): string => formatValue(k, 'temperature', 'SI');
 import { textTable } from '../format/text-table.ts';
 import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
 import { writeFileAtomic } from '../../store/atomic-write.ts';
@@ -46,27 +50,27 @@ Exit status:
   3  some stage fails (printed with the suggestions)`;
 
 function sequenceText(project: ProjectFile, r: SequenceResult): string {
-  const out: string[] = [`Sequence "${r.id}" at ${fixed(r.temperature - 273.15, 1)} °C (reference ${fixed(r.referenceTemperature - 273.15, 1)} °C)`];
+  const out: string[] = [`Sequence "${r.id}" at ${celsius(r.temperature)} °C (reference ${celsius(r.referenceTemperature)} °C)`];
   const rows: string[][] = [];
   for (const st of r.stages) {
     const check = st.issues.length ? 'FAIL' : 'ok';
-    const tilt = st.tilt === null ? '' : st.tilt > 0 ? `1/${fixed(1 / st.tilt, 0)}` : '0';
+    const tilt = st.tilt === null ? '' : tiltText(st.tilt);
     if (st.kind === 'release') { rows.push([String(st.index), `release ${st.released.join(', ')}`, '', '', '', '', tilt, check]); continue; }
     if (!st.settings.length) rows.push([String(st.index), st.members.join(', '), '', 'no equilibrium', '', '', '', check]);
     st.settings.forEach((s) => {
       const force = s.setBy === 'force';
       rows.push([
         String(st.index), s.member, force ? 'force kN' : 'mark m',
-        force ? kN(s.value) : fixed(s.value, 4),
-        force ? `${kN(s.band[0])}…${kN(s.band[1])}` : `${fixed(s.band[0], 4)}…${fixed(s.band[1], 4)}`,
-        force ? `${kN(s.perKelvin)} kN/K` : `${fixed(s.perKelvin * 1000, 3)} mm/K`, tilt, check,
+        force ? kN(s.value) : formatValue(s.value, 'length', 'SI'),
+        force ? `${kN(s.band[0])}…${kN(s.band[1])}` : `${formatValue(s.band[0], 'length', 'SI')}…${formatValue(s.band[1], 'length', 'SI')}`,
+        force ? `${significantText(s.perKelvin / 1000, 3)} kN/K` : `${significantText(s.perKelvin * 1000, 3)} mm/K`, tilt, check,
       ]);
     });
   }
   out.push(textTable([{ title: 'stage', align: 'right' }, { title: 'cable' }, { title: 'set by' }, { title: 'value', align: 'right' }, { title: 'band', align: 'right' }, { title: 'per K', align: 'right' }, { title: 'tilt', align: 'right' }, { title: 'check' }], rows));
   for (const i of r.issues) out.push(`  ! ${sequenceIssueText(i, 'SI')}`);
   for (const s of r.suggestions) out.push(`  > ${sequenceSuggestionText(s, r, (k) => stepLabel(project, r, k))}`);
-  out.push(r.ok ? `  every stage passes; final state = design state (largest difference ${fixed(r.finalDifference * 100, 6)} %)` : '  SEQUENCE FAILS as given');
+  out.push(r.ok ? `  every stage passes; final state = design state (largest difference ${fixedText(r.finalDifference * 100, 6)} %)` : '  SEQUENCE FAILS as given');
   return out.join('\n');
 }
 
@@ -102,7 +106,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   else io.out(`${results.map((r) => sequenceText(project, r)).join('\n\n')}\n\n${RESULTS_DISCLAIMER}\n`);
   if (htmlOut) {
     try {
-      await writeFileAtomic(resolve(io.cwd, htmlOut), crewSheetHtml(project, results[0], { issueDate: date, units: units as ScheduleUnits | undefined }));
+      await writeFileAtomic(resolve(io.cwd, htmlOut), crewSheetHtml(project, results[0], { issueDate: date, units: units as UnitSystem | undefined }));
     } catch (e) {
       io.err(`${file}: writing the crew sheet failed (${(e as NodeJS.ErrnoException).code ?? (e as Error).message}); existing files are unchanged\n`);
       return EXIT.badInput;

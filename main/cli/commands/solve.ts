@@ -85,7 +85,7 @@ async function run(solver: ProjectSolver, args: string[], io: CliIO): Promise<nu
   if (guarded.paths.length > 0) {
     const shown = guarded.paths.slice(0, 10).join(', ');
     const more = guarded.paths.length > 10 ? ` and ${guarded.paths.length - 10} more` : '';
-    io.err(`${file}: error: the solver produced non-finite numbers (printed as null / n/a) at ${shown}${more}; these results are invalid\n`);
+    io.err(`${file}: error: the solver produced non-finite numbers (printed as null / —) at ${shown}${more}; these results are invalid\n`);
     return EXIT.notConverged;
   }
   return guarded.value.cases.every((c) => c.converged) ? EXIT.ok : EXIT.notConverged;

@@ -5,15 +5,16 @@
  * FILE.bak).
  */
 import { serializeProject } from '../../common/project/index.ts';
-import { tuneProject, tuningRunRecord } from '../../../solver/index.ts';
+import { tuneProject } from '../../../solver/index.ts';
+import { tuningRunRecord } from '../../common/tuning/tuning-record.ts';
 import type { ProjectFile, TuningResult } from '../../../solver/index.ts';
 import type { CliCommand } from '../command.ts';
 import { EXIT, UsageError } from '../cli-io.ts';
 import type { CliIO } from '../cli-io.ts';
 import { parseOptions } from '../options.ts';
 import { readProjectOrReport } from '../read-project-file.ts';
-import { fixed } from '../format/number-text.ts';
-import { forceIn, lengthIn, unitLabels, type ScheduleUnits } from '../../common/schedule/schedule-units.ts';
+import { fixedText, formatWithUnit, unitLabels, type UnitSystem } from '../../common/units/index.ts';
+import { targetText, targetValueText, tuningDiagnosisText, tuningSummaryText } from '../../common/tuning/tuning-text.ts';
 import { textTable } from '../format/text-table.ts';
 import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
 import { writeTunedFile } from '../tune-write.ts';
@@ -46,28 +47,22 @@ Exit status:
   2  bad input: missing or invalid file, no tuning section, unknown groups, cases or nodes
   3  the cases converged but some target is not met`;
 
-function valueText(units: ScheduleUnits, unit: 'm' | 'N' | 'share', v: number): string {
-  const l = unitLabels(units);
-  if (unit === 'share') return `${fixed(v * 100, 2)} %`;
-  if (unit === 'm') return `${fixed(lengthIn(units, v), 3)} ${l.length}`;
-  return `${fixed(forceIn(units, v), 2)} ${l.force}`;
-}
-
 /** Tuning result as text tables; forces in kN (SI) or kip (US), lengths in m or ft. */
-export function tuningText(r: TuningResult, units: ScheduleUnits = 'SI'): string {
+export function tuningText(r: TuningResult, project: ProjectFile, units: UnitSystem = 'SI'): string {
   const variableText = (by: 'pretension' | 'unstressedLength', v: number): string =>
-    by === 'pretension' ? valueText(units, 'N', v) : `factor ${fixed(v, 6)}`;
+    by === 'pretension' ? formatWithUnit(v, 'force', units) : `factor ${fixedText(v, 6)}`;
   const targets = textTable(
     [{ title: 'target' }, { title: 'value', align: 'right' }, { title: 'limit', align: 'right' }, { title: 'governing' }, { title: 'met' }],
-    r.targets.map((t) => [t.label, valueText(units, t.unit, t.value), t.target.kind === 'noSlack' ? `> 0 ${unitLabels(units).force}` : (t.sense === 'equal' ? '= ' : '≤ ') + valueText(units, t.unit, t.limit), t.governing, t.met ? 'yes' : 'NO']),
+    r.targets.map((t) => [targetText(project, t.target, units), targetValueText(t, t.value, units), t.target.kind === 'noSlack' ? `> 0 ${unitLabels(units).force}` : (t.sense === 'equal' ? '= ' : '≤ ') + targetValueText(t, t.limit, units), t.governing, t.met ? 'yes' : 'NO']),
   );
   const vars = textTable(
     [{ title: 'group' }, { title: 'by' }, { title: 'start', align: 'right' }, { title: 'final', align: 'right' }, { title: 'bounds' }],
     r.variables.map((v) => [v.group, v.by, variableText(v.by, v.initial), variableText(v.by, v.final),
       `${variableText(v.by, v.lower)} … ${variableText(v.by, v.upper)}${v.atBound ? ` (at ${v.atBound} bound)` : ''}`]),
   );
-  const diag = r.diagnosis.length ? `\nWhy:\n${r.diagnosis.map((d) => `  - ${d}`).join('\n')}\n` : '';
-  return `Tuning targets\n${targets}\nVariables\n${vars}\n${r.summary}\n${diag}\n${RESULTS_DISCLAIMER}\n`;
+  const notes = tuningDiagnosisText(r, project, units);
+  const diag = notes.length ? `\nWhy:\n${notes.map((d) => `  - ${d}`).join('\n')}\n` : '';
+  return `Tuning targets\n${targets}\nVariables\n${vars}\n${tuningSummaryText(r, project, units)}\n${diag}\n${RESULTS_DISCLAIMER}\n`;
 }
 
 async function run(args: string[], io: CliIO): Promise<number> {
@@ -79,6 +74,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   const read = readProjectOrReport(file, io);
   if (!read) return EXIT.badInput;
   const project: ProjectFile = read.project;
+  const units: UnitSystem = project.display?.units === 'US' ? 'US' : 'SI';
   let result: TuningResult;
   try {
     result = tuneProject(project);
@@ -90,16 +86,16 @@ async function run(args: string[], io: CliIO): Promise<number> {
     const { project: _omit, ...rest } = result;
     io.out(`${JSON.stringify({ ...rest, disclaimer: RESULTS_DISCLAIMER }, null, 2)}\n`);
   } else {
-    io.out(tuningText(result, project.display?.units === 'US' ? 'US' : 'SI'));
+    io.out(tuningText(result, project, units));
   }
   if (result.status === 'notConverged') {
-    io.err(`${file}: ${result.diagnosis.join(' ')}\n`);
+    io.err(`${file}: ${tuningDiagnosisText(result, project, units).join(' ')}\n`);
     return EXIT.notConverged;
   }
   if (opts.flags.has('write')) {
     const tuned: ProjectFile = {
       ...result.project,
-      tuning: { ...result.project.tuning!, lastRun: tuningRunRecord(result, new Date().toISOString()) },
+      tuning: { ...result.project.tuning!, lastRun: tuningRunRecord(result, project, units, new Date().toISOString()) },
     };
     const failed = await writeTunedFile(resolve(io.cwd, file), file, serializeProject(tuned), read.stamp);
     if (failed !== null) {

@@ -11,6 +11,7 @@ import { jsonOutput } from '../format/json-output.ts';
 import { textTable } from '../format/text-table.ts';
 import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
 import { windReadout } from '../../common/wind-readout.ts';
+import { fixedText, formatValue } from '../../common/units/index.ts';
 
 const HELP = `Prints, for every load case with wind: the direction, the speed and what it stands for
 (mean or peak, averaging period), the gust and structural factors on the forces, the profile, and
@@ -41,7 +42,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
     const r = 'right' as const;
     parts.push(textTable(
       [{ title: 'z m', align: r }, { title: 'V m/s', align: r }, { title: 'q Pa', align: r }, { title: 'factored q Pa', align: r }],
-      w.rows.map((x) => [x.z.toFixed(1), x.speed.toFixed(2), x.pressure.toFixed(0), x.factoredPressure.toFixed(0)]),
+      w.rows.map((x) => [fixedText(x.z, 1), formatValue(x.speed, 'speed', 'SI'), formatValue(x.pressure, 'pressure', 'SI'), formatValue(x.factoredPressure, 'pressure', 'SI')]),
     ) + '\n');
   }
   parts.push(`${RESULTS_DISCLAIMER}\n`);

@@ -4,7 +4,10 @@
  * positive in tension, forces kN, moments kN·m) and support moments (kN·m, moment the support exerts).
  */
 import type { CaseResult } from '../../../solver/index.ts';
-import { kN } from './number-text.ts';
+import { formatValue } from '../../common/units/index.ts';
+
+const force = (n: number): string => formatValue(n, 'force', 'SI');
+const moment = (n: number): string => formatValue(n, 'moment', 'SI');
 import { textTable } from './text-table.ts';
 
 const r = 'right' as const;
@@ -16,7 +19,7 @@ export function beamTable(c: CaseResult): string {
     if (!m.beam) continue;
     for (const [where, a] of [['start', m.beam.start], ['end', m.beam.end]] as const) {
       const N = where === 'start' ? -a.fx : a.fx;
-      rows.push([m.id, where, kN(N), kN(a.fy), kN(a.fz), kN(a.mx), kN(a.my), kN(a.mz)]);
+      rows.push([m.id, where, force(N), force(a.fy), force(a.fz), moment(a.mx), moment(a.my), moment(a.mz)]);
     }
   }
   if (rows.length === 0) return '';
@@ -31,7 +34,7 @@ export function beamTable(c: CaseResult): string {
 
 /** Support moments (kN·m), or '' when no support restrains or springs a rotation. */
 export function supportMomentTable(c: CaseResult): string {
-  const rows = c.reactions.filter((q) => q.moment).map((q) => [q.node, kN(q.moment![0]), kN(q.moment![1]), kN(q.moment![2])]);
+  const rows = c.reactions.filter((q) => q.moment).map((q) => [q.node, moment(q.moment![0]), moment(q.moment![1]), moment(q.moment![2])]);
   if (rows.length === 0) return '';
   return textTable([{ title: 'support' }, { title: 'Mx kN·m', align: r }, { title: 'My kN·m', align: r }, { title: 'Mz kN·m', align: r }], rows);
 }

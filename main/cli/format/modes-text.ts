@@ -5,22 +5,22 @@
  */
 import type { ModalAnalysis } from '../../../solver/index.ts';
 import { noteText } from '../../common/modes/modal-words.ts';
-import { fixed } from './number-text.ts';
+import { fixedText, formatValue } from '../../common/units/index.ts';
 import { textTable } from './text-table.ts';
 
-const percent = (share: number): string => fixed(100 * share, 1);
+const percent = (share: number): string => formatValue(share, 'share', 'SI');
 
 export function modesText(a: ModalAnalysis, disclaimer: string): string {
   const s = a.stats;
   const lines = [
-    `Modes about case ${JSON.stringify(a.case)}: ${a.modes.length} modes, ${s.dofs} DOFs, ${s.solves} solves, ${fixed(s.seconds, 3)} s`,
-    `  movable mass x / y / z: ${a.movableMass.map((m) => fixed(m, 1)).join(' / ')} kg`,
+    `Modes about case ${JSON.stringify(a.case)}: ${a.modes.length} modes, ${s.dofs} DOFs, ${s.solves} solves, ${fixedText(s.seconds, 3)} s`,
+    `  movable mass x / y / z: ${a.movableMass.map((m) => fixedText(m, 1)).join(' / ')} kg`,
     ...a.notes.map((n) => `  note: ${noteText(n)}`),
     '',
   ];
   const r = 'right' as const;
   const rows = a.modes.map((m) => [
-    String(m.number), fixed(m.frequency, 4), fixed(m.period, 4),
+    String(m.number), formatValue(m.frequency, 'frequency', 'SI'), fixedText(m.period, 4),
     ...m.effectiveMassShare.map(percent), ...m.cumulativeShare.map(percent),
   ]);
   lines.push(textTable([

@@ -4,7 +4,7 @@
  * text; `seconds` is all of the solve (analysis + Newton), as the solver measured it.
  */
 import type { SolveReport } from '../../../solver/index.ts';
-import { fixed } from './number-text.ts';
+import { fixedText } from '../../common/units/index.ts';
 
 export interface RunTimes {
   inputSeconds: number;
@@ -23,8 +23,8 @@ export function runTimes(report: SolveReport, inputSeconds: number, outputSecond
 }
 
 export function runTimesLine(t: RunTimes): string {
-  return `Time: input ${fixed(t.inputSeconds, 3)} s, analysis ${fixed(t.analysisSeconds, 3)} s, Newton ${fixed(t.newtonSeconds, 3)} s, `
-    + `output ${fixed(t.outputSeconds, 3)} s; the solve ${fixed(t.seconds, 3)} s.`;
+  return `Time: input ${fixedText(t.inputSeconds, 3)} s, analysis ${fixedText(t.analysisSeconds, 3)} s, Newton ${fixedText(t.newtonSeconds, 3)} s, `
+    + `output ${fixedText(t.outputSeconds, 3)} s; the solve ${fixedText(t.seconds, 3)} s.`;
 }
 
 /** JSON text of an object ending in "\n}\n" with `"stats": {...}` added as its last property. */

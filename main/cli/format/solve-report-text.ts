@@ -1,12 +1,15 @@
 /**
  * The readable form of a solve report: per case a header line (status, iterations, load steps,
  * DOFs, time, residual), then tables of members (forces in kN, tension positive; sag in m),
- * user-node displacements (m), beam end actions where there are beams, and support reactions (kN,
+ * user-node displacements (mm), beam end actions where there are beams, and support reactions (kN,
  * force the support exerts on the structure; moments in kN·m where rotations are restrained).
  * Cases that did not converge show the reason instead of tables.
  */
 import type { CaseResult, ProjectFile, SolveReport } from '../../../solver/index.ts';
-import { kN, fixed, metres3, metres4 } from './number-text.ts';
+import { fixedText, formatValue } from '../../common/units/index.ts';
+
+const force = (n: number): string => formatValue(n, 'force', 'SI');
+const mm = (m: number): string => formatValue(m, 'displacement', 'SI');
 import { textTable } from './text-table.ts';
 import { actionCaseTitle } from './action-case-title.ts';
 import { beamTable, supportMomentTable } from './beam-report-text.ts';
@@ -27,7 +30,7 @@ function statusLine(c: CaseResult): string {
   const status = c.converged ? 'converged' : `NOT CONVERGED (${c.status})`;
   return (
     `  ${status}: ${s.iterations} iterations, ${s.loadSteps} load steps, ${s.dofs} DOFs, ` +
-    `${fixed(s.seconds, 3)} s, residual ${Number.isFinite(s.residual) ? s.residual.toExponential(1) : 'n/a'}`
+    `${fixedText(s.seconds, 3)} s, residual ${Number.isFinite(s.residual) ? s.residual.toExponential(1) : 'n/a'}`
   );
 }
 
@@ -36,12 +39,12 @@ function memberTable(project: ProjectFile, c: CaseResult): string {
   const rows = c.members.map((m) => [
     m.id,
     kindOf.get(m.id) ?? '',
-    kN(m.tensionMax),
-    kN(m.tensionMin),
-    kN(m.tensionStart),
-    kN(m.tensionEnd),
+    force(m.tensionMax),
+    force(m.tensionMin),
+    force(m.tensionStart),
+    force(m.tensionEnd),
     m.slack ? 'SLACK' : '',
-    metres3(m.sag),
+    formatValue(m.sag, 'length', 'SI'),
   ]);
   const r = 'right' as const;
   return textTable(
@@ -65,17 +68,17 @@ function nodeTable(project: ProjectFile, c: CaseResult): string {
     .filter((n) => userNodes.has(n.id))
     .map((n) => {
       const [ux, uy, uz] = n.displacement;
-      return [n.id, metres4(ux), metres4(uy), metres4(uz), metres4(Math.hypot(ux, uy, uz))];
+      return [n.id, mm(ux), mm(uy), mm(uz), mm(Math.hypot(ux, uy, uz))];
     });
   const r = 'right' as const;
   return textTable(
-    [{ title: 'node' }, { title: 'ux m', align: r }, { title: 'uy m', align: r }, { title: 'uz m', align: r }, { title: '|u| m', align: r }],
+    [{ title: 'node' }, { title: 'ux mm', align: r }, { title: 'uy mm', align: r }, { title: 'uz mm', align: r }, { title: '|u| mm', align: r }],
     rows,
   );
 }
 
 function reactionTable(c: CaseResult): string {
-  const rows = c.reactions.map((q) => [q.node, kN(q.force[0]), kN(q.force[1]), kN(q.force[2])]);
+  const rows = c.reactions.map((q) => [q.node, force(q.force[0]), force(q.force[1]), force(q.force[2])]);
   const r = 'right' as const;
   return textTable([{ title: 'support' }, { title: 'Rx kN', align: r }, { title: 'Ry kN', align: r }, { title: 'Rz kN', align: r }], rows);
 }

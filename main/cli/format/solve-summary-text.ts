@@ -9,7 +9,9 @@
  */
 import { CheckInputError, envelopeOf, runChecks } from '../../../solver/index.ts';
 import type { CaseResult, CheckReport, Envelope, MemberCheck, MemberEnvelope, ProjectFile, SolveReport } from '../../../solver/index.ts';
-import { fixed, kN } from './number-text.ts';
+import { formatValue } from '../../common/units/index.ts';
+
+const kN = (n: number): string => formatValue(n, 'force', 'SI');
 import { textTable } from './text-table.ts';
 import { caseTitle } from './solve-report-text.ts';
 
@@ -59,7 +61,7 @@ function groupLine(g: GroupRow, env: Map<string, MemberEnvelope>, checks: Map<st
     const used = mc.filter((m) => m.utilisation !== null);
     if (used.length > 0) {
       const top = used.reduce((a, b) => ((b.utilisation ?? 0) > (a.utilisation ?? 0) ? b : a));
-      util = fixed(top.utilisation ?? 0, 3);
+      util = formatValue(top.utilisation ?? 0, 'ratio', 'SI');
       utilCase = top.utilisationCase;
     }
     const failing = mc.filter((m) => m.status === 'fail').length;

@@ -1,11 +1,11 @@
 /**
  * Words and units for the structured check results of the solver (CheckResult, CheckWarning,
  * ResolvedBasis) — the one formatter the CLI `check`, the app's Checks tab and the schedule share,
- * so all three print the same numbers. Units SI (kN, m) or US (kip, ft) via schedule-units.ts.
+ * so all three print the same numbers. Units and precision from main/common/units (SI kN, m, mm;
+ * US kip, ft, in); displacements print in mm / in.
  */
 import type { CheckCode, CheckResult, CheckWarning, ResolvedBasis } from '../../../solver/index.ts';
-import { formatForce, formatLength, formatNumber, unitLabels } from '../schedule/schedule-units.ts';
-import type { ScheduleUnits } from '../schedule/schedule-units.ts';
+import { fixedText, formatValue, formatWithUnit, type UnitSystem } from '../units/index.ts';
 
 export const CHECK_NAMES: Record<CheckCode, string> = {
   cableResistance: 'cable resistance',
@@ -42,19 +42,23 @@ export interface CheckRow {
 }
 
 /** A value of the result's quantity with its unit. */
-export function quantityText(r: Pick<CheckResult, 'quantity' | 'code'>, v: number, units: ScheduleUnits): string {
-  const l = unitLabels(units);
+export function quantityText(r: Pick<CheckResult, 'quantity' | 'code'>, v: number, units: UnitSystem): string {
   switch (r.quantity) {
-    case 'force': return `${formatForce(units, v)} ${l.force}`;
-    case 'length': return `${formatLength(units, v)} ${l.length}`;
-    case 'ratio': return r.code === 'tilt' ? (v > 0 ? `1/${formatNumber(1 / v, 0)}` : '0') : formatNumber(v, 3);
-    case 'angle': return `${formatNumber(v, 3)}°`;
-    case 'slenderness': return formatNumber(v, 1);
+    case 'force': return formatWithUnit(v, 'force', units);
+    case 'length': return formatWithUnit(v, r.code === 'displacement' ? 'displacement' : 'length', units);
+    case 'ratio': return r.code === 'tilt' ? tiltText(v) : formatValue(v, 'ratio', units);
+    case 'angle': return formatWithUnit(v, 'angle', units);
+    case 'slenderness': return formatValue(v, 'slenderness', units);
     default: return '';
   }
 }
 
-export function checkRow(r: CheckResult, units: ScheduleUnits): CheckRow {
+/** A tilt (offset / height) as "1/N"; '0' for none. */
+export function tiltText(v: number): string {
+  return v > 0 ? `1/${fixedText(1 / v, 0)}` : '0';
+}
+
+export function checkRow(r: CheckResult, units: UnitSystem): CheckRow {
   const yesNo = r.ratio === null;
   return {
     check: CHECK_NAMES[r.code],
@@ -64,7 +68,7 @@ export function checkRow(r: CheckResult, units: ScheduleUnits): CheckRow {
     format: FORMAT_NAMES[r.format],
     value: r.code === 'notConverged' ? '' : quantityText(r, r.value, units),
     limit: yesNo ? (r.code === 'slack' ? 'no slack' : r.code === 'uplift' ? 'Fz ≥ 0' : '') : `${r.code === 'minimumTension' ? '≥ ' : '≤ '}${quantityText(r, r.limit, units)}`,
-    ratio: yesNo ? '—' : formatNumber(r.ratio, 3),
+    ratio: yesNo ? '—' : formatValue(r.ratio, 'ratio', units),
     verdict: r.pass ? 'pass' : 'FAIL',
     source: r.source,
   };
@@ -88,7 +92,7 @@ export function warningText(w: CheckWarning): string {
 
 /** The design basis as printed on every check report and schedule: one line per factor, with its source. */
 export function basisLines(b: ResolvedBasis): string[] {
-  const f = (label: string, s: { value: number; source: string }) => `${label} = ${formatNumber(s.value, 3)}  (${s.source})`;
+  const f = (label: string, s: { value: number; source: string }) => `${label} = ${fixedText(s.value, 3)}  (${s.source})`;
   const out = [`Design basis: ${b.label} — format ${FORMAT_NAMES[b.format]}${b.defaulted ? ' (defaults: the project has no designBasis)' : ''}`];
   if (b.format === 'limitState') {
     const a = b.actionFactors;

@@ -5,14 +5,15 @@
  */
 import { envelopeOf } from '../../../solver/index.ts';
 import { SCHEDULE_CAUTION, type PaperSize } from '../schedule/schedule-types.ts';
-import type { ScheduleUnits } from '../schedule/schedule-units.ts';
+import type { UnitSystem } from '../units/index.ts';
+import { installationNoteText } from './installation-text.ts';
 import type { ReportDocument, ReportSource } from './report-types.ts';
 import { governingRows } from './governing.ts';
 import { warningText } from '../checks/check-text.ts';
 
 export interface ReportOptions {
   issueDate: string;
-  units?: ScheduleUnits;
+  units?: UnitSystem;
   paper?: PaperSize;
 }
 
@@ -24,7 +25,7 @@ export function buildReport(src: ReportSource, options: ReportOptions): ReportDo
   if (paper !== 'a4' && paper !== 'letter') throw new Error(`paper must be a4 or letter, got ${JSON.stringify(paper)}`);
   const env = envelopeOf(report);
   const cables = project.members.filter((m) => m.kind === 'cable').length;
-  const notes = [...(src.notes ?? []), ...checks.warnings.map(warningText), ...(src.installation?.warnings ?? [])];
+  const notes = [...(src.notes ?? []), ...checks.warnings.map(warningText), ...(src.installation?.warnings ?? []).map((w) => installationNoteText(w, units))];
   for (const c of report.cases) if (!c.converged) notes.push(`Case "${c.id}" did not converge (${c.status}); it is left out of the envelope. ${c.message ?? ''}`.trim());
   return {
     project, units, paper, issueDate: options.issueDate,

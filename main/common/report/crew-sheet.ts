@@ -6,19 +6,20 @@
  */
 import type { ProjectFile, SequenceResult } from '../../../solver/index.ts';
 import { escapeHtml } from '../schedule/schedule-html.ts';
-import { formatForce, formatLength, formatNumber, formatTemperature, forceIn, unitLabels, type ScheduleUnits } from '../schedule/schedule-units.ts';
+import { fixedText, formatValue, formatWithUnit, significantText, toDisplay, unitLabels, type UnitSystem } from '../units/index.ts';
+import { tiltText } from '../checks/check-text.ts';
 import { SCHEDULE_CAUTION, type PaperSize } from '../schedule/schedule-types.ts';
 import { sequenceIssueText, sequenceSuggestionText } from './sequence-text.ts';
-import { printCss, smallLength } from './print-css.ts';
+import { printCss } from './print-css.ts';
 
 export interface CrewSheetOptions {
   issueDate: string;
-  units?: ScheduleUnits;
+  units?: UnitSystem;
   paper?: PaperSize;
 }
 
 /** "ΔF per °C" for display: per kelvin = per °C; per °F is 5/9 of it. */
-function perDegree(units: ScheduleUnits, perKelvin: number): number {
+function perDegree(units: UnitSystem, perKelvin: number): number {
   return units === 'US' ? (perKelvin * 5) / 9 : perKelvin;
 }
 
@@ -28,18 +29,20 @@ export function stepLabel(project: ProjectFile, r: SequenceResult, stepIndex: nu
 }
 
 /** The sheet's body markup (header, caution, steps, issues); shared with the calculation report. */
-export function crewSheetBody(project: ProjectFile, r: SequenceResult, units: ScheduleUnits, headingLevel = 2): string {
+export function crewSheetBody(project: ProjectFile, r: SequenceResult, units: UnitSystem, headingLevel = 2): string {
   const e = escapeHtml;
   const l = unitLabels(units);
   const h = `h${headingLevel}`;
   const spec = project.sequences?.find((s) => s.id === r.id);
-  const F = (n: number) => formatForce(units, n);
-  const sl = (m: number, digits = 1) => { const x = smallLength(units, m, digits); return `${x.text} ${x.unit}`; };
+  const F = (n: number) => formatValue(n, 'force', units);
+  const sl = (m: number) => formatWithUnit(m, 'displacement', units);
+  // Corrections per degree are small rates: three significant digits in the display unit.
+  const rate = (base: number, kind: 'force' | 'displacement') => `${significantText(toDisplay(base, kind, units), 3)} ${l[kind]}`;
   const rows: string[] = [];
   for (const st of r.stages) {
     const others = st.state.filter((s) => !st.members.includes(s.member)).map((s) => `${e(s.member)} ${F(s.tension)}${s.slack ? ' <b>SLACK</b>' : ''}`).join('<br>');
     const check = st.issues.length ? `<b class="fail">STOP</b><br><small>${st.issues.map((i) => e(sequenceIssueText(i, units))).join('<br>')}</small>` : 'OK';
-    const tilt = st.tilt === null ? '' : `<br><small>tilt ${st.tilt > 0 ? `1/${formatNumber(1 / st.tilt, 0)}` : '0'}</small>`;
+    const tilt = st.tilt === null ? '' : `<br><small>tilt ${tiltText(st.tilt)}</small>`;
     if (st.kind === 'release') {
       rows.push(`<tr><td class="num">${st.index}</td><td colspan="5">Release the temporary restraint at ${e(st.released.join(', '))}</td><td><small>${others}</small></td><td>${check}${tilt}</td></tr>`);
       continue;
@@ -50,11 +53,11 @@ export function crewSheetBody(project: ProjectFile, r: SequenceResult, units: Sc
     }
     st.settings.forEach((s, k) => {
       const force = s.setBy === 'force';
-      const value = force ? `${F(s.value)} ${l.force}` : `${formatLength(units, s.value, 4)} ${l.length}`;
+      const value = force ? `${F(s.value)} ${l.force}` : `${formatValue(s.value, 'length', units)} ${l.length}`;
       const band = force ? `${F(s.band[0])} … ${F(s.band[1])} ${l.force}<br><small>≈ ±${sl(s.equivalentBand[1])} of length</small>`
-        : `${formatLength(units, s.band[0], 4)} … ${formatLength(units, s.band[1], 4)} ${l.length}<br><small>≈ ±${F(s.equivalentBand[1])} ${l.force}</small>`;
-      const corr = force ? `${formatNumber(forceIn(units, perDegree(units, s.perKelvin)), 3)} ${l.force}/${l.temperature}`
-        : `${sl(perDegree(units, s.perKelvin), 2)}/${l.temperature}`;
+        : `${formatValue(s.band[0], 'length', units)} … ${formatValue(s.band[1], 'length', units)} ${l.length}<br><small>≈ ±${F(s.equivalentBand[1])} ${l.force}</small>`;
+      const corr = force ? `${rate(perDegree(units, s.perKelvin), 'force')}/${l.temperature}`
+        : `${rate(perDegree(units, s.perKelvin), 'displacement')}/${l.temperature}`;
       const first = k === 0;
       rows.push(`<tr>${first ? `<td class="num" rowspan="${st.settings.length}">${st.index}${st.pass > 1 ? `<br><small>pass ${st.pass}</small>` : ''}</td>` : ''}<td><b>${e(s.member)}</b></td><td>${force ? 'force' : 'length mark'}</td><td class="num"><b>${value}</b></td><td class="num">${band}</td><td class="num">${corr}</td>${first ? `<td rowspan="${st.settings.length}"><small>${others}</small></td><td rowspan="${st.settings.length}">${check}${tilt}</td>` : ''}</tr>`);
     });
@@ -62,9 +65,9 @@ export function crewSheetBody(project: ProjectFile, r: SequenceResult, units: Sc
   const table = `<table><caption>Steps — set each cable to the value shown, then read the others</caption><thead><tr><th>Stage</th><th>Cable</th><th>Set by</th><th class="num">Value to set</th><th class="num">Tolerance band</th><th class="num">Correction per ${l.temperature}</th><th>Check readings of the other cables (${l.force}, lower end)</th><th>Stage check</th></tr></thead><tbody>${rows.join('\n')}</tbody></table>`;
   const meta: [string, string][] = [
     ['Sequence', `${spec?.label ?? r.id} (${r.id})`],
-    ['Day\'s temperature', `${formatTemperature(units, r.temperature)} ${l.temperature}`],
-    ['Reference temperature', `${formatTemperature(units, r.referenceTemperature)} ${l.temperature}${r.referenceTemperatureAssumed ? ' (assumed: not set in the project)' : ''}`],
-    ['Stage checks', `φ = ${formatNumber(r.resistanceFactor, 3)} on breaking load; no slack cable; ${r.plumbLimit ? `tilt ≤ 1/${formatNumber(1 / r.plumbLimit, 0)}` : 'no plumb tolerance set'}`],
+    ['Day\'s temperature', `${formatValue(r.temperature, 'temperature', units)} ${l.temperature}`],
+    ['Reference temperature', `${formatValue(r.referenceTemperature, 'temperature', units)} ${l.temperature}${r.referenceTemperatureAssumed ? ' (assumed: not set in the project)' : ''}`],
+    ['Stage checks', `φ = ${fixedText(r.resistanceFactor, 3)} on breaking load; no slack cable; ${r.plumbLimit ? `tilt ≤ ${tiltText(r.plumbLimit)}` : 'no plumb tolerance set'}`],
     ['Result', r.ok ? 'every stage passes; the final state equals the design state' : 'SOME STAGE FAILS — do not use this order as it stands'],
   ];
   const metaHtml = `<table class="meta"><tbody>${meta.map(([k, v]) => `<tr><th scope="row">${e(k)}</th><td>${e(v)}</td></tr>`).join('')}</tbody></table>`;

@@ -5,7 +5,6 @@
  * page, rows never split.
  */
 import type { PaperSize } from '../schedule/schedule-types.ts';
-import type { ScheduleUnits } from '../schedule/schedule-units.ts';
 
 /** A CSS string, not HTML: drop quotes, backslashes, angle brackets and line breaks. */
 const cssText = (t: string) => t.replace(/["\\<>\r\n]/g, '');
@@ -38,10 +37,4 @@ table.meta th { text-align: left; padding-right: 4mm; border: none; }
 table.meta td { border: none; }
 section.page-break { break-before: page; }
 @media screen { body { max-width: 190mm; margin: 8mm auto; } }`;
-}
-
-/** A short length (bands, corrections): mm in SI, inches in US customary. */
-export function smallLength(units: ScheduleUnits, metres: number, digits = 1): { text: string; unit: string } {
-  if (!Number.isFinite(metres)) return { text: '—', unit: units === 'US' ? 'in' : 'mm' };
-  return units === 'US' ? { text: (metres / 0.0254).toFixed(digits + 1), unit: 'in' } : { text: (metres * 1000).toFixed(digits), unit: 'mm' };
 }

@@ -8,7 +8,7 @@
  * attribute (e.g. data-n="env-max|G1") so tests can compare them with the CLI.
  */
 import { escapeHtml as e } from '../schedule/schedule-html.ts';
-import { formatForce, formatLength, formatNumber, formatTemperature, unitLabels } from '../schedule/schedule-units.ts';
+import { fixedText, formatValue, unitLabels } from '../units/index.ts';
 import type { ReportDocument } from './report-types.ts';
 import { printCss } from './print-css.ts';
 import { modelSvg, type DeformedShape } from './model-svg.ts';
@@ -30,9 +30,9 @@ function governingHtml(d: ReportDocument): string {
       const r = checkRow(g.result, u);
       return [e(r.check), e(r.item), e(r.case), num(key, e(r.value)), e(r.limit || '—'), num(`${key}|ratio`, r.ratio), g.pass ? 'PASS' : '<b class="fail">FAIL</b>'];
     }
-    const value = g.check === 'utilisation' ? formatNumber(g.value, 3) : `${formatForce(u, g.value)} ${l.force}`;
+    const value = g.check === 'utilisation' ? formatValue(g.value, 'ratio', u) : `${formatValue(g.value, 'force', u)} ${l.force}`;
     const name = g.check === 'utilisation' ? 'highest utilisation (design force / resistance)' : 'least tension of the no-slack members';
-    return [name, e(g.item), e(g.case), num(key, value), g.limit === null ? 'no slack' : formatNumber(g.limit, 3), g.ratio === null ? '—' : formatNumber(g.ratio, 3), g.pass ? 'PASS' : '<b class="fail">FAIL</b>'];
+    return [name, e(g.item), e(g.case), num(key, value), g.limit === null ? 'no slack' : formatValue(g.limit, 'ratio', u), g.ratio === null ? '—' : formatValue(g.ratio, 'ratio', u), g.pass ? 'PASS' : '<b class="fail">FAIL</b>'];
   });
   const failures = d.checks.failures.map((f) => checkRow(f, u)).map((r) => [e(r.check), e(r.item), e(r.case), e(`${r.value} against ${r.limit}${r.ratio === '—' ? '' : ` (ratio ${r.ratio})`} — ${r.source}`)]);
   return (rows.length ? table('Governing value of each check over every case and combination (the results of the design checks on this solve)', ['Check', 'Item', 'Case', 'Value', 'Limit', 'Ratio', 'Result'], rows) : '<p>No check settings in the project.</p>')
@@ -51,15 +51,15 @@ function governingShape(d: ReportDocument): DeformedShape | null {
 function envelopeHtml(d: ReportDocument): string {
   const u = d.units, l = unitLabels(u);
   const util = new Map(d.checks.members.map((m) => [m.id, m]));
-  const rows = d.envelope.members.map((m) => [`<b>${e(m.id)}</b>`, num(`env-max|${m.id}`, formatForce(u, m.tensionMax)), e(m.tensionMaxCase), num(`env-min|${m.id}`, formatForce(u, m.tensionMin)), e(m.tensionMinCase),
-    formatLength(u, m.sagMax), util.get(m.id)?.utilisation == null ? '—' : num(`util|${m.id}`, formatNumber(util.get(m.id)!.utilisation, 3)), m.slackCases.length ? `<b>slack</b> ${e(m.slackCases.join(', '))}` : '']);
-  const reactions = d.envelope.reactions.map((r) => [`<b>${e(r.node)}</b>`, num(`react|${r.node}`, formatForce(u, r.magnitudeMax)), e(r.magnitudeMaxCase), formatForce(u, r.min[2]), e(r.minCase[2]), formatForce(u, r.max[2]), e(r.maxCase[2])]);
+  const rows = d.envelope.members.map((m) => [`<b>${e(m.id)}</b>`, num(`env-max|${m.id}`, formatValue(m.tensionMax, 'force', u)), e(m.tensionMaxCase), num(`env-min|${m.id}`, formatValue(m.tensionMin, 'force', u)), e(m.tensionMinCase),
+    formatValue(m.sagMax, 'length', u), util.get(m.id)?.utilisation == null ? '—' : num(`util|${m.id}`, formatValue(util.get(m.id)!.utilisation, 'ratio', u)), m.slackCases.length ? `<b>slack</b> ${e(m.slackCases.join(', '))}` : '']);
+  const reactions = d.envelope.reactions.map((r) => [`<b>${e(r.node)}</b>`, num(`react|${r.node}`, formatValue(r.magnitudeMax, 'force', u)), e(r.magnitudeMaxCase), formatValue(r.min[2], 'force', u), e(r.minCase[2]), formatValue(r.max[2], 'force', u), e(r.maxCase[2])]);
   return table(`Member envelope over ${d.envelope.cases.length} converged case(s) (${l.force}, ${l.length})`, ['Member', 'T max', 'case', 'T min', 'case', 'Sag max', 'Utilisation', 'Slack'], rows)
     + table(`Support reactions envelope (${l.force}; force of the support on the structure)`, ['Support', '|R| max', 'case', 'Fz min', 'case', 'Fz max', 'case'], reactions);
 }
 
 function analysisHtml(d: ReportDocument): string {
-  const rows = d.report.cases.map((c) => [e(c.id), c.converged ? 'yes' : '<b class="fail">NO</b>', String(c.stats.iterations), formatNumber(c.stats.residual * 1e10, 3), String(c.slackMembers.length),
+  const rows = d.report.cases.map((c) => [e(c.id), c.converged ? 'yes' : '<b class="fail">NO</b>', String(c.stats.iterations), fixedText(c.stats.residual * 1e10, 3), String(c.slackMembers.length),
     d.checks.cases.find((x) => x.id === c.id)?.pass ? 'PASS' : '<b class="fail">FAIL</b>']);
   return `<p>Geometrically nonlinear static analysis (Total Lagrangian truss elements, Green–Lagrange strain, S = S0 + E(ε − αΔT); cables tension-only). Each case and combination is solved from the pretensioned state to a relative residual of 1e-10.</p>`
     + table('Cases and combinations', ['Case', 'Converged', 'Newton iterations', 'Residual ×1e-10', 'Slack members', 'Checks'], rows);
@@ -69,9 +69,9 @@ function installationHtml(d: ReportDocument): string {
   const inst = d.installation;
   if (!inst) return '<p>Installation data was not computed.</p>';
   const u = d.units, l = unitLabels(u);
-  const rows = inst.members.filter((m) => m.kind === 'cable').map((m) => [`<b>${e(m.id)}</b>`, num(`cut|${m.id}`, formatLength(u, m.cutLength, 4)), num(`inst|${m.id}`, formatForce(u, m.installationTension)),
-    formatNumber(m.frequencies?.tautString ?? null, 3), formatNumber(m.frequencies?.lowestInPlane ?? null, 3), formatNumber(m.frequencies?.lambdaSquared ?? null, 2)]);
-  return `<p>Reference case "${e(inst.referenceCase)}" at ${formatTemperature(u, inst.referenceTemperature)} ${l.temperature}${inst.referenceTemperatureAssumed ? ' (assumed)' : ''}. Cut length = stress-free length (end fittings not included). Frequencies after Irvine (Cable Structures, 1981): f₁ taut string, lowest in-plane with the sag parameter λ².</p>`
+  const rows = inst.members.filter((m) => m.kind === 'cable').map((m) => [`<b>${e(m.id)}</b>`, num(`cut|${m.id}`, formatValue(m.cutLength, 'length', u)), num(`inst|${m.id}`, formatValue(m.installationTension, 'force', u)),
+    formatValue(m.frequencies?.tautString, 'frequency', u), formatValue(m.frequencies?.lowestInPlane, 'frequency', u), fixedText(m.frequencies?.lambdaSquared, 2)]);
+  return `<p>Reference case "${e(inst.referenceCase)}" at ${formatValue(inst.referenceTemperature, 'temperature', u)} ${l.temperature}${inst.referenceTemperatureAssumed ? ' (assumed)' : ''}. Cut length = stress-free length (end fittings not included). Frequencies after Irvine (Cable Structures, 1981): f₁ taut string, lowest in-plane with the sag parameter λ².</p>`
     + table('Cables: cut lengths, installation tension (lower end) and frequencies', ['Cable', `Cut length (${l.length})`, `Tension (${l.force})`, 'f₁ (Hz)', 'f in-plane (Hz)', 'λ²'], rows);
 }
 

@@ -4,7 +4,8 @@
  * cases and combinations. Numbers in the chosen display units.
  */
 import { escapeHtml as e } from '../schedule/schedule-html.ts';
-import { formatForce, formatLength, formatNumber, formatTemperature, unitLabels } from '../schedule/schedule-units.ts';
+import { fixedText, formatValue, formatWithUnit, unitLabels } from '../units/index.ts';
+import { tiltText } from '../checks/check-text.ts';
 import { basisLines } from '../checks/check-text.ts';
 import type { ReportDocument } from './report-types.ts';
 
@@ -23,12 +24,12 @@ export function designBasisHtml(d: ReportDocument): string {
   const s = p.checks ?? {};
   const basis = (p as unknown as { designBasis?: unknown }).designBasis;
   const rows: [string, string][] = [
-    ['Reference temperature', p.meta?.referenceTemperature ? `${formatTemperature(u, p.meta.referenceTemperature)} ${l.temperature}` : 'not set (15 °C assumed)'],
+    ['Reference temperature', p.meta?.referenceTemperature ? `${formatValue(p.meta.referenceTemperature, 'temperature', u)} ${l.temperature}` : 'not set (15 °C assumed)'],
     ...basisLines(d.checks.basis).map((line, i): [string, string] => [i === 0 ? 'Design basis' : '', e(line.trim())]),
     ['Members that must not go slack', (s.noSlackGroups ?? []).join(', ') || '—'],
-    ['Sag limits', (s.sagLimits ?? []).map((x) => `${x.group}: ${'fractionOfSpan' in x.limit ? `${formatNumber(x.limit.fractionOfSpan * 100, 2)} % of span` : `${formatLength(u, x.limit.absolute)} ${l.length}`}`).join('; ') || '—'],
-    ['Displacement limits', (s.displacementLimits ?? []).map((x) => `${x.node}: ${formatLength(u, x.limit)} ${l.length}`).join('; ') || '—'],
-    ['Tilt limits', (s.tiltLimits ?? []).map((x) => `${x.base}→${x.top}: 1/${formatNumber(1 / x.limit, 0)}`).join('; ') || '—'],
+    ['Sag limits', (s.sagLimits ?? []).map((x) => `${x.group}: ${'fractionOfSpan' in x.limit ? `${formatValue(x.limit.fractionOfSpan, 'share', u)} % of span` : `${formatValue(x.limit.absolute, 'length', u)} ${l.length}`}`).join('; ') || '—'],
+    ['Displacement limits', (s.displacementLimits ?? []).map((x) => `${x.node}: ${formatWithUnit(x.limit, 'displacement', u)}`).join('; ') || '—'],
+    ['Tilt limits', (s.tiltLimits ?? []).map((x) => `${x.base}→${x.top}: ${tiltText(x.limit)}`).join('; ') || '—'],
     ['Uplift checked at', (s.upliftNodes ?? []).join(', ') || '—'],
   ];
   const recorded = basis === undefined ? '<p>No design basis (codes, classes, partial factors) is recorded in the project file: state it here before issue.</p>'
@@ -39,20 +40,20 @@ export function designBasisHtml(d: ReportDocument): string {
 
 export function sectionsHtml(d: ReportDocument): string {
   const u = d.units, l = unitLabels(u);
-  const rows = d.project.sections.map((s) => [`<b>${e(s.id)}</b>`, e(s.label ?? ''), formatNumber(s.E / 1e9, 1), formatNumber(s.area * 1e6, 1), formatNumber(s.massPerLength ?? 0, 3),
-    s.breakingLoad ? formatForce(u, s.breakingLoad) : '—', s.thermalExpansion ? formatNumber(s.thermalExpansion * 1e6, 2) : '—', s.diameter ? formatNumber(s.diameter * 1000, 1) : '—']);
-  return table('Sections', ['Section', 'Description', 'E (GPa)', 'A (mm²)', 'Mass (kg/m)', `MBL (${l.force})`, 'α (10⁻⁶/K)', 'Ø (mm)'], rows);
+  const rows = d.project.sections.map((s) => [`<b>${e(s.id)}</b>`, e(s.label ?? ''), formatValue(s.E, 'modulus', u), formatValue(s.area, 'area', u), formatValue(s.massPerLength ?? 0, 'massPerLength', u),
+    s.breakingLoad ? formatValue(s.breakingLoad, 'force', u) : '—', s.thermalExpansion ? formatValue(s.thermalExpansion, 'thermalExpansion', u) : '—', s.diameter ? formatValue(s.diameter, 'smallLength', u) : '—']);
+  return table('Sections', ['Section', 'Description', `E (${l.modulus})`, `A (${l.area})`, `Mass (${l.massPerLength})`, `MBL (${l.force})`, `α (${l.thermalExpansion})`, `Ø (${l.smallLength})`], rows);
 }
 
 export function actionsHtml(d: ReportDocument): string {
   const u = d.units, l = unitLabels(u);
   const cases = d.project.loadCases.map((c) => {
     const nodal = (c.nodalLoads ?? []).reduce((s, x) => s + Math.hypot(...x.force), 0);
-    return [`<b>${e(c.id)}</b>`, e(c.label ?? ''), c.selfWeight ?? true ? 'yes' : 'no', formatNumber(c.temperatureChange ?? 0, 1),
-      c.nodalLoads?.length ? `${c.nodalLoads.length} loads, Σ|F| ${formatForce(u, nodal)} ${l.force}` : '—',
-      c.wind ? `${formatNumber(c.wind.speed, 1)} m/s toward ${formatNumber(c.wind.direction, 0)}°` : '—', c.ice ? `${formatNumber(c.ice.thickness * 1000, 0)} mm` : '—'];
+    return [`<b>${e(c.id)}</b>`, e(c.label ?? ''), c.selfWeight ?? true ? 'yes' : 'no', formatValue(c.temperatureChange ?? 0, 'temperatureChange', u),
+      c.nodalLoads?.length ? `${c.nodalLoads.length} loads, Σ|F| ${formatValue(nodal, 'force', u)} ${l.force}` : '—',
+      c.wind ? `${formatWithUnit(c.wind.speed, 'speed', u)} toward ${fixedText(c.wind.direction, 0)}°` : '—', c.ice ? formatWithUnit(c.ice.thickness, 'smallLength', u) : '—'];
   });
   const combos = (d.project.combinations ?? []).map((c) => [`<b>${e(c.id)}</b>`, e(c.label ?? ''), e(c.factors.map((f) => `${f.factor} × ${f.case}`).join(' + '))]);
-  return table('Load cases', ['Case', 'Description', 'Self-weight', 'ΔT (K)', 'Nodal loads', 'Wind (at 10 m)', 'Ice'], cases)
+  return table('Load cases', ['Case', 'Description', 'Self-weight', `ΔT (${l.temperatureChange})`, 'Nodal loads', 'Wind (at 10 m)', 'Ice'], cases)
     + (combos.length ? table('Combinations (each solved as its own nonlinear case)', ['Combination', 'Description', 'Factors'], combos) : '<p>No combinations.</p>');
 }

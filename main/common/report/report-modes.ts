@@ -5,7 +5,7 @@
  */
 import type { ModalNote, ModalRefusal } from '../../../solver/index.ts';
 import { escapeHtml as e } from '../schedule/schedule-html.ts';
-import { formatNumber } from '../schedule/schedule-units.ts';
+import { fixedText, formatValue } from '../units/index.ts';
 import type { ReportDocument } from './report-types.ts';
 
 export function modalNoteText(n: ModalNote): string {
@@ -32,8 +32,8 @@ export function modesHtml(d: ReportDocument): string {
   if (!m) return '<p>Natural frequencies were not computed.</p>';
   if (!m.ok) return `<p>${e(modalRefusalText(m.refusal))}</p>`;
   const a = m.analysis;
-  const rows = a.modes.map((x) => [String(x.number), `<span class="num" data-n="mode|${x.number}">${formatNumber(x.frequency, 3)}</span>`, formatNumber(x.period, 3),
-    ...x.effectiveMassShare.map((s) => formatNumber(s * 100, 1)), ...x.cumulativeShare.map((s) => formatNumber(s * 100, 1))]);
+  const rows = a.modes.map((x) => [String(x.number), `<span class="num" data-n="mode|${x.number}">${formatValue(x.frequency, 'frequency', d.units)}</span>`, fixedText(x.period, 3),
+    ...x.effectiveMassShare.map((s) => formatValue(s, 'share', d.units)), ...x.cumulativeShare.map((s) => formatValue(s, 'share', d.units))]);
   return `<p>Lowest modes about case "${e(a.case)}" (the pretensioned structure under its permanent load; lumped mass, tangent stiffness of the solved state).</p>`
     + `<table><caption>Natural frequencies and effective modal mass (% of the movable mass)</caption><thead><tr><th>Mode</th><th>f (Hz)</th><th>T (s)</th><th>x</th><th>y</th><th>z</th><th>Σx</th><th>Σy</th><th>Σz</th></tr></thead><tbody>${rows.map((r) => `<tr>${r.map((c) => `<td>${c}</td>`).join('')}</tr>`).join('\n')}</tbody></table>`
     + (a.notes.length ? `<ul>${a.notes.map((n) => `<li>${e(modalNoteText(n))}</li>`).join('')}</ul>` : '');

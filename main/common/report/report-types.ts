@@ -7,7 +7,7 @@ import type {
   CheckCode, CheckQuantity, CheckReport, CheckResult, Envelope, InstallationData, ModalOutcome, ProjectFile, ReportRevision, SequenceResult, SolveReport,
 } from '../../../solver/index.ts';
 import type { PaperSize } from '../schedule/schedule-types.ts';
-import type { ScheduleUnits } from '../schedule/schedule-units.ts';
+import type { UnitSystem } from '../units/index.ts';
 
 /** The governing value of one check over every case and combination (governing.ts). */
 export interface GoverningRow {
@@ -45,7 +45,7 @@ export interface ReportSource {
 
 export interface ReportDocument {
   project: ProjectFile;
-  units: ScheduleUnits;
+  units: UnitSystem;
   paper: PaperSize;
   issueDate: string;
   documentNumber: string;

@@ -3,21 +3,22 @@
  * in the chosen units, for the CLI, the crew sheet and the calculation report.
  */
 import type { SequenceIssue, SequenceResult, SequenceSuggestion } from '../../../solver/index.ts';
-import { formatForce, formatNumber, unitLabels, type ScheduleUnits } from '../schedule/schedule-units.ts';
+import { fixedText, formatValue, unitLabels, type UnitSystem } from '../units/index.ts';
+import { tiltText } from '../checks/check-text.ts';
 
-export function sequenceIssueText(i: SequenceIssue, units: ScheduleUnits): string {
+export function sequenceIssueText(i: SequenceIssue, units: UnitSystem): string {
   const l = unitLabels(units);
   switch (i.code) {
     case 'notConverged':
       return `stage ${i.stage}: no equilibrium (${i.status}) — the structure is a mechanism or cannot carry the stage`;
     case 'overload':
-      return `stage ${i.stage}: "${i.member}" at ${formatForce(units, i.value)} ${l.force} exceeds φ·MBL = ${formatForce(units, i.limit)} ${l.force}`;
+      return `stage ${i.stage}: "${i.member}" at ${formatValue(i.value, 'force', units)} ${l.force} exceeds φ·MBL = ${formatValue(i.limit, 'force', units)} ${l.force}`;
     case 'slack':
-      return `stage ${i.stage}: "${i.member}" is slack (${formatForce(units, i.value)} ${l.force})`;
+      return `stage ${i.stage}: "${i.member}" is slack (${formatValue(i.value, 'force', units)} ${l.force})`;
     case 'plumb':
-      return `stage ${i.stage}: mast out of plumb, tilt 1/${formatNumber(1 / i.value, 0)} beyond the tolerance 1/${formatNumber(1 / i.limit, 0)}`;
+      return `stage ${i.stage}: mast out of plumb, tilt ${tiltText(i.value)} beyond the tolerance ${tiltText(i.limit)}`;
     case 'finalMismatch':
-      return `final state: "${i.member}" reads ${formatForce(units, i.value)} ${l.force}, the design state ${formatForce(units, i.design)} ${l.force}`;
+      return `final state: "${i.member}" reads ${formatValue(i.value, 'force', units)} ${l.force}, the design state ${formatValue(i.design, 'force', units)} ${l.force}`;
   }
 }
 
@@ -26,7 +27,7 @@ export function sequenceSuggestionText(s: SequenceSuggestion, r: SequenceResult,
     case 'reorder':
       return `Reorder the steps: ${s.order.map(stepLabel).join(' → ')} (simulated: every stage passes).`;
     case 'secondPass':
-      return `Tension in two passes: first every cable to about ${formatNumber(s.share * 100, 0)} % of its design strain (the first-pass lengths), then every cable to its design length (simulated: every stage passes).`;
+      return `Tension in two passes: first every cable to about ${fixedText(s.share * 100, 0)} % of its design strain (the first-pass lengths), then every cable to its design length (simulated: every stage passes).`;
     case 'restrainOrGroup':
       return `Stage ${s.stage} has no stable equilibrium: tension its cables together with the next step's, or hold the mast with a temporary restraint (temporary guys) until the opposing cables are in.`;
     case 'none':

@@ -3,11 +3,13 @@
  * Pure: no I/O; the CLI, the desktop print route and tests all build the schedule here.
  * Results are for review by a qualified engineer; local codes and licensed practice govern.
  */
-import { envelopeOf, expectedStringFrequency, membersOfGroup, purposeOf, tuningRunRecord } from '../../../solver/index.ts';
+import { envelopeOf, expectedStringFrequency, membersOfGroup, purposeOf } from '../../../solver/index.ts';
 import { basisLines, checkRow, warningText } from '../checks/check-text.ts';
 import type { CheckReport, InstallationData, ModalOutcome, ProjectFile, ScheduleSpec, SolveReport, TuningResult } from '../../../solver/index.ts';
 import { SCHEDULE_CAUTION, type PaperSize, type ScheduleDocument, type ScheduleMemberRow } from './schedule-types.ts';
-import type { ScheduleUnits } from './schedule-units.ts';
+import type { UnitSystem } from '../units/index.ts';
+import { installationNoteText } from '../report/installation-text.ts';
+import { tuningRunRecord } from '../tuning/tuning-record.ts';
 import { scheduleListing, summariseMembers } from './schedule-listing.ts';
 import { scheduleTuning } from './schedule-tuning.ts';
 import { scheduleFrequencies } from './schedule-frequencies.ts';
@@ -26,7 +28,7 @@ export interface ScheduleSource {
 }
 
 export interface ScheduleOptions {
-  units?: ScheduleUnits;
+  units?: UnitSystem;
   paper?: PaperSize;
   /** ISO date of issue (YYYY-MM-DD); the caller supplies it (pure builder, no clock). */
   issueDate: string;
@@ -92,11 +94,11 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
   })));
   reactions.sort((a, b) => (a.node < b.node ? -1 : a.node > b.node ? 1 : 0));
 
-  const record = src.tuning ? tuningRunRecord(src.tuning, options.issueDate) : project.tuning?.lastRun ?? null;
+  const record = src.tuning ? tuningRunRecord(src.tuning, project, units, options.issueDate) : project.tuning?.lastRun ?? null;
   const tuning = record ? scheduleTuning(project, record, units, groupLabel, notes) : null;
 
   const inst = src.installation;
-  if (inst) notes.push(...inst.warnings);
+  if (inst) notes.push(...inst.warnings.map((w) => installationNoteText(w, units)));
   else notes.push('Installation data (cut lengths, frequencies, temperature table) was not computed.');
   if (!src.checks) notes.push('Design checks were not run: utilisation and check columns are empty.');
   else notes.push(...src.checks.warnings.map(warningText));
@@ -148,7 +150,7 @@ export function buildSchedule(src: ScheduleSource, options: ScheduleOptions): Sc
  * than a member (nodes, sets), and every failing row; passing rows of summarised or unlisted
  * members are left out (their summary row carries the worst utilisation), with a note.
  */
-function listedCheckRows(checks: CheckReport, units: ScheduleUnits, inFull: Set<string>, notes: string[]) {
+function listedCheckRows(checks: CheckReport, units: UnitSystem, inFull: Set<string>, notes: string[]) {
   const memberIds = new Set(checks.members.map((m) => m.id));
   const rows = checks.results.map((r) => checkRow(r, units));
   const kept = rows.filter((r) => r.verdict === 'FAIL' || !memberIds.has(r.item) || inFull.has(r.item));

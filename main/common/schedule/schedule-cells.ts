@@ -4,7 +4,7 @@
  * SchedulePrint.vue), so they print the same words and numbers. Plain text: callers escape.
  */
 import type { ScheduleDocument } from './schedule-types.ts';
-import { formatForce, formatNumber, formatTemperature, unitLabels } from './schedule-units.ts';
+import { formatValue, unitLabels } from '../units/index.ts';
 
 /** Header rows [label, value]. */
 export function headerRows(doc: ScheduleDocument): [string, string][] {
@@ -12,7 +12,7 @@ export function headerRows(doc: ScheduleDocument): [string, string][] {
   const l = unitLabels(u);
   const h = doc.header;
   const tRef = Number.isFinite(h.referenceTemperature)
-    ? `${formatTemperature(u, h.referenceTemperature)} ${l.temperature}${h.referenceTemperatureAssumed ? ' (assumed: not set in the project)' : ''}`
+    ? `${formatValue(h.referenceTemperature, 'temperature', u)} ${l.temperature}${h.referenceTemperatureAssumed ? ' (assumed: not set in the project)' : ''}`
     : 'not set';
   const last = doc.revisions.at(-1);
   return [
@@ -53,8 +53,8 @@ export function summaryCells(doc: ScheduleDocument): string[][] {
   const u = doc.units;
   return doc.memberSummary.map((r) => [
     r.label, r.kinds.join(', '), String(r.count),
-    formatForce(u, r.maxTension), r.maxTensionAt, formatForce(u, r.minForce), r.minForceAt,
-    formatNumber(r.utilisation, 3), r.utilisationAt,
+    formatValue(r.maxTension, 'force', u), r.maxTensionAt, formatValue(r.minForce, 'force', u), r.minForceAt,
+    formatValue(r.utilisation, 'ratio', u), r.utilisationAt,
     r.failing ? `FAIL: ${r.failing}` : r.unchecked === r.count ? 'NOT CHECKED' : `PASS${r.unchecked ? ` (${r.unchecked} not checked)` : ''}`,
   ]);
 }
@@ -69,5 +69,5 @@ export function frequencyIntro(doc: ScheduleDocument): string {
 }
 
 export function frequencyCells(doc: ScheduleDocument): string[][] {
-  return (doc.frequencies?.modes ?? []).map((m) => [String(m.number), formatNumber(m.frequency, 3), formatNumber(m.period, 3)]);
+  return (doc.frequencies?.modes ?? []).map((m) => [String(m.number), formatValue(m.frequency, 'frequency', doc.units), formatValue(m.period, 'period', doc.units)]);
 }

@@ -6,7 +6,7 @@
  * borders, never by colour alone.
  */
 import type { ScheduleDocument } from './schedule-types.ts';
-import { formatForce, formatLength, formatMoment, formatNumber, formatTemperature, momentLabel, unitLabels } from './schedule-units.ts';
+import { formatValue, unitLabel, unitLabels } from '../units/index.ts';
 import { FREQUENCY_HEAD, REVISION_HEAD, frequencyCells, frequencyIntro, headerRows, revisionCells, summaryCells, summaryHead } from './schedule-cells.ts';
 
 export function escapeHtml(s: string): string {
@@ -39,11 +39,11 @@ function scheduleMarkup(doc: ScheduleDocument): { title: string; body: string } 
 
   const memberRows = doc.members.map((m) => [
     `<b>${e(m.id)}</b>`, e(m.groups.join(', ')), e(m.section), m.kind,
-    formatLength(u, m.cutLength), formatForce(u, m.installationTension),
-    formatNumber(m.frequency, 2), formatNumber(m.frequencyInPlane, 2),
-    `${formatForce(u, m.envelopeMax)}<br><small>${e(m.envelopeMaxCase)}</small>`,
-    `${formatForce(u, m.envelopeMin)}<br><small>${e(m.envelopeMinCase)}</small>`,
-    m.utilisation === null ? '—' : `${m.utilisation > 1 ? '<b class="fail">' : ''}${formatNumber(m.utilisation, 3)}${m.utilisation > 1 ? '</b>' : ''}<br><small>${e(m.utilisationCase)}</small>`,
+    formatValue(m.cutLength, 'length', u), formatValue(m.installationTension, 'force', u),
+    formatValue(m.frequency, 'frequency', u), formatValue(m.frequencyInPlane, 'frequency', u),
+    `${formatValue(m.envelopeMax, 'force', u)}<br><small>${e(m.envelopeMaxCase)}</small>`,
+    `${formatValue(m.envelopeMin, 'force', u)}<br><small>${e(m.envelopeMinCase)}</small>`,
+    m.utilisation === null ? '—' : `${m.utilisation > 1 ? '<b class="fail">' : ''}${formatValue(m.utilisation, 'ratio', u)}${m.utilisation > 1 ? '</b>' : ''}<br><small>${e(m.utilisationCase)}</small>`,
     statusCell(m.checkStatus, m.failedChecks),
   ]);
   const membersHtml = table(`Members — cut lengths, installation tension at the reference temperature, frequencies, envelope and checks`,
@@ -59,16 +59,16 @@ function scheduleMarkup(doc: ScheduleDocument): { title: string; body: string } 
   const caseTables: string[] = [];
   for (let start = 0; start < doc.cases.length; start += CASES_PER_TABLE) {
     const cs = doc.cases.slice(start, start + CASES_PER_TABLE);
-    const rows = doc.members.map((m) => [`<b>${e(m.id)}</b>`, ...cs.map((_, j) => formatForce(u, m.tensionByCase[start + j]))]);
+    const rows = doc.members.map((m) => [`<b>${e(m.id)}</b>`, ...cs.map((_, j) => formatValue(m.tensionByCase[start + j], 'force', u))]);
     caseTables.push(table(`Largest member tension per case (${l.force})${doc.cases.length > CASES_PER_TABLE ? ` — cases ${start + 1}–${start + cs.length} of ${doc.cases.length}` : ''}`,
       ['Member', ...cs.map((c) => `${e(c.label)}${c.converged ? '' : ' <b>(NOT CONVERGED)</b>'}<br><small>${e(c.id)}</small>`)], rows));
   }
 
   // Moment columns only when some support restrains a rotation (beam models).
   const withMoments = doc.reactions.some((r) => r.moment);
-  const momentCells = (m: [number, number, number] | undefined) => (withMoments ? (m ? m.map((v) => formatMoment(u, v)) : ['—', '—', '—']) : []);
-  const reactionRows = doc.reactions.map((r) => [`<b>${e(r.node)}</b>`, e(r.case), ...r.force.map((f) => formatForce(u, f)), formatForce(u, r.magnitude), ...momentCells(r.moment)]);
-  const momentHeads = withMoments ? [`Mx (${momentLabel(u)})`, `My (${momentLabel(u)})`, `Mz (${momentLabel(u)})`] : [];
+  const momentCells = (m: [number, number, number] | undefined) => (withMoments ? (m ? m.map((v) => formatValue(v, 'moment', u)) : ['—', '—', '—']) : []);
+  const reactionRows = doc.reactions.map((r) => [`<b>${e(r.node)}</b>`, e(r.case), ...r.force.map((f) => formatValue(f, 'force', u)), formatValue(r.magnitude, 'force', u), ...momentCells(r.moment)]);
+  const momentHeads = withMoments ? [`Mx (${unitLabel('moment', u)})`, `My (${unitLabel('moment', u)})`, `Mz (${unitLabel('moment', u)})`] : [];
   const reactionsHtml = doc.reactions.length
     ? table(`Anchor and base reactions (force and moment the support exerts on the structure, ${l.force})`, ['Support', 'Case', 'Fx', 'Fy', 'Fz', '|R|', ...momentHeads], reactionRows, 2)
     : '<p>No support reactions (no converged case).</p>';
@@ -86,11 +86,11 @@ function scheduleMarkup(doc: ScheduleDocument): { title: string; body: string } 
   if (doc.temperatureTable && doc.temperatureTable.rows.length) {
     const tt = doc.temperatureTable;
     tempHtml = table(`Tension to set at installation (${l.force}, at the lower end) by air temperature (${l.temperature}) — same unstressed lengths as the design state`,
-      ['Member', ...tt.temperatures.map((t) => `${formatTemperature(u, t)} ${l.temperature}`)],
-      tt.rows.map((r) => [`<b>${e(r.member)}</b>`, ...r.tensions.map((x) => formatForce(u, x))]))
+      ['Member', ...tt.temperatures.map((t) => `${formatValue(t, 'temperature', u)} ${l.temperature}`)],
+      tt.rows.map((r) => [`<b>${e(r.member)}</b>`, ...r.tensions.map((x) => formatValue(x, 'force', u))]))
       + table(`Taut-string frequency f₁ (Hz) the cable should show when set to that tension — for site checks by vibration`,
-        ['Member', ...tt.temperatures.map((t) => `${formatTemperature(u, t)} ${l.temperature}`)],
-        tt.rows.map((r) => [`<b>${e(r.member)}</b>`, ...r.frequencies.map((x) => formatNumber(x, 3))]));
+        ['Member', ...tt.temperatures.map((t) => `${formatValue(t, 'temperature', u)} ${l.temperature}`)],
+        tt.rows.map((r) => [`<b>${e(r.member)}</b>`, ...r.frequencies.map((x) => formatValue(x, 'frequency', u))]));
   }
 
   const basisHtml = doc.basis ? `<ul class="basis">${doc.basis.map((b) => `<li>${e(b)}</li>`).join('')}</ul>` : '<p>Design checks were not run.</p>';

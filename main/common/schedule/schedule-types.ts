@@ -1,9 +1,9 @@
 /**
  * The member tension schedule as data: what the printed schedule (HTML/PDF), the CSV and the
- * renderer's print route all show. Numbers are SI (N, m, Hz, K); formatting is schedule-units.ts.
+ * renderer's print route all show. Numbers are SI (N, m, Hz, K); formatting is main/common/units.
  * Built by buildSchedule (build-schedule.ts) from project + solution + checks + installation data.
  */
-import type { ScheduleUnits } from './schedule-units.ts';
+import type { UnitSystem } from '../units/index.ts';
 import type { CheckRow } from '../checks/check-text.ts';
 import type { MemberKind, ReportRevision, ScheduleListing } from '../../../solver/index.ts';
 
@@ -137,7 +137,7 @@ export interface ScheduleFrequencies {
 export interface ScheduleDocument {
   title: string;
   caution: string;
-  units: ScheduleUnits;
+  units: UnitSystem;
   paper: PaperSize;
   header: ScheduleHeader;
   /** Document number (project report.documentNumber; '' when not set). */

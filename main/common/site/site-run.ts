@@ -13,11 +13,11 @@ import { buildReport } from '../report/build-report.ts';
 import { reportHtml } from '../report/report-html.ts';
 import { collectReportSource } from '../report/report-source.ts';
 import type { PaperSize } from '../schedule/schedule-types.ts';
-import type { ScheduleUnits } from '../schedule/schedule-units.ts';
+import type { UnitSystem } from '../units/index.ts';
 
 /** How a printed document is laid out: units of the numbers, paper size, date of issue (YYYY-MM-DD). */
 export interface SiteDocumentOptions {
-  units: ScheduleUnits;
+  units: UnitSystem;
   paper: PaperSize;
   issueDate: string;
 }

@@ -6,7 +6,7 @@ import type { ProjectSolver } from '../../../main/cli/commands/solve.ts';
 import { dispatch } from '../../../main/cli/dispatch.ts';
 import type { CliIO } from '../../../main/cli/cli-io.ts';
 import { replaceNonFinite } from '../../../main/cli/format/finite-guard.ts';
-import { fixed, kN } from '../../../main/cli/format/number-text.ts';
+import { fixedText, formatValue } from '../../../main/common/units/index.ts';
 import { textTable } from '../../../main/cli/format/text-table.ts';
 import { jsonOutput } from '../../../main/cli/format/json-output.ts';
 import { parseOptions } from '../../../main/cli/options.ts';
@@ -59,12 +59,12 @@ describe('non-finite guard', () => {
 });
 
 describe('text helpers (common practice for fixed-width reports)', () => {
-  it('never prints negative zero and shows n/a for non-finite values', () => {
-    expect(fixed(-0.0004, 3)).toBe('0.000');
-    expect(fixed(-0.0006, 3)).toBe('-0.001');
-    expect(kN(-1)).toBe('0.00');
-    expect(kN(12345.6)).toBe('12.35');
-    expect(fixed(NaN, 2)).toBe('n/a');
+  it('never prints negative zero and shows — for non-finite values', () => {
+    expect(fixedText(-0.0004, 3)).toBe('0.000');
+    expect(fixedText(-0.0006, 3)).toBe('-0.001');
+    expect(formatValue(-1, 'force', 'SI')).toBe('0.00');
+    expect(formatValue(12345.6, 'force', 'SI')).toBe('12.35');
+    expect(fixedText(NaN, 2)).toBe('—');
   });
 
   it('aligns columns: text left, numbers right', () => {

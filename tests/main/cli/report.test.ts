@@ -10,7 +10,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { runStayset } from './run-stayset.ts';
 import { smallMast } from '../../solver/sequence/small-mast.ts';
-import { formatForce, formatNumber } from '../../../main/common/schedule/schedule-units.ts';
+import { formatValue } from '../../../main/common/units/index.ts';
 import { checkRow } from '../../../main/common/checks/check-text.ts';
 import type { CheckResult } from '../../../solver/index.ts';
 import { serializeProject } from '../../../main/common/project/index.ts';
@@ -49,20 +49,20 @@ describe('stayset report', () => {
       for (const id of members) {
         const max = Math.max(...cases.map((c) => c.members.find((m) => m.id === id)!.tensionMax));
         const min = Math.min(...cases.map((c) => c.members.find((m) => m.id === id)!.tensionMin));
-        expect(n.get(`env-max|${id}`), id).toBe(formatForce('SI', max));
-        expect(n.get(`env-min|${id}`), id).toBe(formatForce('SI', min));
+        expect(n.get(`env-max|${id}`), id).toBe(formatValue(max, 'force', 'SI'));
+        expect(n.get(`env-min|${id}`), id).toBe(formatValue(min, 'force', 'SI'));
         compared += 2;
       }
       const checkJson = JSON.parse(check.stdout).check;
       for (const m of checkJson.members) {
         if (m.utilisation === null) continue;
-        expect(n.get(`util|${m.id}`), m.id).toBe(formatNumber(m.utilisation, 3));
+        expect(n.get(`util|${m.id}`), m.id).toBe(formatValue(m.utilisation, 'ratio', 'SI'));
         compared++;
       }
       // The governing utilisation row appears exactly when the check reports utilisations.
       const utils = checkJson.members.filter((m: { utilisation: number | null }) => m.utilisation !== null).map((m: { utilisation: number }) => m.utilisation);
       const govUtil = [...n].find(([k]) => k.startsWith('gov-utilisation|'));
-      if (utils.length) expect(govUtil![1]).toBe(formatNumber(Math.max(...utils), 3));
+      if (utils.length) expect(govUtil![1]).toBe(formatValue(Math.max(...utils), 'ratio', 'SI'));
       else expect(govUtil).toBeUndefined();
       // Every other governing row is the first result of its check code in `check --json` (worst first), printed by the shared formatter.
       const results: CheckResult[] = checkJson.results;
@@ -76,13 +76,13 @@ describe('stayset report', () => {
       }
       expect([...n.keys()].filter((k) => k.startsWith('gov-') && !k.endsWith('|ratio') && !/^gov-(utilisation|leastTension)\|/.test(k))).toHaveLength(codes.length);
       const rMax = Math.max(...cases.map((c) => Math.hypot(...c.reactions.find((r) => r.node === 'm/base')!.force)));
-      expect(n.get('react|m/base')).toBe(formatForce('SI', rMax));
+      expect(n.get('react|m/base')).toBe(formatValue(rMax, 'force', 'SI'));
       expect(compared).toBeGreaterThan(100);
       const modes = runStayset(['modes', file, '--case', 'dead', '--json']);
       expect(modes.code, modes.stderr).toBe(0);
       const freqs: { number: number; frequency: number }[] = JSON.parse(modes.stdout).modes.modes;
       expect(freqs.length).toBeGreaterThan(0);
-      for (const f of freqs) expect(n.get(`mode|${f.number}`), `mode ${f.number}`).toBe(formatNumber(f.frequency, 3));
+      for (const f of freqs) expect(n.get(`mode|${f.number}`), `mode ${f.number}`).toBe(formatValue(f.frequency, 'frequency', 'SI'));
       expect(html).toContain('test issue');
       expect(html).toContain('Tensioning sequence top down');
       expect(html).toContain('Results are for review by a qualified engineer');

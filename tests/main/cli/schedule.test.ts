@@ -6,6 +6,7 @@ import { parse } from 'csv-parse/sync';
 import { fixture, REPO_ROOT, runStayset } from './run-stayset.ts';
 import { solveProject } from '../../../solver/index.ts';
 import type { ProjectFile } from '../../../solver/index.ts';
+import { targetText } from '../../../main/common/tuning/tuning-text.ts';
 
 const MAST = join(REPO_ROOT, fixture('kestrel-moor-mast.stayset.json'));
 
@@ -118,13 +119,15 @@ describe('stayset schedule', () => {
     expect(tune.code).toBe(0);
     const tuned = JSON.parse(tune.stdout);
     const saved = JSON.parse(readFileSync(file, 'utf8')) as ProjectFile;
-    expect(saved.tuning!.lastRun).toMatchObject({ summary: tuned.summary, status: 'met', targets: [{ kind: 'tensionShare', met: true }], variables: [{ group: 'guys', by: 'pretension' }] });
+    // The record keeps the tuner's numbers and the words of the run in the project's display units (SI).
+    expect(saved.tuning!.lastRun).toMatchObject({ status: 'met', targets: [{ kind: 'tensionShare', met: true, label: targetText(p, tuned.targets[0].target, 'SI') }], variables: [{ group: 'guys', by: 'pretension' }] });
+    expect(saved.tuning!.lastRun!.summary).toBe(`1 of 1 targets met after ${tuned.iterations} iterations (${tuned.evaluations} solves)`);
     expect(saved.tuning!.lastRun!.variables![0].final).toBe(tuned.variables[0].final);
     expect(runStayset(['schedule', file, '--html', html, '--date', '2026-12-01']).code).toBe(0);
     const page = readFileSync(html, 'utf8');
     expect(page).not.toContain('No tuning run is recorded');
-    expect(page).toContain(`<td>${tuned.targets[0].label.replace(/'/g, '&#39;')}</td><td>12.00 % (target 12.00 %)</td><td>yes</td>`);
-    expect(page).toContain(`<td>All guys</td><td>pretension</td><td>${(tuned.variables[0].final / 1000).toFixed(1)} kN</td>`);
+    expect(page).toContain(`<td>${saved.tuning!.lastRun!.targets![0].label.replace(/'/g, '&#39;')}</td><td>12.0 % (target 12.0 %)</td><td>yes</td>`);
+    expect(page).toContain(`<td>All guys</td><td>pretension</td><td>${(tuned.variables[0].final / 1000).toFixed(2)} kN</td>`);
     // Natural frequencies: the same numbers as `stayset modes` about the reference case.
     const modes = runStayset(['modes', file, '--case', 'dead', '-n', '6', '--json']);
     expect(modes.code).toBe(0);

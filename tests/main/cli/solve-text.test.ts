@@ -1,5 +1,5 @@
 // `stayset solve` table output: one block per case, values equal to the JSON output rounded
-// to the printed precision (kN with 2 decimals, m with 3 or 4), and the review caution.
+// to the printed precision (kN with 2 decimals, lengths in m with 3, displacements in mm with 1), and the review caution.
 import { describe, expect, it } from 'vitest';
 import type { CaseResult } from '../../../solver/index.ts';
 import { fixture, runStayset } from './run-stayset.ts';
@@ -28,7 +28,7 @@ describe('stayset solve (tables)', () => {
     ]);
     const top = cases[0].nodes.find((n) => n.id === 'TOP')!;
     const topRow = deadBlock.split('\n').find((l) => l.trim().startsWith('TOP '))!;
-    expect(topRow.trim().split(/\s+/)[3]).toBe(top.displacement[2].toFixed(4));
+    expect(topRow.trim().split(/\s+/)[3]).toBe((top.displacement[2] * 1000).toFixed(1)); // displacements in mm, 0.1 mm
     const base = cases[0].reactions.find((q) => q.node === 'BASE')!;
     const baseRow = deadBlock.split('\n').find((l) => l.trim().startsWith('BASE ') && l.split(/\s+/).length === 5)!;
     expect(baseRow.trim().split(/\s+/)[3]).toBe((base.force[2] / 1000).toFixed(2));

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { installationData, defaultInstallationTemperatures } from '../../../solver/installation/installation-data.ts';
+import { installationData, defaultInstallationTemperatures, DEFAULT_REFERENCE_TEMPERATURE } from '../../../solver/installation/installation-data.ts';
+import { installationNoteText } from '../../../main/common/report/installation-text.ts';
 import { fixedEndTension } from '../../../solver/installation/thermal-tension.ts';
 import { findBracketedRoot } from '../../../solver/installation/bracketed-root.ts';
 import { singleSpan } from '../tuning/fixtures.ts';
@@ -73,7 +74,10 @@ describe('installation temperature table (full nonlinear solves)', () => {
     delete p.meta!.referenceTemperature;
     const data = installationData(p, { temperatures: [283.15] });
     expect(data.referenceTemperatureAssumed).toBe(true);
-    expect(data.warnings.join(' ')).toMatch(/referenceTemperature is not set/);
+    expect(data.warnings).toEqual([{ code: 'referenceTemperatureAssumed', quantities: { temperature: { value: DEFAULT_REFERENCE_TEMPERATURE, kind: 'temperature' } }, refs: {} }]);
+    // Worded at the edge in the display units (°C = K − 273.15; °F = °C × 9/5 + 32, NIST SP 811).
+    expect(installationNoteText(data.warnings[0], 'SI')).toMatch(/referenceTemperature is not set: \d+\.\d °C assumed/);
+    expect(installationNoteText(data.warnings[0], 'US')).toMatch(/°F assumed/);
     expect(() => installationData(p, { temperatures: [-5] })).toThrow(/installation\.temperatures\[0\]/);
   });
 });

@@ -57,15 +57,19 @@ describe('bounded Levenberg–Marquardt', () => {
 
 describe('conflict diagnosis from sensitivities', () => {
   const base = {
-    targetLabels: ['A', 'B'], senses: ['atMost', 'equal'] as ('atMost' | 'equal')[], margin: 0.01,
-    variables: [{ label: 'G', by: 'pretension' as const, value: 10e3, lower: 1e3, upper: 50e3 }],
+    senses: ['atMost', 'equal'] as ('atMost' | 'equal')[], margin: 0.01,
+    variables: [{ group: 'G', by: 'pretension' as const, value: 10e3, lower: 1e3, upper: 50e3 }],
   };
   it('names the opposing target when the needed direction breaks a binding one', () => {
     const out = diagnoseTargets({ ...base, gaps: [0.2, 0], met: [false, true], jacobian: [[-1], [1]] });
-    expect(out.join(' ')).toMatch(/A needs the pretension of 'G' higher, which B does not allow/);
+    expect(out).toEqual([{ code: 'conflict', quantities: {}, refs: { target: '0', other: '1', group: 'G', by: 'pretension', direction: 'up' } }]);
   });
   it('says when no variable acts on a target', () => {
     const out = diagnoseTargets({ ...base, gaps: [0.2, 0], met: [false, true], jacobian: [[0], [1]] });
-    expect(out.join(' ')).toMatch(/A cannot be met: no tuning variable changes it/);
+    expect(out).toEqual([{ code: 'noInfluence', quantities: {}, refs: { target: '0', groups: ['G'] } }]);
+  });
+  it('gives the bound a variable would have to pass as a force quantity', () => {
+    const out = diagnoseTargets({ ...base, variables: [{ ...base.variables[0], value: 50e3 }], gaps: [0.2, -0.5], met: [false, true], jacobian: [[-1], [0]] });
+    expect(out).toEqual([{ code: 'atBound', quantities: { bound: { value: 50e3, kind: 'force' } }, refs: { target: '0', group: 'G', by: 'pretension', bound: 'upper', direction: 'up' } }]);
   });
 });

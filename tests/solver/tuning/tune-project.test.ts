@@ -5,6 +5,7 @@ import type { ProjectFile } from '../../../solver/project/types.ts';
 import { singleSpan } from './fixtures.ts';
 import { findBracketedRoot } from '../../../solver/installation/bracketed-root.ts';
 
+import { tuningDiagnosisText } from '../../../main/common/tuning/tuning-text.ts';
 const P_TRUE = 30e3;
 
 function solvedDead(p: ProjectFile) {
@@ -70,9 +71,9 @@ describe('pretension tuning through the nonlinear solver', () => {
     };
     const res = tuneProject(p, { solveCases: solveNamedCases });
     expect(res.status).toBe('unmet');
-    const text = res.diagnosis.join('\n');
+    const text = tuningDiagnosisText(res, p, 'SI').join('\n');
     expect(text).toMatch(/sag ≤ 0\.500 m in 'dead' for 'main span' needs the pretension of 'main span' higher/);
-    expect(text).toMatch(/tension share 8\.00 %/);
+    expect(text).toMatch(/tension share 8\.0 %/);
     expect(text).toMatch(/conflict/);
   });
 
@@ -82,7 +83,9 @@ describe('pretension tuning through the nonlinear solver', () => {
     const res = tuneProject(p, { solveCases: solveNamedCases });
     expect(res.status).toBe('unmet');
     expect(res.variables[0].atBound).toBe('upper');
-    expect(res.diagnosis.join('\n')).toMatch(/above its upper bound 25\.0 kN/);
+    expect(tuningDiagnosisText(res, p, 'SI').join('\n')).toMatch(/above its upper bound 25\.00 kN/);
+    // 25 kN = 25000 / 4448.2216152605 N per kip = 5.620 kip (NIST SP 811: 1 lbf = 4.4482216152605 N).
+    expect(tuningDiagnosisText(res, p, 'US').join('\n')).toMatch(/above its upper bound 5\.620 kip/);
   });
 
   it('explains a target no variable influences (zero sensitivity)', () => {
@@ -93,7 +96,8 @@ describe('pretension tuning through the nonlinear solver', () => {
     p.tuning = { variables: [{ group: 'span', by: 'pretension' }], targets: [{ kind: 'sag', group: 'other', case: 'dead', limit: { absolute: 0.2 } }] };
     const res = tuneProject(p, { solveCases: solveNamedCases });
     expect(res.status).toBe('unmet');
-    expect(res.diagnosis.join('\n')).toMatch(/no tuning variable changes it/);
+    expect(res.diagnosis.map((n) => n.code)).toEqual(['noInfluence']);
+    expect(tuningDiagnosisText(res, p, 'SI').join('\n')).toMatch(/no tuning variable changes it/);
   });
 
   it('rejects bad input naming the entry', () => {

@@ -5,6 +5,7 @@ import { solveNamedCases } from '../../../solver/tuning/project-case-solver.ts';
 import { solveProject } from '../../../solver/index.ts';
 import type { ProjectFile } from '../../../solver/project/types.ts';
 import { singleSpan } from './fixtures.ts';
+import { tuningDiagnosisText } from '../../../main/common/tuning/tuning-text.ts';
 
 const mast = (): ProjectFile => JSON.parse(readFileSync(new URL('../../fixtures/projects/kestrel-moor-mast.stayset.json', import.meta.url), 'utf8'));
 
@@ -44,6 +45,6 @@ describe('tuning targets: reaction and plumb', () => {
     p.tuning = { variables: [{ group: 'guys', by: 'pretension', min: 5e3, max: 60e3 }], targets: [{ kind: 'plumb', base: 'BASE', top: 'TOP', case: 'wind-x', tolerance: 0.02 }] };
     const res = tuneProject(p, { solveCases: solveNamedCases });
     expect(res.status).toBe('unmet');
-    expect(res.diagnosis.join(' ')).toMatch(/plumb .* needs the pretension of 'All guys' above its upper bound 60\.0 kN/);
+    expect(tuningDiagnosisText(res, p, 'SI').join(' ')).toMatch(/plumb .* needs the pretension of 'All guys' above its upper bound 60\.00 kN/);
   });
 });

@@ -4,7 +4,8 @@
 // runChecks; frequencies from solveModes) — not against the schedule's own helpers.
 import { beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
-import { membersOfGroup, purposeOf, referenceCaseId, runChecks, solveModes, solveNamedCases, solveProject, tuneProject, tuningRunRecord } from '../../../../solver/index.ts';
+import { membersOfGroup, purposeOf, referenceCaseId, runChecks, solveModes, solveNamedCases, solveProject, tuneProject } from '../../../../solver/index.ts';
+import { tuningRunRecord } from '../../../../main/common/tuning/tuning-record.ts';
 import type { CheckReport, ModalOutcome, ProjectFile, SolveReport } from '../../../../solver/index.ts';
 import { buildSchedule, scheduleCsv, scheduleHtml } from '../../../../main/common/schedule/index.ts';
 import { validateProject } from '../../../../main/common/project/index.ts';
@@ -66,7 +67,7 @@ describe('what the schedule lists', () => {
     expect(row.unchecked + row.failing).toBe(checks.members.filter((m) => ids.has(m.id) && m.status !== 'pass').length + ids.size - checks.members.filter((m) => ids.has(m.id)).length);
     const html = scheduleHtml(doc);
     expect(html).toContain('Other members listed, summarised per group');
-    expect(html).toContain(`${(min / 1000).toFixed(1)}</td>`);
+    expect(html).toContain(`${(min / 1000).toFixed(2)}</td>`);
     // The CSV carries the same summary.
     expect(scheduleCsv(doc)).toContain(`mast legs,bar,${ids.size},${(max / 1000).toFixed(2)}`);
   });
@@ -140,7 +141,7 @@ describe('the tuning run kept in the project', () => {
     p.tuning = { variables: [{ group: 'mast/guys level 1', by: 'pretension' }], targets: [{ kind: 'tensionShare', group: 'mast/guys level 1', share: 0.1 }] };
     const run = tuneProject(p, { solveCases: solveNamedCases });
     expect(run.status).toBe('met');
-    const tuned: ProjectFile = { ...run.project, tuning: { ...run.project.tuning!, lastRun: tuningRunRecord(run, '2026-12-01T10:00:00Z') } };
+    const tuned: ProjectFile = { ...run.project, tuning: { ...run.project.tuning!, lastRun: tuningRunRecord(run, p, 'SI', '2026-12-01T10:00:00Z') } };
     // The record survives the file format.
     expect(validateProject(JSON.parse(JSON.stringify(tuned))).ok).toBe(true);
     const doc = buildSchedule({ project: tuned, report: solveProject(tuned).report }, date);
@@ -148,9 +149,9 @@ describe('the tuning run kept in the project', () => {
     expect(doc.tuning!.date).toBe('2026-12-01T10:00:00Z');
     expect(doc.tuning!.targets).toHaveLength(1);
     expect(doc.tuning!.targets[0].met).toBe(true);
-    // Tension share 0.1 of the breaking load (16 mm strand: 230 kN in the fixture) → 10.00 %.
-    expect(doc.tuning!.targets[0].value).toMatch(/^10\.00 % \(target 10\.00 %\)$/);
-    expect(doc.tuning!.variables[0]).toEqual({ group: 'guys level 1', by: 'pretension', value: `${(run.variables[0].final / 1000).toFixed(1)} kN` });
+    // Tension share 0.1 of the breaking load (16 mm strand: 230 kN in the fixture) → 10.0 % (a share prints to 0.1 %).
+    expect(doc.tuning!.targets[0].value).toMatch(/^10\.0 % \(target 10\.0 %\)$/);
+    expect(doc.tuning!.variables[0]).toEqual({ group: 'guys level 1', by: 'pretension', value: `${(run.variables[0].final / 1000).toFixed(2)} kN` });
     const html = scheduleHtml(doc);
     expect(html).not.toContain('No tuning run is recorded');
     expect(html).toContain('every target met');
@@ -163,7 +164,7 @@ describe('the tuning run kept in the project', () => {
     // A later edit of the pretension: the record stays, and the schedule says it is not the current state.
     const edited: ProjectFile = { ...tuned, members: tuned.members.map((m) => (membersOfGroup(tuned, 'mast/guys level 1').has(m.id) ? { ...m, pretension: 12e3 } : m)) };
     const later = buildSchedule({ project: edited, report: solveProject(edited).report }, date);
-    expect(later.notes.join(' ')).toContain('The pretension of guys level 1 is 12.0 kN; the tuning run of 2026-12-01T10:00:00Z left');
+    expect(later.notes.join(' ')).toContain('The pretension of guys level 1 is 12.00 kN; the tuning run of 2026-12-01T10:00:00Z left');
   });
 
   it('a record written before the detailed one (date and summary only) still prints', () => {
