@@ -19,7 +19,13 @@ import { buildBasisCombinations, setBasisFactor, setBasisFormat, setCaseField, s
 import { parseQuantity } from '../../renderer/units/parse-quantity.ts';
 
 const read = (name: string) => JSON.parse(readFileSync(fileURLToPath(new URL(`../../assets/${name}`, import.meta.url)), 'utf8')) as ProjectFile;
-const mast = read('demo-mast.stayset');
+/** The demo mast without its own ancillaries and loss cases, so the entries added here are the first of their lists. */
+const mast = (() => {
+  const p = read('demo-mast.stayset');
+  delete p.ancillaries;
+  delete p.memberLoss;
+  return p;
+})();
 const canopy = read('demo-canopy.stayset');
 const field = (fields: FieldSpec[], path: string) => fields.find((f) => f.path === path)!;
 const ctxOf = (project: ProjectFile, units: 'SI' | 'US' = 'SI', selectedNodes: string[] = []): FieldContext => ({ project, units, selectedNodes, selectedMembers: [] });

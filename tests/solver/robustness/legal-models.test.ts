@@ -7,7 +7,8 @@ import { legalModels } from './legal-models.ts';
  * Every legal model converges, and balances: the sum of the support reactions plus the applied
  * nodal loads plus the total weight is zero (global equilibrium, statics) to 1e-8 of the loads.
  * The weight is computed here from the file: mass per stress-free length × stress-free length
- * (for a pretension P, the documented stress-free length of each element at the chord), plus node masses.
+ * (for a pretension P, the documented stress-free length of each element at the chord), plus node
+ * masses and the ancillaries' masses.
  */
 function appliedForce(project: ProjectFile, caseId: string): [number, number, number] {
   const spec = project.loadCases.find((c) => c.id === caseId)!;
@@ -24,6 +25,8 @@ function appliedForce(project: ProjectFile, caseId: string): [number, number, nu
     mass += (s.massPerLength ?? 0) * length;
   }
   for (const node of project.nodes) mass += node.mass ?? 0;
+  // Ancillaries (no ice in these cases): kg at a node, or kg per metre of height over their range.
+  for (const a of project.ancillaries ?? []) mass += a.along ? a.mass * (a.along.to - a.along.from) : a.mass;
   f[2] -= mass * STANDARD_GRAVITY;
   return f;
 }

@@ -88,7 +88,8 @@ function loadedJoint(factor: number, massPerLength: number, segments: number): P
 
 export function legalModels(): LegalModel[] {
   const models: LegalModel[] = [];
-  const add = (name: string, project: ProjectFile, cases = project.loadCases.filter((c) => !c.wind && !c.areaLoads).map((c) => c.id)) => models.push({ name, project, cases });
+  // Default: the cases whose loads the balance test counts (weight and nodal loads: no wind, area loads or ice).
+  const add = (name: string, project: ProjectFile, cases = project.loadCases.filter((c) => !c.wind && !c.areaLoads && !c.ice).map((c) => c.id)) => models.push({ name, project, cases });
 
   // README sample cable (inclined, 20 segments) by pretension, from zero to well above its weight.
   for (const P of [0, 0.01, 1, 100, 1e3, 1e4]) add(`inclined cable, pretension ${P} N`, cable([40, 0, 30], { segments: 20, pretension: P }));
