@@ -115,6 +115,9 @@ async function demoRows(page: Page, url: string, project: ProjectFile, repeat: n
 
   // Live slider: one tuning variable (the first guy level), then single steps.
   await page.getByTestId('right-tab-tuning').click();
+  // The demo has tuning variables of its own (levels 2 and 3): its set-up starts folded.
+  const setupBox = page.locator('details:has([data-testid="tuning-setup"])');
+  if (!(await setupBox.evaluate((d) => (d as HTMLDetailsElement).open))) await setupBox.locator('summary').click();
   await page.getByTestId('tuning-new-variable').selectOption(GUY_LEVEL);
   await page.getByTestId('tuning-add-variable').click();
   await page.getByTestId('pretension-slider').waitFor();
@@ -202,11 +205,12 @@ export async function runResponsivenessBenchmark(baseline = process.env.STAYSET_
     browser = await launchBenchBrowser();
     await browser.context.addInitScript(PAGE_PROBE);
     const results: { label: string; rows: Row[] }[] = [];
+    let hostRuns = 0;
     for (const b of builds) {
       const rows: Row[] = [];
       const shots = b.label === 'this tree' ? 'bench-now' : 'bench-base';
       for (const [file, measureRows] of [[demoFile, demoRows] as const, ...(options.net === false ? [] : [[netFile, netRows] as const])]) {
-        const data = path.join(work, `data-${results.length}-${rows.length}`);
+        const data = path.join(work, `data-${hostRuns++}`);
         await mkdir(data);
         const host = await startWebHost({ root: work, staticDir: b.dir, assetsDir: null, userDataDir: data, port: 0, initialPath: file });
         const page = await browser.context.newPage();
