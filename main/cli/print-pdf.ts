@@ -4,6 +4,9 @@
  * when a PDF is asked for. Page size and margins come from the document's @page rule.
  */
 import { existsSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { writeFileAtomic } from '../store/atomic-write.ts';
+import type { CliIO } from './cli-io.ts';
 
 export const DEFAULT_CHROMIUM = '/usr/bin/chromium';
 
@@ -19,4 +22,19 @@ export async function printPdf(html: string): Promise<Uint8Array> {
   } finally {
     await browser.close();
   }
+}
+
+/**
+ * Prints `html` to `pdfOut` (relative to io.cwd) atomically and says so on stderr; on failure says
+ * why (naming `file`, the project) and leaves any existing file unchanged. True when written.
+ */
+export async function writePdfOutput(io: CliIO, file: string, pdfOut: string, html: string): Promise<boolean> {
+  try {
+    await writeFileAtomic(resolve(io.cwd, pdfOut), await printPdf(html));
+  } catch (e) {
+    io.err(`${file}: printing the PDF failed: ${(e as Error).message}; existing files are unchanged\n`);
+    return false;
+  }
+  io.err(`wrote ${pdfOut}\n`);
+  return true;
 }

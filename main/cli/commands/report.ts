@@ -17,7 +17,7 @@ import type { CliIO } from '../cli-io.ts';
 import { parseOptions } from '../options.ts';
 import { readProjectOrReport } from '../read-project-file.ts';
 import { writeFileAtomic } from '../../store/atomic-write.ts';
-import { printPdf } from '../print-pdf.ts';
+import { writePdfOutput } from '../print-pdf.ts';
 import { isoToday, singleOption } from './option-helpers.ts';
 import { solveOnWorkers } from '../solve-on-workers.ts';
 
@@ -74,15 +74,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
     return EXIT.badInput;
   }
   if (htmlOut) io.err(`wrote ${htmlOut}\n`);
-  if (pdfOut) {
-    try {
-      await writeFileAtomic(resolve(io.cwd, pdfOut), await printPdf(html));
-    } catch (e) {
-      io.err(`${file}: printing the PDF failed: ${(e as Error).message}; existing files are unchanged\n`);
-      return EXIT.notConverged;
-    }
-    io.err(`wrote ${pdfOut}\n`);
-  }
+  if (pdfOut && !(await writePdfOutput(io, file, pdfOut, html))) return EXIT.notConverged;
   return report.cases.every((c) => c.converged) ? EXIT.ok : EXIT.notConverged;
 }
 

@@ -18,7 +18,7 @@ import type { CliIO } from '../cli-io.ts';
 import { parseOptions } from '../options.ts';
 import { readProjectOrReport } from '../read-project-file.ts';
 import { writeFileAtomic } from '../../store/atomic-write.ts';
-import { printPdf } from '../print-pdf.ts';
+import { writePdfOutput } from '../print-pdf.ts';
 import { SCHEDULE_MODE_COUNT } from '../../common/schedule/schedule-frequencies.ts';
 import { solveOnWorkers } from '../solve-on-workers.ts';
 
@@ -156,15 +156,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
     return EXIT.badInput;
   }
   for (const o of [htmlOut, csvOut]) if (o) io.err(`wrote ${o}\n`);
-  if (pdfOut) {
-    try {
-      await writeFileAtomic(resolve(io.cwd, pdfOut), await printPdf(html));
-    } catch (e) {
-      io.err(`${file}: printing the PDF failed: ${(e as Error).message}; existing files are unchanged\n`);
-      return EXIT.notConverged;
-    }
-    io.err(`wrote ${pdfOut}\n`);
-  }
+  if (pdfOut && !(await writePdfOutput(io, file, pdfOut, html))) return EXIT.notConverged;
   return report.cases.every((c) => c.converged) ? EXIT.ok : EXIT.notConverged;
 }
 
