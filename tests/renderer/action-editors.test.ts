@@ -5,8 +5,6 @@
  * the combination builder giving what the library function behind `stayset combine` gives.
  */
 import { beforeEach, describe, expect, it } from 'vitest';
-import { readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import { createPinia, setActivePinia } from 'pinia';
 import type { ProjectFile } from '../../solver/index.ts';
 import { applyBuiltCombinations, buildCombinations, resolveDesignBasis } from '../../solver/index.ts';
@@ -17,16 +15,10 @@ import { ACTION_FIELDS, AREA_LOAD_FIELDS, MEMBER_LOSS_FIELDS, newActionEntry } f
 import { applyFieldText, fieldText, otherFields, type Entry, type FieldContext, type FieldSpec } from '../../renderer/model/field-spec.ts';
 import { buildBasisCombinations, setBasisFactor, setBasisFormat, setCaseField, setCombinationPurpose } from '../../renderer/model/basis-edits.ts';
 import { parseQuantity } from '../../renderer/units/parse-quantity.ts';
+import { mastWithoutOwnActions, readDemo } from './editor-demos.ts';
 
-const read = (name: string) => JSON.parse(readFileSync(fileURLToPath(new URL(`../../assets/${name}`, import.meta.url)), 'utf8')) as ProjectFile;
-/** The demo mast without its own ancillaries and loss cases, so the entries added here are the first of their lists. */
-const mast = (() => {
-  const p = read('demo-mast.stayset');
-  delete p.ancillaries;
-  delete p.memberLoss;
-  return p;
-})();
-const canopy = read('demo-canopy.stayset');
+const mast = mastWithoutOwnActions();
+const canopy = readDemo('demo-canopy.stayset');
 const field = (fields: FieldSpec[], path: string) => fields.find((f) => f.path === path)!;
 const ctxOf = (project: ProjectFile, units: 'SI' | 'US' = 'SI', selectedNodes: string[] = []): FieldContext => ({ project, units, selectedNodes, selectedMembers: [] });
 const top = mast.nodes.reduce((a, b) => (b.at[2] > a.at[2] ? b : a)).id;

@@ -5,8 +5,6 @@
  * per edit, refused edits with a message naming the entry, the fields not edited kept.
  */
 import { beforeEach, describe, expect, it } from 'vitest';
-import { readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import { createPinia, setActivePinia } from 'pinia';
 import type { ProjectFile } from '../../solver/index.ts';
 import { useProjectStore } from '../../renderer/stores/project.ts';
@@ -17,15 +15,9 @@ import { addActionEntry, replaceActionEntry } from '../../renderer/model/action-
 import { addNodalLoads, updateNodalLoad } from '../../renderer/model/settings-edits.ts';
 import { withField } from '../../renderer/model/project-edits.ts';
 import { applyFieldText, fieldText, type Entry, type FieldContext, type FieldSpec } from '../../renderer/model/field-spec.ts';
+import { mastWithoutOwnActions } from './editor-demos.ts';
 
-const read = (name: string) => JSON.parse(readFileSync(fileURLToPath(new URL(`../../assets/${name}`, import.meta.url)), 'utf8')) as ProjectFile;
-/** The demo mast without its own ancillaries and loss cases, so the entries added here are the first of their lists. */
-const mast = (() => {
-  const p = read('demo-mast.stayset');
-  delete p.ancillaries;
-  delete p.memberLoss;
-  return p;
-})();
+const mast = mastWithoutOwnActions();
 const field = (fields: FieldSpec[], path: string) => fields.find((f) => f.path === path)!;
 const ctxOf = (project: ProjectFile, units: 'SI' | 'US' = 'SI', selectedNodes: string[] = []): FieldContext => ({ project, units, selectedNodes, selectedMembers: [] });
 
