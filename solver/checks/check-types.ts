@@ -98,8 +98,12 @@ export interface CaseCheck {
   /** False for componentOnly cases (not checked). */
   checked: boolean;
   pass: boolean;
-  /** Highest member utilisation in this case (0 when none is checked). */
+  /**
+   * Highest ratio (value / limit, or limit / value for minimum tensions) of any check run in this
+   * case, strength and serviceability alike (0 when none has a ratio).
+   */
   maxUtilisation: number;
+  /** The member or node that ratio belongs to ('' when none). */
   maxUtilisationMember: string;
   failures: number;
 }

@@ -69,6 +69,8 @@ export function runChecks(project: ProjectFile, report: SolveReport): CheckRepor
     const put = (r: Omit<CheckResult, 'format' | 'case' | 'purpose' | 'pass'> & { pass?: boolean }) => {
       const full: CheckResult = { format, case: c.id, purpose, ...r, pass: r.pass ?? (r.ratio === null ? false : r.ratio <= 1) };
       if (!full.pass) fails++;
+      // The case's highest ratio over every check it runs (strength and serviceability alike).
+      if (full.ratio !== null && full.ratio > cc.maxUtilisation) { cc.maxUtilisation = full.ratio; cc.maxUtilisationMember = full.item; }
       keep(full);
     };
     if (!c.converged) {
@@ -83,7 +85,6 @@ export function runChecks(project: ProjectFile, report: SolveReport): CheckRepor
         if (what.strength) {
           for (const r of strengthResults(d, m.tensionMax, m.tensionMin, m.beam?.maxBendingMoment)) {
             put(r);
-            if (r.ratio! > cc.maxUtilisation) { cc.maxUtilisation = r.ratio!; cc.maxUtilisationMember = m.id; }
             const prev = use.get(m.id);
             if (!prev || !Number.isFinite(prev.u) || r.ratio! > prev.u) use.set(m.id, { u: r.ratio!, c: c.id, t: m.tensionMax });
           }

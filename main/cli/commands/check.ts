@@ -50,7 +50,7 @@ export function checkReportText(project: ProjectFile, check: CheckReport, env: E
   out.push(...basisLines(check.basis), '');
   out.push('Cases');
   out.push(textTable(
-    [{ title: 'case' }, { title: 'purpose' }, { title: 'converged' }, { title: 'max util.', align: 'right' }, { title: 'member' }, { title: 'failures', align: 'right' }, { title: 'result' }],
+    [{ title: 'case' }, { title: 'purpose' }, { title: 'converged' }, { title: 'max util.', align: 'right' }, { title: 'member or node' }, { title: 'failures', align: 'right' }, { title: 'result' }],
     check.cases.map((c) => [c.id, PURPOSE_NAMES[c.purpose], c.converged ? 'yes' : 'NO', c.checked && c.converged ? formatValue(c.maxUtilisation, 'ratio', 'SI') : '—', c.maxUtilisationMember, String(c.failures), !c.checked ? 'not checked' : c.pass ? 'pass' : 'FAIL']),
   ));
   const used = check.members.filter((m) => m.utilisation !== null).sort((a, b) => (b.utilisation ?? 0) - (a.utilisation ?? 0)).slice(0, 10);

@@ -127,3 +127,20 @@ describe('runChecks', () => {
     }
   });
 });
+
+describe('runChecks case summary', () => {
+  it("a serviceability case's highest ratio counts its serviceability checks too (limit-state format)", () => {
+    const p = project();
+    p.designBasis = { format: 'limitState' };
+    const r = runChecks(p, { cases: [ok] });
+    const dead = r.cases.find((c) => c.id === 'dead')!;
+    expect(dead.purpose).toBe('serviceability');
+    // The case's ratios: cable service tension 30 kN / (0.5 · 1.0 · 100 kN) = 0.6 (hand arithmetic),
+    // sag 0.1 / (0.02 · 58) = 0.086, displacement 0.05 / 0.25 = 0.2, tilt (1/1000)/(1/500) = 0.5.
+    const own = r.results.filter((x) => x.case === 'dead' && x.ratio !== null).map((x) => x.ratio!);
+    expect(own.length).toBeGreaterThan(3);
+    expect(dead.maxUtilisation).toBeCloseTo(Math.max(...own), 12);
+    expect(dead.maxUtilisation).toBeCloseTo(0.6, 12);
+    expect(dead.maxUtilisationMember).toBe('G2');
+  });
+});
