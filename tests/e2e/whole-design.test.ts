@@ -359,3 +359,42 @@ describe('layout', () => {
   }, 120_000);
 });
 
+
+describe('generator forms in the display units', () => {
+  it('in kip/ft a new guyed mast is entered in feet and written in metres (NIST SP 811: 1 ft = 0.3048 m exactly)', async () => {
+    await page.getByTestId('units-us').click();
+    await page.getByTestId('generate').click();
+    await page.getByTestId('generate-kind-guyedMast').click();
+    await page.getByTestId('generate-record').selectOption({ label: (await page.getByTestId('generate-record').locator('option').last().textContent())! });
+    const form = page.getByTestId('guyed-mast-form');
+    await form.waitFor();
+    expect(await form.textContent()).toContain('Height (ft)');
+    await page.getByTestId('generate-place').fill('400, 0, 0');
+    await form.locator('input[data-field="height"]').fill('100');
+    await form.locator('input[data-field="guyLevels"]').fill('50, 95');
+    await expect.poll(() => page.getByTestId('guy-level-rows').locator('tbody tr').count()).toBe(2);
+    await form.locator('input[data-field="anchorRadius-1"]').fill('60');
+    await form.locator('input[data-field="anchorRadius-2"]').fill('60');
+    await form.locator('input[data-field="faceWidth"]').fill('2');
+    await form.locator('input[data-field="panelHeight"]').fill('4');
+    await page.getByTestId('generate-dialog').getByRole('button', { name: 'Generate' }).click();
+    await page.getByTestId('generate-notes').waitFor();
+    await shot('44-generate-in-feet.png');
+    await page.getByTestId('generate-close').click();
+    await page.getByTestId('save').click();
+    await expect.poll(() => page.getByTestId('dirty-mark').count()).toBe(0);
+    const saved = JSON.parse(await readFile(path.join(root, 'melt.stayset'), 'utf8')) as ProjectFile;
+    const rec = saved.generators!.at(-1)!;
+    const p = rec.params as unknown as GuyedMastParams;
+    expect(p.base![0]).toBeCloseTo(400 * 0.3048, 9);
+    expect(p.height).toBeCloseTo(100 * 0.3048, 9);
+    expect(p.guyLevels[0]).toBeCloseTo(50 * 0.3048, 9);
+    expect(p.guyLevels[1]).toBeCloseTo(95 * 0.3048, 9);
+    expect(p.anchorRadius).toBeCloseTo(60 * 0.3048, 9);
+    expect(p.faceWidth).toBeCloseTo(2 * 0.3048, 9);
+    const top = Math.max(...saved.nodes.filter((n) => n.id.startsWith(`${rec.id}/`)).map((n) => n.at[2]));
+    expect(top).toBeCloseTo(100 * 0.3048, 6);
+    await page.getByTestId('units-si').click();
+    expect(pageErrors).toEqual([]);
+  }, 120_000);
+});
