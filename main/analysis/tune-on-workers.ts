@@ -16,7 +16,9 @@
  * than the serial one, and a helper that stops is not waited for.
  *
  * Threads: `workers`, else STAYSET_WORKERS, else the available cores, never more than the
- * largest batch (variables × cases); one thread is the serial strategy (no worker started).
+ * largest batch (variables × cases); one thread is the serial strategy (no worker started). The
+ * helpers start with the second batch (the first Jacobian): the start's few cold solves are the
+ * calling thread's, and a project whose start already meets every target starts no worker.
  * Used by `stayset tune`.
  */
 import type { ResourceLimits, Worker } from 'node:worker_threads';
@@ -39,9 +41,10 @@ export interface TuneWorkerOptions {
   execArgv?: string[];
   resourceLimits?: ResourceLimits;
   /**
-   * Start the first batch only when every helper has built its session (or stopped), so the
-   * helpers share from the first batch on (steady-state measurements, tests). Default false: the
-   * calling thread starts at once.
+   * Start the helpers with the first batch and begin it only when every helper has built its
+   * session (or stopped), so the helpers share from the first batch on (steady-state
+   * measurements, tests). Default false: the calling thread starts at once, helpers with the
+   * second batch.
    */
   waitForHelpers?: boolean;
   /**
@@ -54,7 +57,10 @@ export interface TuneWorkerOptions {
   onStats?: (stats: TuneWorkerStats) => void;
 }
 
-/** Tasks of a run: solved by the calling thread (taken-over ones included), results taken from helpers, and tasks a helper had claimed that the calling thread solved itself. */
+/**
+ * Threads planned for a run, tasks solved by the calling thread (taken-over ones included),
+ * results taken from helpers, and tasks a helper had claimed that the calling thread solved itself.
+ */
 export interface TuneWorkerStats { threads: number; ownTasks: number; helperTasks: number; takenOver: number }
 
 /** The batch being solved: results by task, and a wake-up for the calling thread when one arrives. */
@@ -106,8 +112,7 @@ export function createWorkerCaseSolver(options: TuneWorkerOptions = {}): { facto
     if (threads <= 1) return createSerialCaseSolver(setup);
     stats.threads = threads;
     const shared: Shared = { current: null, stats, helperStopped: false };
-    const helpers = Array.from({ length: threads - 1 }, (_, k) => startHelper(setup, k + 2, options, shared));
-    workers.push(...helpers.map((h) => h.worker));
+    const helpers: Helper[] = [];
     const own = createCaseSession(setup.project, setup.variables, setup.caseIds);
     let seq = 0;
     let sentStarts: TuningBatch['starts'] | null = null;
@@ -122,7 +127,12 @@ export function createWorkerCaseSolver(options: TuneWorkerOptions = {}): { facto
     };
     const solver: TuningCaseSolver = {
       async solveBatch(batch) {
-        if (seq === 0 && options.waitForHelpers) await Promise.all(helpers.map((h) => h.ready));
+        if (helpers.length === 0 && (seq > 0 || options.waitForHelpers)) {
+          for (let k = 0; k < threads - 1; k++) helpers.push(startHelper(setup, k + 2, options, shared));
+          workers.push(...helpers.map((h) => h.worker));
+          sentStarts = null;
+          if (options.waitForHelpers) await Promise.all(helpers.map((h) => h.ready));
+        }
         const total = batchTaskCount(batch, setup.caseIds);
         const claims = createClaims(threads);
         const c: Current = { seq: ++seq, out: new Array(total).fill(undefined), wake: null };
@@ -131,8 +141,8 @@ export function createWorkerCaseSolver(options: TuneWorkerOptions = {}): { facto
           type: 'tune-batch', seq: c.seq, points: batch.points.map((p) => [...p]), claims,
           ...(batch.starts !== sentStarts ? { starts: [...batch.starts] } : {}),
         };
-        sentStarts = batch.starts;
-        for (const w of workers) w.postMessage(message);
+        if (helpers.length > 0) sentStarts = batch.starts;
+        for (const h of helpers) h.worker.postMessage(message);
         const claim = caseClaimer(taskIds(total), claims, 1);
         for (let id = claim(); id !== undefined; id = claim()) c.out[Number(id)] = solveOwn(batch, Number(id));
         // Every task is claimed; the ones still missing are with helpers (or a helper that stopped).

@@ -14,6 +14,9 @@
  *   scaled variables (not Marquardt's diag JᵀJ) keeps the change of the scaled variables least:
  *   a group that no unmet target needs is not moved just because it couples weakly.
  * Stops when every target is met, the cost stalls, or after maxIterations.
+ * The method is written as a generator of evaluation requests (leastSquaresSteps: one point, or
+ * the Jacobian's points together), so the caller decides how and where the points are evaluated;
+ * solveBoundedLeastSquares evaluates them in turn with GapProblem.evaluate.
  */
 import { solveDense } from './dense-solve.ts';
 import type { TargetSense } from './tuning-types.ts';

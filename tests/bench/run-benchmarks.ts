@@ -5,8 +5,7 @@
  *  2. One numeric factorisation of the 100×100 net's tangent against CHOLMOD on the same matrix.
  *  0. Start-up of the `stayset` bin (bundle and sources) against `node -e 0`.
  *  3. Further suites registered below (design cases, live re-solve, tuning serial against two
- *     threads, modes, responsiveness of the
- *     browser edition in Chromium) when present.
+ *     threads, modes, responsiveness of the browser edition in Chromium) when present.
  */
 import { execFileSync } from 'node:child_process';
 import { existsSync } from 'node:fs';

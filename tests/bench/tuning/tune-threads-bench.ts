@@ -2,23 +2,24 @@
  * Tuning benchmark: `stayset tune`'s run serially (tuneProject, one case session in this thread)
  * and on two threads (main/analysis/tune-on-workers.ts: this thread and one bundled analysis
  * worker, its start-up and session build included), on
- *  - the demo mast (assets/demo-mast.stayset: 2 pretension variables, 4 targets over 3 cases), and
+ *  - the demo mast (assets/demo-mast.stayset: 2 pretension variables, 4 targets over 3 cases),
  *  - the 200 m bench mast of live-resolve-bench.ts (4 guy levels as variables, 4 tension-share
  *    targets on the dead-load case: the finite-difference columns are the parallel work), and
  *  - the 150 m design mast of design-models.ts with a dead-load case added (5 guy levels as
- *    variables, 5 tension-share targets and no slack in 4 wind cases: 5 cases a point).
+ *    variables, 5 tension-share targets and no slack in 8 wind cases: 9 cases a point).
  * The two run in turn, alternating which goes first, for STAYSET_BENCH_ROUNDS rounds (default 3);
  * the table gives medians of wall time, process CPU time (all threads), the calling thread's own
  * CPU time (the run's critical path when the helper has a core of its own), and of the per-round
- * speed-up (serial wall / two-thread wall), and whether the two runs gave the same result (the
- * whole TuningResult, compared as JSON). Prints a table; nothing is asserted.
+ * speed-up (serial wall / two-thread wall), the share of the tasks the helper solved, and whether
+ * the two runs gave the same result (the whole TuningResult, compared as JSON). Prints a table;
+ * nothing is asserted.
  * Run alone (after `npm run build:cli`): node --import tsx tests/bench/tuning/tune-threads-bench.ts
  */
 import { existsSync, readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { tuneProject } from '../../../solver/index.ts';
 import type { ProjectFile, TuningResult } from '../../../solver/index.ts';
-import { tuneOnWorkers } from '../../../main/analysis/tune-on-workers.ts';
+import { tuneOnWorkers, type TuneWorkerStats } from '../../../main/analysis/tune-on-workers.ts';
 import { mastForBench } from './live-resolve-bench.ts';
 import { benchMast } from '../design/design-models.ts';
 
@@ -28,6 +29,8 @@ export interface TuneThreadsRow {
   serialSeconds: number; serialCpu: number; twoThreadSeconds: number; twoThreadCpu: number;
   /** Medians of the calling thread's own CPU time, s (Linux; NaN elsewhere). */
   serialThreadCpu: number; twoThreadThreadCpu: number;
+  /** Median share of the tasks whose result came from the helper thread (tune-on-workers.ts stats). */
+  helperShare: number;
   /** Median of the per-round ratios serial wall / two-thread wall. */
   speedup: number;
   identical: boolean;
@@ -78,11 +81,12 @@ function benchModels(): { name: string; project: ProjectFile }[] {
 export async function runTuneThreadsBench(rounds = Number(process.env.STAYSET_BENCH_ROUNDS ?? 3)): Promise<TuneThreadsRow[]> {
   const rows: TuneThreadsRow[] = [];
   for (const { name, project } of benchModels()) {
-    const serial: number[][] = [], two: number[][] = [], ratio: number[] = [];
+    const serial: number[][] = [], two: number[][] = [], ratio: number[] = [], share: number[] = [];
+    const onStats = (st: TuneWorkerStats): void => { share.push(st.helperTasks / (st.helperTasks + st.ownTasks - st.takenOver)); };
     let identical = true;
     let last: TuningResult | null = null;
     for (let r = 0; r < rounds; r++) {
-      const runs = [async () => timed(() => tuneProject(project)), async () => timed(() => tuneOnWorkers(project, { workers: 2 }))];
+      const runs = [async () => timed(() => tuneProject(project)), async () => timed(() => tuneOnWorkers(project, { workers: 2, onStats }))];
       const order = r % 2 === 0 ? [0, 1] : [1, 0];
       const out: [TuningResult, number, number, number][] = [];
       for (const k of order) out[k] = await runs[k]();
@@ -101,7 +105,7 @@ export async function runTuneThreadsBench(rounds = Number(process.env.STAYSET_BE
       serialSeconds: median(serial.map((s) => s[0])), serialCpu: median(serial.map((s) => s[1])),
       twoThreadSeconds: median(two.map((s) => s[0])), twoThreadCpu: median(two.map((s) => s[1])),
       serialThreadCpu: median(serial.map((s) => s[2])), twoThreadThreadCpu: median(two.map((s) => s[2])),
-      speedup: median(ratio), identical,
+      helperShare: median(share), speedup: median(ratio), identical,
     });
   }
   return rows;
@@ -110,12 +114,12 @@ export async function runTuneThreadsBench(rounds = Number(process.env.STAYSET_BE
 export async function runTuneThreadsBenchmark(): Promise<TuneThreadsRow[]> {
   const rows = await runTuneThreadsBench();
   console.log('\nTuning run, serial against two threads (medians of the rounds; CPU = process, all threads; own = the calling thread)');
-  console.log('model               vars  cases  iter  solves  serial s  CPU s  own s  2 threads s  CPU s  own s  speed-up  identical');
+  console.log('model               vars  cases  iter  solves  serial s  CPU s  own s  2 threads s  CPU s  own s  helper  speed-up  identical');
   for (const r of rows) {
     console.log(`${r.model.padEnd(18)} ${String(r.variables).padStart(5)} ${String(r.cases).padStart(6)} ${String(r.iterations).padStart(5)} ${String(r.solves).padStart(7)}`
       + ` ${r.serialSeconds.toFixed(2).padStart(9)} ${r.serialCpu.toFixed(2).padStart(6)} ${r.serialThreadCpu.toFixed(2).padStart(6)}`
       + ` ${r.twoThreadSeconds.toFixed(2).padStart(12)} ${r.twoThreadCpu.toFixed(2).padStart(6)} ${r.twoThreadThreadCpu.toFixed(2).padStart(6)}`
-      + ` ${r.speedup.toFixed(2).padStart(8)}× ${r.identical ? 'yes' : 'NO'}`);
+      + ` ${(100 * r.helperShare).toFixed(0).padStart(5)} % ${r.speedup.toFixed(2).padStart(8)}× ${r.identical ? 'yes' : 'NO'}`);
   }
   return rows;
 }
