@@ -6,7 +6,7 @@
  * depend on the thread that solved it, and posts each result at once.
  */
 import { parentPort } from 'node:worker_threads';
-import { createCaseSession, solveBatchTask, type CaseSession, type ProjectFile, type TuningSolvedCase } from '../../solver/index.ts';
+import { createCaseSession, solveBatchTask, taskContext, type CaseSession, type ProjectFile, type TuningSolvedCase } from '../../solver/index.ts';
 import { caseClaimer } from './case-shares.ts';
 import { taskIds, type TuneBatchMessage, type TuneHelperMessage, type TuneHelperSetup } from './tune-messages.ts';
 
@@ -24,6 +24,7 @@ export function serveTuneHelper(project: ProjectFile, setup: TuneHelperSetup): v
     post({ type: 'failed', error: errorText(e) });
     return;
   }
+  const ctx = taskContext({ project, caseIds: setup.caseIds });
   post({ type: 'tune-ready' });
   let starts = new Map<string, Float64Array>();
   parentPort?.on('message', (m: TuneBatchMessage) => {
@@ -33,7 +34,7 @@ export function serveTuneHelper(project: ProjectFile, setup: TuneHelperSetup): v
       const claim = caseClaimer(taskIds(m.points.length * setup.caseIds.length), m.claims, setup.slot);
       for (let id = claim(); id !== undefined; id = claim()) {
         const task = Number(id);
-        const solved: TuningSolvedCase = solveBatchTask(session, batch, setup.caseIds, task);
+        const solved: TuningSolvedCase = solveBatchTask(session, ctx, batch, task);
         post({ type: 'tune-task', seq: m.seq, task, solved }, solved.positions && solved.positions.buffer instanceof ArrayBuffer ? [solved.positions.buffer] : []);
       }
     } catch (e) {

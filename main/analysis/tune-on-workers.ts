@@ -23,7 +23,7 @@
  */
 import type { ResourceLimits, Worker } from 'node:worker_threads';
 import {
-  batchTaskCount, createCaseSession, createSerialCaseSolver, solveBatchTask, tuneProjectAsync,
+  batchTaskCount, createCaseSession, createSerialCaseSolver, solveBatchTask, taskContext, tuneProjectAsync,
   type ProjectFile, type TuneOptions, type TuningBatch, type TuningCaseSolver,
   type TuningCaseSolverFactory, type TuningResult, type TuningSolvedCase, type TuningSolveSetup,
 } from '../../solver/index.ts';
@@ -114,6 +114,7 @@ export function createWorkerCaseSolver(options: TuneWorkerOptions = {}): { facto
     const shared: Shared = { current: null, stats, helperStopped: false };
     const helpers: Helper[] = [];
     const own = createCaseSession(setup.project, setup.variables, setup.caseIds);
+    const ctx = taskContext(setup);
     let seq = 0;
     let sentStarts: TuningBatch['starts'] | null = null;
     /** Mean time of one task in this thread, ms: how long a missing helper result is waited for. */
@@ -121,7 +122,7 @@ export function createWorkerCaseSolver(options: TuneWorkerOptions = {}): { facto
     const solveOwn = (batch: TuningBatch, t: number): TuningSolvedCase => {
       stats.ownTasks++;
       const t0 = performance.now();
-      const solved = solveBatchTask(own, batch, setup.caseIds, t);
+      const solved = solveBatchTask(own, ctx, batch, t);
       taskMs = 0.5 * taskMs + 0.5 * (performance.now() - t0);
       return solved;
     };

@@ -2,8 +2,8 @@
 export type * from './tuning-types.ts';
 export { tuneProject, tuneProjectAsync, type TuneOptions } from './tune-project.ts';
 export {
-  createSerialCaseSolver, rebuildCaseSolver, solveBatchTask, batchTaskCount,
-  type TuningBatch, type TuningBatchResult, type TuningCaseSolver, type TuningCaseSolverFactory, type TuningSolvedCase, type TuningSolveSetup,
+  createSerialCaseSolver, rebuildCaseSolver, solveBatchTask, batchTaskCount, taskContext, solvedTask,
+  type TaskContext, type TuningBatch, type TuningBatchResult, type TuningCaseSolver, type TuningCaseSolverFactory, type TuningSolvedCase, type TuningSolveSetup,
 } from './tuning-case-solver.ts';
 export { createCaseSession, type CaseSession, type SessionSolve } from './case-session.ts';
 export { solveNamedCases } from './project-case-solver.ts';

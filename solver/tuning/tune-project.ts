@@ -14,10 +14,8 @@
  * Results are for review by a qualified engineer; local codes and licensed practice govern.
  */
 import type { ProjectFile, TuningSpec } from '../project/types.ts';
-import type { CaseResult } from '../results/types.ts';
-import { membersOfGroup } from '../checks/groups.ts';
-import { applyVariables, memberPretension, resolveVariables } from './tuning-variables.ts';
-import { evaluateTarget, targetCases, validateTarget } from './target-evaluation.ts';
+import { applyVariables, resolveVariables } from './tuning-variables.ts';
+import { targetCases, validateTarget } from './target-evaluation.ts';
 import {
   differencePoints, isMet, jacobianFromDifferences, leastSquaresSteps, runSteps, type GapProblemShape, type GapReply, type LmOptions,
 } from './levenberg-marquardt.ts';
@@ -63,19 +61,6 @@ function* tuningSteps({ setup, spec }: Prepared, options: TuneOptions): Generato
   const margin = options.margin ?? 0.01;
   const eqTol = options.equalityTolerance ?? 1e-3;
 
-  const scales = new Map<string, number>();
-  const tensionScale = (group: string): number => {
-    let s = scales.get(group);
-    if (s === undefined) {
-      const ids = [...membersOfGroup(project, group)];
-      const ms = ids.map((id) => project.members.find((m) => m.id === id)!);
-      s = ms.reduce((acc, m) => acc + Math.abs(memberPretension(project, m)), 0) / Math.max(1, ms.length);
-      if (!(s > 0)) s = 1000;
-      scales.set(group, s);
-    }
-    return s;
-  };
-
   const keyOf = (x: readonly number[]): string => x.map((v) => v.toPrecision(15)).join(',');
   const cache = new Map<string, Evaluation>();
   /** Warm starts of every solve: the solutions at the current point (replaced, never edited). */
@@ -93,13 +78,14 @@ function* tuningSteps({ setup, spec }: Prepared, options: TuneOptions): Generato
       lastPositions = new Map();
       fresh.forEach((i, j) => {
         const tasks = solved.slice(j * caseIds.length, (j + 1) * caseIds.length);
-        const bad = tasks.find((s) => !s.result.converged);
+        const bad = tasks.find((s) => !s.converged);
         if (bad) {
-          cache.set(keys[i], { failure: { case: bad.result.id, status: bad.result.status } });
+          cache.set(keys[i], { failure: { case: bad.caseId, status: bad.status } });
           return;
         }
-        const results = new Map<string, CaseResult>(caseIds.map((id, c) => [id, tasks[c].result]));
-        cache.set(keys[i], { values: spec.targets.map((t) => evaluateTarget(project, t, results, tensionScale)) });
+        const values = new Array<TargetValue>(spec.targets.length);
+        for (const task of tasks) for (const [k, v] of task.targets) values[k] = v;
+        cache.set(keys[i], { values });
         lastPositions.set(keys[i], new Map(caseIds.map((id, c) => [id, tasks[c].positions!])));
       });
     }

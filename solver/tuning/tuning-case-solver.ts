@@ -9,12 +9,14 @@
  * The serial strategy (createSerialCaseSolver) solves the tasks in order on one case session
  * (case-session.ts). Another strategy (e.g. worker threads, main/analysis/tune-on-workers.ts) must
  * give the same numbers: it solves the same tasks with solveBatchTask on sessions of its own.
+ * A task returns the values of the targets its case decides, not the whole case result.
  */
 import type { ProjectFile } from '../project/types.ts';
 import type { CaseResult } from '../results/types.ts';
 import { applyVariables } from './tuning-variables.ts';
 import { createCaseSession, type CaseSession } from './case-session.ts';
-import type { CaseSolveFn, ResolvedVariable } from './tuning-types.ts';
+import { createCaseTargetEvaluator } from './target-evaluation.ts';
+import type { CaseSolveFn, ResolvedVariable, TargetValue } from './tuning-types.ts';
 
 /** What a strategy is built for: the project as given, its resolved variables, the cases the targets need. */
 export interface TuningSolveSetup {
@@ -34,8 +36,38 @@ export interface TuningBatch {
   starts: ReadonlyMap<string, Float64Array>;
 }
 
-/** One solved task: the case result and, when it converged, the final node positions (3 × node count, m). */
-export interface TuningSolvedCase { result: CaseResult; positions: Float64Array | null }
+/**
+ * One solved task: whether the case converged (and its status), the values of the targets it
+ * decides (target-evaluation.ts, createCaseTargetEvaluator: [target index, value]; none when it did
+ * not converge) and, when it converged, its final node positions (3 × node count, m). Small, so
+ * it crosses threads cheaply (a whole CaseResult of a 1,350-DOF mast is ~130 kB to clone).
+ */
+export interface TuningSolvedCase {
+  caseId: string;
+  converged: boolean;
+  status: CaseResult['status'];
+  targets: [number, TargetValue][];
+  positions: Float64Array | null;
+}
+
+/** What solveBatchTask needs besides the session: the cases and the target evaluator of the run. */
+export interface TaskContext {
+  caseIds: readonly string[];
+  evaluate: (result: CaseResult) => [number, TargetValue][];
+}
+
+/** The task context of a run (the project as given and the cases its targets name). */
+export function taskContext(setup: Pick<TuningSolveSetup, 'project' | 'caseIds'>): TaskContext {
+  return { caseIds: setup.caseIds, evaluate: createCaseTargetEvaluator(setup.project) };
+}
+
+/** A solved case as a task result (targets evaluated when it converged). */
+export function solvedTask(ctx: TaskContext, result: CaseResult, positions: Float64Array | null): TuningSolvedCase {
+  return {
+    caseId: result.id, converged: result.converged, status: result.status,
+    targets: result.converged ? ctx.evaluate(result) : [], positions: result.converged ? positions : null,
+  };
+}
 
 /** Results of a batch, task by task: task t is point ⌊t / cases⌋, case t mod cases (setup order). */
 export type TuningBatchResult = TuningSolvedCase[];
@@ -53,18 +85,19 @@ export function batchTaskCount(batch: TuningBatch, caseIds: readonly string[]): 
 }
 
 /** Task t of a batch solved on `session`: the one routine every strategy runs per task. */
-export function solveBatchTask(session: CaseSession, batch: TuningBatch, caseIds: readonly string[], t: number): TuningSolvedCase {
-  const caseId = caseIds[t % caseIds.length];
-  const s = session.solve(batch.points[Math.floor(t / caseIds.length)], caseId, batch.starts.get(caseId));
-  return { result: s.result, positions: s.result.converged ? s.positions : null };
+export function solveBatchTask(session: CaseSession, ctx: TaskContext, batch: TuningBatch, t: number): TuningSolvedCase {
+  const caseId = ctx.caseIds[t % ctx.caseIds.length];
+  const s = session.solve(batch.points[Math.floor(t / ctx.caseIds.length)], caseId, batch.starts.get(caseId));
+  return solvedTask(ctx, s.result, s.positions);
 }
 
 /** The serial strategy: every task in order on one session in this thread. */
 export const createSerialCaseSolver: TuningCaseSolverFactory = (setup) => {
   const session = createCaseSession(setup.project, setup.variables, setup.caseIds);
+  const ctx = taskContext(setup);
   return {
     solveBatch(batch) {
-      return Array.from({ length: batchTaskCount(batch, setup.caseIds) }, (_, t) => solveBatchTask(session, batch, setup.caseIds, t));
+      return Array.from({ length: batchTaskCount(batch, setup.caseIds) }, (_, t) => solveBatchTask(session, ctx, batch, t));
     },
   };
 };
@@ -74,12 +107,15 @@ export const createSerialCaseSolver: TuningCaseSolverFactory = (setup) => {
  * cases solved from scratch by `solveCases` (warm starts unused, no positions kept).
  */
 export function rebuildCaseSolver(solveCases: CaseSolveFn): TuningCaseSolverFactory {
-  return (setup) => ({
-    solveBatch(batch) {
-      return batch.points.flatMap((point) => {
-        const results = solveCases(applyVariables(setup.project, setup.variables, point), setup.caseIds);
-        return setup.caseIds.map((id) => ({ result: results.get(id)!, positions: null }));
-      });
-    },
-  });
+  return (setup) => {
+    const ctx = taskContext(setup);
+    return {
+      solveBatch(batch) {
+        return batch.points.flatMap((point) => {
+          const results = solveCases(applyVariables(setup.project, setup.variables, point), setup.caseIds);
+          return setup.caseIds.map((id) => solvedTask(ctx, results.get(id)!, null));
+        });
+      },
+    };
+  };
 }
