@@ -9,11 +9,12 @@
  * the results go back in task order, so the run — pretensions found, iterations, solves — is the
  * serial tuneProject's, bit for bit (tested).
  *
- * No thread waits idly on a slower one: when the calling thread has no task left to claim and a
- * helper's result is still missing after about one task's time (the helper still booting, or
- * running the solver before the JIT has compiled it), it solves that task itself and takes
- * whichever result comes first — the two are the same numbers. So a small run costs little more
- * than the serial one, and a helper that stops is not waited for.
+ * The calling thread does not wait long on a slower helper: when it has no task left to claim
+ * and a helper's result is still missing after about one of its own task times (a helper just
+ * started runs the solver before the JIT has compiled it), it solves that task itself and takes
+ * whichever result comes first — the two are the same numbers. So the calling thread never solves
+ * more than the serial run would, waiting at most about one task time per missing result, and a
+ * helper that stops is not waited for.
  *
  * Threads: `workers`, else STAYSET_WORKERS, else the available cores, never more than the
  * largest batch (variables × cases); one thread is the serial strategy (no worker started). The
