@@ -4,7 +4,8 @@
  * cases in `only` (default all); with `workers` > 1 it shares the cases with workers of its own
  * (parallel-solve.ts, this thread solving too) and passes their progress and merged result on;
  * as a helper of such a run (`claims`) it solves the cases it claims (case-shares.ts).
- * With `site` set it runs that site request instead (main/common/site/site-run.ts) and posts 'site-done'.
+ * With `site` set it runs that site request instead (main/common/site/site-run.ts) and posts 'site-done';
+ * with `tune` set it serves a tuning run's batches (tune-helper.ts) until terminated.
  */
 import { parentPort, resourceLimits, workerData } from 'node:worker_threads';
 import { solveProject } from '../../solver/index.ts';
@@ -14,6 +15,7 @@ import { createProgressThrottle } from './progress-throttle.ts';
 import { caseClaimer, caseIds } from './case-shares.ts';
 import { failureHint } from '../common/project/plausibility/failure-hint.ts';
 import { runSiteRequest } from '../common/site/site-run.ts';
+import { serveTuneHelper } from './tune-helper.ts';
 import { CANCEL_REQUESTED, transferablesOf, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
 
 function post(message: WorkerMessage, transfer: ArrayBuffer[] = []): void {
@@ -25,6 +27,10 @@ async function run(): Promise<void> {
   const flag = new Int32Array(data.cancelFlag);
   const pass = createProgressThrottle(data.progressIntervalMs);
   const onProgress = (progress: SolveProgress): void => { if (pass(progress)) post({ type: 'progress', progress }); };
+  if (data.tune) {
+    serveTuneHelper(data.project, data.tune);
+    return;
+  }
   if (data.site) {
     try {
       post({ type: 'site-done', outcome: runSiteRequest(data.project, data.site) });

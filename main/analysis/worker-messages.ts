@@ -10,6 +10,7 @@
  */
 import type { CaseFields, ProjectFile, SolveProgress, SolveReport } from '../../solver/index.ts';
 import type { SiteOutcome, SiteRequest } from '../common/site/site-run.ts';
+import type { TuneHelperSetup } from './tune-messages.ts';
 
 export interface AnalysisWorkerData {
   project: ProjectFile;
@@ -28,6 +29,8 @@ export interface AnalysisWorkerData {
   workers?: number;
   /** Instead of solving every case: this site request (site-runner.ts), answered with 'site-done'. */
   site?: SiteRequest;
+  /** A helper of a tuning run (tune-on-workers.ts): solves the batch tasks it claims until terminated. */
+  tune?: TuneHelperSetup;
 }
 
 export type WorkerMessage =

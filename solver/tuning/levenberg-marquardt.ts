@@ -14,19 +14,34 @@
  *   scaled variables (not Marquardt's diag JᵀJ) keeps the change of the scaled variables least:
  *   a group that no unmet target needs is not moved just because it couples weakly.
  * Stops when every target is met, the cost stalls, or after maxIterations.
+ * The method is written as a generator of evaluation requests (leastSquaresSteps: one point, or
+ * the Jacobian's points together), so the caller decides how and where the points are evaluated;
+ * solveBoundedLeastSquares evaluates them in turn with GapProblem.evaluate.
  */
 import { solveDense } from './dense-solve.ts';
 import type { TargetSense } from './tuning-types.ts';
 
-export interface GapProblem {
+/** The problem without its evaluation: what the step generator (leastSquaresSteps) needs. */
+export interface GapProblemShape {
   x0: number[];
   lower: number[];
   upper: number[];
   scale: number[];
   senses: TargetSense[];
+  /** Told each time x becomes the current point (the start, then every accepted step). */
+  accept?(x: number[]): void;
+}
+
+export interface GapProblem extends GapProblemShape {
   /** Gaps g (see target-evaluation.ts) at x, or null when a case did not converge. */
   evaluate(x: number[]): number[] | null;
 }
+
+/**
+ * Gaps at each point of a request: null where a case did not converge, undefined where the
+ * evaluator stopped after a failure in the same request (not evaluated, not counted).
+ */
+export type GapReply = (number[] | null | undefined)[];
 
 export interface LmOptions {
   maxIterations?: number;
@@ -60,54 +75,87 @@ export function isMet(g: number, sense: TargetSense, equalityTolerance: number):
 }
 
 /**
+ * Points of the forward-difference Jacobian at x: x + h·scale_k·e_k (backward where the forward
+ * step would cross the upper bound), one per variable, with the signed steps.
+ */
+export function differencePoints(p: GapProblemShape, x: number[], h: number): { points: number[][]; steps: number[] } {
+  const points: number[][] = [];
+  const steps: number[] = [];
+  for (let k = 0; k < x.length; k++) {
+    let step = h * p.scale[k];
+    if (x[k] + step > p.upper[k]) step = -step;
+    const xs = [...x];
+    xs[k] += step;
+    points.push(xs);
+    steps.push(step);
+  }
+  return { points, steps };
+}
+
+/** ∂g/∂u from the gaps at the difference points (rows = targets); null if one is missing. */
+export function jacobianFromDifferences(p: GapProblemShape, g: number[], gs: GapReply, steps: number[]): number[][] | null {
+  if (gs.some((r) => !r)) return null;
+  return g.map((gi, i) => steps.map((step, k) => ((gs[k]![i] - gi) / step) * p.scale[k]));
+}
+
+/**
  * ∂g/∂u (rows = targets, columns = variables, u = x / scale) by forward differences of size
  * h·scale (backward where the forward step would cross the upper bound); null if a solve failed.
  */
 export function finiteDifferenceJacobian(
   p: GapProblem, x: number[], g: number[], h = 1e-3, evaluate: (x: number[]) => number[] | null = p.evaluate,
 ): number[][] | null {
-  const n = x.length;
-  const J = g.map(() => new Array<number>(n).fill(0));
-  for (let k = 0; k < n; k++) {
-    let step = h * p.scale[k];
-    if (x[k] + step > p.upper[k]) step = -step;
-    const xs = [...x];
-    xs[k] += step;
-    const gs = evaluate(xs);
-    if (!gs) return null;
-    for (let i = 0; i < g.length; i++) J[i][k] = ((gs[i] - g[i]) / step) * p.scale[k];
-  }
-  return J;
+  const { points, steps } = differencePoints(p, x, h);
+  return jacobianFromDifferences(p, g, evaluateInTurn(points, evaluate), steps);
 }
 
-export function solveBoundedLeastSquares(p: GapProblem, options: LmOptions = {}): LmOutcome {
+/** Evaluates the points one after another, stopping at the first failure (the rest undefined). */
+export function evaluateInTurn(points: number[][], evaluate: (x: number[]) => number[] | null): GapReply {
+  const out: GapReply = new Array(points.length).fill(undefined);
+  for (let k = 0; k < points.length; k++) {
+    out[k] = evaluate(points[k]);
+    if (!out[k]) break;
+  }
+  return out;
+}
+
+/**
+ * The method as a generator: it yields the points whose gaps it needs (one point, or one per
+ * variable for the Jacobian, which may be evaluated together in any order) and takes their gaps
+ * back, so a caller may evaluate them synchronously, asynchronously or on several threads.
+ */
+export function* leastSquaresSteps(p: GapProblemShape, options: LmOptions = {}): Generator<number[][], LmOutcome, GapReply> {
   const maxIt = options.maxIterations ?? 30;
   const margin = options.margin ?? 0.01;
   const eqTol = options.equalityTolerance ?? 1e-3;
   const h = options.fdStep ?? 1e-3;
   const n = p.x0.length;
   let evaluations = 0;
-  const evaluate = (x: number[]) => { evaluations++; return p.evaluate(x); };
+  const ask = function* (points: number[][]): Generator<number[][], GapReply, GapReply> {
+    const reply = yield points;
+    evaluations += reply.filter((r) => r !== undefined).length;
+    return reply;
+  };
   const residuals = (g: number[]) => g.map((gi, i) => (p.senses[i] === 'equal' ? gi : Math.max(0, gi + margin)));
   const cost = (g: number[]) => 0.5 * residuals(g).reduce((s, r) => s + r * r, 0);
   const allMet = (g: number[]) => g.every((gi, i) => isMet(gi, p.senses[i], eqTol));
   const clamp = (x: number[]) => x.map((v, k) => Math.min(p.upper[k], Math.max(p.lower[k], v)));
 
   let x = clamp(p.x0);
-  let g = evaluate(x);
+  let g = (yield* ask([x]))[0] ?? null;
   if (!g) return { x, gaps: null, jacobian: null, iterations: 0, evaluations, failedEvaluation: true, cancelled: false };
+  p.accept?.(x);
   let cancelled = false;
   let jacobian: number[][] | null = null;
   let mu = 1e-3;
   let iterations = 0;
   let failedEvaluation = false;
 
-  const sensitivities = (xc: number[], gc: number[]) => finiteDifferenceJacobian(p, xc, gc, h, evaluate);
-
   while (iterations < maxIt && !allMet(g)) {
     if (options.isCancelled?.()) { cancelled = true; break; }
     iterations++;
-    const J = sensitivities(x, g);
+    const { points, steps } = differencePoints(p, x, h);
+    const J = jacobianFromDifferences(p, g, yield* ask(points), steps);
     if (!J) { failedEvaluation = true; break; }
     jacobian = J;
     const r = residuals(g);
@@ -135,10 +183,11 @@ export function solveBoundedLeastSquares(p: GapProblem, options: LmOptions = {})
       free.forEach((k, j) => { xt[k] += du[j] * p.scale[k]; });
       const xc = clamp(xt);
       if (xc.every((v, k) => v === x[k])) break;
-      const gt = evaluate(xc);
+      const gt = (yield* ask([xc]))[0] ?? null;
       if (gt && cost(gt) < c0) {
         x = xc; g = gt; accepted = true;
         mu = Math.max(mu / 3, 1e-9);
+        p.accept?.(x);
       } else {
         if (!gt) failedEvaluation = true;
         mu *= 4;
@@ -149,4 +198,16 @@ export function solveBoundedLeastSquares(p: GapProblem, options: LmOptions = {})
     failedEvaluation = false;
   }
   return { x, gaps: g, jacobian, iterations, evaluations, failedEvaluation, cancelled };
+}
+
+/** Runs a generator of evaluation requests to its end, answering each request with `answer`. */
+export function runSteps<Req, Out, Rep>(steps: Generator<Req, Out, Rep>, answer: (request: Req) => Rep): Out {
+  let next = steps.next();
+  while (!next.done) next = steps.next(answer(next.value));
+  return next.value;
+}
+
+/** The method with a synchronous evaluation (points evaluated one after another). */
+export function solveBoundedLeastSquares(p: GapProblem, options: LmOptions = {}): LmOutcome {
+  return runSteps(leastSquaresSteps(p, options), (points) => evaluateInTurn(points, p.evaluate));
 }

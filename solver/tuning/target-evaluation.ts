@@ -19,6 +19,7 @@ import type { CaseResult } from '../results/types.ts';
 import { membersOfGroup, groupExists } from '../checks/groups.ts';
 import { referenceCaseId } from './reference-case.ts';
 import type { TargetValue } from './tuning-types.ts';
+import { memberPretension } from './tuning-variables.ts';
 
 /** Case ids a target needs solved. */
 export function targetCases(project: ProjectFile, t: TuningTarget): string[] {
@@ -143,4 +144,39 @@ export function evaluateTarget(
       return { value: f, limit: t.limit, sense: 'atMost', gap: f / t.limit - 1, governing: t.node, unit: 'N' };
     }
   }
+}
+
+/**
+ * The group's mean starting pretension |P|, N (the noSlack scale; 1000 N when the group has
+ * none), from the project as given; cached per group.
+ */
+export function createTensionScale(project: ProjectFile): (group: string) => number {
+  const scales = new Map<string, number>();
+  return (group) => {
+    let s = scales.get(group);
+    if (s === undefined) {
+      const ms = [...membersOfGroup(project, group)].map((id) => project.members.find((m) => m.id === id)!);
+      s = ms.reduce((acc, m) => acc + Math.abs(memberPretension(project, m)), 0) / Math.max(1, ms.length);
+      if (!(s > 0)) s = 1000;
+      scales.set(group, s);
+    }
+    return s;
+  };
+}
+
+/**
+ * The targets that one solved case decides (each target reads one case: targetCases), evaluated
+ * on it: [target index, value] in target order. `project` is the project as given (targets,
+ * groups and breaking loads do not change with the variables).
+ */
+export function createCaseTargetEvaluator(project: ProjectFile): (result: CaseResult) => [number, TargetValue][] {
+  const targets = project.tuning?.targets ?? [];
+  const tensionScale = createTensionScale(project);
+  const onCase = targets.map((t) => targetCases(project, t)[0]);
+  return (result) => {
+    const results = new Map([[result.id, result]]);
+    const out: [number, TargetValue][] = [];
+    targets.forEach((t, i) => { if (onCase[i] === result.id) out.push([i, evaluateTarget(project, t, results, tensionScale)]); });
+    return out;
+  };
 }

@@ -1,83 +1,116 @@
 /**
  * Pretension tuning of a project: resolves TuningSpec variables and targets, runs the bounded
  * Levenberg–Marquardt (levenberg-marquardt.ts) with every evaluation a nonlinear re-solve of the
- * cases the targets name (warm session by default, or the injected CaseSolveFn), and explains unmet targets
- * (conflict-diagnosis.ts). The input project is not modified.
+ * cases the targets name, and explains unmet targets (conflict-diagnosis.ts). The input project is
+ * not modified.
+ *
+ * The cases are solved by a strategy (tuning-case-solver.ts): by default one case session in this
+ * thread (model and workspace kept), or one injected through TuneOptions.caseSolver (e.g. worker
+ * threads). Every solve of an evaluation starts from the solutions at the current point (the start,
+ * then each accepted step; the start itself from the pretensioned start shape), so the solves of
+ * an evaluation — the cases, and the finite-difference columns of the Jacobian — depend on nothing
+ * but their own input, and every strategy that solves the same tasks gives the same run.
+ * `tuneProject` runs synchronously; `tuneProjectAsync` awaits a strategy that answers with promises.
  * Results are for review by a qualified engineer; local codes and licensed practice govern.
  */
-import type { ProjectFile } from '../project/types.ts';
-import type { CaseResult } from '../results/types.ts';
-import { membersOfGroup } from '../checks/groups.ts';
-import { applyVariables, memberPretension, resolveVariables } from './tuning-variables.ts';
-import { evaluateTarget, targetCases, validateTarget } from './target-evaluation.ts';
-import { finiteDifferenceJacobian, isMet, solveBoundedLeastSquares, type GapProblem, type LmOptions } from './levenberg-marquardt.ts';
+import type { ProjectFile, TuningSpec } from '../project/types.ts';
+import { applyVariables, resolveVariables } from './tuning-variables.ts';
+import { targetCases, validateTarget } from './target-evaluation.ts';
+import {
+  differencePoints, isMet, jacobianFromDifferences, leastSquaresSteps, runSteps, type GapProblemShape, type GapReply, type LmOptions,
+} from './levenberg-marquardt.ts';
 import { diagnoseTargets } from './conflict-diagnosis.ts';
-import { createWarmSession } from './warm-session.ts';
+import {
+  createSerialCaseSolver, rebuildCaseSolver, type TuningBatch, type TuningBatchResult, type TuningCaseSolver,
+  type TuningCaseSolverFactory, type TuningSolveSetup,
+} from './tuning-case-solver.ts';
 import type { CaseSolveFn, TargetValue, TuningNote, TuningResult, VariableOutcome } from './tuning-types.ts';
 
 export interface TuneOptions extends LmOptions {
   /**
-   * How to solve the cases of an edited project. Default: a warm session (warm-session.ts) that
-   * keeps one model and warm-starts every case; pass solveNamedCases to rebuild and solve the
-   * edited project from scratch each time (slower, the reference path).
+   * How to solve the cases of an edited project from scratch each time (the reference path,
+   * slower: applyVariables + e.g. solveNamedCases). Used when `caseSolver` is not given.
    */
   solveCases?: CaseSolveFn;
+  /** The strategy that solves the cases (tuning-case-solver.ts). Default createSerialCaseSolver. */
+  caseSolver?: TuningCaseSolverFactory;
 }
 
-export function tuneProject(project: ProjectFile, options: TuneOptions = {}): TuningResult {
+interface Prepared { setup: TuningSolveSetup; spec: TuningSpec }
+
+/** Validates the tuning section and resolves variables and cases; throws naming the entry. */
+function prepareTuning(project: ProjectFile): Prepared {
   const spec = project.tuning;
   if (!spec) throw new Error('project has no "tuning" section: add tuning.variables and tuning.targets');
   if (spec.targets.length === 0) throw new Error('tuning: no targets (tuning.targets is empty)');
   spec.targets.forEach((t, i) => validateTarget(project, t, i));
-  const vars = resolveVariables(project);
+  const variables = resolveVariables(project);
   const caseIds = [...new Set(spec.targets.flatMap((t) => targetCases(project, t)))];
+  return { setup: { project, variables, caseIds }, spec };
+}
+
+function strategyOf(options: TuneOptions): TuningCaseSolverFactory {
+  return options.caseSolver ?? (options.solveCases ? rebuildCaseSolver(options.solveCases) : createSerialCaseSolver);
+}
+
+type Evaluation = { values: TargetValue[] } | { failure: { case: string; status: string } };
+
+/** The whole run as a generator of solve batches (see the file comment). */
+function* tuningSteps({ setup, spec }: Prepared, options: TuneOptions): Generator<TuningBatch, TuningResult, TuningBatchResult> {
+  const { project, variables: vars, caseIds } = setup;
   const margin = options.margin ?? 0.01;
   const eqTol = options.equalityTolerance ?? 1e-3;
 
-  const scales = new Map<string, number>();
-  const tensionScale = (group: string): number => {
-    let s = scales.get(group);
-    if (s === undefined) {
-      const ids = [...membersOfGroup(project, group)];
-      const ms = ids.map((id) => project.members.find((m) => m.id === id)!);
-      s = ms.reduce((acc, m) => acc + Math.abs(memberPretension(project, m)), 0) / Math.max(1, ms.length);
-      if (!(s > 0)) s = 1000;
-      scales.set(group, s);
-    }
-    return s;
-  };
+  const keyOf = (x: readonly number[]): string => x.map((v) => v.toPrecision(15)).join(',');
+  const cache = new Map<string, Evaluation>();
+  /** Warm starts of every solve: the solutions at the current point (replaced, never edited). */
+  let starts = new Map<string, Float64Array>();
+  /** Solutions of the last batch's points whose cases all converged, by point key. */
+  let lastPositions = new Map<string, Map<string, Float64Array>>();
 
-  const session = options.solveCases ? null : createWarmSession(project, vars, caseIds);
-  const solveAt = (x: number[]): Map<string, CaseResult> =>
-    session ? session(x) : options.solveCases!(applyVariables(project, vars, x), caseIds);
-  const cache = new Map<string, { values: TargetValue[] } | { failure: { case: string; status: string } }>();
-  const evaluateAt = (x: number[]) => {
-    const key = x.map((v) => v.toPrecision(15)).join(',');
-    let hit = cache.get(key);
-    if (!hit) {
-      const results = solveAt(x);
-      const bad = [...results.values()].find((r) => !r.converged);
-      hit = bad
-        ? { failure: { case: bad.id, status: bad.status } }
-        : { values: spec.targets.map((t) => evaluateTarget(project, t, results, tensionScale)) };
-      cache.set(key, hit);
+  /** Target values at each point; the points not evaluated before are solved in one batch. */
+  function* evaluatePoints(points: readonly number[][]): Generator<TuningBatch, Evaluation[], TuningBatchResult> {
+    const keys = points.map(keyOf);
+    const fresh: number[] = [];
+    keys.forEach((k, i) => { if (!cache.has(k) && !fresh.some((j) => keys[j] === k)) fresh.push(i); });
+    if (fresh.length > 0) {
+      const solved = yield { points: fresh.map((i) => points[i]), starts };
+      lastPositions = new Map();
+      fresh.forEach((i, j) => {
+        const tasks = solved.slice(j * caseIds.length, (j + 1) * caseIds.length);
+        const bad = tasks.find((s) => !s.converged);
+        if (bad) {
+          cache.set(keys[i], { failure: { case: bad.caseId, status: bad.status } });
+          return;
+        }
+        const values = new Array<TargetValue>(spec.targets.length);
+        for (const task of tasks) for (const [k, v] of task.targets) values[k] = v;
+        cache.set(keys[i], { values });
+        lastPositions.set(keys[i], new Map(caseIds.map((id, c) => [id, tasks[c].positions!])));
+      });
     }
-    return hit;
-  };
+    return keys.map((k) => cache.get(k)!);
+  }
+
   let lastFailure = { case: '', status: '' };
-  const problem: GapProblem = {
+  const gapsOf = (evaluations: Evaluation[]): GapReply => {
+    const failed = evaluations.find((e) => 'failure' in e);
+    if (failed && 'failure' in failed) lastFailure = failed.failure;
+    return evaluations.map((e) => ('failure' in e ? null : e.values.map((v) => v.gap)));
+  };
+  const problem: GapProblemShape = {
     x0: vars.map((v) => v.initial),
     lower: vars.map((v) => v.lower),
     upper: vars.map((v) => v.upper),
     scale: vars.map((v) => v.scale),
     senses: spec.targets.map((t) => (t.kind === 'tensionShare' ? 'equal' : 'atMost')),
-    evaluate: (x) => {
-      const e = evaluateAt(x);
-      if ('failure' in e) { lastFailure = e.failure; return null; }
-      return e.values.map((v) => v.gap);
-    },
+    accept: (x) => { starts = lastPositions.get(keyOf(x)) ?? starts; },
   };
-  const lm = solveBoundedLeastSquares(problem, options);
+  const steps = leastSquaresSteps(problem, options);
+  let step = steps.next();
+  while (!step.done) step = steps.next(gapsOf(yield* evaluatePoints(step.value)));
+  const lm = step.value;
+
   const variables: VariableOutcome[] = vars.map((v, k) => ({
     group: v.group, by: v.by, initial: v.initial, final: lm.x[k], lower: v.lower, upper: v.upper,
     atBound: lm.x[k] <= v.lower ? 'lower' : lm.x[k] >= v.upper ? 'upper' : null,
@@ -90,7 +123,7 @@ export function tuneProject(project: ProjectFile, options: TuneOptions = {}): Tu
       diagnosis, project: tuned, summary: `tuning stopped: case '${lastFailure.case}' did not converge (${lastFailure.status})`, cancelled: false,
     };
   }
-  const final = evaluateAt(lm.x) as { values: TargetValue[] };
+  const final = (yield* evaluatePoints([lm.x]))[0] as { values: TargetValue[] };
   const met = final.values.map((v, i) => isMet(v.gap, problem.senses[i], eqTol));
   const targets = final.values.map((v, i) => ({
     index: i, target: spec.targets[i], value: v.value, limit: v.limit, unit: v.unit,
@@ -98,7 +131,8 @@ export function tuneProject(project: ProjectFile, options: TuneOptions = {}): Tu
   }));
   const diagnosis: TuningNote[] = [];
   if (met.some((m) => !m)) {
-    const J = finiteDifferenceJacobian(problem, lm.x, lm.gaps, options.fdStep ?? 1e-3) ?? lm.jacobian;
+    const { points, steps: fd } = differencePoints(problem, lm.x, options.fdStep ?? 1e-3);
+    const J = jacobianFromDifferences(problem, lm.gaps, gapsOf(yield* evaluatePoints(points)), fd) ?? lm.jacobian;
     if (J) {
       diagnosis.push(...diagnoseTargets({
         senses: problem.senses, gaps: lm.gaps, met, jacobian: J, margin,
@@ -115,4 +149,27 @@ export function tuneProject(project: ProjectFile, options: TuneOptions = {}): Tu
     status: metCount === met.length ? 'met' : 'unmet', targets, variables, iterations: lm.iterations,
     evaluations: lm.evaluations, diagnosis, project: tuned, summary, cancelled: lm.cancelled,
   };
+}
+
+const isPromise = <T>(v: T | Promise<T>): v is Promise<T> => typeof (v as { then?: unknown }).then === 'function';
+
+/** Tunes in this thread; the strategy (TuneOptions.caseSolver) must answer synchronously. */
+export function tuneProject(project: ProjectFile, options: TuneOptions = {}): TuningResult {
+  const prepared = prepareTuning(project);
+  const solver: TuningCaseSolver = strategyOf(options)(prepared.setup);
+  return runSteps(tuningSteps(prepared, options), (batch) => {
+    const out = solver.solveBatch(batch);
+    if (isPromise(out)) throw new Error('tuneProject: the case solver answers asynchronously; use tuneProjectAsync');
+    return out;
+  });
+}
+
+/** Tunes with a strategy that may answer asynchronously (worker threads); same numbers as tuneProject. */
+export async function tuneProjectAsync(project: ProjectFile, options: TuneOptions = {}): Promise<TuningResult> {
+  const prepared = prepareTuning(project);
+  const solver: TuningCaseSolver = strategyOf(options)(prepared.setup);
+  const steps = tuningSteps(prepared, options);
+  let step = steps.next();
+  while (!step.done) step = steps.next(await solver.solveBatch(step.value));
+  return step.value;
 }

@@ -4,8 +4,8 @@
  *     time, total time, peak memory (each size in its own process).
  *  2. One numeric factorisation of the 100×100 net's tangent against CHOLMOD on the same matrix.
  *  0. Start-up of the `stayset` bin (bundle and sources) against `node -e 0`.
- *  3. Further suites registered below (design cases, live re-solve, modes, responsiveness of the
- *     browser edition in Chromium) when present.
+ *  3. Further suites registered below (design cases, live re-solve, tuning serial against two
+ *     threads, modes, responsiveness of the browser edition in Chromium) when present.
  */
 import { execFileSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
@@ -56,6 +56,7 @@ async function main(): Promise<void> {
   cholmod.printCholmodComparison(cholmod.runCholmodComparison(200, 3, 1));
   await optionalSuite('design/design-bench.ts', 'runDesignBenchmark');
   await optionalSuite('tuning/live-resolve-bench.ts', 'runLiveResolveBenchmark');
+  await optionalSuite('tuning/tune-threads-bench.ts', 'runTuneThreadsBenchmark');
   await optionalSuite('modes/modes-bench.ts', 'runModesBenchmark');
   await optionalSuite('view/responsiveness-bench.ts', 'runResponsivenessBenchmark');
 }

@@ -2,10 +2,12 @@
  * `stayset tune FILE [--write] [--json]`: adjust group pretensions (tuning.variables) so the
  * tuning targets are met, print per target the value reached and per variable its final value,
  * and with --write save the tuned pretensions into FILE (atomic replace, previous file kept as
- * FILE.bak).
+ * FILE.bak). The case solves of each step are shared out to one thread per core
+ * (main/analysis/tune-on-workers.ts; STAYSET_WORKERS=1 solves in this thread); the result is the
+ * serial run's.
  */
 import { serializeProject } from '../../common/project/index.ts';
-import { tuneProject } from '../../../solver/index.ts';
+import { tuneOnWorkers } from '../../analysis/tune-on-workers.ts';
 import { tuningRunRecord } from '../../common/tuning/tuning-record.ts';
 import type { ProjectFile, TuningResult } from '../../../solver/index.ts';
 import type { CliCommand } from '../command.ts';
@@ -27,8 +29,8 @@ const HELP = `Tunes the pretension of the groups listed in the project's tuning.
 per group: a force in N, or a factor on the unstressed length) so that tuning.targets are met:
 sag limits, tension share of the breaking load at installation (reference case, normally dead
 load), no slack, mast plumb, reaction limits. Each step re-solves the cases the targets name
-(Levenberg–Marquardt with finite-difference sensitivities, bounds by projection). Targets that
-conflict or cannot be met are explained.
+(Levenberg–Marquardt with finite-difference sensitivities, bounds by projection), sharing the
+solves out to one thread per core. Targets that conflict or cannot be met are explained.
 
 Options:
   --write       Save the tuned pretensions and the run (tuning.lastRun: targets,
@@ -77,7 +79,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   const units: UnitSystem = project.display?.units === 'US' ? 'US' : 'SI';
   let result: TuningResult;
   try {
-    result = tuneProject(project);
+    result = await tuneOnWorkers(project);
   } catch (e) {
     io.err(`${file}: ${(e as Error).message}\n`);
     return EXIT.badInput;

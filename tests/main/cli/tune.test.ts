@@ -87,4 +87,21 @@ describe('stayset tune', () => {
     // 15 kN pretension = 15000 / 4448.2216152605 = 3.372 kip (0.001 kip: the force precision in kip).
     expect(r.stdout).toMatch(/3\.372 kip/);
   });
+
+  it('tunes the demo mast on two threads to the serial run\'s output, bit for bit (STAYSET_WORKERS=1 is the serial run)', () => {
+    const demo = join(REPO_ROOT, 'assets', 'demo-mast.stayset');
+    const saved = process.env.STAYSET_WORKERS;
+    const run = (workers: string) => { process.env.STAYSET_WORKERS = workers; return runStayset(['tune', demo, '--json']); };
+    try {
+      const serial = run('1');
+      const two = run('2');
+      expect(serial.code).toBe(0);
+      expect(two.code).toBe(0);
+      expect(two.stdout).toBe(serial.stdout);
+      expect(JSON.parse(two.stdout).status).toBe('met');
+    } finally {
+      if (saved === undefined) delete process.env.STAYSET_WORKERS;
+      else process.env.STAYSET_WORKERS = saved;
+    }
+  });
 });
