@@ -52,9 +52,9 @@ function envelopeHtml(d: ReportDocument): string {
   const u = d.units, l = unitLabels(u);
   const util = new Map(d.checks.members.map((m) => [m.id, m]));
   const rows = d.envelope.members.map((m) => [`<b>${e(m.id)}</b>`, num(`env-max|${m.id}`, formatValue(m.tensionMax, 'force', u)), e(m.tensionMaxCase), num(`env-min|${m.id}`, formatValue(m.tensionMin, 'force', u)), e(m.tensionMinCase),
-    formatValue(m.sagMax, 'length', u), util.get(m.id)?.utilisation == null ? '—' : num(`util|${m.id}`, formatValue(util.get(m.id)!.utilisation, 'ratio', u)), m.slackCases.length ? `<b>slack</b> ${e(m.slackCases.join(', '))}` : '']);
+    formatValue(m.sagMax, 'sag', u), util.get(m.id)?.utilisation == null ? '—' : num(`util|${m.id}`, formatValue(util.get(m.id)!.utilisation, 'ratio', u)), m.slackCases.length ? `<b>slack</b> ${e(m.slackCases.join(', '))}` : '']);
   const reactions = d.envelope.reactions.map((r) => [`<b>${e(r.node)}</b>`, num(`react|${r.node}`, formatValue(r.magnitudeMax, 'force', u)), e(r.magnitudeMaxCase), formatValue(r.min[2], 'force', u), e(r.minCase[2]), formatValue(r.max[2], 'force', u), e(r.maxCase[2])]);
-  return table(`Member envelope over ${d.envelope.cases.length} converged case(s) (${l.force}, ${l.length})`, ['Member', 'T max', 'case', 'T min', 'case', 'Sag max', 'Utilisation', 'Slack'], rows)
+  return table(`Member envelope over ${d.envelope.cases.length} converged case(s) (${l.force}; sag ${l.sag})`, ['Member', 'T max', 'case', 'T min', 'case', 'Sag max', 'Utilisation', 'Slack'], rows)
     + table(`Support reactions envelope (${l.force}; force of the support on the structure)`, ['Support', '|R| max', 'case', 'Fz min', 'case', 'Fz max', 'case'], reactions);
 }
 
