@@ -94,7 +94,7 @@ describe('generator re-runs in the app', () => {
     const notes = (await page.getByTestId('generate-notes').textContent()) ?? '';
     expect(notes).toContain('member "bracket": dropped');
     expect(notes).toContain('node "aerial": no member is left on it: removed');
-    expect(notes).toMatch(/checks\.tiltLimits\[0\] top: node "mast\/P49a" → "mast\/P25a" \(mast top, moved 30 m\)/);
+    expect(notes).toMatch(/checks\.tiltLimits\[0\] top: node "mast\/P49a" → "mast\/P25a" \(mast top, moved 30\.000 m\)/);
     await shot('32-generate-notes.png');
     await page.getByTestId('generate-close').click();
     expect(await memberCount()).toBe(dropped.project.members.length);
