@@ -100,7 +100,7 @@ export function reportHtml(d: ReportDocument): string {
   const rev = d.revisions.at(-1)?.revision ?? '—';
   const sections: [string, string][] = [
     ['Design basis', designBasisHtml(d)],
-    ['Model', `<p>${d.model.nodes} nodes (${d.model.supports} with supports), ${d.model.members} members (${d.model.cables} cables, ${d.model.bars} bars) in ${d.model.elements} elements, ${d.model.dofs} free degrees of freedom, ${d.model.sections} sections, ${d.model.groups} groups.</p>${modelSvg(p, 300, governingShape(d))}`],
+    ['Model', `<p>${d.model.nodes} nodes (${d.model.supports} with supports), ${d.model.members} members (${d.model.cables} cables, ${d.model.bars} bars) in ${d.model.elements} elements, ${d.model.dofs} free degrees of freedom, ${d.model.sections} sections, ${d.model.groups} groups.</p>${modelSvg(p, 300, governingShape(d), d.units)}`],
     ['Materials and sections', sectionsHtml(d)],
     ['Actions and combinations', actionsHtml(d)],
     ['Analysis', analysisHtml(d)],
