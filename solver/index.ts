@@ -6,6 +6,7 @@ export type * from './project/types.ts';
 export type * from './project/site-types.ts';
 export type * from './results/types.ts';
 export type * from './results/message-types.ts';
+export { OutcomeError, withRefs } from './results/outcome-error.ts';
 export type { AnalysisModel, MemberTopology } from './model/analysis-model.ts';
 export type { DofMap } from './model/dof-map.ts';
 export type { ElementFamily, FamilyBlock } from './elements/family.ts';

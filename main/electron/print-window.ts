@@ -1,7 +1,7 @@
 /**
  * Prints the tension schedule to PDF: a hidden window loads the app at `#/schedule?print=1`,
- * gets the project from openInitial(), calls printReady() once laid out; then printToPDF (A4,
- * backgrounds) and an atomic write of the PDF.
+ * gets the project from openInitial(), calls printReady() once laid out; then printToPDF on the
+ * paper of the project's display units (print-options.ts) and an atomic write of the PDF.
  */
 import { BrowserWindow } from 'electron';
 import type { ProjectFile } from '../../solver/index.ts';
@@ -11,6 +11,7 @@ import { appPageUrl } from './app-url.ts';
 import { hardenWebContents } from './harden.ts';
 import type { PrintJobs } from './print-jobs.ts';
 import { printWindowOptions } from './window-options.ts';
+import { schedulePdfOptions } from './print-options.ts';
 
 export const PRINT_ROUTE = '/schedule?print=1';
 // The print page solves the project itself before it reports ready; large models take a while.
@@ -30,7 +31,7 @@ export async function printScheduleToPdf(
   try {
     await win.loadURL(appPageUrl(PRINT_ROUTE));
     await ready;
-    const pdf = await win.webContents.printToPDF({ pageSize: 'A4', printBackground: true, landscape: false });
+    const pdf = await win.webContents.printToPDF(schedulePdfOptions(project));
     await writeFileAtomic(pdfPath, pdf);
     return { ok: true, value: { path: pdfPath } };
   } catch (e) {

@@ -12,6 +12,7 @@ import { useResultsStore } from '../stores/results.ts';
 import { useSelectionStore } from '../stores/selection.ts';
 import { useSettingsStore } from '../stores/settings.ts';
 import { isoDate, scheduleParts, schedulePageFrom, type ScheduleParts, type SchedulePage } from '../schedule/schedule-document.ts';
+import { paperForUnits } from '../../main/common/schedule/paper.ts';
 import { blankProject } from '../model/new-project.ts';
 import type { GeneratorKind } from '../generators/generator-defaults.ts';
 
@@ -333,7 +334,7 @@ export function createAppActions(hostOverride?: StaysetHost) {
   let scheduleFrom: { report: SolveReport; parts: ScheduleParts } | null = null;
   function layOutSchedule(p: ProjectFile): void {
     if (!scheduleFrom) return;
-    schedule.value = schedulePageFrom(p, scheduleFrom.parts, { units: settings.units, paper: settings.units === 'US' ? 'letter' : 'a4', issueDate: isoDate(new Date()) });
+    schedule.value = schedulePageFrom(p, scheduleFrom.parts, { units: settings.units, paper: paperForUnits(settings.units), issueDate: isoDate(new Date()) });
   }
   // Print settings edited while the schedule is shown (listing, revisions): lay it out again from
   // the same results; an edit that changes the analysis closes it (the results no longer apply).
@@ -359,7 +360,10 @@ export function createAppActions(hostOverride?: StaysetHost) {
       showSchedule();
       return;
     }
-    const r = await h().printSchedule(p).catch((e: Error) => ({ ok: false as const, error: e.message }));
+    // The print window lays the schedule out in the project's display units and on their paper:
+    // give it the units shown here, so the PDF reads as the screen does.
+    const shown: ProjectFile = { ...p, display: { ...p.display, units: settings.units } };
+    const r = await h().printSchedule(shown).catch((e: Error) => ({ ok: false as const, error: e.message }));
     if (r && !r.ok) say('error', r.error);
     else if (r) say('info', `Schedule written to ${r.value.path}`);
   }

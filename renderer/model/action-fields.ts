@@ -80,7 +80,7 @@ export const ANCILLARY_FIELDS: FieldSpec[] = [
     get: (e) => (typeof e.iceBehaviour === 'string' ? e.iceBehaviour : ''),
     set: (e, v) => setIceBehaviour(e, v),
   },
-  { path: 'coatWidth', label: 'coat width', type: 'number', kind: 'length', required: true, rule: { test: (v) => v > 0, words: 'must be > 0' }, show: isCoat, title: 'Outer width of the iced round body: the drag area grows by (w + 2t)/w' },
+  { path: 'coatWidth', label: 'coat width', type: 'number', kind: 'smallLength', required: true, rule: { test: (v) => v > 0, words: 'must be > 0' }, show: isCoat, title: 'Outer width of the iced round body: the drag area grows by (w + 2t)/w' },
   { path: 'coatLength', label: 'coat length', type: 'number', kind: 'length', required: true, rule: { test: (v) => v > 0, words: 'must be > 0' }, show: (e) => isCoat(e) && !isLine(e), title: 'Length of the iced body (a line item is iced per metre of height)' },
 ];
 

@@ -10,6 +10,7 @@ import { computed, ref, shallowRef, toRaw } from 'vue';
 import type { AsBuiltResult, ProjectFile, SequenceResult } from '../../solver/index.ts';
 import type { StaysetHost } from '../../main/common/host-contract.ts';
 import type { SiteOutcome, SiteRequest } from '../../main/common/site/site-run.ts';
+import { paperForUnits } from '../../main/common/schedule/paper.ts';
 import { getHost } from '../host/client.ts';
 import { useProjectStore } from './project.ts';
 import { useSettingsStore } from './settings.ts';
@@ -90,19 +91,19 @@ export const useSiteStore = defineStore('site', () => {
   async function runSequence(): Promise<void> {
     const s = currentSequence.value, p = project.value;
     if (!s || !p) return;
-    const out = await request({ kind: 'sequence', id: s.id });
+    const out = await request({ kind: 'sequence', id: s.id, units: settings.units });
     if (out?.kind === 'sequence') sequence.value = { result: out.result, project: p };
   }
 
   async function runAsBuilt(): Promise<void> {
     const s = currentSet.value, p = project.value;
     if (!s || !p) return;
-    const out = await request({ kind: 'asbuilt', id: s.id });
+    const out = await request({ kind: 'asbuilt', id: s.id, units: settings.units });
     if (out?.kind === 'asbuilt') asbuilt.value = { result: out.result, project: p };
   }
 
   function documentRequest(kind: 'crewSheet' | 'report'): SiteRequest | null {
-    const common = { units: settings.units, paper: settings.units === 'US' ? 'letter' as const : 'a4' as const, issueDate: isoToday() };
+    const common = { units: settings.units, paper: paperForUnits(settings.units), issueDate: isoToday() };
     if (kind === 'report') return { kind, ...common };
     const s = currentSequence.value;
     return s ? { kind, id: s.id, ...common } : null;

@@ -17,7 +17,7 @@ import { KINDS, displayUnit, fromDisplay, type QuantityKind, type UnitSystem } f
  * entered as plain numbers only (temperatures, counts) or by the delta rule (parseDelta).
  */
 const MATH_SI_UNIT: Record<QuantityKind, string> = {
-  force: 'N', moment: 'N m', length: 'm', displacement: 'm', smallLength: 'm', area: 'm^2',
+  force: 'N', moment: 'N m', length: 'm', displacement: 'm', smallLength: 'm', sag: 'm', area: 'm^2',
   stress: 'Pa', strength: 'Pa', modulus: 'Pa', shearModulus: 'Pa', secondMoment: 'm^4', dragArea: 'm^2', dragAreaPerLength: 'm',
   period: 's', pressure: 'Pa', massPerLength: 'kg/m', mass: 'kg', speed: 'm/s', frequency: 'Hz',
   temperature: '', temperatureChange: '', thermalExpansion: '', angle: '', ratio: '', share: '', slenderness: '', count: '',

@@ -14,6 +14,7 @@ import type { SiteMeasurementSetSpec } from '../project/site-types.ts';
 import type { MemberInstallation } from '../installation/installation-data.ts';
 import { tensionFromFrequency, tensionFromSag } from '../installation/site-check.ts';
 import { STANDARD_GRAVITY } from '../model/constants.ts';
+import { OutcomeError, withRefs } from '../results/outcome-error.ts';
 
 export interface ObservedTension {
   index: number;
@@ -23,6 +24,16 @@ export interface ObservedTension {
   temperature: number;
   tension: number;
   sigma: number;
+}
+
+/** Run an inversion for reading `at`; a problem it throws names the reading (refs entry, member). */
+function naming(at: string, member: string, invert: () => number): number {
+  try {
+    return invert();
+  } catch (e) {
+    if (e instanceof OutcomeError) throw withRefs(e, { entry: at, member }, `${at}: `);
+    throw new Error(`${at}: ${(e as Error).message}`, { cause: e });
+  }
 }
 
 export function observedTensions(
@@ -41,14 +52,14 @@ export function observedTensions(
     if (t.method === 'dynamometer') return { index: i, member: t.member, method: t.method, reading: t.value, temperature: t.temperature, tension: t.value, sigma: t.accuracy * t.value };
     if (t.method === 'frequency') {
       if (!(g.massPerLength > 0)) throw new Error(`${at}: member "${t.member}" has no mass per length, a frequency cannot give its tension`);
-      mid = tensionFromFrequency({
+      mid = naming(at, t.member, () => tensionFromFrequency({
         length: g.chordLength, inclination: g.inclination, massPerLength: g.massPerLength, axialStiffness: g.axialStiffness,
         measuredFrequency: t.value, mode: t.mode ?? 'tautString', targetTension: target,
-      }).tension;
+      }).tension);
       relative = 2 * t.accuracy;
     } else if (t.method === 'sag') {
       if (!(g.massPerLength > 0)) throw new Error(`${at}: member "${t.member}" has no mass per length, a sag cannot give its tension`);
-      mid = tensionFromSag({ horizontalSpan: g.horizontalSpan, heightDifference: g.heightDifference, massPerLength: g.massPerLength, measuredSag: t.value, targetTension: target }).tension;
+      mid = naming(at, t.member, () => tensionFromSag({ horizontalSpan: g.horizontalSpan, heightDifference: g.heightDifference, massPerLength: g.massPerLength, measuredSag: t.value, targetTension: target }).tension);
       relative = t.accuracy;
     } else {
       throw new Error(`${at}: method must be dynamometer, frequency or sag`);

@@ -21,16 +21,31 @@ export interface NodeEnvelope {
   displacementMaxCase: string;
 }
 
-/** Per-component extremes of one support reaction, N; the case ids are per component x, y, z. */
-export interface ReactionEnvelope {
-  node: string;
+/** Per-component extremes over the cases, with the case of each extreme (components x, y, z). */
+export interface ComponentExtremes {
   max: Vec3;
   maxCase: [string, string, string];
   min: Vec3;
   minCase: [string, string, string];
+}
+
+/** Per-component extremes of one support reaction, N; the case ids are per component x, y, z. */
+export interface ReactionEnvelope extends ComponentExtremes {
+  node: string;
   /** Largest reaction magnitude and its case. */
   magnitudeMax: number;
   magnitudeMaxCase: string;
+  /** Extremes of the support moment, N·m, where the support restrains a rotation in some enveloped case. */
+  moment?: ComponentExtremes;
+}
+
+const noExtremes = (): ComponentExtremes => ({ max: [-Infinity, -Infinity, -Infinity], maxCase: ['', '', ''], min: [Infinity, Infinity, Infinity], minCase: ['', '', ''] });
+
+function widen(e: ComponentExtremes, v: Vec3, caseId: string): void {
+  for (let d = 0; d < 3; d++) {
+    if (v[d] > e.max[d]) { e.max[d] = v[d]; e.maxCase[d] = caseId; }
+    if (v[d] < e.min[d]) { e.min[d] = v[d]; e.minCase[d] = caseId; }
+  }
 }
 
 export interface Envelope {
@@ -45,7 +60,8 @@ export interface Envelope {
 
 /**
  * Envelope over cases and combinations of a SolveReport: per member max/min tension, max sag and
- * slack cases; per node max displacement; per support reaction component extremes. Only converged
+ * slack cases; per node max displacement; per support reaction component extremes (and of its
+ * moment where a rotation is restrained). Only converged
  * cases enter; `only` restricts to the given case ids. Ties keep the first case in report order.
  * Members, nodes and supports are listed in the order they first appear in the report.
  */
@@ -80,14 +96,12 @@ export function envelopeOf(report: SolveReport, only?: readonly string[]): Envel
     for (const r of c.reactions) {
       let e = rea.get(r.node);
       if (!e) {
-        e = { node: r.node, max: [-Infinity, -Infinity, -Infinity], maxCase: ['', '', ''], min: [Infinity, Infinity, Infinity], minCase: ['', '', ''], magnitudeMax: -Infinity, magnitudeMaxCase: '' };
+        e = { node: r.node, ...noExtremes(), magnitudeMax: -Infinity, magnitudeMaxCase: '' };
         rea.set(r.node, e);
         env.reactions.push(e);
       }
-      for (let d = 0; d < 3; d++) {
-        if (r.force[d] > e.max[d]) { e.max[d] = r.force[d]; e.maxCase[d] = c.id; }
-        if (r.force[d] < e.min[d]) { e.min[d] = r.force[d]; e.minCase[d] = c.id; }
-      }
+      widen(e, r.force, c.id);
+      if (r.moment) widen(e.moment ??= noExtremes(), r.moment, c.id);
       const mag = Math.hypot(r.force[0], r.force[1], r.force[2]);
       if (mag > e.magnitudeMax) { e.magnitudeMax = mag; e.magnitudeMaxCase = c.id; }
     }

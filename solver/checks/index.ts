@@ -1,7 +1,7 @@
 /** Design checks, design basis, groups and envelopes (pure). Re-exported by the solver barrel. */
 export { membersOfGroup, membersOfGroups, groupExists } from './groups.ts';
 export { envelopeOf } from './envelope.ts';
-export type { Envelope, MemberEnvelope, NodeEnvelope, ReactionEnvelope } from './envelope.ts';
+export type { ComponentExtremes, Envelope, MemberEnvelope, NodeEnvelope, ReactionEnvelope } from './envelope.ts';
 export { runChecks } from './run-checks.ts';
 export { CheckInputError, checkSettingsProblems } from './check-settings.ts';
 export type * from './check-types.ts';

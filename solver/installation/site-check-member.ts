@@ -16,6 +16,7 @@
 import type { InstallationData, MemberInstallation } from './installation-data.ts';
 import { STANDARD_GRAVITY, type CableMode } from './cable-frequency.ts';
 import { tensionFromFrequency, tensionFromSag, type SiteCheckResult } from './site-check.ts';
+import { OutcomeError } from '../results/outcome-error.ts';
 
 export interface MemberSiteCheck extends SiteCheckResult {
   member: string;
@@ -35,7 +36,9 @@ function memberOf(data: InstallationData, id: string): { m: MemberInstallation; 
 
 /**
  * Target tension (N) of a member at temperature T (K): linear interpolation in the table.
- * Throws naming the range when T is outside it or the bracketing rows did not converge.
+ * Throws naming the range when T is outside it or the bracketing rows did not converge: an
+ * OutcomeError `temperatureOutsideTable` (quantities temperature, low, high, K; refs member) or
+ * `tableRowNotConverged` (quantities temperature, K), worded at the edge in the display units.
  */
 export function targetTensionAt(data: InstallationData, memberId: string, temperature: number): number {
   const { column } = memberOf(data, memberId);
@@ -44,12 +47,20 @@ export function targetTensionAt(data: InstallationData, memberId: string, temper
   if (rows.length === 0) throw new Error('site check: the installation table is empty');
   const lo = rows[0].temperature, hi = rows[rows.length - 1].temperature;
   if (!(temperature >= lo - 1e-9 && temperature <= hi + 1e-9)) {
-    throw new Error(`site check: ${c(temperature)} °C is outside the installation table (${c(lo)} … ${c(hi)} °C)`);
+    const K = (value: number) => ({ value, kind: 'temperature' as const });
+    throw new OutcomeError(
+      { code: 'temperatureOutsideTable', quantities: { temperature: K(temperature), low: K(lo), high: K(hi) }, refs: { member: memberId } },
+      `site check: ${c(temperature)} °C is outside the installation table (${c(lo)} … ${c(hi)} °C)`,
+    );
   }
   let i = 0;
   while (i < rows.length - 2 && rows[i + 1].temperature < temperature) i++;
   const a = rows[i], b = rows[Math.min(i + 1, rows.length - 1)];
-  for (const r of [a, b]) if (!r.converged) throw new Error(`site check: the table row at ${c(r.temperature)} °C did not converge`);
+  for (const r of [a, b]) {
+    if (!r.converged) {
+      throw new OutcomeError({ code: 'tableRowNotConverged', quantities: { temperature: { value: r.temperature, kind: 'temperature' } }, refs: { member: memberId } }, `site check: the table row at ${c(r.temperature)} °C did not converge`);
+    }
+  }
   if (b.temperature === a.temperature) return a.tensions[column];
   const t = (temperature - a.temperature) / (b.temperature - a.temperature);
   return a.tensions[column] + t * (b.tensions[column] - a.tensions[column]);

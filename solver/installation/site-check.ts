@@ -18,6 +18,7 @@
  */
 
 import { findBracketedRoot, findRootsOnLogGrid } from './bracketed-root.ts';
+import { OutcomeError } from '../results/outcome-error.ts';
 import { modeFrequency, STANDARD_GRAVITY, type CableMode, type CableVibrationInput } from './cable-frequency.ts';
 
 export interface SiteCheckResult {
@@ -40,7 +41,11 @@ export interface FrequencyCheckInput extends Omit<CableVibrationInput, 'tension'
   targetTension: number;
 }
 
-/** Tension from a measured frequency (see the file comment). Throws with a plain message when no tension fits. */
+/**
+ * Tension from a measured frequency (see the file comment). When no tension fits, throws an
+ * OutcomeError `noTensionForFrequency` (quantities low, high: the tensions searched, N; frequency,
+ * Hz; refs mode), worded at the edge in the display units.
+ */
 export function tensionFromFrequency(input: FrequencyCheckInput): SiteCheckResult {
   const mode = input.mode ?? 'tautString';
   if (!(input.measuredFrequency > 0)) throw new Error(`measured frequency must be positive, got ${input.measuredFrequency}`);
@@ -51,7 +56,10 @@ export function tensionFromFrequency(input: FrequencyCheckInput): SiteCheckResul
   const hi = input.axialStiffness;
   const candidates = findRootsOnLogGrid(g, lo, hi, 400);
   if (candidates.length === 0) {
-    throw new Error(`no tension between ${lo.toPrecision(3)} N and ${hi.toPrecision(3)} N gives ${input.measuredFrequency} Hz in mode '${mode}'`);
+    throw new OutcomeError(
+      { code: 'noTensionForFrequency', quantities: { low: { value: lo, kind: 'force' }, high: { value: hi, kind: 'force' }, frequency: { value: input.measuredFrequency, kind: 'frequency' } }, refs: { mode } },
+      `no tension between ${lo.toPrecision(3)} N and ${hi.toPrecision(3)} N gives ${input.measuredFrequency} Hz in mode '${mode}'`,
+    );
   }
   return pick(candidates, input.targetTension);
 }

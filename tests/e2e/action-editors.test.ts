@@ -191,6 +191,25 @@ describe('design actions and design basis in the app', () => {
     await expect.poll(undoTitle).toContain('Minimum tension');
     await shot('65-check-rules.png');
 
+    // A second rule after it; then rule n (now a middle row) removed and brought back by undo: each
+    // row keeps its renderer-side key, and the open row stays open on its own entry.
+    const row = (i: number) => page.locator(`[data-testid="minimum-tension"] [data-entry="${i}"]`);
+    const keyOfN = await row(n).getAttribute('data-key');
+    await page.getByTestId('minimum-tension-add').click();
+    const keyAdded = await row(n + 1).getAttribute('data-key');
+    expect(keyAdded).not.toBe(keyOfN);
+    expect(await row(n + 1).locator('.fields').count()).toBe(1); // an added row opens
+    await page.getByTestId(`minimum-tension-remove-${n}`).click();
+    await expect.poll(() => row(n).getAttribute('data-key')).toBe(keyAdded);
+    expect(await row(n).locator('.fields').count()).toBe(1);
+    await page.getByTestId('undo').click();
+    await expect.poll(() => row(n + 1).getAttribute('data-key')).toBe(keyAdded);
+    expect(await row(n).getAttribute('data-key')).toBe(keyOfN);
+    expect(await row(n + 1).locator('.fields').count()).toBe(1);
+    expect(await row(n).locator('.fields').count()).toBe(0);
+    await page.getByTestId('undo').click(); // and the second rule's addition
+    await expect.poll(() => page.locator('[data-testid="minimum-tension"] [data-entry]').count()).toBe(n + 1);
+
     // Section data under the sections table: yield strength of the leg tube in MPa.
     await page.getByTestId('tab-sections').click();
     await page.getByTestId('section-open-0').click();
@@ -220,7 +239,7 @@ describe('design actions and design basis in the app', () => {
     const k = (await saved()).ancillaries?.length ?? 0;
     await page.getByTestId('ancillaries-add').click();
     await setField('ancillaries', k, 'iceBehaviour', 'coat');
-    await setField('ancillaries', k, 'coatWidth', '0.3');
+    await setField('ancillaries', k, 'coatWidth', '300'); // a small length: mm
     expect(await page.locator(`[data-testid="ancillaries"] [data-entry="${k}"] [data-field="iceMass"]`).count()).toBe(0);
     await shot('69-ancillary-ice-coat.png');
 

@@ -94,7 +94,7 @@ describe('generator re-runs in the app', () => {
     const notes = (await page.getByTestId('generate-notes').textContent()) ?? '';
     expect(notes).toContain('member "bracket": dropped');
     expect(notes).toContain('node "aerial": no member is left on it: removed');
-    expect(notes).toMatch(/checks\.tiltLimits\[0\] top: node "mast\/P49a" → "mast\/P25a" \(mast top, moved 30 m\)/);
+    expect(notes).toMatch(/checks\.tiltLimits\[0\] top: node "mast\/P49a" → "mast\/P25a" \(mast top, moved 30\.000 m\)/);
     await shot('32-generate-notes.png');
     await page.getByTestId('generate-close').click();
     expect(await memberCount()).toBe(dropped.project.members.length);
@@ -202,7 +202,7 @@ describe('a new project, edited without a text editor', () => {
     await page.getByTestId('tuning-target-kind').selectOption('plumb');
     await page.getByTestId('tuning-target-base').fill(base);
     await page.getByTestId('tuning-target-top').fill(top);
-    await page.getByTestId('tuning-target-value').fill('0.05');
+    await page.getByTestId('tuning-target-value').fill('50'); // plumb tolerance in mm
     await page.getByTestId('tuning-add-target').click();
     await page.getByTestId('tuning-target-kind').selectOption('reaction');
     await page.getByTestId('tuning-target-node').fill(base);
@@ -215,7 +215,7 @@ describe('a new project, edited without a text editor', () => {
     await page.getByTestId('tuning-min-0').press('Enter');
     await expect.poll(() => page.getByTestId('undo').getAttribute('title')).toContain(`Lower bound of ${rid}/guys`);
     const setup = (await page.getByTestId('tuning-setup').textContent()) ?? '';
-    expect(setup).toMatch(/plumb|top/i);
+    expect(setup).toMatch(/plumb over .* within 50\.0 mm/);
     expect(setup).toMatch(/reaction/i);
     await shot('37-tuning-targets.png');
 

@@ -197,8 +197,13 @@ describe('design-data edits through the project store', () => {
     const coat = setIceBehaviour(point, 'coat');
     expect(coat).toEqual({ id: 'A1', kind: 'dish', node: top, dragArea: 0.8, mass: 30, label: 'link dish', iceBehaviour: 'coat', coatWidth: 0.1, coatLength: 1 });
     expect(s.edit('Ice', (p) => replaceActionEntry(p, 'ancillaries', 0, coat as never))).toEqual({ ok: true });
-    const width = applyFieldText(field(ACTION_FIELDS.ancillaries, 'coatWidth'), coat, '1.2', ctxOf(s.project!), 'ancillaries[0] "A1"');
-    expect(width.ok && width.entry.coatWidth).toBe(1.2);
+    // The coat width is a small length, as a section's diameter: mm (SI), in (US); a typed unit wins.
+    const width = applyFieldText(field(ACTION_FIELDS.ancillaries, 'coatWidth'), coat, '1200', ctxOf(s.project!), 'ancillaries[0] "A1"');
+    expect(width.ok && width.entry.coatWidth).toBeCloseTo(1.2, 12);
+    const typedM = applyFieldText(field(ACTION_FIELDS.ancillaries, 'coatWidth'), coat, '1.2 m', ctxOf(s.project!), 'ancillaries[0] "A1"');
+    expect(typedM.ok && typedM.entry.coatWidth).toBeCloseTo(1.2, 12);
+    const inches = applyFieldText(field(ACTION_FIELDS.ancillaries, 'coatWidth'), coat, '12', ctxOf(s.project!, 'US'), 'ancillaries[0] "A1"');
+    expect(inches.ok && inches.entry.coatWidth).toBeCloseTo(12 * IN, 12); // 1 in = 0.0254 m (NIST SP 811)
     expect(applyFieldText(field(ACTION_FIELDS.ancillaries, 'coatWidth'), coat, '-1', ctxOf(s.project!), 'ancillaries[0] "A1"'))
       .toEqual({ ok: false, error: 'ancillaries[0] "A1" coat width: "-1" must be > 0' });
     // A line item ices per metre of height: no coat length.

@@ -87,7 +87,7 @@ describe('site store', () => {
     site.open('sequence');
     site.sequenceId = 'bottom up';
     await site.runSequence();
-    expect(calls).toEqual([{ kind: 'sequence', id: 'bottom up' }]);
+    expect(calls).toEqual([{ kind: 'sequence', id: 'bottom up', units: 'SI' }]);
     const direct = runSequence(demo, 'bottom up');
     expect(site.sequenceResult!.stages.flatMap((s) => s.settings.map((x) => x.value))).toEqual(direct.stages.flatMap((s) => s.settings.map((x) => x.value)));
     expect(site.sequenceStale).toBe(false);

@@ -13,6 +13,7 @@ import { parseOptions } from '../options.ts';
 import { readProjectOrReport } from '../read-project-file.ts';
 import { replaceNonFinite } from '../format/finite-guard.ts';
 import { fixedText, formatValue } from '../../common/units/index.ts';
+import { siteErrorText } from '../../common/site/site-input-text.ts';
 
 const force = (n: number): string => formatValue(n, 'force', 'SI');
 const mm = (m: number): string => formatValue(m, 'displacement', 'SI');
@@ -50,7 +51,7 @@ export function asBuiltText(r: AsBuiltResult): string {
   out.push('', 'Readings (tension at the lower end)');
   out.push(textTable(
     [{ title: 'cable' }, { title: 'method' }, { title: 'reading', align: 'right' }, { title: '°C', align: 'right' }, { title: 'T kN', align: 'right' }, { title: '± kN', align: 'right' }, { title: 'fit kN', align: 'right' }, { title: 'residual σ', align: 'right' }],
-    r.observations.map((o) => [o.member, o.method, o.method === 'dynamometer' ? `${force(o.reading)} kN` : o.method === 'frequency' ? `${formatValue(o.reading, 'frequency', 'SI')} Hz` : `${fixedText(o.reading, 3)} m`,
+    r.observations.map((o) => [o.member, o.method, o.method === 'dynamometer' ? `${force(o.reading)} kN` : o.method === 'frequency' ? `${formatValue(o.reading, 'frequency', 'SI')} Hz` : `${formatValue(o.reading, 'sag', 'SI')} mm`,
       celsius(o.temperature), force(o.tension), force(o.sigma), force(o.fitted), fixedText(o.normalisedResidual, 2)]),
   ));
   out.push(`  rms normalised residual ${fixedText(r.rmsResidual, 2)} (about 1 when the stated accuracies are right); ${r.iterations} iteration(s)`);
@@ -83,7 +84,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
     try {
       results.push(runAsBuilt(project, id));
     } catch (e) {
-      io.err(`${file}: ${(e as Error).message}\n`);
+      io.err(`${file}: ${siteErrorText(e, 'SI')}\n`);
       return EXIT.badInput;
     }
   }

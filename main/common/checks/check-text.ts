@@ -2,7 +2,7 @@
  * Words and units for the structured check results of the solver (CheckResult, CheckWarning,
  * ResolvedBasis) — the one formatter the CLI `check`, the app's Checks tab and the schedule share,
  * so all three print the same numbers. Units and precision from main/common/units (SI kN, m, mm;
- * US kip, ft, in); displacements print in mm / in.
+ * US kip, ft, in); displacements and sags print in mm / in (kinds displacement, sag).
  */
 import type { CheckCode, CheckResult, CheckWarning, ResolvedBasis } from '../../../solver/index.ts';
 import { fixedText, formatValue, formatWithUnit, type UnitSystem } from '../units/index.ts';
@@ -45,7 +45,7 @@ export interface CheckRow {
 export function quantityText(r: Pick<CheckResult, 'quantity' | 'code'>, v: number, units: UnitSystem): string {
   switch (r.quantity) {
     case 'force': return formatWithUnit(v, 'force', units);
-    case 'length': return formatWithUnit(v, r.code === 'displacement' ? 'displacement' : 'length', units);
+    case 'length': return formatWithUnit(v, r.code === 'displacement' ? 'displacement' : r.code === 'sag' ? 'sag' : 'length', units);
     case 'ratio': return r.code === 'tilt' ? tiltText(v) : formatValue(v, 'ratio', units);
     case 'angle': return formatWithUnit(v, 'angle', units);
     case 'slenderness': return formatValue(v, 'slenderness', units);

@@ -4,6 +4,7 @@ import { NodeFollower, nearestMember } from './follow-parts.ts';
 import { followCaseLoads, followChecks, followNode, followTuning, type FollowContext } from './follow-references.ts';
 import { dropGroupReferences } from './drop-group-references.ts';
 import { followPanelRegions } from './follow-panel-regions.ts';
+import { generatorNote, type GeneratorNote, type ReattachTarget } from './generator-notes.ts';
 
 /**
  * What to do with the user's parts that use generated parts a re-run no longer makes:
@@ -19,15 +20,15 @@ export interface DanglingReference {
   entry: string;
   /** What it uses, e.g. `node "mast/P30a"`. */
   uses: string;
-  /** The nearest new part it would be re-attached to, or null when there is none. */
-  reattachTo: string | null;
+  /** The nearest new part it would be re-attached to (worded by generator-text.ts reattachText), or null when there is none. */
+  reattachTo: ReattachTarget | null;
 }
 
 export interface ApplyOutcome {
   /** A new project (the input is not changed). */
   project: ProjectFile;
-  /** Exactly what moved, was re-attached, dropped or kept, each naming the entry (SI: N, m). */
-  notes: string[];
+  /** Exactly what moved, was re-attached, dropped or kept, each naming the entry (structured; words: generator-text.ts). */
+  notes: GeneratorNote[];
   /** User references to parts the re-run no longer makes (the choice applied to them is `choice`). */
   dangling: DanglingReference[];
 }
@@ -51,7 +52,7 @@ const ownedBy = (recordId: string, id: string) => id.startsWith(`${recordId}/`);
  */
 export function applyGenerated(project: ProjectFile, record: GeneratorRecord, parts: GeneratedParts, choice: DanglingChoice = 'reattach', oldKeyNodes: Record<string, string> | null = null): ApplyOutcome {
   const rid = record.id;
-  const notes: string[] = [];
+  const notes: GeneratorNote[] = [];
   const dangling: DanglingReference[] = [];
   const newNodeIds = new Set(parts.nodes.map((n) => n.id));
   const newMemberIds = new Set(parts.members.map((m) => m.id));
@@ -78,11 +79,11 @@ export function applyGenerated(project: ProjectFile, record: GeneratorRecord, pa
     const gone = ends.filter((k) => !newNodeIds.has(m[k]));
     for (const k of gone) {
       const to = follower.follow(oldNodes.get(m[k])!, 'any');
-      dangling.push({ entry: `member "${m.id}"`, uses: `node "${m[k]}"`, reattachTo: to ? `node "${to.id}" (${+to.distance.toFixed(3)} m away)` : null });
+      dangling.push({ entry: `member "${m.id}"`, uses: `node "${m[k]}"`, reattachTo: to ? { part: 'node', id: to.id, distance: to.distance } : null });
     }
     if (gone.length && choice === 'drop') {
       droppedMembers.add(m.id);
-      notes.push(`member "${m.id}": dropped (it used ${gone.map((k) => `node "${m[k]}"`).join(' and ')}, which the new run does not make)`);
+      notes.push(generatorNote('memberDropped', { member: m.id, nodes: gone.map((k) => m[k]) }));
       return [];
     }
     const next: MemberSpec = { ...m };
@@ -96,7 +97,7 @@ export function applyGenerated(project: ProjectFile, record: GeneratorRecord, pa
     pairs.add(pairKey(next.from, next.to));
     if (next.from === next.to) {
       droppedMembers.add(m.id);
-      notes.push(`member "${m.id}": both ends would be node "${next.from}": dropped`);
+      notes.push(generatorNote('memberEndsMerge', { member: m.id, node: next.from }));
       return [];
     }
     return [next];
@@ -107,7 +108,7 @@ export function applyGenerated(project: ProjectFile, record: GeneratorRecord, pa
   for (const m of [...userMembers, ...parts.members]) { used.add(m.from); used.add(m.to); }
   const lonely = new Set(droppedMembers.size ? project.nodes.filter((n) => !ownedBy(rid, n.id) && !used.has(n.id) && !pinned(n.fixed)
     && project.members.some((m) => droppedMembers.has(m.id) && (m.from === n.id || m.to === n.id))).map((n) => n.id) : []);
-  lonely.forEach((id) => notes.push(`node "${id}": no member is left on it: removed (with its loads and checks)`));
+  lonely.forEach((id) => notes.push(generatorNote('nodeRemoved', { node: id })));
 
   // Groups: the generator's are replaced; the user's lose or re-attach generated members no longer made.
   const oldAt = new Map<string, Vec3>(project.nodes.map((n) => [n.id, n.at]));
@@ -121,28 +122,28 @@ export function applyGenerated(project: ProjectFile, record: GeneratorRecord, pa
     const members: string[] = [];
     for (const id of g.members) {
       if (userMemberIds.has(id) || newMemberIds.has(id)) { members.push(id); continue; }
-      if (droppedMembers.has(id)) { notes.push(`group "${g.id}": member "${id}" was dropped: taken out`); continue; }
+      if (droppedMembers.has(id)) { notes.push(generatorNote('groupMemberDropped', { group: g.id, member: id })); continue; }
       const old = oldGenerated.get(id);
       const near = old ? nearestMember(old, oldAt, parts.members, newAt) : null;
-      if (old) dangling.push({ entry: `group "${g.id}"`, uses: `member "${id}"`, reattachTo: near ? `member "${near.id}"` : null });
+      if (old) dangling.push({ entry: `group "${g.id}"`, uses: `member "${id}"`, reattachTo: near ? { part: 'member', id: near.id } : null });
       if (choice === 'reattach' && near) {
         if (!members.includes(near.id)) members.push(near.id);
-        notes.push(`group "${g.id}": member "${id}" → "${near.id}" (nearest new ${near.kind})`);
-      } else notes.push(`group "${g.id}": member "${id}" no longer exists: taken out`);
+        notes.push(generatorNote('groupMemberReplaced', { group: g.id, member: id, to: near.id, kind: near.kind }));
+      } else notes.push(generatorNote('groupMemberGone', { group: g.id, member: id }));
     }
     if (members.length) keptGroups.push(members.length === g.members.length && members.every((m, i) => m === g.members[i]) ? g : { ...g, members });
-    else { gone.add(g.id); notes.push(`group "${g.id}": no member left: removed`); }
+    else { gone.add(g.id); notes.push(generatorNote('groupRemoved', { group: g.id })); }
   }
   const newGroupIds = new Set(parts.groups.map((g) => g.id));
   for (const g of project.groups ?? []) if (ownedBy(rid, g.id) && !newGroupIds.has(g.id)) gone.add(g.id);
 
   const newSectionIds = new Set(parts.sections.map((s) => s.id));
-  const usedSections = new Map(userMembers.map((m) => [m.section, `member "${m.id}"`] as const));
+  const usedSections = new Map(userMembers.map((m) => [m.section, m.id] as const));
   const keptSections = project.sections.filter((s) => {
     if (!ownedBy(rid, s.id)) return true;
     if (newSectionIds.has(s.id)) return false;
     const user = usedSections.get(s.id);
-    if (user) notes.push(`section "${s.id}" is no longer made by generator "${rid}" but ${user} uses it: kept`);
+    if (user) notes.push(generatorNote('sectionKept', { section: s.id, generator: rid, member: user }));
     return Boolean(user);
   });
 
@@ -174,7 +175,7 @@ export function applyGenerated(project: ProjectFile, record: GeneratorRecord, pa
     out.ancillaries = project.ancillaries.flatMap((a, i) => {
       if (a.node === undefined) return [a];
       const node = followNode(ctx, `ancillaries[${i}] "${a.id}"`, a.node, 'any');
-      if (node === null || lonely.has(node)) { notes.push(`ancillaries[${i}] "${a.id}": dropped (its node is gone)`); return []; }
+      if (node === null || lonely.has(node)) { notes.push(generatorNote('ancillaryDropped', { entry: `ancillaries[${i}] "${a.id}"` })); return []; }
       return [node === a.node ? a : { ...a, node }];
     });
   }
@@ -184,7 +185,7 @@ export function applyGenerated(project: ProjectFile, record: GeneratorRecord, pa
   const userPanels = (project.panels ?? []).filter((pa) => !ownedBy(rid, pa.id)).flatMap((pa) => {
     const nodes = pa.nodes.map((n) => followNode(ctx, `panel "${pa.id}"`, n, 'any'));
     if (nodes.some((n) => n === null || lonely.has(n)) || new Set(nodes).size < nodes.length) {
-      notes.push(`panel "${pa.id}": its corners no longer make a loop of distinct nodes: dropped`);
+      notes.push(generatorNote('panelDropped', { panel: pa.id }));
       return [];
     }
     return [nodes.every((n, i) => n === pa.nodes[i]) ? pa : { ...pa, nodes: nodes as string[] }];

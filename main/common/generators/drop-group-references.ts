@@ -1,4 +1,5 @@
 import type { ProjectFile, TuningTarget } from '../../../solver/index.ts';
+import { generatorNote, type GeneratorNote } from './generator-notes.ts';
 
 /**
  * Remove every reference to the groups in `gone` (group ids that no longer exist): check settings
@@ -6,10 +7,10 @@ import type { ProjectFile, TuningTarget } from '../../../solver/index.ts';
  * cases, members' own `groups`, and design actions that name a group (member loss by group,
  * unbalanced ice, line ancillaries). Each removal is described in `notes`. Returns a new project.
  */
-export function dropGroupReferences(p: ProjectFile, gone: ReadonlySet<string>, notes: string[]): ProjectFile {
+export function dropGroupReferences(p: ProjectFile, gone: ReadonlySet<string>, notes: GeneratorNote[]): ProjectFile {
   if (gone.size === 0) return p;
   const out: ProjectFile = { ...p };
-  const say = (entry: string, g: string) => notes.push(`${entry}: group "${g}" no longer exists: reference dropped`);
+  const say = (entry: string, g: string) => notes.push(generatorNote('groupReferenceDropped', { entry, group: g }));
   if (p.checks) {
     const ch = { ...p.checks };
     if (ch.noSlackGroups) ch.noSlackGroups = ch.noSlackGroups.filter((g) => (gone.has(g) ? (say('checks.noSlackGroups', g), false) : true));
@@ -32,7 +33,7 @@ export function dropGroupReferences(p: ProjectFile, gone: ReadonlySet<string>, n
       if (groups.length) copy.groups = groups;
       else {
         delete copy.groups;
-        notes.push(`load case "${c.id}" ${key}: no group left, so it now applies to every member`);
+        notes.push(generatorNote('caseAppliesToAll', { case: c.id, action: key }));
       }
       next = { ...next, [key]: copy };
     }
@@ -44,7 +45,7 @@ export function dropGroupReferences(p: ProjectFile, gone: ReadonlySet<string>, n
       if (m.group === undefined || !gone.has(m.group)) return [m];
       say(`memberLoss[${i}] "${m.id}"`, m.group);
       const { group: _g, ...rest } = m;
-      return rest.members?.length ? [rest] : (notes.push(`memberLoss[${i}] "${m.id}": no member left to remove: dropped`), []);
+      return rest.members?.length ? [rest] : (notes.push(generatorNote('memberLossDropped', { entry: `memberLoss[${i}] "${m.id}"` })), []);
     });
   }
   if (p.unbalancedIce) {

@@ -5,6 +5,7 @@
  * keep applying to the same part of the surface.
  */
 import type { PanelSpec, Vec3 } from '../../../solver/index.ts';
+import { count, generatorNote, type GeneratorNote } from './generator-notes.ts';
 
 function centroid(p: PanelSpec, at: Map<string, Vec3>): Vec3 | null {
   const c: Vec3 = [0, 0, 0];
@@ -18,7 +19,7 @@ function centroid(p: PanelSpec, at: Map<string, Vec3>): Vec3 | null {
 
 /** New panels with the regions of the nearest old panels; `notes` says how many took one. */
 export function followPanelRegions(
-  oldPanels: readonly PanelSpec[], oldAt: Map<string, Vec3>, newPanels: readonly PanelSpec[], newAt: Map<string, Vec3>, notes: string[],
+  oldPanels: readonly PanelSpec[], oldAt: Map<string, Vec3>, newPanels: readonly PanelSpec[], newAt: Map<string, Vec3>, notes: GeneratorNote[],
 ): PanelSpec[] {
   const named = oldPanels.flatMap((p) => {
     const c = p.region !== undefined ? centroid(p, oldAt) : null;
@@ -38,7 +39,6 @@ export function followPanelRegions(
     carried++;
     return { ...p, region: best.region };
   });
-  const regions = [...new Set(named.map((n) => n.region))].map((r) => `"${r}"`).join(', ');
-  notes.push(`panels: ${carried} new panels took the region (${regions}) of the nearest old panel`);
+  notes.push(generatorNote('panelRegionsCarried', { regions: [...new Set(named.map((n) => n.region))] }, { count: count(carried) }));
   return out;
 }

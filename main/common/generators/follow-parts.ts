@@ -100,8 +100,3 @@ export function nearestMember(old: MemberSpec, oldAt: ReadonlyMap<string, Vec3>,
 export function idPattern(id: string): string {
   return id.replace(/\d+/g, '#');
 }
-
-/** Position to one decimal place of a mm-precision reading, for notes: "(12.5, 0, 40) m". */
-export function where(at: Vec3): string {
-  return `(${at.map((v) => +v.toFixed(3)).join(', ')}) m`;
-}

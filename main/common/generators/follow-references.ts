@@ -1,13 +1,15 @@
 import type { CheckSettings, LoadCaseSpec, NodalLoadSpec, NodeSpec, TuningSpec, TuningTarget, Vec3 } from '../../../solver/index.ts';
 import type { NodeFollower, NodeWant } from './follow-parts.ts';
-import { idPattern, where } from './follow-parts.ts';
+import { idPattern } from './follow-parts.ts';
+import { count, generatorNote, metres, newtons, vectorQuantities, type GeneratorNote } from './generator-notes.ts';
 
 /**
  * Loads, checks and tuning targets on a generator's nodes follow a re-run of it (see
  * NodeFollower for the order: role, same place, nearest allowed node). Nodal loads of one case
  * that put the same force on every free node of one generated family (ids that differ only in
  * their numbers, e.g. every "canopy/N#-#") follow as that pattern: the same total spread evenly
- * over the family's free nodes in the new run. Every change is described in `notes` (SI: N, m).
+ * over the family's free nodes in the new run. Every change is described in `notes` (structured:
+ * generator-notes.ts; quantities SI, N and m).
  */
 export interface FollowContext {
   recordId: string;
@@ -16,10 +18,9 @@ export interface FollowContext {
   /** The new run's nodes. */
   newNodes: readonly NodeSpec[];
   follower: NodeFollower;
-  notes: string[];
+  notes: GeneratorNote[];
 }
 
-const vec = (f: Vec3) => `(${f.map((v) => +v.toPrecision(6)).join(', ')}) N`;
 const isFree = (n: NodeSpec) => !(n.fixed && /[xyz]/.test(n.fixed));
 
 /** Follow one node reference; returns the new id, or null (reference dropped). Notes name `entry`. */
@@ -28,13 +29,13 @@ export function followNode(ctx: FollowContext, entry: string, id: string, want: 
   if (!old) return id; // not a node of this generator
   const to = ctx.follower.follow(old, want, avoid);
   if (!to) {
-    ctx.notes.push(`${entry}: node "${id}" is no longer made and no ${want === 'support' ? 'support' : 'node'} of the new run can take its place: reference dropped`);
+    ctx.notes.push(generatorNote('nodeUnplaced', { entry, node: id, want }));
     return null;
   }
-  if (to.id !== id || to.distance > 0) {
-    const how = to.how === 'same' ? 'at the same place' : to.how === 'nearest' ? `nearest ${want === 'free' ? 'free node' : want === 'support' ? 'support' : 'node'}, ${+to.distance.toFixed(3)} m from ${where(old.at)}` : `${to.how}, moved ${+to.distance.toFixed(3)} m`;
-    if (to.id !== id) ctx.notes.push(`${entry}: node "${id}" → "${to.id}" (${how})`);
-    else if (to.distance > 0) ctx.notes.push(`${entry}: stays on node "${id}" (${to.how}), which moved ${+to.distance.toFixed(3)} m`);
+  if (to.id !== id) {
+    ctx.notes.push(generatorNote('nodeFollowed', { entry, node: id, to: to.id, how: to.how, want }, { distance: metres(to.distance), ...vectorQuantities('from', old.at, metres) }));
+  } else if (to.distance > 0) {
+    ctx.notes.push(generatorNote('nodeMoved', { entry, node: id, how: to.how }, { distance: metres(to.distance) }));
   }
   return to.id;
 }
@@ -71,8 +72,11 @@ export function followCaseLoads(ctx: FollowContext, c: LoadCaseSpec): NodalLoadS
     list.forEach((l) => patterned.add(l));
     const total: Vec3 = [f[0] * list.length, f[1] * list.length, f[2] * list.length];
     ctx.notes.push(list.length === targets.length && targets.every((t) => covered.has(t.id))
-      ? `${entry}: the ${list.length} equal loads on every free "${pattern}" node stay on the same ${targets.length} nodes`
-      : `${entry}: ${list.length} equal loads ${vec(f)} on every free "${pattern}" node → the ${targets.length} such nodes of the new run, ${vec(each)} each (same total ${vec(total)})`);
+      ? generatorNote('loadsStay', { entry, pattern }, { count: count(list.length), nodes: count(targets.length) })
+      : generatorNote('loadsSpread', { entry, pattern }, {
+        count: count(list.length), nodes: count(targets.length),
+        ...vectorQuantities('force', f, newtons), ...vectorQuantities('each', each, newtons), ...vectorQuantities('total', total, newtons),
+      }));
   }
   for (const l of loads) {
     if (patterned.has(l)) continue;

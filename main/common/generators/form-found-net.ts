@@ -1,6 +1,7 @@
 import type { MemberSpec, NodeSpec, Vec3 } from '../../../solver/index.ts';
 import { solveForceDensity } from './force-density.ts';
 import { GeneratorInputError, roundCoord } from './types.ts';
+import { generatorNote, newtons } from './generator-notes.ts';
 
 /** A link of a net to form-find: a one-element cable member between two net nodes. */
 export interface NetLink {
@@ -58,7 +59,7 @@ export function balanceMastTop(top: Vec3, mastBase: Vec3, stay1: Vec3, stay2: Ve
   if (Math.abs(D) < 1e-9) throw new GeneratorInputError([`${where}: mast and back-stays are in one plane and cannot hold the top`]);
   const f: [number, number, number] = [det3(rhs, a[1], a[2]) / D, det3(a[0], rhs, a[2]) / D, det3(a[0], a[1], rhs) / D];
   if (!(f[0] < 0 && f[1] > 0 && f[2] > 0)) {
-    throw new GeneratorInputError([`${where}: back-stays cannot balance the net pull with this layout (mast ${Math.round(f[0])} N, stays ${Math.round(f[1])} N, ${Math.round(f[2])} N); move the back-stay anchors behind the mast`]);
+    throw new GeneratorInputError([generatorNote('backStaysCannotBalance', { entry: where }, { mast: newtons(f[0]), stayA: newtons(f[1]), stayB: newtons(f[2]) })]);
   }
   return f;
 }

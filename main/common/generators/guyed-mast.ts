@@ -2,6 +2,7 @@ import type { GroupSpec, MemberSpec, NodeSpec, SectionSpec, Vec3 } from '../../.
 import { DEFAULT_GUY_PRETENSION_SHARE } from '../../../solver/index.ts';
 import type { GeneratedParts, SectionInput } from './types.ts';
 import { ParamCheck, roundCoord, sectionSpec } from './types.ts';
+import { metres } from './generator-notes.ts';
 import { stickMastParts, stickMembers } from './guyed-mast-stick.ts';
 
 /**
@@ -64,7 +65,7 @@ export function checkGuyedMastParams(p: GuyedMastParams, recordId: string): void
   if (!Array.isArray(p.guyLevels) || p.guyLevels.length === 0) c.fail('guyLevels: give at least one guy level height');
   else p.guyLevels.forEach((z, k) => {
     c.positive(`guyLevels[${k}]`, z);
-    if (z > p.height + 1e-9) c.fail(`guyLevels[${k}]: ${z} m is above the mast height ${p.height} m`);
+    if (z > p.height + 1e-9) c.failWith(`guyLevels[${k}]`, 'levelAboveTop', { level: metres(z), height: metres(p.height) });
     if (k > 0 && !(z > p.guyLevels[k - 1])) c.fail(`guyLevels[${k}]: levels must be ascending`);
   });
   const n = p.guyLevels?.length ?? 0;

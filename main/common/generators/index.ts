@@ -10,5 +10,7 @@ export type { ApplyOutcome, DanglingChoice, DanglingReference } from './apply-ge
 export { runGenerator } from './run-generator.ts';
 export { solveForceDensity } from './force-density.ts';
 export { GeneratorInputError } from './types.ts';
-export type { GeneratedParts, SectionInput } from './types.ts';
+export type { GeneratedParts, GeneratorProblem, SectionInput } from './types.ts';
+export type { GeneratorNote, GeneratorNoteCode, ReattachTarget } from './generator-notes.ts';
+export { generatorNoteText, generatorNotesText, generatorProblemText, reattachText } from './generator-text.ts';
 export { fitGuyedMastLevels, atLevel, PER_LEVEL_KEYS } from './guyed-mast-levels.ts';

@@ -1,4 +1,6 @@
-import type { GroupSpec, MemberSpec, NodeSpec, PanelSpec, SectionSpec } from '../../../solver/index.ts';
+import type { GroupSpec, MemberSpec, MessageQuantity, NodeSpec, PanelSpec, SectionSpec } from '../../../solver/index.ts';
+import { generatorNote, type GeneratorNote, type GeneratorNoteCode } from './generator-notes.ts';
+import { generatorProblemText } from './generator-text.ts';
 
 /**
  * What a generator makes: ordinary, editable project parts.
@@ -22,17 +24,23 @@ export interface GeneratedParts {
 /** Section properties a generator asks for (ids and lattice data are made by the generator). SI units. */
 export type SectionInput = Omit<SectionSpec, 'id' | 'lattice'>;
 
-/** Thrown with every problem of the parameters, each naming the parameter. */
+/**
+ * A parameter problem: plain words naming the parameter, or a structured note (with the entry in
+ * `refs.entry`) when it quotes numbers, worded in the display units by generator-text.ts.
+ */
+export type GeneratorProblem = string | GeneratorNote;
+
+/** Thrown with every problem of the parameters, each naming the parameter. `message` words them in SI. */
 export class GeneratorInputError extends Error {
-  constructor(readonly problems: string[]) {
-    super(`Generator parameters are invalid:\n  ${problems.join('\n  ')}`);
+  constructor(readonly problems: GeneratorProblem[]) {
+    super(`Generator parameters are invalid:\n  ${problems.map((p) => generatorProblemText(p, 'SI')).join('\n  ')}`);
     this.name = 'GeneratorInputError';
   }
 }
 
 /** Collects parameter problems; `positive('height', v)` etc. */
 export class ParamCheck {
-  readonly problems: string[] = [];
+  readonly problems: GeneratorProblem[] = [];
   constructor(private readonly prefix: string) {}
   positive(name: string, v: unknown): void {
     if (typeof v !== 'number' || !Number.isFinite(v) || v <= 0) this.problems.push(`${this.prefix}.${name}: ${String(v)} must be a positive number`);
@@ -46,6 +54,10 @@ export class ParamCheck {
     this.positive(`${name}.area`, s.area);
   }
   fail(message: string): void { this.problems.push(`${this.prefix}.${message}`); }
+  /** A problem that quotes numbers: a structured note naming parameter `name`. */
+  failWith(name: string, code: GeneratorNoteCode, quantities: Record<string, MessageQuantity>): void {
+    this.problems.push(generatorNote(code, { entry: `${this.prefix}.${name}` }, quantities));
+  }
   throwIfAny(): void { if (this.problems.length) throw new GeneratorInputError(this.problems); }
 }
 

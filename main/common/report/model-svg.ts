@@ -7,6 +7,7 @@
  * already visible). Bars thick, cables thin, supports as small squares. Pure; coordinates in m.
  */
 import type { NodeResult, ProjectFile, Vec3 } from '../../../solver/index.ts';
+import { fromDisplay, toDisplay, unitLabel, type UnitSystem } from '../units/index.ts';
 
 export interface DeformedShape {
   caseId: string;
@@ -53,9 +54,9 @@ function view(project: ProjectFile, proj: Projection, title: string, width: numb
 /**
  * Elevation and plan side by side, each `size` px square, at one common scale. With `deformed`,
  * the case's deformed shape is drawn over the model as entered and the caption names the case and
- * the magnification.
+ * the magnification. The scale bar is a round length in the display unit of lengths (m / ft).
  */
-export function modelSvg(project: ProjectFile, size = 300, deformed: DeformedShape | null = null): string {
+export function modelSvg(project: ProjectFile, size = 300, deformed: DeformedShape | null = null, units: UnitSystem = 'SI'): string {
   let moved: Map<string, Vec3> | null = null;
   let factor = 1;
   // Elevation: the vertical plane through x, or — with a deformed shape — through the direction of
@@ -87,9 +88,9 @@ export function modelSvg(project: ProjectFile, size = 300, deformed: DeformedSha
   // One scale for both views: the most constraining extent fills its box.
   const scale = Math.min((size - 2 * pad) / Math.max(ev.w, pv.w, 1e-9), (size - 2 * pad - 22) / Math.max(ev.h, pv.h, 1e-9));
   const span = Math.max(ev.w, ev.h, pv.w, pv.h, 1e-9);
-  const bar = barLength(span);
-  const barPx = bar * scale;
-  const scaleBar = `<svg xmlns="http://www.w3.org/2000/svg" width="${(barPx + 60).toFixed(0)}" height="16" role="img" aria-label="scale bar"><line x1="2" y1="8" x2="${(2 + barPx).toFixed(1)}" y2="8" stroke="#000" stroke-width="1.5"/><line x1="2" y1="4" x2="2" y2="12" stroke="#000"/><line x1="${(2 + barPx).toFixed(1)}" y1="4" x2="${(2 + barPx).toFixed(1)}" y2="12" stroke="#000"/><text x="${(6 + barPx).toFixed(1)}" y="11" font-size="9" font-family="sans-serif">${bar} m</text></svg>`;
+  const bar = barLength(toDisplay(span, 'length', units));
+  const barPx = fromDisplay(bar, 'length', units) * scale;
+  const scaleBar = `<svg xmlns="http://www.w3.org/2000/svg" width="${(barPx + 60).toFixed(0)}" height="16" role="img" aria-label="scale bar"><line x1="2" y1="8" x2="${(2 + barPx).toFixed(1)}" y2="8" stroke="#000" stroke-width="1.5"/><line x1="2" y1="4" x2="2" y2="12" stroke="#000"/><line x1="${(2 + barPx).toFixed(1)}" y1="4" x2="${(2 + barPx).toFixed(1)}" y2="12" stroke="#000"/><text x="${(6 + barPx).toFixed(1)}" y="11" font-size="9" font-family="sans-serif">${bar} ${unitLabel('length', units)}</text></svg>`;
   const deg = Math.round((azimuth * 180) / Math.PI);
   const elevationTitle = deg === 0 ? 'Elevation (x–z)' : `Elevation in the vertical plane at ${deg}° from x`;
   const caption = deformed

@@ -5,12 +5,13 @@
  * page, rows never split.
  */
 import type { PaperSize } from '../schedule/schedule-types.ts';
+import { cssPageSize } from '../schedule/paper.ts';
 
 /** A CSS string, not HTML: drop quotes, backslashes, angle brackets and line breaks. */
 const cssText = (t: string) => t.replace(/["\\<>\r\n]/g, '');
 
 export function printCss(o: { paper: PaperSize; footer: string; caution: string; header?: string }): string {
-  const size = o.paper === 'letter' ? 'letter portrait' : 'A4 portrait';
+  const size = cssPageSize(o.paper);
   return `@page { size: ${size}; margin: 16mm 10mm 14mm 10mm;
   @top-left { content: "${cssText(o.header ?? '')}"; font: 7pt sans-serif; }
   @top-right { content: "CAUTION: ${cssText(o.caution)}"; font: bold 6.5pt sans-serif; width: 60%; text-align: right; }

@@ -52,10 +52,25 @@ function envelopeHtml(d: ReportDocument): string {
   const u = d.units, l = unitLabels(u);
   const util = new Map(d.checks.members.map((m) => [m.id, m]));
   const rows = d.envelope.members.map((m) => [`<b>${e(m.id)}</b>`, num(`env-max|${m.id}`, formatValue(m.tensionMax, 'force', u)), e(m.tensionMaxCase), num(`env-min|${m.id}`, formatValue(m.tensionMin, 'force', u)), e(m.tensionMinCase),
-    formatValue(m.sagMax, 'length', u), util.get(m.id)?.utilisation == null ? '—' : num(`util|${m.id}`, formatValue(util.get(m.id)!.utilisation, 'ratio', u)), m.slackCases.length ? `<b>slack</b> ${e(m.slackCases.join(', '))}` : '']);
-  const reactions = d.envelope.reactions.map((r) => [`<b>${e(r.node)}</b>`, num(`react|${r.node}`, formatValue(r.magnitudeMax, 'force', u)), e(r.magnitudeMaxCase), formatValue(r.min[2], 'force', u), e(r.minCase[2]), formatValue(r.max[2], 'force', u), e(r.maxCase[2])]);
-  return table(`Member envelope over ${d.envelope.cases.length} converged case(s) (${l.force}, ${l.length})`, ['Member', 'T max', 'case', 'T min', 'case', 'Sag max', 'Utilisation', 'Slack'], rows)
-    + table(`Support reactions envelope (${l.force}; force of the support on the structure)`, ['Support', '|R| max', 'case', 'Fz min', 'case', 'Fz max', 'case'], reactions);
+    formatValue(m.sagMax, 'sag', u), util.get(m.id)?.utilisation == null ? '—' : num(`util|${m.id}`, formatValue(util.get(m.id)!.utilisation, 'ratio', u)), m.slackCases.length ? `<b>slack</b> ${e(m.slackCases.join(', '))}` : '']);
+  // Moment columns only when some support restrains a rotation (beam models): the largest moment
+  // component in size, with its axis and case.
+  const withMoments = d.envelope.reactions.some((r) => r.moment);
+  const momentCells = (r: ReportDocument['envelope']['reactions'][number]): string[] => {
+    if (!withMoments) return [];
+    if (!r.moment) return ['—', ''];
+    const m = r.moment;
+    let best = { v: 0, axis: 0, case: '' };
+    for (let k = 0; k < 3; k++) {
+      if (Math.abs(m.max[k]) > Math.abs(best.v)) best = { v: m.max[k], axis: k, case: m.maxCase[k] };
+      if (Math.abs(m.min[k]) > Math.abs(best.v)) best = { v: m.min[k], axis: k, case: m.minCase[k] };
+    }
+    return [best.case ? `M${'xyz'[best.axis]} ${formatValue(best.v, 'moment', u)}` : formatValue(0, 'moment', u), e(best.case)];
+  };
+  const reactions = d.envelope.reactions.map((r) => [`<b>${e(r.node)}</b>`, num(`react|${r.node}`, formatValue(r.magnitudeMax, 'force', u)), e(r.magnitudeMaxCase), formatValue(r.min[2], 'force', u), e(r.minCase[2]), formatValue(r.max[2], 'force', u), e(r.maxCase[2]), ...momentCells(r)]);
+  return table(`Member envelope over ${d.envelope.cases.length} converged case(s) (${l.force}; sag ${l.sag})`, ['Member', 'T max', 'case', 'T min', 'case', 'Sag max', 'Utilisation', 'Slack'], rows)
+    + table(`Support reactions envelope (${l.force}${withMoments ? `, ${l.moment}` : ''}; force${withMoments ? ' and moment' : ''} of the support on the structure)`,
+      ['Support', '|R| max', 'case', 'Fz min', 'case', 'Fz max', 'case', ...(withMoments ? ['largest M', 'case'] : [])], reactions);
 }
 
 function analysisHtml(d: ReportDocument): string {
@@ -100,7 +115,7 @@ export function reportHtml(d: ReportDocument): string {
   const rev = d.revisions.at(-1)?.revision ?? '—';
   const sections: [string, string][] = [
     ['Design basis', designBasisHtml(d)],
-    ['Model', `<p>${d.model.nodes} nodes (${d.model.supports} with supports), ${d.model.members} members (${d.model.cables} cables, ${d.model.bars} bars) in ${d.model.elements} elements, ${d.model.dofs} free degrees of freedom, ${d.model.sections} sections, ${d.model.groups} groups.</p>${modelSvg(p, 300, governingShape(d))}`],
+    ['Model', `<p>${d.model.nodes} nodes (${d.model.supports} with supports), ${d.model.members} members (${d.model.cables} cables, ${d.model.bars} bars) in ${d.model.elements} elements, ${d.model.dofs} free degrees of freedom, ${d.model.sections} sections, ${d.model.groups} groups.</p>${modelSvg(p, 300, governingShape(d), d.units)}`],
     ['Materials and sections', sectionsHtml(d)],
     ['Actions and combinations', actionsHtml(d)],
     ['Analysis', analysisHtml(d)],

@@ -27,7 +27,7 @@ export function designBasisHtml(d: ReportDocument): string {
     ['Reference temperature', p.meta?.referenceTemperature ? `${formatValue(p.meta.referenceTemperature, 'temperature', u)} ${l.temperature}` : 'not set (15 °C assumed)'],
     ...basisLines(d.checks.basis).map((line, i): [string, string] => [i === 0 ? 'Design basis' : '', e(line.trim())]),
     ['Members that must not go slack', (s.noSlackGroups ?? []).join(', ') || '—'],
-    ['Sag limits', (s.sagLimits ?? []).map((x) => `${x.group}: ${'fractionOfSpan' in x.limit ? `${formatValue(x.limit.fractionOfSpan, 'share', u)} % of span` : `${formatValue(x.limit.absolute, 'length', u)} ${l.length}`}`).join('; ') || '—'],
+    ['Sag limits', (s.sagLimits ?? []).map((x) => `${x.group}: ${'fractionOfSpan' in x.limit ? `${formatValue(x.limit.fractionOfSpan, 'share', u)} % of span` : `${formatValue(x.limit.absolute, 'sag', u)} ${l.sag}`}`).join('; ') || '—'],
     ['Displacement limits', (s.displacementLimits ?? []).map((x) => `${x.node}: ${formatWithUnit(x.limit, 'displacement', u)}`).join('; ') || '—'],
     ['Tilt limits', (s.tiltLimits ?? []).map((x) => `${x.base}→${x.top}: ${tiltText(x.limit)}`).join('; ') || '—'],
     ['Uplift checked at', (s.upliftNodes ?? []).join(', ') || '—'],

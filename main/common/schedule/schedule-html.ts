@@ -6,6 +6,7 @@
  * borders, never by colour alone.
  */
 import type { ScheduleDocument } from './schedule-types.ts';
+import { cssPageSize } from './paper.ts';
 import { formatValue, unitLabel, unitLabels } from '../units/index.ts';
 import { FREQUENCY_HEAD, REVISION_HEAD, frequencyCells, frequencyIntro, headerRows, revisionCells, summaryCells, summaryHead } from './schedule-cells.ts';
 
@@ -159,7 +160,7 @@ const RULES: [string, string][] = [
  * either way: it only acts when printing.
  */
 export function scheduleCss(doc: ScheduleDocument, scope?: string): string {
-  const pageSize = doc.paper === 'letter' ? 'letter portrait' : 'A4 portrait';
+  const pageSize = cssPageSize(doc.paper);
   const h = doc.header;
   // A CSS string, not HTML: drop quotes, backslashes, angle brackets and line breaks (no escapes needed).
   const cssText = (t: string) => t.replace(/["\\<>\r\n]/g, '');

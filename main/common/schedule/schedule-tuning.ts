@@ -6,6 +6,7 @@
 import { resolveVariables } from '../../../solver/index.ts';
 import type { ProjectFile, TuningRunRecord, TuningRunTarget } from '../../../solver/index.ts';
 import type { ScheduleTuning } from './schedule-types.ts';
+import { targetValueKind } from '../tuning/tuning-text.ts';
 import { fixedText, formatValue, formatWithUnit, unitLabels, type UnitSystem } from '../units/index.ts';
 
 /** Relative difference above which a group's pretension is taken as changed since the run. */
@@ -43,6 +44,9 @@ function targetValueText(units: UnitSystem, t: TuningRunTarget): string {
   if (t.kind === 'noSlack') return `least tension ${formatValue(t.value, 'force', units)} ${l.force} (must stay above 0)`;
   const op = t.sense === 'equal' ? 'target' : 'limit';
   if (t.unit === 'share') return `${formatWithUnit(t.value, 'share', units)} (${op} ${formatWithUnit(t.limit, 'share', units)})`;
-  if (t.unit === 'm') return `${formatWithUnit(t.value, 'length', units)} (${op} ${formatWithUnit(t.limit, 'length', units)})`;
+  if (t.unit === 'm') {
+    const kind = targetValueKind(t.kind, t.unit);
+    return `${formatWithUnit(t.value, kind, units)} (${op} ${formatWithUnit(t.limit, kind, units)})`;
+  }
   return `${formatValue(t.value, 'force', units)} ${l.force} (${op} ${formatValue(t.limit, 'force', units)} ${l.force})`;
 }

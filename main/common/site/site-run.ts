@@ -14,6 +14,7 @@ import { reportHtml } from '../report/report-html.ts';
 import { collectReportSource } from '../report/report-source.ts';
 import type { PaperSize } from '../schedule/schedule-types.ts';
 import type { UnitSystem } from '../units/index.ts';
+import { siteErrorText } from './site-input-text.ts';
 
 /** How a printed document is laid out: units of the numbers, paper size, date of issue (YYYY-MM-DD). */
 export interface SiteDocumentOptions {
@@ -22,9 +23,10 @@ export interface SiteDocumentOptions {
   issueDate: string;
 }
 
+/** `units`: the display units its input problems are worded in (SI when absent). */
 export type SiteRequest =
-  | { kind: 'sequence'; id: string }
-  | { kind: 'asbuilt'; id: string }
+  | { kind: 'sequence'; id: string; units?: UnitSystem }
+  | { kind: 'asbuilt'; id: string; units?: UnitSystem }
   | ({ kind: 'crewSheet'; id: string } & SiteDocumentOptions)
   | ({ kind: 'report' } & SiteDocumentOptions);
 
@@ -38,8 +40,19 @@ function fileTitle(project: ProjectFile, what: string): string {
   return `${project.meta?.name ?? 'Untitled'} ${what}`.replace(/[\\/:*?"<>|]+/g, ' ').trim();
 }
 
-/** Run one request. Throws an Error naming the entry when the input is bad (unknown sequence or set, …). */
+/**
+ * Run one request. Throws an Error naming the entry when the input is bad (unknown sequence or set,
+ * a reading no tension fits, …), worded in the request's display units.
+ */
 export function runSiteRequest(project: ProjectFile, request: SiteRequest): SiteOutcome {
+  try {
+    return runRequest(project, request);
+  } catch (e) {
+    throw new Error(siteErrorText(e, request.units ?? 'SI'), { cause: e });
+  }
+}
+
+function runRequest(project: ProjectFile, request: SiteRequest): SiteOutcome {
   switch (request.kind) {
     case 'sequence':
       return { kind: 'sequence', result: runSequence(project, request.id) };
@@ -69,13 +82,14 @@ export function checkSiteRequest(value: unknown): { ok: true; value: SiteRequest
   const r = value as Record<string, unknown>;
   const kinds = ['sequence', 'asbuilt', 'crewSheet', 'report'];
   if (typeof r.kind !== 'string' || !kinds.includes(r.kind)) return { ok: false, error: `kind must be one of ${kinds.join(', ')}` };
-  const allowed = r.kind === 'sequence' || r.kind === 'asbuilt' ? ['kind', 'id'] : r.kind === 'crewSheet' ? ['kind', 'id', 'units', 'paper', 'issueDate'] : ['kind', 'units', 'paper', 'issueDate'];
+  const allowed = r.kind === 'sequence' || r.kind === 'asbuilt' ? ['kind', 'id', 'units'] : r.kind === 'crewSheet' ? ['kind', 'id', 'units', 'paper', 'issueDate'] : ['kind', 'units', 'paper', 'issueDate'];
   const extra = Object.keys(r).filter((k) => !allowed.includes(k));
   if (extra.length) return { ok: false, error: `has unknown field(s) ${extra.join(', ')}` };
   if (allowed.includes('id') && (typeof r.id !== 'string' || r.id.length === 0 || r.id.length > MAX_SITE_ID_LENGTH)) {
     return { ok: false, error: `id must be a non-empty string of at most ${MAX_SITE_ID_LENGTH} characters` };
   }
-  if (allowed.includes('units')) {
+  if ((r.kind === 'sequence' || r.kind === 'asbuilt') && r.units !== undefined && r.units !== 'SI' && r.units !== 'US') return { ok: false, error: 'units must be "SI" or "US"' };
+  if (r.kind === 'crewSheet' || r.kind === 'report') {
     if (r.units !== 'SI' && r.units !== 'US') return { ok: false, error: 'units must be "SI" or "US"' };
     if (r.paper !== 'a4' && r.paper !== 'letter') return { ok: false, error: 'paper must be "a4" or "letter"' };
     if (typeof r.issueDate !== 'string' || !DATE.test(r.issueDate)) return { ok: false, error: 'issueDate must be a date YYYY-MM-DD' };

@@ -8,11 +8,14 @@ import { fixedText, formatWithUnit, messageQuantityText, type UnitSystem } from 
 
 const groupLabel = (project: ProjectFile, group: string): string => project.groups?.find((g) => g.id === group)?.label ?? group;
 
-/** "sag ≤ 0.600 m in 'dead' for 'guys level 1'", in the display units. */
+/**
+ * "sag ≤ 600 mm in 'dead' for 'guys level 1'", in the display units. Sag limits are the sag kind and
+ * plumb tolerances the displacement kind (both mm / in), as the checks' sag and displacement limits.
+ */
 export function targetText(project: ProjectFile, t: TuningTarget, units: UnitSystem): string {
   switch (t.kind) {
     case 'sag': {
-      const lim = 'absolute' in t.limit ? formatWithUnit(t.limit.absolute, 'length', units) : `span/${fixedText(1 / t.limit.fractionOfSpan, 0)}`;
+      const lim = 'absolute' in t.limit ? formatWithUnit(t.limit.absolute, 'sag', units) : `span/${fixedText(1 / t.limit.fractionOfSpan, 0)}`;
       return `sag ≤ ${lim} in '${t.case}' for '${groupLabel(project, t.group)}'`;
     }
     case 'tensionShare':
@@ -20,15 +23,22 @@ export function targetText(project: ProjectFile, t: TuningTarget, units: UnitSys
     case 'noSlack':
       return `no slack in '${t.case}' for '${groupLabel(project, t.group)}'`;
     case 'plumb':
-      return `mast top '${t.top}' plumb over '${t.base}' within ${formatWithUnit(t.tolerance, 'length', units)} in '${t.case}'`;
+      return `mast top '${t.top}' plumb over '${t.base}' within ${formatWithUnit(t.tolerance, 'displacement', units)} in '${t.case}'`;
     case 'reaction':
       return `reaction at '${t.node}' ≤ ${formatWithUnit(t.limit, 'force', units)} in '${t.case}'`;
   }
 }
 
-/** A target's value (or limit) with its unit: a share, a length (sag, plumb offset) or a force. */
-export function targetValueText(o: Pick<TargetOutcome, 'unit'>, v: number, units: UnitSystem): string {
-  return formatWithUnit(v, o.unit === 'share' ? 'share' : o.unit === 'm' ? 'length' : 'force', units);
+/** The display kind of a target's value and limit: a share, a sag, a plumb offset (displacement) or a force. */
+export function targetValueKind(targetKind: TuningTarget['kind'] | string, unit: TargetOutcome['unit']): 'share' | 'sag' | 'displacement' | 'force' {
+  if (unit === 'share') return 'share';
+  if (unit === 'm') return targetKind === 'sag' ? 'sag' : 'displacement';
+  return 'force';
+}
+
+/** A target's value (or limit) with its unit: a share, a sag or plumb offset (mm / in) or a force. */
+export function targetValueText(o: Pick<TargetOutcome, 'unit' | 'target'>, v: number, units: UnitSystem): string {
+  return formatWithUnit(v, targetValueKind(o.target.kind, o.unit), units);
 }
 
 /** The same target words for every target of a result (index order). */

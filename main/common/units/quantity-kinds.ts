@@ -8,9 +8,9 @@
  * (unit-factors.ts, NIST SP 811 Appendix B).
  *
  * Precision rule: each kind has one resolution in its base unit (forces 10 N, lengths 1 mm,
- * displacements 0.1 mm, …); a value prints with the fewest decimals of its display unit that
+ * displacements 0.1 mm, sags 1 mm, …); a value prints with the fewest decimals of its display unit that
  * resolve it: decimals = ⌈−log10(resolution / toBase)⌉, at least 0 (kN 2, kip 3, m 3, ft 3, mm 1,
- * in 3). Kinds whose values span decades (thermal expansion) keep significant digits instead.
+ * in 3; sags mm 0, in 2). Kinds whose values span decades (thermal expansion) keep significant digits instead.
  * The resolutions are common practice for tension schedules and site work.
  */
 import {
@@ -23,7 +23,7 @@ export type UnitSystem = 'SI' | 'US';
 export const UNIT_SYSTEMS: readonly UnitSystem[] = ['SI', 'US'];
 
 export type QuantityKind =
-  | 'force' | 'moment' | 'length' | 'displacement' | 'smallLength' | 'area'
+  | 'force' | 'moment' | 'length' | 'displacement' | 'smallLength' | 'sag' | 'area'
   | 'stress' | 'strength' | 'modulus' | 'shearModulus' | 'secondMoment' | 'dragArea' | 'dragAreaPerLength'
   | 'pressure' | 'massPerLength' | 'mass' | 'period'
   | 'temperature' | 'temperatureChange' | 'thermalExpansion'
@@ -58,6 +58,11 @@ export const KINDS: Record<QuantityKind, KindInfo> = {
   moment: { noun: 'a moment', precision: { resolution: 10 }, units: { SI: { label: 'kN·m', toBase: 1e3 }, US: { label: 'kip·ft', toBase: KIP * FT } } },
   length: { noun: 'a length', precision: { resolution: 1e-3 }, units: { SI: { label: 'm', toBase: 1 }, US: { label: 'ft', toBase: FT } } },
   displacement: { noun: 'a displacement', precision: { resolution: 1e-4 }, units: { SI: { label: 'mm', toBase: 1e-3 }, US: { label: 'in', toBase: IN } } },
+  /**
+   * Sag of a cable below its chord (results, check and tuning limits, site readings): mm / in to
+   * 1 mm, as sags are read on site with a tape (common practice); one kind so every sag agrees.
+   */
+  sag: { noun: 'a sag', precision: { resolution: 1e-3 }, units: { SI: { label: 'mm', toBase: 1e-3 }, US: { label: 'in', toBase: IN } } },
   smallLength: { noun: 'a length', precision: { resolution: 1e-4 }, units: { SI: { label: 'mm', toBase: 1e-3 }, US: { label: 'in', toBase: IN } } },
   area: { noun: 'an area', precision: { resolution: 1e-7 }, units: { SI: { label: 'mm²', toBase: 1e-6 }, US: { label: 'in²', toBase: IN * IN } } },
   stress: { noun: 'a stress', precision: { resolution: 1e5 }, units: { SI: { label: 'MPa', toBase: 1e6 }, US: { label: 'ksi', toBase: KSI } } },

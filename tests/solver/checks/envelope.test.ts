@@ -39,6 +39,18 @@ describe('envelopeOf', () => {
     expect(r.minCase).toEqual(['wind', 'dead', 'wind']);
     expect(r.magnitudeMax).toBeCloseTo(Math.hypot(300, 50, 12e3), 9);
   });
+  it('a support without restrained rotations has no moment extremes', () => {
+    expect(env.reactions[0].moment).toBeUndefined();
+  });
+  it('support moments (beam models): per-component extremes with their cases, by inspection', () => {
+    const withMoments = envelopeOf({
+      cases: [
+        caseResult('dead', [], [], [{ node: 'B', force: [0, 0, 1e3], moment: [200, -50, 0] }]),
+        caseResult('wind', [], [], [{ node: 'B', force: [10, 0, 1e3], moment: [-700, 30, 5] }]),
+      ],
+    });
+    expect(withMoments.reactions[0].moment).toEqual({ max: [200, 30, 5], maxCase: ['dead', 'wind', 'wind'], min: [-700, -50, 0], minCase: ['wind', 'dead', 'dead'] });
+  });
   it('restricts to named cases', () => {
     expect(envelopeOf(report, ['dead']).members[0].tensionMax).toBe(10e3);
   });

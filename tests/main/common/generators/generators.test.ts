@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { solveProject } from '../../../../solver/index.ts';
 import type { GeneratorRecord, ProjectFile } from '../../../../solver/index.ts';
-import { GeneratorInputError, runGenerator, solveForceDensity } from '../../../../main/common/generators/index.ts';
+import { GeneratorInputError, generatorNotesText, generatorProblemText, runGenerator, solveForceDensity } from '../../../../main/common/generators/index.ts';
 import { emptyProject, mastRecord, strand } from './fixtures.ts';
 
 const saddle = (outline: 'rectangle' | 'ellipse'): GeneratorRecord => ({
@@ -89,11 +89,22 @@ describe('guyed mast parts', () => {
   it('names bad parameters', () => {
     expect(() => runGenerator(emptyProject(), mastRecord({ guyLevels: [20, 10], anchorRadius: [1, 2, 3] }))).toThrow(GeneratorInputError);
     try { runGenerator(emptyProject(), mastRecord({ guyLevels: [20, 10], guysPerLevel: 5, height: -1 })); } catch (e) {
-      const text = (e as GeneratorInputError).problems.join('\n');
+      const text = (e as GeneratorInputError).problems.map((x) => generatorProblemText(x, 'SI')).join('\n');
       expect(text).toMatch(/params\.height/);
       expect(text).toMatch(/guysPerLevel/);
       expect(text).toMatch(/guyLevels\[1\]/);
     }
+  });
+});
+
+describe('parameter problems that quote numbers read in the display units', () => {
+  it('a guy level above the mast top: 35 m and 30 m in SI, 114.829 ft and 98.425 ft in US (1 ft = 0.3048 m, NIST SP 811)', () => {
+    let problems: GeneratorInputError['problems'] = [];
+    try { runGenerator(emptyProject(), mastRecord({ height: 30, guyLevels: [14, 35] })); } catch (e) { problems = (e as GeneratorInputError).problems; }
+    const above = problems.filter((x) => typeof x !== 'string');
+    expect(above).toHaveLength(1);
+    expect(generatorProblemText(above[0], 'SI')).toBe('generators "mast" params.guyLevels[1]: 35.000 m is above the mast height 30.000 m');
+    expect(generatorProblemText(above[0], 'US')).toBe('generators "mast" params.guyLevels[1]: 114.829 ft is above the mast height 98.425 ft');
   });
 });
 
@@ -105,7 +116,7 @@ describe('canopy parameters', () => {
     const r = structuredClone(radial);
     Object.assign(r.params, { innerRadius: 20, radialCount: 2 });
     try { runGenerator(emptyProject(), r); expect.unreachable(); } catch (e) {
-      const text = (e as GeneratorInputError).problems.join('\n');
+      const text = (e as GeneratorInputError).problems.map((x) => generatorProblemText(x, 'SI')).join('\n');
       expect(text).toMatch(/innerRadius: must be smaller than outerRadius/);
       expect(text).toMatch(/radialCount: 2 must be a whole number from 3/);
     }
@@ -128,7 +139,7 @@ describe('re-running a generator', () => {
     // mast/P30a is no longer generated (top now at 28 m): "bracket" is re-attached to the new top, no old node is kept
     expect(p.nodes.some((n) => n.id === 'mast/P30a')).toBe(false);
     expect(p.members.find((m) => m.id === 'bracket')!.from).toBe('mast/P28a');
-    expect(again.notes.join('\n')).toMatch(/member "bracket" from: node "mast\/P30a" → "mast\/P28a"/);
+    expect(generatorNotesText(again.notes, 'SI').join('\n')).toMatch(/member "bracket" from: node "mast\/P30a" → "mast\/P28a"/);
     // a node still generated is simply the new one
     expect(p.nodes.filter((n) => n.id === 'mast/P14a')).toHaveLength(1);
     // unused old nodes are gone; no duplicate ids

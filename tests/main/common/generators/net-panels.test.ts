@@ -3,7 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildModel } from '../../../../solver/index.ts';
 import type { GeneratorRecord, ProjectFile } from '../../../../solver/index.ts';
-import { runGenerator } from '../../../../main/common/generators/index.ts';
+import { generatorNotesText, runGenerator } from '../../../../main/common/generators/index.ts';
 import { validateProject } from '../../../../main/common/project/index.ts';
 import { panelShares } from '../../../../solver/loads/panel-geometry.ts';
 import { emptyProject, strand } from './fixtures.ts';
@@ -69,7 +69,7 @@ describe('panels made by the net generators', () => {
     expect(again.panels!.filter((x) => x.id === 'my panel')).toHaveLength(1);
     const coarser = runGenerator(first, { ...saddle('rectangle'), params: { ...saddle('rectangle').params, spacing: 4 } });
     // the coarser net (6 × 4 bays) no longer makes N9-0: the user panel's corners move to the nearest new nodes
-    expect(coarser.notes.some((n) => n.includes('panel "my panel"'))).toBe(true);
+    expect(generatorNotesText(coarser.notes, 'SI').some((n) => n.includes('panel "my panel"'))).toBe(true);
     expect(validateProject(coarser.project).ok).toBe(true);
   });
 

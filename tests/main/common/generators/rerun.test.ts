@@ -9,9 +9,11 @@ import { describe, expect, it } from 'vitest';
 import type { GeneratorRecord, ProjectFile } from '../../../../solver/index.ts';
 import { solveProject } from '../../../../solver/index.ts';
 import { validateProject } from '../../../../main/common/project/index.ts';
-import { fitGuyedMastLevels, runGenerator, type GuyedMastParams } from '../../../../main/common/generators/index.ts';
+import { fitGuyedMastLevels, generatorNotesText, reattachText, runGenerator, type GeneratorNote, type GuyedMastParams } from '../../../../main/common/generators/index.ts';
 import { emptyProject, mastRecord } from './fixtures.ts';
 
+/** The notes as the app words them in SI. */
+const said = (notes: GeneratorNote[]) => generatorNotesText(notes, 'SI').join('\n');
 const demo = (name: string) => JSON.parse(readFileSync(new URL(`../../../../assets/${name}`, import.meta.url), 'utf8')) as ProjectFile;
 const valid = (p: ProjectFile) => expect((validateProject(p) as { errors?: string[] }).errors ?? []).toEqual([]);
 const converges = (p: ProjectFile, cases?: string[]) => {
@@ -44,14 +46,16 @@ describe('demo mast re-run at 30 m with two guy levels', () => {
     expect(out.project.checks!.tiltLimits![0].top).toBe(top.id);
     expect(out.project.checks!.displacementLimits![0].node).toBe(top.id);
     expect(out.project.checks!.upliftNodes).toEqual(['mast/base']);
-    expect(out.notes.join('\n')).toMatch(/checks\.tiltLimits\[0\] top: node "mast\/P49a" → "mast\/P\d+a" \(mast top, moved 30 m\)/);
+    expect(said(out.notes)).toMatch(/checks\.tiltLimits\[0\] top: node "mast\/P49a" → "mast\/P\d+a" \(mast top, moved 30\.000 m\)/);
+    // the same note in US units: 30 m = 98.425 ft (1 ft = 0.3048 m, NIST SP 811)
+    expect(generatorNotesText(out.notes, 'US').join('\n')).toMatch(/\(mast top, moved 98\.425 ft\)/);
   });
   it('a check on the removed third level group is dropped and said so', () => {
     const p = structuredClone(before);
     p.checks!.noSlackGroups = ['mast/guys', 'mast/guys level 3'];
     const o = runGenerator(p, { ...rec, params: params as unknown as Record<string, unknown> });
     expect(o.project.checks!.noSlackGroups).toEqual(['mast/guys']);
-    expect(o.notes.join('\n')).toContain('checks.noSlackGroups: group "mast/guys level 3" no longer exists: reference dropped');
+    expect(said(o.notes)).toContain('checks.noSlackGroups: group "mast/guys level 3" no longer exists: reference dropped');
     valid(o.project);
   });
 });
@@ -89,7 +93,7 @@ describe('demo canopy re-run on a finer grid', () => {
     const to = o.project.nodes.find((n) => n.id === l[0].node)!;
     const d = Math.hypot(to.at[0] - at[0], to.at[1] - at[1], to.at[2] - at[2]);
     for (const n of o.project.nodes) if (!n.fixed && /N\d/.test(n.id)) expect(Math.hypot(n.at[0] - at[0], n.at[1] - at[1], n.at[2] - at[2])).toBeGreaterThanOrEqual(d - 1e-9);
-    expect(o.notes.join('\n')).toMatch(/load case "point" load: node "canopy\/N3-2" → "canopy\/N\d+-\d+" \(nearest free node/);
+    expect(said(o.notes)).toMatch(/load case "point" load: node "canopy\/N3-2" → "canopy\/N\d+-\d+" \(nearest free node/);
   });
 });
 
@@ -107,14 +111,16 @@ describe('the user’s parts on removed generated parts', () => {
     expect(dangling.map((d) => `${d.entry} uses ${d.uses}`)).toEqual([
       'member "bracket" uses node "mast/P30a"', 'member "stay" uses node "mast/P29a"', 'group "mine" uses member "mast/leg 30a"',
     ]);
-    expect(dangling[0].reattachTo).toMatch(/^node "mast\/P28a" \(2 m away\)$/);
+    expect(reattachText(dangling[0].reattachTo, 'SI')).toBe('node "mast/P28a" (2.000 m away)');
+    expect(reattachText(dangling[0].reattachTo, 'US')).toBe('node "mast/P28a" (6.562 ft away)'); // 2 m / 0.3048 m per ft
+    expect(reattachText(dangling[2].reattachTo, 'SI')).toBe('member "mast/leg 28a"');
   });
   it('re-attach: member ends go to the nearest new node; no old node is kept', () => {
     const { project: p, notes } = runGenerator(first, smaller, 'reattach');
     expect(p.members.find((m) => m.id === 'bracket')!.from).toBe('mast/P28a');
     expect(p.nodes.some((n) => n.id === 'mast/P30a' || n.id === 'mast/P29a')).toBe(false);
     expect(p.groups!.find((g) => g.id === 'mine')!.members).toEqual(['bracket', 'mast/guy L2-1', 'mast/leg 28a']);
-    expect(notes.join('\n')).toMatch(/member "bracket" from: node "mast\/P30a" → "mast\/P28a" \(mast top, moved 2 m\)/);
+    expect(said(notes)).toMatch(/member "bracket" from: node "mast\/P30a" → "mast\/P28a" \(mast top, moved 2\.000 m\)/);
     // "stay" does not take the same two nodes as "bracket": the next nearest node
     expect(p.members.find((m) => m.id === 'stay')!.from).toBe('mast/P28b'); // 1.12 m away, the next nearest
     valid(p);
@@ -126,7 +132,7 @@ describe('the user’s parts on removed generated parts', () => {
     expect(p.members.some((m) => m.id === 'bracket' || m.id === 'stay')).toBe(false);
     expect(p.nodes.some((n) => n.id === 'dish')).toBe(false);
     expect(p.groups!.find((g) => g.id === 'mine')!.members).toEqual(['mast/guy L2-1']);
-    expect(notes.join('\n')).toContain('node "dish": no member is left on it: removed');
+    expect(said(notes)).toContain('node "dish": no member is left on it: removed');
     valid(p);
     noOrphans(p);
   });

@@ -39,6 +39,18 @@ describe('model pictures', () => {
     expect(scaleAcross).toBeCloseTo(scaleUp, 0);
   });
 
+  it('the scale bar is a round length in the display unit: 2 m (SI), 5 ft (US), each drawn at its true length', () => {
+    const bar = (svg: string) => {
+      const m = /aria-label="scale bar"><line x1="2" y1="8" x2="([\d.]+)"[\s\S]*?>([\d.]+ (?:m|ft))<\/text>/.exec(svg)!;
+      return { px: Number(m[1]) - 2, label: m[2] };
+    };
+    const si = bar(modelSvg(post(), 300)), us = bar(modelSvg(post(), 300, null, 'US'));
+    expect(si.label).toBe('2 m'); // span 10 m: the largest 1-2-5 step ≤ span/5
+    expect(us.label).toBe('5 ft'); // 10 m = 32.8 ft: span/5 = 6.6 ft → 5 ft
+    // 5 ft = 1.524 m (1 ft = 0.3048 m, NIST SP 811): the two bars keep the ratio of their lengths (to the 0.1 px drawn)
+    expect(us.px / si.px).toBeCloseTo(1.524 / 2, 2);
+  });
+
   it('draws the deformed shape as the model plus magnified displacements, in the plane of the sway', () => {
     const nodes = [
       { id: 'base', position: [0, 0, 0], displacement: [0, 0, 0] },

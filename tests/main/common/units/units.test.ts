@@ -105,6 +105,13 @@ describe('one precision rule per kind', () => {
     expect(formatWithUnit(0.01234, 'length', 'SI')).toBe('0.012 m');
   });
 
+  it('sags in whole mm (SI) and in to 0.01 in (US): a resolution of 1 mm (common practice for taped sags)', () => {
+    expect(decimalsOf('sag', 'SI')).toBe(0);
+    expect(decimalsOf('sag', 'US')).toBe(2); // 0.01 in = 0.254 mm ≤ 1 mm; 0.1 in = 2.54 mm would not resolve it
+    expect(formatWithUnit(0.6124, 'sag', 'SI')).toBe('612 mm');
+    expect(formatWithUnit(0.6096, 'sag', 'US')).toBe('24.00 in');
+  });
+
   it('entry text keeps six significant digits so an edited field reads back its value', () => {
     expect(entryText(12000, 'force', 'SI')).toBe('12');
     expect(entryText(4448.2216152605 * 3.25, 'force', 'US')).toBe('3.25');
