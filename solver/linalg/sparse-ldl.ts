@@ -35,6 +35,13 @@ export interface SparseLDLOptions {
   decoupledDofs?: ArrayLike<number>;
 }
 
+/** A copy of a numeric factor (SparseLDL.saveFactor), valid for the SparseLDL that made it. */
+export interface FactorSnapshot {
+  readonly owner: object;
+  readonly arrays: Float64Array[];
+  readonly negatives: number;
+}
+
 /** Default pivot tolerance: a pivot smaller than 1e-12 of its original diagonal counts as zero. */
 export const DEFAULT_PIVOT_TOLERANCE = 1e-12;
 const TINY = 1e-300;
@@ -161,6 +168,32 @@ export class SparseLDL {
     let j = 0;
     while (colPtr[j + 1] <= q) j++;
     return `(${rowIdx[q]}, ${j})`;
+  }
+
+  /** Doubles a snapshot of the numeric factor holds (saveFactor). */
+  get factorStorage(): number {
+    let size = 0;
+    for (const a of this.backend.factorArrays()) size += a.length;
+    return size;
+  }
+
+  /**
+   * A copy of the last successful factor (null when there is none), to be put back with
+   * restoreFactor on this object: a later solve then gives what it gave right after that
+   * factor(), bit for bit, without factorising again.
+   */
+  saveFactor(): FactorSnapshot | null {
+    if (!this.factored) return null;
+    return { owner: this, arrays: this.backend.factorArrays().map((a) => a.slice()), negatives: this.negatives };
+  }
+
+  /** Makes a snapshot of saveFactor the current factor again (no allocation). */
+  restoreFactor(snapshot: FactorSnapshot): void {
+    if (snapshot.owner !== this) throw new Error('SparseLDL.restoreFactor: the snapshot belongs to another factorisation');
+    const arrays = this.backend.factorArrays();
+    for (let k = 0; k < arrays.length; k++) arrays[k].set(snapshot.arrays[k]);
+    this.negatives = snapshot.negatives;
+    this.factored = true;
   }
 
   /** Number of negative entries of D after the last successful factor. */

@@ -164,6 +164,8 @@ export class SupernodalLDL implements FactorBackend {
   }
 
 
+  factorArrays(): Float64Array[] { return [this.Lx, this.D]; }
+
   negativeCount(): number {
     let c = 0;
     for (let j = 0; j < this.st.n; j++) if (this.D[j] < 0) c++;
