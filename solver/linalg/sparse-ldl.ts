@@ -72,6 +72,7 @@ export class SparseLDL {
   private readonly keep: Int32Array | null;
   private readonly reducedValues: Float64Array | null;
   private readonly work: Float64Array;
+  private readonly nonFinite = new Int32Array(1);
   private negatives = 0;
   private factored = false;
 
@@ -138,13 +139,16 @@ export class SparseLDL {
     if (!(pivotTolerance >= 0 && pivotTolerance < 1)) {
       throw new Error(`SparseLDL.factor: pivotTolerance must be in [0, 1), got ${pivotTolerance}`);
     }
-    this.checkFinite(values);
     this.factored = false;
     let v = values;
     if (this.keep && this.reducedValues) {
-      const bad = gatherKeptValues(this.keep, values, this.reducedValues);
+      // One pass gathers the kept values and finds the first non-finite entry (checkFinite's).
+      const bad = gatherKeptValues(this.keep, values, this.reducedValues, this.nonFinite);
+      if (this.nonFinite[0] >= 0) this.throwNonFinite(values, this.nonFinite[0]);
       if (bad >= 0) throw new Error(`SparseLDL.factor: entry ${this.entryName(bad)} couples a DOF declared decoupled but is ${values[bad]}, not 0`);
       v = this.reducedValues;
+    } else {
+      this.checkFinite(values);
     }
     const k = this.backend.factor(v, pivotTolerance, TINY);
     if (k >= 0) return this.perm[k];
@@ -157,7 +161,10 @@ export class SparseLDL {
   private checkFinite(values: Float64Array): void {
     let bad = -1;
     for (let q = 0; q < values.length; q++) if (values[q] - values[q] !== 0) { bad = q; break; } // NaN or ±∞
-    if (bad < 0) return;
+    if (bad >= 0) this.throwNonFinite(values, bad);
+  }
+
+  private throwNonFinite(values: Float64Array, bad: number): never {
     this.factored = false;
     throw new Error(`SparseLDL.factor: matrix entry ${this.entryName(bad)} is ${values[bad]}; the tangent must be finite`);
   }
