@@ -11,15 +11,15 @@
  */
 import type { FactorSnapshot, SparseLDL } from '../linalg/index.ts';
 
-interface Entry { bits: Int32Array; tolerance: number; snapshot: FactorSnapshot }
+interface Entry { bits: Int32Array; tolerance: number; snapshot: FactorSnapshot; size: number }
 
 export class StartFactorCache {
   private entries: Entry[] = [];
 
   /**
    * @param maxEntries factors kept (the least recently used one is dropped first)
-   * @param maxDoubles storage of all entries together, in doubles (factor plus key): a model whose
-   *   factor alone exceeds it is never cached (the large nets, where few cases are run anyway)
+   * @param maxDoubles storage of all entries together, in doubles (factor plus key; 4 M = 32 MB):
+   *   fewer entries are kept for larger models, none where one alone exceeds it (the largest nets)
    */
   constructor(private readonly maxEntries = 4, private readonly maxDoubles = 4_000_000) {}
 
@@ -40,11 +40,15 @@ export class StartFactorCache {
   /** Keeps the factor just computed from these values (call right after a successful factor). */
   remember(ldl: SparseLDL, values: Float64Array, tolerance: number): void {
     const size = ldl.factorStorage + values.length;
-    if (size * this.maxEntries > this.maxDoubles) return;
+    if (size > this.maxDoubles) return;
     const snapshot = ldl.saveFactor();
     if (!snapshot) return;
-    this.entries.unshift({ bits: bitsOf(values).slice(), tolerance, snapshot });
-    if (this.entries.length > this.maxEntries) this.entries.length = this.maxEntries;
+    this.entries.unshift({ bits: bitsOf(values).slice(), tolerance, snapshot, size });
+    let total = 0;
+    for (let k = 0; k < this.entries.length; k++) {
+      total += this.entries[k].size;
+      if (k >= this.maxEntries || total > this.maxDoubles) { this.entries.length = k; break; }
+    }
   }
 
   clear(): void { this.entries = []; }

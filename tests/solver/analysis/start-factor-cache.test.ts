@@ -12,6 +12,9 @@ import { buildModel } from '../../../solver/model/build-model.ts';
 import { createWorkspace, setElementPrestress } from '../../../solver/analysis/workspace.ts';
 import { solveCase, type CaseSolution } from '../../../solver/analysis/solve-case.ts';
 import { resolveCaseLoads } from '../../../solver/loads/resolve-case-loads.ts';
+import { StartFactorCache } from '../../../solver/analysis/start-factor-cache.ts';
+import { SparseLDL } from '../../../solver/linalg/index.ts';
+import { prng, randomSystem } from '../linalg/random-systems.ts';
 
 const demo = JSON.parse(readFileSync(new URL('../../../assets/demo-mast.stayset', import.meta.url), 'utf8')) as ProjectFile;
 
@@ -58,5 +61,34 @@ describe('start factor cache', () => {
     const fresh = createWorkspace(freshModel);
     setElementPrestress(fresh, elements, Lr, S0);
     expect(comparable(again)).toEqual(comparable(solveCase(fresh, spec.id, resolveCaseLoads(freshModel, demo, spec))));
+  });
+
+  it('keeps what fits: the entry count and the storage bound drop the least recently used factor', () => {
+    const a = randomSystem(prng(11), 20, 3, 0.2);
+    const ldl = SparseLDL.analyse(a.pattern, { blockSize: 3 });
+    const tangents = [1, 2, 3].map((k) => a.values.map((v) => v * (1 + 0.1 * k)));
+    const size = ldl.factorStorage + a.values.length;
+    const solveWith = (cache: StartFactorCache, t: Float64Array): boolean => cache.reuse(ldl, t, 1e-12);
+    // Room for two by storage (four by count): the first of three is dropped.
+    const byStorage = new StartFactorCache(4, 2 * size + 1);
+    for (const t of tangents) { expect(ldl.factor(t)).toBe(-1); byStorage.remember(ldl, t, 1e-12); }
+    expect(tangents.map((t) => solveWith(byStorage, t))).toEqual([false, true, true]);
+    // Room for one by count.
+    const byCount = new StartFactorCache(1);
+    for (const t of tangents) { expect(ldl.factor(t)).toBe(-1); byCount.remember(ldl, t, 1e-12); }
+    expect(tangents.map((t) => solveWith(byCount, t))).toEqual([false, false, true]);
+    // A factor larger than the whole bound is never kept; another pivot tolerance is another key.
+    const tooSmall = new StartFactorCache(4, size - 1);
+    tooSmall.remember(ldl, tangents[2], 1e-12);
+    expect(solveWith(tooSmall, tangents[2])).toBe(false);
+    expect(byCount.reuse(ldl, tangents[2], 1e-10)).toBe(false);
+    // A reused factor solves as the fresh one did, bit for bit.
+    const rhs = Float64Array.from({ length: a.pattern.n }, (_, i) => 1 + (i % 7));
+    const fresh = new Float64Array(rhs.length), reused = new Float64Array(rhs.length);
+    ldl.factor(tangents[2]); ldl.solve(rhs, fresh);
+    ldl.factor(tangents[0]);
+    expect(solveWith(byCount, tangents[2])).toBe(true);
+    ldl.solve(rhs, reused);
+    expect(Array.from(reused)).toEqual(Array.from(fresh));
   });
 });
