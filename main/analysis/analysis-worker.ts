@@ -16,6 +16,7 @@ import { caseClaimer, caseIds } from './case-shares.ts';
 import { failureHint } from '../common/project/plausibility/failure-hint.ts';
 import { runSiteRequest } from '../common/site/site-run.ts';
 import { serveTuneHelper } from './tune-helper.ts';
+import { packCases } from './packed-cases.ts';
 import { CANCEL_REQUESTED, transferablesOf, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
 
 function post(message: WorkerMessage, transfer: ArrayBuffer[] = []): void {
@@ -47,7 +48,12 @@ async function run(): Promise<void> {
       })
       : solveProject(data.project, { isCancelled: () => Atomics.load(flag, 0) === CANCEL_REQUESTED, onProgress },
         data.claims ? { nextCase: caseClaimer(caseIds(data.project, data.only), data.claims, data.claimSlot ?? 2) } : data.only ? { only: data.only } : {});
-    post({ type: 'done', report: solution.report, fields: solution.fields }, transferablesOf(solution.fields));
+    if (data.claims) {
+      const { packed, transfer } = packCases(solution.report.cases);
+      post({ type: 'share-done', cases: packed, stats: solution.report.stats, fields: solution.fields }, [...transfer, ...transferablesOf(solution.fields)]);
+    } else {
+      post({ type: 'done', report: solution.report, fields: solution.fields }, transferablesOf(solution.fields));
+    }
   } catch (e) {
     // A helper's failure is reported by the thread that shares the cases, with the hint added once.
     post({ type: 'failed', error: (e instanceof Error ? e.message : String(e)) + (data.claims ? '' : failureHint(data.project)) });

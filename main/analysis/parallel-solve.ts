@@ -22,6 +22,7 @@ import { analysisWorkerUrl } from './worker-location.ts';
 import { CANCEL_REQUESTED, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
 import { caseClaimer, caseIds, claimedBy, createClaims, defaultWorkerCount } from './case-shares.ts';
 import { hasActionCases } from '../../solver/index.ts';
+import { unpackCases } from './packed-cases.ts';
 
 export interface ParallelSolveOptions {
   /** Threads, the calling one included; default defaultWorkerCount. */
@@ -59,6 +60,7 @@ function startHelper(project: ProjectFile, slot: number, claims: SharedArrayBuff
     worker.on('message', (m: WorkerMessage) => {
       if (m.type === 'progress') progress(m.progress);
       else if (m.type === 'done') settle(() => resolve({ report: m.report, fields: m.fields }));
+      else if (m.type === 'share-done') settle(() => resolve({ report: { cases: unpackCases(m.cases), stats: m.stats }, fields: m.fields }));
       else if (m.type === 'failed') settle(() => reject(new Error(m.error)));
     });
     worker.on('error', (e) => settle(() => reject(e)));

@@ -6,11 +6,13 @@
  * Atomics.load between Newton iterations (SolveControl.isCancelled).
  *
  * The report is plain JSON-able data; the per-case typed arrays (CaseFields) cross the boundary
- * as transferred ArrayBuffers (no copy).
+ * as transferred ArrayBuffers (no copy). A helper of a parallel run sends its cases packed
+ * (packed-cases.ts: the node and member records' numbers as transferred arrays).
  */
 import type { CaseFields, ProjectFile, SolveProgress, SolveReport } from '../../solver/index.ts';
 import type { SiteOutcome, SiteRequest } from '../common/site/site-run.ts';
 import type { TuneHelperSetup } from './tune-messages.ts';
+import type { PackedCases } from './packed-cases.ts';
 
 export interface AnalysisWorkerData {
   project: ProjectFile;
@@ -36,6 +38,8 @@ export interface AnalysisWorkerData {
 export type WorkerMessage =
   | { type: 'progress'; progress: SolveProgress }
   | { type: 'done'; report: SolveReport; fields: CaseFields[] }
+  /** A helper's share (data.claims set): its cases packed (packed-cases.ts), the report's stats and the fields. */
+  | { type: 'share-done'; cases: PackedCases; stats?: SolveReport['stats']; fields: CaseFields[] }
   | { type: 'failed'; error: string }
   | { type: 'site-done'; outcome: SiteOutcome };
 
@@ -50,7 +54,7 @@ export function createCancelFlag(): { buffer: SharedArrayBuffer; view: Int32Arra
 export function transferablesOf(fields: CaseFields[]): ArrayBuffer[] {
   const seen = new Set<ArrayBuffer>();
   for (const f of fields) {
-    for (const a of [f.positions, f.elementTension, f.elementSlack]) {
+    for (const a of [f.positions, f.elementTension, f.elementSlack, f.elementEndForces]) {
       if (a && a.buffer instanceof ArrayBuffer) seen.add(a.buffer);
     }
   }

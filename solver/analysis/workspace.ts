@@ -7,6 +7,7 @@ import { buildBlockPattern, type BlockPattern } from '../assembly/block-pattern.
 import { assemble, createElementState, startVectors, type ElementState } from '../assembly/assemble.ts';
 import { SparseLDL } from '../linalg/index.ts';
 import { stressFreeLength } from '../model/build-model.ts';
+import { StartFactorCache } from './start-factor-cache.ts';
 
 export interface Workspace {
   model: AnalysisModel;
@@ -29,6 +30,8 @@ export interface Workspace {
   positions: Float64Array;
   /** Characteristic size of the model (bounding-box diagonal), m. */
   size: number;
+  /** Factors of the tangents at the pretensioned state met so far (start-factor-cache.ts). */
+  startFactors: StartFactorCache;
 }
 
 export function createWorkspace(model: AnalysisModel): Workspace {
@@ -45,6 +48,7 @@ export function createWorkspace(model: AnalysisModel): Workspace {
     fInt: new Float64Array(n), fExt: new Float64Array(n), residual: new Float64Array(n),
     step: new Float64Array(n), trial: new Float64Array(n), elements, startVectors: dX,
     stepStart: new Float64Array(n), positions: new Float64Array(3 * model.nodeCount), size: modelSize(model.coords),
+    startFactors: new StartFactorCache(),
   };
 }
 
@@ -74,4 +78,5 @@ export function setElementPrestress(
     m.elemUnstressedLength[e] = stressFreeLength(refLength[k], initialStress[k], m.elemE[e]);
   }
   assemble(m, null, ws.startVectors, new Float64Array(m.dofs.count), 0, ws.fInt0, ws.elements, null);
+  ws.startFactors.clear();
 }

@@ -33,14 +33,17 @@ export function dropDecoupledEntries(p: SymmetricPattern, decoupled: ArrayLike<n
 
 /**
  * out[keep[q]] = values[q] for kept entries; returns the first dropped entry q whose value is not
- * 0, or -1. No allocation.
+ * 0, or -1. No allocation. With `finite` given, finite[0] receives the first entry q (kept or
+ * dropped) that is NaN or infinite, or -1 — the same pass instead of a scan of its own.
  */
-export function gatherKeptValues(keep: Int32Array, values: Float64Array, out: Float64Array): number {
-  let bad = -1;
+export function gatherKeptValues(keep: Int32Array, values: Float64Array, out: Float64Array, finite?: Int32Array): number {
+  let bad = -1, nonFinite = -1;
   for (let q = 0; q < keep.length; q++) {
-    const k = keep[q];
-    if (k >= 0) out[k] = values[q];
-    else if (values[q] !== 0 && bad < 0) bad = q;
+    const k = keep[q], v = values[q];
+    if (v - v !== 0 && nonFinite < 0) nonFinite = q; // NaN or ±∞
+    if (k >= 0) out[k] = v;
+    else if (v !== 0 && bad < 0) bad = q;
   }
+  if (finite) finite[0] = nonFinite;
   return bad;
 }

@@ -13,6 +13,16 @@ export function factorPanel(
   aDiag: Float64Array, tol: number, tiny: number, w: Float64Array, w2: Float64Array,
   tmp: Float64Array, tmp2: Float64Array,
 ): number {
+  if (nc === 3) return factorPanel3(Lx, base, nr, D, f, aDiag, tol, tiny);
+  return factorPanelGeneral(Lx, base, nr, nc, D, f, aDiag, tol, tiny, w, w2, tmp, tmp2);
+}
+
+/** factorPanel for any number of columns (the reference of factorPanel3). */
+export function factorPanelGeneral(
+  Lx: Float64Array, base: number, nr: number, nc: number, D: Float64Array, f: number,
+  aDiag: Float64Array, tol: number, tiny: number, w: Float64Array, w2: Float64Array,
+  tmp: Float64Array, tmp2: Float64Array,
+): number {
   let j = 0;
   // Two columns at a time: the updates from columns t < j share their loads (as in the update).
   for (; j + 2 <= nc; j += 2) {
@@ -49,6 +59,26 @@ export function factorPanel(
     if (bad >= 0) return bad;
   }
   return -1;
+}
+
+/**
+ * factorPanel for a panel of 3 columns (one node's translations: most supernodes of chains and
+ * masts) without the dense buffers: the same operations in the same order — column 2's update is
+ * accumulateColumns' 0 + (l_i0 w_0 + l_i1 w_1) — so the same bits.
+ */
+export function factorPanel3(
+  Lx: Float64Array, base: number, nr: number, D: Float64Array, f: number, aDiag: Float64Array, tol: number, tiny: number,
+): number {
+  const c0 = base, c1 = base + nr, c2 = base + 2 * nr;
+  let bad = finishColumn(Lx, c0, 0, nr, D, f, aDiag, tol, tiny);
+  if (bad >= 0) return bad;
+  const wj = Lx[c0 + 1] * D[f];
+  if (wj !== 0) for (let i = 1; i < nr; i++) Lx[c1 + i] -= Lx[c0 + i] * wj;
+  bad = finishColumn(Lx, c1, 1, nr, D, f, aDiag, tol, tiny);
+  if (bad >= 0) return bad;
+  const w0 = Lx[c0 + 2] * D[f], w1 = Lx[c1 + 2] * D[f + 1];
+  for (let i = 2; i < nr; i++) Lx[c2 + i] -= 0 + (Lx[c0 + i] * w0 + Lx[c1 + i] * w1);
+  return finishColumn(Lx, c2, 2, nr, D, f, aDiag, tol, tiny);
 }
 
 /** Pivot test, D entry and scaling of an updated panel column j (at offset cj). */

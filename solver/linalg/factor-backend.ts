@@ -10,6 +10,8 @@ export interface FactorBackend {
   solveInPlace(x: Float64Array): void;
   /** Number of negative entries of D from the last factor. */
   negativeCount(): number;
+  /** The arrays that hold the numeric factor (copied out and back by SparseLDL's snapshots). */
+  factorArrays(): Float64Array[];
   /** nnz(L) including the unit diagonal. */
   readonly factorNonzeros: number;
 }

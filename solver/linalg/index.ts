@@ -2,6 +2,6 @@
 export type { SymmetricPattern } from './symmetric-pattern.ts';
 export { validatePattern, patternFromCoordinates, findEntry, symmetricMultiply } from './symmetric-pattern.ts';
 export { SparseLDL, DEFAULT_PIVOT_TOLERANCE } from './sparse-ldl.ts';
-export type { SparseLDLOptions } from './sparse-ldl.ts';
+export type { SparseLDLOptions, FactorSnapshot } from './sparse-ldl.ts';
 export { fillReducingOrdering } from './ordering.ts';
 export { writeMatrixMarketSymmetric, writeMatrixMarketDenseVector } from './matrix-market.ts';

@@ -25,4 +25,6 @@ export class SimplicialBackend implements FactorBackend {
   solveInPlace(x: Float64Array): void { this.ldl.solveInPlace(x); }
 
   negativeCount(): number { return this.ldl.negativeCount(); }
+
+  factorArrays(): Float64Array[] { return [this.ldl.Lx, this.ldl.D]; }
 }

@@ -35,6 +35,13 @@ export interface SparseLDLOptions {
   decoupledDofs?: ArrayLike<number>;
 }
 
+/** A copy of a numeric factor (SparseLDL.saveFactor), valid for the SparseLDL that made it. */
+export interface FactorSnapshot {
+  readonly owner: object;
+  readonly arrays: Float64Array[];
+  readonly negatives: number;
+}
+
 /** Default pivot tolerance: a pivot smaller than 1e-12 of its original diagonal counts as zero. */
 export const DEFAULT_PIVOT_TOLERANCE = 1e-12;
 const TINY = 1e-300;
@@ -65,6 +72,7 @@ export class SparseLDL {
   private readonly keep: Int32Array | null;
   private readonly reducedValues: Float64Array | null;
   private readonly work: Float64Array;
+  private readonly nonFinite = new Int32Array(1);
   private negatives = 0;
   private factored = false;
 
@@ -131,13 +139,16 @@ export class SparseLDL {
     if (!(pivotTolerance >= 0 && pivotTolerance < 1)) {
       throw new Error(`SparseLDL.factor: pivotTolerance must be in [0, 1), got ${pivotTolerance}`);
     }
-    this.checkFinite(values);
     this.factored = false;
     let v = values;
     if (this.keep && this.reducedValues) {
-      const bad = gatherKeptValues(this.keep, values, this.reducedValues);
+      // One pass gathers the kept values and finds the first non-finite entry (checkFinite's).
+      const bad = gatherKeptValues(this.keep, values, this.reducedValues, this.nonFinite);
+      if (this.nonFinite[0] >= 0) this.throwNonFinite(values, this.nonFinite[0]);
       if (bad >= 0) throw new Error(`SparseLDL.factor: entry ${this.entryName(bad)} couples a DOF declared decoupled but is ${values[bad]}, not 0`);
       v = this.reducedValues;
+    } else {
+      this.checkFinite(values);
     }
     const k = this.backend.factor(v, pivotTolerance, TINY);
     if (k >= 0) return this.perm[k];
@@ -150,7 +161,10 @@ export class SparseLDL {
   private checkFinite(values: Float64Array): void {
     let bad = -1;
     for (let q = 0; q < values.length; q++) if (values[q] - values[q] !== 0) { bad = q; break; } // NaN or ±∞
-    if (bad < 0) return;
+    if (bad >= 0) this.throwNonFinite(values, bad);
+  }
+
+  private throwNonFinite(values: Float64Array, bad: number): never {
     this.factored = false;
     throw new Error(`SparseLDL.factor: matrix entry ${this.entryName(bad)} is ${values[bad]}; the tangent must be finite`);
   }
@@ -161,6 +175,32 @@ export class SparseLDL {
     let j = 0;
     while (colPtr[j + 1] <= q) j++;
     return `(${rowIdx[q]}, ${j})`;
+  }
+
+  /** Doubles a snapshot of the numeric factor holds (saveFactor). */
+  get factorStorage(): number {
+    let size = 0;
+    for (const a of this.backend.factorArrays()) size += a.length;
+    return size;
+  }
+
+  /**
+   * A copy of the last successful factor (null when there is none), to be put back with
+   * restoreFactor on this object: a later solve then gives what it gave right after that
+   * factor(), bit for bit, without factorising again.
+   */
+  saveFactor(): FactorSnapshot | null {
+    if (!this.factored) return null;
+    return { owner: this, arrays: this.backend.factorArrays().map((a) => a.slice()), negatives: this.negatives };
+  }
+
+  /** Makes a snapshot of saveFactor the current factor again (no allocation). */
+  restoreFactor(snapshot: FactorSnapshot): void {
+    if (snapshot.owner !== this) throw new Error('SparseLDL.restoreFactor: the snapshot belongs to another factorisation');
+    const arrays = this.backend.factorArrays();
+    for (let k = 0; k < arrays.length; k++) arrays[k].set(snapshot.arrays[k]);
+    this.negatives = snapshot.negatives;
+    this.factored = true;
   }
 
   /** Number of negative entries of D after the last successful factor. */

@@ -2,6 +2,7 @@ import type { FactorBackend } from './factor-backend.ts';
 import type { SupernodalStructure } from './supernodal-symbolic.ts';
 import { accumulateColumns, accumulateColumnsTwice } from './dense-kernels.ts';
 import { factorPanel } from './dense-panel.ts';
+import { updateFrom3, updateFrom6 } from './small-updates.ts';
 
 /**
  * Supernodal left-looking LDLᵀ without pivoting (the supernodal form of the left-looking
@@ -164,6 +165,8 @@ export class SupernodalLDL implements FactorBackend {
   }
 
 
+  factorArrays(): Float64Array[] { return [this.Lx, this.D]; }
+
   negativeCount(): number {
     let c = 0;
     for (let j = 0; j < this.st.n; j++) if (this.D[j] < 0) c++;
@@ -185,6 +188,20 @@ function updateFromDescendant(
   const m = nrd - i1;
   for (let ii = 0; ii < m; ii++) relBuf[ii] = relMap[rows[rpd + i1 + ii]];
   const ncu = i2 - i1;
+  if (ncd === 3) updateFrom3(Lx, D, relBuf, based, nrd, fd, i1, m, ncu, base, nr);
+  else if (ncd === 6) updateFrom6(Lx, D, relBuf, based, nrd, fd, i1, m, ncu, base, nr);
+  else updateGeneral(Lx, D, w, w2, tmp, tmp2, relBuf, based, nrd, fd, ncd, i1, m, ncu, base, nr);
+}
+
+/**
+ * The update for any number of descendant columns, through the dense buffers (the reference of
+ * small-updates.ts); relBuf holds the target's local rows of the descendant's rows i1.. (m of them).
+ */
+export function updateGeneral(
+  Lx: Float64Array, D: Float64Array, w: Float64Array, w2: Float64Array, tmp: Float64Array, tmp2: Float64Array,
+  relBuf: Int32Array, based: number, nrd: number, fd: number, ncd: number, i1: number, m: number, ncu: number,
+  base: number, nr: number,
+): void {
   let j = 0;
   // Two target columns at a time: each loaded entry of L_d serves both.
   for (; j + 2 <= ncu; j += 2) {

@@ -51,4 +51,21 @@ describe('SparseLDL with decoupled (restrained) DOFs', () => {
     expect(() => reduced.factor(broken)).toThrow(/couples a DOF declared decoupled but is 0.5, not 0/);
     expect(() => SparseLDL.analyse(sys.pattern, { decoupledDofs: new Uint8Array(3) })).toThrow(/decoupledDofs has 3 entries/);
   });
+
+  it('names the first non-finite entry, kept or dropped, before any decoupling complaint', () => {
+    const reduced = SparseLDL.analyse(sys.pattern, { decoupledDofs: restrained });
+    const dropped: number[] = [], kept: number[] = [];
+    for (let c = 0; c < n; c++) {
+      for (let p = colPtr[c] + 1; p < colPtr[c + 1]; p++) (restrained[rowIdx[p]] || restrained[c] ? dropped : kept).push(p);
+    }
+    const name = (q: number): string => { let c = 0; while (colPtr[c + 1] <= q) c++; return `(${rowIdx[q]}, ${c})`; };
+    for (const [q, v] of [[kept[0], Number.NaN], [dropped[0], Number.POSITIVE_INFINITY]] as const) {
+      const broken = Float64Array.from(values);
+      broken[q] = v;
+      broken[dropped[dropped.length - 1]] = 0.5; // a later decoupling fault: the non-finite entry is named first
+      if (q === dropped[dropped.length - 1]) continue;
+      expect(() => reduced.factor(broken)).toThrow(`matrix entry ${name(q)} is ${v}; the tangent must be finite`);
+    }
+    expect(reduced.factor(values)).toBe(-1); // and the next finite tangent factorises as usual
+  });
 });
