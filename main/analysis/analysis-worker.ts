@@ -4,6 +4,8 @@
  * cases in `only` (default all); with `workers` > 1 it shares the cases with workers of its own
  * (parallel-solve.ts, this thread solving too) and passes their progress and merged result on;
  * as a helper of such a run (`claims`) it solves the cases it claims (case-shares.ts).
+ * A run of every case also posts the design checks of its report (checkOutcome), so the app's
+ * main thread does not run them again.
  * With `site` set it runs that site request instead (main/common/site/site-run.ts) and posts 'site-done'.
  */
 import { parentPort, resourceLimits, workerData } from 'node:worker_threads';
@@ -14,6 +16,7 @@ import { createProgressThrottle } from './progress-throttle.ts';
 import { caseClaimer, caseIds } from './case-shares.ts';
 import { failureHint } from '../common/project/plausibility/failure-hint.ts';
 import { runSiteRequest } from '../common/site/site-run.ts';
+import { checkOutcome } from '../common/checks/check-outcome.ts';
 import { CANCEL_REQUESTED, transferablesOf, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
 
 function post(message: WorkerMessage, transfer: ArrayBuffer[] = []): void {
@@ -41,7 +44,8 @@ async function run(): Promise<void> {
       })
       : solveProject(data.project, { isCancelled: () => Atomics.load(flag, 0) === CANCEL_REQUESTED, onProgress },
         data.claims ? { nextCase: caseClaimer(caseIds(data.project, data.only), data.claims, data.claimSlot ?? 2) } : data.only ? { only: data.only } : {});
-    post({ type: 'done', report: solution.report, fields: solution.fields }, transferablesOf(solution.fields));
+    const checks = data.claims || data.only ? undefined : checkOutcome(data.project, solution.report);
+    post({ type: 'done', report: solution.report, fields: solution.fields, ...(checks ? { checks } : {}) }, transferablesOf(solution.fields));
   } catch (e) {
     // A helper's failure is reported by the thread that shares the cases, with the hint added once.
     post({ type: 'failed', error: (e instanceof Error ? e.message : String(e)) + (data.claims ? '' : failureHint(data.project)) });

@@ -10,6 +10,7 @@
  */
 import type { CaseFields, ProjectFile, SolveProgress, SolveReport } from '../../solver/index.ts';
 import type { SiteOutcome, SiteRequest } from '../common/site/site-run.ts';
+import type { CheckOutcome } from '../common/checks/check-outcome.ts';
 
 export interface AnalysisWorkerData {
   project: ProjectFile;
@@ -32,7 +33,8 @@ export interface AnalysisWorkerData {
 
 export type WorkerMessage =
   | { type: 'progress'; progress: SolveProgress }
-  | { type: 'done'; report: SolveReport; fields: CaseFields[] }
+  /** `checks`: the design checks of the report (a run of every case; helpers of a parallel run leave them out). */
+  | { type: 'done'; report: SolveReport; fields: CaseFields[]; checks?: CheckOutcome }
   | { type: 'failed'; error: string }
   | { type: 'site-done'; outcome: SiteOutcome };
 

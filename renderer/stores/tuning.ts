@@ -2,7 +2,8 @@
  * Pretension tuning state: the group and case behind the live slider, the last live step, and
  * the last tuning run (targets, diagnosis). The slider's re-solves and tuning runs happen in a
  * module worker (renderer/tuning); results of a live step are shown through the results store
- * (setLive), so the 3D colours, the member table and the checks follow the slider.
+ * (setLive), so the 3D colours, the member table and the checks follow the slider; the worker runs
+ * the design checks with each step (the main thread does not).
  * Results are for review by a qualified engineer; local codes and licensed practice govern.
  */
 import { defineStore, storeToRefs } from 'pinia';
@@ -116,7 +117,10 @@ export const useTuningStore = defineStore('tuning', () => {
     const p = project.value;
     if (!p) return;
     lastStep.value = markRaw(summariseStep(p, step));
-    if (step.result) results.setLive({ caseId: step.caseId, group: step.group, pretension: step.pretension, result: step.result });
+    if (step.result) {
+      const checked = step.checks ? { checks: step.checks, checksProject: step.checksProject, checksReport: step.checksReport } : {};
+      results.setLive({ caseId: step.caseId, group: step.group, pretension: step.pretension, result: step.result, ...checked });
+    }
   }
 
   function drag(group: string, pretension: number): void {
@@ -125,7 +129,7 @@ export const useTuningStore = defineStore('tuning', () => {
     dragValue.value = { group, value: pretension };
     if (results.caseIds.includes(caseId.value) && results.caseId !== caseId.value) results.selectCase(caseId.value);
     channel ??= new LiveChannel(onStep);
-    channel.drag(p, revision.value, caseId.value, group, pretension);
+    channel.drag(p, revision.value, caseId.value, group, pretension, results.report);
   }
 
   function edit(label: string, produce: (p: ProjectFile) => ProjectFile): boolean {
