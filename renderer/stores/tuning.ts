@@ -11,7 +11,7 @@ import { computed, markRaw, ref, shallowRef, watch } from 'vue';
 import type { ProjectFile, TargetOutcome, TuningResult } from '../../solver/index.ts';
 import { membersOfGroup, referenceCaseId } from '../../solver/index.ts';
 import { useProjectStore } from './project.ts';
-import { useResultsStore } from './results.ts';
+import { useResultsStore, type LiveOverride } from './results.ts';
 import { useSettingsStore } from './settings.ts';
 import { targetText, tuningDiagnosisText, tuningSummaryText } from '../../main/common/tuning/tuning-text.ts';
 import { LiveChannel, runTuning, type LiveStepOutcome, type TuningRun } from '../tuning/tuning-client.ts';
@@ -39,6 +39,13 @@ export function summariseStep(project: ProjectFile, step: LiveStepOutcome): Live
     sag = Math.max(sag, m.sag);
   }
   return { converged: true, seconds: step.seconds, tensionMax: Number.isFinite(tensionMax) ? tensionMax : undefined, sag };
+}
+
+/** What a live step puts in place of its case in the results store (with the worker's checks), or null without a result. */
+export function liveOverrideOf(step: LiveStepOutcome): LiveOverride | null {
+  if (!step.result) return null;
+  const checked = step.checks ? { checks: step.checks, checksProject: step.checksProject, checksReport: step.checksReport } : {};
+  return { caseId: step.caseId, group: step.group, pretension: step.pretension, result: step.result, ...checked };
 }
 
 export const useTuningStore = defineStore('tuning', () => {
@@ -117,10 +124,8 @@ export const useTuningStore = defineStore('tuning', () => {
     const p = project.value;
     if (!p) return;
     lastStep.value = markRaw(summariseStep(p, step));
-    if (step.result) {
-      const checked = step.checks ? { checks: step.checks, checksProject: step.checksProject, checksReport: step.checksReport } : {};
-      results.setLive({ caseId: step.caseId, group: step.group, pretension: step.pretension, result: step.result, ...checked });
-    }
+    const live = liveOverrideOf(step);
+    if (live) results.setLive(live);
   }
 
   function drag(group: string, pretension: number): void {
