@@ -17,7 +17,7 @@ import type { CheckReport, Envelope, ItemStatus, ProjectFile, SolveReport } from
 import { envelopeOf } from '../../solver/index.ts';
 import { checkOutcome, sameCheckSettings, withCheckSettings, type CheckOutcome } from '../../main/common/checks/check-outcome.ts';
 import { useProjectStore } from './project.ts';
-import { useResultsStore } from './results.ts';
+import { ANALYSIS_INPUTS, useResultsStore } from './results.ts';
 
 export type { CheckOutcome };
 
@@ -35,6 +35,21 @@ const NONE: CheckOutcome = { report: null, error: null };
 export const useChecksStore = defineStore('checks', () => {
   const { project } = storeToRefs(useProjectStore());
   const { effectiveReport, report: analysed, live, resultProject, analysedChecks } = storeToRefs(useResultsStore());
+
+  /**
+   * The project the shown results and checks are about: the analysed model under the current
+   * check settings (the current project before any run). The same object while neither changes,
+   * so what is built from it (the results table's rows) is not built again on a model edit.
+   */
+  let modelCache: ProjectFile | null = null;
+  const checkedModel = computed<ProjectFile | null>(() => {
+    const p = project.value;
+    if (!p) return null;
+    const next = withCheckSettings(resultProject.value ?? p, p);
+    if (modelCache && next !== modelCache && ANALYSIS_INPUTS.every((k) => modelCache![k] === next[k]) && sameCheckSettings(modelCache, next)) return modelCache;
+    modelCache = next;
+    return next;
+  });
 
   /** The checks last run here, with what they were run on (model, its check settings, report). */
   let cached: { model: ProjectFile; settings: ProjectFile; report: SolveReport; outcome: CheckOutcome } | null = null;
@@ -80,5 +95,5 @@ export const useChecksStore = defineStore('checks', () => {
     return c.pass ? 'PASS' : 'FAIL';
   });
 
-  return { report, error, envelope, statusMaps, verdict };
+  return { report, error, envelope, statusMaps, verdict, checkedModel };
 });
