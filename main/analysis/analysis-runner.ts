@@ -149,7 +149,7 @@ export class AnalysisRunner {
       this.options.onProgress({ runId, caseIndex: p.caseIndex, caseCount: p.caseCount, caseId: p.caseId, iteration: p.iteration, loadFactor: p.loadFactor });
     } else if (m.type === 'done') {
       const status = run.cancelRequested ? 'cancelled' : 'done';
-      this.finish(runId, run, { runId, status, report: m.report }, m.fields);
+      this.finish(runId, run, { runId, status, report: m.report, ...(m.checks ? { checks: m.checks } : {}) }, m.fields);
     } else if (m.type === 'failed') {
       this.finish(runId, run, { runId, status: run.cancelRequested ? 'cancelled' : 'failed', error: m.error });
     }

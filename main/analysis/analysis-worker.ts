@@ -4,6 +4,8 @@
  * cases in `only` (default all); with `workers` > 1 it shares the cases with workers of its own
  * (parallel-solve.ts, this thread solving too) and passes their progress and merged result on;
  * as a helper of such a run (`claims`) it solves the cases it claims (case-shares.ts).
+ * A run of every case also posts the design checks of its report (checkOutcome), so the app's
+ * main thread does not run them again.
  * With `site` set it runs that site request instead (main/common/site/site-run.ts) and posts 'site-done';
  * with `tune` set it serves a tuning run's batches (tune-helper.ts) until terminated.
  */
@@ -17,6 +19,7 @@ import { failureHint } from '../common/project/plausibility/failure-hint.ts';
 import { runSiteRequest } from '../common/site/site-run.ts';
 import { serveTuneHelper } from './tune-helper.ts';
 import { packCases } from './packed-cases.ts';
+import { checkOutcome } from '../common/checks/check-outcome.ts';
 import { CANCEL_REQUESTED, transferablesOf, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
 
 function post(message: WorkerMessage, transfer: ArrayBuffer[] = []): void {
@@ -52,7 +55,8 @@ async function run(): Promise<void> {
       const { packed, transfer } = packCases(solution.report.cases);
       post({ type: 'share-done', cases: packed, stats: solution.report.stats, fields: solution.fields }, [...transfer, ...transferablesOf(solution.fields)]);
     } else {
-      post({ type: 'done', report: solution.report, fields: solution.fields }, transferablesOf(solution.fields));
+      const checks = data.only ? undefined : checkOutcome(data.project, solution.report);
+      post({ type: 'done', report: solution.report, fields: solution.fields, ...(checks ? { checks } : {}) }, transferablesOf(solution.fields));
     }
   } catch (e) {
     // A helper's failure is reported by the thread that shares the cases, with the hint added once.

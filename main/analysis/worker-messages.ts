@@ -13,6 +13,7 @@ import type { CaseFields, ProjectFile, SolveProgress, SolveReport } from '../../
 import type { SiteOutcome, SiteRequest } from '../common/site/site-run.ts';
 import type { TuneHelperSetup } from './tune-messages.ts';
 import type { PackedCases } from './packed-cases.ts';
+import type { CheckOutcome } from '../common/checks/check-outcome.ts';
 
 export interface AnalysisWorkerData {
   project: ProjectFile;
@@ -37,7 +38,8 @@ export interface AnalysisWorkerData {
 
 export type WorkerMessage =
   | { type: 'progress'; progress: SolveProgress }
-  | { type: 'done'; report: SolveReport; fields: CaseFields[] }
+  /** `checks`: the design checks of the report (a run of every case; helpers of a parallel run send 'share-done' without them). */
+  | { type: 'done'; report: SolveReport; fields: CaseFields[]; checks?: CheckOutcome }
   /** A helper's share (data.claims set): its cases packed (packed-cases.ts), the report's stats and the fields. */
   | { type: 'share-done'; cases: PackedCases; stats?: SolveReport['stats']; fields: CaseFields[] }
   | { type: 'failed'; error: string }

@@ -53,6 +53,7 @@
  */
 import type { CaseFields, ProjectFile, SolveReport } from '../../solver/index.ts';
 import type { SiteOutcome, SiteRequest } from './site/site-run.ts';
+import type { CheckOutcome } from './checks/check-outcome.ts';
 
 /** A project as the host hands it over: the validated document plus where it lives. */
 export interface OpenedProject {
@@ -99,6 +100,8 @@ export interface AnalysisDone {
   runId: string;
   status: 'done' | 'cancelled' | 'failed';
   report?: SolveReport;
+  /** The design checks of `report` under the run project's check settings, computed with the solve (check-outcome.ts). */
+  checks?: CheckOutcome;
   error?: string;
 }
 

@@ -9,6 +9,8 @@ import { defineStore } from 'pinia';
 import { computed, markRaw, ref, shallowRef } from 'vue';
 import type { CaseFields, CaseResult, MemberResult, NodeResult, ProjectFile, SolveReport } from '../../solver/index.ts';
 import type { AnalysisDone, AnalysisProgress } from '../../main/common/host-contract.ts';
+import type { CheckOutcome } from '../../main/common/checks/check-outcome.ts';
+import { withLiveCase } from '../tuning/live-checks.ts';
 
 export type AnalysisState = 'idle' | 'running' | 'done' | 'failed' | 'cancelled';
 
@@ -23,7 +25,24 @@ export interface LiveOverride {
   /** N */
   pretension: number;
   result: CaseResult;
+  /**
+   * The design checks the tuning worker ran with this step (check-outcome.ts): the report
+   * `checksReport` with this case replaced by `result`, checked under `checksProject` with the
+   * group's pretension committed. Absent when the worker did not check.
+   */
+  checks?: CheckOutcome;
+  checksProject?: ProjectFile;
+  checksReport?: SolveReport;
 }
+
+/**
+ * The parts of the project the analysis reads: an edit of any of them makes the results stale.
+ * Check settings (`checks`, `designBasis`), tuning set-up, site data and display are not among them.
+ */
+export const ANALYSIS_INPUTS = [
+  'nodes', 'members', 'sections', 'loadCases', 'combinations', 'groups', 'panels', 'ancillaries', 'patchWind',
+  'memberLoss', 'windDirections', 'iceWithWind', 'unbalancedIce',
+] as const satisfies readonly (keyof ProjectFile)[];
 
 export const useResultsStore = defineStore('results', () => {
   const state = ref<AnalysisState>('idle');
@@ -39,6 +58,8 @@ export const useResultsStore = defineStore('results', () => {
   const runRevision = ref<number | null>(null);
   /** The project the shown results were computed from (and the one of the running analysis). */
   const resultProject = shallowRef<ProjectFile | null>(null);
+  /** The design checks the analysis worker ran on `report` under `resultProject` (null when it sent none). */
+  const analysedChecks = shallowRef<CheckOutcome | null>(null);
   let runProject: ProjectFile | null = null;
   /**
    * A live re-solve of one case (tuning slider) shown in place of that case of the report while
@@ -57,7 +78,7 @@ export const useResultsStore = defineStore('results', () => {
     const r = report.value;
     const l = live.value;
     if (!r || !l) return r;
-    return markRaw({ ...r, cases: r.cases.map((c) => (c.id === l.caseId ? l.result : c)) });
+    return markRaw(withLiveCase(r, l.caseId, l.result));
   });
   const currentFields = computed<CaseFields | null>(() => {
     const r = report.value;
@@ -86,17 +107,13 @@ export const useResultsStore = defineStore('results', () => {
   }
 
   /**
-   * True when `project` differs from the analysed one in anything the analysis reads (nodes,
-   * members, sections, load cases, combinations, groups, design actions). Edits are immutable and share unchanged
-   * parts, so this compares references. Check settings, tuning set-up and display do not count.
+   * True when `project` differs from the analysed one in anything the analysis reads
+   * (ANALYSIS_INPUTS). Edits are immutable and share unchanged parts, so this compares references.
    */
   function isStaleFor(project: ProjectFile | null): boolean {
     const a = resultProject.value;
     if (!a || !project || !report.value) return false;
-    return a.nodes !== project.nodes || a.members !== project.members || a.sections !== project.sections
-      || a.loadCases !== project.loadCases || a.combinations !== project.combinations || a.groups !== project.groups
-      || a.panels !== project.panels || a.ancillaries !== project.ancillaries || a.patchWind !== project.patchWind
-      || a.memberLoss !== project.memberLoss || a.windDirections !== project.windDirections;
+    return ANALYSIS_INPUTS.some((k) => a[k] !== project[k]);
   }
 
   /** The run was requested; its id follows in assignRunId (events may arrive before it). */
@@ -128,6 +145,7 @@ export const useResultsStore = defineStore('results', () => {
     if (done.status === 'done' && done.report) {
       live.value = null;
       report.value = markRaw(done.report);
+      analysedChecks.value = done.checks ? markRaw(done.checks) : null;
       fields.value = doneFields ? markRaw(doneFields) : null;
       resultRevision.value = runRevision.value;
       resultProject.value = runProject;
@@ -166,6 +184,7 @@ export const useResultsStore = defineStore('results', () => {
     runId.value = null;
     progress.value = null;
     report.value = null;
+    analysedChecks.value = null;
     fields.value = null;
     error.value = null;
     caseId.value = null;
@@ -174,7 +193,7 @@ export const useResultsStore = defineStore('results', () => {
   }
 
   return {
-    state, runId, progress, report, fields, attachFields, live, effectiveReport, setLive, clearLive, error, caseId, resultRevision, caseIds, currentCase, currentFields,
+    state, runId, progress, report, analysedChecks, resultProject, fields, attachFields, live, effectiveReport, setLive, clearLive, error, caseId, resultRevision, caseIds, currentCase, currentFields,
     currentIndex, progressText, isStale, isStaleFor, started, assignRunId, onProgress, onFinished, failedToStart, selectCase, clear,
   };
 });

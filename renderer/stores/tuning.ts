@@ -2,7 +2,8 @@
  * Pretension tuning state: the group and case behind the live slider, the last live step, and
  * the last tuning run (targets, diagnosis). The slider's re-solves and tuning runs happen in a
  * module worker (renderer/tuning); results of a live step are shown through the results store
- * (setLive), so the 3D colours, the member table and the checks follow the slider.
+ * (setLive), so the 3D colours, the member table and the checks follow the slider; the worker runs
+ * the design checks with each step (the main thread does not).
  * Results are for review by a qualified engineer; local codes and licensed practice govern.
  */
 import { defineStore, storeToRefs } from 'pinia';
@@ -10,7 +11,7 @@ import { computed, markRaw, ref, shallowRef, watch } from 'vue';
 import type { ProjectFile, TargetOutcome, TuningResult } from '../../solver/index.ts';
 import { membersOfGroup, referenceCaseId } from '../../solver/index.ts';
 import { useProjectStore } from './project.ts';
-import { useResultsStore } from './results.ts';
+import { useResultsStore, type LiveOverride } from './results.ts';
 import { useSettingsStore } from './settings.ts';
 import { targetText, tuningDiagnosisText, tuningSummaryText } from '../../main/common/tuning/tuning-text.ts';
 import { LiveChannel, runTuning, type LiveStepOutcome, type TuningRun } from '../tuning/tuning-client.ts';
@@ -38,6 +39,13 @@ export function summariseStep(project: ProjectFile, step: LiveStepOutcome): Live
     sag = Math.max(sag, m.sag);
   }
   return { converged: true, seconds: step.seconds, tensionMax: Number.isFinite(tensionMax) ? tensionMax : undefined, sag };
+}
+
+/** What a live step puts in place of its case in the results store (with the worker's checks), or null without a result. */
+export function liveOverrideOf(step: LiveStepOutcome): LiveOverride | null {
+  if (!step.result) return null;
+  const checked = step.checks ? { checks: step.checks, checksProject: step.checksProject, checksReport: step.checksReport } : {};
+  return { caseId: step.caseId, group: step.group, pretension: step.pretension, result: step.result, ...checked };
 }
 
 export const useTuningStore = defineStore('tuning', () => {
@@ -116,7 +124,8 @@ export const useTuningStore = defineStore('tuning', () => {
     const p = project.value;
     if (!p) return;
     lastStep.value = markRaw(summariseStep(p, step));
-    if (step.result) results.setLive({ caseId: step.caseId, group: step.group, pretension: step.pretension, result: step.result });
+    const live = liveOverrideOf(step);
+    if (live) results.setLive(live);
   }
 
   function drag(group: string, pretension: number): void {
@@ -125,7 +134,7 @@ export const useTuningStore = defineStore('tuning', () => {
     dragValue.value = { group, value: pretension };
     if (results.caseIds.includes(caseId.value) && results.caseId !== caseId.value) results.selectCase(caseId.value);
     channel ??= new LiveChannel(onStep);
-    channel.drag(p, revision.value, caseId.value, group, pretension);
+    channel.drag(p, revision.value, caseId.value, group, pretension, results.report);
   }
 
   function edit(label: string, produce: (p: ProjectFile) => ProjectFile): boolean {

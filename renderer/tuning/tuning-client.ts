@@ -1,12 +1,14 @@
 /**
  * Renderer side of the tuning worker. `LiveChannel`: one long-lived worker for the slider; a
  * drag offers pretensions through a LatestOnly gate, so only one re-solve runs at a time and
- * intermediate positions are dropped. `runTuning`: a fresh worker per tuning run; cancelling
+ * intermediate positions are dropped. The analysed report goes to the worker once (when it
+ * changes), and each step comes back with its design checks (live-checks.ts). `runTuning`: a fresh worker per tuning run; cancelling
  * terminates it (a busy worker cannot read messages) and returns the best values reported by the
  * last finished iteration.
  */
 import { toRaw } from 'vue';
-import type { CaseResult, ProjectFile, TuningResult } from '../../solver/index.ts';
+import type { CaseResult, ProjectFile, SolveReport, TuningResult } from '../../solver/index.ts';
+import type { CheckOutcome } from '../../main/common/checks/check-outcome.ts';
 import { LatestOnly } from './latest-only.ts';
 import type { WorkerReply, WorkerRequest } from './worker-protocol.ts';
 
@@ -25,6 +27,10 @@ export interface LiveStepOutcome {
   result: CaseResult | null;
   seconds: number;
   error?: string;
+  /** The worker's design checks of `checksReport` with this step in place, under `checksProject` with the pretension committed. */
+  checks?: CheckOutcome;
+  checksProject?: ProjectFile;
+  checksReport?: SolveReport;
 }
 
 interface LiveTarget {
@@ -32,12 +38,16 @@ interface LiveTarget {
   project: ProjectFile;
   caseId: string;
   group: string;
+  /** The analysed report the steps are checked against (null: no checks). */
+  report: SolveReport | null;
 }
 
 export class LiveChannel {
   private worker: Worker | null = null;
   private readonly gate = new LatestOnly<{ target: LiveTarget; pretension: number }>();
   private initialised = '';
+  /** The report the worker holds (undefined: none sent to this worker yet). */
+  private sentReport: SolveReport | null | undefined = undefined;
   private seq = 0;
   private running: { target: LiveTarget; pretension: number } | null = null;
 
@@ -48,15 +58,19 @@ export class LiveChannel {
     return this.gate.dropped;
   }
 
-  /** Re-solve `caseId` of `project` with `group` at `pretension` N; `revision` keys the model. */
-  drag(project: ProjectFile, revision: number, caseId: string, group: string, pretension: number): void {
-    const target = { key: `${revision}\u0000${caseId}\u0000${group}`, project, caseId, group };
+  /**
+   * Re-solve `caseId` of `project` with `group` at `pretension` N; `revision` keys the model.
+   * `report`: the analysed results the step's checks replace the case in (null: no checks).
+   */
+  drag(project: ProjectFile, revision: number, caseId: string, group: string, pretension: number, report: SolveReport | null = null): void {
+    const target = { key: `${revision}\u0000${caseId}\u0000${group}`, project, caseId, group, report };
     if (this.gate.offer({ target, pretension })) this.send(target, pretension);
   }
 
   dispose(): void {
     this.worker?.terminate();
     this.worker = null;
+    this.sentReport = undefined;
     this.gate.reset();
   }
 
@@ -65,6 +79,10 @@ export class LiveChannel {
     if (this.initialised !== target.key) {
       post(w, { type: 'live-init', key: target.key, project: toRaw(target.project), caseId: target.caseId, group: target.group });
       this.initialised = target.key;
+    }
+    if (this.sentReport !== target.report) {
+      post(w, { type: 'live-report', report: target.report ? toRaw(target.report) : null });
+      this.sentReport = target.report;
     }
     this.running = { target, pretension };
     post(w, { type: 'live-step', key: target.key, seq: ++this.seq, pretension });
@@ -80,22 +98,25 @@ export class LiveChannel {
       this.worker?.terminate();
       this.worker = null;
       this.initialised = '';
+      this.sentReport = undefined;
     };
     this.worker = w;
     return w;
   }
 
   private onReply(msg: WorkerReply): void {
-    if (msg.type === 'live-step') this.finish({ result: msg.result, seconds: msg.seconds });
+    if (msg.type === 'live-step') this.finish({ result: msg.result, seconds: msg.seconds, checks: msg.checks });
     else if (msg.type === 'error' && msg.request === 'live-init') this.initialised = '';
     else if (msg.type === 'error' && msg.request === 'live-step') this.finish({ error: msg.message });
   }
 
-  private finish(out: { result?: CaseResult; seconds?: number; error?: string }): void {
+  private finish(out: { result?: CaseResult; seconds?: number; error?: string; checks?: CheckOutcome }): void {
     const ran = this.running;
     this.running = null;
     if (ran) {
-      this.onStep({ caseId: ran.target.caseId, group: ran.target.group, pretension: ran.pretension, result: out.result ?? null, seconds: out.seconds ?? 0, error: out.error });
+      const t = ran.target;
+      const checked = out.checks && t.report ? { checks: out.checks, checksProject: t.project, checksReport: t.report } : {};
+      this.onStep({ caseId: t.caseId, group: t.group, pretension: ran.pretension, result: out.result ?? null, seconds: out.seconds ?? 0, error: out.error, ...checked });
     }
     const next = this.gate.done();
     if (next) this.send(next.target, next.pretension);

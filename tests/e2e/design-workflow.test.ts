@@ -7,7 +7,9 @@
  *
  * References: the numbers on screen are compared with the same solver functions run in Node on
  * the same project (solveProject, runChecks, createLiveResolver, runGenerator), and the failing
- * check with a hand check of the utilisation rule T / (φ · MBL) > 1.
+ * check with a hand check of the utilisation rule T / (φ · MBL) > 1. The design checks come with
+ * the run (analysis worker) and with each slider step (tuning worker): the page's UI thread runs
+ * none of them until the check settings are edited (performance marks CHECKS_MARK, counted).
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdir, mkdtemp, readFile, rm, cp } from 'node:fs/promises';
@@ -25,6 +27,7 @@ import { pixelStats } from './pixels.ts';
 import { CHECK_FAIL_COLOUR } from '../../renderer/view3d/colour-scale.ts';
 import { defaultGuyedMast } from '../../renderer/generators/generator-defaults.ts';
 import { setCableFactor } from '../../renderer/model/check-settings-edits.ts';
+import { CHECKS_MARK } from '../../renderer/stores/checks.ts';
 
 let root: string;
 let host: WebHost;
@@ -38,6 +41,8 @@ const MEMBER_ROW_PX = 24; // DataTable row height
 
 const shot = (name: string) => page.screenshot({ path: path.join(SCREENSHOTS, name) });
 const statusText = async () => (await page.getByTestId('status-line').textContent()) ?? '';
+/** Design checks run on the page's UI thread so far. */
+const uiThreadChecks = () => page.evaluate((mark) => performance.getEntriesByName(mark).length, CHECKS_MARK);
 /** T max of one member in the results table (filtered to it: the table draws only the rows in view). */
 const tableTension = async (id: string) => {
   await page.getByTestId('results-filter').fill(id);
@@ -94,6 +99,7 @@ describe.skipIf(SKIP_BROWSER_TESTS)('design, checks, tuning and generators in th
     expect(await page.getByTestId('check-summary').textContent()).toContain(`All checks pass (${reference.cases.filter((c) => c.checked).length} checked cases`);
     expect(await page.getByTestId('check-summary').textContent()).toContain('qualified engineer');
     expect(await statusText()).toContain('checks: PASS');
+    expect(await uiThreadChecks()).toBe(0);
     await page.getByTestId('results-tab-envelope').click();
     expect(await page.getByTestId('envelope-table').locator('tbody tr').count()).toBe(project.members.length);
     await shot('10-checks-pass-envelope.png');
@@ -132,6 +138,9 @@ describe.skipIf(SKIP_BROWSER_TESTS)('design, checks, tuning and generators in th
     expect(Math.abs((await tableTension(GUY)) - before)).toBeGreaterThan(1);
     expect(await page.getByTestId('live-step').textContent()).toMatch(/solved in \d+ ms/);
     expect(await page.getByTestId('dirty-mark').count()).toBe(1);
+    // The checks followed every step (the worker's) and none ran on the UI thread.
+    expect(await page.getByTestId('check-verdict').textContent()).toMatch(/PASS|FAIL/);
+    expect(await uiThreadChecks()).toBe(0);
   });
 
   it('runs the tuner in the background and shows the targets and the diagnosis', async () => {
@@ -180,6 +189,7 @@ describe.skipIf(SKIP_BROWSER_TESTS)('design, checks, tuning and generators in th
     expect(t / resistance).toBeCloseTo(fail.ratio!, 9);
     expect(t / resistance).toBeGreaterThan(1);
     await expect.poll(() => page.getByTestId('check-verdict').textContent()).toBe('FAIL');
+    expect(await uiThreadChecks()).toBeGreaterThan(0); // a check-settings edit alone: checked on the UI thread
     expect(await statusText()).toContain(`checks: FAIL (${reference.failures.length})`);
     expect(await page.getByTestId('check-summary').locator('table.failures tbody tr').count()).toBe(reference.failures.length);
     await page.getByTestId('check-summary').locator('table.failures tbody tr').first().click();

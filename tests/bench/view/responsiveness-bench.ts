@@ -34,7 +34,7 @@ const ROW_PX = 24; // DataTable row height
 
 interface Row { what: string; samples: Measured[] }
 /** What the page returns for one interaction; the trace adds the main-thread work. */
-interface Taken { id: number; latency: number; workerMs?: number }
+interface Taken { id: number; latency: number; workerMs?: number; autosaves?: number }
 interface TakenRow { what: string; samples: Taken[] }
 
 /** The net of the benchmark: 19,800 cables; a strand of 140 kN breaking load makes about half of them fail. */
@@ -134,7 +134,7 @@ async function demoRows(page: Page, url: string, project: ProjectFile, repeat: n
       }, () => b.textChange('[data-testid="live-step"]', before, 60_000)).then((r) => ({ ...r, text: document.querySelector('[data-testid="live-step"]')?.textContent ?? '' }));
     }, k);
     const solved = /solved in (\d+) ms/.exec(m.text);
-    if (k > 0) sliderRow.samples.push({ id: m.id, latency: m.latency, workerMs: solved ? Number(solved[1]) : undefined }); // step 0 warms the worker
+    if (k > 0) sliderRow.samples.push({ id: m.id, latency: m.latency, autosaves: m.autosaves, workerMs: solved ? Number(solved[1]) : undefined }); // step 0 warms the worker
   }
   rows.push(sliderRow);
   if (shots) await page.screenshot({ path: path.join(SCREENSHOTS, `${shots}-demo-slider.png`) });
@@ -161,16 +161,24 @@ async function netRows(page: Page, url: string, project: ProjectFile, repeat: nu
 
 const median = (xs: number[]) => { const s = [...xs].sort((a, b) => a - b); return s.length ? s[Math.floor((s.length - 1) / 2)] : NaN; };
 
-function summary(r: Row | undefined): string {
-  if (!r || !r.samples.length) return '—'.padStart(30);
+/**
+ * Median, max, wall and frame of a row. Samples in which the app's autosave tick posted the
+ * project are left out of the figures when others remain (their count is shown as `a`).
+ */
+function summary(row: Row | undefined): string {
+  if (!row || !row.samples.length) return '—'.padStart(30);
+  const clean = row.samples.filter((s) => !s.autosaves);
+  const r = { ...row, samples: clean.length ? clean : row.samples };
   const med = (f: (m: Measured) => number) => median(r.samples.map(f));
   const worker = r.samples.every((s) => s.workerMs !== undefined) ? `w${med((s) => s.workerMs!).toFixed(0)}` : '';
-  return `${med((s) => s.cpu).toFixed(0).padStart(5)} ${Math.max(...r.samples.map((s) => s.cpu)).toFixed(0).padStart(5)} ${med((s) => s.wall).toFixed(0).padStart(5)} ${med((s) => s.latency).toFixed(0).padStart(6)} ${worker.padStart(5)}`;
+  const saved = row.samples.length - clean.length;
+  return `${med((s) => s.cpu).toFixed(0).padStart(5)} ${Math.max(...r.samples.map((s) => s.cpu)).toFixed(0).padStart(5)} ${med((s) => s.wall).toFixed(0).padStart(5)} ${med((s) => s.latency).toFixed(0).padStart(6)} ${worker.padStart(5)}${saved ? ` a${saved}` : ''}`;
 }
 
 export function printResponsiveness(builds: { label: string; rows: Row[] }[]): void {
   console.log('\nResponsiveness of the browser edition (headless Chromium, software WebGL): main-thread ms per interaction');
-  console.log('cpu = main-thread CPU time of the page\'s tasks (median, max); wall = their wall time; frame = event to the next frame; w = worker solve (medians, ms)');
+  console.log('cpu = main-thread CPU time of the page\'s tasks (median, max); wall = their wall time; frame = event to the next frame; w = worker solve (medians, ms);');
+  console.log('a = samples left out because the app\'s autosave tick posted the project during them');
   const header = builds.map((b) => `${b.label.slice(0, 10).padEnd(10)}: cpu  max  wall  frame     `).join(' | ');
   console.log(`${'interaction'.padEnd(62)} ${header}`);
   const whats = builds[0].rows.map((r) => r.what);
