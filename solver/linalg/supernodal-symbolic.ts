@@ -2,7 +2,7 @@ import { supernodePartition } from './supernode-partition.ts';
 
 /**
  * Symbolic analysis for the supernodal LDLᵀ: supernode partition, row structure of each
- * supernode, storage offsets and the scatter map from A's values into L's storage.
+ * supernode, storage offsets and the scatter plan of A's values into L's storage.
  *
  * Input is the permuted matrix C = P A Pᵀ with P including a postorder of the elimination tree,
  * so the columns of every subtree are contiguous and children precede parents.
@@ -10,7 +10,8 @@ import { supernodePartition } from './supernode-partition.ts';
  * supernode the structures of the columns are nested, so its rows are its columns plus the
  * structure of its last column below the block; relaxed supernodes store explicit zeros.
  * Row structure: Struct(s) = {f..l−1} ∪ rows ≥ l of A(:, f..l−1) ∪ Struct(children) ∩ [l, n)
- * (Davis 2006, ch. 4: the pattern of L(:,j) is A's column plus the children's patterns).
+ * (Davis 2006, ch. 4: the pattern of L(:,j) is A's column plus the children's patterns),
+ * found on DOF groups and expanded (PermutedGroups).
  *
  * Storage layout: supernode s owns a dense column-major block of nrows × ncols doubles at
  * valPtr[s] (leading dimension nrows); local row t is global row rows[rowPtr[s] + t]; the first
@@ -40,16 +41,39 @@ export interface SupernodalStructure {
 }
 
 /**
- * gPtr/gIdx: adjacency of C (both triangles, any order, no diagonal needed; permuteGraph);
- * parent/colCount: elimination tree and below-diagonal column counts of C.
+ * The graph the row structure is built on: DOF groups (dof-groups.ts) in the permuted order,
+ * group J holding the permuted DOF columns first[J] .. first[J + 1] − 1 (every supernode boundary
+ * is a group boundary, since a group's DOFs always form one chain of equal structure), and the
+ * permuted group adjacency ptr/idx (both triangles, any order, no diagonal). With one DOF per
+ * group this is the DOF graph itself (identityGroups).
+ */
+export interface PermutedGroups {
+  m: number;
+  first: Int32Array;
+  ptr: Int32Array;
+  idx: Int32Array;
+}
+
+/** One group per DOF: the permuted DOF adjacency (permuteGraph) as PermutedGroups. */
+export function identityGroups(n: number, ptr: Int32Array, idx: Int32Array): PermutedGroups {
+  return { m: n, first: Int32Array.from({ length: n + 1 }, (_, k) => k), ptr, idx };
+}
+
+/**
+ * parent/colCount: elimination tree and below-diagonal column counts of C (DOF level);
+ * groups: the permuted group graph (see PermutedGroups). The row structure is found per
+ * supernode on groups (a third or a sixth of the entries for 3- and 6-DOF nodes) and expanded.
  */
 export function supernodalStructure(
-  n: number, gPtr: Int32Array, gIdx: Int32Array, parent: Int32Array, colCount: Int32Array, relax = true,
+  n: number, groups: PermutedGroups, parent: Int32Array, colCount: Int32Array, relax = true,
 ): SupernodalStructure {
   const superStart = supernodePartition(n, parent, colCount, relax);
   const nsuper = superStart.length - 1;
   const colToSuper = new Int32Array(n);
   for (let s = 0; s < nsuper; s++) for (let j = superStart[s]; j < superStart[s + 1]; j++) colToSuper[j] = s;
+  const { m, first, ptr: gPtr, idx: gIdx } = groups;
+  const groupAt = new Int32Array(n); // permuted DOF → permuted group
+  for (let J = 0; J < m; J++) for (let d = first[J]; d < first[J + 1]; d++) groupAt[d] = J;
   // ---- supernode tree and children lists ----
   const childHead = new Int32Array(nsuper).fill(-1);
   const childNext = new Int32Array(nsuper).fill(-1);
@@ -61,37 +85,45 @@ export function supernodalStructure(
     childHead[ps] = s;
   }
   // ---- row structure ----
-  // A supernode's rows are those of its first column (its columns' structures are nested).
+  // A supernode's rows are those of its first column (its columns' structures are nested):
+  // its own groups, then the groups of A's entries below them and of its children's rows.
   const rowPtr = new Int32Array(nsuper + 1);
   for (let s = 0; s < nsuper; s++) {
     const f = superStart[s], l = superStart[s + 1];
     rowPtr[s + 1] = rowPtr[s] + (l - f) + colCount[l - 1];
   }
   const rows = new Int32Array(rowPtr[nsuper]);
-  const mark = new Int32Array(n).fill(-1);
-  const buf = new Int32Array(n);
+  const gRowPtr = new Int32Array(nsuper + 1);
+  const gRows = new Int32Array(rowPtr[nsuper]); // group rows below each supernode (≤ its DOF rows)
+  const mark = new Int32Array(m).fill(-1);
   for (let s = 0; s < nsuper; s++) {
     const f = superStart[s], l = superStart[s + 1];
-    let len = 0;
-    for (let j = f; j < l; j++) { mark[j] = s; buf[len++] = j; }
-    for (let j = f; j < l; j++) {
-      for (let q = gPtr[j]; q < gPtr[j + 1]; q++) {
-        const i = gIdx[q];
-        if (i > j && mark[i] !== s) { mark[i] = s; buf[len++] = i; } // rows below the diagonal
+    const gs = groupAt[f], ge = groupAt[l - 1];
+    for (let J = gs; J <= ge; J++) mark[J] = s;
+    const g0 = gRowPtr[s];
+    let len = g0;
+    for (let J = gs; J <= ge; J++) {
+      for (let q = gPtr[J]; q < gPtr[J + 1]; q++) {
+        const I = gIdx[q];
+        if (I > ge && mark[I] !== s) { mark[I] = s; gRows[len++] = I; } // rows below the diagonal block
       }
     }
     for (let c = childHead[s]; c !== -1; c = childNext[c]) {
-      for (let q = rowPtr[c]; q < rowPtr[c + 1]; q++) {
-        const i = rows[q];
-        if (i >= f && mark[i] !== s) { mark[i] = s; buf[len++] = i; }
+      for (let q = gRowPtr[c]; q < gRowPtr[c + 1]; q++) {
+        const I = gRows[q];
+        if (I > ge && mark[I] !== s) { mark[I] = s; gRows[len++] = I; }
       }
     }
-    if (len !== rowPtr[s + 1] - rowPtr[s]) {
-      throw new Error(`supernodal analysis: supernode ${s} has ${len} rows, column counts say ${rowPtr[s + 1] - rowPtr[s]}`);
+    sortRange(gRows, g0, len);
+    gRowPtr[s + 1] = len;
+    let dofs = l - f;
+    for (let q = g0; q < len; q++) dofs += first[gRows[q] + 1] - first[gRows[q]];
+    if (dofs !== rowPtr[s + 1] - rowPtr[s]) {
+      throw new Error(`supernodal analysis: supernode ${s} has ${dofs} rows, column counts say ${rowPtr[s + 1] - rowPtr[s]}`);
     }
-    const seg = rows.subarray(rowPtr[s], rowPtr[s + 1]);
-    seg.set(buf.subarray(0, len));
-    seg.sort();
+    let r = rowPtr[s];
+    for (let j = f; j < l; j++) rows[r++] = j;
+    for (let q = g0; q < len; q++) for (let d = first[gRows[q]]; d < first[gRows[q] + 1]; d++) rows[r++] = d;
   }
   // ---- storage ----
   const valPtr = new Int32Array(nsuper + 1);
@@ -108,39 +140,69 @@ export function supernodalStructure(
 }
 
 /**
- * Scatter map: position in the supernodal value storage of each original lower entry q of A,
- * given pinv (old → new). Entry (i, j) goes to row max(pinv i, pinv j), column min(...).
+ * Where A's values go in the supernodal storage: value src[t] of the pattern (original lower
+ * entry q = src[t]) is written to storage position pos[t]; supernode s owns t in
+ * superPtr[s] .. superPtr[s + 1] − 1 (entries in column order, so a supernode's block is filled
+ * front to back). Entry (i, j) goes to row max(pinv i, pinv j), column min(...).
  */
-export function supernodalScatterMap(
+export interface ScatterPlan {
+  src: Int32Array;
+  pos: Int32Array;
+  superPtr: Int32Array;
+}
+
+export function supernodalScatter(
   st: SupernodalStructure, colPtr: Int32Array, rowIdx: Int32Array, pinv: Int32Array,
-): Int32Array {
+): ScatterPlan {
   const { n, nsuper, superStart, rowPtr, rows, valPtr } = st;
   const nz = colPtr[n];
-  // Bucket the entries by their permuted column.
+  // Bucket the entries by their permuted column (a counting sort: no comparison sort); the
+  // permuted row of each goes along, so the pass below reads it in order.
   const bPtr = new Int32Array(n + 1);
-  const colOf = new Int32Array(nz), rowOf = new Int32Array(nz);
+  const colOf = new Int32Array(nz);
   for (let j = 0; j < n; j++) {
+    const b = pinv[j];
     for (let q = colPtr[j]; q < colPtr[j + 1]; q++) {
-      const a = pinv[rowIdx[q]], b = pinv[j];
-      colOf[q] = a < b ? a : b; rowOf[q] = a < b ? b : a;
-      bPtr[colOf[q] + 1]++;
+      const a = pinv[rowIdx[q]];
+      const c = a < b ? a : b;
+      colOf[q] = c;
+      bPtr[c + 1]++;
     }
   }
   for (let j = 0; j < n; j++) bPtr[j + 1] += bPtr[j];
   const next = bPtr.slice(0, n);
-  const bucket = new Int32Array(nz);
-  for (let q = 0; q < nz; q++) bucket[next[colOf[q]]++] = q;
+  const src = new Int32Array(nz);
+  const pos = new Int32Array(nz); // first the permuted row, then the storage position
+  for (let j = 0; j < n; j++) {
+    const b = pinv[j];
+    for (let q = colPtr[j]; q < colPtr[j + 1]; q++) {
+      const a = pinv[rowIdx[q]];
+      const t = next[colOf[q]]++;
+      src[t] = q;
+      pos[t] = a < b ? b : a;
+    }
+  }
   const rel = new Int32Array(n);
-  const map = new Int32Array(nz);
+  const superPtr = new Int32Array(nsuper + 1);
   for (let s = 0; s < nsuper; s++) {
     const f = superStart[s], nr = rowPtr[s + 1] - rowPtr[s];
     for (let t = 0; t < nr; t++) rel[rows[rowPtr[s] + t]] = t;
     for (let c = f; c < superStart[s + 1]; c++) {
-      for (let b = bPtr[c]; b < bPtr[c + 1]; b++) {
-        const q = bucket[b];
-        map[q] = valPtr[s] + (c - f) * nr + rel[rowOf[q]];
-      }
+      const colBase = valPtr[s] + (c - f) * nr;
+      for (let t = bPtr[c]; t < bPtr[c + 1]; t++) pos[t] = colBase + rel[pos[t]];
     }
+    superPtr[s + 1] = bPtr[superStart[s + 1]];
   }
-  return map;
+  return { src, pos, superPtr };
+}
+
+/** Sorts a[lo .. hi − 1] ascending: insertion sort for short runs (most supernodes), else native. */
+function sortRange(a: Int32Array, lo: number, hi: number): void {
+  if (hi - lo > 24) { a.subarray(lo, hi).sort(); return; }
+  for (let i = lo + 1; i < hi; i++) {
+    const v = a[i];
+    let j = i - 1;
+    while (j >= lo && a[j] > v) { a[j + 1] = a[j]; j--; }
+    a[j + 1] = v;
+  }
 }
