@@ -67,31 +67,67 @@ export function identityGroups(n: number, ptr: Int32Array, idx: Int32Array): Per
 export function supernodalStructure(
   n: number, groups: PermutedGroups, parent: Int32Array, colCount: Int32Array, relax = true,
 ): SupernodalStructure {
+  // Each step is its own function: the compiled code of a step does not meet the next one's
+  // loops without type feedback (one-call functions with several long loops deoptimise at each).
   const superStart = supernodePartition(n, parent, colCount, relax);
   const nsuper = superStart.length - 1;
-  const colToSuper = new Int32Array(n);
-  for (let s = 0; s < nsuper; s++) for (let j = superStart[s]; j < superStart[s + 1]; j++) colToSuper[j] = s;
-  const { m, first, ptr: gPtr, idx: gIdx } = groups;
-  const groupAt = new Int32Array(n); // permuted DOF → permuted group
-  for (let J = 0; J < m; J++) for (let d = first[J]; d < first[J + 1]; d++) groupAt[d] = J;
-  // ---- supernode tree and children lists ----
-  const childHead = new Int32Array(nsuper).fill(-1);
-  const childNext = new Int32Array(nsuper).fill(-1);
-  for (let s = nsuper - 1; s >= 0; s--) {
-    const p = parent[superStart[s + 1] - 1];
-    if (p === -1) continue;
-    const ps = colToSuper[p];
-    childNext[s] = childHead[ps];
-    childHead[ps] = s;
-  }
-  // ---- row structure ----
-  // A supernode's rows are those of its first column (its columns' structures are nested):
-  // its own groups, then the groups of A's entries below them and of its children's rows.
+  const colToSuper = columnOwners(n, superStart);
+  const groupAt = columnOwners(n, groups.first); // permuted DOF → permuted group
+  const children = supernodeChildren(nsuper, superStart, parent, colToSuper);
+  // A supernode's rows are those of its first column (its columns' structures are nested).
   const rowPtr = new Int32Array(nsuper + 1);
   for (let s = 0; s < nsuper; s++) {
     const f = superStart[s], l = superStart[s + 1];
     rowPtr[s + 1] = rowPtr[s] + (l - f) + colCount[l - 1];
   }
+  const rows = supernodeRows(superStart, rowPtr, groups, groupAt, children);
+  const valPtr = new Int32Array(nsuper + 1);
+  let maxRows = 0, maxCols = 0, lnz = n, stored = 0;
+  for (let j = 0; j < n; j++) lnz += colCount[j];
+  for (let s = 0; s < nsuper; s++) {
+    const nr = rowPtr[s + 1] - rowPtr[s], nc = superStart[s + 1] - superStart[s];
+    if (nr > maxRows) maxRows = nr;
+    if (nc > maxCols) maxCols = nc;
+    valPtr[s + 1] = valPtr[s] + nr * nc;
+    stored += nr * nc - (nc * (nc - 1)) / 2;
+  }
+  return { n, nsuper, superStart, colToSuper, rowPtr, rows, valPtr, maxRows, maxCols, factorNonzeros: lnz, storedNonzeros: stored };
+}
+
+/** owner[j] = k for start[k] ≤ j < start[k + 1] (start ascending, last entry n). */
+function columnOwners(n: number, start: Int32Array): Int32Array {
+  const owner = new Int32Array(n);
+  for (let k = 0; k + 1 < start.length; k++) for (let j = start[k]; j < start[k + 1]; j++) owner[j] = k;
+  return owner;
+}
+
+/** Children lists of the supernode tree (head[s], next[c]; -1 ends a list). */
+function supernodeChildren(
+  nsuper: number, superStart: Int32Array, parent: Int32Array, colToSuper: Int32Array,
+): { head: Int32Array; next: Int32Array } {
+  const head = new Int32Array(nsuper).fill(-1);
+  const next = new Int32Array(nsuper).fill(-1);
+  for (let s = nsuper - 1; s >= 0; s--) {
+    const p = parent[superStart[s + 1] - 1];
+    if (p === -1) continue;
+    const ps = colToSuper[p];
+    next[s] = head[ps];
+    head[ps] = s;
+  }
+  return { head, next };
+}
+
+/**
+ * Row lists of the supernodes: own columns, then (on groups) the groups of A's entries below the
+ * supernode's groups and of its children's rows, sorted and expanded to DOFs.
+ */
+function supernodeRows(
+  superStart: Int32Array, rowPtr: Int32Array, groups: PermutedGroups, groupAt: Int32Array,
+  children: { head: Int32Array; next: Int32Array },
+): Int32Array {
+  const nsuper = superStart.length - 1;
+  const { m, first, ptr: gPtr, idx: gIdx } = groups;
+  const { head: childHead, next: childNext } = children;
   const rows = new Int32Array(rowPtr[nsuper]);
   const gRowPtr = new Int32Array(nsuper + 1);
   const gRows = new Int32Array(rowPtr[nsuper]); // group rows below each supernode (≤ its DOF rows)
@@ -125,18 +161,7 @@ export function supernodalStructure(
     for (let j = f; j < l; j++) rows[r++] = j;
     for (let q = g0; q < len; q++) for (let d = first[gRows[q]]; d < first[gRows[q] + 1]; d++) rows[r++] = d;
   }
-  // ---- storage ----
-  const valPtr = new Int32Array(nsuper + 1);
-  let maxRows = 0, maxCols = 0, lnz = n, stored = 0;
-  for (let j = 0; j < n; j++) lnz += colCount[j];
-  for (let s = 0; s < nsuper; s++) {
-    const nr = rowPtr[s + 1] - rowPtr[s], nc = superStart[s + 1] - superStart[s];
-    if (nr > maxRows) maxRows = nr;
-    if (nc > maxCols) maxCols = nc;
-    valPtr[s + 1] = valPtr[s] + nr * nc;
-    stored += nr * nc - (nc * (nc - 1)) / 2;
-  }
-  return { n, nsuper, superStart, colToSuper, rowPtr, rows, valPtr, maxRows, maxCols, factorNonzeros: lnz, storedNonzeros: stored };
+  return rows;
 }
 
 /**
@@ -156,32 +181,10 @@ export function supernodalScatter(
 ): ScatterPlan {
   const { n, nsuper, superStart, rowPtr, rows, valPtr } = st;
   const nz = colPtr[n];
-  // Bucket the entries by their permuted column (a counting sort: no comparison sort); the
-  // permuted row of each goes along, so the pass below reads it in order.
   const bPtr = new Int32Array(n + 1);
-  const colOf = new Int32Array(nz);
-  for (let j = 0; j < n; j++) {
-    const b = pinv[j];
-    for (let q = colPtr[j]; q < colPtr[j + 1]; q++) {
-      const a = pinv[rowIdx[q]];
-      const c = a < b ? a : b;
-      colOf[q] = c;
-      bPtr[c + 1]++;
-    }
-  }
-  for (let j = 0; j < n; j++) bPtr[j + 1] += bPtr[j];
-  const next = bPtr.slice(0, n);
   const src = new Int32Array(nz);
   const pos = new Int32Array(nz); // first the permuted row, then the storage position
-  for (let j = 0; j < n; j++) {
-    const b = pinv[j];
-    for (let q = colPtr[j]; q < colPtr[j + 1]; q++) {
-      const a = pinv[rowIdx[q]];
-      const t = next[colOf[q]]++;
-      src[t] = q;
-      pos[t] = a < b ? b : a;
-    }
-  }
+  bucketByPermutedColumn(n, colPtr, rowIdx, pinv, bPtr, src, pos);
   const rel = new Int32Array(n);
   const superPtr = new Int32Array(nsuper + 1);
   for (let s = 0; s < nsuper; s++) {
@@ -194,6 +197,34 @@ export function supernodalScatter(
     superPtr[s + 1] = bPtr[superStart[s + 1]];
   }
   return { src, pos, superPtr };
+}
+
+/**
+ * Counting sort of A's lower entries by permuted column c = min(pinv i, pinv j): bucket c is
+ * src[bPtr[c] .. bPtr[c + 1] − 1] (original entry indices), with the permuted row
+ * max(pinv i, pinv j) of each in row[] at the same place.
+ */
+function bucketByPermutedColumn(
+  n: number, colPtr: Int32Array, rowIdx: Int32Array, pinv: Int32Array, bPtr: Int32Array, src: Int32Array, row: Int32Array,
+): void {
+  for (let j = 0; j < n; j++) {
+    const b = pinv[j];
+    for (let q = colPtr[j]; q < colPtr[j + 1]; q++) {
+      const a = pinv[rowIdx[q]];
+      bPtr[(a < b ? a : b) + 1]++;
+    }
+  }
+  for (let j = 0; j < n; j++) bPtr[j + 1] += bPtr[j];
+  const next = bPtr.slice(0, n);
+  for (let j = 0; j < n; j++) {
+    const b = pinv[j];
+    for (let q = colPtr[j]; q < colPtr[j + 1]; q++) {
+      const a = pinv[rowIdx[q]];
+      const t = next[a < b ? a : b]++;
+      src[t] = q;
+      row[t] = a < b ? b : a;
+    }
+  }
 }
 
 /** Sorts a[lo .. hi − 1] ascending: insertion sort for short runs (most supernodes), else native. */
