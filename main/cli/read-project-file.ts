@@ -3,6 +3,7 @@
  * file name as typed, e.g. `mast.stayset.json: members[3] "G2": node "TOP2" does not exist`.
  * Only regular files within the shared size limit are read (main/store/read-regular-file.ts).
  */
+import { isUtf8 } from 'node:buffer';
 import { resolve } from 'node:path';
 import { parseProjectText } from '../common/project/index.ts';
 import type { ProjectFile } from '../../solver/index.ts';
@@ -20,12 +21,10 @@ export function readProjectFile(name: string, cwd: string): ReadProjectOutcome {
   const read = readRegularFileSync(resolve(cwd, name), name);
   if (!read.ok) return { ok: false, errors: [read.error] };
   const bytes = read.bytes;
-  let text: string;
-  try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
-  } catch {
-    return { ok: false, errors: [`${name}: is not UTF-8 text (is it a project file?)`] };
-  }
+  // Checked, then decoded (both native and fast; a fatal TextDecoder takes several times longer
+  // on the tens of megabytes of a large net).
+  if (!isUtf8(bytes)) return { ok: false, errors: [`${name}: is not UTF-8 text (is it a project file?)`] };
+  const text = bytes.toString('utf8');
   const parsed = parseProjectText(text);
   if (!parsed.ok) return { ok: false, errors: parsed.errors.map((m) => `${name}: ${m}`) };
   return { ...parsed, stamp: read.stamp };

@@ -14,6 +14,7 @@ import { nestedDissection } from './nested-dissection.ts';
 import { groupSymbolic, expandToDofs, type GroupSymbolic } from './group-symbolic.ts';
 import { postorderTree } from './elimination-tree.ts';
 import type { DofGroups } from './dof-groups.ts';
+import type { PermutedGroups } from './supernodal-symbolic.ts';
 
 export type OrderingMethod = 'auto' | 'amd' | 'nd' | 'natural';
 
@@ -26,6 +27,8 @@ export interface BlockOrdering {
   /** The ordering used and nnz(L) (diagonal included) of every candidate tried. */
   chosen: 'amd' | 'nd' | 'natural';
   predicted: { amd?: number; nd?: number; natural?: number };
+  /** The groups in the final order, with their permuted adjacency (for the supernodal structure). */
+  groups: PermutedGroups;
 }
 
 export function blockOrdering(n: number, groups: DofGroups, method: OrderingMethod): BlockOrdering {
@@ -47,6 +50,6 @@ export function blockOrdering(n: number, groups: DofGroups, method: OrderingMeth
   const order = new Int32Array(m);
   for (let k = 0; k < m; k++) order[k] = best.order[post[k]];
   const sym = groupSymbolic(m, ptr, idx, weight, order);
-  const { perm, parent, counts } = expandToDofs(n, groups.start, order, sym);
-  return { perm, parent, counts, chosen: best.name, predicted };
+  const { perm, parent, counts, first } = expandToDofs(n, groups.start, order, sym);
+  return { perm, parent, counts, chosen: best.name, predicted, groups: { m, first, ptr: sym.ptr, idx: sym.idx } };
 }

@@ -55,14 +55,15 @@ export function groupSymbolic(m: number, ptr: Int32Array, idx: Int32Array, weigh
 
 /**
  * DOF-level permutation, elimination tree and below-diagonal column counts from a group-level
- * analysis under `order`: perm lists the DOFs of order[0], then of order[1], …
+ * analysis under `order`: perm lists the DOFs of order[0], then of order[1], …; first[J] is the
+ * first permuted DOF of permuted group J (first[m] = n).
  */
 export function expandToDofs(
   n: number, groupStart: Int32Array, order: Int32Array, sym: GroupSymbolic,
-): { perm: Int32Array; parent: Int32Array; counts: Int32Array } {
+): { perm: Int32Array; parent: Int32Array; counts: Int32Array; first: Int32Array } {
   const m = order.length;
   const perm = new Int32Array(n), parent = new Int32Array(n), counts = new Int32Array(n);
-  const first = new Int32Array(m); // first permuted DOF of each permuted group
+  const first = new Int32Array(m + 1); // first permuted DOF of each permuted group; first[m] = n
   let k = 0;
   for (let J = 0; J < m; J++) {
     first[J] = k;
@@ -76,5 +77,6 @@ export function expandToDofs(
       counts[f + t] = w - 1 - t + below;
     }
   }
-  return { perm, parent, counts };
+  first[m] = n;
+  return { perm, parent, counts, first };
 }

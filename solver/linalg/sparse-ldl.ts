@@ -1,5 +1,5 @@
 import { validatePattern, adjacencyGraph, type SymmetricPattern } from './symmetric-pattern.ts';
-import { invertPermutation, permuteGraph } from './permutation.ts';
+import { invertPermutation } from './permutation.ts';
 import { permutedUpper } from './permuted-upper.ts';
 import { blockOrdering, type OrderingMethod } from './block-ordering.ts';
 import { groupDofs, uniformBlocks, validateBlocks } from './dof-groups.ts';
@@ -7,7 +7,7 @@ import type { FactorBackend } from './factor-backend.ts';
 import { SimplicialBackend } from './simplicial-backend.ts';
 import { SupernodalLDL } from './supernodal-ldl.ts';
 import { dropDecoupledEntries, gatherKeptValues } from './decoupled-dofs.ts';
-import { supernodalStructure, supernodalScatterMap } from './supernodal-symbolic.ts';
+import { supernodalStructure, supernodalScatter } from './supernodal-symbolic.ts';
 
 export interface SparseLDLOptions {
   /** DOFs per node when every node has the same number (3 for truss/cable models; 1 = plain). Default 3. */
@@ -115,14 +115,13 @@ export class SparseLDL {
     const kernel = options.kernel ?? 'supernodal';
     if (kernel !== 'supernodal' && kernel !== 'simplicial') throw new Error(`SparseLDL: unknown kernel '${String(kernel)}'`);
     const pinv = invertPermutation(perm);
-    const pg = permuteGraph(graph.ptr, graph.idx, perm, pinv); // C's adjacency, both triangles
     const { parent, counts } = ord;
     let backend: FactorBackend;
     if (kernel === 'simplicial') {
       backend = new SimplicialBackend(n, permutedUpper(pattern, pinv), parent, counts);
     } else {
-      const st = supernodalStructure(n, pg.ptr, pg.idx, parent, counts, options.relaxedSupernodes ?? false);
-      backend = new SupernodalLDL(st, supernodalScatterMap(st, pattern.colPtr, pattern.rowIdx, pinv));
+      const st = supernodalStructure(n, ord.groups, parent, counts, options.relaxedSupernodes ?? false);
+      backend = new SupernodalLDL(st, supernodalScatter(st, pattern.colPtr, pattern.rowIdx, pinv));
     }
     return new SparseLDL(original, perm, backend, reduction ? reduction.keep : null, pattern.colPtr[n], { chosen: ord.chosen, predicted: ord.predicted });
   }

@@ -1,5 +1,5 @@
 import type { FactorBackend } from './factor-backend.ts';
-import type { SupernodalStructure } from './supernodal-symbolic.ts';
+import type { ScatterPlan, SupernodalStructure } from './supernodal-symbolic.ts';
 import { accumulateColumns, accumulateColumnsTwice } from './dense-kernels.ts';
 import { factorPanel } from './dense-panel.ts';
 import { updateFrom3, updateFrom6 } from './small-updates.ts';
@@ -39,30 +39,12 @@ export class SupernodalLDL implements FactorBackend {
   private readonly link: Int32Array;
   private readonly pos: Int32Array;
 
-  constructor(st: SupernodalStructure, scatterMap: Int32Array) {
+  constructor(st: SupernodalStructure, scatter: ScatterPlan) {
     this.st = st;
-    // Sort A's entries by target position (positions are unique: one per pattern entry), so the
-    // scatter of supernode s writes its own block in increasing address order. One numeric sort
-    // of the keys position · m + q (exact in a double: below 2^53 for any model that fits in
-    // memory), O(nnz(A) log nnz(A)) instead of a pass over all of L's storage.
-    const m = scatterMap.length;
-    const keys = new Float64Array(m);
-    for (let q = 0; q < m; q++) keys[q] = scatterMap[q] * m + q;
-    keys.sort();
-    this.aSrc = new Int32Array(m);
-    this.aPos = new Int32Array(m);
-    this.aSupPtr = new Int32Array(st.nsuper + 1);
-    let s = 0;
-    for (let t = 0; t < m; t++) {
-      let x = Math.floor(keys[t] / m);
-      if (x * m > keys[t]) x--; // guard the rounding of the division
-      else if ((x + 1) * m <= keys[t]) x++;
-      this.aSrc[t] = keys[t] - x * m;
-      this.aPos[t] = x;
-      while (x >= st.valPtr[s + 1]) this.aSupPtr[++s + 1] = t;
-      this.aSupPtr[s + 1] = t + 1;
-    }
-    while (s < st.nsuper - 1) { this.aSupPtr[s + 2] = this.aSupPtr[s + 1]; s++; }
+    // A's entries grouped by supernode, in column order (supernodal-symbolic.ts supernodalScatter).
+    this.aSrc = scatter.src;
+    this.aPos = scatter.pos;
+    this.aSupPtr = scatter.superPtr;
     this.factorNonzeros = st.factorNonzeros;
     this.Lx = new Float64Array(st.valPtr[st.nsuper]);
     this.D = new Float64Array(st.n);

@@ -22,7 +22,8 @@
  */
 import type { ProjectFile } from '../project/types.ts';
 import { approximateMinimumDegree } from '../linalg/amd.ts';
-import { columnCounts, eliminationTreeOfPermuted } from '../linalg/elimination-tree.ts';
+import { columnCounts, eliminationTree } from '../linalg/elimination-tree.ts';
+import { invertPermutation, permuteGraph } from '../linalg/permutation.ts';
 import { supportsTouchRotations } from './supports.ts';
 
 export interface ModelBudget {
@@ -114,42 +115,12 @@ function rotatingUserNodes(project: ProjectFile, index: Map<string, number>): Ui
  */
 function userGraphFactorEntries(project: ProjectFile, index: Map<string, number>, rotating: Uint8Array): number {
   const n = project.nodes.length;
-  const edges = new Set<number>();
-  const pairs: number[] = [];
-  for (const m of project.members) {
-    const a = index.get(m.from), b = index.get(m.to);
-    if (a === undefined || b === undefined || a === b) continue;
-    const key = Math.min(a, b) * n + Math.max(a, b);
-    if (edges.has(key)) continue;
-    edges.add(key);
-    pairs.push(a, b);
-  }
-  const deg = new Int32Array(n);
-  for (const v of pairs) deg[v]++;
-  const ptr = new Int32Array(n + 1);
-  for (let i = 0; i < n; i++) ptr[i + 1] = ptr[i] + deg[i];
-  const next = ptr.slice(0, n);
-  const idx = new Int32Array(ptr[n]);
-  for (let k = 0; k < pairs.length; k += 2) {
-    idx[next[pairs[k]]++] = pairs[k + 1];
-    idx[next[pairs[k + 1]]++] = pairs[k];
-  }
+  const { ptr, idx } = userGraph(project, index);
   const perm = approximateMinimumDegree(n, ptr, idx);
-  const pinv = new Int32Array(n);
-  for (let k = 0; k < n; k++) pinv[perm[k]] = k;
-  const parent = eliminationTreeOfPermuted(n, ptr, idx, perm, pinv);
-  // Upper triangle of the permuted graph, column k = rows pinv[u] < k, for the column counts.
-  const uptr = new Int32Array(n + 1);
-  const uidx: number[] = [];
-  for (let k = 0; k < n; k++) {
-    const v = perm[k];
-    for (let q = ptr[v]; q < ptr[v + 1]; q++) {
-      const i = pinv[idx[q]];
-      if (i < k) uidx.push(i);
-    }
-    uptr[k + 1] = uidx.length;
-  }
-  const counts = columnCounts(n, uptr, Int32Array.from(uidx), parent);
+  const pinv = invertPermutation(perm);
+  const pg = permuteGraph(ptr, idx, perm, pinv);
+  const parent = eliminationTree(n, pg.ptr, pg.idx);
+  const counts = columnCounts(n, pg.ptr, pg.idx, parent);
   let entries = 0;
   for (let k = 0; k < n; k++) {
     const v = perm[k];
@@ -158,6 +129,46 @@ function userGraphFactorEntries(project: ProjectFile, index: Map<string, number>
     entries += counts[k] * (rotating[v] ? 6 : 3) * rowDofs;
   }
   return entries;
+}
+
+/**
+ * Adjacency of the user nodes, one edge per connected pair (both directions), each list in the
+ * order the members name the pair first; typed arrays only (linear in members + nodes).
+ */
+function userGraph(project: ProjectFile, index: Map<string, number>): { ptr: Int32Array; idx: Int32Array } {
+  const n = project.nodes.length;
+  const members = project.members;
+  const ends = new Int32Array(2 * members.length);
+  const deg = new Int32Array(n);
+  let pairs = 0;
+  for (const m of members) {
+    const a = index.get(m.from), b = index.get(m.to);
+    if (a === undefined || b === undefined || a === b) continue;
+    ends[2 * pairs] = a; ends[2 * pairs + 1] = b;
+    pairs++;
+    deg[a]++; deg[b]++;
+  }
+  const start = new Int32Array(n + 1);
+  for (let i = 0; i < n; i++) start[i + 1] = start[i] + deg[i];
+  const fill = start.slice(0, n);
+  const all = new Int32Array(start[n]);
+  for (let k = 0; k < pairs; k++) {
+    const a = ends[2 * k], b = ends[2 * k + 1];
+    all[fill[a]++] = b;
+    all[fill[b]++] = a;
+  }
+  // Drop repeated pairs, keeping each neighbour's first appearance.
+  const seen = new Int32Array(n).fill(-1);
+  const ptr = new Int32Array(n + 1);
+  let len = 0;
+  for (let v = 0; v < n; v++) {
+    for (let q = start[v]; q < start[v + 1]; q++) {
+      const u = all[q];
+      if (seen[u] !== v) { seen[u] = v; all[len++] = u; }
+    }
+    ptr[v + 1] = len;
+  }
+  return { ptr, idx: all.slice(0, len) };
 }
 
 /** Estimate the size of the model `project` makes (see the module comment). */

@@ -2,7 +2,9 @@
  * `npm run bench`: the project's benchmarks (not timed tests). Prints tables; nothing is asserted.
  *  1. Square pretensioned nets 20×20 … 100×100 cells: DOFs, Newton iterations, factorisation
  *     time, total time, peak memory (each size in its own process).
- *  2. One numeric factorisation of the 100×100 net's tangent against CHOLMOD on the same matrix.
+ *  2. Ordering, symbolic analysis (CPU time) and one numeric factorisation of the 100×100 and
+ *     200×200 net tangents against CHOLMOD on the same matrix; then the whole `stayset solve
+ *     --json` process on the 200×200 net against its stats.seconds (cli-solve-bench.ts).
  *  0. Start-up of the `stayset` bin (bundle and sources) against `node -e 0`.
  *  3. Further suites registered below (design cases, live re-solve, tuning serial against two
  *     threads, modes, responsiveness of the browser edition in Chromium) when present.
@@ -54,6 +56,8 @@ async function main(): Promise<void> {
   console.log('\nOrdering, symbolic analysis and one numeric factorisation of the 100×100 and 200×200 net tangents against CHOLMOD');
   cholmod.printCholmodComparison(cholmod.runCholmodComparison(100));
   cholmod.printCholmodComparison(cholmod.runCholmodComparison(200, 3, 1));
+  const cli = await import('./cli-solve-bench.ts');
+  cli.printCliSolveBenchmark(200, cli.runCliSolveBenchmark(200, 3));
   await optionalSuite('design/design-bench.ts', 'runDesignBenchmark');
   await optionalSuite('tuning/live-resolve-bench.ts', 'runLiveResolveBenchmark');
   await optionalSuite('tuning/tune-threads-bench.ts', 'runTuneThreadsBenchmark');

@@ -12,10 +12,10 @@ import type { CliIO } from '../cli-io.ts';
 import { parseOptions } from '../options.ts';
 import { readProjectOrReport } from '../read-project-file.ts';
 import { checkCaseIds, filterReport } from '../case-selection.ts';
-import { replaceNonFinite } from '../format/finite-guard.ts';
+import { nonFinitePaths, replaceNonFinite } from '../format/finite-guard.ts';
 import { solveReportText } from '../format/solve-report-text.ts';
 import { solveSummaryText } from '../format/solve-summary-text.ts';
-import { jsonOutput } from '../format/json-output.ts';
+import { jsonOutputChunks } from '../format/json-output.ts';
 import { RESULTS_DISCLAIMER } from '../disclaimer.ts';
 import { runTimes, runTimesLine, withStatsProperty } from '../format/run-times.ts';
 
@@ -33,7 +33,8 @@ Options:
                 Numbers are SI (N, m, N·m); tension is positive; reactions are forces and moments
                 the supports exert; members[].beam holds beam end actions (node on member end,
                 local axes). stats: inputSeconds, analysisSeconds (model and symbolic analysis),
-                newtonSeconds, outputSeconds, seconds (all of the solve).
+                newtonSeconds, outputSeconds (building and writing the output), seconds (all of
+                the solve: analysis and Newton).
   --case ID     Solve only this load case or combination (repeat for several).
   --help        Show this help.
 
@@ -71,24 +72,39 @@ async function run(solver: ProjectSolver, args: string[], io: CliIO): Promise<nu
     return EXIT.notConverged;
   }
   const t1 = performance.now();
-  const guarded = replaceNonFinite(report);
   const json = opts.flags.has('json');
+  if (json) return writeJson(report, file, inputSeconds, t1, io);
+  const guarded = replaceNonFinite(report);
   const summary = !opts.flags.has('full') && (project.groups?.length ?? 0) > 0;
-  const text = json ? jsonOutput({ cases: guarded.value.cases, disclaimer: RESULTS_DISCLAIMER })
-    : summary ? solveSummaryText(project, guarded.value, RESULTS_DISCLAIMER, file)
-      : solveReportText(project, guarded.value, RESULTS_DISCLAIMER);
+  const text = summary ? solveSummaryText(project, guarded.value, RESULTS_DISCLAIMER, file)
+    : solveReportText(project, guarded.value, RESULTS_DISCLAIMER);
   const times = runTimes(report, inputSeconds, (performance.now() - t1) / 1000);
   // Tables: the time line goes before the closing caution, which stays the last line.
   const tail = `${RESULTS_DISCLAIMER}\n`;
-  io.out(json ? withStatsProperty(text, times) : `${text.slice(0, text.length - tail.length)}${runTimesLine(times)}\n\n${tail}`);
-
-  if (guarded.paths.length > 0) {
-    const shown = guarded.paths.slice(0, 10).join(', ');
-    const more = guarded.paths.length > 10 ? ` and ${guarded.paths.length - 10} more` : '';
-    io.err(`${file}: error: the solver produced non-finite numbers (printed as null / —) at ${shown}${more}; these results are invalid\n`);
-    return EXIT.notConverged;
-  }
+  io.out(`${text.slice(0, text.length - tail.length)}${runTimesLine(times)}\n\n${tail}`);
+  if (reportNonFinite(guarded.paths, file, io)) return EXIT.notConverged;
   return guarded.value.cases.every((c) => c.converged) ? EXIT.ok : EXIT.notConverged;
+}
+
+/**
+ * --json: the text is written while it is built (json-output.ts), the stats object last; a
+ * non-finite number prints as null (as replaceNonFinite would make it) and fails the command.
+ */
+function writeJson(report: SolveReport, file: string, inputSeconds: number, t1: number, io: CliIO): number {
+  const paths = nonFinitePaths(report);
+  const rest = jsonOutputChunks({ cases: report.cases, disclaimer: RESULTS_DISCLAIMER }, (chunk) => io.out(chunk));
+  io.out(withStatsProperty(rest, runTimes(report, inputSeconds, (performance.now() - t1) / 1000)));
+  if (reportNonFinite(paths, file, io)) return EXIT.notConverged;
+  return report.cases.every((c) => c.converged) ? EXIT.ok : EXIT.notConverged;
+}
+
+/** The message for non-finite numbers in the results (true when there were any). */
+function reportNonFinite(paths: string[], file: string, io: CliIO): boolean {
+  if (paths.length === 0) return false;
+  const shown = paths.slice(0, 10).join(', ');
+  const more = paths.length > 10 ? ` and ${paths.length - 10} more` : '';
+  io.err(`${file}: error: the solver produced non-finite numbers (printed as null / —) at ${shown}${more}; these results are invalid\n`);
+  return true;
 }
 
 export function makeSolveCommand(solver: ProjectSolver): CliCommand {

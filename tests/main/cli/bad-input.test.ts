@@ -1,5 +1,8 @@
 // Bad input: exit status 2, messages on stderr naming the file, the entry and the problem, and
 // nothing at all on stdout.
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { fixture, runStayset } from './run-stayset.ts';
 
@@ -34,6 +37,21 @@ describe('stayset solve on bad files', () => {
     const lines = r.stderr.trimEnd().split('\n');
     expect(lines).toHaveLength(6);
     expect(lines.every((l) => l.startsWith(`${f('bad-many-problems.stayset.json')}: `))).toBe(true);
+  });
+
+  it('a file that is not UTF-8 is refused by name; a UTF-8 byte-order mark is accepted', () => {
+    // UTF-8 (RFC 3629): the lone byte 0xE9 (é in Latin-1) is not a valid sequence.
+    const dir = mkdtempSync(join(tmpdir(), 'stayset-utf8-'));
+    try {
+      const latin1 = join(dir, 'latin1.stayset.json');
+      writeFileSync(latin1, Buffer.concat([Buffer.from('{"format": "stayset-project", "note": "'), Buffer.from([0xe9]), Buffer.from('"}')]));
+      expectBadInput(['validate', latin1], `${latin1}: is not UTF-8 text`);
+      const bom = join(dir, 'bom.stayset.json');
+      writeFileSync(bom, Buffer.concat([Buffer.from([0xef, 0xbb, 0xbf]), readFileSync(f('axial-bar.stayset.json'))]));
+      expect(runStayset(['validate', bom]).code).toBe(0);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 
   it('missing file and a folder instead of a file', () => {

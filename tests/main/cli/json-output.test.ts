@@ -1,7 +1,8 @@
 // The CLI's JSON writer against the reference it must reproduce: JSON.stringify(v, null, 2)
 // (ECMA-262 JSON.stringify) with lists of plain numbers joined onto one line.
 import { describe, expect, it } from 'vitest';
-import { jsonOutput } from '../../../main/cli/format/json-output.ts';
+import { jsonOutput, jsonOutputChunks } from '../../../main/cli/format/json-output.ts';
+import { nonFinitePaths, replaceNonFinite } from '../../../main/cli/format/finite-guard.ts';
 import { withStatsProperty } from '../../../main/cli/format/run-times.ts';
 
 /** Reference: the standard pretty printer, then number lists put on one line. */
@@ -27,6 +28,50 @@ describe('jsonOutput', () => {
 
   it('parses back to what JSON.parse(JSON.stringify(v)) gives', () => {
     expect(JSON.parse(jsonOutput(sample))).toEqual(JSON.parse(JSON.stringify(sample)));
+  });
+
+  // Flat objects (only numbers, strings, booleans, null and number lists) take the re-spacing of
+  // JSON.stringify's compact text; strings with escapes, ":" "," "{" "}" "[" "]" inside, non-ASCII
+  // text (2-, 3- and 4-byte UTF-8) and lone surrogates must come out as the reference writes them.
+  const flat = {
+    members: [
+      { id: 'X0_1', tensionMax: 48711.5641242316, slack: false, sag: 0, none: null, skip: undefined, f: () => 1 },
+      { id: 'a,b:{c}[d] "q" \\ \t', list: [1, -2.5e-9, null, NaN], empty: [], é: 'ü€😀', lone: '\ud800x' },
+      { 'key with "quotes"': 1, nested: { a: [1, 2] } },
+      {},
+    ],
+  };
+
+  it('writes flat objects as the reference does', () => {
+    expect(jsonOutput(flat)).toBe(reference(flat));
+  });
+
+  it('gives the same text in chunks of any size (never splitting a character)', () => {
+    for (const v of [sample, flat]) {
+      const whole = jsonOutput(v);
+      for (const size of [64, 97, 200]) {
+        const chunks: string[] = [];
+        const rest = jsonOutputChunks(v, (c) => { chunks.push(c); }, size);
+        expect(chunks.length).toBeGreaterThan(0);
+        for (const c of chunks) expect(Buffer.byteLength(c)).toBeLessThanOrEqual(size);
+        expect(chunks.join('') + rest).toBe(whole);
+        expect(rest.endsWith('}\n')).toBe(true);
+      }
+    }
+  });
+
+  it('a string longer than a chunk goes out whole', () => {
+    const v = { text: 'é'.repeat(300), n: [1, 2] };
+    const chunks: string[] = [];
+    const rest = jsonOutputChunks(v, (c) => { chunks.push(c); }, 64);
+    expect(chunks.join('') + rest).toBe(reference(v));
+  });
+
+  it('nonFinitePaths lists what replaceNonFinite replaces, in the same order', () => {
+    const v = { a: [1, NaN, { b: -Infinity }], c: new Float64Array([0, Infinity]), d: { e: 'x', f: null, g: [[NaN]] } };
+    expect(nonFinitePaths(v)).toEqual(replaceNonFinite(v).paths);
+    expect(nonFinitePaths(v)).toEqual(['a[1]', 'a[2].b', 'c[1]', 'd.g[0][0]']);
+    expect(nonFinitePaths(sample)).toEqual(['nonFinite[0]', 'nonFinite[1]']);
   });
 
   it('prints typed arrays as number lists', () => {

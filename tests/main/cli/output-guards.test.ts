@@ -84,6 +84,36 @@ describe('JSON output layout', () => {
   });
 });
 
+describe('solve --json of a large result', () => {
+  // A result of several MiB goes out in chunks while it is written (json-output.ts): the chunks
+  // together are the writer's text of {cases, disclaimer}, with the stats object added last.
+  const bigReport = () => {
+    const nodes = Array.from({ length: 40000 }, (_, i) => ({ id: `N${i}`, position: [i, 0.1 * i, -1 / (i + 1)] as [number, number, number], displacement: [0, 1e-9 * i, -2.5e-3] as [number, number, number] }));
+    const c: CaseResult = {
+      id: 'big', converged: true, status: 'converged', slackMembers: [], nodes, members: [], reactions: [],
+      stats: { dofs: 3, iterations: 1, seconds: 0, factorSeconds: 0, loadSteps: 1, residual: 0 },
+    };
+    return { report: { cases: [c] }, fields: [] };
+  };
+  const many: ProjectSolver = bigReport;
+
+  it('writes several chunks that parse to the result, stats last', async () => {
+    const chunks: string[] = [];
+    const io = memoryIO();
+    const out = io.out;
+    io.out = (t: string) => { chunks.push(t); out(t); };
+    const code = await dispatch(['solve', fixture('axial-bar.stayset.json'), '--json'], io, [makeSolveCommand(many)], { version: '0' });
+    expect(code).toBe(0);
+    expect(chunks.length).toBeGreaterThan(2);
+    const parsed = JSON.parse(io.stdout) as { cases: unknown; disclaimer: string; stats: Record<string, number> };
+    const expected = JSON.parse(jsonOutput({ cases: bigReport().report.cases, disclaimer: parsed.disclaimer })) as object;
+    const { stats, ...rest } = parsed;
+    expect(rest).toEqual(expected);
+    expect(Object.keys(stats)).toEqual(['inputSeconds', 'analysisSeconds', 'newtonSeconds', 'outputSeconds', 'seconds']);
+    expect(io.stdout.lastIndexOf('"stats"')).toBeGreaterThan(io.stdout.lastIndexOf('"disclaimer"'));
+  });
+});
+
 describe('option parser', () => {
   const spec = { json: { type: 'boolean' as const }, case: { type: 'string' as const, multiple: true } };
   it('flags, repeated values, --name=value and -- ', () => {

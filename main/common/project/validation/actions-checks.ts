@@ -1,7 +1,8 @@
 /**
  * Semantic checks of the design actions (solver/project/actions-types.ts): panels, area loads,
  * patch wind, member loss, wind directions, ancillaries, ice with wind and unbalanced ice. Messages name the entry: `panels[2] "P3": node "N9" does not exist`.
- * Runs on partly invalid documents; values of the wrong type are left to the schema.
+ * Runs on partly invalid documents; values of the wrong type are left to the schema. A check
+ * whose list is absent or empty returns at once (no id tables of a large net's members built).
  */
 import { entryLabel } from './error-path.ts';
 import { entries, idSet, isRec, num, str, strings } from './doc-access.ts';
@@ -89,6 +90,7 @@ function caseById(root: unknown): Map<string, Rec> {
 }
 
 function patchWindErrors(root: unknown, errors: string[]): void {
+  if (entries(root, 'patchWind').length === 0) return;
   const cases = caseById(root);
   const taken = new Set([...cases.keys(), ...idSet(root, 'combinations')]);
   for (const { index, entry } of entries(root, 'patchWind')) {
@@ -107,6 +109,7 @@ function patchWindErrors(root: unknown, errors: string[]): void {
 }
 
 function memberLossErrors(root: unknown, errors: string[]): void {
+  if (entries(root, 'memberLoss').length === 0) return; // no id tables of the members to build
   const cases = new Set([...idSet(root, 'loadCases'), ...idSet(root, 'combinations')]);
   const members = idSet(root, 'members');
   const groups = idSet(root, 'groups');
@@ -127,6 +130,7 @@ function memberLossErrors(root: unknown, errors: string[]): void {
 }
 
 function windDirectionErrors(root: unknown, errors: string[]): void {
+  if (entries(root, 'windDirections').length === 0) return;
   const cases = caseById(root);
   const taken = new Set([...cases.keys(), ...idSet(root, 'combinations')]);
   for (const { index, entry } of entries(root, 'windDirections')) {
@@ -141,6 +145,7 @@ function windDirectionErrors(root: unknown, errors: string[]): void {
 }
 
 function ancillaryErrors(root: unknown, errors: string[]): void {
+  if (entries(root, 'ancillaries').length === 0) return;
   const nodes = idSet(root, 'nodes');
   const groups = idSet(root, 'groups');
   for (const { entry } of entries(root, 'members')) for (const g of strings(entry, 'groups')) groups.add(g.value);
@@ -168,6 +173,7 @@ function ancillaryErrors(root: unknown, errors: string[]): void {
 }
 
 function iceActionErrors(root: unknown, errors: string[]): void {
+  if (entries(root, 'iceWithWind').length === 0 && entries(root, 'unbalancedIce').length === 0) return;
   const cases = caseById(root);
   const taken = new Set([...cases.keys(), ...idSet(root, 'combinations')]);
   const groups = idSet(root, 'groups');

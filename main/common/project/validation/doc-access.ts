@@ -14,9 +14,10 @@ export function entries(owner: unknown, key: string): { index: number; entry: Re
   const list = isRec(owner) ? owner[key] : undefined;
   if (!Array.isArray(list)) return [];
   const out: { index: number; entry: Rec }[] = [];
-  list.forEach((entry, index) => {
+  for (let index = 0; index < list.length; index++) {
+    const entry: unknown = list[index];
     if (isRec(entry)) out.push({ index, entry });
-  });
+  }
   return out;
 }
 
@@ -25,9 +26,10 @@ export function strings(owner: unknown, key: string): { index: number; value: st
   const list = isRec(owner) ? owner[key] : undefined;
   if (!Array.isArray(list)) return [];
   const out: { index: number; value: string }[] = [];
-  list.forEach((value, index) => {
+  for (let index = 0; index < list.length; index++) {
+    const value: unknown = list[index];
     if (typeof value === 'string') out.push({ index, value });
-  });
+  }
   return out;
 }
 
