@@ -16,7 +16,7 @@ import { Worker, type ResourceLimits } from 'node:worker_threads';
 import type { CaseFields, ModelBudget, ProjectFile } from '../../solver/index.ts';
 import type { AnalysisDone, AnalysisProgress } from '../common/host-contract.ts';
 import { analysisWorkerUrl } from './worker-location.ts';
-import { caseIds, defaultWorkerCount } from './case-shares.ts';
+import { caseIds, workerCountFor } from './case-shares.ts';
 import { CANCEL_GRACE_MS, defaultResourceLimits, runRefusal, workerDeathMessage } from './run-limits.ts';
 import { CANCEL_REQUESTED, createCancelFlag, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
 
@@ -31,7 +31,7 @@ export interface AnalysisRunnerOptions {
   /** After cancel(), the run is reported cancelled and its worker terminated within this, ms (default CANCEL_GRACE_MS). */
   cancelGraceMs?: number;
   progressIntervalMs?: number;
-  /** Threads per run (the cases are dealt out; parallel-solve.ts). Default: defaultWorkerCount. */
+  /** Threads per run (the cases are dealt out; parallel-solve.ts). Default: workerCountFor (one thread for a run too small to repay a worker). */
   workers?: number;
   /** Worker heap limits (default run-limits.ts); workers a run deals cases to get the same. */
   resourceLimits?: ResourceLimits;
@@ -110,7 +110,7 @@ export class AnalysisRunner {
       project,
       cancelFlag: cancel.buffer,
       progressIntervalMs: this.options.progressIntervalMs ?? 50,
-      workers: this.options.workers ?? defaultWorkerCount(caseIds(project).length),
+      workers: this.options.workers ?? workerCountFor(project, caseIds(project).length),
     };
     const limits = this.options.resourceLimits ?? defaultResourceLimits();
     const worker = spawnWorker(this.workerUrl, data, this.execArgv, limits);

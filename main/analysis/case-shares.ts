@@ -45,3 +45,33 @@ export function defaultWorkerCount(cases: number, env: Record<string, string | u
   const n = Number.isInteger(forced) && forced >= 1 ? forced : availableParallelism();
   return Math.max(1, Math.min(n, cases));
 }
+
+/**
+ * Smallest predicted work (translational DOFs × case solves) for which helper threads are started
+ * by default. A new worker thread pays its start (loading the bundle, building the model) and runs
+ * its first cases before V8 has optimised the solver, while both threads' compiler and collector
+ * threads compete for the cores: on the 2-core build machine two threads were slower than one for
+ * the 72-case design benchmark models (1,350 and 2,007 DOFs: 97,000 and 145,000 DOF-cases, about
+ * 0.6 and 1.3 s serial) and 1.2–1.6× faster for 288 cases of the 2,007-DOF canopy (578,000 DOF-cases,
+ * about 5 s serial; measured in one run, DEVELOPERS.md "Benchmarks"). The threshold sits between.
+ */
+export const PARALLEL_MIN_WORK = 350_000;
+
+/** Translational DOFs the project's model will have: 3 per node, 3 per interior node of a member split into segments. */
+export function translationalDofs(project: ProjectFile): number {
+  let nodes = project.nodes.length;
+  for (const m of project.members) nodes += Math.max(1, Math.floor(m.segments ?? 1)) - 1;
+  return 3 * nodes;
+}
+
+/**
+ * Threads worth starting for `solves` case solves of `project`: STAYSET_WORKERS when set (the
+ * user's choice, kept even for small runs); otherwise one when the predicted work is below
+ * PARALLEL_MIN_WORK, else the available cores (at most the solves).
+ */
+export function workerCountFor(project: ProjectFile, solves: number, env: Record<string, string | undefined> = process.env): number {
+  const forced = Number(env.STAYSET_WORKERS);
+  if (Number.isInteger(forced) && forced >= 1) return Math.max(1, Math.min(forced, solves));
+  if (translationalDofs(project) * solves < PARALLEL_MIN_WORK) return 1;
+  return defaultWorkerCount(solves, env);
+}

@@ -20,12 +20,12 @@ import type { CaseFields, CaseResult, ProjectFile, ProjectSolution, SolveControl
 import { spawnWorker } from './analysis-runner.ts';
 import { analysisWorkerUrl } from './worker-location.ts';
 import { CANCEL_REQUESTED, type AnalysisWorkerData, type WorkerMessage } from './worker-messages.ts';
-import { caseClaimer, caseIds, claimedBy, createClaims, defaultWorkerCount } from './case-shares.ts';
+import { caseClaimer, caseIds, claimedBy, createClaims, workerCountFor } from './case-shares.ts';
 import { hasActionCases } from '../../solver/index.ts';
 import { unpackCases } from './packed-cases.ts';
 
 export interface ParallelSolveOptions {
-  /** Threads, the calling one included; default defaultWorkerCount. */
+  /** Threads, the calling one included; default workerCountFor. */
   workers?: number;
   /** Worker script; default the analysis worker (worker-location.ts). */
   workerUrl?: URL;
@@ -83,7 +83,7 @@ export async function solveProjectInWorkers(project: ProjectFile, options: Paral
     ...(options.onProgress ? { onProgress: progress } : {}),
   };
   const derived = hasActionCases(project);
-  const threads = derived ? 1 : Math.max(1, Math.min(options.workers ?? defaultWorkerCount(ids.length), ids.length));
+  const threads = derived ? 1 : Math.max(1, Math.min(options.workers ?? workerCountFor(project, ids.length), ids.length));
   if (threads <= 1) return solveProject(project, control, options.only ? { only: options.only } : {});
 
   const claims = createClaims(threads);

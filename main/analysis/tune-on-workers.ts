@@ -30,7 +30,7 @@ import {
 } from '../../solver/index.ts';
 import { spawnWorker } from './analysis-runner.ts';
 import { analysisWorkerUrl } from './worker-location.ts';
-import { caseClaimer, createClaims, defaultWorkerCount } from './case-shares.ts';
+import { caseClaimer, createClaims, workerCountFor } from './case-shares.ts';
 import type { AnalysisWorkerData } from './worker-messages.ts';
 import { taskIds, type TuneBatchMessage, type TuneHelperMessage } from './tune-messages.ts';
 
@@ -109,7 +109,7 @@ export function createWorkerCaseSolver(options: TuneWorkerOptions = {}): { facto
   const stats: TuneWorkerStats = { threads: 1, ownTasks: 0, helperTasks: 0, takenOver: 0 };
   const factory: TuningCaseSolverFactory = (setup) => {
     const largestBatch = setup.variables.length * setup.caseIds.length;
-    const threads = Math.max(1, Math.min(options.workers ?? defaultWorkerCount(largestBatch), largestBatch));
+    const threads = Math.max(1, Math.min(options.workers ?? workerCountFor(setup.project, largestBatch), largestBatch));
     if (threads <= 1) return createSerialCaseSolver(setup);
     stats.threads = threads;
     const shared: Shared = { current: null, stats, helperStopped: false };
