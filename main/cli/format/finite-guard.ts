@@ -8,11 +8,7 @@
 export function replaceNonFinite<T>(value: T): { value: T; paths: string[] } {
   const paths: string[] = [];
   const stack: (string | number)[] = [];
-  const pathText = (): string => {
-    let s = '';
-    for (const k of stack) s += typeof k === 'number' ? `[${k}]` : s === '' ? k : `.${k}`;
-    return s;
-  };
+  const pathText = (): string => pathOf(stack);
   const walk = (v: unknown): unknown => {
     if (typeof v === 'number') {
       if (Number.isFinite(v)) return v;
@@ -49,11 +45,7 @@ export function replaceNonFinite<T>(value: T): { value: T; paths: string[] } {
 export function nonFinitePaths(value: unknown): string[] {
   const paths: string[] = [];
   const stack: (string | number)[] = [];
-  const pathText = (): string => {
-    let s = '';
-    for (const k of stack) s += typeof k === 'number' ? `[${k}]` : s === '' ? k : `.${k}`;
-    return s;
-  };
+  const pathText = (): string => pathOf(stack);
   const visit = (key: string | number, x: unknown): void => {
     if (typeof x === 'number') {
       if (x - x === 0) return; // finite
@@ -78,4 +70,11 @@ export function nonFinitePaths(value: unknown): string[] {
   };
   walk(value);
   return paths;
+}
+
+/** A key stack as a path text: `cases[0].members[2].sag`. */
+function pathOf(stack: readonly (string | number)[]): string {
+  let s = '';
+  for (const k of stack) s += typeof k === 'number' ? `[${k}]` : s === '' ? k : `.${k}`;
+  return s;
 }
