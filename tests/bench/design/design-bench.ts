@@ -19,6 +19,7 @@ import { fileURLToPath, pathToFileURL } from 'node:url';
 import { runChecks, solveProject } from '../../../solver/index.ts';
 import type { ProjectFile, SolveReport } from '../../../solver/index.ts';
 import { solveProjectInWorkers } from '../../../main/analysis/parallel-solve.ts';
+import { workerCountFor } from '../../../main/analysis/case-shares.ts';
 import { benchCanopy, benchMast } from './design-models.ts';
 
 const repo = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..', '..');
@@ -55,6 +56,8 @@ export interface DesignBenchRow {
   /** Medians of the per-round ratios baseline / now. */
   speedupSerialCpu?: number; speedupSerialWall?: number; speedupTwoThreadWall?: number; twoThreadOverSerialWall: number;
   checkSeconds: number; pass: boolean;
+  /** Threads a run of this project starts by default (case-shares.ts workerCountFor; the two-thread column forces 2). */
+  defaultThreads: number;
 }
 
 export async function benchOne(name: string, project: ProjectFile, baseline?: Solve, rounds = Number(process.env.STAYSET_BENCH_ROUNDS ?? 3)): Promise<DesignBenchRow> {
@@ -82,7 +85,7 @@ export async function benchOne(name: string, project: ProjectFile, baseline?: So
       speedupSerialCpu: ratio(base, serial, 1), speedupSerialWall: ratio(base, serial, 0), speedupTwoThreadWall: ratio(base, two, 0),
     } : {}),
     twoThreadOverSerialWall: ratio(serial, two, 0),
-    checkSeconds, pass: check.pass,
+    checkSeconds, pass: check.pass, defaultThreads: workerCountFor(project, r.cases.length),
   };
 }
 
@@ -92,7 +95,7 @@ export function printDesignRows(rows: DesignBenchRow[], baseline?: string): void
   for (const r of rows) {
     console.log(`${r.model.padEnd(8)} ${String(r.dofs).padStart(6)} ${String(r.cases).padStart(6)} ${String(r.converged).padStart(6)} ${String(r.iterations).padStart(11)}`
       + ` ${r.serialSeconds.toFixed(2).padStart(9)} (${r.serialCpu.toFixed(2)}) ${r.twoThreadSeconds.toFixed(2).padStart(10)} (${r.twoThreadCpu.toFixed(2)}) ${r.twoThreadOverSerialWall.toFixed(2).padStart(12)}×`
-      + ` ${(r.identical ? 'yes' : 'NO').padStart(10)}   checks ${r.pass ? 'pass' : 'FAIL'} (${r.checkSeconds.toFixed(3)} s)`);
+      + ` ${(r.identical ? 'yes' : 'NO').padStart(10)}   checks ${r.pass ? 'pass' : 'FAIL'} (${r.checkSeconds.toFixed(3)} s); threads by default ${r.defaultThreads}`);
   }
   if (!baseline) return;
   console.log(`against ${baseline} (serial, same rounds): it.  serial s (CPU)   speed-up: serial CPU  serial wall  2 threads wall`);
