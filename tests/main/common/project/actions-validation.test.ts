@@ -1,11 +1,9 @@
 // Panels, area loads, patch wind and member loss: every problem named by its entry
 // (main/common/project/validation/actions-checks.ts and the schema), and the schema matches
 // solver/project/actions-types.ts field by field.
-import { readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
-import ts from 'typescript';
 import { describe, expect, it } from 'vitest';
-import { projectSchema, validateProject } from '../../../../main/common/project/index.ts';
+import { validateProject } from '../../../../main/common/project/index.ts';
+import { defs, schemaFields, typeFile, type Schema } from './type-fields.ts';
 import { SPEC_SUBSET } from './fixtures.ts';
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
@@ -110,19 +108,7 @@ describe('wind basis and directions', () => {
 });
 
 // ---- schema ↔ actions-types.ts (same method as schema-matches-types.test.ts) ----
-type Schema = Record<string, unknown>;
-const defs = (projectSchema as Schema).definitions as Record<string, Schema>;
-const typesPath = fileURLToPath(new URL('../../../../solver/project/actions-types.ts', import.meta.url));
-const source = ts.createSourceFile(typesPath, readFileSync(typesPath, 'utf8'), ts.ScriptTarget.ES2022, true);
-function interfaceFields(name: string) {
-  const decl = source.statements.find((s): s is ts.InterfaceDeclaration => ts.isInterfaceDeclaration(s) && s.name.text === name);
-  if (!decl) throw new Error(`interface ${name} not found`);
-  return decl.members.filter(ts.isPropertySignature).map((p) => ({ name: p.name.getText(source), optional: !!p.questionToken }));
-}
-function schemaFields(s: Schema) {
-  const required = new Set((s.required as string[] | undefined) ?? []);
-  return Object.keys((s.properties as Schema | undefined) ?? {}).map((name) => ({ name, optional: !required.has(name) }));
-}
+const { interfaceFields, interfaceNames } = typeFile('actions-types.ts');
 
 describe('schema matches solver/project/actions-types.ts', () => {
   const pairs: [string, Schema][] = [
@@ -136,7 +122,7 @@ describe('schema matches solver/project/actions-types.ts', () => {
     expect(schema.additionalProperties).toBe(false);
   });
   it('every interface of actions-types.ts is covered', () => {
-    const declared = source.statements.filter(ts.isInterfaceDeclaration).map((s) => s.name.text);
+    const declared = interfaceNames();
     expect(declared.filter((n) => !pairs.some(([p]) => p === n))).toEqual([]);
   });
 });

@@ -1,47 +1,12 @@
 // The JSON Schema must describe exactly the fields of solver/project/types.ts (the contract):
 // same property names, same required/optional split, same order (serializeProject writes keys
 // in schema order, which is meant to be the types' order). Read with the TypeScript compiler API.
-import { readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import ts from 'typescript';
 import { describe, expect, it } from 'vitest';
-import { projectSchema } from '../../../../main/common/project/index.ts';
+import { defs, rootSchema, schemaFields, typeFile, type Schema } from './type-fields.ts';
 
-type Schema = Record<string, unknown>;
-const root = projectSchema as Schema;
-const defs = root.definitions as Record<string, Schema>;
-
-const typesPath = fileURLToPath(new URL('../../../../solver/project/types.ts', import.meta.url));
-const source = ts.createSourceFile(typesPath, readFileSync(typesPath, 'utf8'), ts.ScriptTarget.ES2022, true);
-
-interface Field {
-  name: string;
-  optional: boolean;
-}
-
-function members(list: ts.NodeArray<ts.TypeElement>): Field[] {
-  return list.filter(ts.isPropertySignature).map((p) => ({ name: p.name.getText(source), optional: !!p.questionToken }));
-}
-
-function interfaceFields(name: string): Field[] {
-  const decl = source.statements.find((s): s is ts.InterfaceDeclaration => ts.isInterfaceDeclaration(s) && s.name.text === name);
-  if (!decl) throw new Error(`interface ${name} not found in types.ts`);
-  return members(decl.members);
-}
-
-function unionBranches(name: string): Field[][] {
-  const decl = source.statements.find((s): s is ts.TypeAliasDeclaration => ts.isTypeAliasDeclaration(s) && s.name.text === name);
-  if (!decl || !ts.isUnionTypeNode(decl.type)) throw new Error(`union ${name} not found in types.ts`);
-  return decl.type.types.map((t) => {
-    if (!ts.isTypeLiteralNode(t)) throw new Error(`${name}: branch is not an object type`);
-    return members(t.members);
-  });
-}
-
-function schemaFields(s: Schema): Field[] {
-  const required = new Set((s.required as string[] | undefined) ?? []);
-  return Object.keys((s.properties as Schema | undefined) ?? {}).map((name) => ({ name, optional: !required.has(name) }));
-}
+const root = rootSchema;
+const { source, interfaceFields, unionBranches } = typeFile('types.ts');
 
 const INTERFACES: [string, Schema][] = [
   ['ProjectFile', root],
