@@ -13,6 +13,20 @@ function freshId(taken: readonly string[], base: string): string {
   for (let k = 2; ; k++) if (!taken.includes(`${base} ${k}`)) return `${base} ${k}`;
 }
 
+/**
+ * `entry` with `patch` applied (a key patched to undefined is removed), after checking that a new
+ * id is not empty and not taken among `ids`; `what` names the kind of entry in the messages.
+ */
+function patched<T extends { id: string }>(entry: T, patch: Partial<T>, ids: readonly { id: string }[], what: string): T {
+  if (patch.id !== undefined && patch.id !== entry.id) {
+    if (!patch.id.trim()) throw new Error(`${what} "${entry.id}": the id may not be empty`);
+    if (ids.some((s) => s.id === patch.id)) throw new Error(`${what} "${patch.id}" exists already`);
+  }
+  const next = { ...entry, ...patch } as T & Record<string, unknown>;
+  for (const [k, v] of Object.entries(patch)) if (v === undefined) delete next[k];
+  return next;
+}
+
 function sequenceAt(p: ProjectFile, id: string): number {
   const i = (p.sequences ?? []).findIndex((s) => s.id === id);
   if (i < 0) throw new Error(`sequence "${id}" does not exist`);
@@ -66,15 +80,7 @@ export function removeSequence(p: ProjectFile, id: string): ProjectFile {
 
 /** Change top-level fields of a sequence; `undefined` values remove the field. Renaming checks the id is free. */
 export function updateSequence(p: ProjectFile, id: string, patch: Partial<Omit<TensioningSequenceSpec, 'steps'>>): ProjectFile {
-  if (patch.id !== undefined && patch.id !== id) {
-    if (!patch.id.trim()) throw new Error(`sequence "${id}": the id may not be empty`);
-    if ((p.sequences ?? []).some((s) => s.id === patch.id)) throw new Error(`sequence "${patch.id}" exists already`);
-  }
-  return withSequence(p, id, (s) => {
-    const next = { ...s, ...patch } as TensioningSequenceSpec & Record<string, unknown>;
-    for (const [k, v] of Object.entries(patch)) if (v === undefined) delete next[k];
-    return next;
-  });
+  return withSequence(p, id, (s) => patched<TensioningSequenceSpec>(s, patch, p.sequences ?? [], 'sequence'));
 }
 
 export function addStep(p: ProjectFile, id: string, step: TensioningStepSpec): ProjectFile {
@@ -134,15 +140,7 @@ export function removeMeasurementSet(p: ProjectFile, id: string): ProjectFile {
 }
 
 export function updateMeasurementSet(p: ProjectFile, id: string, patch: Partial<Omit<SiteMeasurementSetSpec, 'tensions' | 'positions'>>): ProjectFile {
-  if (patch.id !== undefined && patch.id !== id) {
-    if (!patch.id.trim()) throw new Error(`site measurement set "${id}": the id may not be empty`);
-    if ((p.siteMeasurements ?? []).some((s) => s.id === patch.id)) throw new Error(`site measurement set "${patch.id}" exists already`);
-  }
-  return withSet(p, id, (s) => {
-    const next = { ...s, ...patch } as SiteMeasurementSetSpec & Record<string, unknown>;
-    for (const [k, v] of Object.entries(patch)) if (v === undefined) delete next[k];
-    return next;
-  });
+  return withSet(p, id, (s) => patched<SiteMeasurementSetSpec>(s, patch, p.siteMeasurements ?? [], 'site measurement set'));
 }
 
 export function addTension(p: ProjectFile, id: string, reading: TensionMeasurementSpec): ProjectFile {
