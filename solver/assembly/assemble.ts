@@ -12,6 +12,7 @@
 import type { AnalysisModel } from '../model/analysis-model.ts';
 import type { AssemblyContext, ElementState } from '../elements/family.ts';
 import type { BlockPattern } from './block-pattern.ts';
+import { restrainedOffDiagonal } from './restrained-entries.ts';
 
 export type { ElementState };
 export { CABLE_STRESS_FLOOR_RATIO } from '../elements/truss/truss-family.ts';
@@ -70,6 +71,8 @@ export function assemble(
   }
   if (values && pattern) {
     const { fixed } = model;
+    const cleared = restrainedOffDiagonal(pattern, fixed);
+    for (let q = 0; q < cleared.length; q++) values[cleared[q]] = 0;
     const diag = pattern.diagonal;
     for (let d = 0; d < pattern.n; d++) if (fixed[d]) values[diag[d]] = 1;
   }

@@ -43,7 +43,10 @@ export interface AssemblyContext {
   state: ElementState;
   /** Tangent values in the pattern's layout, accumulated into; null for force-only evaluations. */
   values: Float64Array | null;
-  /** 1 at restrained DOFs (their rows and columns are skipped). */
+  /**
+   * 1 at restrained DOFs. A kernel may skip their rows and columns or add into them: assemble()
+   * makes them identity rows afterwards (assembly/restrained-entries.ts).
+   */
   fixed: Uint8Array;
 }
 

@@ -43,7 +43,7 @@ export const trussFamily: ElementFamily = {
 };
 
 function assembleTrusses(ctx: AssemblyContext, block: FamilyBlock, slots: Int32Array | null): void {
-  const { model, dX, u, dT, fInt, state, values, fixed } = ctx;
+  const { model, dX, u, dT, fInt, state, values } = ctx;
   const { elemNodes, elemRefLength, elemS0, elemE, elemArea, elemAlpha, elemTensionOnly } = model;
   const list = block.elements;
   const m = list.length;
@@ -61,31 +61,23 @@ function assembleTrusses(ctx: AssemblyContext, block: FamilyBlock, slots: Int32A
     fInt[a3] -= out[0]; fInt[a3 + 1] -= out[1]; fInt[a3 + 2] -= out[2];
     state.tension[e] = out[OUT_N];
     state.slack[e] = out[OUT_STATE] === ELEMENT_SLACK ? 1 : 0;
-    if (values && slots) scatter(values, slots, 21 * k, a3, b3, fixed);
+    if (values && slots) scatter(values, slots, 21 * k);
   }
 }
 
 /**
  * K_e = [[k, −k], [−k, k]] over local DOFs (a0 a1 a2 b0 b1 b2), lower-triangle pairs in
- * row-major order: rows a0..a2 (block aa), then rows b0..b2 (block ba, then the diagonal of bb).
+ * row-major order: rows a0..a2 (block aa), then per row b_r the pairs (b_r, a0..a2) of block ba
+ * and (b_r, b0..b_r) of block bb. Entries in restrained rows or columns are added like the rest
+ * and cleared afterwards by assemble() (assembly/restrained-entries.ts), so the loop has no
+ * branches; every other entry receives the same sums in the same order.
  */
-function scatter(values: Float64Array, slots: Int32Array, o: number, a3: number, b3: number, fixed: Uint8Array): void {
-  let s = o;
-  for (let r = 0; r < 3; r++) {
-    for (let c = 0; c <= r; c++, s++) {
-      if (fixed[a3 + r] || fixed[a3 + c]) continue;
-      values[slots[s]] += kb[3 * r + c];
-    }
-  }
-  for (let r = 0; r < 3; r++) {
-    const fr = fixed[b3 + r];
-    for (let c = 0; c < 3; c++, s++) {
-      if (fr || fixed[a3 + c]) continue;
-      values[slots[s]] -= kb[3 * r + c];
-    }
-    for (let c = 0; c <= r; c++, s++) {
-      if (fr || fixed[b3 + c]) continue;
-      values[slots[s]] += kb[3 * r + c];
-    }
-  }
+function scatter(values: Float64Array, slots: Int32Array, s: number): void {
+  const k0 = kb[0], k1 = kb[1], k2 = kb[2], k3 = kb[3], k4 = kb[4], k5 = kb[5], k6 = kb[6], k7 = kb[7], k8 = kb[8];
+  values[slots[s]] += k0;
+  values[slots[s + 1]] += k3; values[slots[s + 2]] += k4;
+  values[slots[s + 3]] += k6; values[slots[s + 4]] += k7; values[slots[s + 5]] += k8;
+  values[slots[s + 6]] -= k0; values[slots[s + 7]] -= k1; values[slots[s + 8]] -= k2; values[slots[s + 9]] += k0;
+  values[slots[s + 10]] -= k3; values[slots[s + 11]] -= k4; values[slots[s + 12]] -= k5; values[slots[s + 13]] += k3; values[slots[s + 14]] += k4;
+  values[slots[s + 15]] -= k6; values[slots[s + 16]] -= k7; values[slots[s + 17]] -= k8; values[slots[s + 18]] += k6; values[slots[s + 19]] += k7; values[slots[s + 20]] += k8;
 }
