@@ -7,7 +7,8 @@
  * solve of the solver at git revision REV (its solver/ folder exported to a temporary folder and
  * imported in this process). The three run in turn, in a rotating order, for STAYSET_BENCH_ROUNDS
  * rounds (default 3); the table gives medians of wall time, process CPU time (all threads) and of
- * the per-round ratios, so a machine shared with other work compares like with like.
+ * the per-round ratios, so a machine shared with other work compares like with like. Before each
+ * timed run the bench pauses briefly (see settle).
  * Run alone: `node --import tsx tests/bench/design/design-bench.ts [--baseline REV]`; also part
  * of `npm run bench` (baseline from STAYSET_BENCH_BASELINE).
  */
@@ -46,6 +47,15 @@ async function timedAsync<T>(f: () => Promise<T>): Promise<[T, number, number]> 
   return [v, (performance.now() - t0) / 1000, (c.user + c.system) / 1e6];
 }
 
+/**
+ * A short pause before a timed run: a helper thread that has just finished winds down (its exit
+ * and the collector and compiler threads' tails would otherwise be charged to the next run).
+ * Forcing a full collection here instead made the runs noisier: the heap then regrows in the run.
+ */
+async function settle(): Promise<void> {
+  await new Promise((resolve) => setTimeout(resolve, 50));
+}
+
 const median = (a: number[]): number => { const s = [...a].sort((x, y) => x - y); return s.length % 2 ? s[s.length >> 1] : 0.5 * (s[s.length / 2 - 1] + s[s.length / 2]); };
 
 export interface DesignBenchRow {
@@ -70,7 +80,7 @@ export async function benchOne(name: string, project: ProjectFile, baseline?: So
       async () => { const [s, w, c] = await timedAsync(() => solveProjectInWorkers(project, { workers: 2 })); lastTwo = s.report; two.push([w, c]); },
     ];
     if (baseline) runs.push(async () => { const [s, w, c] = timed(() => baseline(project)); baselineIterations = s.report.cases.reduce((a, k) => a + k.stats.iterations, 0); base.push([w, c]); });
-    for (let k = 0; k < runs.length; k++) await runs[(k + round) % runs.length]();
+    for (let k = 0; k < runs.length; k++) { await settle(); await runs[(k + round) % runs.length](); }
     identical &&= withoutTimes(r) === withoutTimes(lastTwo);
   }
   const [check, checkSeconds] = timed(() => runChecks(project, lastTwo));
