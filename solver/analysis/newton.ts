@@ -314,7 +314,7 @@ function isZero(u: Float64Array): boolean {
 /** Largest nodal translation of a DOF vector (the first nt entries, 3 per node), m. */
 function maxNodal(v: Float64Array, nt: number): number {
   let m = 0;
-  for (let i = 0; i < nt; i += 3) m = Math.max(m, Math.hypot(v[i], v[i + 1], v[i + 2]));
+  for (let i = 0; i < nt; i += 3) m = Math.max(m, Math.sqrt(v[i] * v[i] + v[i + 1] * v[i + 1] + v[i + 2] * v[i + 2]));
   return m;
 }
 

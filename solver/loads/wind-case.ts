@@ -1,14 +1,12 @@
 /**
  * The part of a case's wind that does not depend on the geometry, resolved once per case:
- * flow direction (cos, sin), ½ρ, the profile's constants, and the active elements with their
- * drag widths and end nodes in typed arrays. `windSpeedAtHeight` then costs a logarithm and an
- * exponential (power law, powerLawRatio) or one logarithm (log law) per element and residual,
- * and nothing is allocated: the same formulas as windSpeedAt / elementDragForce
- * (wind-profile.ts, wind.ts), evaluated in the same order of operations.
+ * flow direction (cos, sin), ½ρ and the profile's constants. The follower load (wind.ts,
+ * WindFollowerLoad) then costs a logarithm and an exponential (power law, as powerLawRatio) or one
+ * logarithm (log law) per element and residual, and allocates nothing: the same formulas as
+ * windSpeedAt / elementDragForce (wind-profile.ts, wind.ts), in the same order of operations.
  */
 import type { WindSpec } from '../project/types.ts';
 import { windForceFactor } from './wind-basis.ts';
-import { powerLawRatio } from './wind-profile.ts';
 import { DEFAULT_AIR_DENSITY, DEFAULT_POWER_LAW_EXPONENT, DEFAULT_PROFILE_MIN_HEIGHT, DEFAULT_ROUGHNESS_LENGTH } from './defaults.ts';
 
 export interface WindCase {
@@ -42,12 +40,4 @@ export function resolveWindCase(wind: WindSpec): WindCase {
       return { ...base, kind: 2, exponent: 0, zMin: Math.max(DEFAULT_PROFILE_MIN_HEIGHT, 2 * z0), z0, logRef: Math.log(10 / z0) };
     }
   }
-}
-
-/** V(z), m/s, as windSpeedAt (wind-profile.ts) with the case's constants resolved. */
-export function windSpeedAtHeight(w: WindCase, z: number): number {
-  if (w.kind === 0) return w.speed10;
-  const zz = z > w.zMin ? z : w.zMin;
-  if (w.kind === 1) return w.speed10 * powerLawRatio(zz, w.exponent);
-  return (w.speed10 * Math.log(zz / w.z0)) / w.logRef;
 }

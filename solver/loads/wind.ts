@@ -11,7 +11,7 @@ import { latticeDragWidth } from './lattice-force-coefficient.ts';
 import { iceThicknessPerElement } from './ice.ts';
 import { windSpeedAt } from './wind-profile.ts';
 import { windForceFactor } from './wind-basis.ts';
-import { resolveWindCase, windSpeedAtHeight } from './wind-case.ts';
+import { resolveWindCase, type WindCase } from './wind-case.ts';
 
 /**
  * Drag area per unit length, m²/m (= m), of every element: Cd · D for round sections
@@ -78,41 +78,75 @@ export function elementDragForce(
  * nothing. Combination factors scale the force linearly through `factor`.
  */
 export function createWindLoad(model: AnalysisModel, project: ProjectFile, caseSpec: LoadCaseSpec): FollowerLoad {
-  const wind = caseSpec.wind;
   const widths = windDragWidths(model, project, caseSpec);
   let count = 0;
   for (let e = 0; e < model.elementCount; e++) if (widths[e] > 0) count++;
-  // Geometry-independent parts, once per case (wind-case.ts): per residual only the chord, the
-  // speed at its mid-height and the normal velocity are computed; nothing is allocated.
   const nodeA = new Int32Array(count), nodeB = new Int32Array(count), width = new Float64Array(count);
   for (let e = 0, k = 0; e < model.elementCount; e++) {
     if (!(widths[e] > 0)) continue;
     nodeA[k] = model.elemNodes[2 * e]; nodeB[k] = model.elemNodes[2 * e + 1]; width[k] = widths[e]; k++;
   }
-  const w = wind ? resolveWindCase(wind) : null;
-  return {
-    accumulate(x: Float64Array, factor: number, f: Float64Array): void {
-      if (!w || factor === 0) return;
-      const { cx, cy, halfRho } = w;
-      for (let k = 0; k < count; k++) {
-        const i3 = 3 * nodeA[k], j3 = 3 * nodeB[k];
-        const az = x[i3 + 2], bz = x[j3 + 2];
-        const dx = x[j3] - x[i3], dy = x[j3 + 1] - x[i3 + 1], dz = bz - az;
-        const l = Math.sqrt(dx * dx + dy * dy + dz * dz);
-        if (!(l > 0)) continue;
-        // elementDragForce, term by term.
-        const tx = dx / l, ty = dy / l, tz = dz / l;
-        const v = windSpeedAtHeight(w, 0.5 * (az + bz));
-        const vx = v * cx, vy = v * cy;
-        const vt = vx * tx + vy * ty;
-        const nx = vx - vt * tx, ny = vy - vt * ty, nz = -vt * tz;
-        const vn = Math.sqrt(nx * nx + ny * ny + nz * nz);
-        const c = halfRho * width[k] * vn * l;
-        const h = 0.5 * factor;
-        const fx = h * (c * nx), fy = h * (c * ny), fz = h * (c * nz);
-        f[i3] += fx; f[i3 + 1] += fy; f[i3 + 2] += fz;
-        f[j3] += fx; f[j3 + 1] += fy; f[j3 + 2] += fz;
-      }
-    },
-  };
+  return new WindFollowerLoad(caseSpec.wind ? resolveWindCase(caseSpec.wind) : null, nodeA, nodeB, width);
+}
+
+/**
+ * The case's wind as a follower load. The geometry-independent parts are resolved once per case
+ * (wind-case.ts): per residual only the chord, the speed at its mid-height and the normal velocity
+ * are computed. One class with number fields, so the loop is compiled once for every case and
+ * keeps its numbers unboxed (nothing is allocated per element).
+ */
+class WindFollowerLoad implements FollowerLoad {
+  private readonly kind: number;
+  private readonly speed10: number;
+  private readonly exponent: number;
+  private readonly zMin: number;
+  private readonly z0: number;
+  private readonly logRef: number;
+  private readonly cx: number;
+  private readonly cy: number;
+  private readonly halfRho: number;
+
+  constructor(
+    private readonly w: WindCase | null,
+    private readonly nodeA: Int32Array, private readonly nodeB: Int32Array, private readonly width: Float64Array,
+  ) {
+    this.kind = w ? w.kind : 0;
+    this.speed10 = w ? w.speed10 : 0;
+    this.exponent = w ? w.exponent : 0;
+    this.zMin = w ? w.zMin : 0;
+    this.z0 = w ? w.z0 : 1;
+    this.logRef = w ? w.logRef : 1;
+    this.cx = w ? w.cx : 0;
+    this.cy = w ? w.cy : 0;
+    this.halfRho = w ? w.halfRho : 0;
+  }
+
+  accumulate(x: Float64Array, factor: number, f: Float64Array): void {
+    if (!this.w || factor === 0) return;
+    const { nodeA, nodeB, width, kind, speed10, exponent, zMin, z0, logRef, cx, cy, halfRho } = this;
+    const count = nodeA.length;
+    for (let k = 0; k < count; k++) {
+      const i3 = 3 * nodeA[k], j3 = 3 * nodeB[k];
+      const az = x[i3 + 2], bz = x[j3 + 2];
+      const dx = x[j3] - x[i3], dy = x[j3 + 1] - x[i3 + 1], dz = bz - az;
+      const l = Math.sqrt(dx * dx + dy * dy + dz * dz);
+      if (!(l > 0)) continue;
+      // elementDragForce term by term; V at mid-height as windSpeedAt (wind-profile.ts) with the
+      // case's constants resolved.
+      const tx = dx / l, ty = dy / l, tz = dz / l;
+      const zm = 0.5 * (az + bz), zz = zm > zMin ? zm : zMin;
+      const v = kind === 0 ? speed10
+        : kind === 1 ? speed10 * Math.exp(exponent * Math.log(zz / 10))
+          : (speed10 * Math.log(zz / z0)) / logRef;
+      const vx = v * cx, vy = v * cy;
+      const vt = vx * tx + vy * ty;
+      const nx = vx - vt * tx, ny = vy - vt * ty, nz = -vt * tz;
+      const vn = Math.sqrt(nx * nx + ny * ny + nz * nz);
+      const c = halfRho * width[k] * vn * l;
+      const h = 0.5 * factor;
+      const fx = h * (c * nx), fy = h * (c * ny), fz = h * (c * nz);
+      f[i3] += fx; f[i3 + 1] += fy; f[i3 + 2] += fz;
+      f[j3] += fx; f[j3 + 1] += fy; f[j3 + 2] += fz;
+    }
+  }
 }

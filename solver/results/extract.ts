@@ -30,6 +30,7 @@ export function memberResults(
     }
     const chain = m.nodeChain;
     const a = 3 * chain[0], b = 3 * chain[chain.length - 1];
+    const dx = x[b] - x[a], dy = x[b + 1] - x[a + 1], dz = x[b + 2] - x[a + 2];
     const result: MemberResult = {
       id: m.id,
       tensionMax: tMax,
@@ -38,7 +39,7 @@ export function memberResults(
       tensionEnd: tension[m.firstElement + m.elementCount - 1],
       slack: anySlack,
       sag: memberSag(x, chain),
-      chordLength: Math.hypot(x[b] - x[a], x[b + 1] - x[a + 1], x[b + 2] - x[a + 2]),
+      chordLength: Math.sqrt(dx * dx + dy * dy + dz * dz),
     };
     if (m.kind === 'beam' && endForces && endForces.length > 0) result.beam = beamEnds(endForces, m.firstElement, m.elementCount);
     return result;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { dynamicPressure, windSpeedAt } from '../../../solver/loads/wind-profile.ts';
+import { dynamicPressure, powerLawRatio, windSpeedAt } from '../../../solver/loads/wind-profile.ts';
 
 describe('wind profile', () => {
   it('power law V10 (z/10)^α: exponent 1/2 doubles the speed at 40 m', () => {
@@ -31,5 +31,15 @@ describe('wind profile', () => {
   it('dynamic pressure q = ½ρV²', () => {
     // ½ · 1.225 · 40² = 980 Pa (hand arithmetic).
     expect(dynamicPressure(1.225, 40)).toBeCloseTo(980, 10);
+  });
+
+  it('the power-law ratio exp(α ln(z/10)) agrees with Math.pow((z/10), α) to a few units in the last place', () => {
+    // Reference: the JavaScript engine's own Math.pow.
+    for (const alpha of [0.1, 1 / 7, 0.16, 0.22, 0.4]) {
+      for (let z = 2; z <= 400; z *= 1.37) {
+        const want = Math.pow(z / 10, alpha);
+        expect(Math.abs(powerLawRatio(z, alpha) - want)).toBeLessThanOrEqual(4 * Number.EPSILON * want);
+      }
+    }
   });
 });
