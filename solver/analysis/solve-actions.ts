@@ -10,7 +10,7 @@
  * Fields of every appended case have the full model's layout (a removed member's elements are
  * slack with zero force, its interior nodes on the line between its ends).
  */
-import type { CombinationSpec, LoadCaseSpec, ProjectFile } from '../project/types.ts';
+import type { LoadCaseSpec, ProjectFile } from '../project/types.ts';
 import type { AnalysisModel } from '../model/analysis-model.ts';
 import type { CaseFields, ProjectSolution } from '../results/types.ts';
 import type { SolveControl } from './progress.ts';
@@ -18,7 +18,7 @@ import type { CaseSolution } from './solve-case.ts';
 import type { Workspace } from './workspace.ts';
 import type { CaseLoads } from '../loads/case-loads.ts';
 import { buildModel } from '../model/build-model.ts';
-import { resolveCaseLoads, resolveCombinationLoads } from '../loads/resolve-case-loads.ts';
+import { resolveCaseLoads, resolveNamedCaseLoads } from '../loads/resolve-case-loads.ts';
 import { patchCases } from '../loads/patch-wind.ts';
 import { windDirectionCases } from '../loads/wind-directions.ts';
 import { iceWithWindCases, unbalancedIceCases } from '../loads/ice-cases.ts';
@@ -76,11 +76,9 @@ export function derivedLoadCase(project: ProjectFile, id: string): LoadCaseSpec 
 }
 
 function caseLoadsOf(model: AnalysisModel, project: ProjectFile, id: string): CaseLoads {
-  const lc: LoadCaseSpec | undefined = project.loadCases.find((c) => c.id === id);
-  if (lc) return resolveCaseLoads(model, project, lc);
-  const combo: CombinationSpec | undefined = (project.combinations ?? []).find((c) => c.id === id);
-  if (combo) return resolveCombinationLoads(model, project, combo);
-  throw new Error(`case "${id}" does not exist`);
+  const loads = resolveNamedCaseLoads(model, project, id);
+  if (!loads) throw new Error(`case "${id}" does not exist`);
+  return loads;
 }
 
 export function appendActionCases(

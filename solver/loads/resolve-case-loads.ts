@@ -42,6 +42,14 @@ export function resolveCaseLoads(model: AnalysisModel, project: ProjectFile, spe
   }));
 }
 
+/** The loads of the load case or combination with this id; null when there is none. */
+export function resolveNamedCaseLoads(model: AnalysisModel, project: ProjectFile, id: string): CaseLoads | null {
+  const spec = project.loadCases.find((c) => c.id === id);
+  if (spec) return resolveCaseLoads(model, project, spec);
+  const combination = (project.combinations ?? []).find((c) => c.id === id);
+  return combination ? resolveCombinationLoads(model, project, combination) : null;
+}
+
 /**
  * A combination Σ fᵢ · caseᵢ as one set of loads (solved as its own nonlinear case):
  * nodal loads, wind and ΔT scale by fᵢ; member self-weight takes the summed factor of the cases

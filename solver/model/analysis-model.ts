@@ -72,3 +72,9 @@ export interface MemberTopology {
   /** Node indices along the member, from → to (elementCount + 1 entries). */
   nodeChain: Int32Array;
 }
+
+/** Straight distance between a member's end nodes at the model's start positions, m. */
+export function memberStartChord(model: AnalysisModel, m: MemberTopology): number {
+  const a = 3 * m.nodeChain[0], b = 3 * m.nodeChain[m.nodeChain.length - 1], c = model.coords;
+  return Math.hypot(c[b] - c[a], c[b + 1] - c[a + 1], c[b + 2] - c[a + 2]);
+}

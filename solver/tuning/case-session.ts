@@ -16,7 +16,8 @@ import type { ProjectFile } from '../project/types.ts';
 import type { CaseResult } from '../results/types.ts';
 import type { CaseLoads } from '../loads/case-loads.ts';
 import { buildModel } from '../model/build-model.ts';
-import { resolveCaseLoads, resolveCombinationLoads } from '../loads/resolve-case-loads.ts';
+import { resolveNamedCaseLoads } from '../loads/resolve-case-loads.ts';
+import { memberStartChord } from '../model/analysis-model.ts';
 import { createWorkspace, setElementPrestress } from '../analysis/workspace.ts';
 import { solveCase } from '../analysis/solve-case.ts';
 import type { ResolvedVariable } from './tuning-types.ts';
@@ -36,17 +37,14 @@ export function createCaseSession(project: ProjectFile, vars: readonly ResolvedV
   const ws = createWorkspace(model);
   const loads = new Map<string, CaseLoads>();
   for (const id of caseIds) {
-    const spec = project.loadCases.find((c) => c.id === id);
-    const combo = project.combinations?.find((c) => c.id === id);
-    if (!spec && !combo) throw new Error(`case "${id}" does not exist`);
-    loads.set(id, spec ? resolveCaseLoads(model, project, spec) : resolveCombinationLoads(model, project, combo!));
+    const caseLoads = resolveNamedCaseLoads(model, project, id);
+    if (!caseLoads) throw new Error(`case "${id}" does not exist`);
+    loads.set(id, caseLoads);
   }
   const topoById = new Map(model.members.map((m) => [m.id, m]));
   const slots: ElementSlot[][] = vars.map((v) => v.memberIds.flatMap((id, j) => {
     const m = topoById.get(id)!;
-    const a = 3 * m.nodeChain[0], b = 3 * m.nodeChain[m.nodeChain.length - 1];
-    const c = model.coords;
-    const chord = Math.hypot(c[b] - c[a], c[b + 1] - c[a + 1], c[b + 2] - c[a + 2]);
+    const chord = memberStartChord(model, m);
     return Array.from({ length: m.elementCount }, (_, k) => ({
       e: m.firstElement + k, chordShare: chord / m.elementCount, baseShare: v.baseUnstressedLength[j] / m.elementCount,
     }));

@@ -11,7 +11,8 @@
 import type { ProjectFile } from '../project/types.ts';
 import type { CaseFields, CaseResult } from '../results/types.ts';
 import { buildModel } from '../model/build-model.ts';
-import { resolveCaseLoads, resolveCombinationLoads } from '../loads/resolve-case-loads.ts';
+import { resolveNamedCaseLoads } from '../loads/resolve-case-loads.ts';
+import { memberStartChord } from '../model/analysis-model.ts';
 import { createWorkspace, setElementPrestress } from '../analysis/workspace.ts';
 import { solveCase } from '../analysis/solve-case.ts';
 import { membersOfGroup, groupExists } from '../checks/groups.ts';
@@ -37,20 +38,16 @@ export interface LiveResolver {
 
 export function createLiveResolver(project: ProjectFile, caseId: string, group: string): LiveResolver {
   if (!groupExists(project, group)) throw new Error(`live tuning: group "${group}" does not exist`);
-  const spec = project.loadCases.find((c) => c.id === caseId);
-  const combo = project.combinations?.find((c) => c.id === caseId);
-  if (!spec && !combo) throw new Error(`live tuning: case "${caseId}" does not exist`);
   const model = buildModel(project);
+  const loads = resolveNamedCaseLoads(model, project, caseId);
+  if (!loads) throw new Error(`live tuning: case "${caseId}" does not exist`);
   const ws = createWorkspace(model);
-  const loads = spec ? resolveCaseLoads(model, project, spec) : resolveCombinationLoads(model, project, combo!);
   const ids = membersOfGroup(project, group);
   const elements: number[] = [];
   const chordShare: number[] = [];
   for (const m of model.members) {
     if (!ids.has(m.id)) continue;
-    const a = 3 * m.nodeChain[0], b = 3 * m.nodeChain[m.nodeChain.length - 1];
-    const c = model.coords;
-    const chord = Math.hypot(c[b] - c[a], c[b + 1] - c[a + 1], c[b + 2] - c[a + 2]);
+    const chord = memberStartChord(model, m);
     for (let e = m.firstElement; e < m.firstElement + m.elementCount; e++) {
       elements.push(e);
       chordShare.push(chord / m.elementCount);
